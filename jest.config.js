@@ -1,0 +1,39 @@
+/** One Jest config, three projects: app screens (jest-expo), server + shared (node), browser journeys (node + Chromium). */
+const swc = [
+  "@swc/jest",
+  {
+    jsc: {
+      parser: { syntax: "typescript", decorators: true },
+      transform: { legacyDecorator: true, decoratorMetadata: true },
+      target: "es2022",
+    },
+    module: { type: "commonjs" },
+  },
+];
+
+module.exports = {
+  projects: [
+    {
+      displayName: "app",
+      preset: "jest-expo",
+      testMatch: ["<rootDir>/tests/app/**/*.test.tsx"],
+      setupFilesAfterEnv: ["<rootDir>/tests/app/setup.ts"],
+      transformIgnorePatterns: [
+        "node_modules/(?!((jest-)?react-native|@react-native(-community)?)|expo(nent)?|@expo(nent)?/.*|@expo-google-fonts/.*|react-navigation|@react-navigation/.*|@tanstack/.*|react-native-svg)",
+      ],
+    },
+    {
+      displayName: "server",
+      testEnvironment: "node",
+      testMatch: ["<rootDir>/tests/server/**/*.test.ts", "<rootDir>/tests/shared/**/*.test.ts"],
+      transform: { "^.+\\.(t|j)sx?$": swc },
+      setupFiles: ["reflect-metadata"],
+    },
+    {
+      displayName: "browser",
+      testEnvironment: "node",
+      testMatch: ["<rootDir>/tests/browser/**/*.test.ts"],
+      transform: { "^.+\\.(t|j)sx?$": swc },
+    },
+  ],
+};

@@ -1,0 +1,37 @@
+import { Column, CreateDateColumn, Entity, Index, PrimaryGeneratedColumn, UpdateDateColumn } from "typeorm";
+import type { AccountStatus } from "../../shared/schemas/accounts";
+
+/** A wholesale customer: a café, restaurant or shop that orders from the bakery. */
+@Entity({ name: "customer_account" })
+export class CustomerAccount {
+  @PrimaryGeneratedColumn({ type: "int" })
+  id: number;
+
+  @Index()
+  @Column({ type: "varchar", length: 160 })
+  businessName: string;
+
+  @Column({ type: "varchar", length: 500 })
+  deliveryAddress: string;
+
+  @Column({ type: "varchar", length: 120, default: "" })
+  contactName: string;
+
+  @Column({ type: "varchar", length: 40, default: "" })
+  contactPhone: string;
+
+  @Column({ type: "varchar", length: 254 })
+  billingEmail: string;
+
+  @Column({ type: "varchar", length: 16, default: "active" })
+  status: AccountStatus;
+
+  @Column({ type: "text" })
+  notes: string;
+
+  @CreateDateColumn({ type: "datetime", precision: 3, default: () => "CURRENT_TIMESTAMP(3)" })
+  createdAt: Date;
+
+  @UpdateDateColumn({ type: "datetime", precision: 3, default: () => "CURRENT_TIMESTAMP(3)", onUpdate: "CURRENT_TIMESTAMP(3)" })
+  updatedAt: Date;
+}

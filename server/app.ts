@@ -1,0 +1,112 @@
+import fs from "node:fs";
+import path from "node:path";
+import express, { Router } from "express";
+import helmet from "helmet";
+import pinoHttp from "pino-http";
+import type { AppContext } from "./http/context";
+import { apiNotFound, errorHandler } from "./http/errors";
+import { authenticate } from "./http/auth";
+import { authRoutes } from "./auth/auth.routes";
+import { invitationsRoutes, usersRoutes } from "./users/users.routes";
+import { accountsRoutes } from "./accounts/accounts.routes";
+import { bakeryRoutes, officeRoutes } from "./bakery/bakery.routes";
+
+/** The API alone: every route under it is mounted here, and nowhere else. */
+export function apiRouter(ctx: AppContext): Router {
+  const api = Router();
+  api.use(express.json({ limit: "200kb" }));
+
+  api.get("/health", async (_req, res) => {
+    try {
+      await ctx.dataSource.query("SELECT 1");
+      res.json({ status: "ok", db: "up" });
+    } catch {
+      res.status(503).json({ status: "degraded", db: "down" });
+    }
+  });
+
+  api.use(authenticate(ctx));
+  api.use("/auth", authRoutes(ctx));
+  api.use("/bakery", bakeryRoutes(ctx));
+  api.use("/office", officeRoutes(ctx));
+  api.use("/users", usersRoutes(ctx));
+  api.use("/invitations", invitationsRoutes(ctx));
+  api.use("/accounts", accountsRoutes(ctx));
+  api.use(apiNotFound);
+  return api;
+}
+
+export function createApp(ctx: AppContext) {
+  const app = express();
+  app.disable("x-powered-by");
+  app.set("trust proxy", process.env.TRUST_PROXY ? Number(process.env.TRUST_PROXY) || process.env.TRUST_PROXY : false);
+  app.use(
+    helmet({
+      contentSecurityPolicy: {
+        directives: {
+          "default-src": ["'self'"],
+          "script-src": ["'self'", "'unsafe-inline'"],
+          "style-src": ["'self'", "'unsafe-inline'"],
+          "img-src": ["'self'", "data:", "blob:"],
+          "font-src": ["'self'", "data:"],
+          "connect-src": ["'self'"],
+          "form-action": ["'self'"],
+          "upgrade-insecure-requests": null,
+        },
+      },
+    }),
+  );
+  app.use(
+    pinoHttp({
+      logger: ctx.logger,
+      customLogLevel: (_req, res, err) => (err || res.statusCode >= 500 ? "error" : res.statusCode >= 400 ? "warn" : "info"),
+      serializers: {
+        req: (req) => ({ method: req.method, url: req.url, id: req.id }),
+        res: (res) => ({ statusCode: res.statusCode }),
+      },
+      autoLogging: { ignore: (req) => !(req.url || "").startsWith("/api") },
+    }),
+  );
+
+  app.use("/api", apiRouter(ctx), errorHandler);
+
+  // The exported web app, with the SPA fallback for client-side routes.
+  const dist = ctx.config.webDist;
+  const index = path.join(dist, "index.html");
+  app.use(express.static(dist, { index: false, maxAge: "1h", setHeaders: (res, file) => {
+    if (file.includes(`${path.sep}_expo${path.sep}`) || file.includes(`${path.sep}assets${path.sep}`)) res.setHeader("Cache-Control", "public, max-age=31536000, immutable");
+  } }));
+  app.get("/{*splat}", (_req, res) => {
+    if (fs.existsSync(index)) {
+      res.setHeader("Cache-Control", "no-cache");
+      res.sendFile(index);
+    } else {
+      res.status(503).type("text/plain").send("The web app has not been built yet. Run `npm start` (it builds it) or `npm run build:web`.");
+    }
+  });
+  app.use(errorHandler);
+  return app;
+}
+
+/** Every API route as "METHOD /api/path", read off the router itself (for the route-by-role test). */
+export function listApiRoutes(ctx: AppContext): string[] {
+  const out: string[] = [];
+  const walk = (stack: any[], prefix: string) => {
+    for (const layer of stack) {
+      if (layer.route) {
+        for (const method of Object.keys(layer.route.methods)) out.push(`${method.toUpperCase()} ${prefix}${layer.route.path === "/" && prefix ? "" : layer.route.path}`);
+      } else if (layer.handle?.stack) {
+        const mount = layer.matchers?.length ? mountPath(layer) : "";
+        walk(layer.handle.stack, prefix + mount);
+      }
+    }
+  };
+  const mountPath = (layer: any) => {
+    const src = String(layer.regexp ?? "");
+    if (layer.path) return layer.path;
+    const m = /\^\\\/([^?\\]+)/.exec(src);
+    return m ? `/${m[1]}` : "";
+  };
+  walk((apiRouter(ctx) as any).stack, "/api");
+  return out;
+}

@@ -1,0 +1,46 @@
+import { Router } from "express";
+import type { AppContext } from "../http/context";
+import { parse, unauthorized } from "../http/errors";
+import { allow, currentUser } from "../http/auth";
+import { invitationAcceptSchema, passwordResetConfirmSchema, passwordResetRequestSchema, signInSchema } from "../../shared/schemas/auth";
+import { ROLES } from "../../shared/roles";
+import * as auth from "./auth.service";
+import { findUsableToken } from "./auth.service";
+
+export function authRoutes(ctx: AppContext): Router {
+  const r = Router();
+
+  r.post("/sign-in", async (req, res) => {
+    const body = parse(signInSchema, req.body);
+    res.json(await auth.signIn(ctx, body.email, body.password, req.ip || "unknown"));
+  });
+
+  r.get("/me", allow(...ROLES), async (req, res) => {
+    if (!req.user) throw unauthorized();
+    res.json({ user: currentUser(req) });
+  });
+
+  r.post("/password-reset", async (req, res) => {
+    const body = parse(passwordResetRequestSchema, req.body);
+    await auth.requestPasswordReset(ctx, body.email);
+    res.status(202).json({ message: "If that e-mail has a sign-in, a reset link is on its way. It works for 1 hour." });
+  });
+
+  r.post("/password-reset/confirm", async (req, res) => {
+    const body = parse(passwordResetConfirmSchema, req.body);
+    res.json(await auth.confirmPasswordReset(ctx, body.token, body.password));
+  });
+
+  /** Lets the set-password screen say up front whether a link still works, and for whom. */
+  r.get("/invitations/:token", async (req, res) => {
+    const row = await findUsableToken(ctx, "invitation", String(req.params.token));
+    res.json({ email: row.email, role: row.role, name: row.name });
+  });
+
+  r.post("/invitations/accept", async (req, res) => {
+    const body = parse(invitationAcceptSchema, req.body);
+    res.json(await auth.acceptInvitation(ctx, body.token, body.password, body.name));
+  });
+
+  return r;
+}

@@ -1,0 +1,33 @@
+import { Column, CreateDateColumn, Entity, PrimaryGeneratedColumn, UpdateDateColumn } from "typeorm";
+
+/** The bakery itself: one row. Its IANA time zone decides every "today" and cut-off. */
+@Entity({ name: "bakery" })
+export class Bakery {
+  @PrimaryGeneratedColumn({ type: "int" })
+  id: number;
+
+  @Column({ type: "varchar", length: 160 })
+  name: string;
+
+  @Column({ type: "varchar", length: 64, default: "America/Chicago" })
+  timeZone: string;
+
+  /** ISO 4217 currency code. */
+  @Column({ type: "char", length: 3, default: "USD" })
+  currency: string;
+
+  @Column({ type: "varchar", length: 254, default: "" })
+  email: string;
+
+  @Column({ type: "varchar", length: 40, default: "" })
+  phone: string;
+
+  @Column({ type: "varchar", length: 500, default: "" })
+  address: string;
+
+  @CreateDateColumn({ type: "datetime", precision: 3, default: () => "CURRENT_TIMESTAMP(3)" })
+  createdAt: Date;
+
+  @UpdateDateColumn({ type: "datetime", precision: 3, default: () => "CURRENT_TIMESTAMP(3)", onUpdate: "CURRENT_TIMESTAMP(3)" })
+  updatedAt: Date;
+}

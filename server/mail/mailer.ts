@@ -1,0 +1,39 @@
+import nodemailer from "nodemailer";
+import type { Logger } from "../logger";
+
+export interface OutgoingMail {
+  to: string;
+  subject: string;
+  html: string;
+  text: string;
+  /** Display name of the sender: the bakery's name. */
+  fromName: string;
+  attachments?: { filename: string; content: Buffer; contentType: string }[];
+}
+
+export interface Mailer {
+  send(mail: OutgoingMail): Promise<{ messageId: string }>;
+  close(): void;
+}
+
+/** nodemailer over SMTP_URL. Logs say who and what, never the body (links carry tokens). */
+export function createSmtpMailer(smtpUrl: string, fromAddress: string, logger: Logger): Mailer {
+  const transport = nodemailer.createTransport(smtpUrl, { ignoreTLS: smtpUrl.startsWith("smtp://127.0.0.1") || smtpUrl.startsWith("smtp://localhost") } as never);
+  return {
+    async send(mail) {
+      const info = await transport.sendMail({
+        from: { name: mail.fromName, address: fromAddress },
+        to: mail.to,
+        subject: mail.subject,
+        html: mail.html,
+        text: mail.text,
+        attachments: mail.attachments,
+      });
+      logger.info({ mail: { to: mail.to, subject: mail.subject, messageId: info.messageId } }, "mail sent");
+      return { messageId: info.messageId };
+    },
+    close() {
+      transport.close();
+    },
+  };
+}

@@ -1,0 +1,57 @@
+/** E-mail bodies: every mail has an HTML and a plain-text part saying the same thing. */
+const escapeHtml = (s: string) =>
+  s.replace(/&/g, "&amp;").replace(/</g, "&lt;").replace(/>/g, "&gt;").replace(/"/g, "&quot;").replace(/'/g, "&#39;");
+
+interface Rendered {
+  subject: string;
+  html: string;
+  text: string;
+}
+
+function layout(bakeryName: string, heading: string, paragraphs: string[], action?: { label: string; url: string }, footer?: string): Omit<Rendered, "subject"> {
+  const htmlParas = paragraphs.map((p) => `<p style="margin:0 0 14px;font-size:16px;line-height:1.5">${escapeHtml(p)}</p>`).join("");
+  const button = action
+    ? `<p style="margin:22px 0"><a href="${escapeHtml(action.url)}" style="background:#8A3F12;color:#ffffff;padding:12px 20px;border-radius:10px;text-decoration:none;font-weight:bold;display:inline-block">${escapeHtml(action.label)}</a></p>
+       <p style="margin:0 0 14px;font-size:13px;color:#5E5247">Or paste this link into your browser: <br>${escapeHtml(action.url)}</p>`
+    : "";
+  const html = `<!doctype html><html><body style="margin:0;background:#FAF6EF;font-family:Helvetica,Arial,sans-serif;color:#2A211B">
+<div style="max-width:560px;margin:0 auto;padding:28px 22px">
+<p style="margin:0 0 18px;font-weight:bold;color:#8A3F12;letter-spacing:0.5px">${escapeHtml(bakeryName)}</p>
+<h1 style="font-size:22px;margin:0 0 16px">${escapeHtml(heading)}</h1>
+${htmlParas}${button}
+${footer ? `<p style="margin:24px 0 0;font-size:13px;color:#5E5247">${escapeHtml(footer)}</p>` : ""}
+<p style="margin:24px 0 0;font-size:12px;color:#5E5247">Sent by Panwise for ${escapeHtml(bakeryName)}.</p>
+</div></body></html>`;
+  const text = [bakeryName, "", heading, "", ...paragraphs.flatMap((p) => [p, ""]), ...(action ? [`${action.label}: ${action.url}`, ""] : []), ...(footer ? [footer, ""] : []), `Sent by Panwise for ${bakeryName}.`].join("\n");
+  return { html, text };
+}
+
+export function invitationMail(p: { bakeryName: string; roleLabel: string; accountName: string | null; url: string; inviterName: string }): Rendered {
+  const forWhom = p.accountName ? ` for ${p.accountName}` : "";
+  return {
+    subject: p.accountName ? `You're invited to order from ${p.bakeryName}` : `You're invited to join ${p.bakeryName} on Panwise`,
+    ...layout(
+      p.bakeryName,
+      `You're invited to Panwise`,
+      [
+        `${p.inviterName} has invited you to ${p.bakeryName} on Panwise as ${p.roleLabel}${forWhom}.`,
+        "Choose a password to finish setting up your sign-in. The link works once and expires in 72 hours.",
+      ],
+      { label: "Set your password", url: p.url },
+      "If you weren't expecting this, you can ignore this e-mail.",
+    ),
+  };
+}
+
+export function passwordResetMail(p: { bakeryName: string; name: string; url: string }): Rendered {
+  return {
+    subject: `Reset your ${p.bakeryName} password`,
+    ...layout(
+      p.bakeryName,
+      "Reset your password",
+      [`Hello ${p.name},`, "Someone asked to reset the password for your Panwise sign-in. The link works once and expires in 1 hour."],
+      { label: "Choose a new password", url: p.url },
+      "If it wasn't you, ignore this e-mail: your password stays as it is.",
+    ),
+  };
+}

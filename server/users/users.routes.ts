@@ -1,0 +1,50 @@
+import { Router } from "express";
+import { z } from "zod";
+import type { AppContext } from "../http/context";
+import { parse } from "../http/errors";
+import { allow, currentUser } from "../http/auth";
+import { idSchema } from "../../shared/schemas/common";
+import { invitationCreateSchema, userUpdateSchema } from "../../shared/schemas/users";
+import * as users from "./users.service";
+
+const idParam = z.object({ id: idSchema });
+const listQuery = z.object({ q: z.string().trim().max(100).optional() });
+
+export function usersRoutes(ctx: AppContext): Router {
+  const r = Router();
+  r.use(allow("owner"));
+
+  r.get("/", async (req, res) => {
+    const { q } = parse(listQuery, req.query);
+    res.json({ users: await users.listUsers(ctx, q) });
+  });
+  r.get("/:id", async (req, res) => {
+    const { id } = parse(idParam, req.params);
+    res.json({ user: await users.getUser(ctx, id) });
+  });
+  r.patch("/:id", async (req, res) => {
+    const { id } = parse(idParam, req.params);
+    const patch = parse(userUpdateSchema, req.body);
+    res.json({ user: await users.updateUser(ctx, currentUser(req), id, patch) });
+  });
+  return r;
+}
+
+export function invitationsRoutes(ctx: AppContext): Router {
+  const r = Router();
+  r.use(allow("owner"));
+
+  r.get("/", async (_req, res) => {
+    res.json({ invitations: await users.listInvitations(ctx) });
+  });
+  r.post("/", async (req, res) => {
+    const input = parse(invitationCreateSchema, req.body);
+    res.status(201).json({ invitation: await users.invite(ctx, currentUser(req), input) });
+  });
+  r.delete("/:id", async (req, res) => {
+    const { id } = parse(idParam, req.params);
+    await users.revokeInvitation(ctx, id);
+    res.status(204).end();
+  });
+  return r;
+}

@@ -1,0 +1,18 @@
+/** The one error shape every API answer uses: { "error": { code, message, fields? } }. */
+export type FieldErrors = Record<string, string>;
+
+export interface ApiErrorBody {
+  error: {
+    code: string;
+    message: string;
+    fields?: FieldErrors;
+    [extra: string]: unknown;
+  };
+}
+
+export function isApiErrorBody(value: unknown): value is ApiErrorBody {
+  if (!value || typeof value !== "object") return false;
+  const err = (value as { error?: unknown }).error;
+  return !!err && typeof err === "object" && typeof (err as { code?: unknown }).code === "string"
+    && typeof (err as { message?: unknown }).message === "string";
+}

@@ -1,0 +1,36 @@
+import { z } from "zod";
+import { emailSchema, newPasswordSchema } from "./common";
+import { ROLES } from "../roles";
+
+export const signInSchema = z.object({
+  email: emailSchema,
+  password: z.string({ required_error: "Enter your password." }).min(1, "Enter your password."),
+});
+export type SignInInput = z.input<typeof signInSchema>;
+
+export const passwordResetRequestSchema = z.object({ email: emailSchema });
+
+export const passwordResetConfirmSchema = z.object({
+  token: z.string({ required_error: "The link is missing its token." }).min(10, "The link is incomplete."),
+  password: newPasswordSchema,
+});
+
+export const invitationAcceptSchema = z.object({
+  token: z.string({ required_error: "The link is missing its token." }).min(10, "The link is incomplete."),
+  password: newPasswordSchema,
+  name: z.string({ required_error: "Enter your name." }).trim().min(1, "Enter your name.").max(120, "Use at most 120 characters."),
+});
+
+export const sessionUserSchema = z.object({
+  id: z.number(),
+  email: z.string(),
+  name: z.string(),
+  role: z.enum(ROLES),
+  accountId: z.number().nullable(),
+});
+export type SessionUser = z.infer<typeof sessionUserSchema>;
+
+export interface SignInResponse {
+  token: string;
+  user: SessionUser;
+}
