@@ -91,22 +91,17 @@ export function createApp(ctx: AppContext) {
 /** Every API route as "METHOD /api/path", read off the router itself (for the route-by-role test). */
 export function listApiRoutes(ctx: AppContext): string[] {
   const out: string[] = [];
-  const walk = (stack: any[], prefix: string) => {
+  type Layer = { route?: { path: string; methods: Record<string, boolean> }; handle?: { stack?: Layer[] }; rawPath?: string };
+  const walk = (stack: Layer[], prefix: string) => {
     for (const layer of stack) {
       if (layer.route) {
-        for (const method of Object.keys(layer.route.methods)) out.push(`${method.toUpperCase()} ${prefix}${layer.route.path === "/" && prefix ? "" : layer.route.path}`);
+        const p = layer.route.path === "/" ? "" : layer.route.path;
+        for (const method of Object.keys(layer.route.methods)) out.push(`${method.toUpperCase()} ${prefix}${p || "/"}`.replace(/(.)\/$/, "$1"));
       } else if (layer.handle?.stack) {
-        const mount = layer.matchers?.length ? mountPath(layer) : "";
-        walk(layer.handle.stack, prefix + mount);
+        walk(layer.handle.stack, prefix + (layer.rawPath && layer.rawPath !== "/" ? layer.rawPath : ""));
       }
     }
   };
-  const mountPath = (layer: any) => {
-    const src = String(layer.regexp ?? "");
-    if (layer.path) return layer.path;
-    const m = /\^\\\/([^?\\]+)/.exec(src);
-    return m ? `/${m[1]}` : "";
-  };
-  walk((apiRouter(ctx) as any).stack, "/api");
+  walk((apiRouter(ctx) as unknown as { stack: Layer[] }).stack, "/api");
   return out;
 }

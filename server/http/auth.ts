@@ -16,7 +16,8 @@ declare global {
 }
 
 export function signToken(ctx: AppContext, user: User): string {
-  return jwt.sign({ sub: String(user.id), role: user.role }, ctx.config.jwtSecret, {
+  // iat from the server clock, so expiry follows the same clock that checks it.
+  return jwt.sign({ sub: String(user.id), role: user.role, iat: Math.floor(ctx.clock.now().getTime() / 1000) }, ctx.config.jwtSecret, {
     expiresIn: ctx.config.jwtTtlSeconds,
     algorithm: "HS256",
   });

@@ -1,0 +1,53 @@
+import { useMutation, useQuery } from "@tanstack/react-query";
+import { api } from "./client";
+import type { SessionUser, SignInResponse } from "../../shared/schemas/auth";
+import type { Role } from "../../shared/roles";
+
+export const authKeys = {
+  all: ["auth"] as const,
+  me: () => [...authKeys.all, "me"] as const,
+  invitation: (token: string) => [...authKeys.all, "invitation", token] as const,
+};
+
+export interface InvitationPreview {
+  email: string;
+  role: Role;
+  name: string | null;
+}
+
+export const authApi = {
+  signIn: (body: { email: string; password: string }) => api<SignInResponse>("/api/auth/sign-in", { method: "POST", body, auth: false }),
+  me: () => api<{ user: SessionUser }>("/api/auth/me"),
+  requestPasswordReset: (body: { email: string }) => api<{ message: string }>("/api/auth/password-reset", { method: "POST", body, auth: false }),
+  confirmPasswordReset: (body: { token: string; password: string }) =>
+    api<SignInResponse>("/api/auth/password-reset/confirm", { method: "POST", body, auth: false }),
+  invitation: (token: string) => api<InvitationPreview>(`/api/auth/invitations/${encodeURIComponent(token)}`, { auth: false }),
+  acceptInvitation: (body: { token: string; password: string; name: string }) =>
+    api<SignInResponse>("/api/auth/invitations/accept", { method: "POST", body, auth: false }),
+};
+
+export function useSignInMutation() {
+  return useMutation({ mutationFn: authApi.signIn });
+}
+
+export function usePasswordResetRequestMutation() {
+  return useMutation({ mutationFn: authApi.requestPasswordReset });
+}
+
+export function usePasswordResetConfirmMutation() {
+  return useMutation({ mutationFn: authApi.confirmPasswordReset });
+}
+
+export function useInvitationAcceptMutation() {
+  return useMutation({ mutationFn: authApi.acceptInvitation });
+}
+
+/** Who an invitation link is for; its error explains a dead link. */
+export function useInvitationPreviewQuery(token: string | null) {
+  return useQuery({
+    queryKey: authKeys.invitation(token ?? ""),
+    queryFn: () => authApi.invitation(token ?? ""),
+    enabled: !!token,
+    staleTime: Infinity,
+  });
+}

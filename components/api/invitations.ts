@@ -1,0 +1,37 @@
+import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
+import { api } from "./client";
+import { officeKeys } from "./office";
+import type { InvitationCreateInput, InvitationDto } from "../../shared/schemas/users";
+
+export const invitationKeys = {
+  all: ["invitations"] as const,
+  list: () => [...invitationKeys.all, "list"] as const,
+};
+
+export const invitationsApi = {
+  list: () => api<{ invitations: InvitationDto[] }>("/api/invitations").then((r) => r.invitations),
+  create: (input: InvitationCreateInput) => api<{ invitation: InvitationDto }>("/api/invitations", { method: "POST", body: input }).then((r) => r.invitation),
+  revoke: (id: number) => api<void>(`/api/invitations/${id}`, { method: "DELETE" }),
+};
+
+export function useInvitationsQuery() {
+  return useQuery({ queryKey: invitationKeys.list(), queryFn: invitationsApi.list });
+}
+
+function useInvalidateInvitations() {
+  const qc = useQueryClient();
+  return () => {
+    void qc.invalidateQueries({ queryKey: invitationKeys.all });
+    void qc.invalidateQueries({ queryKey: officeKeys.all });
+  };
+}
+
+export function useCreateInvitationMutation() {
+  const invalidate = useInvalidateInvitations();
+  return useMutation({ mutationFn: invitationsApi.create, onSuccess: invalidate });
+}
+
+export function useRevokeInvitationMutation() {
+  const invalidate = useInvalidateInvitations();
+  return useMutation({ mutationFn: invitationsApi.revoke, onSuccess: invalidate });
+}

@@ -1,0 +1,102 @@
+import React from "react";
+import { Pressable, StyleSheet, View } from "react-native";
+import { Feather } from "@expo/vector-icons";
+import { colors, layout, radii, space } from "../theme";
+import { AppText } from "./Text";
+
+export interface Choice<T extends string> {
+  value: T;
+  label: string;
+  hint?: string;
+}
+
+export interface ChoiceGroupProps<T extends string> {
+  label: string;
+  choices: Choice<T>[];
+  value: T | null;
+  onChange: (value: T) => void;
+  error?: string | null;
+  testID?: string;
+  /** "chips" sit in a wrapping row; "list" stacks full-width options with hints. */
+  layout?: "chips" | "list";
+}
+
+/** A single-choice control (radio group) built from large pressable options. */
+export function ChoiceGroup<T extends string>({ label, choices, value, onChange, error, testID, layout: shape = "chips" }: ChoiceGroupProps<T>) {
+  return (
+    <View style={styles.wrap} testID={testID}>
+      <AppText variant="label" nativeID={testID ? `${testID}-label` : undefined}>
+        {label}
+      </AppText>
+      <View accessibilityRole="radiogroup" accessibilityLabel={label} style={shape === "chips" ? styles.chips : styles.list}>
+        {choices.map((c) => {
+          const selected = c.value === value;
+          return (
+            <Pressable
+              key={c.value}
+              accessibilityRole="radio"
+              accessibilityState={{ checked: selected }}
+              accessibilityLabel={c.label}
+              testID={testID ? `${testID}-${c.value}` : undefined}
+              onPress={() => onChange(c.value)}
+              style={({ pressed }) => [
+                shape === "chips" ? styles.chip : styles.row,
+                selected && styles.selected,
+                pressed && !selected && styles.pressed,
+              ]}
+            >
+              {shape === "list" ? (
+                <Feather name={selected ? "check-circle" : "circle"} size={20} color={selected ? colors.crustInk : colors.inputBorder} />
+              ) : null}
+              <View style={shape === "list" ? styles.rowText : undefined}>
+                <AppText variant="label" color={selected ? "crustInk" : "ink"}>
+                  {c.label}
+                </AppText>
+                {shape === "list" && c.hint ? (
+                  <AppText variant="small" color={selected ? "crustInk" : "muted"}>
+                    {c.hint}
+                  </AppText>
+                ) : null}
+              </View>
+            </Pressable>
+          );
+        })}
+      </View>
+      {error ? (
+        <AppText variant="small" color="dangerInk" testID={testID ? `${testID}-error` : undefined} style={styles.error}>
+          {error}
+        </AppText>
+      ) : null}
+    </View>
+  );
+}
+
+const styles = StyleSheet.create({
+  wrap: { gap: space.xs },
+  chips: { flexDirection: "row", flexWrap: "wrap", gap: space.sm },
+  list: { gap: space.sm },
+  chip: {
+    minHeight: layout.minTouch,
+    paddingHorizontal: space.lg,
+    borderRadius: radii.pill,
+    borderWidth: 1.5,
+    borderColor: colors.inputBorder,
+    backgroundColor: colors.surface,
+    justifyContent: "center",
+  },
+  row: {
+    minHeight: layout.minTouch + 8,
+    flexDirection: "row",
+    alignItems: "center",
+    gap: space.md,
+    padding: space.md,
+    borderRadius: radii.md,
+    borderWidth: 1.5,
+    borderColor: colors.inputBorder,
+    backgroundColor: colors.surface,
+  },
+  rowText: { flex: 1, gap: space.xxs },
+  selected: { backgroundColor: colors.crustSoft, borderColor: colors.crust },
+  pressed: { backgroundColor: colors.sunken },
+  error: { fontFamily: "Nunito_600SemiBold" },
+});

@@ -1,0 +1,73 @@
+import React from "react";
+import { ActivityIndicator, StyleSheet, View } from "react-native";
+import { Feather } from "@expo/vector-icons";
+import { colors, radii, space } from "../theme";
+import { AppText, Heading } from "./Text";
+import { Button } from "./Button";
+import { messageOf } from "../api/client";
+
+export function LoadingState({ label = "Loading…", testID = "loading" }: { label?: string; testID?: string }) {
+  return (
+    <View style={styles.center} accessibilityRole="progressbar" accessibilityLabel={label} testID={testID}>
+      <ActivityIndicator size="large" color={colors.primary} />
+      <AppText color="muted">{label}</AppText>
+    </View>
+  );
+}
+
+export interface EmptyStateProps {
+  title: string;
+  message?: string;
+  icon?: React.ComponentProps<typeof Feather>["name"];
+  action?: React.ReactNode;
+  testID?: string;
+}
+
+export function EmptyState({ title, message, icon = "inbox", action, testID = "empty" }: EmptyStateProps) {
+  return (
+    <View style={[styles.center, styles.panel]} testID={testID}>
+      <View style={styles.iconRing}>
+        <Feather name={icon} size={24} color={colors.crust} />
+      </View>
+      <Heading level={3} align="center">
+        {title}
+      </Heading>
+      {message ? (
+        <AppText color="muted" align="center">
+          {message}
+        </AppText>
+      ) : null}
+      {action}
+    </View>
+  );
+}
+
+export interface ErrorStateProps {
+  error: unknown;
+  title?: string;
+  onRetry?: () => void;
+  retrying?: boolean;
+  testID?: string;
+}
+
+export function ErrorState({ error, title = "This didn't load", onRetry, retrying, testID = "error" }: ErrorStateProps) {
+  return (
+    <View style={[styles.center, styles.panel, styles.errorPanel]} accessibilityRole="alert" testID={testID}>
+      <Feather name="cloud-off" size={24} color={colors.dangerInk} />
+      <Heading level={3} color="dangerInk" align="center">
+        {title}
+      </Heading>
+      <AppText color="ink" align="center">
+        {messageOf(error)}
+      </AppText>
+      {onRetry ? <Button label="Try again" icon="refresh-cw" variant="secondary" onPress={onRetry} busy={retrying} testID={`${testID}-retry`} /> : null}
+    </View>
+  );
+}
+
+const styles = StyleSheet.create({
+  center: { alignItems: "center", justifyContent: "center", gap: space.md, paddingVertical: space.xxl, paddingHorizontal: space.lg },
+  panel: { borderRadius: radii.lg, borderWidth: 1, borderStyle: "dashed", borderColor: colors.border, backgroundColor: colors.surface },
+  errorPanel: { borderStyle: "solid", backgroundColor: colors.dangerSoft, borderColor: colors.dangerSoft },
+  iconRing: { width: 52, height: 52, borderRadius: 26, backgroundColor: colors.crustSoft, alignItems: "center", justifyContent: "center" },
+});

@@ -1,0 +1,71 @@
+import { startTestApp, makeAccount, makeBakery, makeUser, tokenFor, type TestApp } from "./helpers/app";
+import { listApiRoutes } from "../../server/app";
+import { ROLES, type Role } from "../../shared/roles";
+
+/**
+ * The route-by-role table. Every API route must be listed here (the first test fails for a new
+ * route that is not), with the roles allowed to use it; "public" routes need no sign-in.
+ * Everyone else must get 403 (signed in) or 401 (signed out): deny by default.
+ */
+const ALL: Role[] = [...ROLES];
+const TABLE: Record<string, Role[] | "public"> = {
+  "GET /api/health": "public",
+  "POST /api/auth/sign-in": "public",
+  "GET /api/auth/me": ALL,
+  "POST /api/auth/password-reset": "public",
+  "POST /api/auth/password-reset/confirm": "public",
+  "GET /api/auth/invitations/:token": "public",
+  "POST /api/auth/invitations/accept": "public",
+  "GET /api/bakery": ALL,
+  "GET /api/office/summary": ["owner", "bookkeeper"],
+  "GET /api/users": ["owner"],
+  "GET /api/users/:id": ["owner"],
+  "PATCH /api/users/:id": ["owner"],
+  "GET /api/invitations": ["owner"],
+  "POST /api/invitations": ["owner"],
+  "DELETE /api/invitations/:id": ["owner"],
+  "GET /api/accounts": ["owner", "bookkeeper"],
+  "GET /api/accounts/:id": ["owner", "bookkeeper", "buyer"],
+  "POST /api/accounts": ["owner"],
+  "PATCH /api/accounts/:id": ["owner"],
+};
+
+let t: TestApp;
+const tokens: Partial<Record<Role, string>> = {};
+let accountId = 0;
+beforeAll(async () => {
+  t = await startTestApp();
+  await makeBakery(t.ds);
+  const account = await makeAccount(t.ds);
+  accountId = account.id;
+  for (const role of ROLES) tokens[role] = await tokenFor(t, await makeUser(t.ds, role, role === "buyer" ? { accountId } : {}));
+});
+afterAll(() => t.close());
+
+it("lists every API route in the table (and nothing that does not exist)", () => {
+  const routes = listApiRoutes(t.ctx).sort();
+  expect(routes.filter((r) => !(r in TABLE))).toEqual([]);
+  expect(Object.keys(TABLE).filter((r) => !routes.includes(r))).toEqual([]);
+});
+
+const cases = Object.entries(TABLE).flatMap(([route, allowed]) =>
+  [...ROLES, "anonymous" as const].map((who) => ({ route, allowed, who })),
+);
+
+it.each(cases)("$route as $who", async ({ route, allowed, who }) => {
+  const [method, pattern] = route.split(" ");
+  // Use the buyer's own account id so that "allowed" buyer routes are really allowed.
+  const path = pattern.replace(":id", String(accountId)).replace(":token", "not-a-real-token-value");
+  let req = t.http()[method.toLowerCase() as "get" | "post" | "patch" | "delete"](path);
+  if (who !== "anonymous") req = req.set("Authorization", `Bearer ${tokens[who]}`);
+  const res = await req.send({});
+  if (allowed === "public" || (who !== "anonymous" && allowed.includes(who))) {
+    expect([401, 403]).not.toContain(res.status);
+  } else if (who === "anonymous") {
+    expect(res.status).toBe(401);
+    expect(res.body.error.code).toBe("unauthorized");
+  } else {
+    expect(res.status).toBe(403);
+    expect(res.body.error.code).toBe("forbidden");
+  }
+});
