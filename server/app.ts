@@ -68,6 +68,19 @@ export function createApp(ctx: AppContext) {
     }),
   );
 
+  // Cross-origin access only for the development web server (npm run dev sets CORS_ORIGIN).
+  const corsOrigins = (process.env.CORS_ORIGIN || "").split(",").map((o) => o.trim()).filter(Boolean);
+  if (corsOrigins.length) {
+    app.use("/api", (req, res, next) => {
+      const origin = req.get("origin");
+      if (origin && corsOrigins.includes(origin)) {
+        res.set({ "Access-Control-Allow-Origin": origin, "Access-Control-Allow-Headers": "Authorization, Content-Type, Idempotency-Key", "Access-Control-Allow-Methods": "GET, POST, PUT, PATCH, DELETE, OPTIONS", Vary: "Origin" });
+        if (req.method === "OPTIONS") return void res.status(204).end();
+      }
+      next();
+    });
+  }
+
   app.use("/api", apiRouter(ctx), errorHandler);
 
   // The exported web app, with the SPA fallback for client-side routes.

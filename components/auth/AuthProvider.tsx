@@ -91,9 +91,14 @@ export function AuthProvider({ children }: { children: React.ReactNode }) {
     // eslint-disable-next-line react-hooks/exhaustive-deps
   }, []);
 
+  const signOutByChoice = useCallback(() => {
+    setEndedMessage(null);
+    signOut();
+  }, [signOut]);
+
   const value = useMemo<AuthContextValue>(
-    () => ({ ...state, signIn, signOut, endedMessage }),
-    [state, signIn, signOut, endedMessage],
+    () => ({ ...state, signIn, signOut: signOutByChoice, endedMessage }),
+    [state, signIn, signOutByChoice, endedMessage],
   );
   return <AuthContext.Provider value={value}>{children}</AuthContext.Provider>;
 }

@@ -1,0 +1,225 @@
+import React from "react";
+import { Pressable, StyleSheet, View } from "react-native";
+import { Link, usePathname } from "expo-router";
+import { Feather } from "@expo/vector-icons";
+import { useSafeAreaInsets } from "react-native-safe-area-context";
+import { colors, layout, radii, space } from "../theme";
+import { AppText } from "../ui/Text";
+import { useAuth } from "../auth/useAuth";
+import { BrandMark } from "./BrandMark";
+import { AREA_LABEL, isActive, navFor, type NavItem } from "./navItems";
+import { useIsWide } from "./useIsWide";
+import { ROLE_LABELS, type HomeArea } from "../../shared/roles";
+
+/**
+ * The frame around every signed-in screen. Under 1024 px: a top bar (name, Sign out), one column and a
+ * bottom tab bar. From 1024 px: a left side navigation and the content beside it.
+ */
+export function AppShell({ area, children }: { area: HomeArea; children: React.ReactNode }) {
+  const wide = useIsWide();
+  const { user, signOut } = useAuth();
+  const pathname = usePathname();
+  if (!user) return null;
+  const items = navFor(area, user.role);
+
+  if (wide) {
+    return (
+      <View style={styles.wideRoot} testID="app-shell-wide">
+        <View style={styles.side} accessibilityRole="navigation" aria-label="Main">
+          <View style={styles.sideBrand}>
+            <BrandMark onDark />
+            <AppText variant="overline" color="navMuted">
+              {AREA_LABEL[area]}
+            </AppText>
+          </View>
+          <View style={styles.sideItems}>
+            {items.map((item) => (
+              <SideItem key={item.key} item={item} active={isActive(item, pathname)} />
+            ))}
+          </View>
+          <View style={styles.sideFooter}>
+            <View>
+              <AppText variant="bodyStrong" color="navInk" testID="signed-in-name" numberOfLines={1}>
+                {user.name}
+              </AppText>
+              <AppText variant="small" color="navMuted" numberOfLines={1}>
+                {ROLE_LABELS[user.role]} · {user.email}
+              </AppText>
+            </View>
+            <Pressable
+              accessibilityRole="button"
+              onPress={signOut}
+              testID="sign-out"
+              style={({ pressed }) => [styles.sideSignOut, pressed && { backgroundColor: colors.navActive }]}
+            >
+              <Feather name="log-out" size={18} color={colors.navInk} />
+              <AppText variant="label" color="navInk">
+                Sign out
+              </AppText>
+            </Pressable>
+          </View>
+        </View>
+        <View style={styles.wideMain} accessibilityRole="main">
+          {children}
+        </View>
+      </View>
+    );
+  }
+
+  return (
+    <View style={styles.narrowRoot} testID="app-shell-narrow">
+      <TopBar name={user.name} onSignOut={signOut} />
+      <View style={styles.narrowMain} accessibilityRole="main">
+        {children}
+      </View>
+      <BottomTabs items={items} pathname={pathname} />
+    </View>
+  );
+}
+
+function SideItem({ item, active }: { item: NavItem; active: boolean }) {
+  return (
+    <Link href={item.href as never} asChild>
+      <Pressable
+        accessibilityRole="link"
+        aria-current={active ? "page" : undefined}
+        testID={`nav-${item.key}`}
+        style={({ pressed, hovered }: { pressed: boolean; hovered?: boolean }) => [
+          styles.sideItem,
+          (active || pressed || hovered) && { backgroundColor: colors.navActive },
+        ]}
+      >
+        <View style={[styles.sideMarker, active && { backgroundColor: colors.sageSoft }]} />
+        <Feather name={item.icon} size={20} color={active ? colors.navInk : colors.navMuted} />
+        <AppText variant="bodyStrong" color={active ? "navInk" : "navMuted"}>
+          {item.label}
+        </AppText>
+      </Pressable>
+    </Link>
+  );
+}
+
+function TopBar({ name, onSignOut }: { name: string; onSignOut: () => void }) {
+  const insets = useSafeAreaInsets();
+  return (
+    <View style={[styles.topBar, { paddingTop: insets.top + space.sm }]}>
+      <BrandMark size={26} />
+      <View style={styles.topRight}>
+        <AppText variant="small" color="muted" numberOfLines={1} style={styles.topName} testID="signed-in-name">
+          {name}
+        </AppText>
+        <Pressable
+          accessibilityRole="button"
+          onPress={onSignOut}
+          testID="sign-out"
+          style={({ pressed }) => [styles.topSignOut, pressed && { backgroundColor: colors.sunken }]}
+        >
+          <Feather name="log-out" size={16} color={colors.crust} />
+          <AppText variant="label" color="crust">
+            Sign out
+          </AppText>
+        </Pressable>
+      </View>
+    </View>
+  );
+}
+
+function BottomTabs({ items, pathname }: { items: NavItem[]; pathname: string }) {
+  const insets = useSafeAreaInsets();
+  return (
+    <View style={[styles.tabBar, { paddingBottom: insets.bottom }]} accessibilityRole="tablist" aria-label="Main">
+      {items.map((item) => {
+        const active = isActive(item, pathname);
+        return (
+          <Link key={item.key} href={item.href as never} asChild>
+            <Pressable
+              accessibilityRole="tab"
+              accessibilityState={{ selected: active }}
+              aria-current={active ? "page" : undefined}
+              testID={`tab-${item.key}`}
+              style={({ pressed }) => [styles.tab, pressed && { backgroundColor: colors.sunken }]}
+            >
+              <View style={[styles.tabPill, active && styles.tabPillActive]}>
+                <Feather name={item.icon} size={20} color={active ? colors.crustInk : colors.muted} />
+              </View>
+              <AppText variant="caption" color={active ? "crustInk" : "muted"} style={active ? styles.tabLabelActive : undefined}>
+                {item.label}
+              </AppText>
+            </Pressable>
+          </Link>
+        );
+      })}
+    </View>
+  );
+}
+
+const styles = StyleSheet.create({
+  wideRoot: { flex: 1, flexDirection: "row", backgroundColor: colors.page },
+  side: {
+    width: layout.sideNavWidth,
+    backgroundColor: colors.nav,
+    paddingVertical: space.xl,
+    paddingHorizontal: space.md,
+    gap: space.xl,
+  },
+  sideBrand: { paddingHorizontal: space.sm, gap: space.sm },
+  sideItems: { gap: space.xs, flex: 1 },
+  sideItem: {
+    minHeight: layout.minTouch + 4,
+    flexDirection: "row",
+    alignItems: "center",
+    gap: space.md,
+    paddingRight: space.md,
+    borderRadius: radii.md,
+    overflow: "hidden",
+  },
+  sideMarker: { width: 4, alignSelf: "stretch", borderRadius: 2, backgroundColor: "transparent", marginVertical: space.sm },
+  sideFooter: { gap: space.md, paddingHorizontal: space.sm, paddingTop: space.lg, borderTopWidth: 1, borderTopColor: colors.navActive },
+  sideSignOut: {
+    minHeight: layout.minTouch,
+    flexDirection: "row",
+    alignItems: "center",
+    gap: space.sm,
+    paddingHorizontal: space.md,
+    borderRadius: radii.pill,
+    borderWidth: 1,
+    borderColor: colors.navMuted,
+    alignSelf: "flex-start",
+  },
+  wideMain: { flex: 1 },
+  narrowRoot: { flex: 1, backgroundColor: colors.page },
+  narrowMain: { flex: 1 },
+  topBar: {
+    flexDirection: "row",
+    alignItems: "center",
+    justifyContent: "space-between",
+    gap: space.md,
+    paddingHorizontal: space.lg,
+    paddingBottom: space.sm,
+    backgroundColor: colors.surface,
+    borderBottomWidth: 1,
+    borderBottomColor: colors.border,
+  },
+  topRight: { flexDirection: "row", alignItems: "center", gap: space.sm, flexShrink: 1 },
+  topName: { flexShrink: 1, maxWidth: 150 },
+  topSignOut: {
+    minHeight: layout.minTouch,
+    minWidth: layout.minTouch,
+    flexDirection: "row",
+    alignItems: "center",
+    gap: space.xs,
+    paddingHorizontal: space.sm,
+    borderRadius: radii.pill,
+  },
+  tabBar: {
+    flexDirection: "row",
+    backgroundColor: colors.surface,
+    borderTopWidth: 1,
+    borderTopColor: colors.border,
+    minHeight: layout.tabBarHeight,
+  },
+  tab: { flex: 1, minHeight: layout.tabBarHeight, alignItems: "center", justifyContent: "center", gap: space.xxs, paddingVertical: space.xs },
+  tabPill: { width: 52, height: 28, borderRadius: radii.pill, alignItems: "center", justifyContent: "center" },
+  tabPillActive: { backgroundColor: colors.crustSoft },
+  tabLabelActive: { fontFamily: "Nunito_800ExtraBold" },
+});
