@@ -10,6 +10,7 @@ export const colors = {
   page: "#F6EFE2", // flour cream
   surface: "#FFFBF3", // cards, inputs
   sunken: "#EDE2CD", // table headers, quiet panels
+  rowHover: "#FBF3E6", // a table row under the pointer
   border: "#DCCBB2", // decorative hairlines
   inputBorder: "#8F7A66", // form control outlines (3:1 or more against page and surface)
   nav: "#2E2018", // side navigation (dark roast)
@@ -59,6 +60,9 @@ export const textPairs: { fg: ColorName; bg: ColorName; use: string }[] = [
   { fg: "crust", bg: "page", use: "links" },
   { fg: "crust", bg: "surface", use: "links on cards" },
   { fg: "crust", bg: "sunken", use: "links on panels" },
+  { fg: "ink", bg: "rowHover", use: "table row under the pointer" },
+  { fg: "muted", bg: "rowHover", use: "secondary text in a hovered row" },
+  { fg: "crust", bg: "rowHover", use: "links in a hovered row" },
   { fg: "onPrimary", bg: "primary", use: "primary button" },
   { fg: "onPrimary", bg: "primaryPressed", use: "primary button pressed" },
   { fg: "onPrimary", bg: "sage", use: "accent button" },

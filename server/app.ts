@@ -10,6 +10,9 @@ import { authRoutes } from "./auth/auth.routes";
 import { invitationsRoutes, usersRoutes } from "./users/users.routes";
 import { accountsRoutes } from "./accounts/accounts.routes";
 import { bakeryRoutes, officeRoutes } from "./bakery/bakery.routes";
+import { catalogRoutes, priceListRoutes, uploadsRoutes } from "./catalog/catalog.routes";
+import { accountDeliveryRoutes, calendarRoutes, settingsRoutes } from "./calendar/calendar.routes";
+import { feedRoutes, ordersRoutes, publicFeedRoutes, standingOrderRoutes } from "./orders/orders.routes";
 
 /** The API alone: every route under it is mounted here, and nowhere else. */
 export function apiRouter(ctx: AppContext): Router {
@@ -32,6 +35,16 @@ export function apiRouter(ctx: AppContext): Router {
   api.use("/users", usersRoutes(ctx));
   api.use("/invitations", invitationsRoutes(ctx));
   api.use("/accounts", accountsRoutes(ctx));
+  api.use("/accounts", accountDeliveryRoutes(ctx));
+  api.use("/products", catalogRoutes(ctx));
+  api.use("/price-lists", priceListRoutes(ctx));
+  api.use("/uploads", uploadsRoutes(ctx));
+  api.use("/settings", settingsRoutes(ctx));
+  api.use("/calendar", calendarRoutes(ctx));
+  api.use("/orders", ordersRoutes(ctx));
+  api.use("/standing-orders", standingOrderRoutes(ctx));
+  api.use("/calendar-feed", feedRoutes(ctx));
+  api.use("/feeds", publicFeedRoutes(ctx));
   api.use(apiNotFound);
   return api;
 }
@@ -69,7 +82,7 @@ export function createApp(ctx: AppContext) {
   );
 
   // Cross-origin access only for the development web server (npm run dev sets CORS_ORIGIN).
-  const corsOrigins = (process.env.CORS_ORIGIN || "").split(",").map((o) => o.trim()).filter(Boolean);
+  const corsOrigins = String(process.env.CORS_ORIGIN || "").split(",").map((o: string) => o.trim()).filter(Boolean);
   if (corsOrigins.length) {
     app.use("/api", (req, res, next) => {
       const origin = req.get("origin");

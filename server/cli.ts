@@ -1,12 +1,15 @@
 import "reflect-metadata";
 import { createDataSource } from "./db/data-source";
 import { isEmpty, seedDemo } from "./seed/demo";
+import { buildContext } from "./context";
+import { materialiseAll } from "./orders/standing.service";
 
 /**
  * Command line: `node --import tsx server/cli.ts <command>`
  *   migrate   run pending migrations
  *   seed      add the demo scenario (idempotent)
- *   setup     migrate, then seed when the database is empty (what npm start does)
+ *   setup     migrate, then seed when the database is empty, then make standing orders (what npm start does)
+ *   standing  turn standing orders into orders for every orderable date within the horizon
  */
 async function main() {
   const [command] = process.argv.slice(2);
@@ -33,14 +36,28 @@ async function main() {
         } else {
           console.log("database ready");
         }
+        await standingOrders(ds);
         break;
       }
+      case "standing":
+        await standingOrders(ds);
+        break;
       default:
         console.error("usage: cli.ts migrate | seed | setup");
         process.exitCode = 2;
     }
   } finally {
     await ds.destroy();
+  }
+}
+
+async function standingOrders(ds: import("typeorm").DataSource) {
+  const ctx = buildContext({ dataSource: ds });
+  try {
+    const r = await materialiseAll(ctx);
+    console.log(`standing orders: ${r.created} order(s) made, ${r.updated} brought up to date, ${r.cancelled} withdrawn`);
+  } finally {
+    ctx.mailer.close();
   }
 }
 

@@ -2,10 +2,11 @@ import { Platform } from "react-native";
 import { isApiErrorBody, type FieldErrors } from "../../shared/errors";
 
 /**
- * Same origin on the web: the Express server serves both the app and /api.
- * A native build would point EXPO_PUBLIC_API_URL at the server.
+ * Same origin on the web: the Express server serves both the app and /api. EXPO_PUBLIC_API_URL (inlined at
+ * build time) points elsewhere: `npm run dev` sets it for the Expo dev server, a native build would too.
  */
-export const BASE_URL: string = Platform.OS === "web" ? "" : (process.env.EXPO_PUBLIC_API_URL ?? "http://127.0.0.1:8080");
+const CONFIGURED_API_URL = (process.env.EXPO_PUBLIC_API_URL ?? "").replace(/\/+$/, "");
+export const BASE_URL: string = CONFIGURED_API_URL || (Platform.OS === "web" ? "" : "http://127.0.0.1:8080");
 
 /** An error the API answered with ({ error: { code, message, fields? } }), or one we made up for a failed request. */
 export class ApiError extends Error {

@@ -1,7 +1,7 @@
 import React from "react";
-import { Pressable, StyleSheet, View } from "react-native";
+import { Platform, Pressable, StyleSheet, View } from "react-native";
 import { Link, usePathname } from "expo-router";
-import { Feather } from "@expo/vector-icons";
+import Feather from "@expo/vector-icons/Feather";
 import { useSafeAreaInsets } from "react-native-safe-area-context";
 import { colors, layout, radii, space } from "../theme";
 import { AppText } from "../ui/Text";
@@ -10,6 +10,11 @@ import { BrandMark } from "./BrandMark";
 import { AREA_LABEL, isActive, navFor, type NavItem } from "./navItems";
 import { useIsWide } from "./useIsWide";
 import { ROLE_LABELS, type HomeArea } from "../../shared/roles";
+
+/** Web landmarks (<nav>, <main>); React Native's own role list has no such roles. */
+function landmark(role: "navigation" | "main"): object {
+  return Platform.OS === "web" ? { role } : {};
+}
 
 /**
  * The frame around every signed-in screen. Under 1024 px: a top bar (name, Sign out), one column and a
@@ -25,7 +30,7 @@ export function AppShell({ area, children }: { area: HomeArea; children: React.R
   if (wide) {
     return (
       <View style={styles.wideRoot} testID="app-shell-wide">
-        <View style={styles.side} accessibilityRole="navigation" aria-label="Main">
+        <View style={styles.side} {...landmark("navigation")} aria-label="Main">
           <View style={styles.sideBrand}>
             <BrandMark onDark />
             <AppText variant="overline" color="navMuted">
@@ -59,7 +64,7 @@ export function AppShell({ area, children }: { area: HomeArea; children: React.R
             </Pressable>
           </View>
         </View>
-        <View style={styles.wideMain} accessibilityRole="main">
+        <View style={styles.wideMain} {...landmark("main")}>
           {children}
         </View>
       </View>
@@ -69,7 +74,7 @@ export function AppShell({ area, children }: { area: HomeArea; children: React.R
   return (
     <View style={styles.narrowRoot} testID="app-shell-narrow">
       <TopBar name={user.name} onSignOut={signOut} />
-      <View style={styles.narrowMain} accessibilityRole="main">
+      <View style={styles.narrowMain} {...landmark("main")}>
         {children}
       </View>
       <BottomTabs items={items} pathname={pathname} />

@@ -1,6 +1,6 @@
 import React from "react";
 import { ActivityIndicator, StyleSheet, View } from "react-native";
-import { Feather } from "@expo/vector-icons";
+import Feather from "@expo/vector-icons/Feather";
 import { colors, radii, space } from "../theme";
 import { AppText, Heading } from "./Text";
 import { Button } from "./Button";

@@ -29,6 +29,21 @@ export class CustomerAccount {
   @Column({ type: "text" })
   notes: string;
 
+  /** Weekdays this account takes deliveries (its route days), "2,4,6"; null = every bakery delivery day. */
+  @Column({ type: "varchar", length: 20, nullable: true })
+  routeWeekdays: string | null;
+
+  @Column({ type: "int", default: 0 })
+  minimumOrderCents: number;
+
+  @Column({ type: "int", nullable: true })
+  priceListId: number | null;
+
+  /** Secret for the account's private calendar feed URL; replaced to revoke. */
+  @Index({ unique: true })
+  @Column({ type: "varchar", length: 64, nullable: true })
+  feedToken: string | null;
+
   @CreateDateColumn({ type: "datetime", precision: 3, default: () => "CURRENT_TIMESTAMP(3)" })
   createdAt: Date;
 

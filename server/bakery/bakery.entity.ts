@@ -25,6 +25,20 @@ export class Bakery {
   @Column({ type: "varchar", length: 500, default: "" })
   address: string;
 
+  /** Delivery weekdays, ISO numbers 1 (Mon) … 7 (Sun), stored "1,2,3". */
+  @Column({ type: "varchar", length: 20, default: "2,3,4,5,6" })
+  deliveryWeekdays: string;
+
+  /** Local cut-off time "HH:mm" on the day(s) before delivery. */
+  @Column({ type: "char", length: 5, default: "14:00" })
+  cutoffTime: string;
+
+  @Column({ type: "int", default: 1 })
+  leadDays: number;
+
+  @Column({ type: "int", default: 28 })
+  horizonDays: number;
+
   @CreateDateColumn({ type: "datetime", precision: 3, default: () => "CURRENT_TIMESTAMP(3)" })
   createdAt: Date;
 

@@ -1,8 +1,16 @@
 import { Bakery } from "../bakery/bakery.entity";
+import { BakeryClosure } from "../calendar/closure.entity";
 import { CustomerAccount } from "../accounts/account.entity";
 import { User } from "../users/user.entity";
 import { AuthToken } from "../auth/auth-token.entity";
 import { SignInFailure } from "../auth/sign-in-attempt.entity";
+import { Product } from "../catalog/product.entity";
+import { PriceList, PriceListItem } from "../catalog/price-list.entity";
+import { IdempotencyRecord, Order, OrderLine } from "../orders/order.entity";
+import { StandingOrder, StandingOrderLine } from "../orders/standing-order.entity";
 
 /** Every entity, listed once: the DataSource, the CLI and the tests all take it from here. */
-export const entities = [Bakery, CustomerAccount, User, AuthToken, SignInFailure];
+export const entities = [
+  Bakery, BakeryClosure, CustomerAccount, User, AuthToken, SignInFailure,
+  Product, PriceList, PriceListItem, Order, OrderLine, IdempotencyRecord, StandingOrder, StandingOrderLine,
+];

@@ -55,3 +55,29 @@ export function passwordResetMail(p: { bakeryName: string; name: string; url: st
     ),
   };
 }
+
+export function orderMail(p: {
+  bakeryName: string;
+  currency: string;
+  timeZone: string;
+  kind: "placed" | "changed" | "cancelled";
+  url: string;
+  order: import("../../shared/schemas/orders").OrderDto;
+}): Rendered {
+  const { order } = p;
+  const money = (c: number) => new Intl.NumberFormat("en-US", { style: "currency", currency: p.currency }).format(c / 100);
+  const day = new Intl.DateTimeFormat("en-US", { weekday: "long", day: "numeric", month: "long", timeZone: "UTC" }).format(new Date(`${order.deliveryDate}T12:00:00Z`));
+  const cutoff = new Intl.DateTimeFormat("en-US", { weekday: "short", day: "numeric", month: "short", hour: "numeric", minute: "2-digit", timeZone: p.timeZone, timeZoneName: "short" }).format(new Date(order.cutoffAt));
+  const verb = { placed: "Order received", changed: "Order changed", cancelled: "Order cancelled" }[p.kind];
+  const lines = order.lines.map((l) => `${l.quantity} × ${l.productName} (${l.saleUnit}) — ${money(l.lineTotalCents)}`);
+  const paras =
+    p.kind === "cancelled"
+      ? [`Your order for ${day} (${order.accountName}) is cancelled. Nothing will be delivered that day.`]
+      : [
+          `${order.accountName}, delivery ${day}:`,
+          ...lines,
+          `Total ${money(order.totalCents)}${order.poNumber ? ` · PO ${order.poNumber}` : ""}`,
+          `You can change it until the cut-off, ${cutoff}.`,
+        ];
+  return { subject: `${verb}: ${day} — ${p.bakeryName}`, ...layout(p.bakeryName, verb, paras, { label: "View the order", url: p.url }, "Allergens are listed on each product in Panwise; ask the bakery if you have a severe allergy.") };
+}

@@ -4,6 +4,12 @@ import { CustomerAccount } from "../accounts/account.entity";
 import { User } from "../users/user.entity";
 import { hashPassword } from "../auth/auth.service";
 import type { Role } from "../../shared/roles";
+import { Product } from "../catalog/product.entity";
+import { PriceList, PriceListItem } from "../catalog/price-list.entity";
+import { BakeryClosure } from "../calendar/closure.entity";
+import { StandingOrder, StandingOrderLine } from "../orders/standing-order.entity";
+import { weeklyRule } from "../../shared/recurrence";
+import type { Weekday } from "../../shared/calendar";
 
 /** The invented demo scenario: the Hollowbrook Bakehouse and three wholesale customers. */
 export const DEMO_PASSWORD = "panwise-demo";
@@ -58,6 +64,27 @@ export const DEMO_SIGN_INS = [
   ...DEMO_ACCOUNTS.map((a) => ({ email: a.buyer.email, role: "buyer" as Role, account: a.businessName })),
 ];
 
+/** Invented products: three doughs (milk bread, honey-oat, brioche), pans in millimetres. */
+const NINE_BY_THIRTEEN = { panName: "9×13 in pan", panLengthMm: 330, panWidthMm: 229 };
+const HALF_SHEET = { panName: "Half sheet pan", panLengthMm: 457, panWidthMm: 330 };
+const PULLMAN = { panName: "13×4 in Pullman pan", panLengthMm: 330, panWidthMm: 102 };
+export const DEMO_PRODUCTS = [
+  { key: "rolls", name: "Milk-bread dinner rolls", description: "Soft, pull-apart rolls made with a cooked milk-and-flour paste. Baked together so the sides stay tender.", saleUnit: "tray of 15 rolls", piecesPerUnit: 15, pieceGrams: 67, ...NINE_BY_THIRTEEN, unitsPerPan: 1, priceCents: 1800, minQuantity: 1, maxQuantity: 40, leadDays: null, allergens: "gluten,wheat,egg,milk", mayContain: "sesame" },
+  { key: "sliders", name: "Milk-bread slider buns", description: "Small round buns for sliders and breakfast sandwiches, brushed with egg.", saleUnit: "dozen buns", piecesPerUnit: 12, pieceGrams: 45, ...HALF_SHEET, unitsPerPan: 2, priceCents: 1440, minQuantity: 1, maxQuantity: 30, leadDays: null, allergens: "gluten,wheat,egg,milk", mayContain: "sesame" },
+  { key: "pullman", name: "Pullman milk loaf", description: "Square, close-crumbed sandwich loaf for toast and tea sandwiches.", saleUnit: "loaf", piecesPerUnit: 1, pieceGrams: 900, ...PULLMAN, unitsPerPan: 1, priceCents: 950, minQuantity: 1, maxQuantity: 30, leadDays: null, allergens: "gluten,wheat,egg,milk", mayContain: "" },
+  { key: "oat", name: "Honey-oat rolls", description: "Milk-bread rolls with rolled oats and a little honey; oat-topped.", saleUnit: "tray of 15 rolls", piecesPerUnit: 15, pieceGrams: 70, ...NINE_BY_THIRTEEN, unitsPerPan: 1, priceCents: 1950, minQuantity: 1, maxQuantity: 30, leadDays: null, allergens: "gluten,wheat,milk", mayContain: "egg,sesame" },
+  { key: "brioche", name: "Brioche burger buns", description: "Rich, egg-glazed buns that hold a burger without going soggy.", saleUnit: "pack of 8 buns", piecesPerUnit: 8, pieceGrams: 90, ...HALF_SHEET, unitsPerPan: 2, priceCents: 1600, minQuantity: 1, maxQuantity: 25, leadDays: null, allergens: "gluten,wheat,egg,milk", mayContain: "sesame" },
+  { key: "sesame", name: "Sesame brioche buns", description: "Our brioche buns topped with toasted sesame.", saleUnit: "pack of 8 buns", piecesPerUnit: 8, pieceGrams: 90, ...HALF_SHEET, unitsPerPan: 2, priceCents: 1700, minQuantity: 1, maxQuantity: 25, leadDays: null, allergens: "gluten,wheat,egg,milk,sesame", mayContain: "" },
+  { key: "swirl", name: "Cinnamon swirl loaf", description: "Milk-bread loaf rolled with cinnamon sugar; needs an extra day's notice.", saleUnit: "loaf", piecesPerUnit: 1, pieceGrams: 800, ...PULLMAN, unitsPerPan: 1, priceCents: 1150, minQuantity: 1, maxQuantity: 12, leadDays: 2, allergens: "gluten,wheat,egg,milk", mayContain: "tree_nuts" },
+] as const;
+
+/** Standing orders per account: weekday → product key → quantity. */
+const DEMO_STANDING: Record<string, { weekdays: Record<number, Record<string, number>>; intervalWeeks: 1 | 2 }> = {
+  "Tidewater Café": { intervalWeeks: 1, weekdays: { 2: { rolls: 4, pullman: 2 }, 4: { rolls: 4, sliders: 2 }, 6: { rolls: 6, pullman: 3, swirl: 2 } } },
+  "Juniper Table": { intervalWeeks: 1, weekdays: { 3: { rolls: 8, brioche: 4 }, 5: { rolls: 10, brioche: 6, oat: 4 }, 6: { rolls: 12, sesame: 6, oat: 4 } } },
+  "North Pier Coffee": { intervalWeeks: 2, weekdays: { 6: { sliders: 3, sesame: 2 } } },
+};
+
 /** Idempotent: running it again changes nothing that is already there. */
 export async function seedDemo(ds: DataSource): Promise<{ created: number }> {
   let created = 0;
@@ -86,6 +113,63 @@ export async function seedDemo(ds: DataSource): Promise<{ created: number }> {
         await users.insert({ ...buyer, role: "buyer", accountId: account.id, passwordHash, disabled: false });
         created++;
       }
+    }
+
+    const products = m.getRepository(Product);
+    const ids: Record<string, number> = {};
+    for (const [i, { key, ...p }] of DEMO_PRODUCTS.entries()) {
+      let row = await products.findOneBy({ name: p.name });
+      if (!row) {
+        row = await products.save(products.create({ ...p, leadDays: p.leadDays, photoFile: null, active: true, formulaId: null, sortOrder: i }));
+        created++;
+      }
+      ids[key] = row.id;
+    }
+
+    const lists = m.getRepository(PriceList);
+    let partners = await lists.findOneBy({ name: "Café partners" });
+    if (!partners) {
+      partners = await lists.save(lists.create({ name: "Café partners", kind: "percent", percentOff: "10" }));
+      created++;
+    }
+    let restaurant = await lists.findOneBy({ name: "Restaurant volume" });
+    if (!restaurant) {
+      restaurant = await lists.save(lists.create({ name: "Restaurant volume", kind: "fixed", percentOff: "0" }));
+      await m.getRepository(PriceListItem).insert([
+        { priceListId: restaurant.id, productId: ids.rolls, priceCents: 1650 },
+        { priceListId: restaurant.id, productId: ids.brioche, priceCents: 1480 },
+        { priceListId: restaurant.id, productId: ids.oat, priceCents: 1800 },
+      ]);
+      created++;
+    }
+    const accountSettings: Record<string, { routeWeekdays: string | null; minimumOrderCents: number; priceListId: number | null }> = {
+      "Tidewater Café": { routeWeekdays: "2,4,6", minimumOrderCents: 5000, priceListId: partners.id },
+      "Juniper Table": { routeWeekdays: "3,5,6", minimumOrderCents: 10000, priceListId: restaurant.id },
+      "North Pier Coffee": { routeWeekdays: "6", minimumOrderCents: 4000, priceListId: null },
+    };
+    for (const [name, settings] of Object.entries(accountSettings)) {
+      const a = await accounts.findOneByOrFail({ businessName: name });
+      if (a.routeWeekdays === null && a.minimumOrderCents === 0) await accounts.update({ id: a.id }, settings);
+    }
+
+    const closures = m.getRepository(BakeryClosure);
+    for (const c of [{ date: "2026-12-25", note: "Christmas Day" }, { date: "2026-12-26", note: "Boxing Day" }, { date: "2027-01-01", note: "New Year's Day" }]) {
+      if (!(await closures.existsBy({ date: c.date }))) {
+        await closures.insert(c);
+        created++;
+      }
+    }
+
+    const standing = m.getRepository(StandingOrder);
+    for (const [name, plan] of Object.entries(DEMO_STANDING)) {
+      const a = await accounts.findOneByOrFail({ businessName: name });
+      if (await standing.existsBy({ accountId: a.id })) continue;
+      const weekdays = Object.keys(plan.weekdays).map(Number) as Weekday[];
+      const startDate = "2026-11-02";
+      const so = await standing.save(standing.create({ accountId: a.id, startDate, endDate: null, intervalWeeks: plan.intervalWeeks, rrule: weeklyRule({ startDate, endDate: null, intervalWeeks: plan.intervalWeeks, weekdays }), skipDates: JSON.stringify(name === "Tidewater Café" ? ["2026-12-31"] : []), active: true }));
+      const lines = Object.entries(plan.weekdays).flatMap(([wd, items]) => Object.entries(items).map(([key, quantity]) => ({ standingOrderId: so.id, productId: ids[key], weekday: Number(wd), quantity })));
+      await m.getRepository(StandingOrderLine).insert(lines);
+      created++;
     }
   });
   return { created };

@@ -1,6 +1,6 @@
 import React from "react";
 import { ScrollView, StyleSheet, View } from "react-native";
-import { colors, layout, radii, shadow, space } from "../../theme";
+import { colors, radii, shadow, space } from "../../theme";
 import { AppText, Heading } from "../../ui/Text";
 import { BrandMark } from "../../shell/BrandMark";
 import { useIsWide } from "../../shell/useIsWide";
@@ -21,7 +21,7 @@ export function AuthFrame({ title, intro, children, testID }: AuthFrameProps) {
         <View style={styles.brand}>
           <BrandMark size={36} />
           <AppText variant="small" color="muted">
-            Pre-orders and the bake day for Hollowbrook&apos;s wholesale customers
+            Wholesale pre-orders and the bake day, in one place.
           </AppText>
         </View>
         <View style={[styles.card, wide && styles.cardWide]}>
@@ -56,5 +56,3 @@ const styles = StyleSheet.create({
   cardWide: { padding: space.xxl },
   titleBlock: { gap: space.xs },
 });
-
-export const authFrameWidth = layout.formMaxWidth;

@@ -1,0 +1,3 @@
+import { SignedOutLayout } from "../../components/auth/SignedOutLayout";
+
+export default SignedOutLayout;

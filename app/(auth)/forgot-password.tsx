@@ -1,0 +1,3 @@
+import { ForgotPasswordScreen } from "../../components/screens/auth/ForgotPasswordScreen";
+
+export default ForgotPasswordScreen;

@@ -1,0 +1,3 @@
+import { SignInScreen } from "../../components/screens/auth/SignInScreen";
+
+export default SignInScreen;

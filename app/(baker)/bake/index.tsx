@@ -1,0 +1,3 @@
+import { BakerHome } from "../../../components/screens/baker/BakerHome";
+
+export default BakerHome;

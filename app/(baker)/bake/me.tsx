@@ -1,0 +1,3 @@
+import { ProfileScreen } from "../../../components/screens/common/ProfileScreen";
+
+export default ProfileScreen;

@@ -1,0 +1,3 @@
+import { BuyerAccountScreen } from "../../../components/screens/buyer/BuyerAccountScreen";
+
+export default BuyerAccountScreen;

@@ -1,0 +1,3 @@
+import { BuyerHome } from "../../../components/screens/buyer/BuyerHome";
+
+export default BuyerHome;

@@ -1,0 +1,14 @@
+import React from "react";
+import { useLocalSearchParams } from "expo-router";
+import { RequireRole } from "../../../../../components/auth/RoleGate";
+import { EditAccountScreen } from "../../../../../components/screens/accounts/AccountFormScreen";
+import { idParam } from "../../../../../components/routing";
+
+export default function EditAccountRoute() {
+  const { id } = useLocalSearchParams<{ id: string }>();
+  return (
+    <RequireRole roles={["owner"]}>
+      <EditAccountScreen key={String(id)} id={idParam(id)} />
+    </RequireRole>
+  );
+}

@@ -1,0 +1,3 @@
+import { AccountsListScreen } from "../../../../components/screens/accounts/AccountsListScreen";
+
+export default AccountsListScreen;

@@ -1,0 +1,11 @@
+import React from "react";
+import { RequireRole } from "../../../../components/auth/RoleGate";
+import { NewAccountScreen } from "../../../../components/screens/accounts/AccountFormScreen";
+
+export default function NewAccountRoute() {
+  return (
+    <RequireRole roles={["owner"]}>
+      <NewAccountScreen />
+    </RequireRole>
+  );
+}

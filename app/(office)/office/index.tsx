@@ -1,0 +1,3 @@
+import { OfficeHome } from "../../../components/screens/office/OfficeHome";
+
+export default OfficeHome;

@@ -1,0 +1,3 @@
+import { NotFoundScreen } from "../components/screens/common/NotFoundScreen";
+
+export default NotFoundScreen;

@@ -1,0 +1,3 @@
+import { HomeRedirect } from "../components/auth/HomeRedirect";
+
+export default HomeRedirect;

@@ -1,0 +1,216 @@
+import React, { useState } from "react";
+import { StyleSheet, View } from "react-native";
+import { useRouter } from "expo-router";
+import { Screen } from "../../ui/Screen";
+import { PageHeader } from "../../ui/PageHeader";
+import { Card } from "../../ui/Card";
+import { TextField } from "../../ui/TextField";
+import { ChoiceGroup } from "../../ui/ChoiceGroup";
+import { Button } from "../../ui/Button";
+import { TextLink } from "../../ui/TextLink";
+import { FormError } from "../../ui/FormError";
+import { EmptyState, ErrorState, LoadingState } from "../../ui/States";
+import { useAccountQuery, useCreateAccountMutation, useUpdateAccountMutation } from "../../api/accounts";
+import { ApiError } from "../../api/client";
+import { splitError, validate } from "../../forms/errors";
+import { accountInputSchema, type AccountDto, type AccountStatus } from "../../../shared/schemas/accounts";
+import type { FieldErrors } from "../../../shared/errors";
+import { space } from "../../theme";
+
+interface Values {
+  businessName: string;
+  deliveryAddress: string;
+  contactName: string;
+  contactPhone: string;
+  billingEmail: string;
+  status: AccountStatus;
+  notes: string;
+}
+
+const FIELDS = ["businessName", "deliveryAddress", "contactName", "contactPhone", "billingEmail", "status", "notes"] as const;
+
+const EMPTY: Values = { businessName: "", deliveryAddress: "", contactName: "", contactPhone: "", billingEmail: "", status: "active", notes: "" };
+
+function valuesOf(a: AccountDto): Values {
+  return {
+    businessName: a.businessName,
+    deliveryAddress: a.deliveryAddress,
+    contactName: a.contactName,
+    contactPhone: a.contactPhone,
+    billingEmail: a.billingEmail,
+    status: a.status,
+    notes: a.notes,
+  };
+}
+
+/** New account (owner). */
+export function NewAccountScreen() {
+  const mutation = useCreateAccountMutation();
+  const router = useRouter();
+  return (
+    <Screen narrow testID="account-new">
+      <TextLink href="/office/accounts" label="‹ All accounts" />
+      <PageHeader title="New account" subtitle="A café or shop that orders from the bakery." />
+      <AccountForm
+        initial={EMPTY}
+        withStatus
+        submitLabel="Add account"
+        busy={mutation.isPending}
+        onSubmit={(input, fail) =>
+          mutation.mutate(input, {
+            onSuccess: (saved) => router.replace(`/office/accounts/${saved.id}`),
+            onError: fail,
+          })
+        }
+        cancelHref="/office/accounts"
+      />
+    </Screen>
+  );
+}
+
+/** Edit an account's details (owner). Status changes live on the account's page. */
+export function EditAccountScreen({ id }: { id: number }) {
+  const valid = Number.isInteger(id) && id > 0;
+  const account = useAccountQuery(valid ? id : null);
+  const mutation = useUpdateAccountMutation(id);
+  const router = useRouter();
+
+  if (!valid || (account.error instanceof ApiError && account.error.status === 404)) {
+    return (
+      <Screen narrow testID="account-edit">
+        <EmptyState icon="help-circle" title="There's no such account" testID="account-not-found" />
+        <TextLink href="/office/accounts" label="All accounts" />
+      </Screen>
+    );
+  }
+  return (
+    <Screen narrow testID="account-edit">
+      <TextLink href={`/office/accounts/${id}`} label="‹ Back to the account" />
+      {account.isPending ? (
+        <LoadingState label="Loading the account…" />
+      ) : account.isError ? (
+        <ErrorState error={account.error} onRetry={() => account.refetch()} retrying={account.isFetching} />
+      ) : (
+        <>
+          <PageHeader overline="Edit account" title={account.data.businessName} />
+          <AccountForm
+            key={account.data.id}
+            initial={valuesOf(account.data)}
+            submitLabel="Save changes"
+            busy={mutation.isPending}
+            onSubmit={(input, fail) => {
+              const { status: _status, ...patch } = input;
+              mutation.mutate(patch, {
+                onSuccess: (saved) => router.replace(`/office/accounts/${saved.id}`),
+                onError: fail,
+              });
+            }}
+            cancelHref={`/office/accounts/${id}`}
+          />
+        </>
+      )}
+    </Screen>
+  );
+}
+
+interface AccountFormProps {
+  initial: Values;
+  withStatus?: boolean;
+  submitLabel: string;
+  busy: boolean;
+  onSubmit: (input: Values, fail: (error: unknown) => void) => void;
+  cancelHref: string;
+}
+
+function AccountForm({ initial, withStatus, submitLabel, busy, onSubmit, cancelHref }: AccountFormProps) {
+  const [values, setValues] = useState<Values>(initial);
+  const [fields, setFields] = useState<FieldErrors>({});
+  const [formError, setFormError] = useState<string | null>(null);
+  const set = (key: keyof Values) => (v: string) => setValues((s) => ({ ...s, [key]: v }));
+
+  const submit = () => {
+    if (busy) return;
+    setFormError(null);
+    const checked = validate(accountInputSchema, values);
+    if (!checked.ok) {
+      setFields(checked.fields);
+      setFormError(Object.keys(checked.fields).length > 1 ? "Some fields need attention." : null);
+      return;
+    }
+    setFields({});
+    onSubmit(checked.data as Values, (err) => {
+      const split = splitError(err, FIELDS);
+      setFields(split.fields);
+      setFormError(split.formError);
+    });
+  };
+
+  return (
+    <Card testID="account-form">
+      <FormError message={formError} testID="account-form-error" />
+      <TextField label="Business name" testID="account-businessName" value={values.businessName} onChangeText={set("businessName")} error={fields.businessName} autoCapitalize="words" />
+      <TextField
+        label="Delivery address"
+        testID="account-deliveryAddress"
+        value={values.deliveryAddress}
+        onChangeText={set("deliveryAddress")}
+        error={fields.deliveryAddress}
+        multiline
+        hint="Where the driver leaves the order, with any door or gate details."
+      />
+      <View style={styles.pair}>
+        <View style={styles.half}>
+          <TextField label="Contact name" optional testID="account-contactName" value={values.contactName} onChangeText={set("contactName")} error={fields.contactName} autoCapitalize="words" />
+        </View>
+        <View style={styles.half}>
+          <TextField
+            label="Contact phone"
+            optional
+            testID="account-contactPhone"
+            value={values.contactPhone}
+            onChangeText={set("contactPhone")}
+            error={fields.contactPhone}
+            keyboardType="phone-pad"
+            inputMode="tel"
+          />
+        </View>
+      </View>
+      <TextField
+        label="Billing e-mail"
+        testID="account-billingEmail"
+        value={values.billingEmail}
+        onChangeText={set("billingEmail")}
+        error={fields.billingEmail}
+        keyboardType="email-address"
+        inputMode="email"
+        autoCapitalize="none"
+        autoCorrect={false}
+        hint="Invoices and statements go here."
+      />
+      {withStatus ? (
+        <ChoiceGroup<AccountStatus>
+          label="Status"
+          testID="account-status-choice"
+          value={values.status}
+          onChange={(s) => setValues((v) => ({ ...v, status: s }))}
+          error={fields.status}
+          choices={[
+            { value: "active", label: "Active" },
+            { value: "on_hold", label: "On hold" },
+          ]}
+        />
+      ) : null}
+      <TextField label="Office notes" optional testID="account-notes" value={values.notes} onChangeText={set("notes")} error={fields.notes} multiline hint="Only office staff see these." />
+      <View style={styles.buttons}>
+        <Button label={submitLabel} icon="check" onPress={submit} busy={busy} testID="account-submit" />
+        <TextLink href={cancelHref as never} label="Cancel" />
+      </View>
+    </Card>
+  );
+}
+
+const styles = StyleSheet.create({
+  pair: { flexDirection: "row", flexWrap: "wrap", gap: space.lg },
+  half: { flexGrow: 1, flexBasis: 220 },
+  buttons: { flexDirection: "row", alignItems: "center", flexWrap: "wrap", gap: space.lg },
+});

@@ -1,0 +1,171 @@
+import React, { useState } from "react";
+import { Pressable, StyleSheet, View } from "react-native";
+import { useRouter } from "expo-router";
+import Feather from "@expo/vector-icons/Feather";
+import { Screen } from "../../ui/Screen";
+import { PageHeader } from "../../ui/PageHeader";
+import { TextField } from "../../ui/TextField";
+import { ChoiceGroup } from "../../ui/ChoiceGroup";
+import { EmptyState, ErrorState, LoadingState } from "../../ui/States";
+import { DataTable } from "../../ui/DataTable";
+import { StatusBadge } from "../../ui/Badge";
+import { LinkButton } from "../../ui/LinkButton";
+import { AppText } from "../../ui/Text";
+import { useSignedInUser } from "../../auth/useAuth";
+import { useAccountsQuery } from "../../api/accounts";
+import { useDebounced } from "../../forms/useDebounced";
+import { useIsWide } from "../../shell/useIsWide";
+import { ACCOUNT_STATUS_LABELS, ACCOUNT_STATUSES, type AccountDto, type AccountStatus } from "../../../shared/schemas/accounts";
+import { colors, layout, radii, space } from "../../theme";
+
+type StatusFilter = AccountStatus | "all";
+
+const FILTERS: { value: StatusFilter; label: string }[] = [
+  { value: "all", label: "All" },
+  ...ACCOUNT_STATUSES.map((s) => ({ value: s, label: ACCOUNT_STATUS_LABELS[s] })),
+];
+
+const buyersLabel = (n: number) => (n === 1 ? "1 buyer" : `${n} buyers`);
+
+/** Customer accounts: search, filter by status, open one. The owner can add accounts. */
+export function AccountsListScreen() {
+  const user = useSignedInUser();
+  const isOwner = user.role === "owner";
+  const wide = useIsWide();
+  const router = useRouter();
+  const [q, setQ] = useState("");
+  const [status, setStatus] = useState<StatusFilter>("all");
+  const search = useDebounced(q.trim());
+  const accounts = useAccountsQuery({ q: search || undefined, status: status === "all" ? undefined : status });
+  const filtered = !!search || status !== "all";
+  const open = (a: AccountDto) => router.push(`/office/accounts/${a.id}`);
+
+  return (
+    <Screen testID="accounts-screen">
+      <PageHeader
+        title="Accounts"
+        subtitle="The cafés and shops that order from the bakery."
+        actions={isOwner ? <LinkButton href="/office/accounts/new" label="New account" icon="plus" testID="new-account" /> : null}
+      />
+      <View style={[styles.filters, wide && styles.filtersWide]}>
+        <View style={wide ? styles.searchWide : undefined}>
+          <TextField
+            label="Search accounts"
+            placeholder="Business, contact, e-mail or address"
+            value={q}
+            onChangeText={setQ}
+            testID="accounts-search"
+            autoCapitalize="none"
+            autoCorrect={false}
+            returnKeyType="search"
+          />
+        </View>
+        <ChoiceGroup label="Status" choices={FILTERS} value={status} onChange={setStatus} testID="accounts-status" />
+      </View>
+
+      {accounts.isPending ? (
+        <LoadingState label="Loading accounts…" />
+      ) : accounts.isError ? (
+        <ErrorState error={accounts.error} title="Accounts didn't load" onRetry={() => accounts.refetch()} retrying={accounts.isFetching} testID="accounts-error" />
+      ) : accounts.data.length === 0 ? (
+        filtered ? (
+          <EmptyState icon="search" title="No accounts match" message="Try other words, or show all statuses." testID="accounts-empty" />
+        ) : (
+          <EmptyState
+            icon="briefcase"
+            title="No customer accounts yet"
+            message={isOwner ? "Add the first café or shop that orders from you." : "The owner hasn't added any accounts yet."}
+            action={isOwner ? <LinkButton href="/office/accounts/new" label="New account" icon="plus" /> : undefined}
+            testID="accounts-empty"
+          />
+        )
+      ) : wide ? (
+        <DataTable
+          testID="accounts-table"
+          rows={accounts.data}
+          rowKey={(a) => a.id}
+          onRowPress={open}
+          rowLabel={(a) => `${a.businessName}, ${ACCOUNT_STATUS_LABELS[a.status]}`}
+          rowTestID={(a) => `account-row-${a.id}`}
+          columns={[
+            {
+              key: "business",
+              label: "Business",
+              flex: 2.2,
+              render: (a) => (
+                <View>
+                  <AppText variant="bodyStrong" numberOfLines={1}>
+                    {a.businessName}
+                  </AppText>
+                  <AppText variant="small" color="muted" numberOfLines={1}>
+                    {a.deliveryAddress}
+                  </AppText>
+                </View>
+              ),
+            },
+            { key: "contact", label: "Contact", flex: 1.4, render: (a) => <AppText numberOfLines={1}>{a.contactName || "—"}</AppText> },
+            { key: "billing", label: "Billing e-mail", flex: 1.8, render: (a) => <AppText numberOfLines={1}>{a.billingEmail}</AppText> },
+            { key: "buyers", label: "Buyers", flex: 0.8, render: (a) => <AppText>{String(a.buyerCount)}</AppText> },
+            { key: "status", label: "Status", flex: 0.9, render: (a) => <StatusBadge status={a.status} /> },
+          ]}
+        />
+      ) : (
+        <View style={styles.cards} testID="accounts-list">
+          {accounts.data.map((a) => (
+            <Pressable
+              key={a.id}
+              onPress={() => open(a)}
+              accessibilityRole="button"
+              accessibilityLabel={`${a.businessName}, ${ACCOUNT_STATUS_LABELS[a.status]}`}
+              testID={`account-row-${a.id}`}
+              style={({ pressed }) => [styles.card, pressed && styles.cardPressed]}
+            >
+              <View style={styles.cardText}>
+                <View style={styles.cardTop}>
+                  <AppText variant="bodyStrong" style={styles.flex}>
+                    {a.businessName}
+                  </AppText>
+                  <StatusBadge status={a.status} />
+                </View>
+                <AppText variant="small" color="muted" numberOfLines={2}>
+                  {a.deliveryAddress}
+                </AppText>
+                <AppText variant="small" color="muted">
+                  {[a.contactName, buyersLabel(a.buyerCount)].filter(Boolean).join(" · ")}
+                </AppText>
+              </View>
+              <Feather name="chevron-right" size={20} color={colors.muted} />
+            </Pressable>
+          ))}
+        </View>
+      )}
+      {accounts.data && accounts.data.length > 0 ? (
+        <AppText variant="small" color="muted" testID="accounts-count">
+          {accounts.data.length === 1 ? "1 account" : `${accounts.data.length} accounts`}
+        </AppText>
+      ) : null}
+    </Screen>
+  );
+}
+
+const styles = StyleSheet.create({
+  filters: { gap: space.md },
+  filtersWide: { flexDirection: "row", alignItems: "flex-end", gap: space.xl },
+  searchWide: { flex: 1, maxWidth: 420 },
+  cards: { gap: space.sm },
+  card: {
+    minHeight: layout.minTouch,
+    flexDirection: "row",
+    alignItems: "center",
+    gap: space.md,
+    padding: space.lg,
+    backgroundColor: colors.surface,
+    borderRadius: radii.lg,
+    borderWidth: 1,
+    borderColor: colors.border,
+  },
+  cardPressed: { backgroundColor: colors.rowHover },
+  cardText: { flex: 1, gap: space.xxs },
+  cardTop: { flexDirection: "row", alignItems: "center", gap: space.sm },
+  flex: { flex: 1 },
+});

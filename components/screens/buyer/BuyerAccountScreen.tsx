@@ -1,0 +1,61 @@
+import React from "react";
+import { Screen } from "../../ui/Screen";
+import { PageHeader } from "../../ui/PageHeader";
+import { Card } from "../../ui/Card";
+import { DetailList } from "../../ui/DetailList";
+import { EmptyState, ErrorState, LoadingState } from "../../ui/States";
+import { Notice } from "../../ui/FormError";
+import { StatusBadge } from "../../ui/Badge";
+import { AppText } from "../../ui/Text";
+import { useSignedInUser } from "../../auth/useAuth";
+import { useAccountQuery } from "../../api/accounts";
+import { accountStatusNote } from "./BuyerHome";
+import { formatDate } from "../../format";
+
+/** Everything the bakery has on file for the buyer's account (office notes stay in the office). */
+export function BuyerAccountScreen() {
+  const user = useSignedInUser();
+  const account = useAccountQuery(user.accountId);
+
+  if (!user.accountId) {
+    return (
+      <Screen narrow testID="buyer-account">
+        <PageHeader title="Account" />
+        <EmptyState icon="link" title="No customer account yet" message="Ask the bakery to link your sign-in to your café's account." />
+      </Screen>
+    );
+  }
+  return (
+    <Screen narrow testID="buyer-account">
+      {account.isPending ? (
+        <LoadingState label="Loading your account…" />
+      ) : account.isError ? (
+        <>
+          <PageHeader title="Account" />
+          <ErrorState error={account.error} onRetry={() => account.refetch()} retrying={account.isFetching} />
+        </>
+      ) : (
+        <>
+          <PageHeader overline="Account" title={account.data.businessName} />
+          {accountStatusNote(account.data) ? <Notice tone="info" message={accountStatusNote(account.data) ?? ""} /> : null}
+          <Card title="Delivery and billing" action={<StatusBadge status={account.data.status} />}>
+            <DetailList
+              items={[
+                { label: "Business", value: account.data.businessName },
+                { label: "Delivery address", value: account.data.deliveryAddress },
+                { label: "Contact name", value: account.data.contactName },
+                { label: "Contact phone", value: account.data.contactPhone },
+                { label: "Billing e-mail", value: account.data.billingEmail },
+                { label: "People ordering", value: String(account.data.buyerCount) },
+                { label: "Customer since", value: formatDate(account.data.createdAt) },
+              ]}
+            />
+          </Card>
+          <AppText variant="small" color="muted">
+            Something out of date? Tell the bakery and they&apos;ll update it.
+          </AppText>
+        </>
+      )}
+    </Screen>
+  );
+}

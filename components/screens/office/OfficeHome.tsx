@@ -1,0 +1,69 @@
+import React from "react";
+import { StyleSheet, View } from "react-native";
+import { Screen } from "../../ui/Screen";
+import { PageHeader } from "../../ui/PageHeader";
+import { Card } from "../../ui/Card";
+import { StatTile } from "../../ui/StatTile";
+import { ErrorState, LoadingState } from "../../ui/States";
+import { LinkButton } from "../../ui/LinkButton";
+import { AppText } from "../../ui/Text";
+import { useSignedInUser } from "../../auth/useAuth";
+import { useOfficeSummaryQuery } from "../../api/office";
+import { useBakeryQuery } from "../../api/bakery";
+import { firstName, formatBakeDay } from "../../format";
+import { useIsWide } from "../../shell/useIsWide";
+import { space } from "../../theme";
+
+/** The office's home: how many accounts and people there are, and the way to each list. */
+export function OfficeHome() {
+  const user = useSignedInUser();
+  const wide = useIsWide();
+  const isOwner = user.role === "owner";
+  const summary = useOfficeSummaryQuery();
+  const bakery = useBakeryQuery();
+
+  const subtitle = bakery.data
+    ? `${bakery.data.name} · ${formatBakeDay(bakery.data.today, bakery.data.now, bakery.data.timeZone)}`
+    : undefined;
+
+  return (
+    <Screen testID="office-home">
+      <PageHeader overline={`Welcome back, ${firstName(user.name)}`} title="Office" subtitle={subtitle} testID="office-home-title" />
+      {summary.isPending ? (
+        <LoadingState label="Counting accounts and people…" />
+      ) : summary.isError ? (
+        <ErrorState error={summary.error} onRetry={() => summary.refetch()} retrying={summary.isFetching} />
+      ) : (
+        <View style={[styles.grid, wide && styles.gridWide]}>
+          <Card title="Customer accounts" style={styles.cell} testID="office-accounts-card">
+            <View style={styles.tiles}>
+              <StatTile label="Active" value={summary.data.accounts.active} testID="count-accounts-active" />
+              <StatTile label="On hold" value={summary.data.accounts.onHold} testID="count-accounts-on-hold" />
+              <StatTile label="Closed" value={summary.data.accounts.closed} testID="count-accounts-closed" />
+            </View>
+            <AppText color="muted">{`${summary.data.accounts.total} accounts in all.`}</AppText>
+            <LinkButton href="/office/accounts" label="Open accounts" icon="arrow-right" testID="office-open-accounts" />
+          </Card>
+          {isOwner ? (
+            <Card title="People" style={styles.cell} testID="office-people-card">
+              <View style={styles.tiles}>
+                <StatTile label="Active sign-ins" value={summary.data.users.active} testID="count-users-active" />
+                <StatTile label="Turned off" value={summary.data.users.disabled} testID="count-users-disabled" />
+                <StatTile label="Invitations waiting" value={summary.data.users.pendingInvitations} testID="count-invitations" />
+              </View>
+              <AppText color="muted">{`${summary.data.users.total} people in all.`}</AppText>
+              <LinkButton href="/office/people" label="Open people" icon="arrow-right" testID="office-open-people" />
+            </Card>
+          ) : null}
+        </View>
+      )}
+    </Screen>
+  );
+}
+
+const styles = StyleSheet.create({
+  grid: { gap: space.lg },
+  gridWide: { flexDirection: "row", alignItems: "flex-start" },
+  cell: { flex: 1 },
+  tiles: { flexDirection: "row", flexWrap: "wrap", gap: space.sm },
+});

@@ -1,0 +1,184 @@
+import React, { useState } from "react";
+import { StyleSheet, View } from "react-native";
+import { Screen } from "../../ui/Screen";
+import { PageHeader } from "../../ui/PageHeader";
+import { Card } from "../../ui/Card";
+import { TextField } from "../../ui/TextField";
+import { Button } from "../../ui/Button";
+import { LinkButton } from "../../ui/LinkButton";
+import { FormError, Notice } from "../../ui/FormError";
+import { EmptyState, ErrorState, LoadingState } from "../../ui/States";
+import { RoleBadge } from "../../ui/Badge";
+import { AppText } from "../../ui/Text";
+import { useSignedInUser } from "../../auth/useAuth";
+import { useUsersQuery } from "../../api/users";
+import { useInvitationsQuery, useRevokeInvitationMutation } from "../../api/invitations";
+import { messageOf } from "../../api/client";
+import { useDebounced } from "../../forms/useDebounced";
+import { formatDateTime } from "../../format";
+import { useIsWide } from "../../shell/useIsWide";
+import type { InvitationDto } from "../../../shared/schemas/users";
+import { UserRow } from "./UserRow";
+import { colors, layout, radii, space } from "../../theme";
+
+/** The owner's people desk: everyone with a sign-in, waiting invitations, and the way to invite. */
+export function PeopleScreen({ invited }: { invited?: string }) {
+  const me = useSignedInUser();
+  const wide = useIsWide();
+  const [q, setQ] = useState("");
+  const search = useDebounced(q.trim());
+  const users = useUsersQuery({ q: search || undefined });
+
+  return (
+    <Screen testID="people-screen">
+      <PageHeader
+        title="People"
+        subtitle="Everyone who signs in to Panwise: bakery staff and café buyers."
+        actions={<LinkButton href="/office/people/invite" label="Invite someone" icon="user-plus" testID="invite-someone" />}
+      />
+      {invited ? <Notice message={`Invitation sent to ${invited}.`} testID="invited-notice" /> : null}
+
+      <Invitations wide={wide} />
+
+      <View style={styles.section}>
+        <View style={[styles.searchRow, wide && styles.searchRowWide]}>
+          <AppText variant="heading" accessibilityRole="header" aria-level={2}>
+            Sign-ins
+          </AppText>
+          <View style={wide ? styles.searchWide : undefined}>
+            <TextField
+              label="Search people"
+              placeholder="Name, e-mail or account"
+              value={q}
+              onChangeText={setQ}
+              testID="people-search"
+              autoCapitalize="none"
+              autoCorrect={false}
+              returnKeyType="search"
+            />
+          </View>
+        </View>
+        {users.isPending ? (
+          <LoadingState label="Loading people…" />
+        ) : users.isError ? (
+          <ErrorState error={users.error} title="People didn't load" onRetry={() => users.refetch()} retrying={users.isFetching} testID="people-error" />
+        ) : users.data.length === 0 ? (
+          <EmptyState icon="users" title={search ? "No one matches" : "No one here yet"} message={search ? "Try a name, an e-mail or a café." : undefined} testID="people-empty" />
+        ) : wide ? (
+          <View style={styles.table} testID="people-table">
+            <View style={styles.tableHead}>
+              {[
+                ["Person", 2.2],
+                ["Role", 1.4],
+                ["Sign-in", 0.9],
+                ["Last signed in", 1.2],
+                ["", 2],
+              ].map(([label, flex]) => (
+                <View key={String(label) || "actions"} style={{ flex: Number(flex) }}>
+                  <AppText variant="overline" color="muted">
+                    {String(label)}
+                  </AppText>
+                </View>
+              ))}
+            </View>
+            {users.data.map((u, i) => (
+              <View key={u.id} style={i > 0 ? styles.divider : undefined}>
+                <UserRow user={u} isSelf={u.id === me.id} wide />
+              </View>
+            ))}
+          </View>
+        ) : (
+          <View style={styles.cards} testID="people-list">
+            {users.data.map((u) => (
+              <UserRow key={u.id} user={u} isSelf={u.id === me.id} wide={false} />
+            ))}
+          </View>
+        )}
+      </View>
+    </Screen>
+  );
+}
+
+function Invitations({ wide }: { wide: boolean }) {
+  const invitations = useInvitationsQuery();
+  if (invitations.isPending) return <LoadingState label="Loading invitations…" testID="invitations-loading" />;
+  if (invitations.isError) {
+    return <ErrorState error={invitations.error} title="Invitations didn't load" onRetry={() => invitations.refetch()} retrying={invitations.isFetching} testID="invitations-error" />;
+  }
+  if (invitations.data.length === 0) return null;
+  return (
+    <Card title={`Waiting invitations (${invitations.data.length})`} testID="invitations-card">
+      <View>
+        {invitations.data.map((inv, i) => (
+          <InvitationLine key={inv.id} invitation={inv} first={i === 0} wide={wide} />
+        ))}
+      </View>
+    </Card>
+  );
+}
+
+function InvitationLine({ invitation, first, wide }: { invitation: InvitationDto; first: boolean; wide: boolean }) {
+  const revoke = useRevokeInvitationMutation();
+  const [confirming, setConfirming] = useState(false);
+  return (
+    <View style={[styles.invite, !first && styles.divider]} testID={`invitation-${invitation.id}`}>
+      <View style={[styles.inviteLine, wide && styles.inviteLineWide]}>
+        <View style={styles.inviteWho}>
+          <AppText variant="bodyStrong" numberOfLines={1}>
+            {invitation.email}
+          </AppText>
+          <View style={styles.inviteMeta}>
+            <RoleBadge role={invitation.role} />
+            {invitation.accountName ? (
+              <AppText variant="small" color="muted">
+                {invitation.accountName}
+              </AppText>
+            ) : null}
+            <AppText variant="small" color="muted">{`Link works until ${formatDateTime(invitation.expiresAt)}`}</AppText>
+          </View>
+        </View>
+        {confirming ? (
+          <View style={styles.inviteActions}>
+            <Button label="Yes, revoke" small variant="danger" busy={revoke.isPending} onPress={() => revoke.mutate(invitation.id)} testID={`invitation-${invitation.id}-revoke-confirm`} />
+            <Button label="Keep" small variant="ghost" onPress={() => setConfirming(false)} />
+          </View>
+        ) : (
+          <Button
+            label="Revoke"
+            small
+            variant="secondary"
+            icon="x"
+            onPress={() => setConfirming(true)}
+            testID={`invitation-${invitation.id}-revoke`}
+            accessibilityLabel={`Revoke the invitation for ${invitation.email}`}
+          />
+        )}
+      </View>
+      <FormError message={revoke.isError ? messageOf(revoke.error) : null} />
+    </View>
+  );
+}
+
+const styles = StyleSheet.create({
+  section: { gap: space.md },
+  searchRow: { gap: space.md },
+  searchRowWide: { flexDirection: "row", alignItems: "flex-end", justifyContent: "space-between" },
+  searchWide: { width: 380 },
+  table: { backgroundColor: colors.surface, borderRadius: radii.lg, borderWidth: 1, borderColor: colors.border, overflow: "hidden" },
+  tableHead: {
+    flexDirection: "row",
+    gap: space.md,
+    backgroundColor: colors.sunken,
+    paddingHorizontal: space.md,
+    minHeight: layout.minTouch,
+    alignItems: "center",
+  },
+  divider: { borderTopWidth: 1, borderTopColor: colors.border },
+  cards: { gap: space.sm },
+  invite: { paddingVertical: space.md, gap: space.sm },
+  inviteLine: { gap: space.sm },
+  inviteLineWide: { flexDirection: "row", alignItems: "center", justifyContent: "space-between" },
+  inviteWho: { flexShrink: 1, gap: space.xs },
+  inviteMeta: { flexDirection: "row", flexWrap: "wrap", alignItems: "center", gap: space.sm },
+  inviteActions: { flexDirection: "row", gap: space.sm },
+});

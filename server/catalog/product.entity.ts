@@ -1,0 +1,73 @@
+import { Column, CreateDateColumn, Entity, PrimaryGeneratedColumn, UpdateDateColumn } from "typeorm";
+
+@Entity({ name: "product" })
+export class Product {
+  @PrimaryGeneratedColumn({ type: "int" })
+  id: number;
+
+  @Column({ type: "varchar", length: 120 })
+  name: string;
+
+  @Column({ type: "text" })
+  description: string;
+
+  /** File name under .data/uploads (generated), or null. */
+  @Column({ type: "varchar", length: 80, nullable: true })
+  photoFile: string | null;
+
+  @Column({ type: "varchar", length: 60 })
+  saleUnit: string;
+
+  @Column({ type: "int" })
+  piecesPerUnit: number;
+
+  @Column({ type: "int" })
+  pieceGrams: number;
+
+  @Column({ type: "varchar", length: 60 })
+  panName: string;
+
+  @Column({ type: "int" })
+  panLengthMm: number;
+
+  @Column({ type: "int" })
+  panWidthMm: number;
+
+  @Column({ type: "int" })
+  unitsPerPan: number;
+
+  @Column({ type: "int" })
+  priceCents: number;
+
+  @Column({ type: "int", default: 1 })
+  minQuantity: number;
+
+  @Column({ type: "int", default: 100 })
+  maxQuantity: number;
+
+  /** Overrides the bakery's lead days when larger; null = bakery default. */
+  @Column({ type: "int", nullable: true })
+  leadDays: number | null;
+
+  /** Allergen codes, comma-separated, from the fixed list in shared/allergens.ts. */
+  @Column({ type: "varchar", length: 300, default: "" })
+  allergens: string;
+
+  @Column({ type: "varchar", length: 300, default: "" })
+  mayContain: string;
+
+  @Column({ type: "boolean", default: true })
+  active: boolean;
+
+  @Column({ type: "int", nullable: true })
+  formulaId: number | null;
+
+  @Column({ type: "int", default: 0 })
+  sortOrder: number;
+
+  @CreateDateColumn({ type: "datetime", precision: 3, default: () => "CURRENT_TIMESTAMP(3)" })
+  createdAt: Date;
+
+  @UpdateDateColumn({ type: "datetime", precision: 3, default: () => "CURRENT_TIMESTAMP(3)", onUpdate: "CURRENT_TIMESTAMP(3)" })
+  updatedAt: Date;
+}

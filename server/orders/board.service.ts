@@ -1,0 +1,48 @@
+import { stringify } from "csv-stringify/sync";
+import { toDecimal } from "../../shared/money";
+import type { AppContext } from "../http/context";
+import { Product } from "../catalog/product.entity";
+import { CustomerAccount } from "../accounts/account.entity";
+
+export interface BoardDto {
+  date: string;
+  products: { id: number; name: string; saleUnit: string; total: number }[];
+  rows: { accountId: number; accountName: string; orderId: number; status: string; poNumber: string | null; quantities: Record<number, number>; totalCents: number }[];
+  totalCents: number;
+}
+
+/** Accounts × products for one delivery date, summed in SQL. Cancelled orders are left out. */
+export async function board(ctx: AppContext, date: string): Promise<BoardDto> {
+  const cells: { orderId: number; accountId: number; status: string; poNumber: string | null; totalCents: number; productId: number; qty: string }[] = await ctx.dataSource.query(
+    `SELECT o.id AS orderId, o.accountId, o.status, o.poNumber, o.totalCents, l.productId, SUM(l.quantity) AS qty
+       FROM customer_order o JOIN order_line l ON l.orderId = o.id
+      WHERE o.deliveryDate = ? AND o.status <> 'cancelled'
+      GROUP BY o.id, l.productId ORDER BY o.accountId`, [date]);
+  const productIds = [...new Set(cells.map((c) => c.productId))];
+  const products = productIds.length ? await ctx.dataSource.getRepository(Product).createQueryBuilder("p").whereInIds(productIds).orderBy("p.sortOrder").addOrderBy("p.name").getMany() : [];
+  const accounts = new Map((await ctx.dataSource.getRepository(CustomerAccount).find()).map((a) => [a.id, a.businessName]));
+  const rows = new Map<number, BoardDto["rows"][number]>();
+  const totals = new Map<number, number>();
+  for (const c of cells) {
+    const row = rows.get(c.orderId) ?? { accountId: c.accountId, accountName: accounts.get(c.accountId) ?? "", orderId: Number(c.orderId), status: c.status, poNumber: c.poNumber, quantities: {}, totalCents: Number(c.totalCents) };
+    row.quantities[c.productId] = Number(c.qty);
+    rows.set(c.orderId, row);
+    totals.set(c.productId, (totals.get(c.productId) ?? 0) + Number(c.qty));
+  }
+  const list = [...rows.values()].sort((a, b) => a.accountName.localeCompare(b.accountName));
+  return {
+    date,
+    products: products.map((p) => ({ id: p.id, name: p.name, saleUnit: p.saleUnit, total: totals.get(p.id) ?? 0 })),
+    rows: list,
+    totalCents: list.reduce((s, r) => s + r.totalCents, 0),
+  };
+}
+
+/** The board as CSV (RFC 4180 through csv-stringify): one row per account, a column per product, a totals row. */
+export function boardCsv(b: BoardDto, currency: string): string {
+  const header = ["Delivery date", "Account", "Status", "PO number", ...b.products.map((p) => `${p.name} (${p.saleUnit})`), `Order total (${currency})`];
+  const money = (c: number) => toDecimal(c, currency);
+  const rows = b.rows.map((r) => [b.date, r.accountName, r.status, r.poNumber ?? "", ...b.products.map((p) => r.quantities[p.id] ?? 0), money(r.totalCents)]);
+  const totals = [b.date, "Total", "", "", ...b.products.map((p) => p.total), money(b.totalCents)];
+  return stringify([header, ...rows, totals]);
+}

@@ -1,0 +1,56 @@
+import crypto from "node:crypto";
+import { MoreThanOrEqual, Not } from "typeorm";
+import ical from "ical-generator";
+import type { AppContext } from "../http/context";
+import { notFound } from "../http/errors";
+import { CustomerAccount } from "../accounts/account.entity";
+import { Order } from "./order.entity";
+import { orderDtos } from "./orders.service";
+import { getBakery } from "../bakery/bakery.service";
+import { addDays, localToday } from "../../shared/calendar";
+import { formatMoney } from "../../shared/money";
+
+export const feedUrl = (ctx: AppContext, token: string) => `${ctx.config.publicUrl}/api/feeds/${token}.ics`;
+
+export async function getFeed(ctx: AppContext, accountId: number): Promise<{ url: string | null }> {
+  const a = await ctx.dataSource.getRepository(CustomerAccount).findOneBy({ id: accountId });
+  if (!a) throw notFound("That account");
+  return { url: a.feedToken ? feedUrl(ctx, a.feedToken) : null };
+}
+
+/** A new unguessable token: the old URL stops working at once. */
+export async function rotateFeed(ctx: AppContext, accountId: number): Promise<{ url: string }> {
+  const token = crypto.randomBytes(24).toString("base64url");
+  await ctx.dataSource.getRepository(CustomerAccount).update({ id: accountId }, { feedToken: token });
+  return { url: feedUrl(ctx, token) };
+}
+
+export async function revokeFeed(ctx: AppContext, accountId: number): Promise<void> {
+  await ctx.dataSource.getRepository(CustomerAccount).update({ id: accountId }, { feedToken: null });
+}
+
+/** RFC 5545 calendar of the account's deliveries from a week ago on: one all-day event per delivery. */
+export async function renderFeed(ctx: AppContext, token: string): Promise<string> {
+  if (!/^[A-Za-z0-9_-]{20,64}$/.test(token)) throw notFound("That calendar");
+  const account = await ctx.dataSource.getRepository(CustomerAccount).findOneBy({ feedToken: token });
+  if (!account) throw notFound("That calendar");
+  const bakery = await getBakery(ctx);
+  const from = addDays(localToday(ctx.clock.now(), bakery.timeZone), -7);
+  const orders = await ctx.dataSource.getRepository(Order).find({ where: { accountId: account.id, deliveryDate: MoreThanOrEqual(from), status: Not("cancelled") }, order: { deliveryDate: "ASC" } });
+  const dtos = await orderDtos(ctx, orders);
+  const cal = ical({ name: `${bakery.name} deliveries — ${account.businessName}`, prodId: { company: "Panwise", product: "deliveries", language: "EN" }, timezone: bakery.timeZone });
+  for (const o of dtos) {
+    const start = new Date(`${o.deliveryDate}T00:00:00Z`);
+    cal.createEvent({
+      id: `order-${o.id}@panwise`,
+      start,
+      end: new Date(start.getTime() + 24 * 3600 * 1000),
+      allDay: true,
+      summary: `${bakery.name} delivery (${o.lines.reduce((s, l) => s + l.quantity, 0)} items)`,
+      description: [...o.lines.map((l) => `${l.quantity} × ${l.productName} (${l.saleUnit})`), `Total ${formatMoney(o.totalCents, bakery.currency)}`, `Status: ${o.status}`].join("\n"),
+      location: account.deliveryAddress,
+      stamp: o.updatedAt ? new Date(o.updatedAt) : new Date(),
+    });
+  }
+  return cal.toString();
+}

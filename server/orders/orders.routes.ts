@@ -1,0 +1,106 @@
+import { Router } from "express";
+import { z } from "zod";
+import type { AppContext } from "../http/context";
+import { parse } from "../http/errors";
+import { allow, currentUser } from "../http/auth";
+import { idSchema } from "../../shared/schemas/common";
+import { dateSchema } from "../../shared/schemas/calendar";
+import { orderCreateSchema, orderListQuerySchema, orderUpdateSchema, standingOrderSchema } from "../../shared/schemas/orders";
+import { resolveAccount } from "../calendar/calendar.service";
+import { getBakery } from "../bakery/bakery.service";
+import * as orders from "./orders.service";
+import * as standing from "./standing.service";
+import * as feed from "./feed.service";
+import { board, boardCsv } from "./board.service";
+
+const idParam = z.object({ id: idSchema });
+const dateQuery = z.object({ date: dateSchema });
+const accountQuery = z.object({ accountId: z.coerce.number().int().positive().optional() });
+const ORDERING = ["buyer", "owner", "bookkeeper"] as const;
+
+export function ordersRoutes(ctx: AppContext): Router {
+  const r = Router();
+
+  r.get("/board", allow("owner", "bookkeeper", "baker"), async (req, res) => {
+    const { date } = parse(dateQuery, req.query);
+    res.json({ board: await board(ctx, date) });
+  });
+  r.get("/board.csv", allow("owner", "bookkeeper", "baker"), async (req, res) => {
+    const { date } = parse(dateQuery, req.query);
+    const bakery = await getBakery(ctx);
+    res.type("text/csv; charset=utf-8").attachment(`orders-${date}.csv`).send(boardCsv(await board(ctx, date), bakery.currency));
+  });
+
+  r.get("/", allow(...ORDERING, "baker"), async (req, res) => {
+    res.json({ orders: await orders.listOrders(ctx, currentUser(req), parse(orderListQuerySchema, req.query)) });
+  });
+  r.get("/:id", allow(...ORDERING, "baker"), async (req, res) => {
+    const { id } = parse(idParam, req.params);
+    res.json({ order: await orders.getOrder(ctx, currentUser(req), id) });
+  });
+  r.post("/", allow(...ORDERING), async (req, res) => {
+    const user = currentUser(req);
+    const result = await orders.withIdempotency(ctx, user.id, req.get("idempotency-key") || undefined, req.body, async () => {
+      const input = parse(orderCreateSchema, req.body);
+      return { status: 201, body: { order: await orders.createOrder(ctx, user, input) } };
+    });
+    if (result.replayed) res.set("Idempotent-Replayed", "true");
+    res.status(result.status).json(result.body);
+  });
+  r.patch("/:id", allow(...ORDERING), async (req, res) => {
+    const { id } = parse(idParam, req.params);
+    const input = parse(orderUpdateSchema, req.body);
+    res.json({ order: await orders.updateOrder(ctx, currentUser(req), id, input) });
+  });
+  r.delete("/:id", allow(...ORDERING), async (req, res) => {
+    const { id } = parse(idParam, req.params);
+    res.json({ order: await orders.cancelOrder(ctx, currentUser(req), id) });
+  });
+  return r;
+}
+
+export function standingOrderRoutes(ctx: AppContext): Router {
+  const r = Router();
+  r.get("/", allow(...ORDERING), async (req, res) => {
+    const { accountId } = parse(accountQuery, req.query);
+    res.json({ standingOrder: await standing.getStandingOrder(ctx, currentUser(req), accountId) });
+  });
+  r.put("/", allow("buyer", "owner"), async (req, res) => {
+    const input = parse(standingOrderSchema, req.body);
+    res.json({ standingOrder: await standing.putStandingOrder(ctx, currentUser(req), input) });
+  });
+  /** The owner's "make the orders now" button; the same job also runs on a schedule. */
+  r.post("/materialise", allow("owner"), async (_req, res) => {
+    res.json({ result: await standing.materialiseAll(ctx) });
+  });
+  return r;
+}
+
+export function feedRoutes(ctx: AppContext): Router {
+  const r = Router();
+  r.get("/", allow("buyer", "owner"), async (req, res) => {
+    const account = await resolveAccount(ctx, currentUser(req), parse(accountQuery, req.query).accountId);
+    res.json(await feed.getFeed(ctx, account.id));
+  });
+  r.post("/", allow("buyer", "owner"), async (req, res) => {
+    const account = await resolveAccount(ctx, currentUser(req), parse(accountQuery, req.query).accountId);
+    res.status(201).json(await feed.rotateFeed(ctx, account.id));
+  });
+  r.delete("/", allow("buyer", "owner"), async (req, res) => {
+    const account = await resolveAccount(ctx, currentUser(req), parse(accountQuery, req.query).accountId);
+    await feed.revokeFeed(ctx, account.id);
+    res.status(204).end();
+  });
+  return r;
+}
+
+/** The public feed itself: the unguessable token is the only key. */
+export function publicFeedRoutes(ctx: AppContext): Router {
+  const r = Router();
+  r.get("/:file", async (req, res) => {
+    const token = String(req.params.file).replace(/\.ics$/, "");
+    const body = await feed.renderFeed(ctx, token);
+    res.type("text/calendar; charset=utf-8").set("Cache-Control", "private, max-age=300").send(body);
+  });
+  return r;
+}

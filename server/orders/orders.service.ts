@@ -1,0 +1,304 @@
+import crypto from "node:crypto";
+import { In, type EntityManager } from "typeorm";
+import { DateTime } from "luxon";
+import type { AppContext } from "../http/context";
+import { HttpError, badRequest, notFound } from "../http/errors";
+import { Order, OrderLine, IdempotencyRecord } from "./order.entity";
+import { Product } from "../catalog/product.entity";
+import { CustomerAccount } from "../accounts/account.entity";
+import { User } from "../users/user.entity";
+import { pricingFor } from "../catalog/catalog.service";
+import { loadCalendarSettings, parseWeekdays, resolveAccount } from "../calendar/calendar.service";
+import { getBakery } from "../bakery/bakery.service";
+import { cutoffFor, dateStatus, formatLocal, REASON_TEXT, type CalendarSettings } from "../../shared/calendar";
+import { sortAllergens } from "../../shared/allergens";
+import { formatMoney } from "../../shared/money";
+import type { FieldErrors } from "../../shared/errors";
+import type { SessionUser } from "../../shared/schemas/auth";
+import type { OrderDto, OrderStatus } from "../../shared/schemas/orders";
+import { orderMail } from "../mail/templates";
+
+type Settings = CalendarSettings;
+interface LineInput { productId: number; quantity: number }
+
+// ---- reading -------------------------------------------------------------------------------
+
+export async function orderDtos(ctx: AppContext, orders: Order[], m: EntityManager = ctx.dataSource.manager): Promise<OrderDto[]> {
+  if (orders.length === 0) return [];
+  const settings = await loadCalendarSettings(ctx, m);
+  const lines = await m.getRepository(OrderLine).find({ where: { orderId: In(orders.map((o) => o.id)) }, order: { id: "ASC" } });
+  const products = new Map((await m.getRepository(Product).findBy({ id: In([...new Set(lines.map((l) => l.productId))].concat([0])) })).map((p) => [p.id, p]));
+  const accounts = new Map((await m.getRepository(CustomerAccount).findBy({ id: In([...new Set(orders.map((o) => o.accountId))]) })).map((a) => [a.id, a]));
+  return orders.map((o) => {
+    const own = lines.filter((l) => l.orderId === o.id);
+    return {
+      id: o.id,
+      accountId: o.accountId,
+      accountName: accounts.get(o.accountId)?.businessName ?? "",
+      deliveryDate: o.deliveryDate,
+      status: o.status,
+      poNumber: o.poNumber,
+      note: o.note,
+      lines: own.map((l) => {
+        const p = products.get(l.productId);
+        return {
+          productId: l.productId, productName: l.productName, saleUnit: l.saleUnit, quantity: l.quantity,
+          unitPriceCents: l.unitPriceCents, lineTotalCents: l.lineTotalCents,
+          allergens: sortAllergens((p?.allergens ?? "").split(",").filter(Boolean)), mayContain: p?.mayContain ?? "",
+        };
+      }),
+      totalCents: o.totalCents,
+      cutoffAt: orderCutoff(o.deliveryDate, settings, own.map((l) => products.get(l.productId)).filter((p): p is Product => !!p)).toISO()!,
+      source: o.source,
+      editedByHand: o.editedByHand,
+      createdAt: o.createdAt.toISOString(),
+      updatedAt: o.updatedAt.toISOString(),
+    };
+  });
+}
+
+/** The earliest of the date's cut-off and every product's own cut-off. */
+export function orderCutoff(date: string, settings: Settings, products: Product[]): DateTime {
+  return products.reduce((min, p) => {
+    const c = cutoffFor(date, settings, p.leadDays);
+    return c < min ? c : min;
+  }, cutoffFor(date, settings));
+}
+
+export async function getOrder(ctx: AppContext, actor: SessionUser, id: number): Promise<OrderDto> {
+  const o = await ctx.dataSource.getRepository(Order).findOneBy({ id });
+  if (!o || (actor.role === "buyer" && o.accountId !== actor.accountId)) throw notFound("That order");
+  return (await orderDtos(ctx, [o]))[0];
+}
+
+export async function listOrders(ctx: AppContext, actor: SessionUser, q: { from?: string; to?: string; accountId?: number; status?: OrderStatus }): Promise<OrderDto[]> {
+  const qb = ctx.dataSource.getRepository(Order).createQueryBuilder("o").orderBy("o.deliveryDate", "ASC").addOrderBy("o.id", "ASC");
+  if (actor.role === "buyer") qb.andWhere("o.accountId = :a", { a: actor.accountId });
+  else if (q.accountId) qb.andWhere("o.accountId = :a", { a: q.accountId });
+  if (q.from) qb.andWhere("o.deliveryDate >= :from", { from: q.from });
+  if (q.to) qb.andWhere("o.deliveryDate <= :to", { to: q.to });
+  if (q.status) qb.andWhere("o.status = :s", { s: q.status });
+  return orderDtos(ctx, await qb.take(1000).getMany());
+}
+
+// ---- checks shared by every write ------------------------------------------------------------
+
+function refuseIfAccountBlocked(account: CustomerAccount, bakery: { name: string; phone: string; email: string }) {
+  if (account.status === "on_hold") {
+    throw new HttpError(403, "account_on_hold", `${account.businessName} is on hold, so new orders and changes are paused. Please call ${bakery.name} on ${bakery.phone || bakery.email} to lift the hold.`);
+  }
+  if (account.status === "closed") throw new HttpError(403, "account_closed", `${account.businessName} is closed. Ask ${bakery.name} to reopen it.`);
+}
+
+function cutoffPassed(at: DateTime, tz: string, date: string): HttpError {
+  const d = DateTime.fromISO(date).toFormat("ccc d LLL");
+  return new HttpError(409, "cutoff_passed", `Orders for ${d} closed at the cut-off, ${formatLocal(at, tz)}. Call the bakery if something has gone wrong.`, undefined, { cutoffAt: at.toISO() });
+}
+
+/** Products, quantities and cut-offs for a set of lines; field errors keyed "lines.i.field". */
+async function checkLines(ctx: AppContext, m: EntityManager, lines: LineInput[], date: string, settings: Settings, existingProducts: Product[] = []) {
+  const products = new Map((await m.getRepository(Product).findBy({ id: In(lines.map((l) => l.productId).concat([0])) })).map((p) => [p.id, p]));
+  const fields: FieldErrors = {};
+  lines.forEach((l, i) => {
+    const p = products.get(l.productId);
+    if (!p) fields[`lines.${i}.productId`] = "This product does not exist.";
+    else if (!p.active) fields[`lines.${i}.productId`] = `${p.name} is no longer offered.`;
+    else if (l.quantity > p.maxQuantity) fields[`lines.${i}.quantity`] = `At most ${p.maxQuantity} ${p.saleUnit} per order.`;
+    else if (l.quantity < p.minQuantity) fields[`lines.${i}.quantity`] = `At least ${p.minQuantity} ${p.saleUnit} per order.`;
+  });
+  if (Object.keys(fields).length) throw badRequest(Object.keys(fields).length === 1 ? Object.values(fields)[0] : "Some lines need attention.", fields);
+  const now = ctx.clock.now().getTime();
+  const all = [...existingProducts, ...lines.map((l) => products.get(l.productId)!)];
+  const cutoff = orderCutoff(date, settings, all);
+  if (now >= cutoff.toMillis()) throw cutoffPassed(cutoff, settings.timeZone, date);
+  return products;
+}
+
+async function priceLines(ctx: AppContext, m: EntityManager, accountId: number, lines: LineInput[], products: Map<number, Product>) {
+  const pricing = await pricingFor(ctx, accountId, m);
+  const priced = lines.map((l) => {
+    const p = products.get(l.productId)!;
+    const unit = pricing.price(p);
+    return { productId: p.id, productName: p.name, saleUnit: p.saleUnit, quantity: l.quantity, unitPriceCents: unit, lineTotalCents: unit * l.quantity };
+  });
+  return { priced, total: priced.reduce((s, l) => s + l.lineTotalCents, 0) };
+}
+
+function refuseBelowMinimum(account: CustomerAccount, total: number, currency: string) {
+  if (total < account.minimumOrderCents) {
+    const shortfall = account.minimumOrderCents - total;
+    throw new HttpError(422, "below_minimum", `The minimum order for ${account.businessName} is ${formatMoney(account.minimumOrderCents, currency)}; add ${formatMoney(shortfall, currency)} more.`, undefined, { shortfallCents: shortfall, minimumOrderCents: account.minimumOrderCents });
+  }
+}
+
+// ---- writes ---------------------------------------------------------------------------------
+
+export interface CreateInput { deliveryDate: string; lines: LineInput[]; poNumber?: string; note?: string; accountId?: number }
+
+/** Place an order. Used by the API and by the standing-order job (source "standing"). */
+export async function createOrder(ctx: AppContext, actor: SessionUser | null, input: CreateInput, opts: { source?: "one_off" | "standing"; manager?: EntityManager; accountId?: number; skipMail?: boolean } = {}): Promise<OrderDto> {
+  const bakery = await getBakery(ctx);
+  const settings = await loadCalendarSettings(ctx);
+  const run = async (m: EntityManager) => {
+    const account = actor ? await resolveAccount(ctx, actor, input.accountId, m) : await m.getRepository(CustomerAccount).findOneByOrFail({ id: opts.accountId! });
+    // Serialise writers per account, so one date never gets two orders.
+    await m.getRepository(CustomerAccount).createQueryBuilder("a").setLock("pessimistic_write").where("a.id = :id", { id: account.id }).getOne();
+    refuseIfAccountBlocked(account, bakery);
+    const st = dateStatus(input.deliveryDate, settings, ctx.clock.now(), parseWeekdays(account.routeWeekdays));
+    if (st.reason === "past_cutoff") throw cutoffPassed(DateTime.fromISO(st.cutoffAt, { setZone: true }), settings.timeZone, input.deliveryDate);
+    if (!st.orderable) throw new HttpError(409, "date_not_orderable", `You can't order for this date: ${REASON_TEXT[st.reason!].toLowerCase()}.`, undefined, { reason: st.reason });
+    const products = await checkLines(ctx, m, input.lines, input.deliveryDate, settings);
+    const { priced, total } = await priceLines(ctx, m, account.id, input.lines, products);
+    refuseBelowMinimum(account, total, bakery.currency);
+    const orders = m.getRepository(Order);
+    const existing = await orders.findOneBy({ accountId: account.id, deliveryDate: input.deliveryDate });
+    let order: Order;
+    if (existing && existing.status !== "cancelled") {
+      throw new HttpError(409, "order_exists", "There is already an order for this date; change that one instead.", undefined, { orderId: existing.id });
+    } else if (existing) {
+      // A cancelled order for the date comes back to life with the new lines.
+      await m.getRepository(OrderLine).delete({ orderId: existing.id });
+      await orders.update({ id: existing.id }, { status: "open", poNumber: input.poNumber || null, note: input.note || null, totalCents: total, source: opts.source ?? "one_off", editedByHand: false, createdById: actor?.id ?? null });
+      order = (await orders.findOneBy({ id: existing.id }))!;
+    } else {
+      order = await orders.save(orders.create({ accountId: account.id, deliveryDate: input.deliveryDate, status: "open", poNumber: input.poNumber || null, note: input.note || null, totalCents: total, source: opts.source ?? "one_off", editedByHand: false, createdById: actor?.id ?? null }));
+    }
+    await m.getRepository(OrderLine).insert(priced.map((l) => ({ ...l, orderId: order.id })));
+    return (await orderDtos(ctx, [order], m))[0];
+  };
+  const dto = opts.manager ? await run(opts.manager) : await ctx.dataSource.transaction(run);
+  if (!opts.skipMail) void sendOrderMail(ctx, dto, "placed");
+  return dto;
+}
+
+/** Replace lines, PO number or note of an open order before its cut-off. */
+export async function updateOrder(ctx: AppContext, actor: SessionUser, id: number, input: { lines?: LineInput[]; poNumber?: string; note?: string }): Promise<OrderDto> {
+  const bakery = await getBakery(ctx);
+  const settings = await loadCalendarSettings(ctx);
+  const dto = await ctx.dataSource.transaction(async (m) => {
+    const order = await lockOrderForWrite(ctx, m, actor, id, settings, bakery);
+    const existingLines = await m.getRepository(OrderLine).findBy({ orderId: order.id });
+    const oldProducts = await m.getRepository(Product).findBy({ id: In(existingLines.map((l) => l.productId).concat([0])) });
+    const account = await m.getRepository(CustomerAccount).findOneByOrFail({ id: order.accountId });
+    const patch: Partial<Order> = { editedByHand: order.source === "standing" ? true : order.editedByHand };
+    if (input.poNumber !== undefined) patch.poNumber = input.poNumber || null;
+    if (input.note !== undefined) patch.note = input.note || null;
+    if (input.lines) {
+      const products = await checkLines(ctx, m, input.lines, order.deliveryDate, settings, oldProducts);
+      const { priced, total } = await priceLines(ctx, m, account.id, input.lines, products);
+      refuseBelowMinimum(account, total, bakery.currency);
+      await m.getRepository(OrderLine).delete({ orderId: order.id });
+      await m.getRepository(OrderLine).insert(priced.map((l) => ({ ...l, orderId: order.id })));
+      patch.totalCents = total;
+    } else {
+      const c = orderCutoff(order.deliveryDate, settings, oldProducts);
+      if (ctx.clock.now().getTime() >= c.toMillis()) throw cutoffPassed(c, settings.timeZone, order.deliveryDate);
+    }
+    await m.getRepository(Order).update({ id: order.id }, patch);
+    return (await orderDtos(ctx, [(await m.getRepository(Order).findOneBy({ id: order.id }))!], m))[0];
+  });
+  void sendOrderMail(ctx, dto, "changed");
+  return dto;
+}
+
+export async function cancelOrder(ctx: AppContext, actor: SessionUser, id: number): Promise<OrderDto> {
+  const bakery = await getBakery(ctx);
+  const settings = await loadCalendarSettings(ctx);
+  const dto = await ctx.dataSource.transaction(async (m) => {
+    const order = await lockOrderForWrite(ctx, m, actor, id, settings, bakery);
+    const lines = await m.getRepository(OrderLine).findBy({ orderId: order.id });
+    const products = await m.getRepository(Product).findBy({ id: In(lines.map((l) => l.productId).concat([0])) });
+    const c = orderCutoff(order.deliveryDate, settings, products);
+    if (ctx.clock.now().getTime() >= c.toMillis()) throw cutoffPassed(c, settings.timeZone, order.deliveryDate);
+    await m.getRepository(Order).update({ id: order.id }, { status: "cancelled", editedByHand: order.source === "standing" ? true : order.editedByHand });
+    return (await orderDtos(ctx, [(await m.getRepository(Order).findOneBy({ id: order.id }))!], m))[0];
+  });
+  void sendOrderMail(ctx, dto, "cancelled");
+  return dto;
+}
+
+/** Load an order for a change, row-locked; lock it for baking if its date's cut-off has passed. */
+async function lockOrderForWrite(ctx: AppContext, m: EntityManager, actor: SessionUser, id: number, settings: Settings, bakery: { name: string; phone: string; email: string }): Promise<Order> {
+  const order = await m.getRepository(Order).createQueryBuilder("o").setLock("pessimistic_write").where("o.id = :id", { id }).getOne();
+  if (!order || (actor.role === "buyer" && order.accountId !== actor.accountId)) throw notFound("That order");
+  const account = await m.getRepository(CustomerAccount).findOneByOrFail({ id: order.accountId });
+  const dateCutoff = cutoffFor(order.deliveryDate, settings);
+  if (order.status === "open" && ctx.clock.now().getTime() >= dateCutoff.toMillis()) {
+    await m.getRepository(Order).update({ id: order.id }, { status: "locked" });
+    order.status = "locked";
+  }
+  if (order.status === "locked") throw cutoffPassed(dateCutoff, settings.timeZone, order.deliveryDate);
+  if (order.status !== "open") throw new HttpError(409, "order_closed", `This order is ${order.status} and can no longer be changed.`);
+  refuseIfAccountBlocked(account, bakery);
+  return order;
+}
+
+/** The scheduled job: every open order whose date's cut-off has passed becomes locked. */
+export async function lockPastCutoff(ctx: AppContext): Promise<number> {
+  const settings = await loadCalendarSettings(ctx);
+  const now = ctx.clock.now();
+  const today = DateTime.fromJSDate(now, { zone: settings.timeZone }).toISODate()!;
+  // Only dates up to today + lead days can have passed their cut-off.
+  const until = DateTime.fromISO(today).plus({ days: settings.leadDays + 1 }).toISODate()!;
+  const dates: { d: string }[] = await ctx.dataSource.query("SELECT DISTINCT deliveryDate AS d FROM customer_order WHERE status = 'open' AND deliveryDate <= ?", [until]);
+  let locked = 0;
+  for (const { d } of dates) {
+    const date = String(d).slice(0, 10);
+    if (now.getTime() >= cutoffFor(date, settings).toMillis()) {
+      const res = await ctx.dataSource.getRepository(Order).update({ deliveryDate: date, status: "open" }, { status: "locked" });
+      locked += res.affected ?? 0;
+    }
+  }
+  return locked;
+}
+
+// ---- idempotency ------------------------------------------------------------------------------
+
+/**
+ * Run a POST once per (user, Idempotency-Key): a retry with the same key and body gets the stored
+ * first answer. A concurrent twin is serialised by the account lock, finds the order already there,
+ * and then answers with the first request's stored result.
+ */
+export async function withIdempotency(ctx: AppContext, userId: number, key: string | undefined, body: unknown, exec: () => Promise<{ status: number; body: unknown }>): Promise<{ status: number; body: unknown; replayed: boolean }> {
+  if (!key) return { ...(await exec()), replayed: false };
+  if (key.length > 100) throw badRequest("The Idempotency-Key header is too long (at most 100 characters).");
+  const requestHash = crypto.createHash("sha256").update(JSON.stringify(body ?? null)).digest("hex");
+  const repo = ctx.dataSource.getRepository(IdempotencyRecord);
+  const stored = async () => {
+    const row = await repo.findOneBy({ userId, idemKey: key });
+    if (!row) return null;
+    if (row.requestHash !== requestHash) throw new HttpError(422, "idempotency_mismatch", "This Idempotency-Key was already used with a different request.");
+    return { status: row.status, body: JSON.parse(row.body), replayed: true };
+  };
+  const first = await stored();
+  if (first) return first;
+  try {
+    const result = await exec();
+    if (result.status < 300) await repo.insert({ userId, idemKey: key, requestHash, status: result.status, body: JSON.stringify(result.body) });
+    return { ...result, replayed: false };
+  } catch (err) {
+    // A concurrent twin got there first: its order_exists means "already done" — answer as it did.
+    if (err instanceof HttpError && err.code === "order_exists") {
+      for (let i = 0; i < 20; i++) {
+        const again = await stored();
+        if (again) return again;
+        await new Promise((r) => setTimeout(r, 25));
+      }
+    }
+    throw err;
+  }
+}
+
+// ---- mail --------------------------------------------------------------------------------------
+
+export async function sendOrderMail(ctx: AppContext, order: OrderDto, kind: "placed" | "changed" | "cancelled") {
+  try {
+    const buyers = await ctx.dataSource.getRepository(User).findBy({ accountId: order.accountId, disabled: false, role: "buyer" });
+    if (!buyers.length) return;
+    const bakery = await getBakery(ctx);
+    const mail = orderMail({ bakeryName: bakery.name, currency: bakery.currency, timeZone: bakery.timeZone, order, kind, url: `${ctx.config.publicUrl}/buyer/order/${order.deliveryDate}` });
+    for (const b of buyers) await ctx.mailer.send({ to: b.email, fromName: bakery.name, ...mail });
+  } catch (err) {
+    ctx.logger.error({ err: (err as Error).message, orderId: order.id, event: "order_mail_failed" }, "could not send the order mail");
+  }
+}

@@ -1,0 +1,180 @@
+import { In, type EntityManager } from "typeorm";
+import type { AppContext } from "../http/context";
+import { HttpError, badRequest } from "../http/errors";
+import { StandingOrder, StandingOrderLine } from "./standing-order.entity";
+import { Order, OrderLine } from "./order.entity";
+import { Product } from "../catalog/product.entity";
+import { CustomerAccount } from "../accounts/account.entity";
+import { loadCalendarSettings, parseWeekdays, resolveAccount } from "../calendar/calendar.service";
+import { pricingFor } from "../catalog/catalog.service";
+import { createOrder, orderCutoff } from "./orders.service";
+import { addDays, dateStatus, localToday, weekdayOf, type Weekday } from "../../shared/calendar";
+import { expandRule, weeklyRule } from "../../shared/recurrence";
+import type { SessionUser } from "../../shared/schemas/auth";
+import type { StandingOrderDto, StandingOrderInput } from "../../shared/schemas/orders";
+
+async function load(m: EntityManager, accountId: number) {
+  const so = await m.getRepository(StandingOrder).findOneBy({ accountId });
+  const lines = so ? await m.getRepository(StandingOrderLine).find({ where: { standingOrderId: so.id }, order: { productId: "ASC", weekday: "ASC" } }) : [];
+  return { so, lines };
+}
+
+export async function getStandingOrder(ctx: AppContext, actor: SessionUser, accountId?: number): Promise<StandingOrderDto | null> {
+  const account = await resolveAccount(ctx, actor, accountId);
+  const { so, lines } = await load(ctx.dataSource.manager, account.id);
+  if (!so) return null;
+  return dto(ctx, so, lines);
+}
+
+async function dto(ctx: AppContext, so: StandingOrder, lines: StandingOrderLine[]): Promise<StandingOrderDto> {
+  const settings = await loadCalendarSettings(ctx);
+  const today = localToday(ctx.clock.now(), settings.timeZone);
+  const skip = new Set<string>(JSON.parse(so.skipDates));
+  const dates = lines.some((l) => l.quantity > 0) ? expandRule(so.rrule, today, addDays(today, settings.horizonDays)).filter((d) => !skip.has(d)) : [];
+  const orders = dates.length ? await ctx.dataSource.getRepository(Order).findBy({ accountId: so.accountId, deliveryDate: In(dates) }) : [];
+  const byDate = new Map(orders.map((o) => [o.deliveryDate, o]));
+  return {
+    accountId: so.accountId,
+    startDate: so.startDate,
+    endDate: so.endDate,
+    intervalWeeks: so.intervalWeeks === 2 ? 2 : 1,
+    skipDates: [...skip].sort(),
+    lines: lines.map((l) => ({ productId: l.productId, weekday: l.weekday as Weekday, quantity: l.quantity })),
+    active: so.active,
+    rrule: so.rrule,
+    upcoming: dates.map((date) => {
+      const o = byDate.get(date);
+      return { date, orderId: o?.id ?? null, editedByHand: o?.editedByHand ?? false, status: o?.status ?? null };
+    }),
+  };
+}
+
+export async function putStandingOrder(ctx: AppContext, actor: SessionUser, input: ReturnType<typeof import("../../shared/schemas/orders").standingOrderSchema.parse>): Promise<StandingOrderDto> {
+  const account = await resolveAccount(ctx, actor, input.accountId);
+  if (account.status !== "active") throw new HttpError(403, account.status === "on_hold" ? "account_on_hold" : "account_closed", `${account.businessName} is ${account.status === "on_hold" ? "on hold" : "closed"}; the standing order can't be changed now. Please call the bakery.`);
+  const productIds = [...new Set(input.lines.map((l) => l.productId))];
+  const products = new Map((await ctx.dataSource.getRepository(Product).findBy({ id: In(productIds.concat([0])) })).map((p) => [p.id, p]));
+  const fields: Record<string, string> = {};
+  input.lines.forEach((l, i) => {
+    const p = products.get(l.productId);
+    if (!p || !p.active) fields[`lines.${i}.productId`] = "This product is not offered.";
+    else if (l.quantity > p.maxQuantity) fields[`lines.${i}.quantity`] = `At most ${p.maxQuantity} ${p.saleUnit} per order.`;
+    else if (l.quantity > 0 && l.quantity < p.minQuantity) fields[`lines.${i}.quantity`] = `At least ${p.minQuantity} ${p.saleUnit} per order.`;
+  });
+  const settings = await loadCalendarSettings(ctx);
+  const routeDays = parseWeekdays(account.routeWeekdays) ?? settings.deliveryWeekdays;
+  input.lines.forEach((l, i) => {
+    if (l.quantity > 0 && (!settings.deliveryWeekdays.includes(l.weekday as Weekday) || !routeDays.includes(l.weekday as Weekday))) fields[`lines.${i}.weekday`] = "There is no delivery to you on this weekday.";
+  });
+  if (Object.keys(fields).length) throw badRequest(Object.keys(fields).length === 1 ? Object.values(fields)[0] : "Some quantities need attention.", fields);
+
+  const weekdays = [...new Set(input.lines.filter((l) => l.quantity > 0).map((l) => l.weekday as Weekday))];
+  const rule = weeklyRule({ startDate: input.startDate, endDate: input.endDate, intervalWeeks: input.intervalWeeks, weekdays: weekdays.length ? weekdays : [weekdayOf(input.startDate)] });
+  await ctx.dataSource.transaction(async (m) => {
+    const repo = m.getRepository(StandingOrder);
+    let so = await repo.findOneBy({ accountId: account.id });
+    const values = { startDate: input.startDate, endDate: input.endDate, intervalWeeks: input.intervalWeeks, rrule: rule, skipDates: JSON.stringify([...new Set(input.skipDates)].sort()), active: input.active };
+    if (so) await repo.update({ id: so.id }, values);
+    else so = await repo.save(repo.create({ accountId: account.id, ...values }));
+    await m.getRepository(StandingOrderLine).delete({ standingOrderId: so.id });
+    const kept = input.lines.filter((l) => l.quantity > 0);
+    if (kept.length) await m.getRepository(StandingOrderLine).insert(kept.map((l) => ({ standingOrderId: so!.id, productId: l.productId, weekday: l.weekday, quantity: l.quantity })));
+  });
+  await materialiseAccount(ctx, account.id);
+  return (await getStandingOrder(ctx, actor, account.id))!;
+}
+
+/**
+ * Turn standing orders into orders for every orderable date within the horizon. Idempotent: an order
+ * that exists is only brought in line with the standing order when the job made it and nobody has
+ * changed it by hand since.
+ */
+export async function materialiseAll(ctx: AppContext): Promise<{ created: number; updated: number; cancelled: number }> {
+  const all = await ctx.dataSource.getRepository(StandingOrder).find();
+  const total = { created: 0, updated: 0, cancelled: 0 };
+  for (const so of all) {
+    const r = await materialiseAccount(ctx, so.accountId);
+    total.created += r.created;
+    total.updated += r.updated;
+    total.cancelled += r.cancelled;
+  }
+  return total;
+}
+
+export async function materialiseAccount(ctx: AppContext, accountId: number) {
+  const result = { created: 0, updated: 0, cancelled: 0 };
+  const settings = await loadCalendarSettings(ctx);
+  const { so, lines } = await load(ctx.dataSource.manager, accountId);
+  const account = await ctx.dataSource.getRepository(CustomerAccount).findOneBy({ id: accountId });
+  if (!so || !account || account.status !== "active") return result;
+  const now = ctx.clock.now();
+  const today = localToday(now, settings.timeZone);
+  const horizonEnd = addDays(today, settings.horizonDays);
+  const skip = new Set<string>(JSON.parse(so.skipDates));
+  const wanted = new Map<string, { productId: number; quantity: number }[]>();
+  if (so.active) {
+    for (const date of expandRule(so.rrule, today, horizonEnd)) {
+      const wd = weekdayOf(date);
+      const dayLines = lines.filter((l) => l.weekday === wd && l.quantity > 0).map((l) => ({ productId: l.productId, quantity: l.quantity }));
+      if (!skip.has(date) && dayLines.length) wanted.set(date, dayLines);
+    }
+  }
+  const existing = await ctx.dataSource.getRepository(Order).createQueryBuilder("o").where("o.accountId = :a AND o.deliveryDate BETWEEN :f AND :t", { a: accountId, f: today, t: horizonEnd }).getMany();
+  const byDate = new Map(existing.map((o) => [o.deliveryDate, o]));
+  const routeDays = parseWeekdays(account.routeWeekdays);
+
+  for (const [date, dayLines] of wanted) {
+    const st = dateStatus(date, settings, now, routeDays);
+    if (!st.orderable) continue;
+    const o = byDate.get(date);
+    if (!o) {
+      try {
+        await createOrder(ctx, null, { deliveryDate: date, lines: dayLines }, { source: "standing", accountId, skipMail: true });
+        result.created++;
+      } catch (err) {
+        if (!(err instanceof HttpError)) throw err;
+        ctx.logger.info({ accountId, date, code: err.code }, "standing order not placed for this date");
+      }
+    } else if (o.source === "standing" && !o.editedByHand && (o.status === "open" || o.status === "cancelled")) {
+      if (await syncOrder(ctx, o, dayLines, settings)) result.updated++;
+    }
+  }
+  // Dates the standing order no longer covers: cancel the job's own untouched orders.
+  for (const o of existing) {
+    if (wanted.has(o.deliveryDate) || o.source !== "standing" || o.editedByHand || o.status !== "open") continue;
+    if (now.getTime() >= (await cutoffOf(ctx, o, settings))) continue;
+    await ctx.dataSource.getRepository(Order).update({ id: o.id, status: "open", editedByHand: false }, { status: "cancelled" });
+    result.cancelled++;
+  }
+  return result;
+}
+
+async function cutoffOf(ctx: AppContext, o: Order, settings: Awaited<ReturnType<typeof loadCalendarSettings>>): Promise<number> {
+  const lines = await ctx.dataSource.getRepository(OrderLine).findBy({ orderId: o.id });
+  const products = await ctx.dataSource.getRepository(Product).findBy({ id: In(lines.map((l) => l.productId).concat([0])) });
+  return orderCutoff(o.deliveryDate, settings, products).toMillis();
+}
+
+/** Bring a job-made order in line with the standing order; false when it already matches. */
+async function syncOrder(ctx: AppContext, o: Order, dayLines: { productId: number; quantity: number }[], settings: Awaited<ReturnType<typeof loadCalendarSettings>>): Promise<boolean> {
+  return ctx.dataSource.transaction(async (m) => {
+    const locked = await m.getRepository(Order).createQueryBuilder("o").setLock("pessimistic_write").where("o.id = :id", { id: o.id }).getOne();
+    if (!locked || locked.editedByHand || locked.source !== "standing" || !["open", "cancelled"].includes(locked.status)) return false;
+    const current = await m.getRepository(OrderLine).findBy({ orderId: o.id });
+    const same = locked.status === "open" && current.length === dayLines.length && dayLines.every((l) => current.some((c) => c.productId === l.productId && c.quantity === l.quantity));
+    if (same) return false;
+    const products = new Map((await m.getRepository(Product).findBy({ id: In(dayLines.map((l) => l.productId)) })).map((p) => [p.id, p]));
+    if (dayLines.some((l) => !products.get(l.productId)?.active)) return false;
+    if (ctx.clock.now().getTime() >= orderCutoff(o.deliveryDate, settings, [...products.values()]).toMillis()) return false;
+    const pricing = await pricingFor(ctx, o.accountId, m);
+    const priced = dayLines.map((l) => {
+      const p = products.get(l.productId)!;
+      const unit = pricing.price(p);
+      return { orderId: o.id, productId: p.id, productName: p.name, saleUnit: p.saleUnit, quantity: l.quantity, unitPriceCents: unit, lineTotalCents: unit * l.quantity };
+    });
+    await m.getRepository(OrderLine).delete({ orderId: o.id });
+    await m.getRepository(OrderLine).insert(priced);
+    await m.getRepository(Order).update({ id: o.id }, { status: "open", totalCents: priced.reduce((s, l) => s + l.lineTotalCents, 0) });
+    return true;
+  });
+}

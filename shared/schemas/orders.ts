@@ -1,0 +1,120 @@
+import { z } from "zod";
+import { dateSchema } from "./calendar";
+import type { AllergenCode } from "../allergens";
+import type { Weekday } from "../calendar";
+
+export const ORDER_STATUSES = ["open", "locked", "delivered", "cancelled"] as const;
+export type OrderStatus = (typeof ORDER_STATUSES)[number];
+export const ORDER_STATUS_LABELS: Record<OrderStatus, string> = {
+  open: "Open",
+  locked: "Locked for baking",
+  delivered: "Delivered",
+  cancelled: "Cancelled",
+};
+
+export const quantitySchema = z
+  .number({ required_error: "Enter a quantity.", invalid_type_error: "The quantity must be a number." })
+  .int("Quantities are whole units.")
+  .positive("The quantity must be at least 1.");
+
+const lineSchema = z.object({
+  productId: z.number({ required_error: "Choose a product.", invalid_type_error: "Choose a product." }).int().positive("Choose a product."),
+  quantity: quantitySchema,
+});
+
+const linesSchema = z
+  .array(lineSchema, { required_error: "Add at least one product." })
+  .min(1, "Add at least one product.")
+  .max(100, "At most 100 lines.")
+  .superRefine((lines, ctx) => {
+    const seen = new Set<number>();
+    lines.forEach((l, i) => {
+      if (seen.has(l.productId)) ctx.addIssue({ code: "custom", path: [i, "productId"], message: "This product is already on the order; change its quantity instead." });
+      seen.add(l.productId);
+    });
+  });
+
+const poSchema = z.string().trim().max(40, "Use at most 40 characters.").optional();
+const noteSchema = z.string().trim().max(500, "Use at most 500 characters.").optional();
+
+export const orderCreateSchema = z.object({
+  deliveryDate: dateSchema,
+  lines: linesSchema,
+  poNumber: poSchema,
+  note: noteSchema,
+  accountId: z.number().int().positive().optional(),
+});
+export type OrderCreateInput = z.input<typeof orderCreateSchema>;
+
+export const orderUpdateSchema = z.object({ lines: linesSchema.optional(), poNumber: poSchema, note: noteSchema });
+export type OrderUpdateInput = z.input<typeof orderUpdateSchema>;
+
+export const orderListQuerySchema = z
+  .object({ from: dateSchema.optional(), to: dateSchema.optional(), accountId: z.coerce.number().int().positive().optional(), status: z.enum(ORDER_STATUSES).optional() });
+
+export interface OrderLineDto {
+  productId: number;
+  productName: string;
+  saleUnit: string;
+  quantity: number;
+  unitPriceCents: number;
+  lineTotalCents: number;
+  allergens: AllergenCode[];
+  mayContain: string;
+}
+
+export interface OrderDto {
+  id: number;
+  accountId: number;
+  accountName: string;
+  deliveryDate: string;
+  status: OrderStatus;
+  poNumber: string | null;
+  note: string | null;
+  lines: OrderLineDto[];
+  totalCents: number;
+  /** Earliest cut-off among the date and the lines' products, ISO 8601 with the bakery's offset. */
+  cutoffAt: string;
+  source: "one_off" | "standing";
+  editedByHand: boolean;
+  createdAt: string;
+  updatedAt: string;
+}
+
+/** Standing order: quantities per product per weekday. */
+export const standingOrderSchema = z
+  .object({
+    accountId: z.number().int().positive().optional(),
+    startDate: dateSchema,
+    endDate: dateSchema.nullable().default(null),
+    intervalWeeks: z.union([z.literal(1), z.literal(2)], { errorMap: () => ({ message: "Choose every week or every other week." }) }),
+    skipDates: z.array(dateSchema).max(200).default([]),
+    lines: z
+      .array(z.object({ productId: z.number().int().positive(), weekday: z.number().int().min(1).max(7), quantity: z.number().int("Quantities are whole units.").min(0, "Quantities cannot be negative.") }))
+      .max(500),
+    active: z.boolean().default(true),
+  })
+  .superRefine((v, ctx) => {
+    if (v.endDate && v.endDate < v.startDate) ctx.addIssue({ code: "custom", path: ["endDate"], message: "The end date must be after the start date." });
+    const seen = new Set<string>();
+    v.lines.forEach((l, i) => {
+      const k = `${l.productId}:${l.weekday}`;
+      if (seen.has(k)) ctx.addIssue({ code: "custom", path: ["lines", i], message: "This product and weekday appear twice." });
+      seen.add(k);
+    });
+  });
+export type StandingOrderInput = z.input<typeof standingOrderSchema>;
+
+export interface StandingOrderDto {
+  accountId: number;
+  startDate: string;
+  endDate: string | null;
+  intervalWeeks: 1 | 2;
+  skipDates: string[];
+  lines: { productId: number; weekday: Weekday; quantity: number }[];
+  active: boolean;
+  /** The RFC 5545 recurrence rule it is stored as. */
+  rrule: string;
+  /** Upcoming dates it produces (within the horizon), with whether the buyer changed that order by hand. */
+  upcoming: { date: string; orderId: number | null; editedByHand: boolean; status: string | null }[];
+}
