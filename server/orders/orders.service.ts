@@ -166,7 +166,8 @@ export async function createOrder(ctx: AppContext, actor: SessionUser | null, in
     await m.getRepository(OrderLine).insert(priced.map((l) => ({ ...l, orderId: order.id })));
     return (await orderDtos(ctx, [order], m))[0];
   };
-  const dto = opts.manager ? await run(opts.manager) : await ctx.dataSource.transaction(run);
+  // READ COMMITTED: after waiting on the account lock, the check for an existing order must see what the other writer committed.
+  const dto = opts.manager ? await run(opts.manager) : await ctx.dataSource.transaction("READ COMMITTED", run);
   if (!opts.skipMail) void sendOrderMail(ctx, dto, "placed");
   return dto;
 }
@@ -175,7 +176,7 @@ export async function createOrder(ctx: AppContext, actor: SessionUser | null, in
 export async function updateOrder(ctx: AppContext, actor: SessionUser, id: number, input: { lines?: LineInput[]; poNumber?: string; note?: string }): Promise<OrderDto> {
   const bakery = await getBakery(ctx);
   const settings = await loadCalendarSettings(ctx);
-  const dto = await ctx.dataSource.transaction(async (m) => {
+  const dto = await lockAfterRefusal(ctx, ctx.dataSource.transaction(async (m) => {
     const order = await lockOrderForWrite(ctx, m, actor, id, settings, bakery);
     const existingLines = await m.getRepository(OrderLine).findBy({ orderId: order.id });
     const oldProducts = await m.getRepository(Product).findBy({ id: In(existingLines.map((l) => l.productId).concat([0])) });
@@ -196,7 +197,7 @@ export async function updateOrder(ctx: AppContext, actor: SessionUser, id: numbe
     }
     await m.getRepository(Order).update({ id: order.id }, patch);
     return (await orderDtos(ctx, [(await m.getRepository(Order).findOneBy({ id: order.id }))!], m))[0];
-  });
+  }));
   void sendOrderMail(ctx, dto, "changed");
   return dto;
 }
@@ -204,7 +205,7 @@ export async function updateOrder(ctx: AppContext, actor: SessionUser, id: numbe
 export async function cancelOrder(ctx: AppContext, actor: SessionUser, id: number): Promise<OrderDto> {
   const bakery = await getBakery(ctx);
   const settings = await loadCalendarSettings(ctx);
-  const dto = await ctx.dataSource.transaction(async (m) => {
+  const dto = await lockAfterRefusal(ctx, ctx.dataSource.transaction(async (m) => {
     const order = await lockOrderForWrite(ctx, m, actor, id, settings, bakery);
     const lines = await m.getRepository(OrderLine).findBy({ orderId: order.id });
     const products = await m.getRepository(Product).findBy({ id: In(lines.map((l) => l.productId).concat([0])) });
@@ -212,7 +213,7 @@ export async function cancelOrder(ctx: AppContext, actor: SessionUser, id: numbe
     if (ctx.clock.now().getTime() >= c.toMillis()) throw cutoffPassed(c, settings.timeZone, order.deliveryDate);
     await m.getRepository(Order).update({ id: order.id }, { status: "cancelled", editedByHand: order.source === "standing" ? true : order.editedByHand });
     return (await orderDtos(ctx, [(await m.getRepository(Order).findOneBy({ id: order.id }))!], m))[0];
-  });
+  }));
   void sendOrderMail(ctx, dto, "cancelled");
   return dto;
 }
@@ -224,13 +225,24 @@ async function lockOrderForWrite(ctx: AppContext, m: EntityManager, actor: Sessi
   const account = await m.getRepository(CustomerAccount).findOneByOrFail({ id: order.accountId });
   const dateCutoff = cutoffFor(order.deliveryDate, settings);
   if (order.status === "open" && ctx.clock.now().getTime() >= dateCutoff.toMillis()) {
-    await m.getRepository(Order).update({ id: order.id }, { status: "locked" });
-    order.status = "locked";
+    // The refusal rolls this transaction back; the caller locks the order afterwards (lockAfterRefusal).
+    throw Object.assign(cutoffPassed(dateCutoff, settings.timeZone, order.deliveryDate), { lockOrderId: order.id });
   }
   if (order.status === "locked") throw cutoffPassed(dateCutoff, settings.timeZone, order.deliveryDate);
   if (order.status !== "open") throw new HttpError(409, "order_closed", `This order is ${order.status} and can no longer be changed.`);
   refuseIfAccountBlocked(account, bakery);
   return order;
+}
+
+/** A write refused because the date's cut-off had passed locks the order at once (not waiting for the job). */
+async function lockAfterRefusal<T>(ctx: AppContext, work: Promise<T>): Promise<T> {
+  try {
+    return await work;
+  } catch (err) {
+    const id = (err as { lockOrderId?: number }).lockOrderId;
+    if (id) await ctx.dataSource.getRepository(Order).update({ id, status: "open" }, { status: "locked" });
+    throw err;
+  }
 }
 
 /** The scheduled job: every open order whose date's cut-off has passed becomes locked. */

@@ -82,10 +82,11 @@ export async function tokenFor(t: TestApp, user: { email: string }): Promise<str
 }
 
 /** Wait for a mail to someone to arrive at the fake (SMTP delivery is asynchronous). */
-export async function waitForMail(t: TestApp, to: string, timeoutMs = 5000) {
+export async function waitForMail(t: TestApp, to: string, opts: { subject?: RegExp; timeoutMs?: number } | number = {}) {
+  const { subject, timeoutMs = 5000 } = typeof opts === "number" ? { timeoutMs: opts } : opts;
   const until = Date.now() + timeoutMs;
   for (;;) {
-    const m = [...t.mail.messages].reverse().find((x) => x.to.includes(to));
+    const m = [...t.mail.messages].reverse().find((x) => x.to.includes(to) && (!subject || subject.test(x.subject)));
     if (m) return m;
     if (Date.now() > until) throw new Error(`no mail to ${to} within ${timeoutMs} ms`);
     await new Promise((r) => setTimeout(r, 25));
@@ -97,3 +98,16 @@ export function linkToken(text: string): string {
   if (!m) throw new Error("no token link in mail");
   return decodeURIComponent(m[1]);
 }
+
+export async function makeProduct(ds: DataSource, over: Partial<import("../../../server/catalog/product.entity").Product> = {}) {
+  const { Product } = await import("../../../server/catalog/product.entity");
+  const repo = ds.getRepository(Product);
+  seq++;
+  return repo.save(repo.create({
+    name: `Product ${seq}`, description: "", photoFile: null, saleUnit: "tray of 15 rolls", piecesPerUnit: 15, pieceGrams: 67,
+    panName: "9×13 in pan", panLengthMm: 330, panWidthMm: 229, unitsPerPan: 1, priceCents: 1800, minQuantity: 1, maxQuantity: 40,
+    leadDays: null, allergens: "gluten,wheat,milk", mayContain: "", active: true, formulaId: null, sortOrder: seq, ...over,
+  }));
+}
+
+export const auth = (token: string) => ({ Authorization: `Bearer ${token}` });

@@ -1,0 +1,227 @@
+import { startTestApp, makeAccount, makeBakery, makeProduct, makeUser, tokenFor, waitForMail, auth, type TestApp } from "./helpers/app";
+import { CustomerAccount } from "../../server/accounts/account.entity";
+import { Order } from "../../server/orders/order.entity";
+import { lockPastCutoff } from "../../server/orders/orders.service";
+
+/** Clock: Wed 10 Jun 2026 10:00 CDT. Thu 11 Jun's cut-off is Wed 10 Jun 14:00 CDT (19:00Z). */
+const NOW = "2026-06-10T15:00:00Z";
+const THU = "2026-06-11";
+const FRI = "2026-06-12";
+
+let t: TestApp;
+let buyer: string;
+let buyerEmail: string;
+let owner: string;
+let accountId: number;
+let rolls: { id: number };
+let buns: { id: number };
+beforeAll(async () => {
+  t = await startTestApp({ now: NOW });
+  await makeBakery(t.ds, { name: "Order Bakery", phone: "+1 555 0100" });
+  const account = await makeAccount(t.ds, { businessName: "Harbor Café" });
+  accountId = account.id;
+  const u = await makeUser(t.ds, "buyer", { accountId });
+  buyerEmail = u.email;
+  buyer = await tokenFor(t, u);
+  owner = await tokenFor(t, await makeUser(t.ds, "owner"));
+  rolls = await makeProduct(t.ds, { name: "Dinner rolls", priceCents: 1800, maxQuantity: 40 });
+  buns = await makeProduct(t.ds, { name: "Slider buns", priceCents: 1440, saleUnit: "dozen buns", maxQuantity: 20 });
+});
+afterAll(() => t.close());
+beforeEach(() => t.clock.set(NOW));
+
+const post = (token: string, body: object, key?: string) => {
+  const r = t.http().post("/api/orders").set(auth(token));
+  return (key ? r.set("Idempotency-Key", key) : r).send(body);
+};
+
+describe("placing an order", () => {
+  it("places an order with prices copied onto its lines and a total in cents", async () => {
+    const res = await post(buyer, { deliveryDate: THU, lines: [{ productId: rolls.id, quantity: 3 }, { productId: buns.id, quantity: 2 }], poNumber: "PO-77", note: "Back door" });
+    expect(res.status).toBe(201);
+    expect(res.body.order).toMatchObject({
+      accountId, deliveryDate: THU, status: "open", poNumber: "PO-77", note: "Back door", totalCents: 3 * 1800 + 2 * 1440,
+      cutoffAt: "2026-06-10T14:00:00.000-05:00", source: "one_off",
+    });
+    expect(res.body.order.lines[0]).toMatchObject({ productName: "Dinner rolls", quantity: 3, unitPriceCents: 1800, lineTotalCents: 5400, allergens: ["gluten", "wheat", "milk"] });
+    const mail = await waitForMail(t, buyerEmail, { subject: /Order received/ });
+    expect(mail.text).toContain("3 × Dinner rolls");
+  });
+
+  it("refuses a second order for the same date with 409 order_exists and its id", async () => {
+    const first = await t.ds.getRepository(Order).findOneByOrFail({ accountId, deliveryDate: THU });
+    const res = await post(buyer, { deliveryDate: THU, lines: [{ productId: rolls.id, quantity: 1 }] });
+    expect(res.status).toBe(409);
+    expect(res.body.error).toMatchObject({ code: "order_exists", orderId: first.id });
+  });
+
+  it("answers a retry with the same Idempotency-Key with the first result, never a second order", async () => {
+    const body = { deliveryDate: FRI, lines: [{ productId: rolls.id, quantity: 2 }] };
+    const [a, b] = await Promise.all([post(buyer, body, "key-fri-1"), post(buyer, body, "key-fri-1")]);
+    const c = await post(buyer, body, "key-fri-1");
+    expect([a.status, b.status, c.status]).toEqual([201, 201, 201]);
+    expect(new Set([a.body.order.id, b.body.order.id, c.body.order.id]).size).toBe(1);
+    expect(c.headers["idempotent-replayed"]).toBe("true");
+    expect(await t.ds.getRepository(Order).countBy({ accountId, deliveryDate: FRI })).toBe(1);
+    const other = await post(buyer, { ...body, lines: [{ productId: rolls.id, quantity: 5 }] }, "key-fri-1");
+    expect(other.status).toBe(422);
+    expect(other.body.error.code).toBe("idempotency_mismatch");
+  });
+
+  it("lets office users order for an account with accountId", async () => {
+    const acct = await makeAccount(t.ds);
+    const res = await post(owner, { accountId: acct.id, deliveryDate: THU, lines: [{ productId: buns.id, quantity: 1 }] });
+    expect(res.status).toBe(201);
+    expect(res.body.order.accountId).toBe(acct.id);
+    const missing = await post(owner, { deliveryDate: THU, lines: [{ productId: buns.id, quantity: 1 }] });
+    expect(missing.status).toBe(400);
+    expect(missing.body.error.fields.accountId).toBeDefined();
+  });
+});
+
+describe("bad input gets a 400 with per-field messages", () => {
+  const cases: [string, object, string, RegExp][] = [
+    ["quantity zero", { lines: [{ productId: 0, quantity: 0 }] }, "lines.0.quantity", /at least 1/],
+    ["negative quantity", { lines: [{ productId: 0, quantity: -2 }] }, "lines.0.quantity", /at least 1/],
+    ["fractional quantity", { lines: [{ productId: 0, quantity: 1.5 }] }, "lines.0.quantity", /whole units/],
+    ["quantity as text", { lines: [{ productId: 0, quantity: "two" }] }, "lines.0.quantity", /must be a number/],
+    ["no lines", { lines: [] }, "lines", /at least one product/],
+    ["invalid calendar date", { deliveryDate: "2026-02-30" }, "deliveryDate", /not a calendar date/],
+    ["date in the wrong form", { deliveryDate: "12/06/2026" }, "deliveryDate", /not a calendar date/],
+  ];
+  it.each(cases)("%s", async (_name, patch, field, message) => {
+    const body: Record<string, unknown> = { deliveryDate: "2026-06-16", lines: [{ productId: rolls.id, quantity: 1 }], ...patch };
+    body.lines = (body.lines as { productId: number; quantity: unknown }[]).map((l) => ({ ...l, productId: l.productId || rolls.id }));
+    const res = await post(buyer, body);
+    expect(res.status).toBe(400);
+    expect(res.body.error.code).toBe("validation_failed");
+    expect(res.body.error.fields[field]).toMatch(message);
+  });
+
+  it("duplicate product lines", async () => {
+    const res = await post(buyer, { deliveryDate: "2026-06-16", lines: [{ productId: rolls.id, quantity: 1 }, { productId: rolls.id, quantity: 2 }] });
+    expect(res.status).toBe(400);
+    expect(res.body.error.fields["lines.1.productId"]).toMatch(/already on the order/);
+  });
+
+  it("above the product's maximum", async () => {
+    const res = await post(buyer, { deliveryDate: "2026-06-16", lines: [{ productId: buns.id, quantity: 21 }] });
+    expect(res.status).toBe(400);
+    expect(res.body.error.fields["lines.0.quantity"]).toBe("At most 20 dozen buns per order.");
+  });
+
+  it("unknown and archived products", async () => {
+    const archived = await makeProduct(t.ds, { name: "Old loaf", active: false });
+    const res = await post(buyer, { deliveryDate: "2026-06-16", lines: [{ productId: 999999, quantity: 1 }, { productId: archived.id, quantity: 1 }] });
+    expect(res.status).toBe(400);
+    expect(res.body.error.fields["lines.0.productId"]).toBe("This product does not exist.");
+    expect(res.body.error.fields["lines.1.productId"]).toBe("Old loaf is no longer offered.");
+    expect(await t.ds.getRepository(Order).countBy({ accountId, deliveryDate: "2026-06-16" })).toBe(0);
+  });
+});
+
+describe("dates, minimums and holds", () => {
+  it("409 with the reason for a date that is not orderable", async () => {
+    const sunday = await post(buyer, { deliveryDate: "2026-06-14", lines: [{ productId: rolls.id, quantity: 1 }] });
+    expect(sunday.status).toBe(409);
+    expect(sunday.body.error).toMatchObject({ code: "date_not_orderable", reason: "not_delivery_day" });
+    const far = await post(buyer, { deliveryDate: "2026-09-01", lines: [{ productId: rolls.id, quantity: 1 }] });
+    expect(far.body.error.reason).toBe("beyond_horizon");
+    const today = await post(buyer, { deliveryDate: "2026-06-10", lines: [{ productId: rolls.id, quantity: 1 }] });
+    expect(today.body.error.code).toBe("cutoff_passed");
+  });
+
+  it("422 with the shortfall below the account's minimum", async () => {
+    await t.ds.getRepository(CustomerAccount).update({ id: accountId }, { minimumOrderCents: 5000 });
+    const res = await post(buyer, { deliveryDate: "2026-06-17", lines: [{ productId: rolls.id, quantity: 2 }] });
+    expect(res.status).toBe(422);
+    expect(res.body.error).toMatchObject({ code: "below_minimum", shortfallCents: 1400, minimumOrderCents: 5000 });
+    expect(res.body.error.message).toContain("$14.00");
+    await t.ds.getRepository(CustomerAccount).update({ id: accountId }, { minimumOrderCents: 0 });
+  });
+
+  it("403 with a reason the buyer can act on when the account is on hold", async () => {
+    await t.ds.getRepository(CustomerAccount).update({ id: accountId }, { status: "on_hold" });
+    const res = await post(buyer, { deliveryDate: "2026-06-18", lines: [{ productId: rolls.id, quantity: 1 }] });
+    expect(res.status).toBe(403);
+    expect(res.body.error.code).toBe("account_on_hold");
+    expect(res.body.error.message).toContain("+1 555 0100");
+    await t.ds.getRepository(CustomerAccount).update({ id: accountId }, { status: "active" });
+  });
+
+  it("a product's own lead days bring its cut-off forward", async () => {
+    const swirl = await makeProduct(t.ds, { name: "Swirl loaf", leadDays: 2, saleUnit: "loaf" });
+    // Fri 12 Jun with 2 lead days: cut-off Wed 10 Jun 14:00 CDT — still open at 10:00.
+    const ok = await post(buyer, { deliveryDate: "2026-06-19", lines: [{ productId: swirl.id, quantity: 1 }] });
+    expect(ok.status).toBe(201);
+    expect(ok.body.order.cutoffAt).toBe("2026-06-17T14:00:00.000-05:00");
+    t.clock.set("2026-06-10T20:00:00Z"); // 15:00 CDT: Thursday's cut-off has passed, Friday's date cut-off has not…
+    const late = await post(buyer, { deliveryDate: FRI, lines: [{ productId: swirl.id, quantity: 1 }] });
+    expect(late.status).toBe(409); // …but FRI already has an order; use another account-free check:
+    const acct = await makeAccount(t.ds);
+    const lateLead = await post(owner, { accountId: acct.id, deliveryDate: FRI, lines: [{ productId: swirl.id, quantity: 1 }] });
+    expect(lateLead.status).toBe(409);
+    expect(lateLead.body.error.code).toBe("cutoff_passed");
+    const plain = await post(owner, { accountId: acct.id, deliveryDate: FRI, lines: [{ productId: rolls.id, quantity: 1 }] });
+    expect(plain.status).toBe(201);
+  });
+});
+
+describe("changing and cancelling", () => {
+  it("PATCH replaces lines, PO and note before the cut-off and mails the change", async () => {
+    const order = await t.ds.getRepository(Order).findOneByOrFail({ accountId, deliveryDate: THU });
+    const res = await t.http().patch(`/api/orders/${order.id}`).set(auth(buyer)).send({ lines: [{ productId: buns.id, quantity: 4 }], poNumber: "PO-78" });
+    expect(res.status).toBe(200);
+    expect(res.body.order).toMatchObject({ totalCents: 4 * 1440, poNumber: "PO-78", note: "Back door" });
+    expect(res.body.order.lines).toHaveLength(1);
+    const mail = await waitForMail(t, buyerEmail, { subject: /Order changed/ });
+    expect(mail.text).toContain("4 × Slider buns");
+  });
+
+  it("refuses a change after the cut-off with 409 cutoff_passed and the cut-off in local time, and locks the order", async () => {
+    const order = await t.ds.getRepository(Order).findOneByOrFail({ accountId, deliveryDate: THU });
+    t.clock.set("2026-06-10T19:00:00Z"); // exactly 14:00 CDT
+    const res = await t.http().patch(`/api/orders/${order.id}`).set(auth(buyer)).send({ note: "too late" });
+    expect(res.status).toBe(409);
+    expect(res.body.error.code).toBe("cutoff_passed");
+    expect(res.body.error.message).toContain("Wed 10 Jun, 14:00 CDT");
+    expect((await t.ds.getRepository(Order).findOneByOrFail({ id: order.id })).status).toBe("locked");
+    const del = await t.http().delete(`/api/orders/${order.id}`).set(auth(buyer));
+    expect(del.status).toBe(409);
+  });
+
+  it("the lock job locks every open order whose date's cut-off has passed", async () => {
+    const fri = await t.ds.getRepository(Order).findOneByOrFail({ accountId, deliveryDate: FRI });
+    t.clock.set("2026-06-11T18:59:00Z");
+    await lockPastCutoff(t.ctx);
+    expect((await t.ds.getRepository(Order).findOneByOrFail({ id: fri.id })).status).toBe("open");
+    t.clock.set("2026-06-11T19:00:00Z");
+    expect(await lockPastCutoff(t.ctx)).toBeGreaterThanOrEqual(1);
+    expect((await t.ds.getRepository(Order).findOneByOrFail({ id: fri.id })).status).toBe("locked");
+  });
+
+  it("DELETE cancels; the date can then be ordered again", async () => {
+    const placed = await post(buyer, { deliveryDate: "2026-06-23", lines: [{ productId: rolls.id, quantity: 1 }] });
+    const del = await t.http().delete(`/api/orders/${placed.body.order.id}`).set(auth(buyer));
+    expect(del.status).toBe(200);
+    expect(del.body.order.status).toBe("cancelled");
+    const again = await post(buyer, { deliveryDate: "2026-06-23", lines: [{ productId: buns.id, quantity: 1 }] });
+    expect(again.status).toBe(201);
+    expect(again.body.order.id).toBe(placed.body.order.id);
+    expect(again.body.order.status).toBe("open");
+  });
+
+  it("another account's order is 404 for a buyer, readable for the office", async () => {
+    const acct = await makeAccount(t.ds);
+    const theirs = await post(owner, { accountId: acct.id, deliveryDate: "2026-06-24", lines: [{ productId: rolls.id, quantity: 1 }] });
+    const id = theirs.body.order.id;
+    expect((await t.http().get(`/api/orders/${id}`).set(auth(buyer))).status).toBe(404);
+    expect((await t.http().patch(`/api/orders/${id}`).set(auth(buyer)).send({ note: "x" })).status).toBe(404);
+    expect((await t.http().delete(`/api/orders/${id}`).set(auth(buyer))).status).toBe(404);
+    expect((await t.http().get(`/api/orders/${id}`).set(auth(owner))).status).toBe(200);
+    const mine = await t.http().get("/api/orders?from=2026-06-01&to=2026-06-30").set(auth(buyer));
+    expect(mine.body.orders.every((o: { accountId: number }) => o.accountId === accountId)).toBe(true);
+    const all = await t.http().get(`/api/orders?from=2026-06-01&to=2026-06-30&accountId=${acct.id}`).set(auth(owner));
+    expect(all.body.orders.map((o: { id: number }) => o.id)).toEqual([id]);
+  });
+});
