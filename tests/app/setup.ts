@@ -1,1 +1,19 @@
-// filled in by the app tests
+// expo-router 56 requires "standard-navigation", an ES-module-only package that jest.config.js's
+// transformIgnorePatterns does not transform yet. Its whole API is this one function.
+jest.mock("standard-navigation", () => ({
+  createStandardNavigator: (NavigatorContent: unknown) => ({ type: "standard", version: 1, NavigatorContent }),
+}));
+
+import { clearSession } from "../../components/auth/storage";
+import { setAuthToken, setUnauthorizedHandler } from "../../components/api/client";
+
+beforeEach(() => {
+  // renderRouter turns on fake timers; start every test from real ones and an empty session.
+  jest.useRealTimers();
+  clearSession();
+  setAuthToken(null);
+  setUnauthorizedHandler(null);
+  (globalThis as { fetch?: unknown }).fetch = jest.fn(async () => {
+    throw new Error("fetch was called without a mockApi() for this test");
+  });
+});

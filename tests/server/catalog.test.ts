@@ -1,0 +1,188 @@
+import fs from "node:fs";
+import path from "node:path";
+import zlib from "node:zlib";
+import { parse as parseCsv } from "csv-parse/sync";
+import { startTestApp, makeAccount, makeBakery, makeProduct, makeUser, tokenFor, auth, type TestApp } from "./helpers/app";
+import { CustomerAccount } from "../../server/accounts/account.entity";
+
+const NOW = "2026-06-10T15:00:00Z"; // Wed 10 Jun 10:00 CDT
+let t: TestApp;
+let owner: string;
+let baker: string;
+let buyer: string;
+let accountId: number;
+beforeAll(async () => {
+  t = await startTestApp({ now: NOW });
+  t.ctx.config.uploadsDir = fs.mkdtempSync(path.join(require("node:os").tmpdir(), "panwise-uploads-"));
+  await makeBakery(t.ds);
+  accountId = (await makeAccount(t.ds, { businessName: "Price Café" })).id;
+  owner = await tokenFor(t, await makeUser(t.ds, "owner"));
+  baker = await tokenFor(t, await makeUser(t.ds, "baker"));
+  buyer = await tokenFor(t, await makeUser(t.ds, "buyer", { accountId }));
+});
+afterAll(async () => {
+  fs.rmSync(t.ctx.config.uploadsDir, { recursive: true, force: true });
+  await t.close();
+});
+
+const product = {
+  name: "Dinner rolls", description: "Soft rolls", saleUnit: "tray of 15 rolls", piecesPerUnit: 15, pieceGrams: 67,
+  panName: "9×13 in pan", panLengthMm: 330, panWidthMm: 229, unitsPerPan: 1, priceCents: 1800, minQuantity: 1, maxQuantity: 40,
+  allergens: ["milk", "wheat", "gluten", "egg"], mayContain: "sesame",
+};
+
+/** A real 1×1 PNG (PNG spec: signature, IHDR, IDAT, IEND with CRC-32 from zlib). */
+function tinyPng(): Buffer {
+  const chunk = (type: string, data: Buffer) => {
+    const len = Buffer.alloc(4); len.writeUInt32BE(data.length);
+    const td = Buffer.concat([Buffer.from(type), data]);
+    const crc = Buffer.alloc(4); crc.writeUInt32BE(zlib.crc32(td) >>> 0);
+    return Buffer.concat([len, td, crc]);
+  };
+  const ihdr = Buffer.from([0, 0, 0, 1, 0, 0, 0, 1, 8, 2, 0, 0, 0]);
+  return Buffer.concat([Buffer.from([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a]), chunk("IHDR", ihdr), chunk("IDAT", zlib.deflateSync(Buffer.from([0, 200, 120, 60]))), chunk("IEND", Buffer.alloc(0))]);
+}
+const tinyJpeg = () => Buffer.concat([Buffer.from([0xff, 0xd8, 0xff, 0xe0, 0x00, 0x10, 0x4a, 0x46, 0x49, 0x46, 0x00, 0x01]), Buffer.alloc(64), Buffer.from([0xff, 0xd9])]);
+
+describe("catalog", () => {
+  let id: number;
+  it("the owner creates a product; allergens are kept in the fixed list's order", async () => {
+    const res = await t.http().post("/api/products").set(auth(owner)).send(product);
+    expect(res.status).toBe(201);
+    id = res.body.product.id;
+    expect(res.body.product).toMatchObject({ name: "Dinner rolls", listPriceCents: 1800, priceCents: 1800, photoUrl: null, active: true });
+    expect(res.body.product.allergens).toEqual(["gluten", "wheat", "egg", "milk"]);
+  });
+
+  it("refuses bad products with field messages", async () => {
+    const res = await t.http().post("/api/products").set(auth(owner)).send({ ...product, name: "", pieceGrams: 0, minQuantity: 5, maxQuantity: 2, allergens: ["gluten", "plutonium"], priceCents: 12.5 });
+    expect(res.status).toBe(400);
+    expect(res.body.error.fields).toMatchObject({ name: expect.any(String), pieceGrams: expect.stringMatching(/at least 1/), "allergens.1": "Choose allergens from the list.", priceCents: expect.stringMatching(/whole number/) });
+    const minmax = await t.http().patch(`/api/products/${id}`).set(auth(owner)).send({ minQuantity: 50 });
+    expect(minmax.status).toBe(400);
+    expect(minmax.body.error.fields.maxQuantity).toMatch(/at least the minimum/);
+    expect((await t.http().post("/api/products").set(auth(baker)).send(product)).status).toBe(403);
+  });
+
+  it("buyers see their own prices: a percentage list rounds half up to the cent; a fixed list sets per product", async () => {
+    const pct = await t.http().post("/api/price-lists").set(auth(owner)).send({ name: "Partners", kind: "percent", percentOff: 12.5 });
+    expect(pct.status).toBe(201);
+    await t.http().put(`/api/accounts/${accountId}/delivery`).set(auth(owner)).send({ routeWeekdays: null, minimumOrderCents: 0, priceListId: pct.body.priceList.id });
+    let list = await t.http().get("/api/products").set(auth(buyer));
+    expect(list.body.products.find((p: { id: number }) => p.id === id)).toMatchObject({ listPriceCents: 1800, priceCents: 1575 }); // 1800 × 0.875
+    const odd = await makeProduct(t.ds, { name: "Odd price", priceCents: 999 });
+    list = await t.http().get("/api/products").set(auth(buyer));
+    expect(list.body.products.find((p: { id: number }) => p.id === odd.id).priceCents).toBe(874); // 874.125 → 874
+
+    const fixed = await t.http().post("/api/price-lists").set(auth(owner)).send({ name: "Volume", kind: "fixed", items: [{ productId: id, priceCents: 1650 }] });
+    await t.http().put(`/api/accounts/${accountId}/delivery`).set(auth(owner)).send({ routeWeekdays: [2, 4], minimumOrderCents: 2500, priceListId: fixed.body.priceList.id });
+    list = await t.http().get("/api/products").set(auth(buyer));
+    expect(list.body.products.find((p: { id: number }) => p.id === id).priceCents).toBe(1650);
+    expect(list.body.products.find((p: { id: number }) => p.id === odd.id).priceCents).toBe(999);
+    const order = await t.http().post("/api/orders").set(auth(buyer)).send({ deliveryDate: "2026-06-11", lines: [{ productId: id, quantity: 2 }] });
+    expect(order.body.order.lines[0].unitPriceCents).toBe(1650);
+    const acct = await t.ds.getRepository(CustomerAccount).findOneByOrFail({ id: accountId });
+    expect(acct).toMatchObject({ routeWeekdays: "2,4", minimumOrderCents: 2500 });
+    const dup = await t.http().post("/api/price-lists").set(auth(owner)).send({ name: "Dupes", kind: "fixed", items: [{ productId: id, priceCents: 1 }, { productId: id, priceCents: 2 }] });
+    expect(dup.body.error.fields["items.1.productId"]).toMatch(/twice/);
+  });
+
+  it("archiving hides a product from buyers but not from the owner", async () => {
+    const p = await makeProduct(t.ds, { name: "Seasonal loaf" });
+    expect((await t.http().post(`/api/products/${p.id}/archive`).set(auth(owner))).body.product.active).toBe(false);
+    const buyerList = await t.http().get("/api/products").set(auth(buyer));
+    expect(buyerList.body.products.map((x: { name: string }) => x.name)).not.toContain("Seasonal loaf");
+    expect((await t.http().get(`/api/products/${p.id}`).set(auth(buyer))).status).toBe(404);
+    const ownerList = await t.http().get("/api/products?all=1").set(auth(owner));
+    expect(ownerList.body.products.map((x: { name: string }) => x.name)).toContain("Seasonal loaf");
+  });
+
+  describe("photos (checked by content, not by name)", () => {
+    it("accepts a PNG, stores it under a generated name, serves it with long cache headers", async () => {
+      const res = await t.http().put(`/api/products/${id}/photo`).set(auth(owner)).attach("photo", tinyPng(), { filename: "rolls.txt", contentType: "text/plain" });
+      expect(res.status).toBe(200);
+      expect(res.body.product.photoUrl).toMatch(/^\/api\/uploads\/[a-f0-9]{32}\.png$/);
+      const img = await t.http().get(res.body.product.photoUrl);
+      expect(img.status).toBe(200);
+      expect(img.headers["content-type"]).toBe("image/png");
+      expect(img.headers["cache-control"]).toContain("max-age=31536000");
+    });
+
+    it("replacing a photo removes the old file", async () => {
+      const before = fs.readdirSync(t.ctx.config.uploadsDir);
+      const res = await t.http().put(`/api/products/${id}/photo`).set(auth(owner)).attach("photo", tinyJpeg(), { filename: "rolls.png", contentType: "image/png" });
+      expect(res.status).toBe(200);
+      expect(res.body.product.photoUrl).toMatch(/\.jpg$/);
+      const after = fs.readdirSync(t.ctx.config.uploadsDir);
+      expect(after).toHaveLength(1);
+      expect(before).not.toContain(after[0]);
+    });
+
+    it("415 for anything that is not JPEG, PNG or WebP, whatever its name", async () => {
+      const res = await t.http().put(`/api/products/${id}/photo`).set(auth(owner)).attach("photo", Buffer.from("<svg xmlns='http://www.w3.org/2000/svg'/>"), { filename: "photo.png", contentType: "image/png" });
+      expect(res.status).toBe(415);
+      expect(res.body.error.code).toBe("unsupported_media_type");
+      const gif = await t.http().put(`/api/products/${id}/photo`).set(auth(owner)).attach("photo", Buffer.from("GIF89a\x01\x00\x01\x00\x00\x00\x00;", "binary"), { filename: "a.jpg" });
+      expect(gif.status).toBe(415);
+    });
+
+    it("413 when larger than 5 MB, and nothing is stored", async () => {
+      const before = fs.readdirSync(t.ctx.config.uploadsDir);
+      const big = Buffer.concat([tinyPng(), Buffer.alloc(5 * 1024 * 1024 + 1)]);
+      const res = await t.http().put(`/api/products/${id}/photo`).set(auth(owner)).attach("photo", big, { filename: "big.png" });
+      expect(res.status).toBe(413);
+      expect(fs.readdirSync(t.ctx.config.uploadsDir)).toEqual(before);
+    });
+  });
+});
+
+describe("calendar settings and the calendar", () => {
+  it("the owner sets delivery days, cut-off, lead days, horizon and closures; bad values get field messages", async () => {
+    const bad = await t.http().put("/api/settings/calendar").set(auth(owner)).send({ timeZone: "Mars/Olympus", deliveryWeekdays: [], cutoffTime: "25:00", leadDays: -1, horizonDays: 0, closures: [{ date: "2026-13-01" }] });
+    expect(bad.status).toBe(400);
+    expect(Object.keys(bad.body.error.fields).sort()).toEqual(["closures.0.date", "cutoffTime", "deliveryWeekdays", "horizonDays", "leadDays", "timeZone"]);
+    const ok = await t.http().put("/api/settings/calendar").set(auth(owner)).send({ timeZone: "America/Chicago", deliveryWeekdays: [6, 2, 3, 4, 5], cutoffTime: "13:30", leadDays: 1, horizonDays: 14, closures: [{ date: "2026-06-23", note: "Staff training day" }] });
+    expect(ok.status).toBe(200);
+    expect(ok.body.settings).toMatchObject({ deliveryWeekdays: [2, 3, 4, 5, 6], cutoffTime: "13:30", horizonDays: 14, closures: [{ date: "2026-06-23", note: "Staff training day" }] });
+  });
+
+  it("GET /api/calendar gives each date's status, reason, cut-off with offset, and the account's order", async () => {
+    const res = await t.http().get("/api/calendar?from=2026-06-10&to=2026-06-26").set(auth(buyer));
+    expect(res.status).toBe(200);
+    const day = (d: string) => res.body.days.find((x: { date: string }) => x.date === d);
+    expect(day("2026-06-10")).toMatchObject({ orderable: false, reason: "not_delivery_day" }); // a Wednesday; the account's route days are Tue and Thu
+    expect(day("2026-06-11")).toMatchObject({ orderable: true, cutoffAt: "2026-06-10T13:30:00.000-05:00", order: { status: "open", totalCents: 3300, itemCount: 2 } });
+    expect(day("2026-06-13")).toMatchObject({ orderable: false, reason: "not_delivery_day" });
+    expect(day("2026-06-16")).toMatchObject({ orderable: true, order: null });
+    expect(day("2026-06-25")).toMatchObject({ orderable: false, reason: "beyond_horizon" });
+    expect(day("2026-06-23")).toMatchObject({ orderable: false, reason: "closed", reasonText: "The bakery is closed: Staff training day" });
+    const office = await t.http().get(`/api/calendar?from=2026-06-18&to=2026-06-19&accountId=${accountId}`).set(auth(owner));
+    expect(office.status).toBe(200);
+    const bad = await t.http().get("/api/calendar?from=2026-06-19&to=2026-06-01").set(auth(buyer));
+    expect(bad.status).toBe(400);
+    expect(bad.body.error.fields.to).toBeDefined();
+  });
+});
+
+describe("orders board", () => {
+  it("totals accounts × products for a date in SQL and exports CSV that a CSV parser reads back", async () => {
+    const other = await makeAccount(t.ds, { businessName: "Another, \"quoted\" Bistro" });
+    const products = (await t.http().get("/api/products").set(auth(owner))).body.products;
+    const rolls = products.find((p: { name: string }) => p.name === "Dinner rolls");
+    await t.http().post("/api/orders").set(auth(owner)).send({ accountId: other.id, deliveryDate: "2026-06-11", lines: [{ productId: rolls.id, quantity: 5 }] });
+    const board = await t.http().get("/api/orders/board?date=2026-06-11").set(auth(baker));
+    expect(board.status).toBe(200);
+    expect(board.body.board.products.find((p: { id: number }) => p.id === rolls.id).total).toBe(7);
+    expect(board.body.board.rows.map((r: { accountName: string }) => r.accountName)).toEqual(["Another, \"quoted\" Bistro", "Price Café"]);
+    const csv = await t.http().get("/api/orders/board.csv?date=2026-06-11").set(auth(owner));
+    expect(csv.headers["content-type"]).toMatch(/text\/csv/);
+    expect(csv.headers["content-disposition"]).toContain("orders-2026-06-11.csv");
+    const rows: string[][] = parseCsv(csv.text);
+    expect(rows[0][0]).toBe("Delivery date");
+    expect(rows[1][1]).toBe("Another, \"quoted\" Bistro");
+    expect(rows.at(-1)![1]).toBe("Total");
+    const col = rows[0].indexOf("Dinner rolls (tray of 15 rolls)");
+    expect(rows.at(-1)![col]).toBe("7");
+    expect(rows.at(-1)!.at(-1)).toBe((3300 + 5 * 1800) / 100 + ".00");
+  });
+});

@@ -1,0 +1,120 @@
+import ICAL from "ical.js";
+import { startTestApp, makeAccount, makeBakery, makeProduct, makeUser, tokenFor, auth, type TestApp } from "./helpers/app";
+import { Order } from "../../server/orders/order.entity";
+import { materialiseAll } from "../../server/orders/standing.service";
+
+/** Clock: Mon 7 Dec 2026 09:00 CST. Horizon 28 days; deliveries Tue–Sat. */
+const NOW = "2026-12-07T15:00:00Z";
+let t: TestApp;
+let buyer: string;
+let owner: string;
+let accountId: number;
+let rolls: { id: number };
+let loaf: { id: number };
+beforeAll(async () => {
+  t = await startTestApp({ now: NOW });
+  await makeBakery(t.ds, { name: "Standing Bakery" });
+  await t.ds.query("INSERT INTO bakery_closure (date, note) VALUES ('2026-12-25', 'Christmas Day')");
+  const a = await makeAccount(t.ds, { businessName: "Weekly Café", routeWeekdays: "2,4" });
+  accountId = a.id;
+  buyer = await tokenFor(t, await makeUser(t.ds, "buyer", { accountId }));
+  owner = await tokenFor(t, await makeUser(t.ds, "owner"));
+  rolls = await makeProduct(t.ds, { name: "Rolls", priceCents: 1800 });
+  loaf = await makeProduct(t.ds, { name: "Loaf", priceCents: 950, saleUnit: "loaf" });
+});
+afterAll(() => t.close());
+
+const orders = () => t.ds.getRepository(Order).find({ where: { accountId }, order: { deliveryDate: "ASC" } });
+
+describe("standing orders", () => {
+  it("stores the weekly grid as an RRULE and makes an order for every orderable date in the horizon", async () => {
+    const res = await t.http().put("/api/standing-orders").set(auth(buyer)).send({
+      startDate: "2026-12-01", endDate: null, intervalWeeks: 1, skipDates: ["2026-12-17"],
+      lines: [{ productId: rolls.id, weekday: 2, quantity: 3 }, { productId: rolls.id, weekday: 4, quantity: 2 }, { productId: loaf.id, weekday: 4, quantity: 1 }],
+    });
+    expect(res.status).toBe(200);
+    expect(res.body.standingOrder.rrule).toContain("RRULE:FREQ=WEEKLY;INTERVAL=1;BYDAY=TU,TH;WKST=MO");
+    const dates = (await orders()).map((o) => o.deliveryDate);
+    // Tue/Thu from Tue 8 Dec to the horizon (4 Jan), skipping 17 Dec (café closed) and 25 Dec (bakery closed, a Friday anyway).
+    expect(dates).toEqual(["2026-12-08", "2026-12-10", "2026-12-15", "2026-12-22", "2026-12-24", "2026-12-29", "2026-12-31"]);
+    const thu = (await orders()).find((o) => o.deliveryDate === "2026-12-10")!;
+    expect(thu).toMatchObject({ source: "standing", editedByHand: false, status: "open", totalCents: 2 * 1800 + 950 });
+    expect(res.body.standingOrder.upcoming.map((u: { date: string }) => u.date)).toEqual(dates);
+  });
+
+  it("is idempotent: running the job twice creates nothing new", async () => {
+    const before = (await orders()).length;
+    const again = await t.http().post("/api/standing-orders/materialise").set(auth(owner));
+    expect(again.status).toBe(200);
+    expect(again.body.result).toEqual({ created: 0, updated: 0, cancelled: 0 });
+    expect((await materialiseAll(t.ctx)).created).toBe(0);
+    expect((await orders()).length).toBe(before);
+  });
+
+  it("keeps orders the buyer changed by hand when the standing order changes, and shows which", async () => {
+    const tue15 = (await orders()).find((o) => o.deliveryDate === "2026-12-15")!;
+    const edit = await t.http().patch(`/api/orders/${tue15.id}`).set(auth(buyer)).send({ lines: [{ productId: rolls.id, quantity: 9 }] });
+    expect(edit.body.order.editedByHand).toBe(true);
+    const res = await t.http().put("/api/standing-orders").set(auth(buyer)).send({
+      startDate: "2026-12-01", endDate: null, intervalWeeks: 1, skipDates: ["2026-12-17"],
+      lines: [{ productId: rolls.id, weekday: 2, quantity: 5 }, { productId: rolls.id, weekday: 4, quantity: 2 }, { productId: loaf.id, weekday: 4, quantity: 1 }],
+    });
+    const all = await orders();
+    expect(all.find((o) => o.deliveryDate === "2026-12-15")!.totalCents).toBe(9 * 1800); // hand-edited: untouched
+    expect(all.find((o) => o.deliveryDate === "2026-12-22")!.totalCents).toBe(5 * 1800); // followed the change
+    const upcoming = res.body.standingOrder.upcoming as { date: string; editedByHand: boolean }[];
+    expect(upcoming.filter((u) => u.editedByHand).map((u) => u.date)).toEqual(["2026-12-15"]);
+  });
+
+  it("every other week, and a weekday removed withdraws its untouched future orders", async () => {
+    await t.http().put("/api/standing-orders").set(auth(buyer)).send({
+      startDate: "2026-12-01", endDate: null, intervalWeeks: 2, skipDates: [],
+      lines: [{ productId: rolls.id, weekday: 2, quantity: 4 }],
+    });
+    const open = (await orders()).filter((o) => o.status === "open").map((o) => o.deliveryDate);
+    // Every other Tuesday counted from the week of 1 Dec: 15 Dec and 29 Dec; 8 Dec's cut-off (7 Dec 14:00) is still ahead.
+    // Every other Tuesday from the week of Tue 1 Dec: 15 and 29 Dec. 15 Dec was also edited by hand,
+    // so it stays as the buyer left it; 8, 10, 22, 24 and 31 Dec are withdrawn.
+    expect(open).toEqual(["2026-12-15", "2026-12-29"]);
+    const withdrawn = (await orders()).filter((o) => o.status === "cancelled").map((o) => o.deliveryDate);
+    expect(withdrawn).toEqual(["2026-12-08", "2026-12-10", "2026-12-22", "2026-12-24", "2026-12-31"]);
+  });
+
+  it("refuses products or weekdays the account cannot get, with field messages", async () => {
+    const res = await t.http().put("/api/standing-orders").set(auth(buyer)).send({
+      startDate: "2026-12-01", intervalWeeks: 1, lines: [{ productId: rolls.id, weekday: 3, quantity: 2 }, { productId: 999999, weekday: 2, quantity: 1 }],
+    });
+    expect(res.status).toBe(400);
+    expect(res.body.error.fields["lines.0.weekday"]).toMatch(/no delivery/);
+    expect(res.body.error.fields["lines.1.productId"]).toMatch(/not offered/);
+    const interval = await t.http().put("/api/standing-orders").set(auth(buyer)).send({ startDate: "2026-12-10", intervalWeeks: 3, lines: [] });
+    expect(interval.body.error.fields.intervalWeeks).toBe("Choose every week or every other week.");
+    const ends = await t.http().put("/api/standing-orders").set(auth(buyer)).send({ startDate: "2026-12-10", endDate: "2026-12-01", intervalWeeks: 1, lines: [] });
+    expect(ends.body.error.fields.endDate).toBe("The end date must be after the start date.");
+  });
+});
+
+describe("calendar feed (RFC 5545), parsed with ical.js", () => {
+  it("lists the account's deliveries with their items; the URL is revocable", async () => {
+    const created = await t.http().post("/api/calendar-feed").set(auth(buyer));
+    expect(created.status).toBe(201);
+    const url = new URL(created.body.url);
+    expect(url.pathname).toMatch(/^\/api\/feeds\/[A-Za-z0-9_-]{32}\.ics$/);
+    const res = await t.http().get(url.pathname);
+    expect(res.status).toBe(200);
+    expect(res.headers["content-type"]).toMatch(/text\/calendar/);
+    const comp = new ICAL.Component(ICAL.parse(res.text));
+    const events = comp.getAllSubcomponents("vevent").map((v) => new ICAL.Event(v));
+    const open = (await orders()).filter((o) => o.status !== "cancelled");
+    expect(events.map((e) => e.startDate.toString()).sort()).toEqual(open.map((o) => o.deliveryDate).sort());
+    expect(events.every((e) => e.startDate.isDate)).toBe(true);
+    const e29 = events.find((e) => e.startDate.toString() === "2026-12-29")!;
+    expect(e29.description).toContain("4 × Rolls");
+    expect(e29.summary).toContain("Standing Bakery");
+
+    const current = await t.http().get("/api/calendar-feed").set(auth(buyer));
+    expect(current.body.url).toBe(created.body.url);
+    expect((await t.http().delete("/api/calendar-feed").set(auth(buyer))).status).toBe(204);
+    expect((await t.http().get(url.pathname)).status).toBe(404);
+  });
+});
