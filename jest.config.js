@@ -19,7 +19,7 @@ module.exports = {
       testMatch: ["<rootDir>/tests/app/**/*.test.tsx"],
       setupFilesAfterEnv: ["<rootDir>/tests/app/setup.ts"],
       transformIgnorePatterns: [
-        "node_modules/(?!((jest-)?react-native|@react-native(-community)?)|expo(nent)?|@expo(nent)?/.*|@expo-google-fonts/.*|react-navigation|@react-navigation/.*|@tanstack/.*|react-native-svg)",
+        "node_modules/(?!((jest-)?react-native|@react-native(-community)?)|expo(nent)?|@expo(nent)?/.*|@expo-google-fonts/.*|react-navigation|@react-navigation/.*|@tanstack/.*|react-native-svg|standard-navigation)",
       ],
     },
     {

@@ -81,6 +81,10 @@ export const textPairs: { fg: ColorName; bg: ColorName; use: string }[] = [
   { fg: "dangerInk", bg: "surface", use: "field error on cards" },
   { fg: "sageInk", bg: "page", use: "success note" },
   { fg: "sageInk", bg: "surface", use: "success note on cards" },
+  { fg: "ink", bg: "dangerSoft", use: "error panel body" },
+  { fg: "dangerInk", bg: "sunken", use: "field error inside a panel" },
+  { fg: "crustInk", bg: "surface", use: "current tab label" },
+  { fg: "ink", bg: "crustSoft", use: "text on a selected option" },
 ];
 
 export const fonts = {

@@ -14,3 +14,8 @@ export const bakeryApi = {
 export function useBakeryQuery() {
   return useQuery({ queryKey: bakeryKeys.detail(), queryFn: bakeryApi.get });
 }
+
+/** The bakery's time zone once known (dates and times are shown in it); undefined while loading. */
+export function useBakeryTimeZone(): string | undefined {
+  return useBakeryQuery().data?.timeZone;
+}

@@ -7,6 +7,7 @@ import { colors, layout, radii, space } from "../theme";
 import { AppText } from "../ui/Text";
 import { useAuth } from "../auth/useAuth";
 import { BrandMark } from "./BrandMark";
+import { LinkPressable } from "../ui/LinkPressable";
 import { AREA_LABEL, isActive, navFor, type NavItem } from "./navItems";
 import { useIsWide } from "./useIsWide";
 import { ROLE_LABELS, type HomeArea } from "../../shared/roles";
@@ -85,21 +86,20 @@ export function AppShell({ area, children }: { area: HomeArea; children: React.R
 function SideItem({ item, active }: { item: NavItem; active: boolean }) {
   return (
     <Link href={item.href as never} asChild>
-      <Pressable
+      <LinkPressable
         accessibilityRole="link"
         aria-current={active ? "page" : undefined}
         testID={`nav-${item.key}`}
-        style={({ pressed, hovered }: { pressed: boolean; hovered?: boolean }) => [
-          styles.sideItem,
-          (active || pressed || hovered) && { backgroundColor: colors.navActive },
-        ]}
+        style={styles.sideItem}
+        highlighted={active}
+        highlightStyle={{ backgroundColor: colors.navActive }}
       >
         <View style={[styles.sideMarker, active && { backgroundColor: colors.sageSoft }]} />
         <Feather name={item.icon} size={20} color={active ? colors.navInk : colors.navMuted} />
         <AppText variant="bodyStrong" color={active ? "navInk" : "navMuted"}>
           {item.label}
         </AppText>
-      </Pressable>
+      </LinkPressable>
     </Link>
   );
 }
@@ -132,17 +132,18 @@ function TopBar({ name, onSignOut }: { name: string; onSignOut: () => void }) {
 function BottomTabs({ items, pathname }: { items: NavItem[]; pathname: string }) {
   const insets = useSafeAreaInsets();
   return (
-    <View style={[styles.tabBar, { paddingBottom: insets.bottom }]} accessibilityRole="tablist" aria-label="Main">
+    <View style={[styles.tabBar, { paddingBottom: insets.bottom }]} {...landmark("navigation")} aria-label="Main">
       {items.map((item) => {
         const active = isActive(item, pathname);
         return (
           <Link key={item.key} href={item.href as never} asChild>
-            <Pressable
-              accessibilityRole="tab"
+            <LinkPressable
+              accessibilityRole="link"
               accessibilityState={{ selected: active }}
               aria-current={active ? "page" : undefined}
               testID={`tab-${item.key}`}
-              style={({ pressed }) => [styles.tab, pressed && { backgroundColor: colors.sunken }]}
+              style={styles.tab}
+              highlightStyle={{ backgroundColor: colors.rowHover }}
             >
               <View style={[styles.tabPill, active && styles.tabPillActive]}>
                 <Feather name={item.icon} size={20} color={active ? colors.crustInk : colors.muted} />
@@ -150,7 +151,7 @@ function BottomTabs({ items, pathname }: { items: NavItem[]; pathname: string })
               <AppText variant="caption" color={active ? "crustInk" : "muted"} style={active ? styles.tabLabelActive : undefined}>
                 {item.label}
               </AppText>
-            </Pressable>
+            </LinkPressable>
           </Link>
         );
       })}

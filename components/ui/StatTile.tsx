@@ -17,5 +17,5 @@ export function StatTile({ label, value, testID }: { label: string; value: numbe
 }
 
 const styles = StyleSheet.create({
-  tile: { flexGrow: 1, flexBasis: 120, backgroundColor: colors.sunken, borderRadius: radii.md, padding: space.md, gap: space.xxs },
+  tile: { flexGrow: 1, flexBasis: 90, minWidth: 0, backgroundColor: colors.sunken, borderRadius: radii.md, padding: space.md, gap: space.xxs },
 });

@@ -37,7 +37,7 @@ export function EmptyState({ title, message, icon = "inbox", action, testID = "e
           {message}
         </AppText>
       ) : null}
-      {action}
+      {action ? <View>{action}</View> : null}
     </View>
   );
 }

@@ -1,10 +1,12 @@
 import { DateTime } from "luxon";
+import type { EntityManager } from "typeorm";
 import type { AppContext } from "../http/context";
 import type { BakeryDto } from "../../shared/schemas/bakery";
 import { Bakery } from "./bakery.entity";
 
-export async function getBakery(ctx: AppContext): Promise<Bakery> {
-  const bakery = await ctx.dataSource.getRepository(Bakery).findOne({ where: {}, order: { id: "ASC" } });
+/** Inside a transaction pass its manager: taking a second pool connection there can starve the pool. */
+export async function getBakery(ctx: AppContext, m: EntityManager = ctx.dataSource.manager): Promise<Bakery> {
+  const bakery = await m.getRepository(Bakery).findOne({ where: {}, order: { id: "ASC" } });
   if (!bakery) throw new Error("The bakery row is missing: run the migrations and the seed (npm start does both).");
   return bakery;
 }

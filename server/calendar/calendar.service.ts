@@ -15,7 +15,7 @@ export const parseWeekdays = (s: string | null): Weekday[] | null =>
 export const formatWeekdays = (w: Weekday[] | null): string | null => (w === null ? null : [...w].sort().join(","));
 
 export async function loadCalendarSettings(ctx: AppContext, m: EntityManager = ctx.dataSource.manager): Promise<CalendarSettings & { closureNotes: Map<string, string> }> {
-  const bakery = await getBakery(ctx);
+  const bakery = await getBakery(ctx, m);
   const closures = await m.getRepository(BakeryClosure).find({ order: { date: "ASC" } });
   return {
     timeZone: bakery.timeZone,

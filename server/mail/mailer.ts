@@ -18,7 +18,12 @@ export interface Mailer {
 
 /** nodemailer over SMTP_URL. Logs say who and what, never the body (links carry tokens). */
 export function createSmtpMailer(smtpUrl: string, fromAddress: string, logger: Logger): Mailer {
-  const transport = nodemailer.createTransport(smtpUrl, { ignoreTLS: smtpUrl.startsWith("smtp://127.0.0.1") || smtpUrl.startsWith("smtp://localhost") } as never);
+  // A small connection pool: one SMTP session carries many mails instead of a handshake per mail.
+  // (nodemailer reads transport options from the URL's query string.)
+  const url = new URL(smtpUrl);
+  if (!url.searchParams.has("pool")) url.searchParams.set("pool", "true");
+  if (!url.searchParams.has("maxConnections")) url.searchParams.set("maxConnections", "3");
+  const transport = nodemailer.createTransport(url.toString());
   return {
     async send(mail) {
       const info = await transport.sendMail({

@@ -17,6 +17,7 @@ import type { FieldErrors } from "../../shared/errors";
 import type { SessionUser } from "../../shared/schemas/auth";
 import type { OrderDto, OrderStatus } from "../../shared/schemas/orders";
 import { orderMail } from "../mail/templates";
+import { retryOnDeadlock } from "../db/retry";
 
 type Settings = CalendarSettings;
 interface LineInput { productId: number; quantity: number }
@@ -167,7 +168,7 @@ export async function createOrder(ctx: AppContext, actor: SessionUser | null, in
     return (await orderDtos(ctx, [order], m))[0];
   };
   // READ COMMITTED: after waiting on the account lock, the check for an existing order must see what the other writer committed.
-  const dto = opts.manager ? await run(opts.manager) : await ctx.dataSource.transaction("READ COMMITTED", run);
+  const dto = opts.manager ? await run(opts.manager) : await retryOnDeadlock(() => ctx.dataSource.transaction("READ COMMITTED", run));
   if (!opts.skipMail) void sendOrderMail(ctx, dto, "placed");
   return dto;
 }
@@ -176,7 +177,7 @@ export async function createOrder(ctx: AppContext, actor: SessionUser | null, in
 export async function updateOrder(ctx: AppContext, actor: SessionUser, id: number, input: { lines?: LineInput[]; poNumber?: string; note?: string }): Promise<OrderDto> {
   const bakery = await getBakery(ctx);
   const settings = await loadCalendarSettings(ctx);
-  const dto = await lockAfterRefusal(ctx, ctx.dataSource.transaction(async (m) => {
+  const dto = await lockAfterRefusal(ctx, retryOnDeadlock(() => ctx.dataSource.transaction(async (m) => {
     const order = await lockOrderForWrite(ctx, m, actor, id, settings, bakery);
     const existingLines = await m.getRepository(OrderLine).findBy({ orderId: order.id });
     const oldProducts = await m.getRepository(Product).findBy({ id: In(existingLines.map((l) => l.productId).concat([0])) });
@@ -197,7 +198,7 @@ export async function updateOrder(ctx: AppContext, actor: SessionUser, id: numbe
     }
     await m.getRepository(Order).update({ id: order.id }, patch);
     return (await orderDtos(ctx, [(await m.getRepository(Order).findOneBy({ id: order.id }))!], m))[0];
-  }));
+  })));
   void sendOrderMail(ctx, dto, "changed");
   return dto;
 }
@@ -205,7 +206,7 @@ export async function updateOrder(ctx: AppContext, actor: SessionUser, id: numbe
 export async function cancelOrder(ctx: AppContext, actor: SessionUser, id: number): Promise<OrderDto> {
   const bakery = await getBakery(ctx);
   const settings = await loadCalendarSettings(ctx);
-  const dto = await lockAfterRefusal(ctx, ctx.dataSource.transaction(async (m) => {
+  const dto = await lockAfterRefusal(ctx, retryOnDeadlock(() => ctx.dataSource.transaction(async (m) => {
     const order = await lockOrderForWrite(ctx, m, actor, id, settings, bakery);
     const lines = await m.getRepository(OrderLine).findBy({ orderId: order.id });
     const products = await m.getRepository(Product).findBy({ id: In(lines.map((l) => l.productId).concat([0])) });
@@ -213,7 +214,7 @@ export async function cancelOrder(ctx: AppContext, actor: SessionUser, id: numbe
     if (ctx.clock.now().getTime() >= c.toMillis()) throw cutoffPassed(c, settings.timeZone, order.deliveryDate);
     await m.getRepository(Order).update({ id: order.id }, { status: "cancelled", editedByHand: order.source === "standing" ? true : order.editedByHand });
     return (await orderDtos(ctx, [(await m.getRepository(Order).findOneBy({ id: order.id }))!], m))[0];
-  }));
+  })));
   void sendOrderMail(ctx, dto, "cancelled");
   return dto;
 }

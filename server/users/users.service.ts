@@ -1,4 +1,4 @@
-import { IsNull, MoreThan } from "typeorm";
+import { IsNull, MoreThan, type EntityManager } from "typeorm";
 import type { AppContext } from "../http/context";
 import { HttpError, badRequest, conflict, notFound } from "../http/errors";
 import { User } from "./user.entity";
@@ -37,8 +37,8 @@ export async function getUser(ctx: AppContext, id: number): Promise<UserDto> {
   return userDto(u);
 }
 
-async function accountForBuyer(ctx: AppContext, accountId: number | null | undefined): Promise<CustomerAccount> {
-  const account = accountId ? await ctx.dataSource.getRepository(CustomerAccount).findOneBy({ id: accountId }) : null;
+async function accountForBuyer(ctx: AppContext, accountId: number | null | undefined, m: EntityManager = ctx.dataSource.manager): Promise<CustomerAccount> {
+  const account = accountId ? await m.getRepository(CustomerAccount).findOneBy({ id: accountId }) : null;
   if (!account) throw badRequest("Choose an existing customer account.", { accountId: "Choose an existing customer account." });
   if (account.status === "closed") throw badRequest("That account is closed.", { accountId: "That account is closed; reopen it first." });
   return account;
@@ -65,7 +65,7 @@ export async function updateUser(
     let accountId = user.accountId;
     if (nextRole === "buyer") {
       const wanted = patch.accountId !== undefined ? patch.accountId : user.accountId;
-      accountId = (await accountForBuyer(ctx, wanted)).id;
+      accountId = (await accountForBuyer(ctx, wanted, m)).id;
     } else {
       if (patch.accountId) throw badRequest("Only buyers belong to a customer account.", { accountId: "Only buyers belong to a customer account." });
       accountId = null;

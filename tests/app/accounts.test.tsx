@@ -1,6 +1,6 @@
-import * as ReactNative from "react-native";
+import { Dimensions } from "react-native";
 import { fireEvent, screen, waitFor } from "expo-router/testing-library";
-import { BOOKKEEPER, OWNER, account, apiError, mockApi, renderApp, sessionRoutes, signedInAs } from "./helpers";
+import { BOOKKEEPER, OWNER, account, apiError, mockApi, renderApp, sessionRoutes, signedInAs, waitForGone } from "./helpers";
 
 const ACCOUNTS = [
   account(),
@@ -8,11 +8,13 @@ const ACCOUNTS = [
   account({ id: 13, businessName: "North Pier Kiosk", status: "closed", buyerCount: 0 }),
 ];
 
-function useWidth(width: number) {
-  jest.spyOn(ReactNative, "useWindowDimensions").mockReturnValue({ width, height: 800, scale: 1, fontScale: 1 });
+const original = Dimensions.get("window");
+function setWidth(width: number) {
+  const size = { width, height: 800, scale: 1, fontScale: 1 };
+  Dimensions.set({ window: size, screen: size });
 }
 
-afterEach(() => jest.restoreAllMocks());
+afterEach(() => Dimensions.set({ window: original, screen: original }));
 
 describe("accounts list", () => {
   it("renders a row per account with its status", async () => {
@@ -27,7 +29,7 @@ describe("accounts list", () => {
   });
 
   it("shows a table from 1024 px", async () => {
-    useWidth(1280);
+    setWidth(1280);
     signedInAs(OWNER);
     mockApi({ ...sessionRoutes(OWNER), "GET /api/accounts": { body: { accounts: ACCOUNTS } } });
     renderApp("/office/accounts");
@@ -46,14 +48,15 @@ describe("accounts list", () => {
     renderApp("/office/accounts");
     await screen.findByTestId("account-row-11");
     fireEvent.press(screen.getByTestId("accounts-status-on_hold"));
-    await waitFor(() => expect(screen.queryByTestId("account-row-11")).toBeNull());
-    expect(screen.getByTestId("account-row-12")).toBeOnTheScreen();
+    expect(await screen.findByTestId("account-row-12")).toBeOnTheScreen();
+    expect(screen.queryByTestId("account-row-11")).toBeNull();
     expect(api.calls.some((c) => c.path === "/api/accounts" && c.query.status === "on_hold")).toBe(true);
 
     fireEvent.press(screen.getByTestId("accounts-status-all"));
     fireEvent.changeText(screen.getByLabelText("Search accounts"), "pier");
+    await waitFor(() => expect(api.calls.some((c) => c.path === "/api/accounts" && c.query.q === "pier")).toBe(true));
     expect(await screen.findByTestId("account-row-13")).toBeOnTheScreen();
-    await waitFor(() => expect(screen.queryByTestId("account-row-12")).toBeNull());
+    await waitForGone("account-row-12");
     expect(api.calls.some((c) => c.path === "/api/accounts" && c.query.q === "pier")).toBe(true);
   });
 

@@ -1,6 +1,6 @@
 import React from "react";
 import { Slot } from "expo-router";
-import { renderRouter, type RenderRouterOptions } from "expo-router/testing-library";
+import { renderRouter, screen, waitFor, type RenderRouterOptions } from "expo-router/testing-library";
 import { QueryClient } from "@tanstack/react-query";
 import { AppProviders } from "../../components/AppProviders";
 import { writeSession } from "../../components/auth/storage";
@@ -170,4 +170,18 @@ export function renderApp(initialUrl: string, options: RenderRouterOptions = {})
   }
   const result = renderRouter({ appDir: "app", overrides: { _layout: TestRoot } }, { initialUrl, ...options });
   return Object.assign(result, { queryClient });
+}
+
+/** Wait until nothing with this testID is on the screen (with a short failure message: formatting a whole tree is slow). */
+export async function waitForGone(testID: string) {
+  await waitFor(() => {
+    if (screen.queryByTestId(testID)) throw new Error(`"${testID}" is still on the screen`);
+  });
+}
+
+/** Wait until nothing with this label is on the screen. */
+export async function waitForLabelGone(label: string) {
+  await waitFor(() => {
+    if (screen.queryByLabelText(label)) throw new Error(`"${label}" is still on the screen`);
+  });
 }

@@ -1,5 +1,5 @@
-import { fireEvent, screen, waitFor } from "expo-router/testing-library";
-import { BUYER, account, apiError, mockApi, renderApp, sessionRoutes } from "./helpers";
+import { fireEvent, screen } from "expo-router/testing-library";
+import { BUYER, account, apiError, mockApi, renderApp, sessionRoutes, waitForLabelGone } from "./helpers";
 import { readSession } from "../../components/auth/storage";
 
 const TOKEN = "tok_abcdefghijklmnop";
@@ -101,6 +101,6 @@ describe("set-password: invitation", () => {
     });
     renderApp(`/set-password?kind=invite&token=${TOKEN}`);
     expect(await screen.findByTestId("set-password-link-error")).toHaveTextContent(/has expired/);
-    await waitFor(() => expect(screen.queryByLabelText("New password")).toBeNull());
+    await waitForLabelGone("New password");
   });
 });

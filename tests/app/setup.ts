@@ -1,8 +1,3 @@
-// expo-router 56 requires "standard-navigation", an ES-module-only package that jest.config.js's
-// transformIgnorePatterns does not transform yet. Its whole API is this one function.
-jest.mock("standard-navigation", () => ({
-  createStandardNavigator: (NavigatorContent: unknown) => ({ type: "standard", version: 1, NavigatorContent }),
-}));
 
 import { clearSession } from "../../components/auth/storage";
 import { setAuthToken, setUnauthorizedHandler } from "../../components/api/client";

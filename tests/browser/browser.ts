@@ -1,5 +1,4 @@
 import fs from "node:fs";
-import os from "node:os";
 import path from "node:path";
 import { chromium, type Browser, type BrowserContext, type Page } from "playwright-core";
 
@@ -11,23 +10,20 @@ export const DESKTOP = { width: 1280, height: 800 };
 const SHOTS = path.resolve(__dirname, "..", "..", "test-artifacts", "screenshots");
 
 let browser: Browser | null = null;
-let profile: string | null = null;
 
-/** Debian's Chromium, headless, with the flags this machine needs (no browser download). */
+/** Debian's Chromium, headless, with the flags this machine needs (no browser download); Playwright gives it a fresh temporary profile. */
 export async function launch(): Promise<Browser> {
-  profile = fs.mkdtempSync(path.join(os.tmpdir(), "panwise-chromium-"));
   browser = await chromium.launch({
     executablePath: process.env.CHROMIUM_PATH || "/usr/bin/chromium",
     headless: true,
     args: ["--no-sandbox", "--disable-gpu", "--disable-quic", "--no-first-run", "--disable-background-networking",
-      "--disable-component-update", "--disable-sync", `--user-data-dir=${profile}`],
+      "--disable-component-update", "--disable-sync"],
   });
   return browser;
 }
 
 export async function close() {
   await browser?.close();
-  if (profile) fs.rmSync(profile, { recursive: true, force: true });
 }
 
 export async function newPage(viewport: { width: number; height: number }): Promise<{ context: BrowserContext; page: Page }> {

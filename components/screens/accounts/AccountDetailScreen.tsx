@@ -14,6 +14,7 @@ import { AppText } from "../../ui/Text";
 import { useSignedInUser } from "../../auth/useAuth";
 import { useAccountQuery, useUpdateAccountMutation } from "../../api/accounts";
 import { ApiError, messageOf } from "../../api/client";
+import { useBakeryTimeZone } from "../../api/bakery";
 import { formatDateTime } from "../../format";
 import { useIsWide } from "../../shell/useIsWide";
 import { ACCOUNT_STATUS_LABELS, type AccountDto, type AccountStatus } from "../../../shared/schemas/accounts";
@@ -25,6 +26,7 @@ export function AccountDetailScreen({ id }: { id: number }) {
   const isOwner = user.role === "owner";
   const wide = useIsWide();
   const account = useAccountQuery(Number.isInteger(id) && id > 0 ? id : null);
+  const timeZone = useBakeryTimeZone();
 
   if (!Number.isInteger(id) || id <= 0 || (account.isError && account.error instanceof ApiError && account.error.status === 404)) {
     return (
@@ -70,8 +72,8 @@ export function AccountDetailScreen({ id }: { id: number }) {
                 { label: "Contact phone", value: a.contactPhone },
                 { label: "Billing e-mail", value: a.billingEmail, testID: "account-billing-email" },
                 { label: "Buyers", value: a.buyerCount === 1 ? "1 active buyer" : `${a.buyerCount} active buyers` },
-                { label: "Added", value: formatDateTime(a.createdAt) },
-                { label: "Last changed", value: formatDateTime(a.updatedAt) },
+                { label: "Added", value: formatDateTime(a.createdAt, timeZone) },
+                { label: "Last changed", value: formatDateTime(a.updatedAt, timeZone) },
               ]}
             />
           </Card>

@@ -9,6 +9,7 @@ import { StatusBadge } from "../../ui/Badge";
 import { AppText } from "../../ui/Text";
 import { useSignedInUser } from "../../auth/useAuth";
 import { useAccountQuery } from "../../api/accounts";
+import { useBakeryTimeZone } from "../../api/bakery";
 import { accountStatusNote } from "./BuyerHome";
 import { formatDate } from "../../format";
 
@@ -16,6 +17,7 @@ import { formatDate } from "../../format";
 export function BuyerAccountScreen() {
   const user = useSignedInUser();
   const account = useAccountQuery(user.accountId);
+  const timeZone = useBakeryTimeZone();
 
   if (!user.accountId) {
     return (
@@ -47,7 +49,7 @@ export function BuyerAccountScreen() {
                 { label: "Contact phone", value: account.data.contactPhone },
                 { label: "Billing e-mail", value: account.data.billingEmail },
                 { label: "People ordering", value: String(account.data.buyerCount) },
-                { label: "Customer since", value: formatDate(account.data.createdAt) },
+                { label: "Customer since", value: formatDate(account.data.createdAt, timeZone) },
               ]}
             />
           </Card>

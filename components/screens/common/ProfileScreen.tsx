@@ -1,5 +1,4 @@
 import React from "react";
-import { StyleSheet, View } from "react-native";
 import { Screen } from "../../ui/Screen";
 import { PageHeader } from "../../ui/PageHeader";
 import { Card } from "../../ui/Card";
@@ -8,15 +7,13 @@ import { Button } from "../../ui/Button";
 import { FormError, Notice } from "../../ui/FormError";
 import { AppText } from "../../ui/Text";
 import { RoleBadge } from "../../ui/Badge";
-import { useSignedInUser, useAuth } from "../../auth/useAuth";
+import { useSignedInUser } from "../../auth/useAuth";
 import { usePasswordResetRequestMutation } from "../../api/auth";
 import { messageOf } from "../../api/client";
-import { space } from "../../theme";
 
-/** "You": who is signed in, a way to change the password, and Sign out. */
+/** "You": who is signed in, and a way to change the password (Sign out sits in the navigation). */
 export function ProfileScreen() {
   const user = useSignedInUser();
-  const { signOut } = useAuth();
   const reset = usePasswordResetRequestMutation();
   return (
     <Screen narrow testID="profile-screen">
@@ -43,13 +40,6 @@ export function ProfileScreen() {
           testID="profile-reset"
         />
       </Card>
-      <View style={styles.signOut}>
-        <Button label="Sign out" icon="log-out" variant="danger" onPress={signOut} testID="profile-sign-out" />
-      </View>
     </Screen>
   );
 }
-
-const styles = StyleSheet.create({
-  signOut: { paddingTop: space.sm },
-});

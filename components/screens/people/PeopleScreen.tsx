@@ -14,6 +14,7 @@ import { useSignedInUser } from "../../auth/useAuth";
 import { useUsersQuery } from "../../api/users";
 import { useInvitationsQuery, useRevokeInvitationMutation } from "../../api/invitations";
 import { messageOf } from "../../api/client";
+import { useBakeryTimeZone } from "../../api/bakery";
 import { useDebounced } from "../../forms/useDebounced";
 import { formatDateTime } from "../../format";
 import { useIsWide } from "../../shell/useIsWide";
@@ -119,6 +120,7 @@ function Invitations({ wide }: { wide: boolean }) {
 
 function InvitationLine({ invitation, first, wide }: { invitation: InvitationDto; first: boolean; wide: boolean }) {
   const revoke = useRevokeInvitationMutation();
+  const timeZone = useBakeryTimeZone();
   const [confirming, setConfirming] = useState(false);
   return (
     <View style={[styles.invite, !first && styles.divider]} testID={`invitation-${invitation.id}`}>
@@ -134,7 +136,7 @@ function InvitationLine({ invitation, first, wide }: { invitation: InvitationDto
                 {invitation.accountName}
               </AppText>
             ) : null}
-            <AppText variant="small" color="muted">{`Link works until ${formatDateTime(invitation.expiresAt)}`}</AppText>
+            <AppText variant="small" color="muted">{`Link works until ${formatDateTime(invitation.expiresAt, timeZone)}`}</AppText>
           </View>
         </View>
         {confirming ? (

@@ -6,6 +6,7 @@ import { FormError, Notice } from "../../ui/FormError";
 import { Badge, RoleBadge } from "../../ui/Badge";
 import { AppText } from "../../ui/Text";
 import { useUpdateUserMutation } from "../../api/users";
+import { useBakeryTimeZone } from "../../api/bakery";
 import { ApiError, messageOf } from "../../api/client";
 import { splitError, validate } from "../../forms/errors";
 import { formatDateTime } from "../../format";
@@ -33,6 +34,7 @@ export function userChangeMessage(error: unknown): string {
 /** One person: who they are, and the owner's controls (change role, turn the sign-in off or on). */
 export function UserRow({ user, isSelf, wide }: UserRowProps) {
   const mutation = useUpdateUserMutation();
+  const timeZone = useBakeryTimeZone();
   const [editing, setEditing] = useState(false);
   const [role, setRole] = useState<Role>(user.role);
   const [accountId, setAccountId] = useState<number | null>(user.accountId);
@@ -143,7 +145,7 @@ export function UserRow({ user, isSelf, wide }: UserRowProps) {
           <View style={{ flex: 0.9 }}>{status}</View>
           <View style={{ flex: 1.2 }}>
             <AppText variant="small" color="muted">
-              {formatDateTime(user.lastSignInAt)}
+              {formatDateTime(user.lastSignInAt, timeZone)}
             </AppText>
           </View>
           <View style={{ flex: 2 }}>{actions}</View>
@@ -155,7 +157,7 @@ export function UserRow({ user, isSelf, wide }: UserRowProps) {
             {status}
           </View>
           {roleCell}
-          <AppText variant="small" color="muted">{`Last signed in: ${formatDateTime(user.lastSignInAt)}`}</AppText>
+          <AppText variant="small" color="muted">{`Last signed in: ${formatDateTime(user.lastSignInAt, timeZone)}`}</AppText>
           {actions}
         </View>
       )}
