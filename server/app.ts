@@ -14,6 +14,10 @@ import { catalogRoutes, priceListRoutes, uploadsRoutes } from "./catalog/catalog
 import { accountDeliveryRoutes, calendarRoutes, settingsRoutes } from "./calendar/calendar.routes";
 import { feedRoutes, ordersRoutes, publicFeedRoutes, standingOrderRoutes } from "./orders/orders.routes";
 
+export function redactUrl(url: string | undefined): string {
+  return (url || "").replace(/(\/api\/auth\/invitations\/)[^/?]+/, "$1[redacted]").replace(/(\/api\/feeds\/)[^/?]+/, "$1[redacted]").replace(/([?&]token=)[^&]+/, "$1[redacted]");
+}
+
 /** The API alone: every route under it is mounted here, and nowhere else. */
 export function apiRouter(ctx: AppContext): Router {
   const api = Router();
@@ -74,7 +78,8 @@ export function createApp(ctx: AppContext) {
       logger: ctx.logger,
       customLogLevel: (_req, res, err) => (err || res.statusCode >= 500 ? "error" : res.statusCode >= 400 ? "warn" : "info"),
       serializers: {
-        req: (req) => ({ method: req.method, url: req.url, id: req.id }),
+        // Link tokens travel in some paths (invitation check, calendar feed): never log them.
+        req: (req) => ({ method: req.method, url: redactUrl(req.url), id: req.id }),
         res: (res) => ({ statusCode: res.statusCode }),
       },
       autoLogging: { ignore: (req) => !(req.url || "").startsWith("/api") },
