@@ -39,6 +39,20 @@ export class Bakery {
   @Column({ type: "int", default: 28 })
   horizonDays: number;
 
+  /** Production: the mixer's dough capacity per batch, in kg. */
+  @Column({ type: "decimal", precision: 6, scale: 2, default: 20 })
+  mixerCapacityKg: string;
+
+  /** Local time the bread leaves, "HH:mm". */
+  @Column({ type: "char", length: 5, default: "06:30" })
+  dispatchTime: string;
+
+  @Column({ type: "int", default: 1 })
+  ovens: number;
+
+  @Column({ type: "int", default: 6 })
+  pansPerLoad: number;
+
   @CreateDateColumn({ type: "datetime", precision: 3, default: () => "CURRENT_TIMESTAMP(3)" })
   createdAt: Date;
 

@@ -1,0 +1,189 @@
+import { DateTime } from "luxon";
+import {
+  apportion, bakeWaves, formulaFigures, liquidTemperature, planDough, planProduct, roundGrams, scheduleTimeline, validateFormula,
+  type FormulaSpec, type IngredientInfo,
+} from "../../shared/production";
+import { GRAMS_PER_OUNCE, GRAMS_PER_POUND, celsiusToFahrenheit, fahrenheitToCelsius, formatMass, gramsToOunces, mmToInches } from "../../shared/units";
+
+const lib = new Map<number, IngredientInfo>([
+  [1, { id: 1, name: "Bread flour", kind: "flour", waterPercent: 12 }],
+  [2, { id: 2, name: "Water", kind: "liquid", waterPercent: 100 }],
+  [3, { id: 3, name: "Salt", kind: "salt", waterPercent: 0 }],
+  [4, { id: 4, name: "Instant yeast", kind: "leavening", waterPercent: 5 }],
+  [5, { id: 5, name: "Whole milk", kind: "liquid", waterPercent: 88 }],
+  [6, { id: 6, name: "Butter", kind: "fat", waterPercent: 16 }],
+  [7, { id: 7, name: "Whole egg", kind: "egg", waterPercent: 76 }],
+  [8, { id: 8, name: "Sugar", kind: "sugar", waterPercent: 0 }],
+]);
+
+describe("baker's percentages against a published worked example", () => {
+  /**
+   * Source (from memory): the standard textbook worked example of baker's percentages (e.g. W. Gisslen,
+   * Professional Baking, ch. on baker's math): flour 100 %, water 60 %, salt 2 %, yeast 1 % — with
+   * 1,000 g of flour that is 600 g water, 20 g salt, 10 g yeast, 1,630 g of dough (total 163 %).
+   */
+  const lean: FormulaSpec = { id: 1, version: 1, name: "Lean", lossPercent: 0, ddtC: 24, frictionC: 14, paste: null, steps: [],
+    lines: [{ ingredientId: 1, percent: 100 }, { ingredientId: 2, percent: 60 }, { ingredientId: 3, percent: 2 }, { ingredientId: 4, percent: 1 }] };
+
+  it("works each ingredient out from the flour, and the flour back from the dough weight", () => {
+    // 1,630 g of dough as 163 pieces of 10 g, no loss allowance.
+    const products = [planProduct({ productId: 1, name: "x", units: 163, extraPans: 0, unitsPerPan: 1, piecesPerUnit: 1, pieceGrams: 10, formulaId: 1 })];
+    const dough = planDough(lean, lib, products, 50, { roomC: 22, flourC: 20, pasteC: 30 });
+    expect(dough.doughGrams).toBe(1630);
+    expect(dough.flourGrams).toBe(1000);
+    expect(dough.ingredients.map((i) => [i.name, i.grams])).toEqual([["Bread flour", 1000], ["Water", 600], ["Salt", 20], ["Instant yeast", 10]]);
+    expect(formulaFigures(lean, lib)).toMatchObject({ totalPercent: 163, flourPercent: 100, hydrationPercent: 60, doughYieldPerKgFlour: 1630 });
+  });
+
+  it("adds the loss allowance on top: dough = pieces ÷ (1 − loss)", () => {
+    const products = [planProduct({ productId: 1, name: "x", units: 98, extraPans: 0, unitsPerPan: 1, piecesPerUnit: 1, pieceGrams: 10, formulaId: 1 })];
+    const dough = planDough({ ...lean, lossPercent: 2 }, lib, products, 50, { roomC: 22, flourC: 20, pasteC: 30 });
+    expect(dough.doughGrams).toBe(1000); // 980 ÷ 0.98
+  });
+});
+
+describe("desired dough temperature against a published worked example", () => {
+  /**
+   * Source (from memory): the usual three-factor worked example in bread-baking texts (e.g. J. Hamelman,
+   * Bread): DDT 76 °F × 3 = 228; minus room 72 °F, flour 70 °F and friction 26 °F leaves water at 60 °F.
+   * Panwise works in °C; the same example converted exactly must give 60 °F.
+   */
+  it("three factors without a paste", () => {
+    const c = fahrenheitToCelsius;
+    const { liquidC, advice } = liquidTemperature(c(76), 26 * (5 / 9), { roomC: c(72), flourC: c(70), pasteC: 0 }, false);
+    expect(celsiusToFahrenheit(liquidC)).toBeCloseTo(60, 0);
+    expect(advice).toBeNull();
+  });
+
+  it("four factors with the paste, and flags liquid colder than 2 °C or warmer than 40 °C", () => {
+    // 26 × 4 − (24 + 22 + 12 + 30) = 16 °C
+    expect(liquidTemperature(26, 12, { roomC: 24, flourC: 22, pasteC: 30 }, true)).toEqual({ liquidC: 16, advice: null });
+    const hot = liquidTemperature(26, 12, { roomC: 30, flourC: 28, pasteC: 60 }, true); // 104 − 130 = −26
+    expect(hot.liquidC).toBe(-26);
+    expect(hot.advice).toMatch(/crushed ice/);
+    const cold = liquidTemperature(26, 4, { roomC: 10, flourC: 8, pasteC: 20 }, true); // 104 − 42 = 62
+    expect(cold.liquidC).toBe(62);
+    expect(cold.advice).toMatch(/stresses the yeast/);
+  });
+});
+
+describe("unit conversions with exact factors (NIST SP 811 Appendix B / Handbook 44)", () => {
+  it("uses 1 lb = 453.592 37 g, 1 oz = 28.349 523 125 g, 1 in = 25.4 mm, °F = °C × 9/5 + 32", () => {
+    expect(GRAMS_PER_POUND).toBe(453.59237);
+    expect(GRAMS_PER_OUNCE).toBe(28.349523125);
+    expect(gramsToOunces(453.59237)).toBe(16);
+    expect(celsiusToFahrenheit(100)).toBe(212);
+    expect(celsiusToFahrenheit(-40)).toBe(-40);
+    expect(celsiusToFahrenheit(65)).toBe(149);
+    expect(mmToInches(330)).toBeCloseTo(12.99, 2);
+    expect(formatMass(1000, "us")).toBe("2 lb 3.27 oz"); // 1000 g = 2.2046 lb
+    expect(formatMass(67, "us")).toBe("2.36 oz");
+    expect(formatMass(1234, "metric")).toBe("1,234 g");
+    expect(formatMass(12.34, "metric")).toBe("12.3 g");
+  });
+});
+
+describe("trade facts (common practice, no source)", () => {
+  /**
+   * Common practice, no source: a cooked paste of about 1 part flour to 5 parts liquid, heated to about 65 °C;
+   * dinner rolls of 65–70 g, 15 to a 9 × 13 in pan (3 × 5); baked at about 177 °C (350 °F) for 25–30 min;
+   * about 88–90 °C inside when done. Water contents of whole milk (~88 %), butter (~16 %) and whole egg (~76 %)
+   * are USDA FoodData Central values, from memory.
+   */
+  const rolls: FormulaSpec = {
+    id: 7, version: 3, name: "Milk bread", lossPercent: 2, ddtC: 26, frictionC: 12, targetInternalC: 89,
+    paste: { flourIngredientId: 1, liquidIngredientId: 5, flourPercent: 5, liquidRatio: 5, cookToC: 65 },
+    lines: [
+      { ingredientId: 1, percent: 100 }, { ingredientId: 5, percent: 60 }, { ingredientId: 7, percent: 10 },
+      { ingredientId: 6, percent: 10 }, { ingredientId: 8, percent: 10 }, { ingredientId: 3, percent: 2 }, { ingredientId: 4, percent: 1.5 },
+    ],
+    steps: [
+      { kind: "paste", minutes: 40 }, { kind: "mix", minutes: 15 }, { kind: "bulk", minutes: 60 }, { kind: "divide", minutes: 20 },
+      { kind: "bench", minutes: 10 }, { kind: "shape", minutes: 20 }, { kind: "proof", minutes: 50 }, { kind: "wash", minutes: 5 },
+      { kind: "bake", minutes: 27, temperatureC: 177 }, { kind: "cool", minutes: 30 },
+    ],
+  };
+
+  it("a plan for trays of 15 rolls at 67 g is consistent with them", () => {
+    expect(rolls.paste!.liquidRatio).toBe(5);
+    expect(rolls.paste!.cookToC).toBe(65);
+    expect(Math.abs(celsiusToFahrenheit(177) - 350)).toBeLessThan(1); // 177 °C = 350.6 °F
+    const bake = rolls.steps.find((s) => s.kind === "bake")!;
+    expect(bake.minutes).toBeGreaterThanOrEqual(25);
+    expect(bake.minutes).toBeLessThanOrEqual(30);
+    expect(rolls.targetInternalC).toBeGreaterThanOrEqual(88);
+    expect(rolls.targetInternalC).toBeLessThanOrEqual(90);
+
+    const product = planProduct({ productId: 1, name: "Dinner rolls", units: 10, extraPans: 1, unitsPerPan: 1, piecesPerUnit: 15, pieceGrams: 67, formulaId: 7 });
+    expect(product.pans).toBe(11);
+    expect(product.pieces).toBe(165); // 3 × 5 rolls in each 9×13 pan
+    expect(product.pieceGrams).toBeGreaterThanOrEqual(65);
+    expect(product.pieceGrams).toBeLessThanOrEqual(70);
+
+    const dough = planDough(rolls, lib, [product], 20, { roomC: 24, flourC: 22, pasteC: 30 });
+    // 165 × 67 g = 11,055 g of pieces ÷ 0.98 = 11,280.6 g of dough; total 193.5 % → 5,829.8 g of flour.
+    expect(dough.doughGrams).toBe(11281);
+    expect(dough.flourGrams).toBe(5830);
+    expect(dough.paste).toEqual({ flourGrams: 291, liquidGrams: 1457, cookToC: 65 }); // 5 % of the flour, × 5 in milk
+    expect(dough.paste!.liquidGrams / dough.paste!.flourGrams).toBeCloseTo(5, 1);
+    const milk = dough.ingredients.find((i) => i.name === "Whole milk")!;
+    expect(milk.pasteGrams + milk.finalMixGrams).toBe(milk.grams);
+    const flour = dough.ingredients.find((i) => i.name === "Bread flour")!;
+    expect(flour.pasteGrams + flour.finalMixGrams).toBe(flour.grams);
+    // Mixer holds 20 kg: one mix. With an 8 kg mixer: two mixes that add up to the totals exactly.
+    expect(dough.mixes).toHaveLength(1);
+    const split = planDough(rolls, lib, [product], 8, { roomC: 24, flourC: 22, pasteC: 30 });
+    expect(split.mixes).toHaveLength(2);
+    for (const ing of split.ingredients) {
+      const parts = split.mixes.map((m) => m.ingredients.find((i) => i.ingredientId === ing.ingredientId)!.grams);
+      expect(Math.round(parts.reduce((a, b) => a + b, 0) * 10) / 10).toBe(ing.grams);
+    }
+    // Liquid temperature with the paste as a fourth factor: 26 × 4 − (24 + 22 + 12 + 30) = 16 °C.
+    expect(dough.mixes[0].liquidTempC).toBe(16);
+  });
+
+  it("effective hydration counts the water in milk, butter and egg (USDA FoodData Central, from memory)", () => {
+    const f = formulaFigures(rolls, lib);
+    // water: flour 100×0.12 + milk 60×0.88 + egg 10×0.76 + butter 10×0.16 + yeast 1.5×0.05 = 74.075
+    expect(f.effectiveHydrationPercent).toBeCloseTo(74.075, 3);
+    expect(f.hydrationPercent).toBe(60);
+    expect(f.pasteSharePercent).toBe(5);
+    expect(f.pastePercent).toBeCloseTo(30, 6); // 5 % flour + 25 % milk
+  });
+
+  it("schedules bake waves back from a 06:30 dispatch, possibly from the evening before", () => {
+    const product = planProduct({ productId: 1, name: "Dinner rolls", units: 10, extraPans: 0, unitsPerPan: 1, piecesPerUnit: 15, pieceGrams: 67, formulaId: 7 });
+    const waves = bakeWaves([product], [7], 6); // one oven of 6 pans: 6 + 4 pans
+    expect(waves.map((w) => w.pans[0].pans)).toEqual([6, 4]);
+    const dispatch = DateTime.fromISO("2026-06-11T06:30", { zone: "America/Chicago" });
+    const tl = scheduleTimeline(waves, new Map([[7, rolls]]), dispatch);
+    const at = (step: string, wave: number) => tl.find((e) => e.step === step && e.wave === wave)!;
+    expect(at("cool", 2).endsAt).toBe("2026-06-11T06:30:00.000-05:00");
+    expect(at("bake", 2).startsAt).toBe("2026-06-11T05:33:00.000-05:00"); // 06:30 − 30 − 27
+    expect(at("bake", 1).endsAt).toBe(at("bake", 2).startsAt);
+    expect(at("bake", 1).startsAt).toBe("2026-06-11T05:06:00.000-05:00");
+    expect(at("paste", 1).startsAt).toBe("2026-06-11T01:26:00.000-05:00"); // 05:06 − 220 min of steps before the bake
+    expect(at("bake", 1).temperatureC).toBe(177);
+    const early = scheduleTimeline(waves, new Map([[7, { ...rolls, steps: rolls.steps.map((s) => (s.kind === "bulk" ? { ...s, minutes: 12 * 60 } : s)) }]]), dispatch);
+    expect(early.find((e) => e.step === "paste")!.startsAt.slice(0, 10)).toBe("2026-06-10"); // the evening before
+  });
+});
+
+describe("formula checks", () => {
+  it("refuses flour not adding to 100 %, bad percents, and a paste that needs more than the formula holds", () => {
+    const errs = validateFormula({ lossPercent: 2, paste: null, lines: [{ ingredientId: 1, percent: 90 }, { ingredientId: 2, percent: 60 }] }, lib);
+    expect(errs.lines).toMatch(/add up to 90 %.*100 %/);
+    expect(validateFormula({ lossPercent: 2, paste: null, lines: [{ ingredientId: 1, percent: 100 }, { ingredientId: 2, percent: -5 }] }, lib)["lines.1.percent"]).toMatch(/more than 0/);
+    expect(validateFormula({ lossPercent: 2, paste: null, lines: [{ ingredientId: 99, percent: 100 }] }, lib)["lines.0.ingredientId"]).toMatch(/not in the library/);
+    const paste = validateFormula({ lossPercent: 2, paste: { flourIngredientId: 1, liquidIngredientId: 5, flourPercent: 20, liquidRatio: 5, cookToC: 65 }, lines: [{ ingredientId: 1, percent: 100 }, { ingredientId: 5, percent: 60 }] }, lib);
+    expect(paste["paste.liquidRatio"]).toMatch(/needs 100 % liquid.*only 60 %/);
+  });
+
+  it("rounds grams to 1 g, or 0.1 g under 50 g, and apportions exactly", () => {
+    expect(roundGrams(1234.5)).toBe(1235);
+    expect(roundGrams(12.34)).toBe(12.3);
+    expect(roundGrams(49.96)).toBe(50);
+    expect(apportion(1001, 3, 1)).toEqual([334, 334, 333]);
+    expect(apportion(17.5, 2, 0.1)).toEqual([8.8, 8.7]);
+  });
+});
