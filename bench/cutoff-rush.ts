@@ -94,8 +94,8 @@ async function rush(base: string, deliveryDate: string, cutoffMs: number) {
   return { samples, accepted, seconds: (Date.now() - start) / 1000 };
 }
 
-/** The baseline: a bare Express route inserting one row with mysql2, under the same client load. */
-async function baseline(dbName: string, count: number) {
+/** The baseline: a bare Express route inserting one row with mysql2, under the same client load (300 clients, 1–4 s apart). */
+async function baseline(dbName: string, seconds: number) {
   const cfg = loadConfig().db;
   const pool = mysql.createPool({ host: cfg.host, port: cfg.port, user: cfg.user, password: cfg.password, database: dbName, connectionLimit: 10 });
   await pool.query("CREATE TABLE bare_insert (id INT AUTO_INCREMENT PRIMARY KEY, accountId INT NOT NULL, qty INT NOT NULL, at DATETIME(3) NOT NULL)");
@@ -108,15 +108,15 @@ async function baseline(dbName: string, count: number) {
   const port = await freePort();
   const server = app.listen(port, "127.0.0.1");
   const ms: number[] = [];
-  const perBuyer = Math.ceil(count / BUYERS);
   const t0 = Date.now();
+  const until = t0 + seconds * 1000;
   await Promise.all(Array.from({ length: BUYERS }, async (_, i) => {
-    await sleep(Math.random() * 1000);
-    for (let k = 0; k < perBuyer; k++) {
+    await sleep(Math.random() * 3000);
+    for (let k = 0; Date.now() < until; k++) {
       const s = Date.now();
       await fetch(`http://127.0.0.1:${port}/insert`, { method: "POST", headers: { "content-type": "application/json" }, body: JSON.stringify({ accountId: i, qty: k }) });
       ms.push(Date.now() - s);
-      await sleep(Math.random() * 300);
+      await sleep(1000 + Math.random() * 3000);
     }
   }));
   const seconds = (Date.now() - t0) / 1000;
@@ -157,7 +157,7 @@ async function main() {
     for (const a of accepted.values()) if (qtyByOrder.get(a.orderId) !== a.lastQty) lost++;
     const lockedCount: { n: string }[] = await ds.query("SELECT COUNT(*) AS n FROM customer_order WHERE deliveryDate = ? AND status = 'locked'", [deliveryDate]);
 
-    const base = await baseline(dbName, samples.length);
+    const base = await baseline(dbName, Math.min(60, WINDOW_S));
     const report = {
       buyers: BUYERS,
       windowSeconds: WINDOW_S,

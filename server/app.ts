@@ -13,6 +13,7 @@ import { bakeryRoutes, officeRoutes } from "./bakery/bakery.routes";
 import { catalogRoutes, priceListRoutes, uploadsRoutes } from "./catalog/catalog.routes";
 import { accountDeliveryRoutes, calendarRoutes, settingsRoutes } from "./calendar/calendar.routes";
 import { feedRoutes, ordersRoutes, publicFeedRoutes, standingOrderRoutes } from "./orders/orders.routes";
+import { formulaRoutes, ingredientRoutes, productionRoutes } from "./production/production.routes";
 
 export function redactUrl(url: string | undefined): string {
   return (url || "").replace(/(\/api\/auth\/invitations\/)[^/?]+/, "$1[redacted]").replace(/(\/api\/feeds\/)[^/?]+/, "$1[redacted]").replace(/([?&]token=)[^&]+/, "$1[redacted]");
@@ -49,6 +50,9 @@ export function apiRouter(ctx: AppContext): Router {
   api.use("/standing-orders", standingOrderRoutes(ctx));
   api.use("/calendar-feed", feedRoutes(ctx));
   api.use("/feeds", publicFeedRoutes(ctx));
+  api.use("/ingredients", ingredientRoutes(ctx));
+  api.use("/formulas", formulaRoutes(ctx));
+  api.use("/production", productionRoutes(ctx));
   api.use(apiNotFound);
   return api;
 }

@@ -3,6 +3,7 @@ import { createDataSource } from "./db/data-source";
 import { isEmpty, seedDemo } from "./seed/demo";
 import { buildContext } from "./context";
 import { materialiseAll } from "./orders/standing.service";
+import { seedHistory } from "./seed/history";
 
 /**
  * Command line: `node --import tsx server/cli.ts <command>`
@@ -33,6 +34,9 @@ async function main() {
         if (await isEmpty(ds)) {
           const { created } = await seedDemo(ds);
           console.log(`seeded the Hollowbrook Bakehouse demo (${created} rows)`);
+          const ctx = buildContext({ dataSource: ds });
+          console.log(`demo history: ${await seedHistory(ctx)} past or locked order(s)`);
+          ctx.mailer.close();
         } else {
           console.log("database ready");
         }

@@ -7,8 +7,10 @@ import { HttpError, badRequest, conflict, notFound, parse } from "../http/errors
 import { Product } from "./product.entity";
 import { PriceList, PriceListItem } from "./price-list.entity";
 import { CustomerAccount } from "../accounts/account.entity";
+import { Formula } from "../production/production.entity";
 import { productInputSchema, priceListInputSchema, type PriceListDto, type ProductDto } from "../../shared/schemas/catalog";
-import { sortAllergens } from "../../shared/allergens";
+import { sortAllergens, type AllergenCode } from "../../shared/allergens";
+import { derivedAllergens } from "../production/formulas.service";
 import { applyPercentOff } from "../../shared/money";
 import type { SessionUser } from "../../shared/schemas/auth";
 
@@ -35,7 +37,11 @@ export async function pricingFor(ctx: AppContext, accountId: number | null, m: E
 
 export const photoUrl = (p: Product) => (p.photoFile ? `/api/uploads/${p.photoFile}` : null);
 
-export function productDto(p: Product, pricing?: Pricing): ProductDto {
+/**
+ * A product with a formula takes its allergens from the formula's ingredients; its own list is used
+ * only while it has no formula. The "may contain" note is always the product's own.
+ */
+export function productDto(p: Product, pricing?: Pricing, derived?: Map<number, AllergenCode[]>): ProductDto {
   return {
     id: p.id,
     name: p.name,
@@ -53,7 +59,7 @@ export function productDto(p: Product, pricing?: Pricing): ProductDto {
     minQuantity: p.minQuantity,
     maxQuantity: p.maxQuantity,
     leadDays: p.leadDays,
-    allergens: sortAllergens(p.allergens.split(",").filter(Boolean)),
+    allergens: derived?.get(p.id) ?? sortAllergens(p.allergens.split(",").filter(Boolean)),
     mayContain: p.mayContain,
     active: p.active,
     formulaId: p.formulaId,
@@ -65,13 +71,14 @@ export async function listProducts(ctx: AppContext, actor: SessionUser, includeA
   const showAll = includeArchived && actor.role !== "buyer";
   const rows = await repo.find({ where: showAll ? {} : { active: true }, order: { sortOrder: "ASC", name: "ASC" } });
   const pricing = await pricingFor(ctx, actor.role === "buyer" ? actor.accountId : null);
-  return rows.map((p) => productDto(p, pricing));
+  const derived = await derivedAllergens(ctx.dataSource.manager, rows);
+  return rows.map((p) => productDto(p, pricing, derived));
 }
 
 export async function getProduct(ctx: AppContext, actor: SessionUser, id: number): Promise<ProductDto> {
   const p = await ctx.dataSource.getRepository(Product).findOneBy({ id });
   if (!p || (actor.role === "buyer" && !p.active)) throw notFound("That product");
-  return productDto(p, await pricingFor(ctx, actor.role === "buyer" ? actor.accountId : null));
+  return productDto(p, await pricingFor(ctx, actor.role === "buyer" ? actor.accountId : null), await derivedAllergens(ctx.dataSource.manager, [p]));
 }
 
 function toColumns(input: ReturnType<typeof productInputSchema.parse>) {
@@ -82,8 +89,9 @@ function toColumns(input: ReturnType<typeof productInputSchema.parse>) {
 export async function createProduct(ctx: AppContext, body: unknown): Promise<ProductDto> {
   const input = parse(productInputSchema, body);
   const repo = ctx.dataSource.getRepository(Product);
+  if (input.formulaId && !(await ctx.dataSource.getRepository(Formula).existsBy({ id: input.formulaId }))) throw badRequest("Choose an existing formula.", { formulaId: "Choose an existing formula." });
   const saved = await repo.save(repo.create({ ...toColumns(input), photoFile: null, sortOrder: await repo.count() }));
-  return productDto(saved);
+  return productDto(saved, undefined, await derivedAllergens(ctx.dataSource.manager, [saved]));
 }
 
 /** A patch is merged with the product and validated as a whole, so min ≤ max holds across fields. */
@@ -95,8 +103,10 @@ export async function updateProduct(ctx: AppContext, id: number, body: unknown):
   const current = productDto(p);
   const merged = { ...current, priceCents: current.listPriceCents, ...(body as object) };
   const input = parse(productInputSchema, merged);
+  if (input.formulaId && !(await ctx.dataSource.getRepository(Formula).existsBy({ id: input.formulaId }))) throw badRequest("Choose an existing formula.", { formulaId: "Choose an existing formula." });
   await repo.update({ id }, toColumns(input));
-  return productDto((await repo.findOneBy({ id }))!);
+  const updated = (await repo.findOneBy({ id }))!;
+  return productDto(updated, undefined, await derivedAllergens(ctx.dataSource.manager, [updated]));
 }
 
 // ---- photos -------------------------------------------------------------------------------

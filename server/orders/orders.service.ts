@@ -18,6 +18,7 @@ import type { SessionUser } from "../../shared/schemas/auth";
 import type { OrderDto, OrderStatus } from "../../shared/schemas/orders";
 import { orderMail } from "../mail/templates";
 import { retryOnDeadlock } from "../db/retry";
+import { derivedAllergens } from "../production/formulas.service";
 
 type Settings = CalendarSettings;
 interface LineInput { productId: number; quantity: number }
@@ -30,6 +31,7 @@ export async function orderDtos(ctx: AppContext, orders: Order[], m: EntityManag
   const lines = await m.getRepository(OrderLine).find({ where: { orderId: In(orders.map((o) => o.id)) }, order: { id: "ASC" } });
   const products = new Map((await m.getRepository(Product).findBy({ id: In([...new Set(lines.map((l) => l.productId))].concat([0])) })).map((p) => [p.id, p]));
   const accounts = new Map((await m.getRepository(CustomerAccount).findBy({ id: In([...new Set(orders.map((o) => o.accountId))]) })).map((a) => [a.id, a]));
+  const derived = await derivedAllergens(m, [...products.values()]);
   return orders.map((o) => {
     const own = lines.filter((l) => l.orderId === o.id);
     return {
@@ -45,7 +47,7 @@ export async function orderDtos(ctx: AppContext, orders: Order[], m: EntityManag
         return {
           productId: l.productId, productName: l.productName, saleUnit: l.saleUnit, quantity: l.quantity,
           unitPriceCents: l.unitPriceCents, lineTotalCents: l.lineTotalCents,
-          allergens: sortAllergens((p?.allergens ?? "").split(",").filter(Boolean)), mayContain: p?.mayContain ?? "",
+          allergens: derived.get(l.productId) ?? sortAllergens((p?.allergens ?? "").split(",").filter(Boolean)), mayContain: p?.mayContain ?? "",
         };
       }),
       totalCents: o.totalCents,

@@ -10,6 +10,8 @@ import { BakeryClosure } from "../calendar/closure.entity";
 import { StandingOrder, StandingOrderLine } from "../orders/standing-order.entity";
 import { weeklyRule } from "../../shared/recurrence";
 import type { Weekday } from "../../shared/calendar";
+import { Formula, FormulaVersion, Ingredient } from "../production/production.entity";
+import type { StepSpec } from "../../shared/production";
 
 /** The invented demo scenario: the Hollowbrook Bakehouse and three wholesale customers. */
 export const DEMO_PASSWORD = "panwise-demo";
@@ -85,6 +87,56 @@ const DEMO_STANDING: Record<string, { weekdays: Record<number, Record<string, nu
   "North Pier Coffee": { intervalWeeks: 2, weekdays: { 6: { sliders: 3, sesame: 2 } } },
 };
 
+/**
+ * Invented demo ingredients. Water contents of milk, butter and egg are USDA FoodData Central values
+ * (from memory: whole milk ~88 %, butter ~16 %, whole egg ~76 %); flour ~12 %.
+ */
+const DEMO_INGREDIENTS = [
+  { key: "flour", name: "Bread flour", kind: "flour", waterPercent: "12", allergens: "gluten,wheat", packName: "25 kg sack", packGrams: 25000, packCostCents: 2450 },
+  { key: "milk", name: "Whole milk", kind: "liquid", waterPercent: "88", allergens: "milk", packName: "1 gal jug", packGrams: 3900, packCostCents: 489 },
+  { key: "water", name: "Water", kind: "liquid", waterPercent: "100", allergens: "", packName: "tap", packGrams: 0, packCostCents: 0 },
+  { key: "butter", name: "Unsalted butter", kind: "fat", waterPercent: "16", allergens: "milk", packName: "1 lb block", packGrams: 454, packCostCents: 520 },
+  { key: "egg", name: "Whole egg", kind: "egg", waterPercent: "76", allergens: "egg", packName: "5 lb liquid-egg carton", packGrams: 2268, packCostCents: 1295 },
+  { key: "sugar", name: "Granulated sugar", kind: "sugar", waterPercent: "0", allergens: "", packName: "25 lb bag", packGrams: 11340, packCostCents: 1890 },
+  { key: "salt", name: "Fine sea salt", kind: "salt", waterPercent: "0", allergens: "", packName: "3 lb box", packGrams: 1361, packCostCents: 450 },
+  { key: "yeast", name: "Instant yeast", kind: "leavening", waterPercent: "5", allergens: "", packName: "1 lb pack", packGrams: 454, packCostCents: 690 },
+  { key: "milkpowder", name: "Nonfat dry milk", kind: "other", waterPercent: "3", allergens: "milk", packName: "1 kg bag", packGrams: 1000, packCostCents: 1150 },
+  { key: "honey", name: "Honey", kind: "sugar", waterPercent: "17", allergens: "", packName: "5 lb jar", packGrams: 2268, packCostCents: 2100 },
+  { key: "oats", name: "Rolled oats", kind: "inclusion", waterPercent: "10", allergens: "", packName: "25 lb bag", packGrams: 11340, packCostCents: 2300 },
+] as const;
+
+const ROLL_STEPS: StepSpec[] = [
+  { kind: "paste", minutes: 40 }, { kind: "mix", minutes: 15 }, { kind: "bulk", minutes: 60 }, { kind: "divide", minutes: 25 },
+  { kind: "bench", minutes: 10 }, { kind: "shape", minutes: 25 }, { kind: "proof", minutes: 50 }, { kind: "wash", minutes: 5 },
+  { kind: "bake", minutes: 27, temperatureC: 177 }, { kind: "cool", minutes: 30 },
+];
+const DEMO_FORMULAS: { name: string; products: string[]; body: (id: Record<string, number>) => object }[] = [
+  {
+    name: "Milk bread", products: ["rolls", "sliders", "pullman", "swirl"],
+    body: (id) => ({ lossPercent: 2, ddtC: 26, frictionC: 12, targetInternalC: 89,
+      paste: { flourIngredientId: id.flour, liquidIngredientId: id.milk, flourPercent: 5, liquidRatio: 5, cookToC: 65 },
+      lines: [{ ingredientId: id.flour, percent: 100 }, { ingredientId: id.milk, percent: 58 }, { ingredientId: id.egg, percent: 10 }, { ingredientId: id.butter, percent: 10 },
+        { ingredientId: id.sugar, percent: 10 }, { ingredientId: id.milkpowder, percent: 4 }, { ingredientId: id.salt, percent: 1.8 }, { ingredientId: id.yeast, percent: 1.3 }],
+      steps: ROLL_STEPS }),
+  },
+  {
+    name: "Honey-oat milk bread", products: ["oat"],
+    body: (id) => ({ lossPercent: 2, ddtC: 26, frictionC: 12, targetInternalC: 89,
+      paste: { flourIngredientId: id.flour, liquidIngredientId: id.milk, flourPercent: 5, liquidRatio: 5, cookToC: 65 },
+      lines: [{ ingredientId: id.flour, percent: 100 }, { ingredientId: id.milk, percent: 55 }, { ingredientId: id.water, percent: 8 }, { ingredientId: id.oats, percent: 15 },
+        { ingredientId: id.honey, percent: 8 }, { ingredientId: id.butter, percent: 8 }, { ingredientId: id.salt, percent: 1.8 }, { ingredientId: id.yeast, percent: 1.4 }],
+      steps: ROLL_STEPS }),
+  },
+  {
+    name: "Brioche", products: ["brioche", "sesame"],
+    body: (id) => ({ lossPercent: 3, ddtC: 24, frictionC: 14, targetInternalC: 88, paste: null,
+      lines: [{ ingredientId: id.flour, percent: 100 }, { ingredientId: id.egg, percent: 45 }, { ingredientId: id.milk, percent: 12 }, { ingredientId: id.butter, percent: 40 },
+        { ingredientId: id.sugar, percent: 12 }, { ingredientId: id.salt, percent: 2 }, { ingredientId: id.yeast, percent: 1.5 }],
+      steps: [{ kind: "mix", minutes: 20 }, { kind: "bulk", minutes: 75 }, { kind: "divide", minutes: 20 }, { kind: "bench", minutes: 10 }, { kind: "shape", minutes: 25 },
+        { kind: "proof", minutes: 70 }, { kind: "wash", minutes: 5 }, { kind: "bake", minutes: 16, temperatureC: 190 }, { kind: "cool", minutes: 30 }] }),
+  },
+];
+
 /** Idempotent: running it again changes nothing that is already there. */
 export async function seedDemo(ds: DataSource): Promise<{ created: number }> {
   let created = 0;
@@ -124,6 +176,29 @@ export async function seedDemo(ds: DataSource): Promise<{ created: number }> {
         created++;
       }
       ids[key] = row.id;
+    }
+
+    const ingredients = m.getRepository(Ingredient);
+    const ing: Record<string, number> = {};
+    for (const { key, ...i } of DEMO_INGREDIENTS) {
+      let row = await ingredients.findOneBy({ name: i.name });
+      if (!row) {
+        row = await ingredients.save(ingredients.create(i));
+        created++;
+      }
+      ing[key] = row.id;
+    }
+    for (const f of DEMO_FORMULAS) {
+      let formula = await m.getRepository(Formula).findOneBy({ name: f.name });
+      if (!formula) {
+        formula = await m.getRepository(Formula).save(m.getRepository(Formula).create({ name: f.name, currentVersion: 1 }));
+        await m.getRepository(FormulaVersion).insert({ formulaId: formula.id, version: 1, body: JSON.stringify({ name: f.name, ...f.body(ing) }), editedById: null, note: "Demo formula" });
+        created++;
+      }
+      for (const key of f.products) {
+        const p = await products.findOneByOrFail({ id: ids[key] });
+        if (p.formulaId === null) await products.update({ id: p.id }, { formulaId: formula.id });
+      }
     }
 
     const lists = m.getRepository(PriceList);

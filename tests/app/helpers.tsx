@@ -8,6 +8,9 @@ import type { SessionUser } from "../../shared/schemas/auth";
 import type { AccountDto } from "../../shared/schemas/accounts";
 import type { UserDto, InvitationDto } from "../../shared/schemas/users";
 import type { BakeryDto, OfficeSummaryDto } from "../../shared/schemas/bakery";
+import type { ProductDto } from "../../shared/schemas/catalog";
+import type { CalendarDayDto, CalendarSettingsDto } from "../../shared/schemas/calendar";
+import type { OrderDto, StandingOrderDto } from "../../shared/schemas/orders";
 
 // ---- People and data shaped like the API's answers ----
 
@@ -184,4 +187,111 @@ export async function waitForLabelGone(label: string) {
   await waitFor(() => {
     if (screen.queryByLabelText(label)) throw new Error(`"${label}" is still on the screen`);
   });
+}
+
+// ---- Ordering: products, calendar days, orders (shaped like the API's answers) ----
+
+
+export function product(overrides: Partial<ProductDto> = {}): ProductDto {
+  return {
+    id: 101,
+    name: "Milk-bread dinner rolls",
+    description: "Soft pull-apart rolls.",
+    photoUrl: null,
+    saleUnit: "tray of 15 rolls",
+    piecesPerUnit: 15,
+    pieceGrams: 67,
+    panName: "9×13 in pan",
+    panLengthMm: 330,
+    panWidthMm: 229,
+    unitsPerPan: 1,
+    listPriceCents: 1800,
+    priceCents: 1800,
+    minQuantity: 1,
+    maxQuantity: 40,
+    leadDays: null,
+    allergens: ["gluten", "wheat", "egg", "milk"],
+    mayContain: "sesame",
+    active: true,
+    formulaId: null,
+    ...overrides,
+  };
+}
+
+export const PRODUCTS: ProductDto[] = [
+  product(),
+  product({ id: 102, name: "Brioche burger buns", saleUnit: "pack of 8 buns", listPriceCents: 1600, priceCents: 1600, minQuantity: 2, maxQuantity: 5, mayContain: "" }),
+];
+
+export const SETTINGS: CalendarSettingsDto = {
+  timeZone: "America/Chicago",
+  deliveryWeekdays: [2, 3, 4, 5, 6],
+  cutoffTime: "14:00",
+  leadDays: 1,
+  horizonDays: 28,
+  closures: [{ date: "2025-12-25", note: "Christmas" }],
+};
+
+export function calendarDay(overrides: Partial<CalendarDayDto> = {}): CalendarDayDto {
+  return {
+    date: "2025-12-03",
+    weekday: 3,
+    orderable: true,
+    reason: null,
+    reasonText: null,
+    cutoffAt: "2025-12-02T14:00:00.000-06:00",
+    order: null,
+    ...overrides,
+  };
+}
+
+export function orderDto(overrides: Partial<OrderDto> = {}): OrderDto {
+  return {
+    id: 501,
+    accountId: 11,
+    accountName: "Tidewater Coffee",
+    deliveryDate: "2025-12-03",
+    status: "open",
+    poNumber: null,
+    note: null,
+    lines: [{ productId: 101, productName: "Milk-bread dinner rolls", saleUnit: "tray of 15 rolls", quantity: 3, unitPriceCents: 1800, lineTotalCents: 5400, allergens: ["gluten", "wheat", "egg", "milk"], mayContain: "sesame" }],
+    totalCents: 5400,
+    cutoffAt: "2025-12-02T14:00:00.000-06:00",
+    source: "one_off",
+    editedByHand: false,
+    createdAt: "2025-12-01T10:00:00.000Z",
+    updatedAt: "2025-12-01T10:00:00.000Z",
+    ...overrides,
+  };
+}
+
+export function standingDto(overrides: Partial<StandingOrderDto> = {}): StandingOrderDto {
+  return {
+    accountId: 11,
+    startDate: "2025-12-01",
+    endDate: null,
+    intervalWeeks: 1,
+    skipDates: [],
+    lines: [{ productId: 101, weekday: 2, quantity: 2 }],
+    active: true,
+    rrule: "DTSTART:20251201T000000Z\nRRULE:FREQ=WEEKLY;INTERVAL=1;BYDAY=TU;WKST=MO",
+    upcoming: [
+      { date: "2025-12-09", orderId: 601, editedByHand: false, status: "open" },
+      { date: "2025-12-16", orderId: 602, editedByHand: true, status: "open" },
+    ],
+    ...overrides,
+  };
+}
+
+/** Routes a buyer's ordering screens read, with one calendar day. */
+export function buyerOrderingRoutes(day: CalendarDayDto, extra: Record<string, Route> = {}): Record<string, Route> {
+  return {
+    ...sessionRoutes(BUYER),
+    "GET /api/accounts/:id": { body: { account: account() } },
+    "GET /api/accounts/:id/delivery": { body: { delivery: { routeWeekdays: [2, 3, 4], minimumOrderCents: 5000, priceListId: null } } },
+    "GET /api/settings/calendar": { body: { settings: SETTINGS } },
+    "GET /api/products": { body: { products: PRODUCTS } },
+    "GET /api/calendar": { body: { days: [day] } },
+    ...extra,
+  };
 }

@@ -1,0 +1,274 @@
+import { DateTime } from "luxon";
+import { In, type EntityManager } from "typeorm";
+import type { AppContext } from "../http/context";
+import { badRequest } from "../http/errors";
+import { BakeDay } from "./production.entity";
+import { Product } from "../catalog/product.entity";
+import { getBakery } from "../bakery/bakery.service";
+import { loadCalendarSettings } from "../calendar/calendar.service";
+import { formulaSpec, ingredientInfo, ingredientLibrary } from "./formulas.service";
+import { cutoffFor, localToday, addDays } from "../../shared/calendar";
+import { expandRule } from "../../shared/recurrence";
+import { Ingredient } from "./production.entity";
+import { bakeWaves, planDough, planProduct, roundGrams, scheduleTimeline, type FormulaSpec, type PlannedProduct } from "../../shared/production";
+import type { PlanDto } from "../../shared/schemas/production";
+
+interface DayRow { productId: number; units: string; openUnits: string }
+
+/** Units per product for a delivery date, summed in SQL (not a loop over rows). */
+async function unitsByProduct(m: EntityManager, date: string): Promise<DayRow[]> {
+  return m.query(
+    `SELECT l.productId AS productId, SUM(l.quantity) AS units, SUM(CASE WHEN o.status = 'open' THEN l.quantity ELSE 0 END) AS openUnits
+       FROM customer_order o JOIN order_line l ON l.orderId = o.id
+      WHERE o.deliveryDate = ? AND o.status IN ('open', 'locked', 'delivered')
+      GROUP BY l.productId`, [date]);
+}
+
+async function bakeDay(m: EntityManager, date: string): Promise<BakeDay> {
+  const repo = m.getRepository(BakeDay);
+  const found = await repo.findOneBy({ date });
+  if (found) return found;
+  return repo.create({ date, extraPans: "{}", roomC: "22", flourC: "20", pasteC: "30", frozenPlan: null, frozenAt: null, progress: JSON.stringify({ mixes: [], waves: [] }) });
+}
+
+/**
+ * Standing-order quantities expected on a date from accounts that have no order row for it yet
+ * (beyond the materialised horizon, or before the job has run). For the purchasing forecast.
+ */
+async function expectedStanding(m: EntityManager, date: string): Promise<DayRow[]> {
+  const rows: { accountId: number; rrule: string; skipDates: string; productId: number; weekday: number; quantity: number }[] = await m.query(
+    `SELECT s.accountId, s.rrule, s.skipDates, l.productId, l.weekday, l.quantity
+       FROM standing_order s JOIN standing_order_line l ON l.standingOrderId = s.id
+       JOIN customer_account a ON a.id = s.accountId AND a.status = 'active'
+      WHERE s.active = 1 AND l.weekday = ?
+        AND NOT EXISTS (SELECT 1 FROM customer_order o WHERE o.accountId = s.accountId AND o.deliveryDate = ?)`, [DateTime.fromISO(date).weekday, date]);
+  const sums = new Map<number, number>();
+  const ruleCache = new Map<string, boolean>();
+  for (const r of rows) {
+    const key = `${r.accountId}`;
+    if (!ruleCache.has(key)) ruleCache.set(key, expandRule(r.rrule, date, date).length === 1 && !(JSON.parse(r.skipDates) as string[]).includes(date));
+    if (ruleCache.get(key)) sums.set(r.productId, (sums.get(r.productId) ?? 0) + r.quantity);
+  }
+  return [...sums].map(([productId, units]) => ({ productId, units: String(units), openUnits: String(units) }));
+}
+
+/** Work the plan out from the day's orders and the current formula versions (or the versions given). */
+export async function computePlan(ctx: AppContext, date: string, opts: { versions?: Map<number, number>; includeStanding?: boolean } = {}): Promise<PlanDto> {
+  const versions = opts.versions;
+  const m = ctx.dataSource.manager;
+  const bakery = await getBakery(ctx, m);
+  const settings = await loadCalendarSettings(ctx, m);
+  const day = await bakeDay(m, date);
+  const extra: Record<string, number> = JSON.parse(day.extraPans);
+  const rows = await unitsByProduct(m, date);
+  if (opts.includeStanding) {
+    for (const s of await expectedStanding(m, date)) {
+      const r = rows.find((x) => Number(x.productId) === s.productId);
+      if (r) { r.units = String(Number(r.units) + Number(s.units)); r.openUnits = String(Number(r.openUnits) + Number(s.units)); }
+      else rows.push(s);
+    }
+  }
+  const wantedIds = [...new Set([...rows.map((r) => Number(r.productId)), ...Object.keys(extra).map(Number)])];
+  const products = wantedIds.length ? await m.getRepository(Product).findBy({ id: In(wantedIds) }) : [];
+  const byId = new Map(rows.map((r) => [Number(r.productId), r]));
+  const planned: (PlannedProduct & { panName: string; openUnits: number })[] = products
+    .sort((a, b) => a.sortOrder - b.sortOrder || a.name.localeCompare(b.name))
+    .map((p) => ({
+      ...planProduct({ productId: p.id, name: p.name, units: Number(byId.get(p.id)?.units ?? 0), extraPans: extra[p.id] ?? 0, unitsPerPan: p.unitsPerPan, piecesPerUnit: p.piecesPerUnit, pieceGrams: p.pieceGrams, formulaId: p.formulaId }),
+      panName: p.panName,
+      openUnits: Number(byId.get(p.id)?.openUnits ?? 0),
+    }))
+    .filter((p) => p.pans > 0 || p.units > 0);
+
+  const warnings: string[] = [];
+  for (const p of planned) if (!p.formulaId) warnings.push(`${p.name} has no formula yet, so its dough is not planned. Give it one under Formulas.`);
+  const lib = await ingredientLibrary(m);
+  const info = new Map([...lib].map(([id, i]) => [id, ingredientInfo(i)]));
+  const formulaIds = [...new Set(planned.map((p) => p.formulaId).filter((x): x is number => !!x))];
+  const formulas = new Map<number, FormulaSpec & { targetInternalC: number | null }>();
+  for (const id of formulaIds) formulas.set(id, await formulaSpec(m, id, versions?.get(id)));
+  const temps = { roomC: Number(day.roomC), flourC: Number(day.flourC), pasteC: Number(day.pasteC) };
+  const mixerCapacityKg = Number(bakery.mixerCapacityKg);
+  const doughs = formulaIds.map((id) => {
+    const f = formulas.get(id)!;
+    return { ...planDough(f, info, planned.filter((p) => p.formulaId === id), mixerCapacityKg, temps), targetInternalC: f.targetInternalC };
+  });
+  for (const d of doughs) for (const mix of d.mixes) if (mix.liquidTempAdvice) warnings.push(`${d.name}, mix ${mix.index}: liquid at ${mix.liquidTempC} °C — ${mix.liquidTempAdvice}`);
+
+  const totals = new Map<number, number>();
+  for (const d of doughs) for (const i of d.ingredients) totals.set(i.ingredientId, (totals.get(i.ingredientId) ?? 0) + i.grams);
+  const [h, min] = bakery.dispatchTime.split(":").map(Number);
+  const dispatch = DateTime.fromISO(date, { zone: bakery.timeZone }).set({ hour: h, minute: min });
+  const capacity = bakery.ovens * bakery.pansPerLoad;
+  const waves = bakeWaves(planned.filter((p) => p.formulaId), formulaIds, capacity);
+  const timeline = scheduleTimeline(waves, formulas, dispatch);
+  const cutoff = cutoffFor(date, settings);
+  const now = ctx.clock.now();
+  return {
+    date,
+    final: now.getTime() >= cutoff.toMillis() && planned.every((p) => p.openUnits === 0),
+    frozen: false,
+    frozenAt: null,
+    computedAt: DateTime.fromJSDate(now, { zone: bakery.timeZone }).toISO()!,
+    cutoffAt: cutoff.toISO()!,
+    inputs: { ...temps, mixerCapacityKg, dispatchAt: dispatch.toISO()!, ovenCapacityPans: capacity },
+    products: planned.map((p) => ({ productId: p.productId, name: p.name, units: p.units, extraPans: p.extraPans, pans: p.pans, pieces: p.pieces, pieceGrams: p.pieceGrams, formulaId: p.formulaId, panName: p.panName, openUnits: p.openUnits })),
+    doughs,
+    ingredients: [...totals].map(([ingredientId, grams]) => ({ ingredientId, name: lib.get(ingredientId)?.name ?? "?", grams: roundGrams(grams) })).sort((a, b) => b.grams - a.grams),
+    timeline,
+    warnings,
+    progress: JSON.parse(day.progress),
+  };
+}
+
+/** What the baker sees: the frozen plan once the cut-off has passed (frozen then, if not yet), else the live one. */
+export async function getPlan(ctx: AppContext, date: string): Promise<PlanDto & { changes: string[] }> {
+  const m = ctx.dataSource.manager;
+  const settings = await loadCalendarSettings(ctx, m);
+  const day = await bakeDay(m, date);
+  const pastCutoff = ctx.clock.now().getTime() >= cutoffFor(date, settings).toMillis();
+  if (!day.frozenPlan && pastCutoff && (await unitsByProduct(m, date)).length > 0) return { ...(await freeze(ctx, date)), changes: [] };
+  if (day.frozenPlan) {
+    const frozen = JSON.parse(day.frozenPlan) as PlanDto;
+    const live = await computePlan(ctx, date);
+    return { ...frozen, progress: JSON.parse(day.progress), frozen: true, frozenAt: day.frozenAt?.toISOString() ?? null, changes: diffPlans(frozen, live) };
+  }
+  return { ...(await computePlan(ctx, date)), changes: [] };
+}
+
+/** Freeze (or deliberately recalculate): store the plan with the formula versions it used. */
+export async function freeze(ctx: AppContext, date: string): Promise<PlanDto & { changes: string[] }> {
+  const m = ctx.dataSource.manager;
+  const day = await bakeDay(m, date);
+  const before = day.frozenPlan ? (JSON.parse(day.frozenPlan) as PlanDto) : null;
+  const plan = await computePlan(ctx, date);
+  const frozenAt = ctx.clock.now();
+  day.frozenPlan = JSON.stringify(plan);
+  day.frozenAt = frozenAt;
+  await m.getRepository(BakeDay).save(day);
+  return { ...plan, frozen: true, frozenAt: frozenAt.toISOString(), changes: before ? diffPlans(before, plan) : [] };
+}
+
+/** Plain-language differences between two plans for the same day. */
+export function diffPlans(a: PlanDto, b: PlanDto): string[] {
+  const out: string[] = [];
+  const pa = new Map(a.products.map((p) => [p.productId, p]));
+  const pb = new Map(b.products.map((p) => [p.productId, p]));
+  for (const [id, p] of pb) {
+    const q = pa.get(id);
+    if (!q) out.push(`${p.name}: new, ${p.units} ordered (${p.pans} pans).`);
+    else if (q.units !== p.units || q.pans !== p.pans) out.push(`${p.name}: ${q.units} → ${p.units} ordered, ${q.pans} → ${p.pans} pans.`);
+  }
+  for (const [id, q] of pa) if (!pb.has(id)) out.push(`${q.name}: no longer ordered (was ${q.units}).`);
+  const da = new Map(a.doughs.map((d) => [d.formulaId, d]));
+  for (const d of b.doughs) {
+    const e = da.get(d.formulaId);
+    if (e && e.formulaVersion !== d.formulaVersion) out.push(`${d.name}: formula version ${e.formulaVersion} → ${d.formulaVersion}.`);
+    if (e && Math.abs(e.doughGrams - d.doughGrams) >= 1) out.push(`${d.name}: dough ${e.doughGrams} g → ${d.doughGrams} g.`);
+  }
+  if (a.inputs.roomC !== b.inputs.roomC || a.inputs.flourC !== b.inputs.flourC || a.inputs.pasteC !== b.inputs.pasteC) out.push("Room, flour or paste temperature changed: liquid temperatures differ.");
+  return out;
+}
+
+export async function saveBakeDay(ctx: AppContext, date: string, input: { extraPans: Record<string, number>; roomC: number; flourC: number; pasteC: number }) {
+  const m = ctx.dataSource.manager;
+  const ids = Object.keys(input.extraPans).map(Number);
+  if (ids.length && (await m.getRepository(Product).countBy({ id: In(ids) })) !== ids.length) throw badRequest("Extra pans for a product that does not exist.", { extraPans: "Unknown product." });
+  const day = await bakeDay(m, date);
+  day.extraPans = JSON.stringify(Object.fromEntries(Object.entries(input.extraPans).filter(([, n]) => n > 0)));
+  day.roomC = String(input.roomC);
+  day.flourC = String(input.flourC);
+  day.pasteC = String(input.pasteC);
+  await m.getRepository(BakeDay).save(day);
+  // A frozen day is recalculated on purpose: the baker just changed its inputs.
+  return day.frozenPlan ? freeze(ctx, date) : { ...(await computePlan(ctx, date)), changes: [] };
+}
+
+export async function setProgress(ctx: AppContext, date: string, input: { kind: "mix" | "wave"; key: string; done: boolean }) {
+  const m = ctx.dataSource.manager;
+  return ctx.dataSource.transaction(async (tx) => {
+    await tx.query("SELECT date FROM bake_day WHERE date = ? FOR UPDATE", [date]);
+    const day = await bakeDay(tx, date);
+    const progress = JSON.parse(day.progress) as { mixes: string[]; waves: number[] };
+    if (input.kind === "mix") {
+      progress.mixes = input.done ? [...new Set([...progress.mixes, input.key])] : progress.mixes.filter((k) => k !== input.key);
+    } else {
+      const n = Number(input.key);
+      progress.waves = input.done ? [...new Set([...progress.waves, n])].sort((a, b) => a - b) : progress.waves.filter((w) => w !== n);
+    }
+    day.progress = JSON.stringify(progress);
+    await tx.getRepository(BakeDay).save(day);
+    void m;
+    return progress;
+  });
+}
+
+/** The next bake day: the first delivery date whose dispatch is still ahead, in the bakery's zone. */
+export async function nextBakeDay(ctx: AppContext): Promise<string> {
+  const settings = await loadCalendarSettings(ctx);
+  const bakery = await getBakery(ctx);
+  const now = DateTime.fromJSDate(ctx.clock.now(), { zone: bakery.timeZone });
+  const [h, min] = bakery.dispatchTime.split(":").map(Number);
+  let d = localToday(ctx.clock.now(), bakery.timeZone);
+  for (let i = 0; i < 14; i++, d = addDays(d, 1)) {
+    const dispatch = DateTime.fromISO(d, { zone: bakery.timeZone }).set({ hour: h, minute: min });
+    if (settings.deliveryWeekdays.includes(DateTime.fromISO(d).weekday as never) && !settings.closures.includes(d) && dispatch > now) return d;
+  }
+  return d;
+}
+
+/** Freeze every plan whose cut-off has passed (a scheduled job; reads freeze too, so it never waits on this). */
+export async function freezeDue(ctx: AppContext): Promise<number> {
+  const settings = await loadCalendarSettings(ctx);
+  const today = localToday(ctx.clock.now(), settings.timeZone);
+  let n = 0;
+  for (let i = 0; i <= settings.leadDays + 1; i++) {
+    const date = addDays(today, i);
+    if (ctx.clock.now().getTime() < cutoffFor(date, settings).toMillis()) continue;
+    const day = await ctx.dataSource.getRepository(BakeDay).findOneBy({ date });
+    if (day?.frozenPlan) continue;
+    const hasOrders = (await unitsByProduct(ctx.dataSource.manager, date)).length > 0;
+    if (!hasOrders) continue;
+    await freeze(ctx, date);
+    n++;
+  }
+  return n;
+}
+
+
+export interface ForecastDto {
+  from: string;
+  to: string;
+  days: { date: string; doughGrams: number; orderedUnits: number }[];
+  items: { ingredientId: number; name: string; grams: number; packName: string; packGrams: number; packs: number; costCents: number; byDay: Record<string, number> }[];
+  totalCostCents: number;
+}
+
+/** Ingredients for the next 7 days (orders placed plus standing orders expected), in purchase packs rounded up. */
+export async function forecast(ctx: AppContext, from: string): Promise<ForecastDto> {
+  const dates = Array.from({ length: 7 }, (_, i) => addDays(from, i));
+  const plans = [];
+  for (const d of dates) plans.push(await computePlan(ctx, d, { includeStanding: true }));
+  const lib = new Map((await ctx.dataSource.getRepository(Ingredient).find()).map((i) => [i.id, i]));
+  const grams = new Map<number, Record<string, number>>();
+  plans.forEach((p) => {
+    for (const i of p.ingredients) {
+      const row = grams.get(i.ingredientId) ?? {};
+      row[p.date] = (row[p.date] ?? 0) + i.grams;
+      grams.set(i.ingredientId, row);
+    }
+  });
+  const items = [...grams].map(([ingredientId, byDay]) => {
+    const ing = lib.get(ingredientId)!;
+    const total = roundGrams(Object.values(byDay).reduce((a, b) => a + b, 0));
+    const packs = ing.packGrams > 0 ? Math.ceil(total / ing.packGrams - 1e-9) : 0;
+    return { ingredientId, name: ing.name, grams: total, packName: ing.packName, packGrams: ing.packGrams, packs, costCents: packs * ing.packCostCents, byDay };
+  }).sort((a, b) => b.grams - a.grams);
+  return {
+    from,
+    to: dates[6],
+    days: plans.map((p) => ({ date: p.date, doughGrams: roundGrams(p.doughs.reduce((s, d) => s + d.doughGrams, 0)), orderedUnits: p.products.reduce((s, x) => s + x.units, 0) })),
+    items,
+    totalCostCents: items.reduce((s, i) => s + i.costCents, 0),
+  };
+}

@@ -1,0 +1,111 @@
+import { Router } from "express";
+import { z } from "zod";
+import type { AppContext } from "../http/context";
+import { parse } from "../http/errors";
+import { allow, currentUser } from "../http/auth";
+import { idSchema } from "../../shared/schemas/common";
+import { bakeDayInputSchema, planQuerySchema } from "../../shared/schemas/production";
+import { dateSchema } from "../../shared/schemas/calendar";
+import { getBakery } from "../bakery/bakery.service";
+import { Bakery } from "../bakery/bakery.entity";
+import * as formulas from "./formulas.service";
+import * as plans from "./plan.service";
+import { renderPlanPdf } from "./plan.pdf";
+
+const idParam = z.object({ id: idSchema });
+const KITCHEN = ["owner", "baker"] as const;
+
+export function ingredientRoutes(ctx: AppContext): Router {
+  const r = Router();
+  r.use(allow(...KITCHEN));
+  r.get("/", async (_req, res) => {
+    res.json({ ingredients: await formulas.listIngredients(ctx) });
+  });
+  r.post("/", async (req, res) => {
+    res.status(201).json({ ingredient: await formulas.saveIngredient(ctx, null, req.body) });
+  });
+  r.put("/:id", async (req, res) => {
+    const { id } = parse(idParam, req.params);
+    res.json({ ingredient: await formulas.saveIngredient(ctx, id, req.body) });
+  });
+  return r;
+}
+
+export function formulaRoutes(ctx: AppContext): Router {
+  const r = Router();
+  r.use(allow(...KITCHEN));
+  r.get("/", async (_req, res) => {
+    res.json({ formulas: await formulas.listFormulas(ctx) });
+  });
+  r.get("/:id", async (req, res) => {
+    const { id } = parse(idParam, req.params);
+    const { version } = parse(z.object({ version: z.coerce.number().int().positive().optional() }), req.query);
+    res.json({ formula: await formulas.getFormula(ctx, id, version) });
+  });
+  r.get("/:id/history", async (req, res) => {
+    const { id } = parse(idParam, req.params);
+    res.json({ versions: await formulas.formulaHistory(ctx, id) });
+  });
+  r.post("/", async (req, res) => {
+    res.status(201).json({ formula: await formulas.saveFormula(ctx, currentUser(req).id, null, req.body) });
+  });
+  r.put("/:id", async (req, res) => {
+    const { id } = parse(idParam, req.params);
+    res.json({ formula: await formulas.saveFormula(ctx, currentUser(req).id, id, req.body) });
+  });
+  return r;
+}
+
+const productionSettingsSchema = z.object({
+  mixerCapacityKg: z.coerce.number({ invalid_type_error: "Enter the mixer's capacity in kg." }).min(1, "At least 1 kg.").max(500, "At most 500 kg."),
+  dispatchTime: z.string().regex(/^([01]\d|2[0-3]):[0-5]\d$/, "Use a 24-hour time such as 06:30."),
+  ovens: z.coerce.number().int("Whole ovens.").min(1, "At least 1 oven.").max(20),
+  pansPerLoad: z.coerce.number().int("Whole pans.").min(1, "At least 1 pan.").max(100),
+});
+
+export function productionRoutes(ctx: AppContext): Router {
+  const r = Router();
+  r.get("/settings", allow(...KITCHEN), async (_req, res) => {
+    const b = await getBakery(ctx);
+    res.json({ settings: { mixerCapacityKg: Number(b.mixerCapacityKg), dispatchTime: b.dispatchTime, ovens: b.ovens, pansPerLoad: b.pansPerLoad } });
+  });
+  r.put("/settings", allow("owner"), async (req, res) => {
+    const input = parse(productionSettingsSchema, req.body);
+    const b = await getBakery(ctx);
+    await ctx.dataSource.getRepository(Bakery).update({ id: b.id }, { ...input, mixerCapacityKg: String(input.mixerCapacityKg) });
+    res.json({ settings: input });
+  });
+  r.get("/next-day", allow(...KITCHEN), async (_req, res) => {
+    res.json({ date: await plans.nextBakeDay(ctx) });
+  });
+  r.get("/plan", allow(...KITCHEN), async (req, res) => {
+    const { date } = parse(planQuerySchema, req.query);
+    res.json({ plan: await plans.getPlan(ctx, date) });
+  });
+  r.get("/plan.pdf", allow(...KITCHEN), async (req, res) => {
+    const { date, units } = parse(planQuerySchema.extend({ units: z.enum(["metric", "us"]).default("metric") }), req.query);
+    const bakery = await getBakery(ctx);
+    const plan = await plans.getPlan(ctx, date);
+    const pdf = await renderPlanPdf({ ...plan, bakeryName: bakery.name, timeZone: bakery.timeZone }, units);
+    res.type("application/pdf").set("Content-Disposition", `inline; filename="production-${date}.pdf"`).send(pdf);
+  });
+  r.post("/plan/recalculate", allow(...KITCHEN), async (req, res) => {
+    const { date } = parse(planQuerySchema, req.query);
+    res.json({ plan: await plans.freeze(ctx, date) });
+  });
+  r.put("/bake-days/:date", allow(...KITCHEN), async (req, res) => {
+    const { date } = parse(z.object({ date: dateSchema }), req.params);
+    const input = parse(bakeDayInputSchema, req.body);
+    res.json({ plan: await plans.saveBakeDay(ctx, date, { ...input, roomC: Number(input.roomC), flourC: Number(input.flourC), pasteC: Number(input.pasteC) }) });
+  });
+  r.post("/bake-days/:date/progress", allow(...KITCHEN), async (req, res) => {
+    const { date } = parse(z.object({ date: dateSchema }), req.params);
+    const input = parse(z.object({ kind: z.enum(["mix", "wave"]), key: z.string().min(1).max(40), done: z.boolean() }), req.body);
+    res.json({ progress: await plans.setProgress(ctx, date, input) });
+  });
+  r.get("/forecast", allow(...KITCHEN), async (req, res) => {
+    const { from } = parse(z.object({ from: dateSchema }), req.query);
+    res.json({ forecast: await plans.forecast(ctx, from) });
+  });
+  return r;
+}
