@@ -58,6 +58,23 @@ const TABLE: Record<string, Role[] | "public"> = {
   "POST /api/calendar-feed": ["buyer", "owner"],
   "DELETE /api/calendar-feed": ["buyer", "owner"],
   "GET /api/feeds/:file": "public",
+  "GET /api/ingredients": ["owner", "baker"],
+  "POST /api/ingredients": ["owner", "baker"],
+  "PUT /api/ingredients/:id": ["owner", "baker"],
+  "GET /api/formulas": ["owner", "baker"],
+  "GET /api/formulas/:id": ["owner", "baker"],
+  "GET /api/formulas/:id/history": ["owner", "baker"],
+  "POST /api/formulas": ["owner", "baker"],
+  "PUT /api/formulas/:id": ["owner", "baker"],
+  "GET /api/production/settings": ["owner", "baker"],
+  "PUT /api/production/settings": ["owner"],
+  "GET /api/production/next-day": ["owner", "baker"],
+  "GET /api/production/plan": ["owner", "baker"],
+  "GET /api/production/plan.pdf": ["owner", "baker"],
+  "POST /api/production/plan/recalculate": ["owner", "baker"],
+  "PUT /api/production/bake-days/:date": ["owner", "baker"],
+  "POST /api/production/bake-days/:date/progress": ["owner", "baker"],
+  "GET /api/production/forecast": ["owner", "baker"],
 };
 
 let t: TestApp;
