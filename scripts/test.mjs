@@ -59,7 +59,7 @@ async function main() {
     createDatabase(dbName);
     const [port, smtpPort, mailHttpPort] = [await freePort(), await freePort(), await freePort()];
     const env = { ...testEnv, DB_NAME: dbName, NODE_ENV: "production", LOG_LEVEL: "warn", PORT: String(port), SMTP_URL: `smtp://127.0.0.1:${smtpPort}`,
-      MAIL_SMTP_PORT: String(smtpPort), MAIL_HTTP_PORT: String(mailHttpPort), PUBLIC_URL: `http://127.0.0.1:${port}`, WEB_DIST: webDist(), PANWISE_NO_JOBS: "1" };
+      MAIL_SMTP_PORT: String(smtpPort), MAIL_HTTP_PORT: String(mailHttpPort), PUBLIC_URL: `http://127.0.0.1:${port}`, WEB_DIST: webDist() };
     const setup = capture("node", ["--import", "tsx", "server/cli.ts", "setup"], { stdio: "inherit", env: { ...process.env, ...env } });
     if (setup.status !== 0) {
       results.push({ name: "browser: database setup", ok: false, seconds: 0 });

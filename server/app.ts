@@ -14,6 +14,7 @@ import { catalogRoutes, priceListRoutes, uploadsRoutes } from "./catalog/catalog
 import { accountDeliveryRoutes, calendarRoutes, settingsRoutes } from "./calendar/calendar.routes";
 import { feedRoutes, ordersRoutes, publicFeedRoutes, standingOrderRoutes } from "./orders/orders.routes";
 import { formulaRoutes, ingredientRoutes, productionRoutes } from "./production/production.routes";
+import { outboxRoutes } from "./mail/outbox.routes";
 
 export function redactUrl(url: string | undefined): string {
   return (url || "").replace(/(\/api\/auth\/invitations\/)[^/?]+/, "$1[redacted]").replace(/(\/api\/feeds\/)[^/?]+/, "$1[redacted]").replace(/([?&]token=)[^&]+/, "$1[redacted]");
@@ -53,6 +54,7 @@ export function apiRouter(ctx: AppContext): Router {
   api.use("/ingredients", ingredientRoutes(ctx));
   api.use("/formulas", formulaRoutes(ctx));
   api.use("/production", productionRoutes(ctx));
+  api.use("/outbox", outboxRoutes(ctx));
   api.use(apiNotFound);
   return api;
 }

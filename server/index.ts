@@ -20,6 +20,7 @@ async function main() {
     process.exit(2);
   }) as Server;
   const scheduler = process.env.PANWISE_NO_JOBS ? null : startScheduler(ctx, jobs);
+  if (scheduler) ctx.kickOutbox = () => scheduler.trigger("send-mail");
   logger.info({ url: `http://${config.host}:${config.port}` }, "Panwise server listening");
 
   let stopping = false;

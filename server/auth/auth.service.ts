@@ -10,6 +10,7 @@ import { SignInFailure } from "./sign-in-attempt.entity";
 import { RESET_TTL_MS, hashToken, newLinkToken } from "./tokens";
 import { getBakery } from "../bakery/bakery.service";
 import { passwordResetMail } from "../mail/templates";
+import { enqueueMail } from "../mail/outbox.service";
 import type { SignInResponse } from "../../shared/schemas/auth";
 
 export const BCRYPT_ROUNDS = Number(process.env.BCRYPT_ROUNDS || 11);
@@ -65,21 +66,19 @@ export async function requestPasswordReset(ctx: AppContext, email: string): Prom
     return;
   }
   const { token, hash } = newLinkToken();
-  await ctx.dataSource.getRepository(AuthToken).insert({
-    kind: "password_reset",
-    tokenHash: hash,
-    email: user.email,
-    userId: user.id,
-    expiresAt: new Date(ctx.clock.now().getTime() + RESET_TTL_MS),
-  });
   const bakery = await getBakery(ctx);
   const url = `${ctx.config.publicUrl}/set-password?kind=reset&token=${encodeURIComponent(token)}`;
   const mail = passwordResetMail({ bakeryName: bakery.name, name: user.name, url });
-  try {
-    await ctx.mailer.send({ to: user.email, fromName: bakery.name, ...mail });
-  } catch (err) {
-    ctx.logger.error({ err: (err as Error).message, event: "password_reset_mail_failed" }, "could not send the reset mail");
-  }
+  await ctx.dataSource.transaction(async (m) => {
+    await m.getRepository(AuthToken).insert({
+      kind: "password_reset",
+      tokenHash: hash,
+      email: user.email,
+      userId: user.id,
+      expiresAt: new Date(ctx.clock.now().getTime() + RESET_TTL_MS),
+    });
+    await enqueueMail(m, ctx, "password_reset", { to: user.email, fromName: bakery.name, ...mail });
+  });
 }
 
 /** Find a usable token of this kind, or explain why the link no longer works. */

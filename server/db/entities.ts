@@ -9,10 +9,11 @@ import { PriceList, PriceListItem } from "../catalog/price-list.entity";
 import { IdempotencyRecord, Order, OrderLine } from "../orders/order.entity";
 import { StandingOrder, StandingOrderLine } from "../orders/standing-order.entity";
 import { BakeDay, Formula, FormulaVersion, Ingredient } from "../production/production.entity";
+import { OutboxMail } from "../mail/outbox.entity";
 
 /** Every entity, listed once: the DataSource, the CLI and the tests all take it from here. */
 export const entities = [
   Bakery, BakeryClosure, CustomerAccount, User, AuthToken, SignInFailure,
   Product, PriceList, PriceListItem, Order, OrderLine, IdempotencyRecord, StandingOrder, StandingOrderLine,
-  Ingredient, Formula, FormulaVersion, BakeDay,
+  Ingredient, Formula, FormulaVersion, BakeDay, OutboxMail,
 ];

@@ -11,4 +11,6 @@ export interface AppContext {
   clock: Clock;
   logger: Logger;
   mailer: Mailer;
+  /** Ask the mail worker to run soon (set by the server process; absent in tests, which flush by hand). */
+  kickOutbox?: () => void;
 }

@@ -3,9 +3,11 @@ import { purgeExpired } from "../auth/auth.service";
 import { lockPastCutoff } from "../orders/orders.service";
 import { materialiseAll } from "../orders/standing.service";
 import { freezeDue } from "../production/plan.service";
+import { processOutbox } from "../mail/outbox.service";
 
 /** Every scheduled job the server runs (each under a MariaDB named lock). */
 export const jobs: Job[] = [
+  { name: "send-mail", everyMs: 2000, run: async (ctx) => void (await processOutbox(ctx)) },
   { name: "purge-expired-tokens", everyMs: 60 * 60 * 1000, run: purgeExpired },
   { name: "lock-orders-at-cutoff", everyMs: 30 * 1000, run: async (ctx) => void (await lockPastCutoff(ctx)) },
   { name: "materialise-standing-orders", everyMs: 15 * 60 * 1000, run: async (ctx) => void (await materialiseAll(ctx)) },

@@ -27,9 +27,11 @@ export async function runLocked(ctx: AppContext, job: Job): Promise<boolean> {
   }
 }
 
-export function startScheduler(ctx: AppContext, jobs: Job[]): { stop(): Promise<void> } {
+export function startScheduler(ctx: AppContext, jobs: Job[]): { stop(): Promise<void>; trigger(name: string): void } {
   const timers: NodeJS.Timeout[] = [];
   const running = new Set<Promise<unknown>>();
+  const ticks = new Map<string, () => void>();
+  const soon = new Set<string>();
   let stopped = false;
   for (const job of jobs) {
     const tick = () => {
@@ -40,9 +42,16 @@ export function startScheduler(ctx: AppContext, jobs: Job[]): { stop(): Promise<
       running.add(p);
     };
     timers.push(setInterval(tick, job.everyMs));
+    ticks.set(job.name, tick);
     setImmediate(tick);
   }
   return {
+    /** Run a job shortly (debounced), e.g. the mail worker right after a mail is queued. */
+    trigger(name: string) {
+      if (soon.has(name) || !ticks.has(name)) return;
+      soon.add(name);
+      setTimeout(() => { soon.delete(name); ticks.get(name)!(); }, 50).unref();
+    },
     async stop() {
       stopped = true;
       timers.forEach(clearInterval);

@@ -9,6 +9,8 @@ export interface OutgoingMail {
   /** Display name of the sender: the bakery's name. */
   fromName: string;
   attachments?: { filename: string; content: Buffer; contentType: string }[];
+  /** A fixed Message-ID (the outbox sets one per mail, so a retry is the same message). */
+  messageId?: string;
 }
 
 export interface Mailer {
@@ -33,6 +35,7 @@ export function createSmtpMailer(smtpUrl: string, fromAddress: string, logger: L
         html: mail.html,
         text: mail.text,
         attachments: mail.attachments,
+        messageId: mail.messageId,
       });
       logger.info({ mail: { to: mail.to, subject: mail.subject, messageId: info.messageId } }, "mail sent");
       return { messageId: info.messageId };

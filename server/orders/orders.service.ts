@@ -19,6 +19,7 @@ import type { OrderDto, OrderStatus } from "../../shared/schemas/orders";
 import { orderMail } from "../mail/templates";
 import { retryOnDeadlock } from "../db/retry";
 import { derivedAllergens } from "../production/formulas.service";
+import { enqueueMail } from "../mail/outbox.service";
 
 type Settings = CalendarSettings;
 interface LineInput { productId: number; quantity: number }
@@ -167,12 +168,12 @@ export async function createOrder(ctx: AppContext, actor: SessionUser | null, in
       order = await orders.save(orders.create({ accountId: account.id, deliveryDate: input.deliveryDate, status: "open", poNumber: input.poNumber || null, note: input.note || null, totalCents: total, source: opts.source ?? "one_off", editedByHand: false, createdById: actor?.id ?? null }));
     }
     await m.getRepository(OrderLine).insert(priced.map((l) => ({ ...l, orderId: order.id })));
-    return (await orderDtos(ctx, [order], m))[0];
+    const dto = (await orderDtos(ctx, [order], m))[0];
+    if (!opts.skipMail) await queueOrderMail(ctx, m, dto, "placed");
+    return dto;
   };
   // READ COMMITTED: after waiting on the account lock, the check for an existing order must see what the other writer committed.
-  const dto = opts.manager ? await run(opts.manager) : await retryOnDeadlock(() => ctx.dataSource.transaction("READ COMMITTED", run));
-  if (!opts.skipMail) void sendOrderMail(ctx, dto, "placed");
-  return dto;
+  return opts.manager ? run(opts.manager) : retryOnDeadlock(() => ctx.dataSource.transaction("READ COMMITTED", run));
 }
 
 /** Replace lines, PO number or note of an open order before its cut-off. */
@@ -199,9 +200,10 @@ export async function updateOrder(ctx: AppContext, actor: SessionUser, id: numbe
       if (ctx.clock.now().getTime() >= c.toMillis()) throw cutoffPassed(c, settings.timeZone, order.deliveryDate);
     }
     await m.getRepository(Order).update({ id: order.id }, patch);
-    return (await orderDtos(ctx, [(await m.getRepository(Order).findOneBy({ id: order.id }))!], m))[0];
+    const changed = (await orderDtos(ctx, [(await m.getRepository(Order).findOneBy({ id: order.id }))!], m))[0];
+    await queueOrderMail(ctx, m, changed, "changed");
+    return changed;
   })));
-  void sendOrderMail(ctx, dto, "changed");
   return dto;
 }
 
@@ -215,9 +217,10 @@ export async function cancelOrder(ctx: AppContext, actor: SessionUser, id: numbe
     const c = orderCutoff(order.deliveryDate, settings, products);
     if (ctx.clock.now().getTime() >= c.toMillis()) throw cutoffPassed(c, settings.timeZone, order.deliveryDate);
     await m.getRepository(Order).update({ id: order.id }, { status: "cancelled", editedByHand: order.source === "standing" ? true : order.editedByHand });
-    return (await orderDtos(ctx, [(await m.getRepository(Order).findOneBy({ id: order.id }))!], m))[0];
+    const cancelled = (await orderDtos(ctx, [(await m.getRepository(Order).findOneBy({ id: order.id }))!], m))[0];
+    await queueOrderMail(ctx, m, cancelled, "cancelled");
+    return cancelled;
   })));
-  void sendOrderMail(ctx, dto, "cancelled");
   return dto;
 }
 
@@ -306,14 +309,11 @@ export async function withIdempotency(ctx: AppContext, userId: number, key: stri
 
 // ---- mail --------------------------------------------------------------------------------------
 
-export async function sendOrderMail(ctx: AppContext, order: OrderDto, kind: "placed" | "changed" | "cancelled") {
-  try {
-    const buyers = await ctx.dataSource.getRepository(User).findBy({ accountId: order.accountId, disabled: false, role: "buyer" });
-    if (!buyers.length) return;
-    const bakery = await getBakery(ctx);
-    const mail = orderMail({ bakeryName: bakery.name, currency: bakery.currency, timeZone: bakery.timeZone, order, kind, url: `${ctx.config.publicUrl}/buyer/order/${order.deliveryDate}` });
-    for (const b of buyers) await ctx.mailer.send({ to: b.email, fromName: bakery.name, ...mail });
-  } catch (err) {
-    ctx.logger.error({ err: (err as Error).message, orderId: order.id, event: "order_mail_failed" }, "could not send the order mail");
-  }
+/** Queue the confirmation or change mail to the account's buyers, in the order's own transaction. */
+export async function queueOrderMail(ctx: AppContext, m: EntityManager, order: OrderDto, kind: "placed" | "changed" | "cancelled") {
+  const buyers = await m.getRepository(User).findBy({ accountId: order.accountId, disabled: false, role: "buyer" });
+  if (!buyers.length) return;
+  const bakery = await getBakery(ctx, m);
+  const mail = orderMail({ bakeryName: bakery.name, currency: bakery.currency, timeZone: bakery.timeZone, order, kind, url: `${ctx.config.publicUrl}/buyer/order/${order.deliveryDate}` });
+  for (const b of buyers) await enqueueMail(m, ctx, `order_${kind}`, { to: b.email, fromName: bakery.name, ...mail });
 }

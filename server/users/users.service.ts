@@ -7,6 +7,7 @@ import { AuthToken } from "../auth/auth-token.entity";
 import { INVITATION_TTL_MS, newLinkToken } from "../auth/tokens";
 import { getBakery } from "../bakery/bakery.service";
 import { invitationMail } from "../mail/templates";
+import { enqueueMail } from "../mail/outbox.service";
 import { ROLE_LABELS, type Role } from "../../shared/roles";
 import type { InvitationDto, UserDto } from "../../shared/schemas/users";
 import type { SessionUser } from "../../shared/schemas/auth";
@@ -110,10 +111,14 @@ export async function invite(
   const account = input.role === "buyer" ? await accountForBuyer(ctx, input.accountId) : null;
   const { token, hash } = newLinkToken();
   const now = ctx.clock.now();
-  const repo = ctx.dataSource.getRepository(AuthToken);
+  const bakery = await getBakery(ctx);
+  const url = `${ctx.config.publicUrl}/set-password?kind=invite&token=${encodeURIComponent(token)}&email=${encodeURIComponent(input.email)}`;
+  const mail = invitationMail({ bakeryName: bakery.name, roleLabel: ROLE_LABELS[input.role].toLowerCase(), accountName: account?.businessName ?? null, url, inviterName: actor.name });
+  const row = await ctx.dataSource.transaction(async (m) => {
+  const repo = m.getRepository(AuthToken);
   // A new invitation to the same address replaces any earlier one still waiting.
   await repo.update({ kind: "invitation", email: input.email, usedAt: IsNull(), revokedAt: IsNull() }, { revokedAt: now });
-  const row = await repo.save(repo.create({
+  const saved = await repo.save(repo.create({
     kind: "invitation",
     tokenHash: hash,
     email: input.email,
@@ -123,16 +128,10 @@ export async function invite(
     createdById: actor.id,
     expiresAt: new Date(now.getTime() + INVITATION_TTL_MS),
   }));
-  const bakery = await getBakery(ctx);
-  const url = `${ctx.config.publicUrl}/set-password?kind=invite&token=${encodeURIComponent(token)}&email=${encodeURIComponent(input.email)}`;
-  const mail = invitationMail({ bakeryName: bakery.name, roleLabel: ROLE_LABELS[input.role].toLowerCase(), accountName: account?.businessName ?? null, url, inviterName: actor.name });
-  try {
-    await ctx.mailer.send({ to: input.email, fromName: bakery.name, ...mail });
-  } catch (err) {
-    ctx.logger.error({ err: (err as Error).message, event: "invitation_mail_failed" }, "could not send the invitation mail");
-    await repo.update({ id: row.id }, { revokedAt: ctx.clock.now() });
-    throw new HttpError(503, "mail_unavailable", "The invitation could not be e-mailed just now. Nothing was sent; try again in a minute.");
-  }
+  // The mail is queued in the same transaction: it goes out once the invitation exists, and is retried if the mail server is down.
+  await enqueueMail(m, ctx, "invitation", { to: input.email, fromName: bakery.name, ...mail });
+  return saved;
+  });
   ctx.logger.info({ event: "invitation_sent", actorId: actor.id, role: input.role }, "invitation sent");
   return invitationDto(row, new Map(account ? [[account.id, account.businessName]] : []));
 }

@@ -75,6 +75,8 @@ const TABLE: Record<string, Role[] | "public"> = {
   "PUT /api/production/bake-days/:date": ["owner", "baker"],
   "POST /api/production/bake-days/:date/progress": ["owner", "baker"],
   "GET /api/production/forecast": ["owner", "baker"],
+  "GET /api/outbox": ["owner"],
+  "POST /api/outbox/:id/resend": ["owner"],
 };
 
 let t: TestApp;

@@ -1,4 +1,7 @@
 import { startTestApp, makeAccount, makeBakery, makeUser, tokenFor, waitForMail, linkToken, type TestApp } from "./helpers/app";
+import { processOutbox } from "../../server/mail/outbox.service";
+import { OutboxMail } from "../../server/mail/outbox.entity";
+import { startMailFake } from "../../fakes/mail/mail-fake";
 
 let t: TestApp;
 let ownerToken: string;
@@ -95,12 +98,22 @@ describe("invitations", () => {
     expect(res.body.error.fields.name).toBe("Enter your name.");
   });
 
-  it("answers 503 and keeps nothing when the mail server is down", async () => {
+  it("with the mail server down the invitation is kept and its mail arrives, once, when the server is back", async () => {
+    const smtpPort = t.mail.smtpPort;
     await t.mail.close();
     const res = await asOwner(t.http().post("/api/invitations")).send({ email: "offline@staff.test", role: "baker" });
-    expect(res.status).toBe(503);
-    expect(res.body.error.code).toBe("mail_unavailable");
-    const pending = await asOwner(t.http().get("/api/invitations"));
-    expect(pending.body.invitations.map((i: { email: string }) => i.email)).not.toContain("offline@staff.test");
+    expect(res.status).toBe(201);
+    const first = await processOutbox(t.ctx);
+    expect(first).toEqual({ sent: 0, failed: 1 });
+    const row = await t.ds.getRepository(OutboxMail).findOneByOrFail({ toAddress: "offline@staff.test" });
+    expect(row).toMatchObject({ status: "pending", attempts: 1 });
+    expect(row.lastError).toMatch(/ECONNREFUSED/);
+    t.mail = await startMailFake({ smtpPort, httpPort: 0 });
+    t.clock.advance(60_000); // past the retry backoff
+    const mail = await waitForMail(t, "offline@staff.test");
+    expect(`<${mail.messageId?.replace(/[<>]/g, "")}>`).toBe(row.messageId);
+    await processOutbox(t.ctx);
+    expect(t.mail.messages.filter((m) => m.to.includes("offline@staff.test"))).toHaveLength(1);
+    expect((await t.ds.getRepository(OutboxMail).findOneByOrFail({ id: row.id })).status).toBe("sent");
   });
 });

@@ -14,6 +14,7 @@ import { User } from "../../../server/users/user.entity";
 import { hashPassword } from "../../../server/auth/auth.service";
 import type { Role } from "../../../shared/roles";
 import type { AppContext } from "../../../server/http/context";
+import { processOutbox } from "../../../server/mail/outbox.service";
 
 export const TEST_PASSWORD = "correct horse battery";
 
@@ -45,7 +46,8 @@ export async function startTestApp(opts: { now?: string } = {}): Promise<TestApp
     http: () => request(app),
     async close() {
       mailer.close();
-      await mail.close();
+      await this.mail.close(); // a test may have swapped in a new mail fake
+      if (this.mail !== mail) await mail.close();
       await db.drop();
     },
   };
@@ -86,6 +88,7 @@ export async function waitForMail(t: TestApp, to: string, opts: { subject?: RegE
   const { subject, timeoutMs = 5000 } = typeof opts === "number" ? { timeoutMs: opts } : opts;
   const until = Date.now() + timeoutMs;
   for (;;) {
+    await processOutbox(t.ctx);
     const m = [...t.mail.messages].reverse().find((x) => x.to.includes(to) && (!subject || subject.test(x.subject)));
     if (m) return m;
     if (Date.now() > until) throw new Error(`no mail to ${to} within ${timeoutMs} ms`);
