@@ -15,6 +15,7 @@ import { accountDeliveryRoutes, calendarRoutes, settingsRoutes } from "./calenda
 import { feedRoutes, ordersRoutes, publicFeedRoutes, standingOrderRoutes } from "./orders/orders.routes";
 import { formulaRoutes, ingredientRoutes, productionRoutes } from "./production/production.routes";
 import { outboxRoutes } from "./mail/outbox.routes";
+import { accountBillingRoutes, billingSettingsRoutes, certificateRoutes, deliveryRoutes, invoiceRoutes, payoutRoutes, reportRoutes, stripeWebhookRoute } from "./billing/billing.routes";
 
 export function redactUrl(url: string | undefined): string {
   return (url || "").replace(/(\/api\/auth\/invitations\/)[^/?]+/, "$1[redacted]").replace(/(\/api\/feeds\/)[^/?]+/, "$1[redacted]").replace(/([?&]token=)[^&]+/, "$1[redacted]");
@@ -23,6 +24,7 @@ export function redactUrl(url: string | undefined): string {
 /** The API alone: every route under it is mounted here, and nowhere else. */
 export function apiRouter(ctx: AppContext): Router {
   const api = Router();
+  api.use("/webhooks/stripe", stripeWebhookRoute(ctx)); // raw body: before the JSON parser
   api.use(express.json({ limit: "200kb" }));
 
   api.get("/health", async (_req, res) => {
@@ -55,6 +57,13 @@ export function apiRouter(ctx: AppContext): Router {
   api.use("/formulas", formulaRoutes(ctx));
   api.use("/production", productionRoutes(ctx));
   api.use("/outbox", outboxRoutes(ctx));
+  api.use("/deliveries", deliveryRoutes(ctx));
+  api.use("/invoices", invoiceRoutes(ctx));
+  api.use("/payouts", payoutRoutes(ctx));
+  api.use("/reports", reportRoutes(ctx));
+  api.use("/settings/billing", billingSettingsRoutes(ctx));
+  api.use("/accounts", accountBillingRoutes(ctx));
+  api.use("/certificates", certificateRoutes(ctx));
   api.use(apiNotFound);
   return api;
 }

@@ -43,6 +43,7 @@ export interface Config {
   webDist: string;
   uploadsDir: string;
   logLevel: string;
+  stripe: { secretKey: string; host: string; port: number; protocol: "http" | "https"; webhookSecret: string; publishableHint: string };
 }
 
 export function loadConfig(): Config {
@@ -66,5 +67,14 @@ export function loadConfig(): Config {
     webDist: process.env.WEB_DIST ? path.resolve(process.env.WEB_DIST) : path.join(ROOT_DIR, "dist"),
     uploadsDir: path.join(DATA_DIR, "uploads"),
     logLevel: process.env.LOG_LEVEL || (process.env.NODE_ENV === "test" ? "silent" : "info"),
+    // Real Stripe: set STRIPE_SECRET_KEY and STRIPE_WEBHOOK_SECRET, and STRIPE_API_HOST=api.stripe.com STRIPE_API_PORT=443 STRIPE_API_PROTOCOL=https.
+    stripe: {
+      secretKey: process.env.STRIPE_SECRET_KEY || "sk_test_panwise_local_fake",
+      host: process.env.STRIPE_API_HOST || "127.0.0.1",
+      port: int("STRIPE_API_PORT", 12111),
+      protocol: process.env.STRIPE_API_PROTOCOL === "https" ? "https" : "http",
+      webhookSecret: process.env.STRIPE_WEBHOOK_SECRET || "whsec_panwise_local_fake",
+      publishableHint: process.env.STRIPE_API_HOST ? "stripe" : "local Stripe fake",
+    },
   };
 }

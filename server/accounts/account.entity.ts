@@ -44,6 +44,17 @@ export class CustomerAccount {
   @Column({ type: "varchar", length: 64, nullable: true })
   feedToken: string | null;
 
+  /** "card": pay each invoice by card; "net7/14/30": a weekly statement due in N days. */
+  @Column({ type: "varchar", length: 6, default: "card" })
+  paymentTerms: "card" | "net7" | "net14" | "net30";
+
+  /** Set when overdue invoices put the account on hold, so paying them lifts exactly that hold. */
+  @Column({ type: "boolean", default: false })
+  creditHold: boolean;
+
+  @Column({ type: "varchar", length: 80, nullable: true })
+  stripeCustomerId: string | null;
+
   @CreateDateColumn({ type: "datetime", precision: 3, default: () => "CURRENT_TIMESTAMP(3)" })
   createdAt: Date;
 

@@ -53,6 +53,20 @@ export class Bakery {
   @Column({ type: "int", default: 6 })
   pansPerLoad: number;
 
+  /** Sales tax in basis points (875 = 8.75 %). */
+  @Column({ type: "int", default: 0 })
+  salesTaxRateBp: number;
+
+  @Column({ type: "varchar", length: 8, default: "INV" })
+  invoicePrefix: string;
+
+  /** Days past due after which an account goes on credit hold. */
+  @Column({ type: "int", default: 14 })
+  creditHoldDays: number;
+
+  @Column({ type: "varchar", length: 600, default: "" })
+  paymentInstructions: string;
+
   @CreateDateColumn({ type: "datetime", precision: 3, default: () => "CURRENT_TIMESTAMP(3)" })
   createdAt: Date;
 

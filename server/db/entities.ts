@@ -10,10 +10,12 @@ import { IdempotencyRecord, Order, OrderLine } from "../orders/order.entity";
 import { StandingOrder, StandingOrderLine } from "../orders/standing-order.entity";
 import { BakeDay, Formula, FormulaVersion, Ingredient } from "../production/production.entity";
 import { OutboxMail } from "../mail/outbox.entity";
+import { CheckoutSessionRecord, CreditNote, DeliveryAdjustment, Invoice, InvoiceLine, NumberCounter, Payment, PayoutReconciliation, Refund, StripeEventRecord, TaxCertificate } from "../billing/billing.entity";
 
 /** Every entity, listed once: the DataSource, the CLI and the tests all take it from here. */
 export const entities = [
   Bakery, BakeryClosure, CustomerAccount, User, AuthToken, SignInFailure,
   Product, PriceList, PriceListItem, Order, OrderLine, IdempotencyRecord, StandingOrder, StandingOrderLine,
   Ingredient, Formula, FormulaVersion, BakeDay, OutboxMail,
+  NumberCounter, Invoice, InvoiceLine, Payment, CreditNote, Refund, CheckoutSessionRecord, StripeEventRecord, PayoutReconciliation, TaxCertificate, DeliveryAdjustment,
 ];

@@ -81,3 +81,19 @@ export function orderMail(p: {
         ];
   return { subject: `${verb}: ${day} — ${p.bakeryName}`, ...layout(p.bakeryName, verb, paras, { label: "View the order", url: p.url }, "Allergens are listed on each product in Panwise; ask the bakery if you have a severe allergy.") };
 }
+
+export function invoiceMail(p: { bakeryName: string; currency: string; number: string; totalCents: number; dueCents: number; dueDate: string; url: string; card: boolean; instructions: string }): Rendered {
+  const money = (c: number) => new Intl.NumberFormat("en-US", { style: "currency", currency: p.currency }).format(c / 100);
+  const due = new Intl.DateTimeFormat("en-US", { day: "numeric", month: "long", year: "numeric", timeZone: "UTC" }).format(new Date(`${p.dueDate}T12:00:00Z`));
+  const paras = [
+    `Invoice ${p.number} for ${money(p.totalCents)} is attached as a PDF.`,
+    p.dueCents > 0 ? `${money(p.dueCents)} is due by ${due}.` : "Nothing is due: it is settled.",
+    p.card ? "You can pay it by card in Panwise." : p.instructions || "Please pay by bank transfer or cheque, quoting the invoice number.",
+  ];
+  return { subject: `Invoice ${p.number} from ${p.bakeryName}`, ...layout(p.bakeryName, `Invoice ${p.number}`, paras, { label: p.card && p.dueCents > 0 ? "View and pay" : "View the invoice", url: p.url }) };
+}
+
+export function receiptMail(p: { bakeryName: string; currency: string; number: string; amountCents: number; method: string; url: string }): Rendered {
+  const money = (c: number) => new Intl.NumberFormat("en-US", { style: "currency", currency: p.currency }).format(c / 100);
+  return { subject: `Payment received for ${p.number} — ${p.bakeryName}`, ...layout(p.bakeryName, "Payment received", [`Thank you: we received ${money(p.amountCents)} (${p.method}) for invoice ${p.number}.`], { label: "View the invoice", url: p.url }) };
+}

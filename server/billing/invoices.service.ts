@@ -1,0 +1,366 @@
+import { DateTime } from "luxon";
+import { In, IsNull, LessThan, type EntityManager } from "typeorm";
+import type { AppContext } from "../http/context";
+import { badRequest, conflict, notFound } from "../http/errors";
+import { CreditNote, DeliveryAdjustment, Invoice, InvoiceLine, NumberCounter, Payment, Refund, TaxCertificate, type InvoiceStatus } from "./billing.entity";
+import { Order, OrderLine } from "../orders/order.entity";
+import { CustomerAccount } from "../accounts/account.entity";
+import { getBakery } from "../bakery/bakery.service";
+import { enqueueMail } from "../mail/outbox.service";
+import { invoiceMail } from "../mail/templates";
+import { renderInvoicePdf } from "./invoice.pdf";
+import { amountDue, dueDate, formatDocNumber, invoiceTotals, taxCents, type PaymentTerms } from "../../shared/billing";
+import { localToday, addDays } from "../../shared/calendar";
+import type { SessionUser } from "../../shared/schemas/auth";
+
+// ---- numbers ----------------------------------------------------------------------------------
+
+/**
+ * The next number in a series for a year, allocated inside the caller's transaction under a row lock:
+ * two processes issuing at once wait for each other, and a rolled-back transaction gives its number back.
+ */
+export async function allocateNumber(m: EntityManager, series: string, year: number): Promise<number> {
+  await m.query("INSERT IGNORE INTO number_counter (series, year, next) VALUES (?, ?, 1)", [series, year]);
+  const [row] = await m.query("SELECT next FROM number_counter WHERE series = ? AND year = ? FOR UPDATE", [series, year]);
+  const n = Number(row.next);
+  await m.getRepository(NumberCounter).update({ series, year }, { next: n + 1 });
+  return n;
+}
+
+// ---- tax exemption --------------------------------------------------------------------------------
+
+export async function validExemption(m: EntityManager, accountId: number, onDate: string): Promise<TaxCertificate | null> {
+  return m.getRepository(TaxCertificate).createQueryBuilder("c")
+    .where("c.accountId = :a AND c.status = 'approved' AND c.expiresOn >= :d", { a: accountId, d: onDate })
+    .orderBy("c.expiresOn", "DESC").getOne();
+}
+
+// ---- status -------------------------------------------------------------------------------------
+
+export function statusOf(inv: Pick<Invoice, "status" | "totalCents" | "creditedCents" | "paidCents" | "refundedCents">): InvoiceStatus {
+  if (inv.status === "void") return "void";
+  if (inv.refundedCents > 0 && inv.refundedCents >= inv.paidCents && inv.paidCents > 0) return "refunded";
+  if (inv.refundedCents > 0) return "partially_refunded";
+  return amountDue({ ...inv, refundedCents: 0 }) === 0 ? "paid" : "open";
+}
+
+async function refreshStatus(m: EntityManager, invoiceId: number): Promise<Invoice> {
+  const inv = await m.getRepository(Invoice).findOneByOrFail({ id: invoiceId });
+  const status = statusOf(inv);
+  if (status !== inv.status) await m.getRepository(Invoice).update({ id: inv.id }, { status });
+  return { ...inv, status };
+}
+
+// ---- issuing --------------------------------------------------------------------------------------
+
+/**
+ * Issue one invoice for a set of delivered orders of one account: lines at the prices copied on the
+ * orders, tax unless a valid exemption is held, then credit notes for anything delivered short
+ * (applied to this invoice) and for credit carried from earlier invoices. Mails it with its PDF.
+ */
+export async function issueInvoice(ctx: AppContext, m: EntityManager, account: CustomerAccount, orderIds: number[], kind: "order" | "statement", period?: { start: string; end: string }): Promise<Invoice | null> {
+  const bakery = await getBakery(ctx, m);
+  const lines = await m.getRepository(OrderLine).createQueryBuilder("l")
+    .innerJoin(Order, "o", "o.id = l.orderId")
+    .leftJoin(InvoiceLine, "il", "il.orderLineId = l.id")
+    .where("l.orderId IN (:...ids) AND il.id IS NULL AND o.status = 'delivered'", { ids: orderIds.concat([0]) })
+    .select(["l.id AS id", "l.orderId AS orderId", "o.deliveryDate AS deliveryDate", "l.productId AS productId", "l.productName AS productName", "l.saleUnit AS saleUnit", "l.quantity AS quantity", "l.unitPriceCents AS unitPriceCents", "l.lineTotalCents AS lineTotalCents"])
+    .orderBy("o.deliveryDate").addOrderBy("l.id").getRawMany<{ id: number; orderId: number; deliveryDate: string; productId: number; productName: string; saleUnit: string; quantity: number; unitPriceCents: number; lineTotalCents: number }>();
+  if (!lines.length) return null;
+  const today = localToday(ctx.clock.now(), bakery.timeZone);
+  const exemption = await validExemption(m, account.id, today);
+  const rateBp = exemption ? 0 : bakery.salesTaxRateBp;
+  const totals = invoiceTotals(lines.map((l) => ({ amountCents: l.lineTotalCents })), rateBp);
+  const year = Number(today.slice(0, 4));
+  const seq = await allocateNumber(m, "invoice", year);
+  const inv = await m.getRepository(Invoice).save(m.getRepository(Invoice).create({
+    number: formatDocNumber(bakery.invoicePrefix, year, seq), year, seq, accountId: account.id, kind, status: "open",
+    issueDate: today, dueDate: dueDate(today, account.paymentTerms as PaymentTerms), periodStart: period?.start ?? null, periodEnd: period?.end ?? null,
+    currency: bakery.currency, subtotalCents: totals.subtotalCents, taxRateBp: rateBp, taxCents: totals.taxCents, totalCents: totals.totalCents,
+    creditedCents: 0, paidCents: 0, refundedCents: 0, taxExempt: !!exemption, sentAt: null,
+  }));
+  await m.getRepository(InvoiceLine).insert(lines.map((l) => ({
+    invoiceId: inv.id, orderLineId: l.id, orderId: l.orderId, deliveryDate: String(l.deliveryDate).slice(0, 10),
+    description: `${l.productName} (${l.saleUnit})`, quantity: l.quantity, unitPriceCents: l.unitPriceCents, amountCents: l.lineTotalCents,
+  })));
+
+  // Short deliveries on these orders become a credit note applied to this invoice.
+  const adjustments = await m.getRepository(DeliveryAdjustment).findBy({ orderId: In([...new Set(lines.map((l) => l.orderId))]), creditNoteId: IsNull() });
+  const shortLines = adjustments.flatMap((a) => {
+    const l = lines.find((x) => x.orderId === a.orderId && x.productId === a.productId);
+    if (!l || a.deliveredQuantity >= l.quantity) return [];
+    const q = l.quantity - a.deliveredQuantity;
+    return [{ description: `${l.productName} (${l.saleUnit}) delivered ${a.deliveredQuantity} of ${l.quantity}${a.reason ? `: ${a.reason}` : ""}`, quantity: q, unitPriceCents: l.unitPriceCents, amountCents: q * l.unitPriceCents }];
+  });
+  if (shortLines.length) {
+    const cn = await createCreditNote(ctx, m, inv, shortLines, "Short delivery", "applied");
+    await m.getRepository(DeliveryAdjustment).update({ id: In(adjustments.map((a) => a.id)) }, { creditNoteId: cn.id });
+  }
+  // Credit carried from earlier invoices of this account comes off this one, up to what it owes.
+  const carried = await m.getRepository(CreditNote).findBy({ accountId: account.id, disposition: "carry", carriedToInvoiceId: IsNull() });
+  for (const cn of carried) {
+    const fresh = await m.getRepository(Invoice).findOneByOrFail({ id: inv.id });
+    if (amountDue(fresh) < cn.totalCents) break;
+    await m.getRepository(CreditNote).update({ id: cn.id }, { carriedToInvoiceId: inv.id });
+    await m.getRepository(Invoice).increment({ id: inv.id }, "creditedCents", cn.totalCents);
+  }
+  const issued = await refreshStatus(m, inv.id);
+  await queueInvoiceMail(ctx, m, issued, account);
+  return issued;
+}
+
+export async function createCreditNote(ctx: AppContext, m: EntityManager, inv: Invoice, lines: { description: string; quantity: number; unitPriceCents: number; amountCents: number }[], reason: string, disposition: "applied" | "refund" | "carry", stripeRefundId: string | null = null): Promise<CreditNote> {
+  const bakery = await getBakery(ctx, m);
+  const subtotal = lines.reduce((s, l) => s + l.amountCents, 0);
+  const tax = taxCents(subtotal, inv.taxRateBp);
+  const today = localToday(ctx.clock.now(), bakery.timeZone);
+  const year = Number(today.slice(0, 4));
+  const seq = await allocateNumber(m, "credit", year);
+  const cn = await m.getRepository(CreditNote).save(m.getRepository(CreditNote).create({
+    number: formatDocNumber(`${bakery.invoicePrefix}-CN`, year, seq), invoiceId: inv.id, accountId: inv.accountId, reason,
+    lines: JSON.stringify(lines), subtotalCents: subtotal, taxCents: tax, totalCents: subtotal + tax, disposition, carriedToInvoiceId: null, stripeRefundId, issueDate: today,
+  }));
+  if (disposition === "applied") {
+    await m.getRepository(Invoice).increment({ id: inv.id }, "creditedCents", cn.totalCents);
+    await refreshStatus(m, inv.id);
+  }
+  return cn;
+}
+
+async function queueInvoiceMail(ctx: AppContext, m: EntityManager, inv: Invoice, account: CustomerAccount) {
+  const bakery = await getBakery(ctx, m);
+  const detail = await invoiceDetail(ctx, inv.id, m);
+  const pdf = await renderInvoicePdf({ ...detail, bakery, account });
+  const mail = invoiceMail({ bakeryName: bakery.name, currency: bakery.currency, number: inv.number, totalCents: inv.totalCents, dueCents: amountDue(inv), dueDate: inv.dueDate, url: `${ctx.config.publicUrl}/buyer/invoices/${inv.id}`, card: account.paymentTerms === "card", instructions: bakery.paymentInstructions });
+  await enqueueMail(m, ctx, "invoice", { to: account.billingEmail, fromName: bakery.name, ...mail, attachments: [{ filename: `${inv.number}.pdf`, contentType: "application/pdf", content: pdf }] });
+  await m.getRepository(Invoice).update({ id: inv.id }, { sentAt: ctx.clock.now() });
+}
+
+// ---- deliveries ------------------------------------------------------------------------------------
+
+/**
+ * Confirm a day's dispatch: every locked (or open) order for the date becomes delivered; adjustments
+ * record what went out short. Accounts paying by card get their invoice at once.
+ */
+export async function confirmDispatch(ctx: AppContext, date: string, adjustments: { orderId: number; productId: number; deliveredQuantity: number; reason?: string }[]) {
+  const result = await ctx.dataSource.transaction(async (m) => {
+    const orders = await m.getRepository(Order).createQueryBuilder("o").setLock("pessimistic_write")
+      .where("o.deliveryDate = :d AND o.status IN ('open', 'locked')", { d: date }).getMany();
+    const ids = new Set(orders.map((o) => o.id));
+    const lines = orders.length ? await m.getRepository(OrderLine).findBy({ orderId: In([...ids]) }) : [];
+    const fields: Record<string, string> = {};
+    adjustments.forEach((a, i) => {
+      const line = lines.find((l) => l.orderId === a.orderId && l.productId === a.productId);
+      if (!ids.has(a.orderId)) fields[`adjustments.${i}.orderId`] = "That order is not waiting for dispatch on this date.";
+      else if (!line) fields[`adjustments.${i}.productId`] = "That product is not on the order.";
+      else if (a.deliveredQuantity > line.quantity) fields[`adjustments.${i}.deliveredQuantity`] = `At most the ${line.quantity} ordered.`;
+    });
+    if (Object.keys(fields).length) throw badRequest("Some adjustments need attention.", fields);
+    for (const a of adjustments) {
+      await m.getRepository(DeliveryAdjustment).upsert({ orderId: a.orderId, productId: a.productId, deliveredQuantity: a.deliveredQuantity, reason: a.reason ?? "", creditNoteId: null }, ["orderId", "productId"]);
+    }
+    if (ids.size) await m.getRepository(Order).update({ id: In([...ids]) }, { status: "delivered" });
+    return orders;
+  });
+  const invoices = await invoiceCardOrders(ctx, result.map((o) => o.id));
+  return { delivered: result.length, invoices: invoices.map((i) => i.number) };
+}
+
+/** Card accounts: one invoice per delivered order. */
+async function invoiceCardOrders(ctx: AppContext, orderIds: number[]): Promise<Invoice[]> {
+  if (!orderIds.length) return [];
+  const orders = await ctx.dataSource.getRepository(Order).findBy({ id: In(orderIds), status: "delivered" });
+  const out: Invoice[] = [];
+  for (const o of orders) {
+    const inv = await ctx.dataSource.transaction(async (m) => {
+      const account = await m.getRepository(CustomerAccount).findOneByOrFail({ id: o.accountId });
+      if (account.paymentTerms !== "card") return null;
+      return issueInvoice(ctx, m, account, [o.id], "order");
+    });
+    if (inv) out.push(inv);
+  }
+  return out;
+}
+
+/** The job: orders not confirmed by the end of their delivery day are delivered as ordered (and invoiced). */
+export async function autoDeliver(ctx: AppContext): Promise<number> {
+  const bakery = await getBakery(ctx);
+  const today = localToday(ctx.clock.now(), bakery.timeZone);
+  const due = await ctx.dataSource.getRepository(Order).findBy({ deliveryDate: LessThan(today), status: In(["locked", "open"]) });
+  if (!due.length) return 0;
+  await ctx.dataSource.getRepository(Order).update({ id: In(due.map((o) => o.id)), status: In(["locked", "open"]) }, { status: "delivered" });
+  await invoiceCardOrders(ctx, due.map((o) => o.id));
+  return due.length;
+}
+
+/**
+ * Weekly statements for accounts on terms: every delivered, not-yet-invoiced order before the start of
+ * this week (Monday), or up to `through` when the office issues them by hand.
+ */
+export async function issueStatements(ctx: AppContext, through?: string): Promise<Invoice[]> {
+  const bakery = await getBakery(ctx);
+  const today = DateTime.fromISO(localToday(ctx.clock.now(), bakery.timeZone));
+  const end = through ?? today.startOf("week").minus({ days: 1 }).toISODate()!;
+  const rows: { accountId: number; orderId: number; deliveryDate: string }[] = await ctx.dataSource.query(
+    `SELECT DISTINCT o.accountId, o.id AS orderId, o.deliveryDate FROM customer_order o
+       JOIN customer_account a ON a.id = o.accountId AND a.paymentTerms <> 'card'
+       JOIN order_line l ON l.orderId = o.id LEFT JOIN invoice_line il ON il.orderLineId = l.id
+      WHERE o.status = 'delivered' AND o.deliveryDate <= ? AND il.id IS NULL`, [end]);
+  const byAccount = new Map<number, { ids: number[]; start: string }>();
+  for (const r of rows) {
+    const e = byAccount.get(r.accountId) ?? { ids: [], start: String(r.deliveryDate).slice(0, 10) };
+    e.ids.push(r.orderId);
+    if (String(r.deliveryDate).slice(0, 10) < e.start) e.start = String(r.deliveryDate).slice(0, 10);
+    byAccount.set(r.accountId, e);
+  }
+  const out: Invoice[] = [];
+  for (const [accountId, { ids, start }] of byAccount) {
+    const inv = await ctx.dataSource.transaction(async (m) => {
+      const account = await m.getRepository(CustomerAccount).findOneByOrFail({ id: accountId });
+      return issueInvoice(ctx, m, account, ids, "statement", { start, end });
+    });
+    if (inv) out.push(inv);
+  }
+  return out;
+}
+
+/** The job: invoices overdue by more than the bakery's hold days put the account on credit hold; paying lifts it. */
+export async function applyCreditHolds(ctx: AppContext): Promise<{ held: number; lifted: number }> {
+  const bakery = await getBakery(ctx);
+  const today = localToday(ctx.clock.now(), bakery.timeZone);
+  const limit = addDays(today, -bakery.creditHoldDays);
+  const overdue: { accountId: number }[] = await ctx.dataSource.query("SELECT DISTINCT accountId FROM invoice WHERE status = 'open' AND dueDate < ?", [limit]);
+  const overdueIds = new Set(overdue.map((r) => Number(r.accountId)));
+  const repo = ctx.dataSource.getRepository(CustomerAccount);
+  let held = 0;
+  let lifted = 0;
+  for (const id of overdueIds) {
+    const res = await repo.update({ id, status: "active" }, { status: "on_hold", creditHold: true });
+    held += res.affected ?? 0;
+  }
+  for (const a of await repo.findBy({ creditHold: true })) {
+    if (!overdueIds.has(a.id)) {
+      await repo.update({ id: a.id }, { status: a.status === "on_hold" ? "active" : a.status, creditHold: false });
+      lifted++;
+    }
+  }
+  return { held, lifted };
+}
+
+// ---- payments -----------------------------------------------------------------------------------------
+
+/** Record money received. A Stripe payment intent is recorded once, whichever event brings it. */
+export async function recordPayment(ctx: AppContext, m: EntityManager, p: { invoiceId: number; amountCents: number; method: Payment["method"]; reference?: string; receivedOn?: string; stripePaymentIntentId?: string | null; stripeChargeId?: string | null; recordedById?: number | null }): Promise<Payment | null> {
+  if (p.stripePaymentIntentId && (await m.getRepository(Payment).existsBy({ stripePaymentIntentId: p.stripePaymentIntentId }))) return null;
+  const inv = await m.getRepository(Invoice).createQueryBuilder("i").setLock("pessimistic_write").where("i.id = :id", { id: p.invoiceId }).getOne();
+  if (!inv) throw notFound("That invoice");
+  const bakery = await getBakery(ctx, m);
+  let payment: Payment;
+  try {
+    payment = await m.getRepository(Payment).save(m.getRepository(Payment).create({
+      invoiceId: inv.id, method: p.method, amountCents: p.amountCents, reference: p.reference ?? "", stripePaymentIntentId: p.stripePaymentIntentId ?? null,
+      stripeChargeId: p.stripeChargeId ?? null, receivedOn: p.receivedOn ?? localToday(ctx.clock.now(), bakery.timeZone), recordedById: p.recordedById ?? null,
+    }));
+  } catch (err) {
+    if ((err as { errno?: number; driverError?: { errno?: number } }).driverError?.errno === 1062) return null; // the twin event won
+    throw err;
+  }
+  await m.getRepository(Invoice).increment({ id: inv.id }, "paidCents", p.amountCents);
+  const updated = await refreshStatus(m, inv.id);
+  if (updated.status === "paid") await liftHoldIfClear(ctx, m, inv.accountId);
+  return payment;
+}
+
+async function liftHoldIfClear(ctx: AppContext, m: EntityManager, accountId: number) {
+  const account = await m.getRepository(CustomerAccount).findOneBy({ id: accountId });
+  if (!account?.creditHold) return;
+  const bakery = await getBakery(ctx, m);
+  const limit = addDays(localToday(ctx.clock.now(), bakery.timeZone), -bakery.creditHoldDays);
+  const stillOverdue = await m.getRepository(Invoice).countBy({ accountId, status: "open", dueDate: LessThan(limit) });
+  if (stillOverdue === 0) await m.getRepository(CustomerAccount).update({ id: accountId }, { status: account.status === "on_hold" ? "active" : account.status, creditHold: false });
+}
+
+export async function recordManualPayment(ctx: AppContext, actor: SessionUser, invoiceId: number, input: { amountCents: number; method: "bank_transfer" | "cheque" | "cash" | "other"; reference: string; receivedOn: string }) {
+  return ctx.dataSource.transaction(async (m) => {
+    const inv = await m.getRepository(Invoice).findOneBy({ id: invoiceId });
+    if (!inv) throw notFound("That invoice");
+    if (inv.status === "void") throw conflict("invoice_void", "This invoice is void.");
+    const due = amountDue(inv);
+    if (input.amountCents > due) throw badRequest(`That is more than the ${due / 100} still owed.`, { amountCents: `At most ${(due / 100).toFixed(2)}.` });
+    return recordPayment(ctx, m, { invoiceId, amountCents: input.amountCents, method: input.method, reference: input.reference, receivedOn: input.receivedOn, recordedById: actor.id });
+  });
+}
+
+/** A Stripe refund seen (from our own call or a charge.refunded event): recorded once per refund id. */
+export async function recordRefund(ctx: AppContext, m: EntityManager, r: { invoiceId: number; stripeRefundId: string; stripeChargeId: string | null; amountCents: number; creditNoteId?: number | null }) {
+  if (await m.getRepository(Refund).existsBy({ stripeRefundId: r.stripeRefundId })) return false;
+  try {
+    await m.getRepository(Refund).insert({ invoiceId: r.invoiceId, stripeRefundId: r.stripeRefundId, stripeChargeId: r.stripeChargeId, amountCents: r.amountCents, creditNoteId: r.creditNoteId ?? null });
+  } catch (err) {
+    if ((err as { driverError?: { errno?: number } }).driverError?.errno === 1062) return false;
+    throw err;
+  }
+  await m.getRepository(Invoice).increment({ id: r.invoiceId }, "refundedCents", r.amountCents);
+  await refreshStatus(m, r.invoiceId);
+  return true;
+}
+
+// ---- reading --------------------------------------------------------------------------------------------
+
+export async function invoiceDetail(ctx: AppContext, id: number, m: EntityManager = ctx.dataSource.manager) {
+  const inv = await m.getRepository(Invoice).findOneBy({ id });
+  if (!inv) throw notFound("That invoice");
+  const [lines, payments, credits, refunds, account] = await Promise.all([
+    m.getRepository(InvoiceLine).find({ where: { invoiceId: id }, order: { deliveryDate: "ASC", id: "ASC" } }),
+    m.getRepository(Payment).find({ where: { invoiceId: id }, order: { id: "ASC" } }),
+    m.getRepository(CreditNote).find({ where: [{ invoiceId: id }, { carriedToInvoiceId: id }], order: { id: "ASC" } }),
+    m.getRepository(Refund).find({ where: { invoiceId: id }, order: { id: "ASC" } }),
+    m.getRepository(CustomerAccount).findOneByOrFail({ id: inv.accountId }),
+  ]);
+  return {
+    invoice: { ...invoiceDto(inv, account.businessName, localToday(ctx.clock.now(), (await getBakery(ctx, m)).timeZone)) },
+    lines: lines.map((l) => ({ id: l.id, orderId: l.orderId, deliveryDate: l.deliveryDate, description: l.description, quantity: l.quantity, unitPriceCents: l.unitPriceCents, amountCents: l.amountCents })),
+    payments: payments.map((p) => ({ id: p.id, method: p.method, amountCents: p.amountCents, reference: p.reference, receivedOn: p.receivedOn, stripePaymentIntentId: p.stripePaymentIntentId, stripeChargeId: p.stripeChargeId })),
+    creditNotes: credits.map((c) => ({ id: c.id, number: c.number, reason: c.reason, totalCents: c.totalCents, subtotalCents: c.subtotalCents, taxCents: c.taxCents, disposition: c.disposition, issueDate: c.issueDate, lines: JSON.parse(c.lines), carriedFromInvoiceId: c.carriedToInvoiceId === id ? c.invoiceId : null })),
+    refunds: refunds.map((r) => ({ id: r.id, stripeRefundId: r.stripeRefundId, amountCents: r.amountCents, createdAt: r.createdAt.toISOString() })),
+  };
+}
+
+export function invoiceDto(inv: Invoice, accountName: string, today: string) {
+  const due = amountDue(inv);
+  return {
+    id: inv.id, number: inv.number, accountId: inv.accountId, accountName, kind: inv.kind, status: inv.status, issueDate: inv.issueDate, dueDate: inv.dueDate,
+    periodStart: inv.periodStart, periodEnd: inv.periodEnd, currency: inv.currency, subtotalCents: inv.subtotalCents, taxRateBp: inv.taxRateBp, taxCents: inv.taxCents,
+    totalCents: inv.totalCents, creditedCents: inv.creditedCents, paidCents: inv.paidCents, refundedCents: inv.refundedCents, amountDueCents: due,
+    overdue: inv.status === "open" && due > 0 && inv.dueDate < today, taxExempt: inv.taxExempt, sentAt: inv.sentAt?.toISOString() ?? null,
+  };
+}
+
+export async function listInvoices(ctx: AppContext, actor: SessionUser, q: { status?: InvoiceStatus; accountId?: number; from?: string; to?: string; overdue?: boolean; q?: string; sort?: string }) {
+  const bakery = await getBakery(ctx);
+  const today = localToday(ctx.clock.now(), bakery.timeZone);
+  const qb = ctx.dataSource.getRepository(Invoice).createQueryBuilder("i").innerJoin(CustomerAccount, "a", "a.id = i.accountId").addSelect("a.businessName", "accountName");
+  if (actor.role === "buyer") qb.andWhere("i.accountId = :acc", { acc: actor.accountId });
+  else if (q.accountId) qb.andWhere("i.accountId = :acc", { acc: q.accountId });
+  if (q.status) qb.andWhere("i.status = :s", { s: q.status });
+  if (q.from) qb.andWhere("i.issueDate >= :from", { from: q.from });
+  if (q.to) qb.andWhere("i.issueDate <= :to", { to: q.to });
+  if (q.overdue) qb.andWhere("i.status = 'open' AND i.dueDate < :today", { today });
+  if (q.q) qb.andWhere("(i.number LIKE :q OR a.businessName LIKE :q)", { q: `%${q.q.replace(/[%_\\]/g, "\\$&")}%` });
+  const sorts: Record<string, [string, "ASC" | "DESC"]> = { newest: ["i.id", "DESC"], oldest: ["i.id", "ASC"], due: ["i.dueDate", "ASC"], amount: ["i.totalCents", "DESC"], account: ["a.businessName", "ASC"] };
+  const [col, dir] = sorts[q.sort ?? "newest"] ?? sorts.newest;
+  qb.orderBy(col, dir).addOrderBy("i.id", "DESC").take(1000);
+  const { entities, raw } = await qb.getRawAndEntities();
+  const rows = entities.map((inv, i) => invoiceDto(inv, (raw[i] as { accountName: string }).accountName, today));
+  return {
+    invoices: rows,
+    totals: { count: rows.length, totalCents: rows.reduce((s, r) => s + r.totalCents, 0), dueCents: rows.reduce((s, r) => s + r.amountDueCents, 0), paidCents: rows.reduce((s, r) => s + r.paidCents, 0) },
+  };
+}
+
+export async function getInvoiceFor(ctx: AppContext, actor: SessionUser, id: number) {
+  const inv = await ctx.dataSource.getRepository(Invoice).findOneBy({ id });
+  if (!inv || (actor.role === "buyer" && inv.accountId !== actor.accountId)) throw notFound("That invoice");
+  return invoiceDetail(ctx, id);
+}
+

@@ -1,0 +1,57 @@
+/**
+ * Invoice arithmetic in integer minor units (cents).
+ * Rounding rule: sales tax is worked out once per invoice (or credit note) on its subtotal, then rounded
+ * half up to the cent (a half cent goes up). Lines are never taxed and rounded one by one.
+ */
+import { DateTime } from "luxon";
+
+export const PAYMENT_TERMS = ["card", "net7", "net14", "net30"] as const;
+export type PaymentTerms = (typeof PAYMENT_TERMS)[number];
+export const PAYMENT_TERMS_LABELS: Record<PaymentTerms, string> = {
+  card: "Card on each invoice",
+  net7: "Weekly statement, net 7",
+  net14: "Weekly statement, net 14",
+  net30: "Weekly statement, net 30",
+};
+
+export function termDays(terms: PaymentTerms): number {
+  return terms === "card" ? 0 : Number(terms.slice(3));
+}
+
+/** Half up to the cent: taxCents(1000, 875) = 87.5 → 88. Integer arithmetic, no floating error. */
+export function taxCents(subtotalCents: number, rateBp: number): number {
+  const scaled = subtotalCents * rateBp; // tax × 10,000
+  const q = Math.floor(scaled / 10000);
+  return scaled - q * 10000 >= 5000 ? q + 1 : q;
+}
+
+export function invoiceTotals(lines: { amountCents: number }[], rateBp: number) {
+  const subtotalCents = lines.reduce((s, l) => s + l.amountCents, 0);
+  const tax = taxCents(subtotalCents, rateBp);
+  return { subtotalCents, taxCents: tax, totalCents: subtotalCents + tax };
+}
+
+/** What is still owed on an invoice. */
+export function amountDue(inv: { totalCents: number; creditedCents: number; paidCents: number; refundedCents: number }): number {
+  return Math.max(0, inv.totalCents - inv.creditedCents - inv.paidCents + inv.refundedCents);
+}
+
+export function dueDate(issueDate: string, terms: PaymentTerms): string {
+  return DateTime.fromISO(issueDate).plus({ days: termDays(terms) }).toISODate()!;
+}
+
+export const AGING_BUCKETS = ["current", "1-30", "31-60", "61-90", "90+"] as const;
+export type AgingBucket = (typeof AGING_BUCKETS)[number];
+
+/** Days past due → bucket: not yet due is "current". */
+export function agingBucket(due: string, today: string): AgingBucket {
+  const days = Math.round(DateTime.fromISO(today).diff(DateTime.fromISO(due), "days").days);
+  if (days <= 0) return "current";
+  if (days <= 30) return "1-30";
+  if (days <= 60) return "31-60";
+  if (days <= 90) return "61-90";
+  return "90+";
+}
+
+/** "HB-2026-00042" */
+export const formatDocNumber = (prefix: string, year: number, seq: number) => `${prefix}-${year}-${String(seq).padStart(5, "0")}`;
