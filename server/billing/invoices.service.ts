@@ -9,6 +9,7 @@ import { getBakery } from "../bakery/bakery.service";
 import { enqueueMail } from "../mail/outbox.service";
 import { invoiceMail } from "../mail/templates";
 import { renderInvoicePdf } from "./invoice.pdf";
+import { retryOnDeadlock } from "../db/retry";
 import { amountDue, dueDate, formatDocNumber, invoiceTotals, taxCents, type PaymentTerms } from "../../shared/billing";
 import { localToday, addDays } from "../../shared/calendar";
 import type { SessionUser } from "../../shared/schemas/auth";
@@ -20,8 +21,12 @@ import type { SessionUser } from "../../shared/schemas/auth";
  * two processes issuing at once wait for each other, and a rolled-back transaction gives its number back.
  */
 export async function allocateNumber(m: EntityManager, series: string, year: number): Promise<number> {
-  await m.query("INSERT IGNORE INTO number_counter (series, year, next) VALUES (?, ?, 1)", [series, year]);
-  const [row] = await m.query("SELECT next FROM number_counter WHERE series = ? AND year = ? FOR UPDATE", [series, year]);
+  let [row] = await m.query("SELECT next FROM number_counter WHERE series = ? AND year = ? FOR UPDATE", [series, year]);
+  if (!row) {
+    // The year's first number: racing creators may deadlock here; callers run in retryOnDeadlock.
+    await m.query("INSERT IGNORE INTO number_counter (series, year, next) VALUES (?, ?, 1)", [series, year]);
+    [row] = await m.query("SELECT next FROM number_counter WHERE series = ? AND year = ? FOR UPDATE", [series, year]);
+  }
   const n = Number(row.next);
   await m.getRepository(NumberCounter).update({ series, year }, { next: n + 1 });
   return n;
@@ -172,11 +177,11 @@ async function invoiceCardOrders(ctx: AppContext, orderIds: number[]): Promise<I
   const orders = await ctx.dataSource.getRepository(Order).findBy({ id: In(orderIds), status: "delivered" });
   const out: Invoice[] = [];
   for (const o of orders) {
-    const inv = await ctx.dataSource.transaction(async (m) => {
+    const inv = await retryOnDeadlock(() => ctx.dataSource.transaction(async (m) => {
       const account = await m.getRepository(CustomerAccount).findOneByOrFail({ id: o.accountId });
       if (account.paymentTerms !== "card") return null;
       return issueInvoice(ctx, m, account, [o.id], "order");
-    });
+    }));
     if (inv) out.push(inv);
   }
   return out;
@@ -215,10 +220,10 @@ export async function issueStatements(ctx: AppContext, through?: string): Promis
   }
   const out: Invoice[] = [];
   for (const [accountId, { ids, start }] of byAccount) {
-    const inv = await ctx.dataSource.transaction(async (m) => {
+    const inv = await retryOnDeadlock(() => ctx.dataSource.transaction(async (m) => {
       const account = await m.getRepository(CustomerAccount).findOneByOrFail({ id: accountId });
       return issueInvoice(ctx, m, account, ids, "statement", { start, end });
-    });
+    }));
     if (inv) out.push(inv);
   }
   return out;

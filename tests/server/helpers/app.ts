@@ -37,7 +37,7 @@ export async function startTestApp(opts: { now?: string } = {}): Promise<TestApp
   const mailer = createSmtpMailer(`smtp://127.0.0.1:${mail.smtpPort}`, "orders@bakery.test", createLogger("silent"));
   const ctx = buildContext({ config, dataSource: db.dataSource, clock, mailer });
   const app = createApp(ctx);
-  return {
+  const t: TestApp = {
     ctx,
     app,
     clock,
@@ -46,11 +46,12 @@ export async function startTestApp(opts: { now?: string } = {}): Promise<TestApp
     http: () => request(app),
     async close() {
       mailer.close();
-      await this.mail.close(); // a test may have swapped in a new mail fake
-      if (this.mail !== mail) await mail.close();
+      await t.mail.close(); // a test may have swapped in a new mail fake
+      if (t.mail !== mail) await mail.close();
       await db.drop();
     },
   };
+  return t;
 }
 
 let seq = 0;
