@@ -95,7 +95,7 @@ async function rush(base: string, deliveryDate: string, cutoffMs: number) {
 }
 
 /** The baseline: a bare Express route inserting one row with mysql2, under the same client load (300 clients, 1–4 s apart). */
-async function baseline(dbName: string, seconds: number) {
+async function baseline(dbName: string, runSeconds: number) {
   const cfg = loadConfig().db;
   const pool = mysql.createPool({ host: cfg.host, port: cfg.port, user: cfg.user, password: cfg.password, database: dbName, connectionLimit: 10 });
   await pool.query("CREATE TABLE bare_insert (id INT AUTO_INCREMENT PRIMARY KEY, accountId INT NOT NULL, qty INT NOT NULL, at DATETIME(3) NOT NULL)");
@@ -109,7 +109,7 @@ async function baseline(dbName: string, seconds: number) {
   const server = app.listen(port, "127.0.0.1");
   const ms: number[] = [];
   const t0 = Date.now();
-  const until = t0 + seconds * 1000;
+  const until = t0 + runSeconds * 1000;
   await Promise.all(Array.from({ length: BUYERS }, async (_, i) => {
     await sleep(Math.random() * 3000);
     for (let k = 0; Date.now() < until; k++) {

@@ -58,6 +58,8 @@ export interface RequestOptions {
   /** Send the bearer token (default true). Sign-in and link screens send none. */
   auth?: boolean;
   signal?: AbortSignal;
+  /** Extra request headers (e.g. Idempotency-Key). */
+  headers?: Record<string, string>;
 }
 
 export function buildUrl(path: string, query?: Query): string {
@@ -67,10 +69,30 @@ export function buildUrl(path: string, query?: Query): string {
   return `${BASE_URL}${path}${params.length ? `?${params.join("&")}` : ""}`;
 }
 
+/** Parse a response body's text as JSON, or undefined. */
+function parseJson(text: string): unknown {
+  if (!text) return undefined;
+  try {
+    return JSON.parse(text);
+  } catch {
+    return undefined;
+  }
+}
+
+/** The ApiError for a failed answer (and sign out on a 401 to an authenticated call). */
+function failure(status: number, data: unknown, sentToken: boolean): ApiError {
+  if (status === 401 && sentToken && onUnauthorized) onUnauthorized();
+  if (isApiErrorBody(data)) {
+    const { code, message, fields, ...details } = data.error;
+    return new ApiError(status, code, message, fields, details);
+  }
+  return new ApiError(status, "http_error", status >= 500 ? "Something went wrong on the server. Please try again." : `The request failed (${status}).`);
+}
+
 /** Call the API and return its JSON, or throw an ApiError. */
 export async function api<T>(path: string, options: RequestOptions = {}): Promise<T> {
-  const { method = "GET", body, query, auth = true, signal } = options;
-  const headers: Record<string, string> = { Accept: "application/json" };
+  const { method = "GET", body, query, auth = true, signal, headers: extra } = options;
+  const headers: Record<string, string> = { Accept: "application/json", ...extra };
   if (body !== undefined) headers["Content-Type"] = "application/json";
   const token = auth ? authToken : null;
   if (token) headers.Authorization = `Bearer ${token}`;
@@ -83,25 +105,77 @@ export async function api<T>(path: string, options: RequestOptions = {}): Promis
     throw new ApiError(0, "network_error", NETWORK_MESSAGE);
   }
 
-  let data: unknown = undefined;
-  if (res.status !== 204) {
-    const text = await res.text();
-    if (text) {
-      try {
-        data = JSON.parse(text);
-      } catch {
-        data = undefined;
-      }
-    }
+  const data: unknown = res.status === 204 ? undefined : parseJson(await res.text());
+  if (!res.ok) throw failure(res.status, data, !!token);
+  return data as T;
+}
+
+/** GET a file the API makes (CSV) as a Blob, with the bearer token. */
+export async function apiBlob(path: string, query?: Query): Promise<Blob> {
+  const headers: Record<string, string> = {};
+  const token = authToken;
+  if (token) headers.Authorization = `Bearer ${token}`;
+  let res: Response;
+  try {
+    res = await fetch(buildUrl(path, query), { method: "GET", headers });
+  } catch {
+    throw new ApiError(0, "network_error", NETWORK_MESSAGE);
+  }
+  if (!res.ok) throw failure(res.status, parseJson(await res.text()), !!token);
+  return res.blob();
+}
+
+/** A file picked for upload: a browser File, or a { uri, name, type } object on native. */
+export type UploadFile = Blob | { uri: string; name: string; type: string };
+
+/**
+ * Send one file as multipart/form-data. On the web this uses XMLHttpRequest, whose upload.onprogress
+ * reports the bytes sent (fetch cannot); elsewhere fetch, with progress jumping to the end.
+ */
+export async function uploadFile<T>(path: string, options: { method?: "PUT" | "POST"; field: string; file: UploadFile; fileName?: string; onProgress?: (fraction: number) => void }): Promise<T> {
+  const { method = "PUT", field, file, fileName, onProgress } = options;
+  const form = new FormData();
+  if (typeof Blob !== "undefined" && file instanceof Blob) form.append(field, file, fileName ?? (file as File).name ?? "upload");
+  else form.append(field, file as unknown as Blob);
+  const token = authToken;
+  const url = buildUrl(path);
+
+  if (Platform.OS === "web" && typeof XMLHttpRequest !== "undefined") {
+    return new Promise<T>((resolve, reject) => {
+      const xhr = new XMLHttpRequest();
+      xhr.open(method, url);
+      xhr.setRequestHeader("Accept", "application/json");
+      if (token) xhr.setRequestHeader("Authorization", `Bearer ${token}`);
+      xhr.upload.onprogress = (e) => {
+        if (e.lengthComputable && e.total > 0) onProgress?.(Math.min(1, e.loaded / e.total));
+      };
+      xhr.onload = () => {
+        const data = parseJson(xhr.responseText);
+        if (xhr.status >= 200 && xhr.status < 300) {
+          onProgress?.(1);
+          resolve(data as T);
+        } else if (xhr.status === 413 && !isApiErrorBody(data)) {
+          // A proxy in front may refuse a large body before the API sees it.
+          reject(new ApiError(413, "payload_too_large", "The photo is larger than 5 MB. Use a smaller one."));
+        } else {
+          reject(failure(xhr.status, data, !!token));
+        }
+      };
+      xhr.onerror = () => reject(new ApiError(0, "network_error", NETWORK_MESSAGE));
+      xhr.send(form);
+    });
   }
 
-  if (!res.ok) {
-    if (res.status === 401 && token && onUnauthorized) onUnauthorized();
-    if (isApiErrorBody(data)) {
-      const { code, message, fields, ...details } = data.error;
-      throw new ApiError(res.status, code, message, fields, details);
-    }
-    throw new ApiError(res.status, "http_error", res.status >= 500 ? "Something went wrong on the server. Please try again." : `The request failed (${res.status}).`);
+  const headers: Record<string, string> = { Accept: "application/json" };
+  if (token) headers.Authorization = `Bearer ${token}`;
+  let res: Response;
+  try {
+    res = await fetch(url, { method, headers, body: form });
+  } catch {
+    throw new ApiError(0, "network_error", NETWORK_MESSAGE);
   }
+  const data = parseJson(await res.text());
+  if (!res.ok) throw failure(res.status, data, !!token);
+  onProgress?.(1);
   return data as T;
 }

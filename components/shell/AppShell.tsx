@@ -8,7 +8,7 @@ import { AppText } from "../ui/Text";
 import { useAuth } from "../auth/useAuth";
 import { BrandMark } from "./BrandMark";
 import { LinkPressable } from "../ui/LinkPressable";
-import { AREA_LABEL, isActive, navFor, type NavItem } from "./navItems";
+import { AREA_LABEL, isActive, navFor, tabsFor, type NavItem } from "./navItems";
 import { useIsWide } from "./useIsWide";
 import { ROLE_LABELS, type HomeArea } from "../../shared/roles";
 
@@ -78,7 +78,7 @@ export function AppShell({ area, children }: { area: HomeArea; children: React.R
       <View style={styles.narrowMain} {...landmark("main")}>
         {children}
       </View>
-      <BottomTabs items={items} pathname={pathname} />
+      <BottomTabs items={tabsFor(area, user.role).tabs} pathname={pathname} />
     </View>
   );
 }

@@ -10,7 +10,8 @@ export interface LinkPressableProps extends Omit<PressableProps, "style"> {
 
 /**
  * A Pressable for `<Link asChild>`: Link's Slot merges style objects and drops a style function,
- * so hover and press feedback are tracked here and applied as plain styles.
+ * so hover and press feedback are tracked here and applied as plain styles. Pass one style object (or
+ * StyleSheet.flatten an array): the Slot spreads it, and a spread array is no style on the web.
  */
 export const LinkPressable = forwardRef<View, LinkPressableProps>(function LinkPressable(
   { style, highlightStyle, highlighted, onHoverIn, onHoverOut, onPressIn, onPressOut, ...rest },

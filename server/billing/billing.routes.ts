@@ -19,6 +19,7 @@ import { resolveAccount } from "../calendar/calendar.service";
 import * as invoices from "./invoices.service";
 import * as payments from "./payments.service";
 import { renderInvoicePdf } from "./invoice.pdf";
+import { sniff } from "../catalog/catalog.service";
 
 const idParam = z.object({ id: idSchema });
 const OFFICE = ["owner", "bookkeeper"] as const;
@@ -175,8 +176,7 @@ export function accountBillingRoutes(ctx: AppContext): Router {
     const account = await resolveAccount(ctx, currentUser(req), id);
     const { expiresOn } = parse(z.object({ expiresOn: dateSchema }), req.body);
     if (!req.file) throw badRequest("Attach the certificate (PDF, JPEG or PNG).", { file: "Attach the certificate." });
-    const { fromBuffer } = await import("file-type");
-    const kind = await fromBuffer(req.file.buffer);
+    const kind = await sniff(req.file.buffer);
     const ext = kind?.mime === "application/pdf" ? "pdf" : kind?.mime === "image/jpeg" ? "jpg" : kind?.mime === "image/png" ? "png" : null;
     if (!ext || !kind) throw new HttpError(415, "unsupported_media_type", "Upload the certificate as a PDF, JPEG or PNG.", { file: "PDF, JPEG or PNG only." });
     const dir = path.join(ctx.config.uploadsDir, "certificates");

@@ -111,13 +111,19 @@ export async function updateProduct(ctx: AppContext, id: number, body: unknown):
 
 // ---- photos -------------------------------------------------------------------------------
 
+/** file-type 16 is CommonJS: under tsx its functions arrive on `default`, under Jest on the module itself. */
+export async function sniff(buffer: Buffer): Promise<{ mime: string; ext: string } | undefined> {
+  const mod = (await import("file-type")) as unknown as { fromBuffer?: typeof import("file-type").fromBuffer; default?: { fromBuffer: typeof import("file-type").fromBuffer } };
+  const fromBuffer = mod.fromBuffer ?? mod.default!.fromBuffer;
+  return fromBuffer(buffer);
+}
+
 export const PHOTO_MAX_BYTES = 5 * 1024 * 1024;
 const PHOTO_TYPES: Record<string, string> = { "image/jpeg": "jpg", "image/png": "png", "image/webp": "webp" };
 
 /** The photo's type from its bytes (file-type reads the magic numbers), never from its name. */
 export async function sniffImage(buffer: Buffer): Promise<{ mime: string; ext: string } | null> {
-  const { fromBuffer } = await import("file-type");
-  const found = await fromBuffer(buffer);
+  const found = await sniff(buffer);
   if (!found || !PHOTO_TYPES[found.mime]) return null;
   return { mime: found.mime, ext: PHOTO_TYPES[found.mime] };
 }

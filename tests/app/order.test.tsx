@@ -42,7 +42,7 @@ describe("order screen for a date", () => {
   it("shows how much is missing to the account's minimum and places the order with an idempotency key", async () => {
     const api = mockApi(
       buyerOrderingRoutes(DAY, {
-        "POST /api/orders": (req) => ({ status: 201, body: { order: orderDto({ lines: [], totalCents: 7200, ...(req.body as object) && {} }) } }),
+        "POST /api/orders": { status: 201, body: { order: orderDto({ lines: [], totalCents: 7200 }) } },
       }),
     );
     renderApp("/buyer/order/2025-12-03");
@@ -131,7 +131,7 @@ describe("order screen for a date", () => {
     const api = mockApi(
       buyerOrderingRoutes(calendarDay({ order: { id: 501, status: "open", totalCents: 5400, itemCount: 3, source: "one_off" } }), {
         "GET /api/orders/:id": { body: { order } },
-        "PATCH /api/orders/:id": (req) => ({ body: { order: { ...order, totalCents: 9000, lines: [{ ...order.lines[0], quantity: 5, lineTotalCents: 9000 }], ...(req.body as object && {}) } } }),
+        "PATCH /api/orders/:id": { body: { order: { ...order, totalCents: 9000, lines: [{ ...order.lines[0], quantity: 5, lineTotalCents: 9000 }] } } },
         "DELETE /api/orders/:id": { body: { order: { ...order, status: "cancelled" } } },
       }),
     );
@@ -143,7 +143,7 @@ describe("order screen for a date", () => {
     fireEvent.press(screen.getByTestId("order-submit"));
     await waitFor(() => expect(api.callsTo("PATCH", "/api/orders/501")).toHaveLength(1));
     expect(api.callsTo("PATCH", "/api/orders/501")[0].body).toEqual({ lines: [{ productId: 101, quantity: 5 }], poNumber: "", note: "" });
-    expect(await screen.findByTestId("order-notice")).toHaveTextContent("Changes saved. Your order for Wed 3 Dec is now $90.00.");
+    expect(await screen.findByTestId("order-notice")).toHaveTextContent(/Changes saved\. Your order for Wed 3 Dec is now \$90\.00\./);
 
     fireEvent.press(screen.getByTestId("order-cancel"));
     fireEvent.press(screen.getByTestId("order-cancel-confirm"));

@@ -19,6 +19,8 @@ import { formatDateTime } from "../../format";
 import { useIsWide } from "../../shell/useIsWide";
 import { ACCOUNT_STATUS_LABELS, type AccountDto, type AccountStatus } from "../../../shared/schemas/accounts";
 import { colors, radii, space } from "../../theme";
+import { AccountDeliveryCard } from "./AccountDeliveryCard";
+import { CalendarFeedCard } from "../common/CalendarFeedCard";
 
 /** One customer account. The owner can edit it, put it on hold, close it (after a confirm step) and reopen it. */
 export function AccountDetailScreen({ id }: { id: number }) {
@@ -82,10 +84,12 @@ export function AccountDetailScreen({ id }: { id: number }) {
               {a.notes || "No notes yet."}
             </AppText>
           </Card>
+          <AccountDeliveryCard accountId={a.id} editable={isOwner} />
         </View>
         {isOwner ? (
           <View style={[styles.col, wide && styles.sideCol]}>
             <StatusCard account={a} />
+            <CalendarFeedCard accountId={a.id} />
           </View>
         ) : null}
       </View>

@@ -11,6 +11,8 @@ import { useBakeryQuery } from "../../api/bakery";
 import { firstName, formatBakeDay, formatClock, greetingAt } from "../../format";
 import { useIsWide } from "../../shell/useIsWide";
 import { colors, radii, space } from "../../theme";
+import { LinkButton } from "../../ui/LinkButton";
+import { addDays } from "../../ordering/dates";
 
 /** The baker's home: which day the bakery is on, by the bakery's own clock. */
 export function BakerHome() {
@@ -55,6 +57,13 @@ export function BakerHome() {
             </AppText>
           ) : null}
         </View>
+        <Card title="Orders to bake" style={styles.cell} testID="baker-orders-card">
+          <AppText color="muted">Product totals and who gets what, for any delivery date.</AppText>
+          <View style={styles.buttons}>
+            <LinkButton href="/bake/orders" label="Today's orders" icon="clipboard" testID="baker-open-orders" />
+            <LinkButton href={`/bake/orders?date=${addDays(b.today, 1)}`} label="Tomorrow's" icon="arrow-right" variant="secondary" testID="baker-open-tomorrow" />
+          </View>
+        </Card>
         <Card title="The bakery" style={styles.cell}>
           <DetailList
             items={[
@@ -74,5 +83,6 @@ const styles = StyleSheet.create({
   grid: { gap: space.lg },
   gridWide: { flexDirection: "row", alignItems: "stretch" },
   cell: { flex: 1 },
+  buttons: { flexDirection: "row", flexWrap: "wrap", gap: space.sm },
   today: { backgroundColor: colors.primary, borderRadius: radii.lg, padding: space.xl, gap: space.sm, justifyContent: "center" },
 });

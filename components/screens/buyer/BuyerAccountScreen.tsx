@@ -12,6 +12,8 @@ import { useAccountQuery } from "../../api/accounts";
 import { useBakeryTimeZone } from "../../api/bakery";
 import { accountStatusNote } from "./BuyerHome";
 import { formatDate } from "../../format";
+import { CalendarFeedCard } from "../common/CalendarFeedCard";
+import { DeliveryTermsCard } from "./DeliveryTermsCard";
 
 /** Everything the bakery has on file for the buyer's account (office notes stay in the office). */
 export function BuyerAccountScreen() {
@@ -53,6 +55,8 @@ export function BuyerAccountScreen() {
               ]}
             />
           </Card>
+          <DeliveryTermsCard accountId={account.data.id} />
+          <CalendarFeedCard />
           <AppText variant="small" color="muted">
             Something out of date? Tell the bakery and they&apos;ll update it.
           </AppText>

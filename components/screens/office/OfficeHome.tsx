@@ -44,6 +44,13 @@ export function OfficeHome() {
             <AppText color="muted">{`${summary.data.accounts.total} accounts in all.`}</AppText>
             <LinkButton href="/office/accounts" label="Open accounts" icon="arrow-right" testID="office-open-accounts" />
           </Card>
+          <Card title="Orders and products" style={styles.cell} testID="office-orders-card">
+            <AppText color="muted">The orders board shows each delivery date by account and product, with totals and a CSV export.</AppText>
+            <View style={styles.buttons}>
+              <LinkButton href="/office/orders" label="Orders board" icon="clipboard" testID="office-open-orders" />
+              <LinkButton href="/office/products" label="Products" icon="shopping-bag" variant="secondary" testID="office-open-products" />
+            </View>
+          </Card>
           {isOwner ? (
             <Card title="People" style={styles.cell} testID="office-people-card">
               <View style={styles.tiles}>
@@ -66,4 +73,5 @@ const styles = StyleSheet.create({
   gridWide: { flexDirection: "row", alignItems: "flex-start" },
   cell: { flex: 1 },
   tiles: { flexDirection: "row", flexWrap: "wrap", gap: space.sm },
+  buttons: { flexDirection: "row", flexWrap: "wrap", gap: space.sm },
 });

@@ -1,0 +1,3 @@
+import { OrderHistoryScreen } from "../../../components/screens/buyer/OrderHistoryScreen";
+
+export default OrderHistoryScreen;

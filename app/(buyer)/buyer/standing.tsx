@@ -1,0 +1,3 @@
+import { StandingOrderScreen } from "../../../components/screens/buyer/StandingOrderScreen";
+
+export default StandingOrderScreen;

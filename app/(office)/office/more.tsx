@@ -1,0 +1,3 @@
+import { MoreScreen } from "../../../components/screens/office/MoreScreen";
+
+export default MoreScreen;

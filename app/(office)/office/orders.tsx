@@ -1,0 +1,9 @@
+import React from "react";
+import { useLocalSearchParams } from "expo-router";
+import { OrdersBoardScreen } from "../../../components/screens/board/OrdersBoardScreen";
+import { firstParam } from "../../../components/routing";
+
+export default function OfficeOrdersRoute() {
+  const { date } = useLocalSearchParams<{ date?: string }>();
+  return <OrdersBoardScreen mode="office" date={firstParam(date)} />;
+}

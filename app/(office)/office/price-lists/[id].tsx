@@ -1,0 +1,14 @@
+import React from "react";
+import { useLocalSearchParams } from "expo-router";
+import { RequireRole } from "../../../../components/auth/RoleGate";
+import { PriceListFormScreen } from "../../../../components/screens/pricing/PriceListsScreen";
+import { idParam } from "../../../../components/routing";
+
+export default function PriceListRoute() {
+  const { id } = useLocalSearchParams<{ id: string }>();
+  return (
+    <RequireRole roles={["owner"]}>
+      <PriceListFormScreen key={String(id)} id={idParam(id)} />
+    </RequireRole>
+  );
+}

@@ -1,0 +1,11 @@
+import React from "react";
+import { RequireRole } from "../../../../components/auth/RoleGate";
+import { PriceListFormScreen } from "../../../../components/screens/pricing/PriceListsScreen";
+
+export default function NewPriceListRoute() {
+  return (
+    <RequireRole roles={["owner"]}>
+      <PriceListFormScreen />
+    </RequireRole>
+  );
+}

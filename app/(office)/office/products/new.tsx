@@ -1,0 +1,11 @@
+import React from "react";
+import { RequireRole } from "../../../../components/auth/RoleGate";
+import { NewProductScreen } from "../../../../components/screens/products/ProductFormScreen";
+
+export default function NewProductRoute() {
+  return (
+    <RequireRole roles={["owner"]}>
+      <NewProductScreen />
+    </RequireRole>
+  );
+}

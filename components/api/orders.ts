@@ -1,0 +1,69 @@
+import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
+import { api } from "./client";
+import { calendarKeys } from "./calendar";
+import { boardKeys } from "./board";
+import { standingKeys } from "./standing";
+import type { OrderCreateInput, OrderDto, OrderStatus, OrderUpdateInput } from "../../shared/schemas/orders";
+
+export interface OrderListParams {
+  from?: string;
+  to?: string;
+  accountId?: number;
+  status?: OrderStatus;
+}
+
+export const orderKeys = {
+  all: ["orders"] as const,
+  lists: () => [...orderKeys.all, "list"] as const,
+  list: (params: OrderListParams = {}) => [...orderKeys.lists(), { from: params.from ?? "", to: params.to ?? "", accountId: params.accountId ?? 0, status: params.status ?? "" }] as const,
+  details: () => [...orderKeys.all, "detail"] as const,
+  detail: (id: number) => [...orderKeys.details(), id] as const,
+};
+
+export const ordersApi = {
+  list: (params: OrderListParams = {}) => api<{ orders: OrderDto[] }>("/api/orders", { query: { ...params } }).then((r) => r.orders),
+  get: (id: number) => api<{ order: OrderDto }>(`/api/orders/${id}`).then((r) => r.order),
+  /** The key makes a retried submission count once (the server answers a repeat with the first result). */
+  create: (input: OrderCreateInput, idempotencyKey: string) =>
+    api<{ order: OrderDto }>("/api/orders", { method: "POST", body: input, headers: { "Idempotency-Key": idempotencyKey } }).then((r) => r.order),
+  update: (id: number, patch: OrderUpdateInput) => api<{ order: OrderDto }>(`/api/orders/${id}`, { method: "PATCH", body: patch }).then((r) => r.order),
+  cancel: (id: number) => api<{ order: OrderDto }>(`/api/orders/${id}`, { method: "DELETE" }).then((r) => r.order),
+};
+
+export function useOrdersQuery(params: OrderListParams, options: { enabled?: boolean } = {}) {
+  return useQuery({ queryKey: orderKeys.list(params), queryFn: () => ordersApi.list(params), enabled: options.enabled ?? true });
+}
+
+export function useOrderQuery(id: number | null) {
+  return useQuery({ queryKey: orderKeys.detail(id ?? 0), queryFn: () => ordersApi.get(id ?? 0), enabled: !!id && id > 0 });
+}
+
+/** Everything an order shows up in: its own page, lists, the calendar, the board, the standing order's dates. */
+export function useOrderChanged() {
+  const qc = useQueryClient();
+  return (order?: OrderDto) => {
+    if (order) qc.setQueryData(orderKeys.detail(order.id), order);
+    void qc.invalidateQueries({ queryKey: orderKeys.lists() });
+    void qc.invalidateQueries({ queryKey: calendarKeys.all });
+    void qc.invalidateQueries({ queryKey: boardKeys.all });
+    void qc.invalidateQueries({ queryKey: standingKeys.all });
+  };
+}
+
+export function useCreateOrderMutation() {
+  const changed = useOrderChanged();
+  return useMutation({
+    mutationFn: ({ input, idempotencyKey }: { input: OrderCreateInput; idempotencyKey: string }) => ordersApi.create(input, idempotencyKey),
+    onSuccess: changed,
+  });
+}
+
+export function useUpdateOrderMutation(id: number) {
+  const changed = useOrderChanged();
+  return useMutation({ mutationFn: (patch: OrderUpdateInput) => ordersApi.update(id, patch), onSuccess: changed });
+}
+
+export function useCancelOrderMutation(id: number) {
+  const changed = useOrderChanged();
+  return useMutation({ mutationFn: () => ordersApi.cancel(id), onSuccess: changed });
+}
