@@ -22,7 +22,7 @@ export interface ApiDeps {
 const IDEMPOTENCY_TTL_SEC = 24 * 3600;
 
 interface Caller {
-  apiKey: string;
+  /** Idempotency keys are scoped by this hash of the API key (the key itself is never stored). */
   scope: string;
 }
 
@@ -43,7 +43,7 @@ function authenticate(req: Request): Caller {
   if (key.startsWith("pk_")) throw fail("This API call cannot be made with a publishable API key. Please use a secret API key.");
   if (key.startsWith("sk_live_") || key.startsWith("rk_live_")) throw fail(`The Panwise Stripe fake only accepts test mode keys (sk_test_...), not ${redacted}.`);
   if (!/^sk_test_[A-Za-z0-9_]+$/.test(key)) throw fail(`Invalid API Key provided: ${redacted}`);
-  return { apiKey: key, scope: crypto.createHash("sha256").update(key).digest("hex").slice(0, 16) };
+  return { scope: crypto.createHash("sha256").update(key).digest("hex").slice(0, 16) };
 }
 
 function canonical(v: unknown): unknown {
@@ -66,7 +66,11 @@ export function apiRouter(deps: ApiDeps): express.Router {
 
   type Handler = (params: Params, ctx: RequestCtx, req: Request) => unknown;
 
-  const route = (method: "get" | "post", path: string, handler: Handler) => {
+  /**
+   * One endpoint. `returns` names the object type it answers with ("list:<type>" for lists) so
+   * `expand[]` is checked before anything changes, and applied to the result.
+   */
+  const route = (method: "get" | "post", path: string, returns: string, handler: Handler) => {
     router[method](path, (req: Request, res: Response) => {
       const caller = res.locals.caller as Caller;
       const params = asParams(method === "get" ? req.query : req.body);
@@ -102,10 +106,13 @@ export function apiRouter(deps: ApiDeps): express.Router {
         }
       }
 
+      const paths = expandList(params);
+      for (const p of paths) checkExpand(returns, p.split("."), p);
+
       let status = 200;
       let body: unknown;
       try {
-        body = handler(params, ctx, req);
+        body = expand(handler(params, ctx, req), paths);
       } catch (err) {
         // Stripe saves a result only once the endpoint has started executing: card errors are
         // replayed, parameter errors are not (fix the request and retry with the same key).
@@ -116,7 +123,8 @@ export function apiRouter(deps: ApiDeps): express.Router {
       if (recordKey !== null) {
         const now = account.now();
         for (const [k, r] of Object.entries(store.state.idempotency)) if (r.createdAt + IDEMPOTENCY_TTL_SEC <= now) delete store.state.idempotency[k];
-        store.state.idempotency[recordKey] = { method: req.method, path: req.path, fingerprint, status, body, requestId: requestId ?? "", createdAt: now };
+        // A snapshot: the replay is the response as first sent, not the object as it is now.
+        store.state.idempotency[recordKey] = { method: req.method, path: req.path, fingerprint, status, body: structuredClone(body), requestId: requestId ?? "", createdAt: now };
       }
       if (method === "post") store.save();
       res.status(status).json(body);
@@ -125,14 +133,29 @@ export function apiRouter(deps: ApiDeps): express.Router {
 
   // ---- helpers -------------------------------------------------------------------------------
 
-  const EXPANDABLE: Record<string, readonly string[]> = {
-    "checkout.session": ["customer", "payment_intent", "line_items"],
-    payment_intent: ["customer", "latest_charge"],
-    charge: ["customer", "payment_intent", "balance_transaction"],
-    refund: ["charge", "payment_intent", "balance_transaction"],
-    payout: ["balance_transaction"],
-    balance_transaction: ["source"],
+  /** Expandable fields per object type, and the type each expands to ("*": depends on the value). */
+  const EXPANDABLE: Record<string, Record<string, string>> = {
+    "checkout.session": { customer: "customer", payment_intent: "payment_intent", line_items: "list:item" },
+    payment_intent: { customer: "customer", latest_charge: "charge" },
+    charge: { customer: "customer", payment_intent: "payment_intent", balance_transaction: "balance_transaction" },
+    refund: { charge: "charge", payment_intent: "payment_intent", balance_transaction: "balance_transaction" },
+    payout: { balance_transaction: "balance_transaction" },
+    balance_transaction: { source: "*" },
   };
+  const cannotExpand = (what: string) => invalid(`This property cannot be expanded (${what}).`, "expand");
+
+  function checkExpand(type: string, path: string[], full: string, depth = 0): void {
+    if (!path.length || type === "*") return;
+    const [head, ...rest] = path as [string, ...string[]];
+    if (type.startsWith("list:")) {
+      if (head !== "data") throw cannotExpand(full);
+      return checkExpand(type.slice(5), rest, full, depth);
+    }
+    if (depth >= 4) throw invalid("You cannot expand more than 4 levels of a property.", "expand");
+    const target = EXPANDABLE[type]?.[head];
+    if (!target) throw cannotExpand(full);
+    checkExpand(target, rest, full, depth + 1);
+  }
 
   /** Returns a copy of `obj` with the given dotted paths expanded (Stripe allows four levels). */
   const expand = (obj: unknown, paths: string[], depth = 0): unknown => {
@@ -146,11 +169,10 @@ export function apiRouter(deps: ApiDeps): express.Router {
     }
     for (const [field, rest] of groups) {
       if (copy.object === "list" && field === "data") {
-        copy.data = (copy.data as unknown[]).map((o) => expand(o, rest, depth + 1));
+        copy.data = (copy.data as unknown[]).map((o) => expand(o, rest, depth));
         continue;
       }
-      const allowed = EXPANDABLE[String(copy.object)] ?? [];
-      if (!allowed.includes(field)) throw invalid(`This property cannot be expanded (${field}).`, "expand");
+      if (!EXPANDABLE[String(copy.object)]?.[field]) throw cannotExpand(field);
       let value = copy[field];
       if (field === "line_items" && copy.object === "checkout.session") {
         const items = store.state.lineItems[String(copy.id)] ?? [];
@@ -196,7 +218,7 @@ export function apiRouter(deps: ApiDeps): express.Router {
     const id = String(req.params.id);
     const obj = collectionOf(id) === collection ? store.get(collection, id) : undefined;
     if (!obj) throw noSuch(id);
-    return expand(obj, expandList(params));
+    return obj;
   };
   /** A list endpoint: exact-match filters by field, `created` ranges, extra filters, pagination, expand. */
   const listed = <T extends { id: string; created: number }>(
@@ -213,12 +235,12 @@ export function apiRouter(deps: ApiDeps): express.Router {
     }
     const range = rangeFilter(params, "created");
     if (range) filters.push((o) => range(o.created));
-    return expand(listOf(all, params, path, [...Object.keys(equal), "created", ...(extra.allowed ?? [])], filters), expandList(params));
+    return listOf(all, params, path, [...Object.keys(equal), "created", ...(extra.allowed ?? [])], filters);
   };
 
   // ---- customers -----------------------------------------------------------------------------
 
-  route("post", "/customers", (p, ctx) => {
+  route("post", "/customers", "customer", (p, ctx) => {
     allowOnly(p, ["email", "name", "description", "phone", "metadata"]);
     const c = account.createCustomer(
       {
@@ -230,14 +252,14 @@ export function apiRouter(deps: ApiDeps): express.Router {
       },
       ctx,
     );
-    return expand(c, expandList(p));
+    return c;
   });
-  route("get", "/customers", (p) => listed(store.newestFirst("customers"), p, "/customers", { email: (c) => c.email }));
-  route("get", "/customers/:id", retrieve("customers"));
+  route("get", "/customers", "list:customer", (p) => listed(store.newestFirst("customers"), p, "/customers", { email: (c) => c.email }));
+  route("get", "/customers/:id", "customer", retrieve("customers"));
 
   // ---- checkout sessions ---------------------------------------------------------------------
 
-  route("post", "/checkout/sessions", (p, ctx) => {
+  route("post", "/checkout/sessions", "checkout.session", (p, ctx) => {
     allowOnly(p, [
       "mode", "line_items", "success_url", "cancel_url", "customer", "customer_email", "customer_creation", "metadata", "client_reference_id",
       "payment_intent_data", "expires_at", "payment_method_types",
@@ -297,35 +319,35 @@ export function apiRouter(deps: ApiDeps): express.Router {
       },
       ctx,
     );
-    return expand(session, expandList(p));
+    return session;
   });
-  route("get", "/checkout/sessions", (p) =>
+  route("get", "/checkout/sessions", "list:checkout.session", (p) =>
     listed(store.newestFirst("checkoutSessions"), p, "/checkout/sessions", {
       payment_intent: (s) => s.payment_intent,
       customer: (s) => s.customer,
       status: (s) => s.status,
     }),
   );
-  route("get", "/checkout/sessions/:id", retrieve("checkoutSessions"));
-  route("post", "/checkout/sessions/:id/expire", (p, ctx, req) => {
+  route("get", "/checkout/sessions/:id", "checkout.session", retrieve("checkoutSessions"));
+  route("post", "/checkout/sessions/:id/expire", "checkout.session", (p, ctx, req) => {
     allowOnly(p, []);
-    return expand(account.expireSession(String(req.params.id), ctx), expandList(p));
+    return account.expireSession(String(req.params.id), ctx);
   });
 
   // ---- payment intents, charges --------------------------------------------------------------
 
-  route("get", "/payment_intents", (p) =>
+  route("get", "/payment_intents", "list:payment_intent", (p) =>
     listed(store.newestFirst("paymentIntents"), p, "/payment_intents", { customer: (x) => x.customer }),
   );
-  route("get", "/payment_intents/:id", retrieve("paymentIntents"));
-  route("get", "/charges", (p) =>
+  route("get", "/payment_intents/:id", "payment_intent", retrieve("paymentIntents"));
+  route("get", "/charges", "list:charge", (p) =>
     listed(store.newestFirst("charges"), p, "/charges", { payment_intent: (c) => c.payment_intent, customer: (c) => c.customer }),
   );
-  route("get", "/charges/:id", retrieve("charges"));
+  route("get", "/charges/:id", "charge", retrieve("charges"));
 
   // ---- refunds -------------------------------------------------------------------------------
 
-  route("post", "/refunds", (p, ctx) => {
+  route("post", "/refunds", "refund", (p, ctx) => {
     allowOnly(p, ["charge", "payment_intent", "amount", "reason", "metadata"]);
     const refund = account.createRefund(
       {
@@ -337,20 +359,20 @@ export function apiRouter(deps: ApiDeps): express.Router {
       },
       ctx,
     );
-    return expand(refund, expandList(p));
+    return refund;
   });
-  route("get", "/refunds", (p) =>
+  route("get", "/refunds", "list:refund", (p) =>
     listed(store.newestFirst("refunds"), p, "/refunds", { charge: (r) => r.charge, payment_intent: (r) => r.payment_intent }),
   );
-  route("get", "/refunds/:id", retrieve("refunds"));
+  route("get", "/refunds/:id", "refund", retrieve("refunds"));
 
   // ---- balance, balance transactions, payouts ------------------------------------------------
 
-  route("get", "/balance", (p) => {
+  route("get", "/balance", "balance", (p) => {
     allowOnly(p, []);
     return account.balance();
   });
-  route("get", "/balance_transactions", (p) => {
+  route("get", "/balance_transactions", "list:balance_transaction", (p) => {
     const payout = str(p, "payout");
     if (payout !== undefined) {
       const po = store.get("payouts", payout);
@@ -365,9 +387,9 @@ export function apiRouter(deps: ApiDeps): express.Router {
       { allowed: ["payout"], filters: payout === undefined ? [] : [(t) => store.state.txnPayout[t.id] === payout] },
     );
   });
-  route("get", "/balance_transactions/:id", retrieve("balanceTransactions"));
+  route("get", "/balance_transactions/:id", "balance_transaction", retrieve("balanceTransactions"));
 
-  route("post", "/payouts", (p, ctx) => {
+  route("post", "/payouts", "payout", (p, ctx) => {
     allowOnly(p, ["amount", "currency", "description", "metadata", "method", "statement_descriptor"]);
     const amount = int(p, "amount", { required: true, min: 1 })!;
     const currency = str(p, "currency", { required: true })!.toLowerCase();
@@ -377,16 +399,16 @@ export function apiRouter(deps: ApiDeps): express.Router {
       { amount, description: str(p, "description") ?? null, metadata: metadata(p, "metadata"), statementDescriptor: str(p, "statement_descriptor", { max: 22 }) ?? null },
       ctx,
     );
-    return expand(payout, expandList(p));
+    return payout;
   });
-  route("get", "/payouts", (p) =>
+  route("get", "/payouts", "list:payout", (p) =>
     listed(store.newestFirst("payouts"), p, "/payouts", { status: (x) => x.status }),
   );
-  route("get", "/payouts/:id", retrieve("payouts"));
+  route("get", "/payouts/:id", "payout", retrieve("payouts"));
 
   // ---- events --------------------------------------------------------------------------------
 
-  route("get", "/events", (p) => {
+  route("get", "/events", "list:event", (p) => {
     const type = str(p, "type");
     const types = array(p, "types")?.map(String);
     if (type && types) throw invalid("You may only specify one of these parameters: type, types.", "types");
@@ -397,7 +419,7 @@ export function apiRouter(deps: ApiDeps): express.Router {
       filters: [...(type ? [(e: { type: string }) => matches(type, e.type)] : []), ...(types ? [(e: { type: string }) => types.some((t) => matches(t, e.type))] : [])],
     });
   });
-  route("get", "/events/:id", retrieve("events"));
+  route("get", "/events/:id", "event", retrieve("events"));
 
   // ---- fallbacks -----------------------------------------------------------------------------
 

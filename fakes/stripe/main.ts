@@ -8,7 +8,8 @@ import { startStripeFake } from "./stripe-fake";
 const port = Number(process.env.STRIPE_FAKE_PORT || 12111);
 const stateFile = process.env.STRIPE_FAKE_STATE || ".data/stripe-fake.json";
 const webhookUrl = process.env.STRIPE_WEBHOOK_URL || undefined;
-const webhookSecret = process.env.STRIPE_WEBHOOK_SECRET || undefined;
+// Without STRIPE_WEBHOOK_SECRET, sign with the secret Panwise's server/config.ts uses by default.
+const webhookSecret = process.env.STRIPE_WEBHOOK_SECRET || (webhookUrl ? "whsec_panwise_local_fake" : undefined);
 const payoutEveryMs = Number(process.env.STRIPE_FAKE_PAYOUT_EVERY_MS || 0) || undefined;
 
 if (!Number.isInteger(port) || port < 0 || port > 65535) {
@@ -19,7 +20,11 @@ if (!Number.isInteger(port) || port < 0 || port > 65535) {
 startStripeFake({ port, stateFile, webhookUrl, webhookSecret, payoutEveryMs, log: (m) => console.error(`stripe fake: ${m}`) })
   .then((fake) => {
     console.log(`stripe fake: API on ${fake.url}/v1 (use sk_test_... keys), hosted pages on ${fake.url}/pay/<session>, state in ${stateFile}`);
-    console.log(webhookUrl ? `stripe fake: webhooks to ${webhookUrl}` : "stripe fake: no webhooks (set STRIPE_WEBHOOK_URL and STRIPE_WEBHOOK_SECRET)");
+    console.log(
+      webhookUrl
+        ? `stripe fake: webhooks to ${webhookUrl}${process.env.STRIPE_WEBHOOK_SECRET ? "" : " signed with Panwise's default secret whsec_panwise_local_fake"}`
+        : "stripe fake: no webhooks (set STRIPE_WEBHOOK_URL, and STRIPE_WEBHOOK_SECRET if not Panwise's default)",
+    );
     let stopping = false;
     const stop = () => {
       if (stopping) return;

@@ -143,6 +143,9 @@ describe("authentication and errors", () => {
       type: "StripeInvalidRequestError", statusCode: 404, code: "resource_missing", param: "id", message: "No such customer: 'cus_doesnotexist'",
     });
     await expect(stripe.customers.create({ emial: "x@y.test" } as Stripe.CustomerCreateParams)).rejects.toMatchObject({ statusCode: 400, code: "parameter_unknown", param: "emial" });
+    // A refused request changes nothing: the bad expand is caught before the customer is created.
+    await expect(stripe.customers.create({ email: "expand@cafe.test", expand: ["subscriptions.nope"] })).rejects.toMatchObject({ param: "expand" });
+    expect((await stripe.customers.list({ email: "expand@cafe.test" })).data).toEqual([]);
     const res = await fetch(`${fake.url}/v1/subscriptions`, { headers: { Authorization: `Bearer ${KEY}` } });
     expect(res.status).toBe(404);
     expect((await res.json()).error.message).toMatch(/Unrecognized request URL/);
@@ -446,6 +449,13 @@ describe("idempotency", () => {
     const r2 = await stripe.refunds.create({ charge: charge.id, amount: 300 }, { idempotencyKey: "panwise-refund-1" });
     expect(r2.id).toBe(r1.id);
     expect((await stripe.charges.retrieve(charge.id)).amount_refunded).toBe(300);
+
+    // The replay is the response as first sent, even after the object has changed since.
+    const session = await newSession({}, { idempotencyKey: "panwise-session-1" });
+    expect((await pay(session, CARD.ok)).status).toBe(303);
+    const replay = await newSession({}, { idempotencyKey: "panwise-session-1" });
+    expect(replay).toMatchObject({ id: session.id, status: "open", payment_intent: null });
+    expect((await stripe.checkout.sessions.retrieve(session.id)).status).toBe("complete");
   });
 
   it("refuses the same key with a different body or endpoint (StripeIdempotencyError); keys are per API key", async () => {
