@@ -1,4 +1,8 @@
+import http from "node:http";
+import type { AddressInfo } from "node:net";
 import request from "supertest";
+import Stripe from "stripe";
+import { startStripeFake, type StripeFake } from "../../../fakes/stripe/stripe-fake";
 import type { DataSource } from "typeorm";
 import { buildContext } from "../../../server/context";
 import { createApp } from "../../../server/app";
@@ -19,6 +23,9 @@ import { processOutbox } from "../../../server/mail/outbox.service";
 export const TEST_PASSWORD = "correct horse battery";
 
 export interface TestApp {
+  /** With `stripe: true`: the Stripe fake, its webhooks going to this app listening on a loopback port. */
+  stripe?: StripeFake;
+  baseUrl?: string;
   ctx: AppContext;
   app: ReturnType<typeof createApp>;
   clock: FixedClock;
@@ -29,15 +36,29 @@ export interface TestApp {
 }
 
 /** A real app on a real throw-away database, a fixed clock, and the real mail fake on free ports. */
-export async function startTestApp(opts: { now?: string } = {}): Promise<TestApp> {
+export async function startTestApp(opts: { now?: string; stripe?: boolean } = {}): Promise<TestApp> {
   const db = await createTestDatabase();
   const mail = await startMailFake({ smtpPort: 0, httpPort: 0 });
   const config = { ...loadConfig(), publicUrl: "http://panwise.test", logLevel: process.env.TEST_LOG_LEVEL || "silent" };
   const clock = new FixedClock(opts.now ?? "2026-06-10T15:00:00Z");
   const mailer = createSmtpMailer(`smtp://127.0.0.1:${mail.smtpPort}`, "orders@bakery.test", createLogger("silent"));
-  const ctx = buildContext({ config, dataSource: db.dataSource, clock, mailer });
-  const app = createApp(ctx);
+  let app: ReturnType<typeof createApp> | null = null;
+  let server: http.Server | null = null;
+  let stripeFake: StripeFake | undefined;
+  let stripe: Stripe | undefined;
+  let baseUrl: string | undefined;
+  if (opts.stripe) {
+    server = http.createServer((req, res) => app!(req, res));
+    await new Promise<void>((r) => server!.listen(0, "127.0.0.1", () => r()));
+    baseUrl = `http://127.0.0.1:${(server.address() as AddressInfo).port}`;
+    stripeFake = await startStripeFake({ port: 0, webhookUrl: `${baseUrl}/api/webhooks/stripe`, webhookSecret: config.stripe.webhookSecret, webhookRetry: { attempts: 3, baseMs: 20, maxMs: 100 } });
+    stripe = new Stripe(config.stripe.secretKey, { host: "127.0.0.1", port: stripeFake.port, protocol: "http", maxNetworkRetries: 0 });
+  }
+  const ctx = buildContext({ config, dataSource: db.dataSource, clock, mailer, stripe });
+  app = createApp(ctx);
   const t: TestApp = {
+    stripe: stripeFake,
+    baseUrl,
     ctx,
     app,
     clock,
@@ -45,6 +66,8 @@ export async function startTestApp(opts: { now?: string } = {}): Promise<TestApp
     ds: db.dataSource,
     http: () => request(app),
     async close() {
+      await stripeFake?.close();
+      if (server) await new Promise<void>((r) => { server!.closeAllConnections(); server!.close(() => r()); });
       mailer.close();
       await t.mail.close(); // a test may have swapped in a new mail fake
       if (t.mail !== mail) await mail.close();

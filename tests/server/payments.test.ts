@@ -1,0 +1,180 @@
+import Stripe from "stripe";
+import { startTestApp, makeAccount, makeBakery, makeProduct, makeUser, tokenFor, auth, type TestApp } from "./helpers/app";
+import { Order, OrderLine } from "../../server/orders/order.entity";
+import { Invoice, Payment, StripeEventRecord } from "../../server/billing/billing.entity";
+import { confirmDispatch } from "../../server/billing/invoices.service";
+import { parse as parseCsv } from "csv-parse/sync";
+import { formatMoney, minorUnitExponent } from "../../shared/money";
+import { taxCents } from "../../shared/billing";
+
+const NOW = "2026-06-10T15:00:00Z";
+let t: TestApp;
+let buyer: string;
+let books: string;
+let accountId: number;
+let rolls: { id: number };
+beforeAll(async () => {
+  t = await startTestApp({ now: NOW, stripe: true });
+  await makeBakery(t.ds, { name: "Pay Bakery", salesTaxRateBp: 875, invoicePrefix: "PB" });
+  accountId = (await makeAccount(t.ds, { businessName: "Card Café", paymentTerms: "card" })).id;
+  buyer = await tokenFor(t, await makeUser(t.ds, "buyer", { accountId }));
+  books = await tokenFor(t, await makeUser(t.ds, "bookkeeper"));
+  rolls = await makeProduct(t.ds, { priceCents: 1800 });
+});
+afterAll(() => t.close());
+
+let day = 1;
+async function invoiceFor(qty: number) {
+  const date = `2026-06-${String(day++).padStart(2, "0")}`;
+  const o = await t.ds.getRepository(Order).save(t.ds.getRepository(Order).create({ accountId, deliveryDate: date, status: "locked", totalCents: qty * 1800, source: "one_off", editedByHand: false, createdById: null, poNumber: null, note: null }));
+  await t.ds.getRepository(OrderLine).insert({ orderId: o.id, productId: rolls.id, productName: "Rolls", saleUnit: "tray", quantity: qty, unitPriceCents: 1800, lineTotalCents: qty * 1800 });
+  await confirmDispatch(t.ctx, date, []);
+  return t.ds.getRepository(Invoice).findOneByOrFail({ accountId, issueDate: "2026-06-10", totalCents: qty * 1800 + taxCents(qty * 1800, 875) });
+}
+
+/** Fill in the fake's hosted page as a person would, with a card number. */
+async function payOnHostedPage(url: string, card: string) {
+  const body = new URLSearchParams({ email: "pay@cardcafe.test", card_number: card, expiry: "12/30", cvc: "123", name: "Card Café" });
+  return fetch(url, { method: "POST", body, redirect: "manual", headers: { "content-type": "application/x-www-form-urlencoded" } });
+}
+
+async function waitPaid(id: number) {
+  for (let i = 0; i < 100; i++) {
+    await t.stripe!.flushWebhooks();
+    const inv = await t.ds.getRepository(Invoice).findOneByOrFail({ id });
+    if (inv.status === "paid") return inv;
+    await new Promise((r) => setTimeout(r, 20));
+  }
+  throw new Error("invoice not paid");
+}
+
+describe("card payments through Stripe's hosted checkout (the local fake, real SDK)", () => {
+  it("the buyer pays with 4242 4242 4242 4242; the signed webhook marks the invoice paid, once", async () => {
+    const inv = await invoiceFor(2);
+    const res = await t.http().post(`/api/invoices/${inv.id}/checkout`).set(auth(buyer));
+    expect(res.status).toBe(201);
+    expect(res.body.url).toMatch(/\/pay\/cs_test_/);
+    const paid = await payOnHostedPage(res.body.url, "4242 4242 4242 4242");
+    expect(paid.status).toBe(303);
+    expect(paid.headers.get("location")).toContain(`/pay/return?invoice=${inv.id}&session_id=cs_test_`);
+    const after = await waitPaid(inv.id);
+    expect(after.paidCents).toBe(inv.totalCents);
+    const payments = await t.ds.getRepository(Payment).findBy({ invoiceId: inv.id });
+    expect(payments).toHaveLength(1);
+    expect(payments[0]).toMatchObject({ method: "card", amountCents: inv.totalCents });
+    expect(payments[0].stripeChargeId).toMatch(/^ch_/);
+    // Stripe's checkout.session.completed and payment_intent.succeeded both arrived: one payment.
+    expect(await t.ds.getRepository(StripeEventRecord).count()).toBeGreaterThanOrEqual(2);
+  });
+
+  it("a declined card shows Stripe's reason and leaves the invoice open", async () => {
+    const inv = await invoiceFor(1);
+    const { body } = await t.http().post(`/api/invoices/${inv.id}/checkout`).set(auth(buyer));
+    const declined = await payOnHostedPage(body.url, "4000 0000 0000 0002");
+    expect(declined.status).toBe(402);
+    expect(await declined.text()).toContain("Your card was declined.");
+    const broke = await payOnHostedPage(body.url, "4000 0000 0000 9995");
+    expect(await broke.text()).toContain("Your card has insufficient funds.");
+    await t.stripe!.flushWebhooks();
+    expect((await t.ds.getRepository(Invoice).findOneByOrFail({ id: inv.id })).status).toBe("open");
+    const ok = await payOnHostedPage(body.url, "4242424242424242");
+    expect(ok.status).toBe(303);
+    await waitPaid(inv.id);
+  });
+
+  it("a webhook delivered three times and out of order pays the invoice once", async () => {
+    const inv = await invoiceFor(3);
+    const pi = `pi_replay_${inv.id}`;
+    const secret = t.ctx.config.stripe.webhookSecret;
+    const send = (payload: string) => t.http().post("/api/webhooks/stripe").set("Content-Type", "application/json").set("Stripe-Signature", Stripe.webhooks.generateTestHeaderString({ payload, secret })).send(payload);
+    const succeeded = JSON.stringify({ id: `evt_pi_${inv.id}`, object: "event", type: "payment_intent.succeeded", data: { object: { id: pi, object: "payment_intent", amount: inv.totalCents, amount_received: inv.totalCents, metadata: { invoiceId: String(inv.id) }, latest_charge: `ch_replay_${inv.id}` } } });
+    const completed = JSON.stringify({ id: `evt_cs_${inv.id}`, object: "event", type: "checkout.session.completed", data: { object: { id: `cs_replay_${inv.id}`, object: "checkout.session", payment_status: "paid", amount_total: inv.totalCents, payment_intent: pi, metadata: { invoiceId: String(inv.id) } } } });
+    for (const p of [succeeded, completed, succeeded, completed, succeeded]) expect((await send(p)).status).toBe(200);
+    const again = await send(succeeded);
+    expect(again.body).toEqual({ received: true, duplicate: true });
+    const row = await t.ds.getRepository(Invoice).findOneByOrFail({ id: inv.id });
+    expect(row).toMatchObject({ status: "paid", paidCents: inv.totalCents });
+    expect(await t.ds.getRepository(Payment).countBy({ invoiceId: inv.id })).toBe(1);
+  });
+
+  it("a bad signature gets 400 and changes nothing; the official SDK verifies the fake's signatures", async () => {
+    const payload = JSON.stringify({ id: "evt_forged", object: "event", type: "payment_intent.succeeded", data: { object: { id: "pi_forged", amount: 100, metadata: { invoiceId: "1" } } } });
+    const bad = await t.http().post("/api/webhooks/stripe").set("Content-Type", "application/json").set("Stripe-Signature", Stripe.webhooks.generateTestHeaderString({ payload, secret: "whsec_wrong" })).send(payload);
+    expect(bad.status).toBe(400);
+    const tampered = await t.http().post("/api/webhooks/stripe").set("Content-Type", "application/json").set("Stripe-Signature", Stripe.webhooks.generateTestHeaderString({ payload, secret: t.ctx.config.stripe.webhookSecret })).send(payload.replace("100", "999"));
+    expect(tampered.status).toBe(400);
+    const old = await t.http().post("/api/webhooks/stripe").set("Content-Type", "application/json").set("Stripe-Signature", Stripe.webhooks.generateTestHeaderString({ payload, secret: t.ctx.config.stripe.webhookSecret, timestamp: Math.floor(Date.now() / 1000) - 3600 })).send(payload);
+    expect(old.status).toBe(400);
+    expect(await t.ds.getRepository(StripeEventRecord).existsBy({ id: "evt_forged" })).toBe(false);
+    // Every event the fake signed and sent earlier was accepted by constructEvent in the handler (2xx).
+    const delivered = t.stripe!.deliveries.filter((d) => d.state === "delivered");
+    expect(delivered.length).toBeGreaterThan(0);
+    expect(t.stripe!.deliveries.filter((d) => d.state === "failed")).toEqual([]);
+  });
+
+  it("a credit note on a card-paid invoice is refunded through Stripe", async () => {
+    const inv = await invoiceFor(4);
+    const { body } = await t.http().post(`/api/invoices/${inv.id}/checkout`).set(auth(buyer));
+    await payOnHostedPage(body.url, "4242 4242 4242 4242");
+    await waitPaid(inv.id);
+    const cn = await t.http().post(`/api/invoices/${inv.id}/credit-notes`).set(auth(books)).send({ reason: "One tray squashed", lines: [{ description: "Rolls (tray)", quantity: 1, unitPriceCents: 1800 }] });
+    expect(cn.status).toBe(201);
+    expect(cn.body.creditNote).toMatchObject({ disposition: "refund", totalCents: 1800 + 158 });
+    await t.stripe!.flushWebhooks();
+    const after = await t.ds.getRepository(Invoice).findOneByOrFail({ id: inv.id });
+    expect(after).toMatchObject({ status: "partially_refunded", refundedCents: 1958 });
+    const detail = await t.http().get(`/api/invoices/${inv.id}`).set(auth(buyer));
+    expect(detail.body.refunds).toHaveLength(1); // our own call and the charge.refunded event: one refund
+  });
+
+  it("the bookkeeper reconciles a payout against the invoices it settles, and exports CSV", async () => {
+    const payout = t.stripe!.runPayout();
+    expect(payout).not.toBeNull();
+    const list = await t.http().get("/api/payouts").set(auth(books));
+    expect(list.body.payouts.map((p: { id: string }) => p.id)).toContain(payout!.id);
+    const detail = await t.http().get(`/api/payouts/${payout!.id}`).set(auth(books));
+    expect(detail.status).toBe(200);
+    expect(detail.body.unmatched).toBe(0);
+    expect(detail.body.netMatchesPayout).toBe(true);
+    expect(detail.body.transactions.filter((x: { type: string }) => x.type === "charge").length).toBe(3);
+    for (const x of detail.body.transactions) expect(x.invoiceNumber).toMatch(/^PB-2026-/);
+    // Fees: 2.9 % + 30 ¢ per charge (the fake's configured fee, Stripe's US card price).
+    const charge = detail.body.transactions.find((x: { type: string }) => x.type === "charge");
+    expect(charge.feeCents).toBe(Math.round(charge.amountCents * 0.029) + 30);
+    const rec = await t.http().post(`/api/payouts/${payout!.id}/reconcile`).set(auth(books)).send({ note: "Matches the bank statement" });
+    expect(rec.body.reconciled).toMatchObject({ note: "Matches the bank statement" });
+
+    const inv = parseCsv((await t.http().get("/api/reports/exports/invoices.csv").set(auth(books))).text, { columns: true }) as Record<string, string>[];
+    expect(inv[0]).toMatchObject({ currency: "USD" });
+    expect(inv.every((r) => /^\d+\.\d{2}$/.test(r.total))).toBe(true); // ISO 4217: USD has 2 decimals
+    const pays = parseCsv((await t.http().get("/api/reports/exports/payments.csv").set(auth(books))).text, { columns: true }) as Record<string, string>[];
+    expect(pays.some((p) => p.stripe_charge.startsWith("ch_"))).toBe(true);
+    const outs = parseCsv((await t.http().get("/api/reports/exports/payouts.csv").set(auth(books))).text, { columns: true }) as Record<string, string>[];
+    expect(outs.find((p) => p.payout === payout!.id)).toMatchObject({ unmatched: "0", net: (payout!.amount / 100).toFixed(2) });
+  });
+
+  it("uses ISO 4217 minor units when formatting and when sending amounts to Stripe", async () => {
+    expect(minorUnitExponent("USD")).toBe(2);
+    expect(minorUnitExponent("JPY")).toBe(0);
+    expect(formatMoney(196, "USD")).toBe("$1.96");
+    const inv = await invoiceFor(5);
+    await t.http().post(`/api/invoices/${inv.id}/checkout`).set(auth(buyer));
+    const sessions = await t.ctx.stripe.checkout.sessions.list({ limit: 1 });
+    expect(sessions.data[0].amount_total).toBe(inv.totalCents); // cents, not dollars
+    expect(sessions.data[0].currency).toBe("usd");
+  });
+
+  it("when Stripe is unreachable, checkout answers 503 and nothing half-made is left", async () => {
+    const inv = await invoiceFor(6);
+    const real = t.ctx.stripe;
+    t.ctx.stripe = new Stripe("sk_test_x", { host: "127.0.0.1", port: 9, protocol: "http", maxNetworkRetries: 0 });
+    try {
+      const res = await t.http().post(`/api/invoices/${inv.id}/checkout`).set(auth(buyer));
+      expect(res.status).toBe(503);
+      expect(res.body.error.code).toBe("payments_unavailable");
+      expect(await t.ds.query("SELECT COUNT(*) AS n FROM checkout_session WHERE invoiceId = ?", [inv.id])).toEqual([{ n: "0" }]);
+    } finally {
+      t.ctx.stripe = real;
+    }
+  });
+});
