@@ -11,6 +11,8 @@ const PORT = Number(process.env.PORT || 8080);
 const MAIL_SMTP_PORT = Number(process.env.MAIL_SMTP_PORT || 1025);
 const MAIL_HTTP_PORT = Number(process.env.MAIL_HTTP_PORT || 8025);
 const useMailFake = !process.env.SMTP_URL;
+const STRIPE_FAKE_PORT = Number(process.env.STRIPE_API_PORT || 12111);
+const useStripeFake = !process.env.STRIPE_API_HOST;
 const PIDFILE = path.join(DATA, "start.pid");
 
 const cleanups = [];
@@ -65,6 +67,7 @@ async function main() {
   if (!(await portFree(PORT))) busy.push(`${PORT} (web and API; set PORT=…)`);
   if (useMailFake && !(await portFree(MAIL_SMTP_PORT))) busy.push(`${MAIL_SMTP_PORT} (mail fake SMTP; set MAIL_SMTP_PORT=…)`);
   if (useMailFake && !(await portFree(MAIL_HTTP_PORT))) busy.push(`${MAIL_HTTP_PORT} (mail fake inbox; set MAIL_HTTP_PORT=…)`);
+  if (useStripeFake && !(await portFree(STRIPE_FAKE_PORT))) busy.push(`${STRIPE_FAKE_PORT} (Stripe fake; set STRIPE_API_PORT=…)`);
   if (busy.length) fail(`port(s) already in use on 127.0.0.1: ${busy.join(", ")}`);
 
   const db = await ensureMariadb();
@@ -73,8 +76,18 @@ async function main() {
   const { database } = dbSettings();
   createDatabase(database);
 
+  if (useStripeFake) {
+    // Started before the seed: the demo's card payments go through it. Its webhooks reach the server once it is up (they retry).
+    const stripe = startChild("stripe", "node", ["--import", "tsx", "fakes/stripe/main.ts"], {
+      env: { STRIPE_FAKE_PORT: String(STRIPE_FAKE_PORT), STRIPE_WEBHOOK_URL: `http://127.0.0.1:${PORT}/api/webhooks/stripe`, STRIPE_FAKE_STATE: path.join(DATA, "stripe-fake.json") },
+    });
+    cleanups.push(stopChild(stripe, "Stripe fake"));
+    watch(stripe, "the Stripe fake");
+    await waitFor("the Stripe fake", () => httpOk(`http://127.0.0.1:${STRIPE_FAKE_PORT}/_fake/webhooks`), { timeoutMs: 30000 });
+  }
+
   log("running migrations and demo seed…");
-  const setup = capture("node", ["--import", "tsx", "server/cli.ts", "setup"], { stdio: "inherit" });
+  const setup = capture("node", ["--import", "tsx", "server/cli.ts", "setup"], { stdio: "inherit", env: { ...process.env, STRIPE_API_PORT: String(STRIPE_FAKE_PORT) } });
   if (setup.status !== 0) fail("database setup failed (see above)");
 
   await ensureWebBuild();
@@ -88,7 +101,7 @@ async function main() {
     env.SMTP_URL = `smtp://127.0.0.1:${MAIL_SMTP_PORT}`;
   }
 
-  const server = startChild("server", "node", ["--import", "tsx", "server/index.ts"], { env: { ...env, PORT: String(PORT) } });
+  const server = startChild("server", "node", ["--import", "tsx", "server/index.ts"], { env: { ...env, PORT: String(PORT), STRIPE_API_PORT: String(STRIPE_FAKE_PORT) } });
   cleanups.push(stopChild(server, "server"));
   watch(server, "the server");
   await waitFor("the server", () => httpOk(`http://127.0.0.1:${PORT}/api/health`), { timeoutMs: 60000 });
@@ -100,6 +113,7 @@ async function main() {
   App:        http://127.0.0.1:${PORT}/
   API health: http://127.0.0.1:${PORT}/api/health
   ${useMailFake ? `Mail inbox: http://127.0.0.1:${MAIL_HTTP_PORT}/   (every e-mail the app sends lands here)` : `Mail:       sent through ${process.env.SMTP_URL}`}
+  ${useStripeFake ? `Stripe fake: http://127.0.0.1:${STRIPE_FAKE_PORT}/   (test card 4242 4242 4242 4242; 4000 0000 0000 0002 is declined)` : `Stripe:     ${process.env.STRIPE_API_HOST}`}
 
   Demo sign-ins (password: panwise-demo)
     owner@hollowbrook.test     owner

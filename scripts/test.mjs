@@ -48,6 +48,7 @@ async function main() {
   const prefix = `panwise_test_${Date.now().toString(36)}_${process.pid}`;
   cleanups.push(async () => dropDatabases(prefix));
   const testEnv = { NODE_ENV: "test", TEST_DB_PREFIX: prefix, BCRYPT_ROUNDS: "4", PANWISE_DATA_DIR: path.join(DATA, "test-runs", prefix) };
+  fs.mkdirSync(testEnv.PANWISE_DATA_DIR, { recursive: true });
   cleanups.push(async () => fs.rmSync(testEnv.PANWISE_DATA_DIR, { recursive: true, force: true }));
 
   if (only("types")) stage("type check (tsc --noEmit)", "npx", ["tsc", "--noEmit", "-p", "tsconfig.json"]);
@@ -57,9 +58,13 @@ async function main() {
     await ensureWebBuild();
     const dbName = `${prefix}_browser`;
     createDatabase(dbName);
-    const [port, smtpPort, mailHttpPort] = [await freePort(), await freePort(), await freePort()];
+    const [port, smtpPort, mailHttpPort, stripePort] = [await freePort(), await freePort(), await freePort(), await freePort()];
     const env = { ...testEnv, DB_NAME: dbName, NODE_ENV: "production", LOG_LEVEL: "warn", PORT: String(port), SMTP_URL: `smtp://127.0.0.1:${smtpPort}`,
-      MAIL_SMTP_PORT: String(smtpPort), MAIL_HTTP_PORT: String(mailHttpPort), PUBLIC_URL: `http://127.0.0.1:${port}`, WEB_DIST: webDist() };
+      MAIL_SMTP_PORT: String(smtpPort), MAIL_HTTP_PORT: String(mailHttpPort), PUBLIC_URL: `http://127.0.0.1:${port}`, WEB_DIST: webDist(),
+      STRIPE_API_PORT: String(stripePort), STRIPE_FAKE_PORT: String(stripePort), STRIPE_WEBHOOK_URL: `http://127.0.0.1:${port}/api/webhooks/stripe`, STRIPE_FAKE_STATE: path.join(testEnv.PANWISE_DATA_DIR, "stripe-fake.json") };
+    const stripe = startChild("stripe", "node", ["--import", "tsx", "fakes/stripe/main.ts"], { env, quiet: true });
+    cleanups.push(stopChild(stripe));
+    await waitFor("the test Stripe fake", () => httpOk(`http://127.0.0.1:${stripePort}/_fake/webhooks`), { timeoutMs: 30000 });
     const setup = capture("node", ["--import", "tsx", "server/cli.ts", "setup"], { stdio: "inherit", env: { ...process.env, ...env } });
     if (setup.status !== 0) {
       results.push({ name: "browser: database setup", ok: false, seconds: 0 });
@@ -74,6 +79,7 @@ async function main() {
         ...testEnv,
         BASE_URL: `http://127.0.0.1:${port}`,
         MAIL_URL: `http://127.0.0.1:${mailHttpPort}`,
+        STRIPE_URL: `http://127.0.0.1:${stripePort}`,
       });
     }
   }

@@ -4,6 +4,7 @@ import { isEmpty, seedDemo } from "./seed/demo";
 import { buildContext } from "./context";
 import { materialiseAll } from "./orders/standing.service";
 import { seedHistory } from "./seed/history";
+import { payByCardThroughStripe, seedBilling } from "./seed/billing";
 
 /**
  * Command line: `node --import tsx server/cli.ts <command>`
@@ -36,6 +37,10 @@ async function main() {
           console.log(`seeded the Hollowbrook Bakehouse demo (${created} rows)`);
           const ctx = buildContext({ dataSource: ds });
           console.log(`demo history: ${await seedHistory(ctx)} past or locked order(s)`);
+          const billing = await seedBilling(ctx, payByCardThroughStripe);
+          console.log(`demo billing: ${billing.invoices} invoice(s), ${billing.payments} payment(s)`);
+          const payout = await fetch(`${ctx.config.stripe.protocol}://${ctx.config.stripe.host}:${ctx.config.stripe.port}/_fake/payouts/run`, { method: "POST" }).then((r) => r.json() as Promise<{ payout: { id: string } | null }>).catch(() => null);
+          if (payout?.payout) console.log(`demo payout on the Stripe fake: ${payout.payout.id}`);
           ctx.mailer.close();
         } else {
           console.log("database ready");

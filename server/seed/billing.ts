@@ -11,6 +11,35 @@ import { getBakery } from "../bakery/bakery.service";
 import { amountDue } from "../../shared/billing";
 
 /**
+ * Pay an invoice the way a buyer would, through the Stripe fake's hosted page with Stripe's 4242 test
+ * card, then record the payment from the session (the webhooks that follow find it already recorded).
+ * False when Stripe is not reachable.
+ */
+export async function payByCardThroughStripe(ctx: AppContext, invoiceId: number): Promise<boolean> {
+  const inv = await ctx.dataSource.getRepository(Invoice).findOneByOrFail({ id: invoiceId });
+  const due = amountDue(inv);
+  try {
+    const session = await ctx.stripe.checkout.sessions.create({
+      mode: "payment",
+      line_items: [{ quantity: 1, price_data: { currency: inv.currency.toLowerCase(), unit_amount: due, product_data: { name: `Invoice ${inv.number}` } } }],
+      metadata: { invoiceId: String(inv.id), invoiceNumber: inv.number },
+      payment_intent_data: { metadata: { invoiceId: String(inv.id), invoiceNumber: inv.number } },
+      success_url: `${ctx.config.publicUrl}/pay/return?invoice=${inv.id}&session_id={CHECKOUT_SESSION_ID}`,
+      cancel_url: `${ctx.config.publicUrl}/pay/return?invoice=${inv.id}&cancelled=1`,
+    });
+    const res = await fetch(session.url!, { method: "POST", redirect: "manual", headers: { "content-type": "application/x-www-form-urlencoded" },
+      body: new URLSearchParams({ email: "accounts@tidewater.test", card_number: "4242 4242 4242 4242", expiry: "12/30", cvc: "123", name: "Tidewater Café" }) });
+    if (res.status !== 303) return false;
+    const paid = await ctx.stripe.checkout.sessions.retrieve(session.id, { expand: ["payment_intent"] });
+    const pi = paid.payment_intent as import("stripe").Stripe.PaymentIntent;
+    await ctx.dataSource.transaction((m) => recordPayment(ctx, m, { invoiceId: inv.id, amountCents: due, method: "card", reference: session.id, stripePaymentIntentId: pi.id, stripeChargeId: typeof pi.latest_charge === "string" ? pi.latest_charge : null }));
+    return true;
+  } catch {
+    return false;
+  }
+}
+
+/**
  * Demo billing: invoices for the past weeks' deliveries as they would have been issued on their days,
  * most of them paid (Tidewater by card through the Stripe fake when it is running, the others by bank
  * transfer), the latest ones open, North Pier Coffee's first statement long overdue (so it is on credit

@@ -1,0 +1,90 @@
+/**
+ * Production plan at scale: a delivery date with N accounts × 10 products (N = 20, 200, 2,000 → 200,
+ * 2,000 and 20,000 order lines). Reports GET /api/production/plan p50/p99 for each size and how it grows,
+ * and, as the baseline, the bare `SELECT productId, SUM(quantity) … GROUP BY` over the same rows.
+ *   node --import tsx bench/plan.ts     (needs the private MariaDB: npm start / npm run db)
+ */
+import "reflect-metadata";
+import mysql from "mysql2/promise";
+import bcrypt from "bcryptjs";
+import { createDataSource } from "../server/db/data-source";
+import { loadConfig } from "../server/config";
+import { freePort, startServer, stop, summarise, waitHttp } from "./lib";
+
+const SIZES = [20, 200, 2000];
+const RUNS = 30;
+const DATE = "2030-06-14";
+
+async function main() {
+  const dbName = `panwise_bench_plan_${Date.now().toString(36)}`;
+  const base = loadConfig().db;
+  const admin = await mysql.createConnection({ host: base.host, port: base.port, user: base.user, password: base.password, database: undefined, multipleStatements: false });
+  await admin.query(`CREATE DATABASE \`${dbName}\``);
+  await admin.end();
+  const ds = createDataSource({ ...base, database: dbName });
+  await ds.initialize();
+  await ds.runMigrations();
+  await ds.query("INSERT INTO bakery (name, timeZone, currency) VALUES ('Bench Bakery', 'America/Chicago', 'USD')");
+  await ds.query("INSERT INTO ingredient (name, kind, waterPercent, packName, packGrams) VALUES ('Flour','flour',12,'sack',25000),('Milk','liquid',88,'jug',3900),('Butter','fat',16,'block',454),('Egg','egg',76,'carton',2268),('Sugar','sugar',0,'bag',11340),('Salt','salt',0,'box',1361),('Yeast','leavening',5,'pack',454)");
+  const body = { name: "Milk bread", lossPercent: 2, ddtC: 26, frictionC: 12, targetInternalC: 89, paste: { flourIngredientId: 1, liquidIngredientId: 2, flourPercent: 5, liquidRatio: 5, cookToC: 65 },
+    lines: [{ ingredientId: 1, percent: 100 }, { ingredientId: 2, percent: 60 }, { ingredientId: 4, percent: 10 }, { ingredientId: 3, percent: 10 }, { ingredientId: 5, percent: 10 }, { ingredientId: 6, percent: 2 }, { ingredientId: 7, percent: 1.5 }],
+    steps: [{ kind: "paste", minutes: 40 }, { kind: "mix", minutes: 15 }, { kind: "bulk", minutes: 60 }, { kind: "shape", minutes: 20 }, { kind: "proof", minutes: 50 }, { kind: "bake", minutes: 27, temperatureC: 177 }, { kind: "cool", minutes: 30 }] };
+  await ds.query("INSERT INTO formula (name, currentVersion) VALUES ('Milk bread', 1)");
+  await ds.query("INSERT INTO formula_version (formulaId, version, body, note) VALUES (1, 1, ?, '')", [JSON.stringify(body)]);
+  for (let p = 1; p <= 10; p++) {
+    await ds.query("INSERT INTO product (name, description, saleUnit, piecesPerUnit, pieceGrams, panName, panLengthMm, panWidthMm, unitsPerPan, priceCents, allergens, mayContain, formulaId, sortOrder) VALUES (?, '', 'tray', 15, 67, 'pan', 330, 229, 1, 1800, '', '', 1, ?)", [`Product ${p}`, p]);
+  }
+  await ds.query("INSERT INTO user (email, passwordHash, role, name) VALUES ('baker@bench.test', ?, 'baker', 'Baker')", [bcrypt.hashSync("bench-password-1", 4)]);
+  const port = await freePort();
+  const server = startServer({ PORT: String(port), DB_NAME: dbName, SMTP_URL: `smtp://127.0.0.1:${await freePort()}`, LOG_LEVEL: "warn", PANWISE_NO_JOBS: "1" });
+  const pool = mysql.createPool({ host: base.host, port: base.port, user: base.user, password: base.password, database: dbName, connectionLimit: 2 });
+  const results: Record<string, unknown>[] = [];
+  try {
+    await waitHttp(`http://127.0.0.1:${port}/api/health`);
+    const { token } = (await (await fetch(`http://127.0.0.1:${port}/api/auth/sign-in`, { method: "POST", headers: { "content-type": "application/json" }, body: JSON.stringify({ email: "baker@bench.test", password: "bench-password-1" }) })).json()) as { token: string };
+    let accounts = 0;
+    for (const size of SIZES) {
+      // Grow the day to `size` accounts, each with one order of 10 lines.
+      while (accounts < size) {
+        const batch = Math.min(500, size - accounts);
+        const values: unknown[] = [];
+        for (let i = 0; i < batch; i++) values.push(`Bench ${accounts + i}`, "1 St", `b${accounts + i}@bench.test`);
+        await ds.query(`INSERT INTO customer_account (businessName, deliveryAddress, billingEmail, notes) VALUES ${Array.from({ length: batch }, () => "(?, ?, ?, '')").join(",")}`, values);
+        const ids: { id: number }[] = await ds.query("SELECT id FROM customer_account ORDER BY id DESC LIMIT ?", [batch]);
+        await ds.query(`INSERT INTO customer_order (accountId, deliveryDate, status, totalCents) VALUES ${ids.map(() => "(?, ?, 'open', 0)").join(",")}`, ids.flatMap((r) => [r.id, DATE]));
+        const orders: { id: number }[] = await ds.query("SELECT id FROM customer_order ORDER BY id DESC LIMIT ?", [batch]);
+        const lines: unknown[] = [];
+        for (const o of orders) for (let p = 1; p <= 10; p++) lines.push(o.id, p, `Product ${p}`, "tray", 1 + ((o.id + p) % 5), 1800, 1800);
+        await ds.query(`INSERT INTO order_line (orderId, productId, productName, saleUnit, quantity, unitPriceCents, lineTotalCents) VALUES ${orders.flatMap(() => Array.from({ length: 10 }, () => "(?, ?, ?, ?, ?, ?, ?)")).join(",")}`, lines);
+        accounts += batch;
+      }
+      const api: number[] = [];
+      const bare: number[] = [];
+      for (let i = 0; i < RUNS + 3; i++) {
+        const s = performance.now();
+        const r = await fetch(`http://127.0.0.1:${port}/api/production/plan?date=${DATE}`, { headers: { authorization: `Bearer ${token}` } });
+        const plan = (await r.json()) as { plan: { products: { units: number }[] } };
+        if (!r.ok || plan.plan.products.length !== 10) throw new Error(`plan failed: ${r.status}`);
+        if (i >= 3) api.push(performance.now() - s); // first runs warm up
+        const b = performance.now();
+        await pool.query("SELECT l.productId, SUM(l.quantity) AS units FROM customer_order o JOIN order_line l ON l.orderId = o.id WHERE o.deliveryDate = ? AND o.status IN ('open','locked','delivered') GROUP BY l.productId", [DATE]);
+        if (i >= 3) bare.push(performance.now() - b);
+      }
+      const a = summarise(api, 1);
+      const g = summarise(bare, 1);
+      results.push({ accounts: size, orderLines: size * 10, planP50ms: +a.p50.toFixed(1), planP99ms: +a.p99.toFixed(1), groupByP50ms: +g.p50.toFixed(1), groupByP99ms: +g.p99.toFixed(1), ratioP50: +(a.p50 / g.p50).toFixed(1) });
+    }
+    const growth = (results[2].planP50ms as number) / (results[1].planP50ms as number);
+    console.log(JSON.stringify({ runsPerSize: RUNS, results, growth2000to20000LinesP50: +growth.toFixed(2), target: { p99At2000AccountsUnderMs: 300, met: (results[2].planP99ms as number) < 300, linearOrBetter: growth <= 10 } }, null, 2));
+  } finally {
+    await pool.end();
+    await stop(server);
+    await ds.query(`DROP DATABASE IF EXISTS \`${dbName}\``);
+    await ds.destroy();
+  }
+}
+
+main().catch((err) => {
+  console.error(err);
+  process.exit(1);
+});
