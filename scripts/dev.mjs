@@ -36,6 +36,8 @@ async function main() {
 
   const mail = startChild("mail", "node", ["--import", "tsx", "fakes/mail/main.ts"]);
   cleanups.push(killer(mail));
+  const stripe = startChild("stripe", "node", ["--import", "tsx", "fakes/stripe/main.ts"], { env: { STRIPE_WEBHOOK_URL: `http://127.0.0.1:${API_PORT}/api/webhooks/stripe` } });
+  cleanups.push(killer(stripe));
   const webOrigin = `http://127.0.0.1:${WEB_PORT}`;
   const server = startChild("api", "node", ["--watch", "--import", "tsx", "server/index.ts"], {
     env: { PORT: String(API_PORT), CORS_ORIGIN: `${webOrigin},http://localhost:${WEB_PORT}`, PUBLIC_URL: webOrigin },
@@ -43,7 +45,8 @@ async function main() {
   cleanups.push(killer(server));
   await waitFor("the API server", () => httpOk(`http://127.0.0.1:${API_PORT}/api/health`), { timeoutMs: 60000 });
   const web = startChild("web", "npx", ["expo", "start", "--web", "--port", String(WEB_PORT)], {
-    env: { CI: "1", EXPO_OFFLINE: "1", EXPO_NO_TELEMETRY: "1", EXPO_PUBLIC_API_URL: `http://127.0.0.1:${API_PORT}` },
+    // Not CI mode: Metro watches files and refreshes the page on every change.
+    env: { EXPO_OFFLINE: "1", EXPO_NO_TELEMETRY: "1", EXPO_PUBLIC_API_URL: `http://127.0.0.1:${API_PORT}` },
   });
   cleanups.push(killer(web));
   web.on("exit", () => void stop(1));
