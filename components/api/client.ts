@@ -132,9 +132,11 @@ export type UploadFile = Blob | { uri: string; name: string; type: string };
  * Send one file as multipart/form-data. On the web this uses XMLHttpRequest, whose upload.onprogress
  * reports the bytes sent (fetch cannot); elsewhere fetch, with progress jumping to the end.
  */
-export async function uploadFile<T>(path: string, options: { method?: "PUT" | "POST"; field: string; file: UploadFile; fileName?: string; onProgress?: (fraction: number) => void }): Promise<T> {
-  const { method = "PUT", field, file, fileName, onProgress } = options;
+export async function uploadFile<T>(path: string, options: { method?: "PUT" | "POST"; field: string; file: UploadFile; fileName?: string; onProgress?: (fraction: number) => void; fields?: Record<string, string>; tooLargeMessage?: string }): Promise<T> {
+  const { method = "PUT", field, file, fileName, onProgress, fields, tooLargeMessage } = options;
   const form = new FormData();
+  // Text fields first: a multipart parser sees them before the file.
+  for (const [k, v] of Object.entries(fields ?? {})) form.append(k, v);
   if (typeof Blob !== "undefined" && file instanceof Blob) form.append(field, file, fileName ?? (file as File).name ?? "upload");
   else form.append(field, file as unknown as Blob);
   const token = authToken;
@@ -156,7 +158,7 @@ export async function uploadFile<T>(path: string, options: { method?: "PUT" | "P
           resolve(data as T);
         } else if (xhr.status === 413 && !isApiErrorBody(data)) {
           // A proxy in front may refuse a large body before the API sees it.
-          reject(new ApiError(413, "payload_too_large", "The photo is larger than 5 MB. Use a smaller one."));
+          reject(new ApiError(413, "payload_too_large", tooLargeMessage ?? "The photo is larger than 5 MB. Use a smaller one."));
         } else {
           reject(failure(xhr.status, data, !!token));
         }

@@ -20,22 +20,28 @@ export const NAV: Record<HomeArea, NavItem[]> = {
     { key: "home", label: "Home", href: "/buyer", icon: "home", exact: true, alsoFor: ["/buyer/order"] },
     { key: "standing", label: "Standing", href: "/buyer/standing", icon: "repeat" },
     { key: "history", label: "History", href: "/buyer/orders", icon: "list" },
-    { key: "account", label: "Account", href: "/buyer/account", icon: "briefcase" },
-    { key: "me", label: "You", href: "/buyer/me", icon: "user" },
+    { key: "invoices", label: "Invoices", href: "/buyer/invoices", icon: "file-text" },
+    { key: "account", label: "Account", href: "/buyer/account", icon: "briefcase", alsoFor: ["/buyer/me"] },
   ],
   baker: [
-    { key: "bake", label: "Bake day", href: "/bake", icon: "sun", exact: true },
+    { key: "bake", label: "Bake day", href: "/bake", icon: "sun", exact: true, alsoFor: ["/bake/day"] },
     { key: "orders", label: "Orders", href: "/bake/orders", icon: "clipboard" },
+    { key: "formulas", label: "Formulas", href: "/bake/formulas", icon: "book-open" },
+    { key: "forecast", label: "Buying", href: "/bake/forecast", icon: "shopping-cart" },
+    { key: "ingredients", label: "Ingredients", href: "/bake/ingredients", icon: "package" },
     { key: "me", label: "You", href: "/bake/me", icon: "user" },
   ],
   office: [
     { key: "office", label: "Overview", href: "/office", icon: "grid", exact: true },
-    { key: "orders", label: "Orders", href: "/office/orders", icon: "clipboard" },
-    { key: "products", label: "Products", href: "/office/products", icon: "shopping-bag" },
+    { key: "orders", label: "Orders", href: "/office/orders", icon: "clipboard", alsoFor: ["/office/dispatch"] },
+    { key: "invoices", label: "Invoices", href: "/office/invoices", icon: "file-text", roles: ["owner", "bookkeeper"] },
     { key: "accounts", label: "Accounts", href: "/office/accounts", icon: "briefcase" },
+    { key: "products", label: "Products", href: "/office/products", icon: "shopping-bag" },
+    { key: "production", label: "Production", href: "/office/production", icon: "layers", roles: ["owner"] },
     { key: "people", label: "People", href: "/office/people", icon: "users", roles: ["owner"] },
     { key: "price-lists", label: "Price lists", href: "/office/price-lists", icon: "tag", roles: ["owner"] },
     { key: "calendar", label: "Delivery days", href: "/office/calendar", icon: "calendar", roles: ["owner"] },
+    { key: "money", label: "Money", href: "/office/money", icon: "dollar-sign", roles: ["owner", "bookkeeper"] },
     { key: "me", label: "You", href: "/office/me", icon: "user" },
   ],
 };
@@ -49,8 +55,8 @@ export const AREA_LABEL: Record<HomeArea, string> = {
 /** The bottom tab bar holds at most this many; past it, the last tab is "More". */
 export const MAX_TABS = 5;
 
-/** Where "More" lists the rest (only the office has more than five items). */
-export const MORE_HREF: Partial<Record<HomeArea, string>> = { office: "/office/more" };
+/** Where "More" lists the rest (the office and the baker have more than five items). */
+export const MORE_HREF: Partial<Record<HomeArea, string>> = { office: "/office/more", baker: "/bake/more" };
 
 export function navFor(area: HomeArea, role: Role): NavItem[] {
   return NAV[area].filter((item) => !item.roles || item.roles.includes(role));

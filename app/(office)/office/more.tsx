@@ -1,3 +1,6 @@
+import React from "react";
 import { MoreScreen } from "../../../components/screens/office/MoreScreen";
 
-export default MoreScreen;
+export default function OfficeMoreRoute() {
+  return <MoreScreen area="office" />;
+}

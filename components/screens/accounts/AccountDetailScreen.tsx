@@ -21,6 +21,8 @@ import { ACCOUNT_STATUS_LABELS, type AccountDto, type AccountStatus } from "../.
 import { colors, radii, space } from "../../theme";
 import { AccountDeliveryCard } from "./AccountDeliveryCard";
 import { CalendarFeedCard } from "../common/CalendarFeedCard";
+import { AccountBillingCard } from "../billing/AccountBillingCard";
+import { TaxCertificatesCard } from "../billing/TaxCertificates";
 
 /** One customer account. The owner can edit it, put it on hold, close it (after a confirm step) and reopen it. */
 export function AccountDetailScreen({ id }: { id: number }) {
@@ -86,12 +88,12 @@ export function AccountDetailScreen({ id }: { id: number }) {
           </Card>
           <AccountDeliveryCard accountId={a.id} editable={isOwner} />
         </View>
-        {isOwner ? (
-          <View style={[styles.col, wide && styles.sideCol]}>
-            <StatusCard account={a} />
-            <CalendarFeedCard accountId={a.id} />
-          </View>
-        ) : null}
+        <View style={[styles.col, wide && styles.sideCol]}>
+          <AccountBillingCard accountId={a.id} canChangeTerms={isOwner} />
+          <TaxCertificatesCard accountId={a.id} canUpload={isOwner} canReview={isOwner} audience="office" />
+          {isOwner ? <StatusCard account={a} /> : null}
+          {isOwner ? <CalendarFeedCard accountId={a.id} /> : null}
+        </View>
       </View>
     </Screen>
   );

@@ -6,6 +6,7 @@ import { Screen } from "../../ui/Screen";
 import { PageHeader } from "../../ui/PageHeader";
 import { Card } from "../../ui/Card";
 import { Button } from "../../ui/Button";
+import { LinkButton } from "../../ui/LinkButton";
 import { FormError, Notice } from "../../ui/FormError";
 import { EmptyState, ErrorState, LoadingState } from "../../ui/States";
 import { AppText, Heading } from "../../ui/Text";
@@ -124,6 +125,7 @@ function OfficeActions({ date, isOwner }: { date: string; isOwner: boolean }) {
         {isOwner ? (
           <Button label="Make standing orders now" icon="repeat" variant="secondary" busy={materialise.isPending} onPress={() => materialise.mutate()} testID="materialise" />
         ) : null}
+        {isOwner ? <LinkButton href={`/office/dispatch?date=${date}` as never} label="Confirm dispatch" icon="truck" variant="secondary" testID="board-confirm-dispatch" /> : null}
       </View>
       <FormError message={csvError} testID="board-csv-error" />
       <FormError message={materialise.isError ? messageOf(materialise.error) : null} testID="materialise-error" />

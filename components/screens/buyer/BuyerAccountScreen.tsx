@@ -14,6 +14,8 @@ import { accountStatusNote } from "./BuyerHome";
 import { formatDate } from "../../format";
 import { CalendarFeedCard } from "../common/CalendarFeedCard";
 import { DeliveryTermsCard } from "./DeliveryTermsCard";
+import { TaxCertificatesCard } from "../billing/TaxCertificates";
+import { LinkButton } from "../../ui/LinkButton";
 
 /** Everything the bakery has on file for the buyer's account (office notes stay in the office). */
 export function BuyerAccountScreen() {
@@ -56,7 +58,12 @@ export function BuyerAccountScreen() {
             />
           </Card>
           <DeliveryTermsCard accountId={account.data.id} />
+          <TaxCertificatesCard accountId={account.data.id} canUpload canReview={false} audience="buyer" />
           <CalendarFeedCard />
+          <Card title="Your sign-in" testID="buyer-account-you">
+            <AppText color="muted">{`Signed in as ${user.name} (${user.email}). Change your password there.`}</AppText>
+            <LinkButton href="/buyer/me" label="Your sign-in and password" icon="user" variant="secondary" testID="buyer-account-me" />
+          </Card>
           <AppText variant="small" color="muted">
             Something out of date? Tell the bakery and they&apos;ll update it.
           </AppText>

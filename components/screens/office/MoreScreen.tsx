@@ -10,18 +10,24 @@ import { EmptyState } from "../../ui/States";
 import { useSignedInUser } from "../../auth/useAuth";
 import { tabsFor } from "../../shell/navItems";
 import { colors, layout, radii, space } from "../../theme";
+import type { HomeArea } from "../../../shared/roles";
 
 const HINTS: Record<string, string> = {
+  production: "Bake day, formulas, ingredients, purchasing forecast and production settings.",
+  ingredients: "The ingredient library: kinds, water content, allergens and purchase packs.",
+  forecast: "What to buy for the next 7 days, in whole packs.",
   people: "Sign-ins for staff and café buyers, and invitations.",
   "price-lists": "Own prices or a percentage off for some accounts.",
   calendar: "Delivery weekdays, the cut-off, and closed dates.",
+  products: "What the bakery sells: prices, pans, allergens and photos.",
+  money: "Payouts, aging, CSV exports, outgoing e-mail and billing settings.",
   me: "Your sign-in and password.",
 };
 
-/** On a phone, the office screens that don't fit in the tab bar. */
-export function MoreScreen() {
+/** On a phone, the screens of an area (the office, the baker's) that don't fit in the tab bar. */
+export function MoreScreen({ area = "office" }: { area?: HomeArea }) {
   const user = useSignedInUser();
-  const { more } = tabsFor("office", user.role);
+  const { more } = tabsFor(area, user.role);
   return (
     <Screen narrow testID="more-screen">
       <PageHeader title="More" testID="more-title" />

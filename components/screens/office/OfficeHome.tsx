@@ -35,7 +35,7 @@ export function OfficeHome() {
         <ErrorState error={summary.error} onRetry={() => summary.refetch()} retrying={summary.isFetching} />
       ) : (
         <View style={[styles.grid, wide && styles.gridWide]}>
-          <Card title="Customer accounts" style={styles.cell} testID="office-accounts-card">
+          <Card title="Customer accounts" style={wide ? styles.cellWide : undefined} testID="office-accounts-card">
             <View style={styles.tiles}>
               <StatTile label="Active" value={summary.data.accounts.active} testID="count-accounts-active" />
               <StatTile label="On hold" value={summary.data.accounts.onHold} testID="count-accounts-on-hold" />
@@ -44,7 +44,7 @@ export function OfficeHome() {
             <AppText color="muted">{`${summary.data.accounts.total} accounts in all.`}</AppText>
             <LinkButton href="/office/accounts" label="Open accounts" icon="arrow-right" testID="office-open-accounts" />
           </Card>
-          <Card title="Orders and products" style={styles.cell} testID="office-orders-card">
+          <Card title="Orders and products" style={wide ? styles.cellWide : undefined} testID="office-orders-card">
             <AppText color="muted">The orders board shows each delivery date by account and product, with totals and a CSV export.</AppText>
             <View style={styles.buttons}>
               <LinkButton href="/office/orders" label="Orders board" icon="clipboard" testID="office-open-orders" />
@@ -52,7 +52,16 @@ export function OfficeHome() {
             </View>
           </Card>
           {isOwner ? (
-            <Card title="People" style={styles.cell} testID="office-people-card">
+            <Card title="Production" style={wide ? styles.cellWide : undefined} testID="office-production-card">
+              <AppText color="muted">The bake day, dough formulas, ingredients and what to buy for the week.</AppText>
+              <View style={styles.buttons}>
+                <LinkButton href="/office/production/day" label="Bake day" icon="sun" testID="office-open-bake-day" />
+                <LinkButton href="/office/production" label="Production" icon="layers" variant="secondary" testID="office-open-production" />
+              </View>
+            </Card>
+          ) : null}
+          {isOwner ? (
+            <Card title="People" style={wide ? styles.cellWide : undefined} testID="office-people-card">
               <View style={styles.tiles}>
                 <StatTile label="Active sign-ins" value={summary.data.users.active} testID="count-users-active" />
                 <StatTile label="Turned off" value={summary.data.users.disabled} testID="count-users-disabled" />
@@ -70,8 +79,8 @@ export function OfficeHome() {
 
 const styles = StyleSheet.create({
   grid: { gap: space.lg },
-  gridWide: { flexDirection: "row", alignItems: "flex-start" },
-  cell: { flex: 1 },
+  gridWide: { flexDirection: "row", flexWrap: "wrap", alignItems: "flex-start" },
+  cellWide: { flexGrow: 1, flexBasis: 300, minWidth: 0 },
   tiles: { flexDirection: "row", flexWrap: "wrap", gap: space.sm },
   buttons: { flexDirection: "row", flexWrap: "wrap", gap: space.sm },
 });

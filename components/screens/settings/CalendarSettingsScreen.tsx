@@ -10,6 +10,7 @@ import { DetailList } from "../../ui/DetailList";
 import { FormError, Notice } from "../../ui/FormError";
 import { ErrorState, LoadingState } from "../../ui/States";
 import { AppText } from "../../ui/Text";
+import { TextLink } from "../../ui/TextLink";
 import { useCalendarSettingsQuery, useSaveCalendarSettingsMutation } from "../../api/calendar";
 import { useBakeryQuery } from "../../api/bakery";
 import { splitError, validate } from "../../forms/errors";
@@ -182,6 +183,7 @@ function SettingsForm({ initial }: { initial: CalendarSettingsDto }) {
       <FormError message={formError} testID="calendar-form-error" />
       {saved ? <Notice message="Delivery calendar saved. Buyers see the new dates now." testID="calendar-saved" /> : null}
       <Button label="Save delivery calendar" icon="check" onPress={submit} busy={save.isPending} testID="calendar-save" block />
+      <TextLink href="/office/production/settings" label="Production settings: mixer, dispatch time, ovens" testID="open-production-settings" />
     </>
   );
 }

@@ -1,0 +1,10 @@
+import React from "react";
+import { useLocalSearchParams } from "expo-router";
+import { FormulaScreen } from "../../../../components/screens/production/FormulaScreens";
+import { firstParam, idParam } from "../../../../components/routing";
+
+export default function BakerFormulaRoute() {
+  const { id, version, created } = useLocalSearchParams<{ id: string; version?: string; created?: string }>();
+  const v = idParam(version);
+  return <FormulaScreen key={String(id)} area="baker" id={idParam(id)} version={Number.isNaN(v) ? undefined : v} created={firstParam(created) === "1"} />;
+}

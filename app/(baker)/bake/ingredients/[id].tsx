@@ -1,0 +1,9 @@
+import React from "react";
+import { useLocalSearchParams } from "expo-router";
+import { IngredientScreen } from "../../../../components/screens/production/IngredientScreens";
+import { idParam } from "../../../../components/routing";
+
+export default function BakerIngredientRoute() {
+  const { id } = useLocalSearchParams<{ id: string }>();
+  return <IngredientScreen key={String(id)} area="baker" id={idParam(id)} />;
+}

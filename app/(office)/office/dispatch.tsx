@@ -1,0 +1,14 @@
+import React from "react";
+import { useLocalSearchParams } from "expo-router";
+import { RequireRole } from "../../../components/auth/RoleGate";
+import { ConfirmDispatchScreen } from "../../../components/screens/board/ConfirmDispatchScreen";
+import { firstParam } from "../../../components/routing";
+
+export default function DispatchRoute() {
+  const { date } = useLocalSearchParams<{ date?: string }>();
+  return (
+    <RequireRole roles={["owner"]}>
+      <ConfirmDispatchScreen date={firstParam(date)} />
+    </RequireRole>
+  );
+}

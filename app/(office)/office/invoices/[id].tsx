@@ -1,0 +1,9 @@
+import React from "react";
+import { useLocalSearchParams } from "expo-router";
+import { InvoiceDetailScreen } from "../../../../components/screens/billing/InvoiceDetailScreen";
+import { idParam } from "../../../../components/routing";
+
+export default function OfficeInvoiceRoute() {
+  const { id } = useLocalSearchParams<{ id: string }>();
+  return <InvoiceDetailScreen key={String(id)} id={idParam(id)} mode="office" />;
+}

@@ -1,0 +1,3 @@
+import { AgingScreen } from "../../../../components/screens/billing/AgingScreen";
+
+export default AgingScreen;

@@ -1,0 +1,3 @@
+import { ExportsScreen } from "../../../../components/screens/billing/ExportsScreen";
+
+export default ExportsScreen;

@@ -1,0 +1,3 @@
+import { BillingHubScreen } from "../../../../components/screens/billing/BillingHubScreen";
+
+export default BillingHubScreen;

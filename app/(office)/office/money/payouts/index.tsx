@@ -1,0 +1,3 @@
+import { PayoutsScreen } from "../../../../../components/screens/billing/PayoutsScreens";
+
+export default PayoutsScreen;

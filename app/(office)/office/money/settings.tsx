@@ -1,0 +1,3 @@
+import { BillingSettingsScreen } from "../../../../components/screens/billing/BillingSettingsScreen";
+
+export default BillingSettingsScreen;

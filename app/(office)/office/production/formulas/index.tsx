@@ -1,0 +1,11 @@
+import React from "react";
+import { RequireRole } from "../../../../../components/auth/RoleGate";
+import { FormulasScreen } from "../../../../../components/screens/production/FormulaScreens";
+
+export default function OfficeFormulasRoute() {
+  return (
+    <RequireRole roles={["owner"]}>
+      <FormulasScreen area="office" />
+    </RequireRole>
+  );
+}

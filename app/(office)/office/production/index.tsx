@@ -1,0 +1,11 @@
+import React from "react";
+import { RequireRole } from "../../../../components/auth/RoleGate";
+import { ProductionHubScreen } from "../../../../components/screens/production/ProductionOfficeScreens";
+
+export default function ProductionHubRoute() {
+  return (
+    <RequireRole roles={["owner"]}>
+      <ProductionHubScreen />
+    </RequireRole>
+  );
+}

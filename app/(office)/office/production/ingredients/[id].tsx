@@ -1,0 +1,14 @@
+import React from "react";
+import { useLocalSearchParams } from "expo-router";
+import { RequireRole } from "../../../../../components/auth/RoleGate";
+import { IngredientScreen } from "../../../../../components/screens/production/IngredientScreens";
+import { idParam } from "../../../../../components/routing";
+
+export default function OfficeIngredientRoute() {
+  const { id } = useLocalSearchParams<{ id: string }>();
+  return (
+    <RequireRole roles={["owner"]}>
+      <IngredientScreen key={String(id)} area="office" id={idParam(id)} />
+    </RequireRole>
+  );
+}

@@ -1,0 +1,11 @@
+import React from "react";
+import { RequireRole } from "../../../../../components/auth/RoleGate";
+import { NewIngredientScreen } from "../../../../../components/screens/production/IngredientScreens";
+
+export default function OfficeNewIngredientRoute() {
+  return (
+    <RequireRole roles={["owner"]}>
+      <NewIngredientScreen area="office" />
+    </RequireRole>
+  );
+}

@@ -1,0 +1,32 @@
+import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
+import { api } from "./client";
+
+/** The bakery's billing settings; the tax rate is in basis points (875 = 8.75 %). */
+export interface BillingSettingsDto {
+  salesTaxRateBp: number;
+  invoicePrefix: string;
+  creditHoldDays: number;
+  paymentInstructions: string;
+}
+
+export const billingSettingsKeys = {
+  all: ["billingSettings"] as const,
+  detail: () => [...billingSettingsKeys.all, "detail"] as const,
+};
+
+export const billingSettingsApi = {
+  get: () => api<{ settings: BillingSettingsDto }>("/api/settings/billing").then((r) => r.settings),
+  save: (input: BillingSettingsDto) => api<{ settings: BillingSettingsDto }>("/api/settings/billing", { method: "PUT", body: input }).then((r) => r.settings),
+};
+
+export function useBillingSettingsQuery() {
+  return useQuery({ queryKey: billingSettingsKeys.detail(), queryFn: billingSettingsApi.get });
+}
+
+export function useSaveBillingSettingsMutation() {
+  const qc = useQueryClient();
+  return useMutation({
+    mutationFn: billingSettingsApi.save,
+    onSuccess: (settings) => qc.setQueryData(billingSettingsKeys.detail(), settings),
+  });
+}

@@ -1,0 +1,59 @@
+/**
+ * Production screens live in two areas: the baker's (/bake/…) and the owner's office (/office/production/…).
+ * The screens are the same; their links go to the area they are shown in.
+ */
+export type KitchenArea = "baker" | "office";
+
+export interface KitchenPaths {
+  area: KitchenArea;
+  /** The bake day screen for a date (or the next bake day). */
+  day: (date?: string) => string;
+  orders: (date?: string) => string;
+  formulas: string;
+  newFormula: string;
+  formula: (id: number, version?: number) => string;
+  ingredients: string;
+  newIngredient: string;
+  ingredient: (id: number) => string;
+  forecast: (from?: string) => string;
+  /** Owner's production settings (office only). */
+  settings: string | null;
+  /** Where "back" from the production screens goes in the office (its production hub). */
+  hub: string | null;
+}
+
+const withDate = (path: string, key: string, date?: string) => (date ? `${path}?${key}=${date}` : path);
+
+export function kitchenPaths(area: KitchenArea): KitchenPaths {
+  if (area === "office") {
+    const base = "/office/production";
+    return {
+      area,
+      day: (date) => withDate(`${base}/day`, "date", date),
+      orders: (date) => withDate("/office/orders", "date", date),
+      formulas: `${base}/formulas`,
+      newFormula: `${base}/formulas/new`,
+      formula: (id, version) => (version ? `${base}/formulas/${id}?version=${version}` : `${base}/formulas/${id}`),
+      ingredients: `${base}/ingredients`,
+      newIngredient: `${base}/ingredients/new`,
+      ingredient: (id) => `${base}/ingredients/${id}`,
+      forecast: (from) => withDate(`${base}/forecast`, "from", from),
+      settings: `${base}/settings`,
+      hub: base,
+    };
+  }
+  return {
+    area,
+    day: (date) => withDate("/bake/day", "date", date),
+    orders: (date) => withDate("/bake/orders", "date", date),
+    formulas: "/bake/formulas",
+    newFormula: "/bake/formulas/new",
+    formula: (id, version) => (version ? `/bake/formulas/${id}?version=${version}` : `/bake/formulas/${id}`),
+    ingredients: "/bake/ingredients",
+    newIngredient: "/bake/ingredients/new",
+    ingredient: (id) => `/bake/ingredients/${id}`,
+    forecast: (from) => withDate("/bake/forecast", "from", from),
+    settings: null,
+    hub: null,
+  };
+}

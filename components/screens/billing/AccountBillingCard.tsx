@@ -1,0 +1,75 @@
+import React, { useState } from "react";
+import { View } from "react-native";
+import { Card } from "../../ui/Card";
+import { ChoiceGroup } from "../../ui/ChoiceGroup";
+import { Button } from "../../ui/Button";
+import { LinkButton } from "../../ui/LinkButton";
+import { FormError, Notice } from "../../ui/FormError";
+import { AppText } from "../../ui/Text";
+import { messageOf } from "../../api/client";
+import { useInvoicesQuery } from "../../api/invoices";
+import { useSetTermsMutation } from "../../api/accountBilling";
+import { PAYMENT_TERMS, PAYMENT_TERMS_LABELS, type PaymentTerms } from "../../../shared/billing";
+import { billingStyles, money } from "./parts";
+import { invoicesLabel } from "./InvoicesScreen";
+
+/** An account's billing on its office page: what it owes, its invoices, and (owner) its payment terms. */
+export function AccountBillingCard({ accountId, canChangeTerms }: { accountId: number; canChangeTerms: boolean }) {
+  const invoices = useInvoicesQuery({ accountId, sort: "newest" });
+  const open = invoices.data?.invoices.filter((i) => i.amountDueCents > 0 && i.status !== "void") ?? [];
+  const overdue = open.filter((i) => i.overdue);
+  const newest = invoices.data?.invoices[0];
+  const cur = newest?.currency ?? "USD";
+
+  return (
+    <Card title="Billing" testID="account-billing">
+      {invoices.isPending ? (
+        <AppText color="muted">Loading invoices…</AppText>
+      ) : invoices.isError ? (
+        <FormError message={`Invoices didn't load: ${messageOf(invoices.error)}`} testID="account-billing-error" />
+      ) : invoices.data.invoices.length === 0 ? (
+        <AppText color="muted" testID="account-billing-summary">
+          No invoices yet.
+        </AppText>
+      ) : (
+        <AppText testID="account-billing-summary" color={overdue.length ? "dangerInk" : "ink"}>
+          {open.length === 0
+            ? `${invoicesLabel(invoices.data.invoices.length)}, all paid.`
+            : `${money(open.reduce((s, i) => s + i.amountDueCents, 0), cur)} owed on ${invoicesLabel(open.length)}${overdue.length ? `, ${overdue.length} overdue` : ""}.`}
+        </AppText>
+      )}
+      <LinkButton href={`/office/invoices?accountId=${accountId}` as never} label="See its invoices" icon="file-text" variant="secondary" testID="account-invoices-link" />
+      {canChangeTerms ? <TermsForm accountId={accountId} newestKind={newest?.kind} /> : null}
+    </Card>
+  );
+}
+
+function TermsForm({ accountId, newestKind }: { accountId: number; newestKind?: "order" | "statement" }) {
+  const mutation = useSetTermsMutation(accountId);
+  const [terms, setTerms] = useState<PaymentTerms | null>(null);
+  const [error, setError] = useState<string | null>(null);
+  const save = () => {
+    setError(null);
+    if (!terms) {
+      setError("Choose the terms first.");
+      return;
+    }
+    mutation.mutate(terms);
+  };
+  return (
+    <View style={{ gap: 12 }} testID="account-terms">
+      <AppText variant="label">Payment terms</AppText>
+      <AppText variant="small" color="muted">
+        {newestKind
+          ? `Its newest invoice was ${newestKind === "order" ? "a per-delivery invoice paid by card" : "a weekly statement on net terms"}. Changing terms applies to invoices issued from now on.`
+          : "Changing terms applies to invoices issued from now on."}
+      </AppText>
+      <ChoiceGroup<PaymentTerms> label="New terms" layout="list" value={terms} onChange={setTerms} testID="account-terms-choice" choices={PAYMENT_TERMS.map((t) => ({ value: t, label: PAYMENT_TERMS_LABELS[t] }))} />
+      {mutation.isSuccess ? <Notice message={`Payment terms are now: ${PAYMENT_TERMS_LABELS[mutation.data]}.`} testID="account-terms-saved" /> : null}
+      <FormError message={error ?? (mutation.isError ? messageOf(mutation.error) : null)} testID="account-terms-error" />
+      <View style={billingStyles.buttons}>
+        <Button label="Change terms" icon="check" variant="secondary" busy={mutation.isPending} onPress={save} testID="account-terms-save" />
+      </View>
+    </View>
+  );
+}

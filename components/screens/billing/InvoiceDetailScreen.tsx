@@ -1,0 +1,270 @@
+import React, { useState } from "react";
+import { StyleSheet, View } from "react-native";
+import { Screen } from "../../ui/Screen";
+import { PageHeader } from "../../ui/PageHeader";
+import { Card } from "../../ui/Card";
+import { DetailList } from "../../ui/DetailList";
+import { Button } from "../../ui/Button";
+import { TextLink } from "../../ui/TextLink";
+import { FormError } from "../../ui/FormError";
+import { Badge } from "../../ui/Badge";
+import { EmptyState, ErrorState, LoadingState } from "../../ui/States";
+import { AppText } from "../../ui/Text";
+import { ApiError, messageOf } from "../../api/client";
+import { downloadInvoicePdf, useInvoiceQuery, type InvoiceDetailDto, type InvoiceDto } from "../../api/invoices";
+import { useBillingSettingsQuery } from "../../api/billingSettings";
+import { useBakeryTimeZone } from "../../api/bakery";
+import { formatDateTime } from "../../format";
+import { useIsWide } from "../../shell/useIsWide";
+import { BackLink, BillingTable, DISPOSITION_LABELS, InvoiceStatusBadge, KIND_LABELS, METHOD_LABELS, SumLine, billingStyles, day, money, percent } from "./parts";
+import { PayByCard } from "./PayByCard";
+import { CreditNoteCard, RecordPaymentCard } from "./InvoiceForms";
+import { colors, radii, space } from "../../theme";
+
+export interface InvoiceDetailProps {
+  id: number;
+  /** Office: record payments, issue credit notes. Buyer: their own invoice, to download and pay. */
+  mode: "office" | "buyer";
+}
+
+/** One invoice: its lines and totals, credits, payments and refunds; PDF and card payment; the office's forms. */
+export function InvoiceDetailScreen({ id, mode }: InvoiceDetailProps) {
+  const valid = Number.isInteger(id) && id > 0;
+  const detail = useInvoiceQuery(valid ? id : null);
+  const wide = useIsWide();
+  const office = mode === "office";
+  const listHref = office ? "/office/invoices" : "/buyer/invoices";
+
+  if (!valid || (detail.isError && detail.error instanceof ApiError && detail.error.status === 404)) {
+    return (
+      <Screen testID="invoice-detail">
+        <EmptyState icon="help-circle" title="There's no such invoice" message="It may have been typed wrong in the address." testID="invoice-not-found" />
+        <TextLink href={listHref} label="All invoices" />
+      </Screen>
+    );
+  }
+  if (detail.isPending) {
+    return (
+      <Screen testID="invoice-detail">
+        <LoadingState label="Loading the invoice…" testID="invoice-loading" />
+      </Screen>
+    );
+  }
+  if (detail.isError) {
+    return (
+      <Screen testID="invoice-detail">
+        <ErrorState error={detail.error} title="This invoice didn't load" onRetry={() => detail.refetch()} retrying={detail.isFetching} testID="invoice-error" />
+        <TextLink href={listHref} label="All invoices" />
+      </Screen>
+    );
+  }
+
+  const d = detail.data;
+  const inv = d.invoice;
+  const payable = inv.amountDueCents > 0 && inv.status !== "void";
+  return (
+    <Screen testID="invoice-detail">
+      <BackLink href={listHref} label="All invoices" testID="back-to-invoices" />
+      <PageHeader
+        overline={KIND_LABELS[inv.kind]}
+        title={inv.number}
+        subtitle={`${inv.accountName} · issued ${day(inv.issueDate)}`}
+        testID="invoice-title"
+        actions={<PdfButton invoice={inv} />}
+      />
+      <View style={[billingStyles.grid, wide && billingStyles.gridWide]}>
+        <View style={[billingStyles.col, wide && billingStyles.mainCol]}>
+          <LinesCard detail={d} />
+          {d.creditNotes.length ? <CreditNotesCard detail={d} /> : null}
+          {office && inv.status !== "void" ? <CreditNoteCard detail={d} /> : null}
+        </View>
+        <View style={[billingStyles.col, wide && billingStyles.sideCol]}>
+          <SummaryCard invoice={inv} office={office} payable={payable} />
+          <PaymentsCard detail={d} />
+          {d.refunds.length ? <RefundsCard detail={d} /> : null}
+          {office && payable ? <RecordPaymentCard detail={d} /> : null}
+          {!office && payable && inv.kind === "statement" ? <OtherWaysCard /> : null}
+        </View>
+      </View>
+    </Screen>
+  );
+}
+
+function PdfButton({ invoice }: { invoice: InvoiceDto }) {
+  const [busy, setBusy] = useState(false);
+  const [error, setError] = useState<string | null>(null);
+  const run = async () => {
+    setError(null);
+    setBusy(true);
+    try {
+      await downloadInvoicePdf(invoice);
+    } catch (err) {
+      setError(messageOf(err));
+    } finally {
+      setBusy(false);
+    }
+  };
+  return (
+    <View style={styles.pdf}>
+      <Button label="Download PDF" icon="download" variant="secondary" busy={busy} onPress={run} testID="invoice-pdf" />
+      <FormError message={error} testID="invoice-pdf-error" />
+    </View>
+  );
+}
+
+function SummaryCard({ invoice: inv, office, payable }: { invoice: InvoiceDto; office: boolean; payable: boolean }) {
+  const timeZone = useBakeryTimeZone();
+  return (
+    <Card title={payable ? "Amount due" : "Nothing owed"} action={<InvoiceStatusBadge invoice={inv} testID="invoice-status" />} testID="invoice-summary">
+      <AppText variant="display" color={inv.overdue ? "dangerInk" : "ink"} testID="invoice-amount-due">
+        {money(inv.amountDueCents, inv.currency)}
+      </AppText>
+      {inv.overdue ? (
+        <AppText variant="bodyStrong" color="dangerInk" testID="invoice-overdue-note">
+          {`Overdue since ${day(inv.dueDate)}.`}
+        </AppText>
+      ) : null}
+      {payable ? <PayByCard invoiceId={inv.id} label={office ? "Open card payment page" : "Pay by card"} variant={office ? "secondary" : "primary"} testID="pay-by-card" /> : null}
+      <DetailList
+        items={[
+          ...(office ? [{ label: "Account", value: <TextLink href={`/office/accounts/${inv.accountId}`} label={inv.accountName} testID="invoice-account-link" /> }] : []),
+          { label: "Issued", value: day(inv.issueDate) },
+          { label: "Due", value: day(inv.dueDate), testID: "invoice-due-date" },
+          ...(inv.periodStart && inv.periodEnd ? [{ label: "Deliveries", value: `${day(inv.periodStart)} – ${day(inv.periodEnd)}` }] : []),
+          { label: "E-mailed", value: inv.sentAt ? `To the billing e-mail, ${formatDateTime(inv.sentAt, timeZone)}` : "Not sent yet", testID: "invoice-sent" },
+        ]}
+      />
+    </Card>
+  );
+}
+
+function LinesCard({ detail }: { detail: InvoiceDetailDto }) {
+  const wide = useIsWide();
+  const inv = detail.invoice;
+  const cur = inv.currency;
+  return (
+    <Card title="What was delivered" testID="invoice-lines">
+      {detail.lines.length === 0 ? (
+        <AppText color="muted">No lines on this invoice.</AppText>
+      ) : wide ? (
+        <BillingTable
+          rows={detail.lines}
+          rowKey={(l) => l.id}
+          rowTestID={(l) => `invoice-line-${l.id}`}
+          columns={[
+            { key: "date", label: "Delivered", flex: 0.9, render: (l) => day(l.deliveryDate) },
+            { key: "what", label: "Item", flex: 2.2, render: (l) => l.description },
+            { key: "qty", label: "Qty", flex: 0.5, align: "right", render: (l) => String(l.quantity) },
+            { key: "unit", label: "Unit price", flex: 0.9, align: "right", render: (l) => money(l.unitPriceCents, cur) },
+            { key: "amount", label: "Amount", flex: 0.9, align: "right", render: (l) => money(l.amountCents, cur) },
+          ]}
+        />
+      ) : (
+        <View>
+          {detail.lines.map((l, i) => (
+            <View key={l.id} style={[styles.line, i > 0 && styles.divider]} testID={`invoice-line-${l.id}`}>
+              <View style={styles.flex}>
+                <AppText variant="bodyStrong">{l.description}</AppText>
+                <AppText variant="small" color="muted">{`${day(l.deliveryDate)} · ${l.quantity} × ${money(l.unitPriceCents, cur)}`}</AppText>
+              </View>
+              <AppText variant="bodyStrong">{money(l.amountCents, cur)}</AppText>
+            </View>
+          ))}
+        </View>
+      )}
+      <View style={styles.sums} testID="invoice-sums">
+        <SumLine label="Subtotal" value={money(inv.subtotalCents, cur)} testID="invoice-subtotal" />
+        <SumLine label={inv.taxExempt ? "Sales tax (exempt: certificate on file)" : `Sales tax (${percent(inv.taxRateBp)})`} value={money(inv.taxCents, cur)} testID="invoice-tax" />
+        <SumLine label="Total" value={money(inv.totalCents, cur)} strong testID="invoice-total" />
+        {inv.creditedCents ? <SumLine label="Credit notes" value={`− ${money(inv.creditedCents, cur)}`} testID="invoice-credited" /> : null}
+        {inv.paidCents ? <SumLine label="Paid" value={`− ${money(inv.paidCents, cur)}`} testID="invoice-paid" /> : null}
+        {inv.refundedCents ? <SumLine label="Refunded" value={`+ ${money(inv.refundedCents, cur)}`} testID="invoice-refunded" /> : null}
+        <SumLine label="Amount due" value={money(inv.amountDueCents, cur)} strong tone={inv.overdue ? "danger" : undefined} testID="invoice-due" />
+      </View>
+    </Card>
+  );
+}
+
+function CreditNotesCard({ detail }: { detail: InvoiceDetailDto }) {
+  const cur = detail.invoice.currency;
+  return (
+    <Card title="Credit notes" testID="invoice-credit-notes">
+      {detail.creditNotes.map((c, i) => (
+        <View key={c.id} style={[styles.entry, i > 0 && styles.divider]} testID={`credit-note-${c.id}`}>
+          <View style={billingStyles.cardTop}>
+            <AppText variant="bodyStrong" style={billingStyles.grow}>
+              {c.number}
+            </AppText>
+            <Badge label={c.carriedFromInvoiceId ? "Carried from an earlier invoice" : DISPOSITION_LABELS[c.disposition]} tone="crust" />
+          </View>
+          <AppText variant="small" color="muted">{`${day(c.issueDate)} · ${c.reason}`}</AppText>
+          {c.lines.map((l, j) => (
+            <AppText key={j} variant="small">{`${l.quantity} × ${l.description} at ${money(l.unitPriceCents, cur)}`}</AppText>
+          ))}
+          <AppText variant="bodyStrong" align="right">{`− ${money(c.totalCents, cur)}${c.taxCents ? ` (incl. ${money(c.taxCents, cur)} tax)` : ""}`}</AppText>
+        </View>
+      ))}
+    </Card>
+  );
+}
+
+function PaymentsCard({ detail }: { detail: InvoiceDetailDto }) {
+  const cur = detail.invoice.currency;
+  return (
+    <Card title="Payments received" testID="invoice-payments">
+      {detail.payments.length === 0 ? (
+        <AppText color="muted" testID="invoice-no-payments">
+          No payments yet.
+        </AppText>
+      ) : (
+        detail.payments.map((p, i) => (
+          <View key={p.id} style={[styles.entry, i > 0 && styles.divider]} testID={`payment-${p.id}`}>
+            <View style={billingStyles.cardTop}>
+              <AppText variant="bodyStrong" style={billingStyles.grow}>
+                {money(p.amountCents, cur)}
+              </AppText>
+              <Badge label={METHOD_LABELS[p.method]} tone="sage" />
+            </View>
+            <AppText variant="small" color="muted">{`Received ${day(p.receivedOn)}${p.reference ? ` · ref. ${p.reference}` : ""}`}</AppText>
+          </View>
+        ))
+      )}
+    </Card>
+  );
+}
+
+function RefundsCard({ detail }: { detail: InvoiceDetailDto }) {
+  const cur = detail.invoice.currency;
+  const timeZone = useBakeryTimeZone();
+  return (
+    <Card title="Refunds to the card" testID="invoice-refunds">
+      {detail.refunds.map((r, i) => (
+        <View key={r.id} style={[styles.entry, i > 0 && styles.divider]} testID={`refund-${r.id}`}>
+          <AppText variant="bodyStrong">{money(r.amountCents, cur)}</AppText>
+          <AppText variant="small" color="muted">{`${formatDateTime(r.createdAt, timeZone)} · ${r.stripeRefundId}`}</AppText>
+        </View>
+      ))}
+    </Card>
+  );
+}
+
+/** For statements: the bakery's own transfer or cheque details. */
+function OtherWaysCard() {
+  const settings = useBillingSettingsQuery();
+  const text = settings.data?.paymentInstructions;
+  if (!text) return null;
+  return (
+    <Card title="Other ways to pay" testID="invoice-instructions">
+      <AppText selectable>{text}</AppText>
+    </Card>
+  );
+}
+
+const styles = StyleSheet.create({
+  pdf: { gap: space.xs, alignItems: "flex-end" },
+  flex: { flex: 1 },
+  line: { flexDirection: "row", alignItems: "flex-start", gap: space.md, paddingVertical: space.sm },
+  divider: { borderTopWidth: 1, borderTopColor: colors.border },
+  sums: { padding: space.md, borderRadius: radii.md, backgroundColor: colors.page, gap: space.xxs },
+  entry: { gap: space.xxs, paddingVertical: space.sm },
+});

@@ -1,0 +1,313 @@
+import React, { useState } from "react";
+import { StyleSheet, View } from "react-native";
+import { Link, useRouter } from "expo-router";
+import Feather from "@expo/vector-icons/Feather";
+import { Screen } from "../../ui/Screen";
+import { PageHeader } from "../../ui/PageHeader";
+import { TextField } from "../../ui/TextField";
+import { ChoiceGroup } from "../../ui/ChoiceGroup";
+import { Button } from "../../ui/Button";
+import { Card } from "../../ui/Card";
+import { FormError, Notice } from "../../ui/FormError";
+import { EmptyState, ErrorState, LoadingState } from "../../ui/States";
+import { LinkPressable } from "../../ui/LinkPressable";
+import { AppText } from "../../ui/Text";
+import { useSignedInUser } from "../../auth/useAuth";
+import { useAccountsQuery } from "../../api/accounts";
+import { useInvoicesQuery, useIssueStatementsMutation, type InvoiceDto, type InvoiceListParams, type InvoiceSort, type InvoiceStatus, type InvoiceTotalsDto } from "../../api/invoices";
+import { messageOf } from "../../api/client";
+import { useBakeryQuery } from "../../api/bakery";
+import { useDebounced } from "../../forms/useDebounced";
+import { cleanDate } from "../../ordering/dates";
+import { useIsWide } from "../../shell/useIsWide";
+import { BillingTable, Figure, InvoiceStatusBadge, billingStyles, day, money } from "./parts";
+import { colors, space } from "../../theme";
+
+type Show = "all" | InvoiceStatus | "overdue";
+
+const OFFICE_SHOW: { value: Show; label: string }[] = [
+  { value: "all", label: "All" },
+  { value: "open", label: "Open" },
+  { value: "overdue", label: "Overdue" },
+  { value: "paid", label: "Paid" },
+  { value: "partially_refunded", label: "Part refunded" },
+  { value: "refunded", label: "Refunded" },
+  { value: "void", label: "Void" },
+];
+const BUYER_SHOW: { value: Show; label: string }[] = [
+  { value: "all", label: "All" },
+  { value: "open", label: "To pay" },
+  { value: "overdue", label: "Overdue" },
+  { value: "paid", label: "Paid" },
+];
+const SORTS: { value: InvoiceSort; label: string }[] = [
+  { value: "newest", label: "Newest" },
+  { value: "oldest", label: "Oldest" },
+  { value: "due", label: "Due date" },
+  { value: "amount", label: "Amount" },
+  { value: "account", label: "Account" },
+];
+
+export const invoicesLabel = (n: number) => (n === 1 ? "1 invoice" : `${n} invoices`);
+
+export interface InvoicesScreenProps {
+  /** Office (owner, bookkeeper): every account, all filters, statements. Buyer: their own invoices. */
+  mode: "office" | "buyer";
+  /** Start filtered to one account (from the account's page). */
+  accountId?: number;
+}
+
+/** The invoices list: filters, search and sort; a table with a totals row from 1024 px, cards on a phone. */
+export function InvoicesScreen({ mode, accountId: startAccount }: InvoicesScreenProps) {
+  const wide = useIsWide();
+  const router = useRouter();
+  const office = mode === "office";
+  const [q, setQ] = useState("");
+  const [show, setShow] = useState<Show>("all");
+  const [accountId, setAccountId] = useState<number | null>(startAccount && startAccount > 0 ? startAccount : null);
+  const [fromText, setFromText] = useState("");
+  const [toText, setToText] = useState("");
+  const [sort, setSort] = useState<InvoiceSort>("newest");
+  const [moreFilters, setMoreFilters] = useState(!!startAccount);
+  const search = useDebounced(q.trim());
+  const from = useDebounced(fromText.trim());
+  const to = useDebounced(toText.trim());
+  const fromError = from && !cleanDate(from) ? "Write the date as YYYY-MM-DD." : null;
+  const toError = to && !cleanDate(to) ? "Write the date as YYYY-MM-DD." : null;
+  const rangeError = !fromError && !toError && from && to && from > to ? "The end is before the start." : null;
+
+  const params: InvoiceListParams = {
+    q: search || undefined,
+    status: show === "all" || show === "overdue" ? undefined : show,
+    overdue: show === "overdue" || undefined,
+    accountId: office && accountId ? accountId : undefined,
+    from: from && !fromError && !rangeError ? from : undefined,
+    to: to && !toError && !rangeError ? to : undefined,
+    sort,
+  };
+  const invoices = useInvoicesQuery(params);
+  const filtered = !!(params.q || params.status || params.overdue || params.accountId || params.from || params.to);
+  const base = office ? "/office/invoices" : "/buyer/invoices";
+  const open = (inv: InvoiceDto) => router.push(`${base}/${inv.id}`);
+  const showFilters = wide || moreFilters;
+
+  return (
+    <Screen testID="invoices-screen">
+      <PageHeader
+        overline={office ? "Billing" : "Café account"}
+        title="Invoices"
+        subtitle={office ? "Every invoice and weekly statement, with what is still owed." : "Your invoices from the bakery: download them, and pay open ones by card."}
+        testID="invoices-title"
+      />
+      {office ? <StatementsBar /> : null}
+      <View style={[billingStyles.filters, wide && billingStyles.filtersWide]}>
+        <View style={wide ? styles.search : undefined}>
+          <TextField
+            label="Search"
+            placeholder={office ? "Invoice number or account" : "Invoice number"}
+            value={q}
+            onChangeText={setQ}
+            testID="invoices-search"
+            autoCapitalize="characters"
+            autoCorrect={false}
+            returnKeyType="search"
+          />
+        </View>
+        <ChoiceGroup<Show> label="Show" choices={office ? OFFICE_SHOW : BUYER_SHOW} value={show} onChange={setShow} testID="invoices-status" />
+      </View>
+      {!wide ? (
+        <Button
+          label={moreFilters ? "Fewer filters" : "More filters: dates, sort" + (office ? ", account" : "")}
+          icon="sliders"
+          variant="ghost"
+          small
+          onPress={() => setMoreFilters((m) => !m)}
+          testID="invoices-more-filters"
+        />
+      ) : null}
+      {showFilters ? (
+        <View style={[billingStyles.filters, wide && billingStyles.filtersWide]}>
+          <View style={styles.date}>
+            <TextField label="Issued from" placeholder="YYYY-MM-DD" value={fromText} onChangeText={setFromText} error={fromError ?? rangeError} testID="invoices-from" inputMode="numeric" maxLength={10} autoCorrect={false} />
+          </View>
+          <View style={styles.date}>
+            <TextField label="Issued to" placeholder="YYYY-MM-DD" value={toText} onChangeText={setToText} error={toError} testID="invoices-to" inputMode="numeric" maxLength={10} autoCorrect={false} />
+          </View>
+          <ChoiceGroup<InvoiceSort> label="Sort by" choices={SORTS.filter((s) => office || s.value !== "account")} value={sort} onChange={setSort} testID="invoices-sort" />
+          {office ? <AccountFilter value={accountId} onChange={setAccountId} /> : null}
+        </View>
+      ) : null}
+
+      {invoices.isPending ? (
+        <LoadingState label="Loading invoices…" testID="invoices-loading" />
+      ) : invoices.isError ? (
+        <ErrorState error={invoices.error} title="Invoices didn't load" onRetry={() => invoices.refetch()} retrying={invoices.isFetching} testID="invoices-error" />
+      ) : invoices.data.invoices.length === 0 ? (
+        filtered ? (
+          <EmptyState icon="search" title="No invoices match" message="Try other words or dates, or show all invoices." testID="invoices-empty" />
+        ) : (
+          <EmptyState
+            icon="file-text"
+            title="No invoices yet"
+            message={office ? "Invoices appear when deliveries are confirmed (card accounts) or weekly statements are issued." : "Your invoices appear here after your deliveries."}
+            testID="invoices-empty"
+          />
+        )
+      ) : wide ? (
+        <InvoiceTable invoices={invoices.data.invoices} totals={invoices.data.totals} office={office} onOpen={open} />
+      ) : (
+        <>
+          <TotalsTiles totals={invoices.data.totals} currency={invoices.data.invoices[0]?.currency} />
+          <View style={billingStyles.cards} testID="invoices-list">
+            {invoices.data.invoices.map((inv) => (
+              <InvoiceCard key={inv.id} invoice={inv} href={`${base}/${inv.id}`} office={office} />
+            ))}
+          </View>
+        </>
+      )}
+    </Screen>
+  );
+}
+
+function StatementsBar() {
+  const issue = useIssueStatementsMutation();
+  const r = issue.data;
+  return (
+    <View style={styles.statements}>
+      <View style={billingStyles.buttons}>
+        <Button label="Issue statements now" icon="send" variant="secondary" busy={issue.isPending} onPress={() => issue.mutate(undefined)} testID="issue-statements" />
+        <AppText variant="small" color="muted" style={styles.flex}>
+          Weekly statements for accounts on terms, for delivered orders not invoiced yet. They also go out every Monday on their own.
+        </AppText>
+      </View>
+      <FormError message={issue.isError ? messageOf(issue.error) : null} testID="statements-error" />
+      {r ? (
+        <Notice
+          testID="statements-result"
+          message={r.length === 0 ? "Nothing to invoice: every delivered order on terms is already on a statement." : `Issued and e-mailed ${r.length === 1 ? "1 statement" : `${r.length} statements`}: ${r.join(", ")}.`}
+        />
+      ) : null}
+    </View>
+  );
+}
+
+function AccountFilter({ value, onChange }: { value: number | null; onChange: (id: number | null) => void }) {
+  const accounts = useAccountsQuery({});
+  if (accounts.isPending) return <LoadingState label="Loading accounts…" testID="invoices-accounts-loading" />;
+  if (accounts.isError) return <FormError message={`The account filter didn't load: ${messageOf(accounts.error)}`} testID="invoices-accounts-error" />;
+  return (
+    <ChoiceGroup<string>
+      label="Account"
+      testID="invoices-account"
+      value={value ? String(value) : "all"}
+      onChange={(v) => onChange(v === "all" ? null : Number(v))}
+      choices={[{ value: "all", label: "All accounts" }, ...accounts.data.map((a) => ({ value: String(a.id), label: a.businessName }))]}
+    />
+  );
+}
+
+function TotalsTiles({ totals, currency = "USD" }: { totals: InvoiceTotalsDto; currency?: string }) {
+  return (
+    <View style={billingStyles.figures} testID="invoices-totals">
+      <Figure label="Invoices" value={String(totals.count)} testID="invoices-total-count" />
+      <Figure label="Invoiced" value={money(totals.totalCents, currency)} testID="invoices-total-amount" />
+      <Figure label="Paid" value={money(totals.paidCents, currency)} testID="invoices-total-paid" />
+      <Figure label="Still owed" value={money(totals.dueCents, currency)} testID="invoices-total-due" tone={totals.dueCents > 0 ? "danger" : undefined} />
+    </View>
+  );
+}
+
+function InvoiceTable({ invoices, totals, office, onOpen }: { invoices: InvoiceDto[]; totals: InvoiceTotalsDto; office: boolean; onOpen: (inv: InvoiceDto) => void }) {
+  const cur = invoices[0]?.currency ?? "USD";
+  return (
+    <BillingTable<InvoiceDto>
+      testID="invoices-table"
+      rows={invoices}
+      rowKey={(i) => i.id}
+      onRowPress={onOpen}
+      rowLabel={(i) => `${i.number}, ${i.accountName}, ${money(i.totalCents, i.currency)}, ${i.overdue ? "overdue" : i.status}`}
+      rowTestID={(i) => `invoice-row-${i.id}`}
+      footer
+      footerTestID="invoices-totals"
+      columns={[
+        {
+          key: "number",
+          label: "Invoice",
+          flex: 1.4,
+          render: (i) => (
+            <View>
+              <AppText variant="bodyStrong">{i.number}</AppText>
+              {i.kind === "statement" ? (
+                <AppText variant="small" color="muted">
+                  Statement
+                </AppText>
+              ) : null}
+            </View>
+          ),
+          footer: <AppText variant="bodyStrong" testID="invoices-total-count">{invoicesLabel(totals.count)}</AppText>,
+        },
+        ...(office ? [{ key: "account", label: "Account", flex: 1.6, render: (i: InvoiceDto) => i.accountName }] : []),
+        { key: "issued", label: "Issued", flex: 1, render: (i) => day(i.issueDate) },
+        { key: "due", label: "Due", flex: 1, render: (i) => <AppText color={i.overdue ? "dangerInk" : "ink"}>{day(i.dueDate)}</AppText> },
+        { key: "status", label: "Status", flex: 1, render: (i) => <InvoiceStatusBadge invoice={i} testID={`invoice-status-${i.id}`} /> },
+        { key: "total", label: "Total", flex: 1, align: "right", render: (i) => money(i.totalCents, i.currency), footer: <AppText variant="bodyStrong" align="right" testID="invoices-total-amount">{money(totals.totalCents, cur)}</AppText> },
+        { key: "paid", label: "Paid", flex: 1, align: "right", render: (i) => money(i.paidCents, i.currency), footer: <AppText variant="bodyStrong" align="right" testID="invoices-total-paid">{money(totals.paidCents, cur)}</AppText> },
+        {
+          key: "owed",
+          label: "Owed",
+          flex: 1,
+          align: "right",
+          render: (i) => (
+            <AppText variant={i.amountDueCents > 0 ? "bodyStrong" : "body"} color={i.overdue ? "dangerInk" : "ink"} align="right">
+              {money(i.amountDueCents, i.currency)}
+            </AppText>
+          ),
+          footer: <AppText variant="bodyStrong" align="right" testID="invoices-total-due">{money(totals.dueCents, cur)}</AppText>,
+        },
+      ]}
+    />
+  );
+}
+
+function InvoiceCard({ invoice: i, href, office }: { invoice: InvoiceDto; href: string; office: boolean }) {
+  return (
+    <Link href={href as never} asChild>
+      <LinkPressable
+        accessibilityRole="link"
+        accessibilityLabel={`${i.number}${office ? `, ${i.accountName}` : ""}, ${money(i.totalCents, i.currency)}, ${i.overdue ? "overdue" : i.status}`}
+        testID={`invoice-row-${i.id}`}
+        style={billingStyles.card}
+        highlightStyle={billingStyles.cardHover}
+      >
+        <View style={billingStyles.cardText}>
+          <View style={billingStyles.cardTop}>
+            <AppText variant="bodyStrong" style={billingStyles.grow}>
+              {i.number}
+            </AppText>
+            <InvoiceStatusBadge invoice={i} testID={`invoice-status-${i.id}`} />
+          </View>
+          {office ? <AppText variant="small">{i.accountName}</AppText> : null}
+          <AppText variant="small" color="muted">
+            {`Issued ${day(i.issueDate)} · due ${day(i.dueDate)}${i.kind === "statement" ? " · statement" : ""}`}
+          </AppText>
+          <AppText variant="small" color={i.overdue ? "dangerInk" : "ink"}>
+            {i.amountDueCents > 0 ? `${money(i.amountDueCents, i.currency)} owed of ${money(i.totalCents, i.currency)}` : `${money(i.totalCents, i.currency)} · nothing owed`}
+          </AppText>
+        </View>
+        <Feather name="chevron-right" size={20} color={colors.muted} />
+      </LinkPressable>
+    </Link>
+  );
+}
+
+const styles = StyleSheet.create({
+  search: { flexGrow: 1, flexBasis: 280, maxWidth: 420 },
+  date: { flexBasis: 160, flexGrow: 0, minWidth: 150 },
+  statements: { gap: space.sm },
+  flex: { flex: 1, minWidth: 200 },
+});
+
+/** The bakery's currency for screens without an invoice at hand. */
+export function useCurrency(): string {
+  return useBakeryQuery().data?.currency ?? "USD";
+}

@@ -1,0 +1,125 @@
+import React, { useState } from "react";
+import { StyleSheet, View } from "react-native";
+import { Screen } from "../../ui/Screen";
+import { PageHeader } from "../../ui/PageHeader";
+import { ChoiceGroup } from "../../ui/ChoiceGroup";
+import { Button } from "../../ui/Button";
+import { Badge, type BadgeTone } from "../../ui/Badge";
+import { FormError, Notice } from "../../ui/FormError";
+import { EmptyState, ErrorState, LoadingState } from "../../ui/States";
+import { AppText } from "../../ui/Text";
+import { messageOf } from "../../api/client";
+import { MAIL_STATUSES, useOutboxQuery, useResendMailMutation, type MailStatus, type OutboxMailDto } from "../../api/outbox";
+import { useBakeryTimeZone } from "../../api/bakery";
+import { formatDateTime } from "../../format";
+import { useIsWide } from "../../shell/useIsWide";
+import { BackLink, BillingTable, billingStyles } from "./parts";
+import { colors, radii, space } from "../../theme";
+
+const STATUS_LABELS: Record<MailStatus, string> = { pending: "Waiting", sending: "Sending", sent: "Sent", failed: "Failed" };
+const STATUS_TONE: Record<MailStatus, BadgeTone> = { pending: "amber", sending: "crust", sent: "sage", failed: "danger" };
+const KIND_LABELS: Record<string, string> = { invoice: "Invoice", receipt: "Receipt", invitation: "Invitation", password_reset: "Password reset" };
+
+type Show = MailStatus | "all";
+
+/** The owner's view of outgoing e-mail: what went, what waits for a retry, what failed (and send it again). */
+export function OutboxScreen() {
+  const wide = useIsWide();
+  const [show, setShow] = useState<Show>("all");
+  const mails = useOutboxQuery(show === "all" ? undefined : show);
+  const resend = useResendMailMutation();
+  const timeZone = useBakeryTimeZone();
+  const [resent, setResent] = useState<string | null>(null);
+
+  const again = (m: OutboxMailDto) => {
+    setResent(null);
+    resend.mutate(m.id, { onSuccess: () => setResent(`"${m.subject}" to ${m.to} is queued to go again.`) });
+  };
+  const resendButton = (m: OutboxMailDto) =>
+    m.status === "failed" ? <Button label="Send again" icon="refresh-cw" small variant="secondary" busy={resend.isPending && resend.variables === m.id} onPress={() => again(m)} testID={`outbox-resend-${m.id}`} accessibilityLabel={`Send again: ${m.subject} to ${m.to}`} /> : null;
+  const when = (m: OutboxMailDto) =>
+    m.status === "sent" ? `Sent ${formatDateTime(m.sentAt, timeZone)}` : m.status === "failed" ? `Gave up after ${m.attempts} attempts` : `${m.attempts ? `${m.attempts} attempts · ` : ""}next try ${formatDateTime(m.nextAttemptAt, timeZone)}`;
+
+  let body: React.ReactNode;
+  if (mails.isPending) body = <LoadingState label="Loading outgoing mail…" testID="outbox-loading" />;
+  else if (mails.isError) body = <ErrorState error={mails.error} title="The outbox didn't load" onRetry={() => mails.refetch()} retrying={mails.isFetching} testID="outbox-error" />;
+  else if (mails.data.length === 0) body = <EmptyState icon="mail" title={show === "all" ? "No e-mail yet" : `No ${STATUS_LABELS[show as MailStatus].toLowerCase()} e-mail`} message="Invoices, receipts and invitations show here as they are sent." testID="outbox-empty" />;
+  else if (wide)
+    body = (
+      <BillingTable<OutboxMailDto>
+        testID="outbox-table"
+        rows={mails.data}
+        rowKey={(m) => m.id}
+        rowTestID={(m) => `outbox-row-${m.id}`}
+        rowAlert={(m) => m.status === "failed"}
+        columns={[
+          { key: "status", label: "Status", flex: 0.8, render: (m) => <Badge label={STATUS_LABELS[m.status]} tone={STATUS_TONE[m.status]} testID={`outbox-status-${m.id}`} /> },
+          {
+            key: "mail",
+            label: "E-mail",
+            flex: 2.4,
+            render: (m) => (
+              <View>
+                <AppText variant="bodyStrong" numberOfLines={1}>
+                  {m.subject}
+                </AppText>
+                <AppText variant="small" color={m.status === "failed" ? "ink" : "muted"} numberOfLines={1}>{`${KIND_LABELS[m.kind] ?? m.kind} · to ${m.to}`}</AppText>
+                {m.lastError ? (
+                  <AppText variant="small" color="dangerInk" numberOfLines={2} testID={`outbox-error-${m.id}`}>
+                    {`Last error: ${m.lastError}`}
+                  </AppText>
+                ) : null}
+              </View>
+            ),
+          },
+          { key: "when", label: "When", flex: 1.4, render: (m) => <AppText variant="small">{when(m)}</AppText> },
+          { key: "action", label: "", flex: 0.9, align: "right", render: (m) => resendButton(m) ?? "" },
+        ]}
+      />
+    );
+  else
+    body = (
+      <View style={billingStyles.cards} testID="outbox-list">
+        {mails.data.map((m) => (
+          <View key={m.id} style={[styles.card, m.status === "failed" && styles.failed]} testID={`outbox-row-${m.id}`}>
+            <View style={billingStyles.cardTop}>
+              <Badge label={STATUS_LABELS[m.status]} tone={STATUS_TONE[m.status]} testID={`outbox-status-${m.id}`} />
+              <AppText variant="small" color={m.status === "failed" ? "ink" : "muted"}>
+                {KIND_LABELS[m.kind] ?? m.kind}
+              </AppText>
+            </View>
+            <AppText variant="bodyStrong">{m.subject}</AppText>
+            <AppText variant="small" color={m.status === "failed" ? "ink" : "muted"}>{`To ${m.to} · ${when(m)}`}</AppText>
+            {m.lastError ? (
+              <AppText variant="small" color="dangerInk" testID={`outbox-error-${m.id}`}>
+                {`Last error: ${m.lastError}`}
+              </AppText>
+            ) : null}
+            {resendButton(m)}
+          </View>
+        ))}
+      </View>
+    );
+
+  return (
+    <Screen testID="outbox-screen">
+      <BackLink href="/office/money" label="Money" testID="back-to-money" />
+      <PageHeader overline="Money" title="Outgoing e-mail" subtitle="Every e-mail Panwise sends is kept here and retried with a growing pause until the mail server takes it." testID="outbox-title" />
+      <ChoiceGroup<Show>
+        label="Show"
+        value={show}
+        onChange={setShow}
+        testID="outbox-status"
+        choices={[{ value: "all", label: "All" }, ...MAIL_STATUSES.map((s) => ({ value: s, label: STATUS_LABELS[s] }))]}
+      />
+      {resent ? <Notice message={resent} testID="outbox-resent" /> : null}
+      <FormError message={resend.isError ? messageOf(resend.error) : null} testID="outbox-resend-error" />
+      {body}
+    </Screen>
+  );
+}
+
+const styles = StyleSheet.create({
+  card: { gap: space.xs, padding: space.lg, backgroundColor: colors.surface, borderRadius: radii.lg, borderWidth: 1, borderColor: colors.border },
+  failed: { backgroundColor: colors.dangerSoft, borderColor: colors.danger },
+});

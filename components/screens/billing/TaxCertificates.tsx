@@ -1,0 +1,204 @@
+import React, { useRef, useState } from "react";
+import { Platform, StyleSheet, View } from "react-native";
+import { Card } from "../../ui/Card";
+import { Button } from "../../ui/Button";
+import { TextField } from "../../ui/TextField";
+import { Badge, type BadgeTone } from "../../ui/Badge";
+import { FormError, Notice } from "../../ui/FormError";
+import { ProgressBar } from "../../ui/ProgressBar";
+import { ErrorState, LoadingState } from "../../ui/States";
+import { AppText } from "../../ui/Text";
+import { messageOf } from "../../api/client";
+import { downloadCertificate, useCertificatesQuery, useReviewCertificateMutation, useUploadCertificateMutation, type TaxCertificateDto } from "../../api/accountBilling";
+import { useBakeryQuery } from "../../api/bakery";
+import { cleanDate } from "../../ordering/dates";
+import { billingStyles, day } from "./parts";
+import { colors, radii, space } from "../../theme";
+
+export const CERT_MAX_BYTES = 10 * 1024 * 1024;
+const CERT_TYPES = ["application/pdf", "image/jpeg", "image/png"];
+const STATUS_LABEL: Record<TaxCertificateDto["status"], string> = { pending: "Waiting for review", approved: "Approved", rejected: "Not accepted" };
+const STATUS_TONE: Record<TaxCertificateDto["status"], BadgeTone> = { pending: "amber", approved: "sage", rejected: "danger" };
+
+/** The approved certificate in force, if any; and whether the newest approved one has run out. */
+export function exemptionState(certs: TaxCertificateDto[]): { valid: TaxCertificateDto | null; lapsed: TaxCertificateDto | null } {
+  const approved = certs.filter((c) => c.status === "approved");
+  const valid = approved.find((c) => !c.expired) ?? null;
+  const lapsed = valid ? null : approved.find((c) => c.expired) ?? null;
+  return { valid, lapsed };
+}
+
+export interface TaxCertificatesCardProps {
+  accountId: number;
+  /** Buyer (own account) and owner upload; the owner approves or rejects. */
+  canUpload: boolean;
+  canReview: boolean;
+  /** Wording for the café ("your") or the office ("this account's"). */
+  audience: "buyer" | "office";
+}
+
+/** Resale / tax-exemption certificates: what is on file, its review, the expiry warning, and uploading a new one. */
+export function TaxCertificatesCard({ accountId, canUpload, canReview, audience }: TaxCertificatesCardProps) {
+  const certs = useCertificatesQuery(accountId);
+  const review = useReviewCertificateMutation(accountId);
+  const [fileError, setFileError] = useState<string | null>(null);
+
+  let body: React.ReactNode;
+  if (certs.isPending) body = <LoadingState label="Loading certificates…" testID="certs-loading" />;
+  else if (certs.isError) body = <ErrorState error={certs.error} title="Certificates didn't load" onRetry={() => certs.refetch()} retrying={certs.isFetching} testID="certs-error" />;
+  else {
+    const { valid, lapsed } = exemptionState(certs.data);
+    body = (
+      <>
+        {valid ? (
+          <Notice message={`${audience === "buyer" ? "Your" : "This account's"} exemption is approved until ${day(valid.expiresOn)}: invoices are issued without sales tax.`} testID="cert-valid" />
+        ) : lapsed ? (
+          <FormError message={`${audience === "buyer" ? "Your" : "The"} tax-exemption certificate expired on ${day(lapsed.expiresOn)}: tax is charged again until a new one is approved.`} testID="cert-expired-warning" />
+        ) : null}
+        {certs.data.length === 0 ? (
+          <AppText color="muted" testID="certs-empty">
+            {audience === "buyer" ? "No certificate on file. If your business buys for resale or is tax-exempt, upload its certificate and the bakery will review it." : "No certificate on file: sales tax is charged on this account's invoices."}
+          </AppText>
+        ) : (
+          <View testID="certs-list">
+            {certs.data.map((c, i) => (
+              <View key={c.id} style={[styles.row, i > 0 && styles.divider]} testID={`cert-${c.id}`}>
+                <View style={billingStyles.cardTop}>
+                  <Badge label={c.expired ? "Expired" : STATUS_LABEL[c.status]} tone={c.expired ? "danger" : STATUS_TONE[c.status]} testID={`cert-${c.id}-status`} />
+                  <AppText variant="small" color="muted">{`Expires ${day(c.expiresOn)} · uploaded ${day(c.createdAt)}`}</AppText>
+                </View>
+                <View style={billingStyles.buttons}>
+                  <Button
+                    label="View file"
+                    icon="eye"
+                    small
+                    variant="ghost"
+                    onPress={() => {
+                      setFileError(null);
+                      downloadCertificate(c).catch((e: unknown) => setFileError(messageOf(e)));
+                    }}
+                    testID={`cert-${c.id}-file`}
+                  />
+                  {canReview && c.status === "pending" ? (
+                    <>
+                      <Button label="Approve" icon="check" small variant="accent" busy={review.isPending && review.variables?.id === c.id && review.variables.status === "approved"} onPress={() => review.mutate({ id: c.id, status: "approved" })} testID={`cert-${c.id}-approve`} />
+                      <Button label="Reject" icon="x" small variant="secondary" busy={review.isPending && review.variables?.id === c.id && review.variables.status === "rejected"} onPress={() => review.mutate({ id: c.id, status: "rejected" })} testID={`cert-${c.id}-reject`} />
+                    </>
+                  ) : null}
+                </View>
+              </View>
+            ))}
+          </View>
+        )}
+        <FormError message={fileError} testID="cert-file-error" />
+        <FormError message={review.isError ? messageOf(review.error) : null} testID="cert-review-error" />
+      </>
+    );
+  }
+
+  return (
+    <Card title="Tax exemption" testID="tax-certificates">
+      {body}
+      {canUpload ? <CertificateUpload accountId={accountId} /> : null}
+    </Card>
+  );
+}
+
+function CertificateUpload({ accountId }: { accountId: number }) {
+  const upload = useUploadCertificateMutation(accountId);
+  const today = useBakeryQuery().data?.today;
+  const input = useRef<HTMLInputElement | null>(null);
+  const [file, setFile] = useState<File | null>(null);
+  const [expiresOn, setExpiresOn] = useState("");
+  const [fileError, setFileError] = useState<string | null>(null);
+  const [dateError, setDateError] = useState<string | null>(null);
+  const [done, setDone] = useState(false);
+
+  const pick = (f: File | undefined) => {
+    setDone(false);
+    setFileError(null);
+    if (!f) return;
+    if (!CERT_TYPES.includes(f.type)) {
+      setFileError("Upload the certificate as a PDF, JPEG or PNG.");
+      return;
+    }
+    if (f.size > CERT_MAX_BYTES) {
+      setFileError("The certificate file is larger than 10 MB.");
+      return;
+    }
+    setFile(f);
+  };
+
+  const submit = () => {
+    setDone(false);
+    const date = cleanDate(expiresOn);
+    const dErr = !date ? "Write the expiry date as YYYY-MM-DD." : today && date < today ? "That date has passed: upload a certificate that is still current." : null;
+    const fErr = !file ? "Choose the certificate file." : null;
+    setDateError(dErr);
+    setFileError(fErr);
+    if (dErr || fErr || !file || !date) return;
+    upload.mutate(
+      { file, expiresOn: date },
+      {
+        onSuccess: () => {
+          setDone(true);
+          setFile(null);
+          setExpiresOn("");
+        },
+      },
+    );
+  };
+
+  if (Platform.OS !== "web") {
+    return (
+      <AppText variant="small" color="muted">
+        Upload certificates from the web app on a computer.
+      </AppText>
+    );
+  }
+  return (
+    <View style={styles.upload} testID="cert-upload">
+      <AppText variant="label">Upload a certificate</AppText>
+      <AppText variant="small" color="muted">
+        PDF, JPEG or PNG, up to 10 MB. The bakery reviews it; once approved, new invoices carry no sales tax until it expires.
+      </AppText>
+      {done ? <Notice message="Certificate uploaded. The bakery will review it." testID="cert-uploaded" /> : null}
+      <FormError message={upload.isError ? messageOf(upload.error) : null} testID="cert-upload-error" />
+      <input
+        ref={input}
+        type="file"
+        accept="application/pdf,image/jpeg,image/png"
+        style={{ display: "none" }}
+        data-testid="cert-input"
+        aria-label="Certificate file"
+        onChange={(e) => {
+          pick(e.currentTarget.files?.[0]);
+          e.currentTarget.value = "";
+        }}
+      />
+      <View style={billingStyles.buttons}>
+        <Button label={file ? "Choose another file" : "Choose file"} icon="paperclip" variant="secondary" onPress={() => input.current?.click()} testID="cert-choose" />
+        {file ? (
+          <AppText variant="small" testID="cert-file-name" style={styles.fileName} numberOfLines={1}>
+            {file.name}
+          </AppText>
+        ) : null}
+      </View>
+      {fileError ? (
+        <AppText variant="small" color="dangerInk" testID="cert-choose-error">
+          {fileError}
+        </AppText>
+      ) : null}
+      <TextField label="Expires on" placeholder="YYYY-MM-DD" value={expiresOn} onChangeText={setExpiresOn} error={dateError} testID="cert-expires" inputMode="numeric" maxLength={10} />
+      {upload.isPending ? <ProgressBar value={upload.progress} label="Uploading the certificate" testID="cert-progress" /> : null}
+      <Button label="Upload certificate" icon="upload" busy={upload.isPending} onPress={submit} testID="cert-submit" />
+    </View>
+  );
+}
+
+const styles = StyleSheet.create({
+  row: { gap: space.xs, paddingVertical: space.sm },
+  divider: { borderTopWidth: 1, borderTopColor: colors.border },
+  upload: { gap: space.sm, padding: space.md, borderRadius: radii.md, backgroundColor: colors.page, borderWidth: 1, borderColor: colors.border },
+  fileName: { flexShrink: 1, maxWidth: 240 },
+});

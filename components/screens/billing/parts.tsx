@@ -1,0 +1,230 @@
+import React from "react";
+import { Pressable, StyleSheet, View } from "react-native";
+import { DateTime } from "luxon";
+import { Badge, type BadgeTone } from "../../ui/Badge";
+import { AppText } from "../../ui/Text";
+import { TextLink } from "../../ui/TextLink";
+import { formatMoney } from "../../../shared/money";
+import type { InvoiceDto, InvoiceStatus, PaymentDto, CreditNoteDto } from "../../api/invoices";
+import { colors, layout, radii, space } from "../../theme";
+
+/** Money in an invoice's (or a payout's lower-case) currency. */
+export function money(cents: number, currency = "USD"): string {
+  return formatMoney(cents, currency.toUpperCase());
+}
+
+/** "2 Mar 2026" for a calendar date (no time zone involved). */
+export function day(date: string | null | undefined): string {
+  if (!date) return "—";
+  const d = DateTime.fromISO(date.slice(0, 10), { zone: "UTC" });
+  return d.isValid ? d.toFormat("d LLL yyyy") : date;
+}
+
+/** Basis points as a percentage: 875 → "8.75 %". */
+export function percent(bp: number): string {
+  const whole = Math.floor(bp / 100);
+  const frac = bp % 100;
+  return `${whole}${frac ? `.${String(frac).padStart(2, "0").replace(/0$/, "")}` : ""} %`;
+}
+
+export const INVOICE_STATUS_LABELS: Record<InvoiceStatus, string> = {
+  open: "Open",
+  paid: "Paid",
+  void: "Void",
+  partially_refunded: "Part refunded",
+  refunded: "Refunded",
+};
+
+const STATUS_TONE: Record<InvoiceStatus, BadgeTone> = { open: "amber", paid: "sage", void: "neutral", partially_refunded: "crust", refunded: "neutral" };
+
+/** The invoice's status, and "Overdue" in red when it is past its due date with money owed. */
+export function InvoiceStatusBadge({ invoice, testID }: { invoice: Pick<InvoiceDto, "status" | "overdue">; testID?: string }) {
+  if (invoice.overdue) return <Badge label="Overdue" tone="danger" testID={testID} />;
+  return <Badge label={INVOICE_STATUS_LABELS[invoice.status]} tone={STATUS_TONE[invoice.status]} testID={testID} />;
+}
+
+export const METHOD_LABELS: Record<PaymentDto["method"], string> = {
+  card: "Card",
+  bank_transfer: "Bank transfer",
+  cheque: "Cheque",
+  cash: "Cash",
+  other: "Other",
+};
+
+export const DISPOSITION_LABELS: Record<CreditNoteDto["disposition"], string> = {
+  applied: "Taken off this invoice",
+  refund: "Refunded to the card",
+  carry: "Carried to the next invoice",
+};
+
+export const KIND_LABELS: Record<InvoiceDto["kind"], string> = { order: "Invoice", statement: "Weekly statement" };
+
+export interface TableColumn<T> {
+  key: string;
+  label: string;
+  /** Share of the row's width (default 1). */
+  flex?: number;
+  align?: "left" | "right";
+  render: (row: T) => React.ReactNode;
+  /** What the totals row shows in this column. */
+  footer?: React.ReactNode;
+}
+
+export interface BillingTableProps<T> {
+  columns: TableColumn<T>[];
+  rows: T[];
+  rowKey: (row: T) => string | number;
+  onRowPress?: (row: T) => void;
+  rowLabel?: (row: T) => string;
+  rowTestID?: (row: T) => string;
+  /** A row that needs attention gets a red tint. */
+  rowAlert?: (row: T) => boolean;
+  /** Show a totals row from the columns' `footer`. */
+  footer?: boolean;
+  footerTestID?: string;
+  testID?: string;
+}
+
+function cell(content: React.ReactNode, align: "left" | "right" | undefined, strong?: boolean) {
+  if (typeof content === "string" || typeof content === "number") {
+    return (
+      <AppText variant={strong ? "bodyStrong" : "body"} align={align === "right" ? "right" : undefined} numberOfLines={2}>
+        {String(content)}
+      </AppText>
+    );
+  }
+  return content;
+}
+
+/** A wide-screen table with right-aligned money, rows that open their item and an optional totals row. */
+export function BillingTable<T>({ columns, rows, rowKey, onRowPress, rowLabel, rowTestID, rowAlert, footer, footerTestID, testID }: BillingTableProps<T>) {
+  return (
+    <View style={styles.table} testID={testID} role="table">
+      <View style={[styles.row, styles.header]} role="row">
+        {columns.map((c) => (
+          <View key={c.key} style={[styles.cell, { flex: c.flex ?? 1 }, c.align === "right" && styles.right]} role="columnheader">
+            <AppText variant="overline" color="muted" align={c.align === "right" ? "right" : undefined}>
+              {c.label}
+            </AppText>
+          </View>
+        ))}
+      </View>
+      {rows.map((row) => {
+        const cells = columns.map((c) => (
+          <View key={c.key} style={[styles.cell, { flex: c.flex ?? 1 }, c.align === "right" && styles.right]} role="cell">
+            {cell(c.render(row), c.align)}
+          </View>
+        ));
+        const alert = rowAlert?.(row);
+        if (onRowPress) {
+          return (
+            <Pressable
+              key={rowKey(row)}
+              onPress={() => onRowPress(row)}
+              accessibilityRole="button"
+              accessibilityLabel={rowLabel?.(row)}
+              testID={rowTestID?.(row)}
+              style={({ pressed, hovered }: { pressed: boolean; hovered?: boolean }) => [styles.row, styles.divider, alert && styles.alert, (pressed || hovered) && styles.hover]}
+            >
+              {cells}
+            </Pressable>
+          );
+        }
+        return (
+          <View key={rowKey(row)} style={[styles.row, styles.divider, alert && styles.alert]} testID={rowTestID?.(row)} role="row">
+            {cells}
+          </View>
+        );
+      })}
+      {footer ? (
+        <View style={[styles.row, styles.footer]} role="row" testID={footerTestID}>
+          {columns.map((c) => (
+            <View key={c.key} style={[styles.cell, { flex: c.flex ?? 1 }, c.align === "right" && styles.right]} role="cell">
+              {cell(c.footer ?? "", c.align, true)}
+            </View>
+          ))}
+        </View>
+      ) : null}
+    </View>
+  );
+}
+
+/** "‹ All invoices" and the like, above a detail page's title. */
+export function BackLink({ href, label, testID }: { href: string; label: string; testID?: string }) {
+  return <TextLink href={href as never} label={`‹ ${label}`} testID={testID} />;
+}
+
+/** A label and an amount on one line (invoice totals). */
+export function SumLine({ label, value, strong, testID, tone }: { label: string; value: string; strong?: boolean; testID?: string; tone?: "danger" | "sage" }) {
+  const color = tone === "danger" ? "dangerInk" : tone === "sage" ? "sageInk" : "ink";
+  return (
+    <View style={[styles.sum, strong && styles.sumStrong]} testID={testID}>
+      <AppText variant={strong ? "bodyStrong" : "body"} color={strong ? color : "muted"} style={styles.sumLabel}>
+        {label}
+      </AppText>
+      <AppText variant={strong ? "bodyStrong" : "body"} color={color} align="right">
+        {value}
+      </AppText>
+    </View>
+  );
+}
+
+/** A tile with a big figure (payout sums, invoice totals on a phone). */
+export function Figure({ label, value, testID, tone }: { label: string; value: string; testID?: string; tone?: "danger" }) {
+  return (
+    <View style={[styles.figure, tone === "danger" && styles.figureDanger]} testID={testID} accessible accessibilityLabel={`${label}: ${value}`}>
+      <AppText variant="caption" color={tone === "danger" ? "dangerInk" : "muted"}>
+        {label}
+      </AppText>
+      <AppText variant="heading" color={tone === "danger" ? "dangerInk" : "ink"}>
+        {value}
+      </AppText>
+    </View>
+  );
+}
+
+export const billingStyles = StyleSheet.create({
+  cards: { gap: space.sm },
+  card: {
+    minHeight: layout.minTouch,
+    flexDirection: "row",
+    alignItems: "center",
+    gap: space.md,
+    padding: space.lg,
+    backgroundColor: colors.surface,
+    borderRadius: radii.lg,
+    borderWidth: 1,
+    borderColor: colors.border,
+  },
+  cardAlert: { borderColor: colors.danger, backgroundColor: colors.dangerSoft },
+  cardHover: { backgroundColor: colors.rowHover },
+  cardText: { flex: 1, gap: space.xxs },
+  cardTop: { flexDirection: "row", alignItems: "center", gap: space.sm, flexWrap: "wrap" },
+  grow: { flexGrow: 1, flexShrink: 1 },
+  figures: { flexDirection: "row", flexWrap: "wrap", gap: space.sm },
+  buttons: { flexDirection: "row", flexWrap: "wrap", gap: space.sm, alignItems: "center" },
+  filters: { gap: space.md },
+  filtersWide: { flexDirection: "row", flexWrap: "wrap", alignItems: "flex-end", gap: space.lg },
+  grid: { gap: space.lg },
+  gridWide: { flexDirection: "row", alignItems: "flex-start" },
+  col: { gap: space.lg },
+  mainCol: { flex: 2, minWidth: 0 },
+  sideCol: { flex: 1, minWidth: 0 },
+});
+
+const styles = StyleSheet.create({
+  table: { backgroundColor: colors.surface, borderRadius: radii.lg, borderWidth: 1, borderColor: colors.border, overflow: "hidden" },
+  row: { flexDirection: "row", alignItems: "center", minHeight: layout.minTouch + 8, paddingHorizontal: space.md },
+  header: { backgroundColor: colors.sunken, minHeight: layout.minTouch },
+  divider: { borderTopWidth: 1, borderTopColor: colors.border },
+  hover: { backgroundColor: colors.rowHover },
+  alert: { backgroundColor: colors.dangerSoft },
+  footer: { borderTopWidth: 2, borderTopColor: colors.inputBorder, backgroundColor: colors.sunken },
+  cell: { paddingHorizontal: space.sm, paddingVertical: space.sm, justifyContent: "center", minWidth: 0 },
+  right: { alignItems: "flex-end" },
+  sum: { flexDirection: "row", alignItems: "baseline", justifyContent: "space-between", gap: space.md, paddingVertical: space.xxs },
+  sumStrong: { borderTopWidth: 1, borderTopColor: colors.border, paddingTop: space.sm, marginTop: space.xs },
+  sumLabel: { flexShrink: 1 },
+  figure: { flexGrow: 1, flexBasis: 130, minWidth: 0, backgroundColor: colors.sunken, borderRadius: radii.md, padding: space.md, gap: space.xxs },
+  figureDanger: { backgroundColor: colors.dangerSoft },
+});

@@ -1,0 +1,336 @@
+import React, { useEffect, useRef, useState } from "react";
+import { StyleSheet, View } from "react-native";
+import { useRouter } from "expo-router";
+import { Screen } from "../../ui/Screen";
+import { PageHeader } from "../../ui/PageHeader";
+import { EmptyState, ErrorState, LoadingState } from "../../ui/States";
+import { LinkButton } from "../../ui/LinkButton";
+import { TextLink } from "../../ui/TextLink";
+import { FormError } from "../../ui/FormError";
+import { Heading } from "../../ui/Text";
+import { useSignedInUser } from "../../auth/useAuth";
+import { useBakeryQuery } from "../../api/bakery";
+import { useCalendarSettingsQuery } from "../../api/calendar";
+import {
+  mixKey,
+  useNextBakeDayQuery,
+  usePlanQuery,
+  useProgressMutation,
+  useRecalculatePlanMutation,
+  useSaveBakeDayMutation,
+  type BakeDayInput,
+  type PlanView,
+} from "../../api/production";
+import { messageOf } from "../../api/client";
+import { cleanDate, formatDay } from "../../ordering/dates";
+import { parseQuantity } from "../../ordering/quantities";
+import { useServerNow } from "../../ordering/useServerNow";
+import { progressCount, stepBakeDay, upcomingBakeDays } from "../../production/plan";
+import { kitchenPaths, type KitchenArea, type KitchenPaths } from "../../production/paths";
+import { useUnits, type Units } from "../../production/units";
+import { useIsWide } from "../../shell/useIsWide";
+import { CautionsCard } from "./Cautions";
+import { MixCard } from "./MixCard";
+import { Timeline } from "./Timeline";
+import { DateBar, PansCard, PdfButtons, SettingsFooter, StatusCard, TemperaturesCard, TotalsCard, UnitsSwitch, WarningsCard } from "./BakeDayParts";
+import { WEEKDAY_LONG, weekdayOf } from "../../../shared/calendar";
+import { space } from "../../theme";
+
+export interface BakeDayScreenProps {
+  area: KitchenArea;
+  /** YYYY-MM-DD from the address (?date=); the next bake day when absent. */
+  date?: string;
+  /** The baker's home (/bake): its title carries the home's testID. */
+  home?: boolean;
+}
+
+/**
+ * The bake day: what to bake (pans), what to weigh (one card per mix, paste and final mix apart),
+ * when (the timeline back from dispatch), with the day's progress ticked off as it goes.
+ */
+export function BakeDayScreen({ area, date: asked, home }: BakeDayScreenProps) {
+  const router = useRouter();
+  const paths = kitchenPaths(area);
+  const bakery = useBakeryQuery();
+  const calendar = useCalendarSettingsQuery();
+  const askedDate = asked ? cleanDate(asked) : null;
+  const nextDay = useNextBakeDayQuery();
+  const date = askedDate ?? nextDay.data ?? null;
+  const plan = usePlanQuery(date);
+  const units = useUnits();
+  const today = bakery.data?.today;
+
+  const go = (d: string) => router.setParams({ date: d });
+  const settings = calendar.data ?? null;
+
+  let body: React.ReactNode;
+  if (!date) {
+    body = nextDay.isError ? (
+      <ErrorState error={nextDay.error} title="The next bake day didn't load" onRetry={() => nextDay.refetch()} retrying={nextDay.isFetching} testID="bake-day-error" />
+    ) : (
+      <LoadingState label="Finding the next bake day…" testID="bake-day-loading" />
+    );
+  } else if (plan.isPending) {
+    body = <LoadingState label="Working out the plan…" testID="bake-day-loading" />;
+  } else if (plan.isError) {
+    body = <ErrorState error={plan.error} title="The plan didn't load" onRetry={() => plan.refetch()} retrying={plan.isFetching} testID="bake-day-error" />;
+  } else {
+    body = <PlanBody key={date} date={date} plan={plan.data} units={units} paths={paths} />;
+  }
+
+  return (
+    <Screen testID="bake-day">
+      {paths.hub ? <TextLink href={paths.hub as never} label="‹ Production" testID="back-to-production" /> : null}
+      <PageHeader
+        overline={bakery.data?.name ?? "Production"}
+        title="Bake day"
+        testID={home ? "baker-home-title" : "bake-day-title"}
+      />
+      {date ? (
+        <View style={styles.controls}>
+          <DateBar
+            date={date}
+            today={today}
+            prev={stepBakeDay(date, -1, settings)}
+            next={stepBakeDay(date, 1, settings)}
+            nextBakeDay={nextDay.data}
+            upcoming={upcomingBakeDays(nextDay.data ?? today ?? date, 7, settings)}
+            onChange={go}
+            extra={<UnitsSwitch system={units.system} onChange={units.setSystem} />}
+          />
+        </View>
+      ) : null}
+      {body}
+    </Screen>
+  );
+}
+
+interface PlanBodyProps {
+  date: string;
+  plan: PlanView;
+  units: Units;
+  paths: KitchenPaths;
+}
+
+function PlanBody({ date, plan, units, paths }: PlanBodyProps) {
+  const wide = useIsWide();
+  const calendar = useCalendarSettingsQuery().data;
+  const user = useSignedInUser();
+  const bakery = useBakeryQuery();
+  const now = useServerNow(30_000);
+  const recalc = useRecalculatePlanMutation(date);
+  const save = useSaveBakeDayMutation(date);
+  const progressMutation = useProgressMutation(date);
+  const [lastChanges, setLastChanges] = useState<{ what: string; changes: string[] } | null>(null);
+  const [extras, setExtras] = useState<Record<string, string>>(() => Object.fromEntries(plan.products.map((p) => [String(p.productId), String(p.extraPans)])));
+  // A failed save, and whether it carried new temperatures (shown on that card) or extra pans.
+  const [saveError, setSaveError] = useState<{ error: unknown; temps: boolean } | null>(null);
+  const [tempsSaved, setTempsSaved] = useState(false);
+  const [savingTemps, setSavingTemps] = useState(false);
+  const [progressError, setProgressError] = useState<string | null>(null);
+
+  // Saves go one at a time; changes made while one is on its way are sent (latest only) when it lands.
+  const inFlight = useRef(false);
+  const queued = useRef<{ input: BakeDayInput; temps: boolean } | null>(null);
+  const send = (input: BakeDayInput, temps: boolean) => {
+    if (inFlight.current) {
+      queued.current = { input, temps: temps || !!queued.current?.temps };
+      return;
+    }
+    inFlight.current = true;
+    setSaveError(null);
+    if (temps) setSavingTemps(true);
+    save.mutate(input, {
+      onSuccess: (p) => {
+        if (temps) setTempsSaved(true);
+        if (p.changes.length) setLastChanges({ what: "Plan recalculated with your inputs.", changes: p.changes });
+      },
+      onError: (error) => setSaveError({ error, temps }),
+      onSettled: () => {
+        inFlight.current = false;
+        if (temps) setSavingTemps(false);
+        const next = queued.current;
+        queued.current = null;
+        if (next) send(next.input, next.temps);
+      },
+    });
+  };
+
+  const extrasBody = (source: Record<string, string>): Record<string, number> | null => {
+    const out: Record<string, number> = {};
+    for (const [id, text] of Object.entries(source)) {
+      const n = parseQuantity(text);
+      if (Number.isNaN(n) || n < 0 || n > 100) return null;
+      out[id] = n;
+    }
+    return out;
+  };
+
+  // A plan that arrives from elsewhere (a refetch, another device) brings its extra pans, unless a save of ours is on its way.
+  const planExtras = plan.products.map((p) => `${p.productId}:${p.extraPans}`).join(",");
+  useEffect(() => {
+    if (inFlight.current || queued.current) return;
+    setExtras((current) => {
+      const fresh = Object.fromEntries(plan.products.map((p) => [String(p.productId), String(p.extraPans)]));
+      const same = Object.keys(fresh).every((k) => parseQuantity(current[k] ?? "") === Number(fresh[k]));
+      return same ? current : fresh;
+    });
+  }, [planExtras]);
+
+  const onExtra = (productId: number, text: string) => {
+    const nextExtras = { ...extras, [String(productId)]: text };
+    setExtras(nextExtras);
+    setTempsSaved(false);
+    const body = extrasBody(nextExtras);
+    if (!body) return;
+    send({ extraPans: body, roomC: plan.inputs.roomC, flourC: plan.inputs.flourC, pasteC: plan.inputs.pasteC }, false);
+  };
+
+  const onTemps = (t: { roomC: number; flourC: number; pasteC: number }) => {
+    setTempsSaved(false);
+    const body = extrasBody(extras) ?? Object.fromEntries(plan.products.map((p) => [String(p.productId), p.extraPans]));
+    send({ extraPans: body, ...t }, true);
+  };
+
+  const onRecalculate = () => {
+    setLastChanges(null);
+    recalc.mutate(undefined, {
+      onSuccess: (p) => {
+        setLastChanges({ what: "Plan recalculated.", changes: p.changes });
+        setExtras(Object.fromEntries(p.products.map((x) => [String(x.productId), String(x.extraPans)])));
+      },
+    });
+  };
+
+  const busyKey = progressMutation.isPending ? progressMutation.variables : undefined;
+  const tick = (kind: "mix" | "wave", key: string, done: boolean) => {
+    setProgressError(null);
+    progressMutation.mutate({ kind, key, done }, { onError: (err) => setProgressError(messageOf(err)) });
+  };
+
+  const progress = progressCount(plan);
+  const pansError = saveError && !saveError.temps ? messageOf(saveError.error) : null;
+
+  if (plan.products.length === 0) {
+    const closure = calendar?.closures.find((c) => c.date === date);
+    const why = closure
+      ? `The bakery is closed on ${formatDay(date)}${closure.note ? ` (${closure.note})` : ""}.`
+      : calendar && !calendar.deliveryWeekdays.includes(weekdayOf(date))
+        ? `${WEEKDAY_LONG[weekdayOf(date)]} is not a delivery day.`
+        : "No orders for this day yet. Pans, weigh-out cards and the timeline show here as orders come in.";
+    return (
+      <>
+        <StatusCard plan={plan} timeZone={bakery.data?.timeZone} now={now} progress={progress} recalculating={recalc.isPending} recalcError={recalc.error} onRecalculate={onRecalculate} lastChanges={lastChanges} bannerOnly />
+        <EmptyState
+          icon="sun"
+          title={`Nothing to bake for ${formatDay(date)}`}
+          message={why}
+          action={<LinkButton href={paths.orders(date) as never} label="Orders for this day" icon="clipboard" variant="secondary" />}
+          testID="bake-day-empty"
+        />
+        <SettingsFooter units={units} paths={paths} isOwner={user.role === "owner"} />
+      </>
+    );
+  }
+
+  const status = <StatusCard plan={plan} timeZone={bakery.data?.timeZone} now={now} progress={progress} recalculating={recalc.isPending} recalcError={recalc.error} onRecalculate={onRecalculate} lastChanges={lastChanges} />;
+  const temps = (
+    <TemperaturesCard
+      key={`${units.system}-${plan.inputs.roomC}-${plan.inputs.flourC}-${plan.inputs.pasteC}`}
+      plan={plan}
+      units={units}
+      busy={savingTemps}
+      serverError={saveError?.temps ? saveError.error : null}
+      onSave={onTemps}
+      saved={tempsSaved}
+    />
+  );
+  const mixes = plan.doughs.flatMap((d) =>
+    d.mixes.map((m) => {
+      const key = mixKey(d.formulaId, m.index);
+      return (
+        <View key={key} style={wide ? styles.mixWide : undefined}>
+          <MixCard
+            dough={d}
+            mix={m}
+            units={units}
+            done={plan.progress.mixes.includes(key)}
+            busy={busyKey?.kind === "mix" && busyKey.key === key}
+            onDone={(done) => tick("mix", key, done)}
+          />
+        </View>
+      );
+    }),
+  );
+
+  return (
+    <>
+      {wide ? (
+        <View style={[styles.row, styles.rowWide]}>
+          <View style={styles.col2}>{status}</View>
+          <View style={styles.col1}>
+            <PdfButtons date={date} />
+          </View>
+        </View>
+      ) : (
+        status
+      )}
+      <WarningsCard warnings={plan.warnings} />
+      <PansCard plan={plan} extras={extras} onExtra={onExtra} wide={wide} saving={save.isPending && !savingTemps} error={pansError} formulasHref={paths.formulas} />
+      {temps}
+      {wide ? null : <PdfButtons date={date} />}
+
+      <View style={styles.section}>
+        <Heading level={2} testID="mixes-title">
+          Weigh-out cards
+        </Heading>
+        <FormError message={progressError} testID="progress-error" />
+        {mixes.length ? (
+          <View style={[styles.mixes, wide && styles.mixesWide]} testID="mixes">
+            {mixes}
+          </View>
+        ) : (
+          <EmptyState icon="box" title="No doughs to mix" message="The ordered products have no formula yet." testID="mixes-empty" />
+        )}
+      </View>
+
+      <Timeline
+        plan={plan}
+        units={units}
+        now={now}
+        wide={wide}
+        bakedWaves={plan.progress.waves}
+        busyWave={busyKey?.kind === "wave" ? Number(busyKey.key) : null}
+        onBaked={(wave, baked) => tick("wave", String(wave), baked)}
+      />
+
+      <View style={[styles.row, wide && styles.rowWide]}>
+        <View style={wide ? styles.col1 : undefined}>
+          <TotalsCard plan={plan} units={units} />
+        </View>
+        <View style={wide ? styles.col1 : undefined}>
+          <CautionsCard />
+        </View>
+      </View>
+      <SettingsFooter units={units} paths={paths} isOwner={user.role === "owner"} />
+      <View style={styles.links}>
+        <TextLink href={paths.orders(date) as never} label="Orders for this day" testID="open-day-orders" />
+        <TextLink href={paths.forecast() as never} label="Purchasing forecast" testID="open-forecast" />
+        <TextLink href={paths.formulas as never} label="Formulas" testID="open-formulas" />
+      </View>
+    </>
+  );
+}
+
+const styles = StyleSheet.create({
+  controls: { maxWidth: 720 },
+  row: { gap: space.lg },
+  rowWide: { flexDirection: "row", alignItems: "flex-start" },
+  col1: { flex: 1, minWidth: 0 },
+  col2: { flex: 2, minWidth: 0 },
+  section: { gap: space.md },
+  mixes: { gap: space.lg },
+  mixesWide: { flexDirection: "row", flexWrap: "wrap", alignItems: "flex-start" },
+  mixWide: { flexGrow: 1, flexBasis: 440, maxWidth: "100%" },
+  links: { flexDirection: "row", flexWrap: "wrap", gap: space.lg },
+});

@@ -1,0 +1,307 @@
+import { Dimensions } from "react-native";
+import { act, fireEvent, screen, waitFor, within } from "expo-router/testing-library";
+import { BAKER, OWNER, SETTINGS, apiError, mockApi, renderApp, sessionRoutes, signedInAs, type FakeRequest, type Route } from "./helpers";
+import { PRODUCTION_SETTINGS, planView } from "./production-fixtures";
+import { setUnitSystem } from "../../components/production/units";
+import { formatMass, formatTemperature } from "../../shared/units";
+import type { PlanView } from "../../components/api/production";
+
+const original = Dimensions.get("window");
+function setWidth(width: number) {
+  const size = { width, height: 800, scale: 1, fontScale: 1 };
+  Dimensions.set({ window: size, screen: size });
+}
+afterEach(() => Dimensions.set({ window: original, screen: original }));
+beforeEach(() => setUnitSystem("metric"));
+
+function routes(plan: PlanView = planView(), extra: Record<string, Route> = {}): Record<string, Route> {
+  let progress = plan.progress;
+  return {
+    ...sessionRoutes(BAKER),
+    "GET /api/settings/calendar": { body: { settings: SETTINGS } },
+    "GET /api/production/next-day": { body: { date: "2025-12-03" } },
+    "GET /api/production/settings": { body: { settings: PRODUCTION_SETTINGS } },
+    "GET /api/production/plan": (req: FakeRequest) => ({ body: { plan: { ...plan, date: req.query.date, progress } } }),
+    "POST /api/production/bake-days/:date/progress": (req: FakeRequest) => {
+      const b = req.body as { kind: "mix" | "wave"; key: string; done: boolean };
+      if (b.kind === "mix") progress = { ...progress, mixes: b.done ? [...progress.mixes, b.key] : progress.mixes.filter((k) => k !== b.key) };
+      else progress = { ...progress, waves: b.done ? [...progress.waves, Number(b.key)] : progress.waves.filter((w) => w !== Number(b.key)) };
+      return { body: { progress } };
+    },
+    ...extra,
+  };
+}
+
+describe("bake day", () => {
+  beforeEach(() => signedInAs(BAKER));
+
+  it("is the baker's home: the next bake day with big pan counts, the not-final banner and the day's progress", async () => {
+    const api = mockApi(routes());
+    renderApp("/bake");
+    expect(await screen.findByTestId("pans-101-count")).toHaveTextContent("7");
+    expect(screen.getByTestId("baker-home-title")).toHaveTextContent("Bake day");
+    expect(api.callsTo("GET", "/api/production/plan")[0].query.date).toBe("2025-12-03");
+    expect(screen.getByTestId("day-date")).toHaveTextContent("Wed 3 Dec");
+    const tile = screen.getByTestId("pans-101");
+    expect(tile).toHaveTextContent(/Milk-bread dinner rolls/);
+    expect(tile).toHaveTextContent(/9×13 in pan/);
+    expect(tile).toHaveTextContent(/7 ordered · 105 pieces of 67 g/);
+    expect(tile).toHaveTextContent(/3 still open/);
+    expect(screen.getByLabelText("7 pans of Milk-bread dinner rolls")).toBeOnTheScreen();
+    expect(screen.getByTestId("pans-102-count")).toHaveTextContent("2");
+    expect(screen.getByTestId("pans-total")).toHaveTextContent("9 pans in all");
+    expect(screen.getByTestId("plan-status-text")).toHaveTextContent("Not final — orders can change until the cut-off at Tue 2 Dec, 14:00 CST.");
+    expect(screen.getByTestId("plan-progress-text")).toHaveTextContent("0 of 3 mixes done, 0 of 2 waves baked");
+    expect(screen.getByTestId("plan-warnings")).toHaveTextContent(/Milk bread, mix 2: liquid at 1\.5 °C/);
+    expect(await screen.findByTestId("setting-ovens")).toHaveTextContent("1 oven, 6 pans per load (6 pans a wave)");
+    expect(screen.getByTestId("tab-bake")).toBeOnTheScreen();
+  });
+
+  it("says when the plan is final and when it was frozen", async () => {
+    mockApi(routes(planView({ final: true, frozen: true, frozenAt: "2025-12-02T20:00:05.000Z" })));
+    renderApp("/bake");
+    expect(await screen.findByTestId("plan-status-text")).toHaveTextContent("Final — orders are locked for this day.");
+    expect(screen.getByTestId("plan-frozen-at")).toHaveTextContent("Frozen at Tue 2 Dec, 14:00 CST.");
+  });
+
+  it("keeps the paste apart from the final mix on each weigh-out card, with the liquid temperature", async () => {
+    mockApi(routes());
+    renderApp("/bake");
+    const paste = await screen.findByTestId("mix-1-1-paste");
+    expect(paste).toHaveTextContent(/Cook to 65 °C, then cool/);
+    expect(within(paste).getByTestId("mix-1-1-paste-1")).toHaveTextContent("Bread flour95 g");
+    expect(within(paste).getByTestId("mix-1-1-paste-2")).toHaveTextContent("Whole milk475 g");
+    expect(within(paste).getByTestId("mix-1-1-paste-caution")).toHaveTextContent(/Hot paste/);
+    const final = screen.getByTestId("mix-1-1-final");
+    expect(within(final).getByTestId("mix-1-1-final-paste")).toHaveTextContent("Cooled paste (all of it)570 g");
+    expect(within(final).getByTestId("mix-1-1-final-1")).toHaveTextContent("Bread flour1,805 g");
+    expect(within(final).getByTestId("mix-1-1-final-2")).toHaveTextContent("Whole milk1,000 g");
+    expect(within(final).getByTestId("mix-1-1-final-7")).toHaveTextContent("Fine sea salt34.2 g");
+    expect(within(final).getByTestId("mix-1-1-mix-caution")).toHaveTextContent(/Mixer guards/);
+    expect(screen.getByTestId("mix-1-1-dough")).toHaveTextContent("3,800 g");
+    expect(screen.getByTestId("mix-1-1-liquid")).toHaveTextContent("26 °C");
+    expect(screen.getByTestId("mix-1-1")).toHaveTextContent(/Mix 1 of 2/);
+    // Mix 2 needs colder liquid than water can be: the advice is on its card.
+    expect(screen.getByTestId("mix-1-2-liquid")).toHaveTextContent("1.5 °C");
+    expect(screen.getByTestId("mix-1-2-advice")).toHaveTextContent(/crushed ice/);
+    expect(screen.queryByTestId("mix-1-1-advice")).toBeNull();
+    // Brioche has no paste: only the final mix.
+    expect(screen.queryByTestId("mix-3-1-paste")).toBeNull();
+    expect(screen.getByTestId("mix-3-1-final-5")).toHaveTextContent("Whole egg629 g");
+    expect(screen.getByTestId("mix-3-1-liquid")).toHaveTextContent("16 °C");
+  });
+
+  it("lists the timeline by wave with start–end times and the cautions beside their steps", async () => {
+    mockApi(routes());
+    renderApp("/bake");
+    const wave1 = await screen.findByTestId("wave-1");
+    expect(wave1).toHaveTextContent(/Wave 1 · Milk bread · 6 pans/);
+    expect(within(wave1).getByTestId("step-1-paste")).toHaveTextContent(/01:00–01:40.*Cook and cool the paste.*Hot paste/);
+    expect(within(wave1).getByTestId("step-1-mix")).toHaveTextContent(/01:40–01:55.*Mix.*Mixer guards/);
+    expect(within(wave1).getByTestId("step-1-divide")).toHaveTextContent(/Allergen separation/);
+    expect(within(wave1).getByTestId("step-1-bake")).toHaveTextContent(/04:50–05:17.*Bake · oven 177 °C.*Hot ovens and pans/);
+    expect(within(wave1).getByTestId("step-1-cool")).toHaveTextContent(/Cooling and storage of dairy-rich dough/);
+    expect(screen.getByTestId("wave-2")).toHaveTextContent(/Wave 2 · Brioche · 2 pans.*Brioche burger buns/);
+    expect(screen.getByTestId("timeline-dispatch")).toHaveTextContent("Dispatch 06:30");
+    expect(screen.getByTestId("caution-footnote")).toHaveTextContent(/Reminders only/);
+  });
+
+  it("draws the timeline as bars on one time scale from 1024 px", async () => {
+    setWidth(1280);
+    mockApi(routes());
+    renderApp("/bake");
+    expect(await screen.findByTestId("timeline-chart")).toBeOnTheScreen();
+    expect(screen.getByTestId("step-2-bake")).toHaveTextContent(/05:44–06:00.*Bake · oven 190 °C/);
+    expect(screen.getByLabelText("Wave 1: Mix from 01:40 to 01:55")).toBeOnTheScreen();
+    expect(screen.getByTestId("app-shell-wide")).toBeOnTheScreen();
+  });
+
+  it("marks the step under way by the bakery's clock", async () => {
+    // The fake bakery's clock reads Tue 2 Dec, 05:30 CST.
+    const today = planView().timeline.map((e) => ({ ...e, startsAt: e.startsAt.replace("2025-12-03", "2025-12-02"), endsAt: e.endsAt.replace("2025-12-03", "2025-12-02") }));
+    mockApi(routes(planView({ date: "2025-12-02", timeline: today })));
+    renderApp("/bake/day?date=2025-12-02");
+    const now = await screen.findByTestId("timeline-now");
+    expect(within(screen.getByTestId("step-1-cool")).getByTestId("timeline-now")).toBe(now);
+    expect(screen.getAllByTestId("timeline-now")).toHaveLength(1);
+  });
+
+  it("switches to pounds, ounces and °F (NIST factors) and back", async () => {
+    mockApi(routes());
+    renderApp("/bake");
+    await screen.findByTestId("mix-1-1-final-2");
+    fireEvent.press(screen.getByTestId("units-us"));
+    // 1000 g = 2 lb 3.27 oz (1 lb = 453.592 37 g); 26 °C = 78.8 °F, shown as 79 °F.
+    expect(formatMass(1000, "us")).toBe("2 lb 3.27 oz");
+    expect(formatTemperature(26, "us")).toBe("79 °F");
+    expect(screen.getByTestId("mix-1-1-final-2")).toHaveTextContent("Whole milk2 lb 3.27 oz");
+    expect(screen.getByTestId("mix-1-1-liquid")).toHaveTextContent("79 °F");
+    expect(screen.getByTestId("mix-1-1-paste")).toHaveTextContent(/Cook to 149 °F/);
+    expect(screen.getByTestId("step-1-bake")).toHaveTextContent(/oven 351 °F/);
+    expect(screen.getByLabelText("Room (°F)")).toHaveDisplayValue("72");
+    fireEvent.press(screen.getByTestId("units-metric"));
+    expect(screen.getByTestId("mix-1-1-final-2")).toHaveTextContent("Whole milk1,000 g");
+    expect(screen.getByTestId("mix-1-1-liquid")).toHaveTextContent("26 °C");
+  });
+
+  it("ticks a mix weighed and mixed, and a wave baked, with the right progress bodies", async () => {
+    const api = mockApi(routes());
+    renderApp("/bake");
+    fireEvent.press(await screen.findByTestId("mix-1-1-done"));
+    await waitFor(() => expect(api.callsTo("POST", "/api/production/bake-days/2025-12-03/progress")).toHaveLength(1));
+    expect(api.callsTo("POST", "/api/production/bake-days/2025-12-03/progress")[0].body).toEqual({ kind: "mix", key: "1:1", done: true });
+    expect(await screen.findByTestId("mix-1-1-done-badge")).toHaveTextContent("Mixed");
+    await waitFor(() => expect(screen.getByTestId("plan-progress-text")).toHaveTextContent("1 of 3 mixes done, 0 of 2 waves baked"));
+    expect(screen.getByTestId("mix-1-1-done")).toBeChecked();
+
+    fireEvent.press(screen.getByTestId("wave-1-baked"));
+    await waitFor(() => expect(api.callsTo("POST", "/api/production/bake-days/2025-12-03/progress")).toHaveLength(2));
+    expect(api.callsTo("POST", "/api/production/bake-days/2025-12-03/progress")[1].body).toEqual({ kind: "wave", key: "1", done: true });
+    await waitFor(() => expect(screen.getByTestId("plan-progress-text")).toHaveTextContent("1 of 3 mixes done, 1 of 2 waves baked"));
+
+    // And off again.
+    fireEvent.press(screen.getByTestId("mix-1-1-done"));
+    await waitFor(() => expect(api.callsTo("POST", "/api/production/bake-days/2025-12-03/progress")).toHaveLength(3));
+    expect(api.callsTo("POST", "/api/production/bake-days/2025-12-03/progress")[2].body).toEqual({ kind: "mix", key: "1:1", done: false });
+  });
+
+  it("saves extra pans through PUT bake-days with the day's temperatures", async () => {
+    const saved = planView({ products: planView().products.map((p) => (p.productId === 101 ? { ...p, extraPans: 1, pans: 8 } : p)) });
+    const api = mockApi(routes(planView(), { "PUT /api/production/bake-days/:date": { body: { plan: saved } } }));
+    renderApp("/bake");
+    fireEvent.press(await screen.findByTestId("extra-101-inc"));
+    await waitFor(() => expect(api.callsTo("PUT", "/api/production/bake-days/2025-12-03")).toHaveLength(1));
+    expect(api.callsTo("PUT", "/api/production/bake-days/2025-12-03")[0].body).toEqual({ extraPans: { "101": 1, "102": 0 }, roomC: 22, flourC: 20, pasteC: 30 });
+    await waitFor(() => expect(screen.getByTestId("pans-101-count")).toHaveTextContent("8"));
+    expect(screen.getByTestId("pans-101-units")).toHaveTextContent(/^7 ordered \+ 1 extra pan · 105 pieces/);
+    expect(screen.getByTestId("extra-101")).toHaveDisplayValue("1");
+  });
+
+  it("takes the temperatures in °F when the US units are on, and saves them in °C", async () => {
+    const api = mockApi(routes(planView(), { "PUT /api/production/bake-days/:date": (req: FakeRequest) => ({ body: { plan: planView({ inputs: { ...planView().inputs, ...(req.body as object) } }) } }) }));
+    renderApp("/bake");
+    await screen.findByTestId("temp-room");
+    fireEvent.press(screen.getByTestId("units-us"));
+    fireEvent.changeText(screen.getByTestId("temp-room"), "200");
+    fireEvent.press(screen.getByTestId("temps-save"));
+    expect(screen.getByTestId("temp-room-error")).toHaveTextContent("Enter 14 °F to 122 °F.");
+    expect(api.callsTo("PUT", "/api/production/bake-days/2025-12-03")).toHaveLength(0);
+    fireEvent.changeText(screen.getByTestId("temp-room"), "75");
+    fireEvent.press(screen.getByTestId("temps-save"));
+    await waitFor(() => expect(api.callsTo("PUT", "/api/production/bake-days/2025-12-03")).toHaveLength(1));
+    // 75 °F = 23.9 °C; 68 °F = 20 °C; 86 °F = 30 °C.
+    expect(api.callsTo("PUT", "/api/production/bake-days/2025-12-03")[0].body).toEqual({ extraPans: { "101": 0, "102": 0 }, roomC: 23.9, flourC: 20, pasteC: 30 });
+    expect(await screen.findByTestId("temps-saved")).toBeOnTheScreen();
+  });
+
+  it("shows the server's message next to a temperature it refused", async () => {
+    mockApi(routes(planView(), { "PUT /api/production/bake-days/:date": apiError(400, "validation_error", "Paste temperature can be at most 100.", { pasteC: "Paste temperature can be at most 100." }) }));
+    renderApp("/bake");
+    fireEvent.changeText(await screen.findByTestId("temp-paste"), "95");
+    fireEvent.press(screen.getByTestId("temps-save"));
+    expect(await screen.findByTestId("temp-paste-error")).toHaveTextContent("Paste temperature can be at most 100.");
+  });
+
+  it("recalculates only after a confirm, then lists what changed", async () => {
+    const after = planView({ frozen: true, frozenAt: "2025-12-02T11:40:00.000Z", changes: ["Milk-bread dinner rolls: 7 → 9 ordered, 7 → 9 pans."] });
+    const api = mockApi(routes(planView(), { "POST /api/production/plan/recalculate": { body: { plan: after } } }));
+    renderApp("/bake");
+    fireEvent.press(await screen.findByTestId("recalculate"));
+    expect(screen.getByTestId("recalculate-panel")).toHaveTextContent(/Recalculate from the current orders/);
+    expect(api.callsTo("POST", "/api/production/plan/recalculate")).toHaveLength(0);
+    fireEvent.press(screen.getByTestId("recalculate-cancel"));
+    expect(screen.queryByTestId("recalculate-panel")).toBeNull();
+    fireEvent.press(screen.getByTestId("recalculate"));
+    fireEvent.press(screen.getByTestId("recalculate-confirm"));
+    expect(await screen.findByTestId("plan-changes")).toHaveTextContent(/What changed:.*Milk-bread dinner rolls: 7 → 9 ordered, 7 → 9 pans\./);
+    expect(api.callsTo("POST", "/api/production/plan/recalculate")[0].query.date).toBe("2025-12-03");
+    await waitFor(() => expect(screen.getByTestId("plan-frozen-at")).toHaveTextContent("Frozen at Tue 2 Dec, 05:40 CST."));
+    // What the recalculation changed is not "pending" any more.
+    expect(screen.queryByTestId("plan-pending-changes")).toBeNull();
+  });
+
+  it("tells the baker when a frozen plan differs from a fresh calculation", async () => {
+    mockApi(routes(planView({ final: true, frozen: true, frozenAt: "2025-12-02T20:00:00.000Z", changes: ["Milk bread: formula version 1 → 2."] })));
+    renderApp("/bake");
+    expect(await screen.findByTestId("plan-pending-changes")).toHaveTextContent(/Milk bread: formula version 1 → 2\./);
+  });
+
+  it("fetches the production sheet with the token in the units asked for", async () => {
+    const api = mockApi(routes(planView(), { "GET /api/production/plan.pdf": { body: {} } }));
+    renderApp("/bake");
+    fireEvent.press(await screen.findByTestId("pdf-us"));
+    await waitFor(() => expect(api.callsTo("GET", "/api/production/plan.pdf")).toHaveLength(1));
+    const req = api.callsTo("GET", "/api/production/plan.pdf")[0];
+    expect(req.query).toEqual({ date: "2025-12-03", units: "us" });
+    expect(req.headers.Authorization).toBe(`Bearer token-for-${BAKER.id}`);
+    fireEvent.press(screen.getByTestId("pdf-metric"));
+    await waitFor(() => expect(api.callsTo("GET", "/api/production/plan.pdf")).toHaveLength(2));
+    expect(api.callsTo("GET", "/api/production/plan.pdf")[1].query.units).toBe("metric");
+  });
+
+  it("steps to the previous and next bake day by the delivery calendar", async () => {
+    const api = mockApi(routes());
+    renderApp("/bake/day?date=2025-12-06");
+    expect(await screen.findByTestId("bake-day-title")).toHaveTextContent("Bake day");
+    await screen.findByTestId("pans-101-count");
+    // Saturday → Tuesday: no deliveries on Sunday and Monday.
+    fireEvent.press(screen.getByTestId("day-next"));
+    await waitFor(() => expect(api.calls.some((c) => c.path === "/api/production/plan" && c.query.date === "2025-12-09")).toBe(true));
+    expect(await screen.findByTestId("day-date")).toHaveTextContent("Tue 9 Dec");
+    fireEvent.press(screen.getByTestId("day-prev"));
+    await waitFor(() => expect(screen.getByTestId("day-date")).toHaveTextContent("Sat 6 Dec"));
+    fireEvent.press(screen.getByTestId("day-pick"));
+    fireEvent.changeText(screen.getByTestId("day-pick-input"), "2025-12-1");
+    fireEvent.press(screen.getByTestId("day-pick-go"));
+    expect(screen.getByTestId("day-pick-input-error")).toHaveTextContent(/YYYY-MM-DD/);
+    fireEvent.press(screen.getByTestId("day-chip-2025-12-04"));
+    await waitFor(() => expect(screen.getByTestId("day-date")).toHaveTextContent("Thu 4 Dec"));
+  });
+
+  it("says so when nothing is ordered for the day", async () => {
+    mockApi(routes(planView({ products: [], doughs: [], ingredients: [], timeline: [], warnings: [] })));
+    renderApp("/bake");
+    expect(await screen.findByTestId("bake-day-empty")).toHaveTextContent(/Nothing to bake for Wed 3 Dec.*No orders for this day yet/);
+    expect(screen.queryByTestId("recalculate")).toBeNull();
+  });
+
+  it("says when the day is not a delivery day", async () => {
+    mockApi(routes(planView({ date: "2025-12-08", products: [], doughs: [], ingredients: [], timeline: [], warnings: [] })));
+    renderApp("/bake/day?date=2025-12-08");
+    expect(await screen.findByTestId("bake-day-empty")).toHaveTextContent(/Monday is not a delivery day\./);
+  });
+
+  it("shows an error with a retry when the plan fails to load", async () => {
+    let fail = true;
+    mockApi(routes(planView(), { "GET /api/production/plan": () => (fail ? apiError(500, "internal", "Something went wrong on the server.") : { body: { plan: planView() } }) }));
+    renderApp("/bake");
+    expect(await screen.findByTestId("bake-day-error")).toHaveTextContent(/The plan didn't load/);
+    fail = false;
+    fireEvent.press(screen.getByTestId("bake-day-error-retry"));
+    expect(await screen.findByTestId("pans-101-count")).toHaveTextContent("7");
+  });
+
+  it("puts formulas, buying and a More screen in the baker's tabs", async () => {
+    mockApi(routes());
+    renderApp("/bake");
+    await screen.findByTestId("pans-101-count");
+    expect(screen.getByTestId("tab-formulas")).toBeOnTheScreen();
+    expect(screen.getByTestId("tab-forecast")).toBeOnTheScreen();
+    fireEvent.press(screen.getByTestId("tab-more"));
+    expect(await screen.findByTestId("more-ingredients")).toBeOnTheScreen();
+    expect(screen.getByTestId("more-me")).toBeOnTheScreen();
+    await act(async () => undefined);
+  });
+});
+
+describe("bake day for the owner", () => {
+  it("opens from the office, with a link to change the production settings", async () => {
+    signedInAs(OWNER);
+    mockApi({ ...routes(), ...sessionRoutes(OWNER) });
+    renderApp("/office/production/day?date=2025-12-03");
+    expect(await screen.findByTestId("pans-101-count")).toHaveTextContent("7");
+    expect(screen.getByTestId("bake-day-title")).toHaveTextContent("Bake day");
+    expect(await screen.findByTestId("open-production-settings")).toBeOnTheScreen();
+    expect(screen.getByTestId("back-to-production")).toBeOnTheScreen();
+  });
+});

@@ -1,0 +1,125 @@
+import { fireEvent, screen, waitFor } from "expo-router/testing-library";
+import { BOOKKEEPER, BUYER, OWNER, account, apiError, mockApi, renderApp, sessionRoutes, signedInAs } from "./helpers";
+import type { OutboxMailDto } from "../../components/api/outbox";
+
+const MAILS: OutboxMailDto[] = [
+  { id: 7, kind: "invoice", to: "accounts@northpier.test", subject: "Invoice HB-2025-00042 from Hollowbrook Bakehouse", status: "failed", attempts: 12, lastError: "connect ECONNREFUSED 127.0.0.1:1", nextAttemptAt: null, sentAt: null, createdAt: "2025-12-01T10:00:00.000Z", messageId: "<invoice.1@panwise>" },
+  { id: 8, kind: "receipt", to: "accounts@tidewater.test", subject: "Receipt for HB-2025-00041", status: "sent", attempts: 1, lastError: null, nextAttemptAt: null, sentAt: "2025-12-02T10:00:00.000Z", createdAt: "2025-12-02T10:00:00.000Z", messageId: "<receipt.2@panwise>" },
+];
+
+const CERT = (o: Partial<{ id: number; status: "pending" | "approved" | "rejected"; expiresOn: string; expired: boolean }> = {}) => ({ id: 3, status: "approved" as const, expiresOn: "2025-11-30", expired: true, contentType: "application/pdf", createdAt: "2024-12-01T10:00:00.000Z", ...o });
+
+describe("outgoing e-mail (owner)", () => {
+  it("shows statuses and the last error, and sends a failed mail again", async () => {
+    signedInAs(OWNER);
+    const api = mockApi({ ...sessionRoutes(OWNER), "GET /api/outbox": { body: { mails: MAILS } }, "POST /api/outbox/:id/resend": { status: 202, body: { queued: true } } });
+    renderApp("/office/money/outbox");
+    expect(await screen.findByTestId("outbox-status-7")).toHaveTextContent("Failed");
+    expect(screen.getByTestId("outbox-error-7")).toHaveTextContent("Last error: connect ECONNREFUSED 127.0.0.1:1");
+    expect(screen.getByTestId("outbox-status-8")).toHaveTextContent("Sent");
+    expect(screen.queryByTestId("outbox-resend-8")).toBeNull();
+    fireEvent.press(screen.getByTestId("outbox-resend-7"));
+    expect(await screen.findByTestId("outbox-resent")).toHaveTextContent(/is queued to go again/);
+    expect(api.callsTo("POST", "/api/outbox/7/resend")).toHaveLength(1);
+    fireEvent.press(screen.getByTestId("outbox-status-failed"));
+    await waitFor(() => expect(api.calls.some((c) => c.path === "/api/outbox" && c.query.status === "failed")).toBe(true));
+  });
+
+  it("keeps the bookkeeper out", async () => {
+    signedInAs(BOOKKEEPER);
+    const api = mockApi({ ...sessionRoutes(BOOKKEEPER), "GET /api/office/summary": { body: { summary: { users: { total: 1, active: 1, disabled: 0, pendingInvitations: 0 }, accounts: { total: 1, active: 1, onHold: 0, closed: 0 } } } } });
+    const app = renderApp("/office/money/outbox");
+    await screen.findByTestId("office-home-title");
+    expect(app.getPathname()).toBe("/office");
+    expect(api.callsTo("GET", "/api/outbox")).toHaveLength(0);
+  });
+});
+
+describe("billing settings", () => {
+  it("shows the tax rate as a percentage and saves it in basis points", async () => {
+    signedInAs(OWNER);
+    const api = mockApi({
+      ...sessionRoutes(OWNER),
+      "GET /api/settings/billing": { body: { settings: { salesTaxRateBp: 875, invoicePrefix: "HB", creditHoldDays: 14, paymentInstructions: "Transfer to account 0001." } } },
+      "PUT /api/settings/billing": (req) => ({ body: { settings: req.body } }),
+    });
+    renderApp("/office/money/settings");
+    expect((await screen.findByTestId("settings-tax")).props.value).toBe("8.75");
+    fireEvent.changeText(screen.getByTestId("settings-tax"), "8.255");
+    fireEvent.changeText(screen.getByTestId("settings-prefix"), "h3");
+    fireEvent.press(screen.getByTestId("settings-save"));
+    expect(screen.getByTestId("settings-tax-error")).toHaveTextContent(/two decimals at most/);
+    expect(screen.getByTestId("settings-prefix-error")).toHaveTextContent("1 to 6 capital letters, e.g. HB.");
+    fireEvent.changeText(screen.getByTestId("settings-tax"), "9.5");
+    fireEvent.changeText(screen.getByTestId("settings-prefix"), "hbk");
+    fireEvent.press(screen.getByTestId("settings-save"));
+    expect(await screen.findByTestId("billing-settings-saved")).toBeOnTheScreen();
+    expect(api.callsTo("PUT", "/api/settings/billing")[0].body).toEqual({ salesTaxRateBp: 950, invoicePrefix: "HBK", creditHoldDays: 14, paymentInstructions: "Transfer to account 0001." });
+  });
+
+  it("is read-only for the bookkeeper", async () => {
+    signedInAs(BOOKKEEPER);
+    mockApi({ ...sessionRoutes(BOOKKEEPER), "GET /api/settings/billing": { body: { settings: { salesTaxRateBp: 875, invoicePrefix: "HB", creditHoldDays: 14, paymentInstructions: "" } } } });
+    renderApp("/office/money/settings");
+    expect(await screen.findByTestId("billing-settings-readonly")).toHaveTextContent(/8\.75 %.*HB.*14 days overdue/);
+    expect(screen.queryByTestId("settings-save")).toBeNull();
+  });
+});
+
+describe("exports", () => {
+  it("offers the three CSV files, each with a line about it, and reports a failed download", async () => {
+    signedInAs(BOOKKEEPER);
+    mockApi({ ...sessionRoutes(BOOKKEEPER), "GET /api/reports/exports/:file": apiError(503, "payments_unavailable", "Card payments are not reachable right now. Nothing was charged; please try again in a minute.") });
+    renderApp("/office/money/exports");
+    expect(await screen.findByRole("button", { name: "Download invoices CSV" })).toBeOnTheScreen();
+    expect(screen.getByRole("button", { name: "Download payments CSV" })).toBeOnTheScreen();
+    expect(screen.getByTestId("export-payouts-card")).toHaveTextContent(/gross, fees, refunds, net/);
+    fireEvent.press(screen.getByTestId("export-payouts"));
+    expect(await screen.findByTestId("export-payouts-error")).toHaveTextContent(/not reachable right now/);
+  });
+});
+
+describe("tax-exemption certificates", () => {
+  it("warns the buyer that an expired certificate means tax again", async () => {
+    signedInAs(BUYER);
+    mockApi({
+      ...sessionRoutes(BUYER),
+      "GET /api/accounts/:id": { body: { account: account() } },
+      "GET /api/accounts/:id/delivery": { body: { delivery: { routeWeekdays: null, minimumOrderCents: 0, priceListId: null } } },
+      "GET /api/accounts/:id/certificates": { body: { certificates: [CERT()] } },
+      "GET /api/calendar-feed": { body: { url: null } },
+    });
+    renderApp("/buyer/account");
+    expect(await screen.findByTestId("cert-expired-warning")).toHaveTextContent(/expired on 30 Nov 2025: tax is charged again until a new one is approved/);
+    expect(screen.getByTestId("cert-3-status")).toHaveTextContent("Expired");
+    expect(screen.queryByTestId("cert-3-approve")).toBeNull();
+    expect(screen.getByTestId("buyer-account-me")).toBeOnTheScreen();
+  });
+
+  it("lets the owner approve a pending certificate and change an account's terms", async () => {
+    signedInAs(OWNER);
+    let reviewed = false;
+    const api = mockApi({
+      ...sessionRoutes(OWNER),
+      "GET /api/accounts/:id": { body: { account: account() } },
+      "GET /api/accounts/:id/delivery": { body: { delivery: { routeWeekdays: null, minimumOrderCents: 0, priceListId: null } } },
+      "GET /api/price-lists": { body: { priceLists: [] } },
+      "GET /api/invoices": { body: { invoices: [], totals: { count: 0, totalCents: 0, dueCents: 0, paidCents: 0 } } },
+      "GET /api/accounts/:id/certificates": () => ({ body: { certificates: [CERT({ id: 4, status: reviewed ? "approved" : "pending", expiresOn: "2026-12-31", expired: false })] } }),
+      "POST /api/certificates/:id/review": () => {
+        reviewed = true;
+        return { body: { certificate: { id: 4, status: "approved" } } };
+      },
+      "PUT /api/accounts/:id/terms": (req) => ({ body: req.body }),
+    });
+    renderApp("/office/accounts/11");
+    fireEvent.press(await screen.findByTestId("cert-4-approve"));
+    expect(await screen.findByTestId("cert-valid")).toHaveTextContent(/approved until 31 Dec 2026/);
+    expect(api.callsTo("POST", "/api/certificates/4/review")[0].body).toEqual({ status: "approved" });
+
+    fireEvent.press(screen.getByTestId("account-terms-choice-net14"));
+    fireEvent.press(screen.getByTestId("account-terms-save"));
+    expect(await screen.findByTestId("account-terms-saved")).toHaveTextContent(/Payment terms are now: Weekly statement, net 14\./);
+    expect(api.callsTo("PUT", "/api/accounts/11/terms")[0].body).toEqual({ paymentTerms: "net14" });
+  });
+});

@@ -1,0 +1,165 @@
+import { Dimensions } from "react-native";
+import { fireEvent, screen, waitFor } from "expo-router/testing-library";
+import { BAKER, BOOKKEEPER, OWNER, SUMMARY, apiError, mockApi, renderApp, sessionRoutes, signedInAs, type FakeRequest, type Route } from "./helpers";
+import { FORECAST, INGREDIENTS, PRODUCTION_SETTINGS, ingredient } from "./production-fixtures";
+import { setUnitSystem } from "../../components/production/units";
+import type { SessionUser } from "../../shared/schemas/auth";
+
+const original = Dimensions.get("window");
+function setWidth(width: number) {
+  const size = { width, height: 800, scale: 1, fontScale: 1 };
+  Dimensions.set({ window: size, screen: size });
+}
+afterEach(() => Dimensions.set({ window: original, screen: original }));
+beforeEach(() => setUnitSystem("metric"));
+
+function routes(user: SessionUser, extra: Record<string, Route> = {}): Record<string, Route> {
+  return {
+    ...sessionRoutes(user),
+    "GET /api/office/summary": { body: { summary: SUMMARY } },
+    "GET /api/production/next-day": { body: { date: "2025-12-03" } },
+    "GET /api/production/forecast": (req: FakeRequest) => ({ body: { forecast: { ...FORECAST, from: req.query.from } } }),
+    "GET /api/production/settings": { body: { settings: PRODUCTION_SETTINGS } },
+    "GET /api/ingredients": { body: { ingredients: INGREDIENTS } },
+    ...extra,
+  };
+}
+
+describe("purchasing forecast", () => {
+  it("shows packs to buy (rounded up), their cost and the dough per day, from the next bake day", async () => {
+    signedInAs(BAKER);
+    const api = mockApi(routes(BAKER));
+    renderApp("/bake/forecast");
+    expect(await screen.findByTestId("forecast-item-1-packs")).toHaveTextContent("Buy 2 × 25 kg sack");
+    expect(api.callsTo("GET", "/api/production/forecast")[0].query.from).toBe("2025-12-03");
+    expect(screen.getByTestId("forecast-item-1")).toHaveTextContent(/Bread flour.*35\.35 kg.*\$49\.00/);
+    expect(screen.getByTestId("forecast-item-2-packs")).toHaveTextContent("Buy 5 × 1 gal jug");
+    expect(screen.getByTestId("forecast-item-10-packs")).toHaveTextContent("Not bought (e.g. tap water)");
+    expect(screen.getByTestId("forecast-total")).toHaveTextContent(/\$73\.45/);
+    expect(screen.getByTestId("forecast-lines")).toHaveTextContent(/2.*Ingredients to buy/);
+    expect(screen.getByTestId("forecast-day-2025-12-03")).toHaveTextContent(/Wed 3 Dec.*10\.17 kg.*11 units/);
+    expect(screen.getByTestId("forecast-day-2025-12-07")).toHaveTextContent(/no dough/);
+    expect(screen.getByTestId("forecast-range")).toHaveTextContent("Wed 3 Dec – Tue 9 Dec");
+    fireEvent.press(screen.getByTestId("forecast-next"));
+    await waitFor(() => expect(api.calls.some((c) => c.path === "/api/production/forecast" && c.query.from === "2025-12-10")).toBe(true));
+  });
+
+  it("lays the week out as tables from 1024 px, in pounds when asked", async () => {
+    setWidth(1280);
+    signedInAs(OWNER);
+    mockApi(routes(OWNER));
+    renderApp("/office/production/forecast?from=2025-12-03");
+    expect(await screen.findByTestId("forecast-table")).toBeOnTheScreen();
+    expect(screen.getByTestId("forecast-item-1-packs")).toHaveTextContent("2 × 25 kg sack");
+    expect(screen.getByTestId("forecast-day-row-1")).toHaveTextContent(/5,602 g.*2,667 g/);
+    fireEvent.press(screen.getByTestId("units-us"));
+    // 5602 g / 453.592 37 g per lb = 12 lb 5.6 oz.
+    expect(screen.getByTestId("forecast-day-row-1")).toHaveTextContent(/12 lb 5\.6 oz/);
+  });
+
+  it("shows an error with a retry", async () => {
+    signedInAs(BAKER);
+    mockApi(routes(BAKER, { "GET /api/production/forecast": apiError(500, "internal", "Something went wrong on the server. Please try again.") }));
+    renderApp("/bake/forecast?from=2025-12-03");
+    expect(await screen.findByTestId("forecast-error")).toHaveTextContent(/The forecast didn't load/);
+    expect(screen.getByTestId("forecast-error-retry")).toBeOnTheScreen();
+  });
+});
+
+describe("ingredients", () => {
+  it("lists the library with kinds, water, allergens and packs", async () => {
+    signedInAs(BAKER);
+    mockApi(routes(BAKER));
+    renderApp("/bake/ingredients");
+    expect(await screen.findByTestId("ingredient-row-2")).toHaveTextContent(/Whole milk.*Liquid · water 87 % · Milk.*1 gal jug \(3,900 g\) · \$4\.89/);
+    expect(screen.getByTestId("ingredient-row-10")).toHaveTextContent(/Tap · not bought/);
+  });
+
+  it("adds an ingredient checked with the shared schema, cost in cents and allergens as codes", async () => {
+    signedInAs(BAKER);
+    const api = mockApi(routes(BAKER, { "POST /api/ingredients": { status: 201, body: { ingredient: ingredient({ id: 20, name: "Potato flakes" }) } } }));
+    const app = renderApp("/bake/ingredients/new");
+    fireEvent.press(await screen.findByTestId("ingredient-save"));
+    expect(screen.getByTestId("ingredient-name-error")).toHaveTextContent("Name the ingredient.");
+    expect(screen.getByTestId("ingredient-kind-error")).toHaveTextContent(/Choose a kind/);
+    expect(screen.getByTestId("ingredient-pack-error")).toHaveTextContent("Describe the purchase pack, e.g. 25 kg sack.");
+    fireEvent.changeText(screen.getByTestId("ingredient-name"), "Potato flakes");
+    fireEvent.press(screen.getByTestId("ingredient-kind-other"));
+    fireEvent.changeText(screen.getByTestId("ingredient-water"), "7");
+    fireEvent.press(screen.getByTestId("ingredient-allergens-sulphites"));
+    fireEvent.changeText(screen.getByTestId("ingredient-pack"), "10 lb bag");
+    fireEvent.changeText(screen.getByTestId("ingredient-pack-grams"), "4536");
+    expect(screen.getByText("= 10 lb 0 oz")).toBeOnTheScreen();
+    fireEvent.changeText(screen.getByTestId("ingredient-pack-cost"), "18.5");
+    fireEvent.press(screen.getByTestId("ingredient-save"));
+    await waitFor(() => expect(api.callsTo("POST", "/api/ingredients")).toHaveLength(1));
+    expect(api.callsTo("POST", "/api/ingredients")[0].body).toEqual({ name: "Potato flakes", kind: "other", waterPercent: 7, allergens: ["sulphites"], packName: "10 lb bag", packGrams: 4536, packCostCents: 1850 });
+    await waitFor(() => expect(app.getPathname()).toBe("/bake/ingredients"));
+  });
+
+  it("edits an ingredient and shows a name clash next to the name", async () => {
+    signedInAs(OWNER);
+    const api = mockApi(routes(OWNER, { "PUT /api/ingredients/:id": apiError(409, "name_taken", "Another ingredient has this name.") }));
+    renderApp("/office/production/ingredients/2");
+    expect(await screen.findByTestId("ingredient-title")).toHaveTextContent("Whole milk");
+    expect(screen.getByTestId("ingredient-pack-cost")).toHaveDisplayValue("4.89");
+    fireEvent.changeText(screen.getByTestId("ingredient-name"), "Bread flour");
+    fireEvent.press(screen.getByTestId("ingredient-save"));
+    expect(await screen.findByTestId("ingredient-name-error")).toHaveTextContent("Another ingredient has this name.");
+    expect(api.callsTo("PUT", "/api/ingredients/2")[0].body).toMatchObject({ name: "Bread flour", kind: "liquid", waterPercent: 87, allergens: ["milk"], packGrams: 3900, packCostCents: 489 });
+  });
+});
+
+describe("production in the office", () => {
+  it("gives the owner Production in More, and a hub to the bake day, formulas, ingredients, forecast and settings", async () => {
+    signedInAs(OWNER);
+    mockApi(routes(OWNER));
+    renderApp("/office/more");
+    fireEvent.press(await screen.findByTestId("more-production"));
+    expect(await screen.findByTestId("production-hub-title")).toHaveTextContent("Production");
+    for (const key of ["day", "formulas", "ingredients", "forecast", "settings"]) expect(screen.getByTestId(`production-${key}`)).toBeOnTheScreen();
+    expect(await screen.findByText("Next bake day: Wed 3 Dec.")).toBeOnTheScreen();
+    expect(screen.getByTestId("tab-more")).toBeOnTheScreen();
+  });
+
+  it("keeps the bookkeeper out of production", async () => {
+    signedInAs(BOOKKEEPER);
+    mockApi(routes(BOOKKEEPER));
+    const app = renderApp("/office/production/formulas");
+    expect(await screen.findByTestId("office-home-title")).toBeOnTheScreen();
+    expect(app.getPathname()).toBe("/office");
+    expect(screen.queryByTestId("office-production-card")).toBeNull();
+  });
+
+  it("lets the owner change the production settings, checked before sending", async () => {
+    signedInAs(OWNER);
+    const api = mockApi(routes(OWNER, { "PUT /api/production/settings": (req: FakeRequest) => ({ body: { settings: req.body } }) }));
+    renderApp("/office/production/settings");
+    expect(await screen.findByTestId("settings-mixer")).toHaveDisplayValue("20");
+    fireEvent.changeText(screen.getByTestId("settings-dispatch"), "6:30");
+    fireEvent.changeText(screen.getByTestId("settings-ovens"), "0");
+    fireEvent.press(screen.getByTestId("production-settings-save"));
+    expect(screen.getByTestId("settings-dispatch-error")).toHaveTextContent("Use a 24-hour time such as 06:30.");
+    expect(screen.getByTestId("settings-ovens-error")).toHaveTextContent("At least 1 oven.");
+    expect(api.callsTo("PUT", "/api/production/settings")).toHaveLength(0);
+    fireEvent.changeText(screen.getByTestId("settings-dispatch"), "05:45");
+    fireEvent.changeText(screen.getByTestId("settings-ovens"), "2");
+    fireEvent.changeText(screen.getByTestId("settings-mixer"), "25,5");
+    expect(screen.getByTestId("settings-wave")).toHaveTextContent("One bake wave holds 12 pans.");
+    fireEvent.press(screen.getByTestId("production-settings-save"));
+    await waitFor(() => expect(api.callsTo("PUT", "/api/production/settings")).toHaveLength(1));
+    expect(api.callsTo("PUT", "/api/production/settings")[0].body).toEqual({ mixerCapacityKg: 25.5, dispatchTime: "05:45", ovens: 2, pansPerLoad: 6 });
+    expect(await screen.findByTestId("production-settings-saved")).toBeOnTheScreen();
+  });
+
+  it("puts the baker's ingredients and profile under More", async () => {
+    signedInAs(BAKER);
+    mockApi(routes(BAKER));
+    renderApp("/bake/more");
+    expect(await screen.findByTestId("more-ingredients")).toHaveTextContent(/Ingredients.*purchase packs/);
+    expect(screen.getByTestId("more-me")).toBeOnTheScreen();
+    expect(screen.queryByTestId("more-production")).toBeNull();
+    fireEvent.press(screen.getByTestId("more-ingredients"));
+    expect(await screen.findByTestId("ingredients-title")).toHaveTextContent("Ingredients");
+  });
+});
