@@ -20,6 +20,7 @@ import * as invoices from "./invoices.service";
 import * as payments from "./payments.service";
 import { renderInvoicePdf } from "./invoice.pdf";
 import { sniff } from "../catalog/catalog.service";
+import { localToday } from "../../shared/calendar";
 
 const idParam = z.object({ id: idSchema });
 const OFFICE = ["owner", "bookkeeper"] as const;
@@ -164,13 +165,14 @@ export function accountBillingRoutes(ctx: AppContext): Router {
     const { id } = parse(idParam, req.params);
     const account = await resolveAccount(ctx, currentUser(req), id);
     const rows = await ctx.dataSource.getRepository(TaxCertificate).find({ where: { accountId: account.id }, order: { id: "DESC" } });
-    const today = new Date(ctx.clock.now()).toISOString().slice(0, 10);
+    const today = localToday(ctx.clock.now(), (await getBakery(ctx)).timeZone);
     res.json({ certificates: rows.map((c) => ({ id: c.id, status: c.status, expiresOn: c.expiresOn, expired: c.expiresOn < today, contentType: c.contentType, createdAt: c.createdAt.toISOString() })) });
   });
   const upload = multer({ storage: multer.memoryStorage(), limits: { fileSize: 10 * 1024 * 1024, files: 1 } }).single("file");
   r.post("/:id/certificates", allow("owner", "buyer"), (req, res, next) => upload(req, res, (err: unknown) => {
     if (err instanceof multer.MulterError && err.code === "LIMIT_FILE_SIZE") return next(new HttpError(413, "payload_too_large", "The certificate file is larger than 10 MB."));
-    next(err as Error | undefined);
+    if (err) return next(badRequest("The upload could not be read: send one file in the field \"file\" and the expiry date in \"expiresOn\".", { file: "Send one file." }));
+    next();
   }), async (req, res) => {
     const { id } = parse(idParam, req.params);
     const account = await resolveAccount(ctx, currentUser(req), id);

@@ -105,9 +105,10 @@ export async function issueInvoice(ctx: AppContext, m: EntityManager, account: C
   const carried = await m.getRepository(CreditNote).findBy({ accountId: account.id, disposition: "carry", carriedToInvoiceId: IsNull() });
   for (const cn of carried) {
     const fresh = await m.getRepository(Invoice).findOneByOrFail({ id: inv.id });
-    if (amountDue(fresh) < cn.totalCents) break;
-    await m.getRepository(CreditNote).update({ id: cn.id }, { carriedToInvoiceId: inv.id });
-    await m.getRepository(Invoice).increment({ id: inv.id }, "creditedCents", cn.totalCents);
+    if (amountDue(fresh) < cn.totalCents) continue;
+    // Conditional: a credit claimed by another invoice being issued at the same moment is not applied twice.
+    const claim = await m.getRepository(CreditNote).update({ id: cn.id, carriedToInvoiceId: IsNull() }, { carriedToInvoiceId: inv.id });
+    if (claim.affected === 1) await m.getRepository(Invoice).increment({ id: inv.id }, "creditedCents", cn.totalCents);
   }
   const issued = await refreshStatus(m, inv.id);
   await queueInvoiceMail(ctx, m, issued, account);
@@ -125,7 +126,9 @@ export async function createCreditNote(ctx: AppContext, m: EntityManager, inv: I
     number: formatDocNumber(`${bakery.invoicePrefix}-CN`, year, seq), invoiceId: inv.id, accountId: inv.accountId, reason,
     lines: JSON.stringify(lines), subtotalCents: subtotal, taxCents: tax, totalCents: subtotal + tax, disposition, carriedToInvoiceId: null, stripeRefundId, issueDate: today,
   }));
-  if (disposition === "applied") {
+  // Applied and refunded credit both come off what the invoice is worth; a refund also returns money
+  // already paid (refundedCents), so the buyer does not owe it again. Carried credit waits for the next invoice.
+  if (disposition === "applied" || disposition === "refund") {
     await m.getRepository(Invoice).increment({ id: inv.id }, "creditedCents", cn.totalCents);
     await refreshStatus(m, inv.id);
   }
@@ -171,20 +174,33 @@ export async function confirmDispatch(ctx: AppContext, date: string, adjustments
   return { delivered: result.length, invoices: invoices.map((i) => i.number) };
 }
 
-/** Card accounts: one invoice per delivered order. */
+/** Card accounts: one invoice per delivered order. An order another process just invoiced is skipped. */
 async function invoiceCardOrders(ctx: AppContext, orderIds: number[]): Promise<Invoice[]> {
   if (!orderIds.length) return [];
   const orders = await ctx.dataSource.getRepository(Order).findBy({ id: In(orderIds), status: "delivered" });
   const out: Invoice[] = [];
   for (const o of orders) {
-    const inv = await retryOnDeadlock(() => ctx.dataSource.transaction(async (m) => {
-      const account = await m.getRepository(CustomerAccount).findOneByOrFail({ id: o.accountId });
-      if (account.paymentTerms !== "card") return null;
-      return issueInvoice(ctx, m, account, [o.id], "order");
-    }));
-    if (inv) out.push(inv);
+    try {
+      const inv = await retryOnDeadlock(() => ctx.dataSource.transaction(async (m) => {
+        const account = await m.getRepository(CustomerAccount).findOneByOrFail({ id: o.accountId });
+        if (account.paymentTerms !== "card") return null;
+        return issueInvoice(ctx, m, account, [o.id], "order");
+      }));
+      if (inv) out.push(inv);
+    } catch (err) {
+      if ((err as { driverError?: { errno?: number } }).driverError?.errno !== 1062) throw err; // its lines are on another invoice
+    }
   }
   return out;
+}
+
+/** The job: delivered orders of card accounts that have no invoice yet (after a failure, or a change of terms). */
+export async function invoiceUninvoicedCardOrders(ctx: AppContext): Promise<number> {
+  const rows: { id: number }[] = await ctx.dataSource.query(
+    `SELECT DISTINCT o.id FROM customer_order o JOIN customer_account a ON a.id = o.accountId AND a.paymentTerms = 'card'
+       JOIN order_line l ON l.orderId = o.id LEFT JOIN invoice_line il ON il.orderLineId = l.id
+      WHERE o.status = 'delivered' AND il.id IS NULL LIMIT 500`);
+  return (await invoiceCardOrders(ctx, rows.map((r) => Number(r.id)))).length;
 }
 
 /** The job: orders not confirmed by the end of their delivery day are delivered as ordered (and invoiced). */
@@ -256,7 +272,13 @@ export async function applyCreditHolds(ctx: AppContext): Promise<{ held: number;
 
 /** Record money received. A Stripe payment intent is recorded once, whichever event brings it. */
 export async function recordPayment(ctx: AppContext, m: EntityManager, p: { invoiceId: number; amountCents: number; method: Payment["method"]; reference?: string; receivedOn?: string; stripePaymentIntentId?: string | null; stripeChargeId?: string | null; recordedById?: number | null }): Promise<Payment | null> {
-  if (p.stripePaymentIntentId && (await m.getRepository(Payment).existsBy({ stripePaymentIntentId: p.stripePaymentIntentId }))) return null;
+  if (p.stripePaymentIntentId) {
+    const known = await m.getRepository(Payment).findOneBy({ stripePaymentIntentId: p.stripePaymentIntentId });
+    if (known) {
+      if (!known.stripeChargeId && p.stripeChargeId) await m.getRepository(Payment).update({ id: known.id }, { stripeChargeId: p.stripeChargeId });
+      return null;
+    }
+  }
   const inv = await m.getRepository(Invoice).createQueryBuilder("i").setLock("pessimistic_write").where("i.id = :id", { id: p.invoiceId }).getOne();
   if (!inv) throw notFound("That invoice");
   const bakery = await getBakery(ctx, m);
@@ -287,7 +309,8 @@ async function liftHoldIfClear(ctx: AppContext, m: EntityManager, accountId: num
 
 export async function recordManualPayment(ctx: AppContext, actor: SessionUser, invoiceId: number, input: { amountCents: number; method: "bank_transfer" | "cheque" | "cash" | "other"; reference: string; receivedOn: string }) {
   return ctx.dataSource.transaction(async (m) => {
-    const inv = await m.getRepository(Invoice).findOneBy({ id: invoiceId });
+    // Locked before the check, so two payments recorded at once cannot both pass it.
+    const inv = await m.getRepository(Invoice).createQueryBuilder("i").setLock("pessimistic_write").where("i.id = :id", { id: invoiceId }).getOne();
     if (!inv) throw notFound("That invoice");
     if (inv.status === "void") throw conflict("invoice_void", "This invoice is void.");
     const due = amountDue(inv);

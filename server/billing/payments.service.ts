@@ -3,7 +3,7 @@ import { stringify } from "csv-stringify/sync";
 import { In } from "typeorm";
 import type { AppContext } from "../http/context";
 import { HttpError, badRequest, conflict, notFound } from "../http/errors";
-import { CheckoutSessionRecord, Invoice, Payment, PayoutReconciliation, Refund, StripeEventRecord } from "./billing.entity";
+import { CheckoutSessionRecord, CreditNote, Invoice, Payment, PayoutReconciliation, Refund, StripeEventRecord } from "./billing.entity";
 import { CustomerAccount } from "../accounts/account.entity";
 import { getBakery } from "../bakery/bakery.service";
 import { createCreditNote, recordPayment, recordRefund } from "./invoices.service";
@@ -11,6 +11,7 @@ import { enqueueMail } from "../mail/outbox.service";
 import { receiptMail } from "../mail/templates";
 import { AGING_BUCKETS, agingBucket, amountDue, taxCents, type AgingBucket } from "../../shared/billing";
 import { localToday } from "../../shared/calendar";
+import { retryOnDeadlock } from "../db/retry";
 import { toDecimal } from "../../shared/money";
 import type { SessionUser } from "../../shared/schemas/auth";
 
@@ -33,6 +34,11 @@ export async function createCheckout(ctx: AppContext, actor: SessionUser, invoic
   const due = amountDue(inv);
   if (due <= 0) throw conflict("nothing_due", "This invoice is already paid.");
   const account = await ctx.dataSource.getRepository(CustomerAccount).findOneByOrFail({ id: inv.accountId });
+  // A session for this amount that is still open is offered again, so one debt never gets two live payment pages.
+  const open = await ctx.dataSource.getRepository(CheckoutSessionRecord).createQueryBuilder("s")
+    .where("s.invoiceId = :id AND s.status = 'open' AND s.amountCents = :due AND s.expiresAt > :now", { id: inv.id, due, now: ctx.clock.now() })
+    .orderBy("s.createdAt", "DESC").getOne();
+  if (open) return { url: open.url };
   const base = ctx.config.publicUrl;
   let session: Stripe.Checkout.Session;
   try {
@@ -99,11 +105,16 @@ export async function handleWebhook(ctx: AppContext, raw: Buffer, signature: str
       }
       case "charge.refunded": {
         const ch = event.data.object as Stripe.Charge;
-        const payment = await m.getRepository(Payment).findOneBy({ stripeChargeId: ch.id });
-        if (payment) {
-          const refunds = ch.refunds?.data?.length ? ch.refunds.data : (await ctx.stripe.refunds.list({ charge: ch.id, limit: 100 })).data;
-          for (const r of refunds) await recordRefund(ctx, m, { invoiceId: payment.invoiceId, stripeRefundId: r.id, stripeChargeId: ch.id, amountCents: r.amount });
+        const pi = typeof ch.payment_intent === "string" ? ch.payment_intent : ch.payment_intent?.id ?? null;
+        const payment = (await m.getRepository(Payment).findOneBy({ stripeChargeId: ch.id })) ?? (pi ? await m.getRepository(Payment).findOneBy({ stripePaymentIntentId: pi }) : null);
+        if (!payment) {
+          // The payment's own events have not landed yet: refuse, so this event is rolled back and Stripe retries it.
+          if (pi || ch.metadata?.invoiceId) throw new HttpError(409, "payment_not_seen_yet", "The payment for this refund is not recorded yet; retry later.");
+          break;
         }
+        if (!payment.stripeChargeId) await m.getRepository(Payment).update({ id: payment.id }, { stripeChargeId: ch.id });
+        const refunds = ch.refunds?.data?.length ? ch.refunds.data : (await ctx.stripe.refunds.list({ charge: ch.id, limit: 100 })).data;
+        for (const r of refunds) await recordRefund(ctx, m, { invoiceId: payment.invoiceId, stripeRefundId: r.id, stripeChargeId: ch.id, amountCents: r.amount });
         break;
       }
       default:
@@ -136,24 +147,35 @@ export async function issueCreditNote(ctx: AppContext, invoiceId: number, input:
   const total = subtotal + taxCents(subtotal, inv.taxRateBp);
   const due = amountDue(inv);
   const cardPayment = await ctx.dataSource.getRepository(Payment).findOne({ where: { invoiceId, method: "card" }, order: { id: "DESC" } });
-  const refundable = inv.paidCents - inv.refundedCents;
-  if (total > inv.totalCents - inv.creditedCents - inv.refundedCents) throw badRequest("The credit is more than what remains on the invoice.", { lines: "Too much." });
+  // What can go back to the card is what that card payment brought in, less what was already refunded on it.
+  const refundedOnCard = cardPayment?.stripeChargeId
+    ? Number((await ctx.dataSource.query("SELECT COALESCE(SUM(amountCents), 0) AS s FROM refund WHERE stripeChargeId = ?", [cardPayment.stripeChargeId]))[0].s)
+    : 0;
+  const refundable = cardPayment ? Math.min(inv.paidCents - inv.refundedCents, cardPayment.amountCents - refundedOnCard) : 0;
+  if (total > inv.totalCents - inv.creditedCents) throw badRequest("The credit is more than what remains on the invoice.", { lines: "Too much." });
+  const creditCount = await ctx.dataSource.getRepository(CreditNote).countBy({ invoiceId });
   if (!input.carry && due >= total) {
     return ctx.dataSource.transaction((m) => createCreditNote(ctx, m, inv, lines, input.reason, "applied"));
   }
   if (!input.carry && cardPayment?.stripePaymentIntentId && refundable >= total) {
     let refund: Stripe.Refund;
     try {
-      refund = await ctx.stripe.refunds.create({ payment_intent: cardPayment.stripePaymentIntentId, amount: total, reason: "requested_by_customer", metadata: { invoiceId: String(inv.id) } }, { idempotencyKey: `credit-${inv.id}-${inv.refundedCents}-${total}` });
+      // The key stays the same when this is retried after a failure: Stripe then returns the first refund, never a second.
+      refund = await ctx.stripe.refunds.create({ payment_intent: cardPayment.stripePaymentIntentId, amount: total, reason: "requested_by_customer", metadata: { invoiceId: String(inv.id) } }, { idempotencyKey: `credit-${inv.id}-${creditCount}-${total}` });
     } catch (err) {
       if (isConnectionError(err)) throw unavailable();
       throw err;
     }
-    return ctx.dataSource.transaction(async (m) => {
+    return retryOnDeadlock(() => ctx.dataSource.transaction(async (m) => {
+      if (await m.getRepository(CreditNote).existsBy({ stripeRefundId: refund.id })) throw conflict("already_refunded", "This credit was already refunded.");
       const cn = await createCreditNote(ctx, m, inv, lines, input.reason, "refund", refund.id);
-      await recordRefund(ctx, m, { invoiceId: inv.id, stripeRefundId: refund.id, stripeChargeId: typeof refund.charge === "string" ? refund.charge : null, amountCents: refund.amount, creditNoteId: cn.id });
+      const recorded = await recordRefund(ctx, m, { invoiceId: inv.id, stripeRefundId: refund.id, stripeChargeId: typeof refund.charge === "string" ? refund.charge : null, amountCents: refund.amount, creditNoteId: cn.id });
+      if (!recorded) {
+        // The charge.refunded webhook recorded this refund first: link it to the credit note.
+        await m.getRepository(Refund).update({ stripeRefundId: refund.id }, { creditNoteId: cn.id });
+      }
       return cn;
-    });
+    }));
   }
   return ctx.dataSource.transaction((m) => createCreditNote(ctx, m, inv, lines, input.reason, "carry"));
 }

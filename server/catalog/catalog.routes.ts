@@ -21,8 +21,8 @@ function photoUpload(): RequestHandler {
       if (err instanceof multer.MulterError && err.code === "LIMIT_FILE_SIZE") {
         return next(new HttpError(413, "payload_too_large", "The photo is larger than 5 MB. Use a smaller one.", { photo: "At most 5 MB." }));
       }
-      if (err instanceof multer.MulterError) return next(badRequest(`The upload could not be read (${err.code}).`, { photo: "Send one file in the field \"photo\"." }));
-      next(err);
+      if (err) return next(badRequest("The upload could not be read: send one image in the field \"photo\".", { photo: "Send one file in the field \"photo\"." }));
+      next();
     });
 }
 

@@ -4,7 +4,7 @@ import { lockPastCutoff } from "../orders/orders.service";
 import { materialiseAll } from "../orders/standing.service";
 import { freezeDue } from "../production/plan.service";
 import { processOutbox } from "../mail/outbox.service";
-import { applyCreditHolds, autoDeliver, issueStatements } from "../billing/invoices.service";
+import { applyCreditHolds, autoDeliver, invoiceUninvoicedCardOrders, issueStatements } from "../billing/invoices.service";
 
 /** Every scheduled job the server runs (each under a MariaDB named lock). */
 export const jobs: Job[] = [
@@ -16,4 +16,5 @@ export const jobs: Job[] = [
   { name: "deliver-unconfirmed-orders", everyMs: 5 * 60 * 1000, run: async (ctx) => void (await autoDeliver(ctx)) },
   { name: "weekly-statements", everyMs: 60 * 60 * 1000, run: async (ctx) => void (await issueStatements(ctx)) },
   { name: "credit-holds", everyMs: 15 * 60 * 1000, run: async (ctx) => void (await applyCreditHolds(ctx)) },
+  { name: "invoice-card-orders", everyMs: 10 * 60 * 1000, run: async (ctx) => void (await invoiceUninvoicedCardOrders(ctx)) },
 ];

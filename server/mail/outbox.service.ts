@@ -46,6 +46,7 @@ export async function processOutbox(ctx: AppContext, limit = 100): Promise<{ sen
   for (const row of due) {
     const claim = await repo.update({ id: row.id, status: "pending" }, { status: "sending", nextAttemptAt: ctx.clock.now() });
     if (!claim.affected) continue;
+    let sendError: unknown = null;
     try {
       await ctx.mailer.send({
         to: row.toAddress,
@@ -56,9 +57,15 @@ export async function processOutbox(ctx: AppContext, limit = 100): Promise<{ sen
         messageId: row.messageId,
         attachments: row.attachments ? (JSON.parse(row.attachments) as { filename: string; contentType: string; base64: string }[]).map((a) => ({ filename: a.filename, contentType: a.contentType, content: Buffer.from(a.base64, "base64") })) : undefined,
       });
+    } catch (err) {
+      sendError = err;
+    }
+    if (!sendError) {
+      // Sent: a database hiccup here leaves the row "sending"; it is retried (same Message-ID) only after 5 minutes.
       await repo.update({ id: row.id }, { status: "sent", sentAt: ctx.clock.now(), attempts: row.attempts + 1, lastError: null });
       sent++;
-    } catch (err) {
+    } else {
+      const err = sendError;
       const attempts = row.attempts + 1;
       const message = String((err as Error).message || err).slice(0, 500);
       await repo.update({ id: row.id }, { status: attempts >= MAX_ATTEMPTS ? "failed" : "pending", attempts, lastError: message, nextAttemptAt: new Date(ctx.clock.now().getTime() + backoffMs(attempts)) });

@@ -143,7 +143,7 @@ export async function materialiseAccount(ctx: AppContext, accountId: number) {
   for (const o of existing) {
     if (wanted.has(o.deliveryDate) || o.source !== "standing" || o.editedByHand || o.status !== "open") continue;
     if (now.getTime() >= (await cutoffOf(ctx, o, settings))) continue;
-    await ctx.dataSource.getRepository(Order).update({ id: o.id, status: "open", editedByHand: false }, { status: "cancelled" });
+    await ctx.dataSource.getRepository(Order).update({ id: o.id, status: "open", editedByHand: false, source: "standing" }, { status: "cancelled" });
     result.cancelled++;
   }
   return result;
@@ -165,7 +165,9 @@ async function syncOrder(ctx: AppContext, o: Order, dayLines: { productId: numbe
     if (same) return false;
     const products = new Map((await m.getRepository(Product).findBy({ id: In(dayLines.map((l) => l.productId)) })).map((p) => [p.id, p]));
     if (dayLines.some((l) => !products.get(l.productId)?.active)) return false;
-    if (ctx.clock.now().getTime() >= orderCutoff(o.deliveryDate, settings, [...products.values()]).toMillis()) return false;
+    // The cut-offs of the products on the order now count too: a line past its cut-off is not taken away.
+    const currentProducts = await m.getRepository(Product).findBy({ id: In(current.map((c) => c.productId).concat([0])) });
+    if (ctx.clock.now().getTime() >= orderCutoff(o.deliveryDate, settings, [...products.values(), ...currentProducts]).toMillis()) return false;
     const pricing = await pricingFor(ctx, o.accountId, m);
     const priced = dayLines.map((l) => {
       const p = products.get(l.productId)!;

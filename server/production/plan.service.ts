@@ -24,6 +24,12 @@ async function unitsByProduct(m: EntityManager, date: string): Promise<DayRow[]>
       GROUP BY l.productId`, [date]);
 }
 
+/** For writes: make sure the day's row exists (INSERT IGNORE, so two first writers never collide), then read it. */
+async function bakeDayForWrite(m: EntityManager, date: string): Promise<BakeDay> {
+  await m.query(`INSERT IGNORE INTO bake_day (date, extraPans, progress) VALUES (?, '{}', '{"mixes":[],"waves":[]}')`, [date]);
+  return m.getRepository(BakeDay).findOneByOrFail({ date });
+}
+
 async function bakeDay(m: EntityManager, date: string): Promise<BakeDay> {
   const repo = m.getRepository(BakeDay);
   const found = await repo.findOneBy({ date });
@@ -43,6 +49,8 @@ async function expectedStanding(m: EntityManager, date: string): Promise<DayRow[
       WHERE s.active = 1 AND l.weekday = ?
         AND NOT EXISTS (SELECT 1 FROM customer_order o WHERE o.accountId = s.accountId AND o.deliveryDate = ?)`, [DateTime.fromISO(date).weekday, date]);
   const sums = new Map<number, number>();
+  const closed = await m.query("SELECT 1 FROM bakery_closure WHERE date = ?", [date]);
+  if (closed.length) return [];
   const ruleCache = new Map<string, boolean>();
   for (const r of rows) {
     const key = `${r.accountId}`;
@@ -139,13 +147,11 @@ export async function getPlan(ctx: AppContext, date: string): Promise<PlanDto & 
 /** Freeze (or deliberately recalculate): store the plan with the formula versions it used. */
 export async function freeze(ctx: AppContext, date: string): Promise<PlanDto & { changes: string[] }> {
   const m = ctx.dataSource.manager;
-  const day = await bakeDay(m, date);
+  const day = await bakeDayForWrite(m, date);
   const before = day.frozenPlan ? (JSON.parse(day.frozenPlan) as PlanDto) : null;
   const plan = await computePlan(ctx, date);
   const frozenAt = ctx.clock.now();
-  day.frozenPlan = JSON.stringify(plan);
-  day.frozenAt = frozenAt;
-  await m.getRepository(BakeDay).save(day);
+  await m.getRepository(BakeDay).update({ date }, { frozenPlan: JSON.stringify(plan), frozenAt });
   return { ...plan, frozen: true, frozenAt: frozenAt.toISOString(), changes: before ? diffPlans(before, plan) : [] };
 }
 
@@ -174,12 +180,11 @@ export async function saveBakeDay(ctx: AppContext, date: string, input: { extraP
   const m = ctx.dataSource.manager;
   const ids = Object.keys(input.extraPans).map(Number);
   if (ids.length && (await m.getRepository(Product).countBy({ id: In(ids) })) !== ids.length) throw badRequest("Extra pans for a product that does not exist.", { extraPans: "Unknown product." });
-  const day = await bakeDay(m, date);
-  day.extraPans = JSON.stringify(Object.fromEntries(Object.entries(input.extraPans).filter(([, n]) => n > 0)));
-  day.roomC = String(input.roomC);
-  day.flourC = String(input.flourC);
-  day.pasteC = String(input.pasteC);
-  await m.getRepository(BakeDay).save(day);
+  const day = await bakeDayForWrite(m, date);
+  await m.getRepository(BakeDay).update({ date }, {
+    extraPans: JSON.stringify(Object.fromEntries(Object.entries(input.extraPans).filter(([, n]) => n > 0))),
+    roomC: String(input.roomC), flourC: String(input.flourC), pasteC: String(input.pasteC),
+  });
   // A frozen day is recalculated on purpose: the baker just changed its inputs.
   return day.frozenPlan ? freeze(ctx, date) : { ...(await computePlan(ctx, date)), changes: [] };
 }
@@ -187,6 +192,7 @@ export async function saveBakeDay(ctx: AppContext, date: string, input: { extraP
 export async function setProgress(ctx: AppContext, date: string, input: { kind: "mix" | "wave"; key: string; done: boolean }) {
   const m = ctx.dataSource.manager;
   return ctx.dataSource.transaction(async (tx) => {
+    await bakeDayForWrite(tx, date);
     await tx.query("SELECT date FROM bake_day WHERE date = ? FOR UPDATE", [date]);
     const day = await bakeDay(tx, date);
     const progress = JSON.parse(day.progress) as { mixes: string[]; waves: number[] };
@@ -196,8 +202,7 @@ export async function setProgress(ctx: AppContext, date: string, input: { kind: 
       const n = Number(input.key);
       progress.waves = input.done ? [...new Set([...progress.waves, n])].sort((a, b) => a - b) : progress.waves.filter((w) => w !== n);
     }
-    day.progress = JSON.stringify(progress);
-    await tx.getRepository(BakeDay).save(day);
+    await tx.getRepository(BakeDay).update({ date }, { progress: JSON.stringify(progress) });
     void m;
     return progress;
   });

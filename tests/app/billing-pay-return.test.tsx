@@ -32,9 +32,10 @@ describe("payment return page", () => {
     expect(api.callsTo("GET", "/api/invoices/41")).toHaveLength(3);
   });
 
-  it("stops waiting after a minute with a calm message", async () => {
+  it("stops waiting after a minute with a calm message, and can check again", async () => {
     signedInAs(BUYER);
-    const api = mockApi({ ...sessionRoutes(BUYER), "GET /api/invoices/:id": { body: OPEN } });
+    let confirmed = false;
+    const api = mockApi({ ...sessionRoutes(BUYER), "GET /api/invoices/:id": () => ({ body: confirmed ? PAID_DETAIL : OPEN }) });
     renderApp("/pay/return?invoice=41&session_id=cs_test_1");
     await screen.findByTestId("pay-processing");
     for (let i = 0; i < 40; i++) await tick(1500);
@@ -43,6 +44,9 @@ describe("payment return page", () => {
     expect(asked).toBeGreaterThan(30);
     await tick(10_000);
     expect(api.callsTo("GET", "/api/invoices/41")).toHaveLength(asked);
+    confirmed = true;
+    fireEvent.press(screen.getByTestId("pay-check-again"));
+    expect(await screen.findByTestId("pay-paid")).toBeOnTheScreen();
   });
 
   it("says a cancelled payment was cancelled and offers to try again", async () => {

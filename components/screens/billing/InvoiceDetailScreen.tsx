@@ -72,6 +72,8 @@ export function InvoiceDetailScreen({ id, mode }: InvoiceDetailProps) {
         testID="invoice-title"
         actions={<PdfButton invoice={inv} />}
       />
+      {/* On a phone what is owed, and paying it, come first. */}
+      {!wide ? <SummaryCard invoice={inv} office={office} payable={payable} /> : null}
       <View style={[billingStyles.grid, wide && billingStyles.gridWide]}>
         <View style={[billingStyles.col, wide && billingStyles.mainCol]}>
           <LinesCard detail={d} />
@@ -79,7 +81,7 @@ export function InvoiceDetailScreen({ id, mode }: InvoiceDetailProps) {
           {office && inv.status !== "void" ? <CreditNoteCard detail={d} /> : null}
         </View>
         <View style={[billingStyles.col, wide && billingStyles.sideCol]}>
-          <SummaryCard invoice={inv} office={office} payable={payable} />
+          {wide ? <SummaryCard invoice={inv} office={office} payable={payable} /> : null}
           <PaymentsCard detail={d} />
           {d.refunds.length ? <RefundsCard detail={d} /> : null}
           {office && payable ? <RecordPaymentCard detail={d} /> : null}
@@ -121,7 +123,7 @@ function SummaryCard({ invoice: inv, office, payable }: { invoice: InvoiceDto; o
       </AppText>
       {inv.overdue ? (
         <AppText variant="bodyStrong" color="dangerInk" testID="invoice-overdue-note">
-          {`Overdue since ${day(inv.dueDate)}.`}
+          {`Overdue: it was due ${day(inv.dueDate)}.`}
         </AppText>
       ) : null}
       {payable ? <PayByCard invoiceId={inv.id} label={office ? "Open card payment page" : "Pay by card"} variant={office ? "secondary" : "primary"} testID="pay-by-card" /> : null}

@@ -7,16 +7,13 @@ import { PageHeader } from "../../ui/PageHeader";
 import { TextField } from "../../ui/TextField";
 import { ChoiceGroup } from "../../ui/ChoiceGroup";
 import { Button } from "../../ui/Button";
-import { Card } from "../../ui/Card";
 import { FormError, Notice } from "../../ui/FormError";
 import { EmptyState, ErrorState, LoadingState } from "../../ui/States";
 import { LinkPressable } from "../../ui/LinkPressable";
 import { AppText } from "../../ui/Text";
-import { useSignedInUser } from "../../auth/useAuth";
 import { useAccountsQuery } from "../../api/accounts";
 import { useInvoicesQuery, useIssueStatementsMutation, type InvoiceDto, type InvoiceListParams, type InvoiceSort, type InvoiceStatus, type InvoiceTotalsDto } from "../../api/invoices";
 import { messageOf } from "../../api/client";
-import { useBakeryQuery } from "../../api/bakery";
 import { useDebounced } from "../../forms/useDebounced";
 import { cleanDate } from "../../ordering/dates";
 import { useIsWide } from "../../shell/useIsWide";
@@ -108,7 +105,7 @@ export function InvoicesScreen({ mode, accountId: startAccount }: InvoicesScreen
             value={q}
             onChangeText={setQ}
             testID="invoices-search"
-            autoCapitalize="characters"
+            autoCapitalize="none"
             autoCorrect={false}
             returnKeyType="search"
           />
@@ -233,7 +230,7 @@ function InvoiceTable({ invoices, totals, office, onOpen }: { invoices: InvoiceD
         {
           key: "number",
           label: "Invoice",
-          flex: 1.4,
+          flex: 1.3,
           render: (i) => (
             <View>
               <AppText variant="bodyStrong">{i.number}</AppText>
@@ -246,16 +243,16 @@ function InvoiceTable({ invoices, totals, office, onOpen }: { invoices: InvoiceD
           ),
           footer: <AppText variant="bodyStrong" testID="invoices-total-count">{invoicesLabel(totals.count)}</AppText>,
         },
-        ...(office ? [{ key: "account", label: "Account", flex: 1.6, render: (i: InvoiceDto) => i.accountName }] : []),
-        { key: "issued", label: "Issued", flex: 1, render: (i) => day(i.issueDate) },
-        { key: "due", label: "Due", flex: 1, render: (i) => <AppText color={i.overdue ? "dangerInk" : "ink"}>{day(i.dueDate)}</AppText> },
-        { key: "status", label: "Status", flex: 1, render: (i) => <InvoiceStatusBadge invoice={i} testID={`invoice-status-${i.id}`} /> },
-        { key: "total", label: "Total", flex: 1, align: "right", render: (i) => money(i.totalCents, i.currency), footer: <AppText variant="bodyStrong" align="right" testID="invoices-total-amount">{money(totals.totalCents, cur)}</AppText> },
-        { key: "paid", label: "Paid", flex: 1, align: "right", render: (i) => money(i.paidCents, i.currency), footer: <AppText variant="bodyStrong" align="right" testID="invoices-total-paid">{money(totals.paidCents, cur)}</AppText> },
+        ...(office ? [{ key: "account", label: "Account", flex: 1.5, render: (i: InvoiceDto) => i.accountName }] : []),
+        { key: "issued", label: "Issued", flex: 1.15, render: (i) => day(i.issueDate) },
+        { key: "due", label: "Due", flex: 1.15, render: (i) => <AppText color={i.overdue ? "dangerInk" : "ink"}>{day(i.dueDate)}</AppText> },
+        { key: "status", label: "Status", flex: 0.95, render: (i) => <InvoiceStatusBadge invoice={i} testID={`invoice-status-${i.id}`} /> },
+        { key: "total", label: "Total", flex: 0.9, align: "right", render: (i) => money(i.totalCents, i.currency), footer: <AppText variant="bodyStrong" align="right" testID="invoices-total-amount">{money(totals.totalCents, cur)}</AppText> },
+        { key: "paid", label: "Paid", flex: 0.9, align: "right", render: (i) => money(i.paidCents, i.currency), footer: <AppText variant="bodyStrong" align="right" testID="invoices-total-paid">{money(totals.paidCents, cur)}</AppText> },
         {
           key: "owed",
           label: "Owed",
-          flex: 1,
+          flex: 0.9,
           align: "right",
           render: (i) => (
             <AppText variant={i.amountDueCents > 0 ? "bodyStrong" : "body"} color={i.overdue ? "dangerInk" : "ink"} align="right">
@@ -307,7 +304,3 @@ const styles = StyleSheet.create({
   flex: { flex: 1, minWidth: 200 },
 });
 
-/** The bakery's currency for screens without an invoice at hand. */
-export function useCurrency(): string {
-  return useBakeryQuery().data?.currency ?? "USD";
-}

@@ -22,6 +22,8 @@ const KIND_LABELS: Record<string, string> = { invoice: "Invoice", receipt: "Rece
 
 type Show = MailStatus | "all";
 
+const attemptsLabel = (n: number) => (n === 1 ? "1 attempt" : `${n} attempts`);
+
 /** The owner's view of outgoing e-mail: what went, what waits for a retry, what failed (and send it again). */
 export function OutboxScreen() {
   const wide = useIsWide();
@@ -38,7 +40,7 @@ export function OutboxScreen() {
   const resendButton = (m: OutboxMailDto) =>
     m.status === "failed" ? <Button label="Send again" icon="refresh-cw" small variant="secondary" busy={resend.isPending && resend.variables === m.id} onPress={() => again(m)} testID={`outbox-resend-${m.id}`} accessibilityLabel={`Send again: ${m.subject} to ${m.to}`} /> : null;
   const when = (m: OutboxMailDto) =>
-    m.status === "sent" ? `Sent ${formatDateTime(m.sentAt, timeZone)}` : m.status === "failed" ? `Gave up after ${m.attempts} attempts` : `${m.attempts ? `${m.attempts} attempts · ` : ""}next try ${formatDateTime(m.nextAttemptAt, timeZone)}`;
+    m.status === "sent" ? `Sent ${formatDateTime(m.sentAt, timeZone)}` : m.status === "failed" ? `Gave up after ${attemptsLabel(m.attempts)}` : `${m.attempts ? `${attemptsLabel(m.attempts)} · ` : ""}next try ${formatDateTime(m.nextAttemptAt, timeZone)}`;
 
   let body: React.ReactNode;
   if (mails.isPending) body = <LoadingState label="Loading outgoing mail…" testID="outbox-loading" />;

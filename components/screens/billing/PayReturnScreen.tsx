@@ -6,6 +6,7 @@ import { PageHeader } from "../../ui/PageHeader";
 import { Card } from "../../ui/Card";
 import { DetailList } from "../../ui/DetailList";
 import { LinkButton } from "../../ui/LinkButton";
+import { Button } from "../../ui/Button";
 import { TextLink } from "../../ui/TextLink";
 import { EmptyState, ErrorState, LoadingState } from "../../ui/States";
 import { AppText, Heading } from "../../ui/Text";
@@ -169,6 +170,7 @@ function PayReturnBody({ invoiceId, cancelled, office }: PayReturnProps & { offi
         <AppText variant="small" color="muted">
           There is no need to pay again. If the invoice still shows money owed tomorrow, contact the bakery.
         </AppText>
+        <Button label="Check again" icon="refresh-cw" variant="secondary" busy={detail.isFetching} onPress={() => detail.refetch()} testID="pay-check-again" />
       </Card>
     );
   } else {

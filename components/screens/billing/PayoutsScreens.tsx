@@ -25,6 +25,10 @@ import { BackLink, BillingTable, Figure, billingStyles, day, money } from "./par
 import { colors, radii, space } from "../../theme";
 
 const PAYOUT_STATUS: Record<string, string> = { paid: "Arrived", pending: "On its way", in_transit: "On its way", failed: "Failed", canceled: "Cancelled" };
+/** Fees and refunds take money off: shown with a minus, and zero as zero. */
+const minus = (cents: number, currency: string) => (cents ? money(-Math.abs(cents), currency) : money(0, currency));
+const arrival = (status: string, date: string) => (status === "paid" ? `Arrived ${day(date)}` : `${PAYOUT_STATUS[status] ?? status} · due ${day(date)}`);
+
 const TXN_TYPE: Record<string, string> = { charge: "Card payment", payment: "Card payment", refund: "Refund", adjustment: "Adjustment", stripe_fee: "Processor fee" };
 
 /** The card processor's payouts to the bank, each to check against Panwise's payments and refunds. */
@@ -60,7 +64,7 @@ export function PayoutsScreen() {
           rowLabel={(p) => `Payout ${p.id}, ${money(p.amountCents, p.currency)}, ${p.reconciledAt ? "reconciled" : "to reconcile"}`}
           rowTestID={(p) => `payout-row-${p.id}`}
           columns={[
-            { key: "arrival", label: "Arrives", flex: 1, render: (p) => day(p.arrivalDate) },
+            { key: "arrival", label: "Arrival", flex: 1, render: (p) => day(p.arrivalDate) },
             { key: "id", label: "Payout", flex: 1.6, render: (p) => <AppText variant="small" selectable>{p.id}</AppText> },
             { key: "status", label: "Status", flex: 0.9, render: (p) => <Badge label={PAYOUT_STATUS[p.status] ?? p.status} tone={p.status === "failed" ? "danger" : "neutral"} /> },
             { key: "amount", label: "Amount", flex: 1, align: "right", render: (p) => <AppText variant="bodyStrong" align="right">{money(p.amountCents, p.currency)}</AppText> },
@@ -84,7 +88,7 @@ export function PayoutsScreen() {
                     </AppText>
                     {p.reconciledAt ? <Badge label="Reconciled" tone="sage" testID={`payout-reconciled-${p.id}`} /> : <Badge label="To reconcile" tone="amber" testID={`payout-todo-${p.id}`} />}
                   </View>
-                  <AppText variant="small" color="muted">{`${PAYOUT_STATUS[p.status] ?? p.status} · arrives ${day(p.arrivalDate)}`}</AppText>
+                  <AppText variant="small" color="muted">{arrival(p.status, p.arrivalDate)}</AppText>
                   <AppText variant="small" color="muted" numberOfLines={1}>
                     {p.id}
                   </AppText>
@@ -149,11 +153,11 @@ function PayoutBody({ detail: d }: { detail: PayoutDetailDto }) {
   const cur = d.payout.currency;
   return (
     <>
-      <PageHeader overline="Payout" title={money(d.payout.amountCents, cur)} subtitle={`${PAYOUT_STATUS[d.payout.status] ?? d.payout.status} · arrives ${day(d.payout.arrivalDate)} · ${d.payout.id}`} testID="payout-title" />
+      <PageHeader overline="Payout" title={money(d.payout.amountCents, cur)} subtitle={`${arrival(d.payout.status, d.payout.arrivalDate)} · ${d.payout.id}`} testID="payout-title" />
       <View style={billingStyles.figures} testID="payout-sums">
         <Figure label="Card payments (gross)" value={money(d.grossCents, cur)} testID="payout-gross" />
-        <Figure label="Processor fees" value={money(-Math.abs(d.feesCents), cur)} testID="payout-fees" />
-        <Figure label="Refunds" value={money(-Math.abs(d.refundsCents), cur)} testID="payout-refunds" />
+        <Figure label="Processor fees" value={minus(d.feesCents, cur)} testID="payout-fees" />
+        <Figure label="Refunds" value={minus(d.refundsCents, cur)} testID="payout-refunds" />
         <Figure label="Net" value={money(d.netCents, cur)} testID="payout-net" tone={d.netMatchesPayout ? undefined : "danger"} />
       </View>
       {d.netMatchesPayout ? (
@@ -161,7 +165,9 @@ function PayoutBody({ detail: d }: { detail: PayoutDetailDto }) {
       ) : (
         <FormError message={`The net of its transactions (${money(d.netCents, cur)}) differs from the payout (${money(d.payout.amountCents, cur)}).`} testID="payout-net-mismatch" />
       )}
-      {d.unmatched > 0 ? (
+      {d.unmatched > 0 && d.reconciled ? (
+        <Notice tone="info" message={d.unmatched === 1 ? "1 transaction didn't match Panwise's records; the payout was marked reconciled anyway (see the note)." : `${d.unmatched} transactions didn't match Panwise's records; the payout was marked reconciled anyway (see the note).`} testID="payout-unmatched" />
+      ) : d.unmatched > 0 ? (
         <FormError message={d.unmatched === 1 ? "1 transaction doesn't match Panwise's records. It is marked in red below." : `${d.unmatched} transactions don't match Panwise's records. They are marked in red below.`} testID="payout-unmatched" />
       ) : null}
       <View style={[billingStyles.grid, wide && billingStyles.gridWide]}>
@@ -179,7 +185,7 @@ function PayoutBody({ detail: d }: { detail: PayoutDetailDto }) {
                   { key: "type", label: "Type", flex: 1, render: (t) => TXN_TYPE[t.type] ?? t.type },
                   { key: "invoice", label: "Invoice", flex: 1.6, render: (t) => <TxnInvoice t={t} /> },
                   { key: "amount", label: "Amount", flex: 0.9, align: "right", render: (t) => money(t.amountCents, cur) },
-                  { key: "fee", label: "Fee", flex: 0.7, align: "right", render: (t) => money(-Math.abs(t.feeCents), cur) },
+                  { key: "fee", label: "Fee", flex: 0.7, align: "right", render: (t) => minus(t.feeCents, cur) },
                   { key: "net", label: "Net", flex: 0.9, align: "right", render: (t) => money(t.netCents, cur) },
                 ]}
               />
@@ -194,7 +200,7 @@ function PayoutBody({ detail: d }: { detail: PayoutDetailDto }) {
                       <AppText variant="bodyStrong">{money(t.amountCents, cur)}</AppText>
                     </View>
                     <TxnInvoice t={t} />
-                    <AppText variant="small" color={t.matched ? "muted" : "ink"}>{`Fee ${money(-Math.abs(t.feeCents), cur)} · net ${money(t.netCents, cur)}`}</AppText>
+                    <AppText variant="small" color={t.matched ? "muted" : "ink"}>{`Fee ${minus(t.feeCents, cur)} · net ${money(t.netCents, cur)}`}</AppText>
                   </View>
                 ))}
               </View>

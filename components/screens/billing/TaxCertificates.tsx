@@ -10,7 +10,8 @@ import { ErrorState, LoadingState } from "../../ui/States";
 import { AppText } from "../../ui/Text";
 import { messageOf } from "../../api/client";
 import { downloadCertificate, useCertificatesQuery, useReviewCertificateMutation, useUploadCertificateMutation, type TaxCertificateDto } from "../../api/accountBilling";
-import { useBakeryQuery } from "../../api/bakery";
+import { useBakeryQuery, useBakeryTimeZone } from "../../api/bakery";
+import { formatDate } from "../../format";
 import { cleanDate } from "../../ordering/dates";
 import { billingStyles, day } from "./parts";
 import { colors, radii, space } from "../../theme";
@@ -41,6 +42,7 @@ export interface TaxCertificatesCardProps {
 export function TaxCertificatesCard({ accountId, canUpload, canReview, audience }: TaxCertificatesCardProps) {
   const certs = useCertificatesQuery(accountId);
   const review = useReviewCertificateMutation(accountId);
+  const timeZone = useBakeryTimeZone();
   const [fileError, setFileError] = useState<string | null>(null);
 
   let body: React.ReactNode;
@@ -65,7 +67,7 @@ export function TaxCertificatesCard({ accountId, canUpload, canReview, audience 
               <View key={c.id} style={[styles.row, i > 0 && styles.divider]} testID={`cert-${c.id}`}>
                 <View style={billingStyles.cardTop}>
                   <Badge label={c.expired ? "Expired" : STATUS_LABEL[c.status]} tone={c.expired ? "danger" : STATUS_TONE[c.status]} testID={`cert-${c.id}-status`} />
-                  <AppText variant="small" color="muted">{`Expires ${day(c.expiresOn)} · uploaded ${day(c.createdAt)}`}</AppText>
+                  <AppText variant="small" color="muted">{`Expires ${day(c.expiresOn)} · uploaded ${formatDate(c.createdAt, timeZone)}`}</AppText>
                 </View>
                 <View style={billingStyles.buttons}>
                   <Button
