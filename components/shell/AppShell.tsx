@@ -1,5 +1,5 @@
 import React from "react";
-import { Platform, Pressable, StyleSheet, View } from "react-native";
+import { Platform, Pressable, StyleSheet, View, ScrollView } from "react-native";
 import { Link, usePathname } from "expo-router";
 import Feather from "@expo/vector-icons/Feather";
 import { useSafeAreaInsets } from "react-native-safe-area-context";
@@ -38,11 +38,12 @@ export function AppShell({ area, children }: { area: HomeArea; children: React.R
               {AREA_LABEL[area]}
             </AppText>
           </View>
-          <View style={styles.sideItems}>
+          {/* Scrolls when the list is taller than the window (the owner has many entries). */}
+          <ScrollView style={styles.sideScroll} contentContainerStyle={styles.sideItems}>
             {items.map((item) => (
               <SideItem key={item.key} item={item} active={isActive(item, pathname)} />
             ))}
-          </View>
+          </ScrollView>
           <View style={styles.sideFooter}>
             <View>
               <AppText variant="bodyStrong" color="navInk" testID="signed-in-name" numberOfLines={1}>
@@ -169,7 +170,8 @@ const styles = StyleSheet.create({
     gap: space.xl,
   },
   sideBrand: { paddingHorizontal: space.sm, gap: space.sm },
-  sideItems: { gap: space.xs, flex: 1 },
+  sideScroll: { flex: 1, marginHorizontal: -space.xs },
+  sideItems: { gap: space.xs, paddingHorizontal: space.xs },
   sideItem: {
     minHeight: layout.minTouch + 4,
     flexDirection: "row",
