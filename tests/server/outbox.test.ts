@@ -47,6 +47,29 @@ describe("mail that is never lost", () => {
     expect(new Set(ids).size).toBe(ids.length);
   });
 
+  it("500 confirmations queued while the mail server is down for a minute all arrive, exactly once", async () => {
+    const smtpPort = t.mail.smtpPort;
+    await t.mail.close();
+    const { enqueueMail } = await import("../../server/mail/outbox.service");
+    await t.ds.transaction(async (m) => {
+      for (let i = 0; i < 500; i++) await enqueueMail(m, t.ctx, "order_placed", { to: `burst${i}@cafe.test`, fromName: "Test Bakery", subject: `Order received #${i}`, html: `<p>${i}</p>`, text: String(i) });
+    });
+    // A minute of the server being down: the worker keeps trying and backing off.
+    for (let s = 0; s < 6; s++) {
+      await processOutbox(t.ctx, 500);
+      t.clock.advance(10_000);
+    }
+    t.mail = await startMailFake({ smtpPort, httpPort: 0 });
+    for (let i = 0; i < 20 && t.mail.messages.filter((m) => m.subject.startsWith("Order received #")).length < 500; i++) {
+      t.clock.advance(5 * 60 * 1000);
+      await processOutbox(t.ctx, 500);
+    }
+    const burst = t.mail.messages.filter((m) => m.subject.startsWith("Order received #"));
+    expect(burst).toHaveLength(500);
+    expect(new Set(burst.map((m) => m.to[0])).size).toBe(500);
+    expect(await t.ds.getRepository(OutboxMail).countBy({ kind: "order_placed", status: "sent" })).toBeGreaterThanOrEqual(500);
+  }, 60_000);
+
   it("gives up after the last attempt; the owner sees it failed and sends it again", async () => {
     const repo = t.ds.getRepository(OutboxMail);
     const row = await repo.save(repo.create({ messageId: "<stuck.1@panwise.test>", kind: "test", toAddress: "stuck@place.test", fromName: "Test", subject: "Stuck", html: "<p>x</p>", text: "x", status: "pending", attempts: MAX_ATTEMPTS - 1, nextAttemptAt: t.clock.now() }));
