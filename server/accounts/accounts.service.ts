@@ -23,6 +23,8 @@ function dto(a: CustomerAccount, buyers: number): AccountDto {
     billingEmail: a.billingEmail,
     status: a.status,
     notes: a.notes,
+    paymentTerms: a.paymentTerms,
+    creditHold: a.creditHold,
     buyerCount: buyers,
     createdAt: a.createdAt.toISOString(),
     updatedAt: a.updatedAt.toISOString(),
@@ -48,7 +50,7 @@ export async function getAccount(ctx: AppContext, actor: SessionUser, id: number
   return dto(a, (await buyerCounts(ctx, [a.id])).get(a.id) ?? 0);
 }
 
-export async function createAccount(ctx: AppContext, input: Omit<AccountDto, "id" | "buyerCount" | "createdAt" | "updatedAt">): Promise<AccountDto> {
+export async function createAccount(ctx: AppContext, input: Omit<AccountDto, "id" | "buyerCount" | "createdAt" | "updatedAt" | "paymentTerms" | "creditHold">): Promise<AccountDto> {
   const repo = ctx.dataSource.getRepository(CustomerAccount);
   const saved = await repo.save(repo.create(input));
   return dto(saved, 0);

@@ -41,6 +41,10 @@ export interface AccountDto {
   billingEmail: string;
   status: AccountStatus;
   notes: string;
+  /** "card", "net7", "net14" or "net30" (shared/billing.ts). */
+  paymentTerms: "card" | "net7" | "net14" | "net30";
+  /** On hold because invoices are overdue (paying them lifts it). */
+  creditHold: boolean;
   buyerCount: number;
   createdAt: string;
   updatedAt: string;

@@ -29,6 +29,8 @@ export function account(overrides: Partial<AccountDto> = {}): AccountDto {
     billingEmail: "accounts@tidewater.test",
     status: "active",
     notes: "",
+    paymentTerms: "card",
+    creditHold: false,
     buyerCount: 1,
     createdAt: "2025-11-01T10:00:00.000Z",
     updatedAt: "2025-11-20T10:00:00.000Z",

@@ -24,7 +24,7 @@ describe("customer accounts", () => {
   it("creates, reads, edits and closes an account", async () => {
     const created = await t.http().post("/api/accounts").set("Authorization", `Bearer ${owner}`).send(valid);
     expect(created.status).toBe(201);
-    expect(created.body.account).toMatchObject({ ...valid, billingEmail: "billing@copperline.test", status: "active", buyerCount: 0 });
+    expect(created.body.account).toMatchObject({ ...valid, billingEmail: "billing@copperline.test", status: "active", buyerCount: 0, paymentTerms: "card", creditHold: false });
     const id = created.body.account.id;
 
     const edited = await t.http().patch(`/api/accounts/${id}`).set("Authorization", `Bearer ${owner}`).send({ contactName: "Ada F.", status: "on_hold" });

@@ -89,7 +89,7 @@ export function AccountDetailScreen({ id }: { id: number }) {
           <AccountDeliveryCard accountId={a.id} editable={isOwner} />
         </View>
         <View style={[styles.col, wide && styles.sideCol]}>
-          <AccountBillingCard accountId={a.id} canChangeTerms={isOwner} />
+          <AccountBillingCard accountId={a.id} canChangeTerms={isOwner} currentTerms={a.paymentTerms} />
           <TaxCertificatesCard accountId={a.id} canUpload={isOwner} canReview={isOwner} audience="office" />
           {isOwner ? <StatusCard account={a} /> : null}
           {isOwner ? <CalendarFeedCard accountId={a.id} /> : null}

@@ -14,7 +14,7 @@ import { billingStyles, money } from "./parts";
 import { invoicesLabel } from "./InvoicesScreen";
 
 /** An account's billing on its office page: what it owes, its invoices, and (owner) its payment terms. */
-export function AccountBillingCard({ accountId, canChangeTerms }: { accountId: number; canChangeTerms: boolean }) {
+export function AccountBillingCard({ accountId, canChangeTerms, currentTerms }: { accountId: number; canChangeTerms: boolean; currentTerms?: PaymentTerms }) {
   const invoices = useInvoicesQuery({ accountId, sort: "newest" });
   const open = invoices.data?.invoices.filter((i) => i.amountDueCents > 0 && i.status !== "void") ?? [];
   const overdue = open.filter((i) => i.overdue);
@@ -39,14 +39,19 @@ export function AccountBillingCard({ accountId, canChangeTerms }: { accountId: n
         </AppText>
       )}
       <LinkButton href={`/office/invoices?accountId=${accountId}` as never} label="See its invoices" icon="file-text" variant="secondary" testID="account-invoices-link" />
-      {canChangeTerms ? <TermsForm accountId={accountId} newestKind={newest?.kind} /> : null}
+      {currentTerms ? (
+        <AppText testID="account-terms-current">
+          Payment terms: {PAYMENT_TERMS_LABELS[currentTerms]}
+        </AppText>
+      ) : null}
+      {canChangeTerms ? <TermsForm accountId={accountId} newestKind={newest?.kind} currentTerms={currentTerms} /> : null}
     </Card>
   );
 }
 
-function TermsForm({ accountId, newestKind }: { accountId: number; newestKind?: "order" | "statement" }) {
+function TermsForm({ accountId, newestKind, currentTerms }: { accountId: number; newestKind?: "order" | "statement"; currentTerms?: PaymentTerms }) {
   const mutation = useSetTermsMutation(accountId);
-  const [terms, setTerms] = useState<PaymentTerms | null>(null);
+  const [terms, setTerms] = useState<PaymentTerms | null>(currentTerms ?? null);
   const [error, setError] = useState<string | null>(null);
   const save = () => {
     setError(null);
@@ -60,7 +65,9 @@ function TermsForm({ accountId, newestKind }: { accountId: number; newestKind?: 
     <View style={{ gap: 12 }} testID="account-terms">
       <AppText variant="label">Payment terms</AppText>
       <AppText variant="small" color="muted">
-        {newestKind
+        {currentTerms
+          ? "Changing terms applies to invoices issued from now on."
+          : newestKind
           ? `Its newest invoice was ${newestKind === "order" ? "a per-delivery invoice paid by card" : "a weekly statement on net terms"}. Changing terms applies to invoices issued from now on.`
           : "Changing terms applies to invoices issued from now on."}
       </AppText>
