@@ -88,6 +88,9 @@ export async function listOrders(ctx: AppContext, actor: SessionUser, q: { from?
 // ---- checks shared by every write ------------------------------------------------------------
 
 function refuseIfAccountBlocked(account: CustomerAccount, bakery: { name: string; phone: string; email: string }) {
+  if (account.status === "on_hold" && account.creditHold) {
+    throw new HttpError(403, "account_on_hold", `${account.businessName} has overdue invoices, so new orders and changes are paused. Pay them under Invoices and ordering opens again at once, or call ${bakery.name} on ${bakery.phone || bakery.email}.`, undefined, { creditHold: true });
+  }
   if (account.status === "on_hold") {
     throw new HttpError(403, "account_on_hold", `${account.businessName} is on hold, so new orders and changes are paused. Please call ${bakery.name} on ${bakery.phone || bakery.email} to lift the hold.`);
   }

@@ -30,6 +30,7 @@ import { colors, layout, radii, space } from "../../theme";
 export const HOME_DAYS = 14;
 
 export function accountStatusNote(account: AccountDto): string | null {
+  if (account.status === "on_hold" && account.creditHold) return "New orders are paused because invoices are overdue. Pay them under Invoices and ordering opens again straight away.";
   if (account.status === "on_hold") return "This account is on hold. Please contact the bakery before planning new orders.";
   if (account.status === "closed") return "This account is closed. Contact the bakery if you'd like to order again.";
   return null;
