@@ -1,7 +1,6 @@
 import React, { useState } from "react";
-import { Pressable, StyleSheet, View } from "react-native";
+import { StyleSheet, View } from "react-native";
 import { useRouter } from "expo-router";
-import Feather from "@expo/vector-icons/Feather";
 import { Screen } from "../../ui/Screen";
 import { PageHeader } from "../../ui/PageHeader";
 import { TextField } from "../../ui/TextField";
@@ -10,13 +9,14 @@ import { EmptyState, ErrorState, LoadingState } from "../../ui/States";
 import { DataTable } from "../../ui/DataTable";
 import { StatusBadge } from "../../ui/Badge";
 import { LinkButton } from "../../ui/LinkButton";
+import { ListCard, ListCards } from "../../ui/ListCard";
 import { AppText } from "../../ui/Text";
 import { useSignedInUser } from "../../auth/useAuth";
 import { useAccountsQuery } from "../../api/accounts";
 import { useDebounced } from "../../forms/useDebounced";
 import { useIsWide } from "../../shell/useIsWide";
 import { ACCOUNT_STATUS_LABELS, ACCOUNT_STATUSES, type AccountDto, type AccountStatus } from "../../../shared/schemas/accounts";
-import { colors, layout, radii, space } from "../../theme";
+import { space } from "../../theme";
 
 type StatusFilter = AccountStatus | "all";
 
@@ -110,15 +110,13 @@ export function AccountsListScreen() {
           ]}
         />
       ) : (
-        <View style={styles.cards} testID="accounts-list">
+        <ListCards testID="accounts-list">
           {accounts.data.map((a) => (
-            <Pressable
+            <ListCard
               key={a.id}
               onPress={() => open(a)}
-              accessibilityRole="button"
               accessibilityLabel={`${a.businessName}, ${ACCOUNT_STATUS_LABELS[a.status]}`}
               testID={`account-row-${a.id}`}
-              style={({ pressed }) => [styles.card, pressed && styles.cardPressed]}
             >
               <View style={styles.cardText}>
                 <View style={styles.cardTop}>
@@ -134,10 +132,9 @@ export function AccountsListScreen() {
                   {[a.contactName, buyersLabel(a.buyerCount)].filter(Boolean).join(" · ")}
                 </AppText>
               </View>
-              <Feather name="chevron-right" size={20} color={colors.muted} />
-            </Pressable>
+            </ListCard>
           ))}
-        </View>
+        </ListCards>
       )}
       {accounts.data && accounts.data.length > 0 ? (
         <AppText variant="small" color="muted" testID="accounts-count">
@@ -152,19 +149,6 @@ const styles = StyleSheet.create({
   filters: { gap: space.md },
   filtersWide: { flexDirection: "row", alignItems: "flex-end", gap: space.xl },
   searchWide: { flex: 1, maxWidth: 420 },
-  cards: { gap: space.sm },
-  card: {
-    minHeight: layout.minTouch,
-    flexDirection: "row",
-    alignItems: "center",
-    gap: space.md,
-    padding: space.lg,
-    backgroundColor: colors.surface,
-    borderRadius: radii.lg,
-    borderWidth: 1,
-    borderColor: colors.border,
-  },
-  cardPressed: { backgroundColor: colors.rowHover },
   cardText: { flex: 1, gap: space.xxs },
   cardTop: { flexDirection: "row", alignItems: "center", gap: space.sm },
   flex: { flex: 1 },

@@ -1,7 +1,6 @@
 import React, { useState } from "react";
-import { Pressable, StyleSheet, View } from "react-native";
+import { StyleSheet, View } from "react-native";
 import { useRouter } from "expo-router";
-import Feather from "@expo/vector-icons/Feather";
 import { Screen } from "../../ui/Screen";
 import { PageHeader } from "../../ui/PageHeader";
 import { Card } from "../../ui/Card";
@@ -13,6 +12,7 @@ import { TextLink } from "../../ui/TextLink";
 import { Badge } from "../../ui/Badge";
 import { FormError, Notice } from "../../ui/FormError";
 import { EmptyState, ErrorState, LoadingState } from "../../ui/States";
+import { ListCard, ListCards } from "../../ui/ListCard";
 import { AppText } from "../../ui/Text";
 import { useCreatePriceListMutation, useDeletePriceListMutation, usePriceListsQuery, useUpdatePriceListMutation } from "../../api/priceLists";
 import { useProductsQuery } from "../../api/products";
@@ -22,7 +22,7 @@ import { useMoney } from "../ordering/parts";
 import { applyPercentOff, parseMoney, toDecimal } from "../../../shared/money";
 import { priceListInputSchema, type PriceListDto, type PriceListInput, type ProductDto } from "../../../shared/schemas/catalog";
 import type { FieldErrors } from "../../../shared/errors";
-import { colors, layout, radii, space } from "../../theme";
+import { colors, radii, space } from "../../theme";
 
 export function describePriceList(list: PriceListDto): string {
   if (list.kind === "percent") return `${list.percentOff} % off list prices`;
@@ -51,15 +51,13 @@ export function PriceListsScreen({ notice }: { notice?: string }) {
       ) : lists.data.length === 0 ? (
         <EmptyState icon="tag" title="No price lists yet" message="Every account pays list prices until you make one." action={<LinkButton href="/office/price-lists/new" label="New price list" icon="plus" />} testID="price-lists-empty" />
       ) : (
-        <View style={styles.cards} testID="price-lists-list">
+        <ListCards testID="price-lists-list">
           {lists.data.map((l) => (
-            <Pressable
+            <ListCard
               key={l.id}
               onPress={() => router.push(`/office/price-lists/${l.id}`)}
-              accessibilityRole="button"
               accessibilityLabel={`${l.name}, ${describePriceList(l)}`}
               testID={`price-list-${l.id}`}
-              style={({ pressed }) => [styles.card, pressed && styles.pressed]}
             >
               <View style={styles.cardText}>
                 <AppText variant="bodyStrong">{l.name}</AppText>
@@ -68,10 +66,9 @@ export function PriceListsScreen({ notice }: { notice?: string }) {
                 </AppText>
                 <Badge label={usedBy(l.accountCount)} tone={l.accountCount ? "crust" : "neutral"} />
               </View>
-              <Feather name="chevron-right" size={20} color={colors.muted} />
-            </Pressable>
+            </ListCard>
           ))}
-        </View>
+        </ListCards>
       )}
     </Screen>
   );
@@ -244,19 +241,6 @@ function PriceListForm({ existing, products, onDone }: { existing?: PriceListDto
 
 const styles = StyleSheet.create({
   flex: { flex: 1 },
-  cards: { gap: space.sm },
-  card: {
-    minHeight: layout.minTouch,
-    flexDirection: "row",
-    alignItems: "center",
-    gap: space.md,
-    padding: space.lg,
-    backgroundColor: colors.surface,
-    borderRadius: radii.lg,
-    borderWidth: 1,
-    borderColor: colors.border,
-  },
-  pressed: { backgroundColor: colors.rowHover },
   cardText: { flex: 1, gap: space.xxs },
   items: { gap: space.md },
   itemRow: { flexDirection: "row", alignItems: "flex-end", gap: space.md, flexWrap: "wrap" },

@@ -1,7 +1,6 @@
 import React, { useState } from "react";
-import { Pressable, StyleSheet, View } from "react-native";
+import { StyleSheet, View } from "react-native";
 import { useRouter } from "expo-router";
-import Feather from "@expo/vector-icons/Feather";
 import { Screen } from "../../ui/Screen";
 import { PageHeader } from "../../ui/PageHeader";
 import { Card } from "../../ui/Card";
@@ -14,6 +13,7 @@ import { MultiChoice } from "../../ui/MultiChoice";
 import { TextLink } from "../../ui/TextLink";
 import { FormError, Notice } from "../../ui/FormError";
 import { EmptyState, ErrorState, LoadingState } from "../../ui/States";
+import { ListCard, ListCards } from "../../ui/ListCard";
 import { AppText } from "../../ui/Text";
 import { useSignedInUser } from "../../auth/useAuth";
 import { ApiError, messageOf } from "../../api/client";
@@ -32,7 +32,7 @@ import { STEP_LABELS } from "../../../shared/production";
 import { celsiusToFahrenheit } from "../../../shared/units";
 import type { FormulaDto } from "../../../shared/schemas/production";
 import type { ProductDto } from "../../../shared/schemas/catalog";
-import { colors, layout, radii, space } from "../../theme";
+import { colors, space } from "../../theme";
 
 const withF = (c: number) => `${c} °C (${Math.round(celsiusToFahrenheit(c))} °F)`;
 
@@ -101,9 +101,9 @@ export function FormulasScreen({ area }: { area: KitchenArea }) {
     );
   else
     body = (
-      <View style={styles.cards} testID="formulas-list">
+      <ListCards testID="formulas-list">
         {formulas.data.map((f) => (
-          <Pressable key={f.id} onPress={() => open(f)} accessibilityRole="button" accessibilityLabel={`${f.name}, version ${f.version}`} testID={`formula-row-${f.id}`} style={({ pressed }) => [styles.card, pressed && styles.pressed]}>
+          <ListCard key={f.id} onPress={() => open(f)} accessibilityLabel={`${f.name}, version ${f.version}`} testID={`formula-row-${f.id}`}>
             <View style={styles.flex}>
               <View style={styles.titleRow}>
                 <AppText variant="heading" style={styles.flex}>
@@ -114,10 +114,9 @@ export function FormulasScreen({ area }: { area: KitchenArea }) {
               <AppText variant="small" color="muted">{`Hydration ${formatPercent(f.figures.hydrationPercent)} (effective ${formatPercent(f.figures.effectiveHydrationPercent)}) · ${f.paste ? `paste ${formatPercent(f.figures.pasteSharePercent)} of flour` : "no paste"}`}</AppText>
               <AppText variant="small">{`For: ${productNames(f.productIds, products.data)}`}</AppText>
             </View>
-            <Feather name="chevron-right" size={20} color={colors.muted} />
-          </Pressable>
+          </ListCard>
         ))}
-      </View>
+      </ListCards>
     );
 
   return (
@@ -420,19 +419,6 @@ function ProductsCard({ formula }: { formula: FormulaDto }) {
 const styles = StyleSheet.create({
   flex: { flex: 1, minWidth: 0 },
   stack: { gap: space.lg },
-  cards: { gap: space.sm },
-  card: {
-    minHeight: layout.minTouch,
-    flexDirection: "row",
-    alignItems: "center",
-    gap: space.md,
-    padding: space.lg,
-    backgroundColor: colors.surface,
-    borderRadius: radii.lg,
-    borderWidth: 1,
-    borderColor: colors.border,
-  },
-  pressed: { backgroundColor: colors.rowHover },
   titleRow: { flexDirection: "row", alignItems: "center", flexWrap: "wrap", gap: space.sm },
   pair: { gap: space.lg },
   pairWide: { flexDirection: "row", alignItems: "flex-start" },

@@ -1,7 +1,6 @@
 import React, { useState } from "react";
-import { Pressable, StyleSheet, View } from "react-native";
+import { StyleSheet, View } from "react-native";
 import { useRouter } from "expo-router";
-import Feather from "@expo/vector-icons/Feather";
 import { Screen } from "../../ui/Screen";
 import { PageHeader } from "../../ui/PageHeader";
 import { Card } from "../../ui/Card";
@@ -14,6 +13,7 @@ import { TextField } from "../../ui/TextField";
 import { TextLink } from "../../ui/TextLink";
 import { FormError, Notice } from "../../ui/FormError";
 import { EmptyState, ErrorState, LoadingState } from "../../ui/States";
+import { ListCard, ListCards } from "../../ui/ListCard";
 import { AppText } from "../../ui/Text";
 import { ApiError } from "../../api/client";
 import { useCreateIngredientMutation, useIngredientsQuery, useUpdateIngredientMutation } from "../../api/ingredients";
@@ -29,7 +29,7 @@ import { ingredientInputSchema, type IngredientDto, type IngredientInput } from 
 import { parseMoney, toDecimal } from "../../../shared/money";
 import { formatMass } from "../../../shared/units";
 import type { FieldErrors } from "../../../shared/errors";
-import { colors, layout, radii, space } from "../../theme";
+import { space } from "../../theme";
 
 export interface IngredientValues {
   name: string;
@@ -111,18 +111,17 @@ export function IngredientsScreen({ area }: { area: KitchenArea }) {
     );
   else
     body = (
-      <View style={styles.cards} testID="ingredients-list">
+      <ListCards testID="ingredients-list">
         {ingredients.data.map((i) => (
-          <Pressable key={i.id} onPress={() => open(i)} accessibilityRole="button" accessibilityLabel={`${i.name}, ${KIND_LABEL[i.kind]}`} testID={`ingredient-row-${i.id}`} style={({ pressed }) => [styles.card, pressed && styles.pressed]}>
+          <ListCard key={i.id} onPress={() => open(i)} accessibilityLabel={`${i.name}, ${KIND_LABEL[i.kind]}`} testID={`ingredient-row-${i.id}`}>
             <View style={styles.flex}>
               <AppText variant="bodyStrong">{i.name}</AppText>
               <AppText variant="small" color="muted">{`${KIND_LABEL[i.kind]} · water ${formatPercent(i.waterPercent)}${i.allergens.length ? ` · ${i.allergens.map((a) => ALLERGEN_LABEL[a]).join(", ")}` : ""}`}</AppText>
               <AppText variant="small">{packText(i, money)}</AppText>
             </View>
-            <Feather name="chevron-right" size={20} color={colors.muted} />
-          </Pressable>
+          </ListCard>
         ))}
-      </View>
+      </ListCards>
     );
 
   return (
@@ -286,19 +285,6 @@ export function IngredientForm({ initial, submitLabel, busy, onSubmit }: Ingredi
 
 const styles = StyleSheet.create({
   flex: { flex: 1, minWidth: 0 },
-  cards: { gap: space.sm },
-  card: {
-    minHeight: layout.minTouch,
-    flexDirection: "row",
-    alignItems: "center",
-    gap: space.md,
-    padding: space.lg,
-    backgroundColor: colors.surface,
-    borderRadius: radii.lg,
-    borderWidth: 1,
-    borderColor: colors.border,
-  },
-  pressed: { backgroundColor: colors.rowHover },
   grid: { flexDirection: "row", flexWrap: "wrap", gap: space.md },
   cell: { flexGrow: 1, flexBasis: 160 },
 });

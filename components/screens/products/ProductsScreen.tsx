@@ -1,7 +1,6 @@
 import React, { useState } from "react";
-import { Pressable, StyleSheet, View } from "react-native";
+import { StyleSheet, View } from "react-native";
 import { useRouter } from "expo-router";
-import Feather from "@expo/vector-icons/Feather";
 import { Screen } from "../../ui/Screen";
 import { PageHeader } from "../../ui/PageHeader";
 import { ChoiceGroup } from "../../ui/ChoiceGroup";
@@ -10,13 +9,14 @@ import { EmptyState, ErrorState, LoadingState } from "../../ui/States";
 import { LinkButton } from "../../ui/LinkButton";
 import { Badge } from "../../ui/Badge";
 import { Notice } from "../../ui/FormError";
+import { ListCard, ListCards } from "../../ui/ListCard";
 import { AppText } from "../../ui/Text";
 import { useSignedInUser } from "../../auth/useAuth";
 import { useProductsQuery } from "../../api/products";
 import { useIsWide } from "../../shell/useIsWide";
 import { ProductPhoto, useMoney } from "../ordering/parts";
 import type { ProductDto } from "../../../shared/schemas/catalog";
-import { colors, layout, radii, space } from "../../theme";
+import { space } from "../../theme";
 
 type Filter = "active" | "archived" | "all";
 
@@ -85,15 +85,14 @@ export function ProductsScreen({ archived }: { archived?: string }) {
           ]}
         />
       ) : (
-        <View style={styles.cards} testID="products-list">
+        <ListCards testID="products-list">
           {shown.map((p) => (
-            <Pressable
+            <ListCard
               key={p.id}
               onPress={() => open(p)}
-              accessibilityRole="button"
               accessibilityLabel={`${p.name}, ${p.active ? "on offer" : "archived"}`}
               testID={`product-row-${p.id}`}
-              style={({ pressed }) => [styles.card, pressed && styles.pressed]}
+              compact
             >
               <ProductPhoto url={p.photoUrl} name={p.name} size={52} />
               <View style={styles.cardText}>
@@ -101,10 +100,9 @@ export function ProductsScreen({ archived }: { archived?: string }) {
                 <AppText variant="small" color="muted">{`${p.saleUnit} · ${money(p.listPriceCents)}`}</AppText>
                 <Badge label={p.active ? "On offer" : "Archived"} tone={p.active ? "sage" : "neutral"} />
               </View>
-              <Feather name="chevron-right" size={20} color={colors.muted} />
-            </Pressable>
+            </ListCard>
           ))}
-        </View>
+        </ListCards>
       );
   }
 
@@ -136,18 +134,5 @@ export function ProductsScreen({ archived }: { archived?: string }) {
 const styles = StyleSheet.create({
   flex: { flex: 1, minWidth: 0 },
   nameCell: { flexDirection: "row", alignItems: "center", gap: space.md },
-  cards: { gap: space.sm },
-  card: {
-    minHeight: layout.minTouch,
-    flexDirection: "row",
-    alignItems: "center",
-    gap: space.md,
-    padding: space.md,
-    backgroundColor: colors.surface,
-    borderRadius: radii.lg,
-    borderWidth: 1,
-    borderColor: colors.border,
-  },
-  pressed: { backgroundColor: colors.rowHover },
   cardText: { flex: 1, gap: space.xxs },
 });
