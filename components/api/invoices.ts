@@ -100,12 +100,24 @@ export interface RefundDto {
   createdAt: string;
 }
 
+export interface InvoiceEmailDto {
+  id: number;
+  kind: string;
+  to: string;
+  subject: string;
+  status: "pending" | "sending" | "sent" | "failed";
+  sentAt: string | null;
+  createdAt: string;
+}
+
 export interface InvoiceDetailDto {
   invoice: InvoiceDto;
   lines: InvoiceLineDto[];
   payments: PaymentDto[];
   creditNotes: CreditNoteDto[];
   refunds: RefundDto[];
+  /** The invoice mail and payment receipts, with their delivery status. */
+  emails?: InvoiceEmailDto[];
 }
 
 export interface InvoiceListParams {

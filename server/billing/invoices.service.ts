@@ -7,6 +7,7 @@ import { Order, OrderLine } from "../orders/order.entity";
 import { CustomerAccount } from "../accounts/account.entity";
 import { getBakery } from "../bakery/bakery.service";
 import { enqueueMail } from "../mail/outbox.service";
+import { OutboxMail } from "../mail/outbox.entity";
 import { invoiceMail } from "../mail/templates";
 import { renderInvoicePdf } from "./invoice.pdf";
 import { retryOnDeadlock } from "../db/retry";
@@ -338,6 +339,9 @@ export async function recordRefund(ctx: AppContext, m: EntityManager, r: { invoi
 export async function invoiceDetail(ctx: AppContext, id: number, m: EntityManager = ctx.dataSource.manager) {
   const inv = await m.getRepository(Invoice).findOneBy({ id });
   if (!inv) throw notFound("That invoice");
+  // The invoice's own mails (the invoice itself and payment receipts) name its number in the subject.
+  const emails = await m.getRepository(OutboxMail).createQueryBuilder("o")
+    .where("o.kind IN ('invoice', 'receipt') AND o.subject LIKE :n", { n: `%${inv.number}%` }).orderBy("o.id", "ASC").getMany();
   const [lines, payments, credits, refunds, account] = await Promise.all([
     m.getRepository(InvoiceLine).find({ where: { invoiceId: id }, order: { deliveryDate: "ASC", id: "ASC" } }),
     m.getRepository(Payment).find({ where: { invoiceId: id }, order: { id: "ASC" } }),
@@ -351,6 +355,7 @@ export async function invoiceDetail(ctx: AppContext, id: number, m: EntityManage
     payments: payments.map((p) => ({ id: p.id, method: p.method, amountCents: p.amountCents, reference: p.reference, receivedOn: p.receivedOn, stripePaymentIntentId: p.stripePaymentIntentId, stripeChargeId: p.stripeChargeId })),
     creditNotes: credits.map((c) => ({ id: c.id, number: c.number, reason: c.reason, totalCents: c.totalCents, subtotalCents: c.subtotalCents, taxCents: c.taxCents, disposition: c.disposition, issueDate: c.issueDate, lines: JSON.parse(c.lines), carriedFromInvoiceId: c.carriedToInvoiceId === id ? c.invoiceId : null })),
     refunds: refunds.map((r) => ({ id: r.id, stripeRefundId: r.stripeRefundId, amountCents: r.amountCents, createdAt: r.createdAt.toISOString() })),
+    emails: emails.map((e) => ({ id: e.id, kind: e.kind, to: e.toAddress, subject: e.subject, status: e.status, sentAt: e.sentAt?.toISOString() ?? null, createdAt: e.createdAt.toISOString() })),
   };
 }
 

@@ -147,6 +147,15 @@ describe("invoice detail", () => {
     expect(screen.getByTestId("invoice-pdf")).toBeOnTheScreen();
   });
 
+  it("lists the invoice's e-mails with where each one is", async () => {
+    setWidth(1280);
+    signedInAs(OWNER);
+    const withMail = { ...invoiceDetail({ overdue: true }), emails: [{ id: 7, kind: "invoice", to: "accounts@tidewater.test", subject: "Invoice HB-2025-00041", status: "failed" as const, sentAt: null, createdAt: "2025-12-01T18:00:00.000Z" }] };
+    mockApi({ ...sessionRoutes(OWNER), "GET /api/invoices/:id": () => ({ body: withMail }) });
+    renderApp("/office/invoices/41");
+    expect(await screen.findByTestId("invoice-email-7")).toHaveTextContent(/Invoice with PDF.*To accounts@tidewater\.test · Failed/);
+  });
+
   it("checks the payment form, shows the server's field error next to the amount, then records it", async () => {
     signedInAs(BOOKKEEPER);
     let calls = 0;

@@ -67,6 +67,7 @@ describe("dispatch, invoices and statements", () => {
     const detail = await t.http().get(`/api/invoices/${inv.id}`).set(auth(books));
     expect(detail.body.creditNotes).toEqual([expect.objectContaining({ number: "HB-CN-2026-00001", totalCents: 1958, disposition: "applied" })]);
     expect(detail.body.invoice.amountDueCents).toBe(5873 - 1958);
+    expect(detail.body.emails).toEqual([expect.objectContaining({ kind: "invoice", to: "pay@cardcafe.test", status: "pending" })]);
     expect((await t.ds.getRepository(Order).findOneByOrFail({ id: o.id })).status).toBe("delivered");
     const mail = await waitForMail(t, "pay@cardcafe.test");
     expect(mail.subject).toContain("HB-2026-00001");

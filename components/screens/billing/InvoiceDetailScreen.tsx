@@ -86,6 +86,7 @@ export function InvoiceDetailScreen({ id, mode }: InvoiceDetailProps) {
           {d.refunds.length ? <RefundsCard detail={d} /> : null}
           {office && payable ? <RecordPaymentCard detail={d} /> : null}
           {!office && payable && inv.kind === "statement" ? <OtherWaysCard /> : null}
+          {d.emails?.length ? <EmailsCard detail={d} /> : null}
         </View>
       </View>
     </Screen>
@@ -244,6 +245,23 @@ function RefundsCard({ detail }: { detail: InvoiceDetailDto }) {
         <View key={r.id} style={[styles.entry, i > 0 && styles.divider]} testID={`refund-${r.id}`}>
           <AppText variant="bodyStrong">{money(r.amountCents, cur)}</AppText>
           <AppText variant="small" color="muted">{`${formatDateTime(r.createdAt, timeZone)} · ${r.stripeRefundId}`}</AppText>
+        </View>
+      ))}
+    </Card>
+  );
+}
+
+const EMAIL_STATUS: Record<string, string> = { pending: "Waiting to send", sending: "Sending", sent: "Sent", failed: "Failed — the owner can send it again" };
+
+/** The invoice's e-mails: the invoice with its PDF, and receipts, with where they are. */
+function EmailsCard({ detail }: { detail: InvoiceDetailDto }) {
+  const timeZone = useBakeryTimeZone();
+  return (
+    <Card title="E-mails" testID="invoice-emails">
+      {(detail.emails ?? []).map((e, i) => (
+        <View key={e.id} style={[styles.entry, i > 0 && styles.divider]} testID={`invoice-email-${e.id}`}>
+          <AppText variant="bodyStrong">{e.kind === "receipt" ? "Payment receipt" : "Invoice with PDF"}</AppText>
+          <AppText variant="small" color="muted">{`To ${e.to} · ${EMAIL_STATUS[e.status] ?? e.status}${e.sentAt ? `, ${formatDateTime(e.sentAt, timeZone)}` : ""}`}</AppText>
         </View>
       ))}
     </Card>
