@@ -1,6 +1,9 @@
 import React from "react";
-import { Pressable, StyleSheet, View } from "react-native";
+import { Pressable, StyleSheet, View, type ViewStyle } from "react-native";
+import { Link } from "expo-router";
 import Feather from "@expo/vector-icons/Feather";
+import { AppText } from "./Text";
+import { LinkPressable } from "./LinkPressable";
 import { colors, layout, radii, space } from "../theme";
 
 export interface ListCardsProps {
@@ -44,6 +47,39 @@ export function ListCard({ onPress, accessibilityLabel, testID, compact, childre
   );
 }
 
+export interface LinkCardProps {
+  href: string;
+  icon: React.ComponentProps<typeof Feather>["name"];
+  title: string;
+  hint?: string;
+  testID?: string;
+  /** The icon in a round badge (a hub tile) instead of bare. */
+  iconBadge?: boolean;
+  /** Extra layout for the card, e.g. a flex basis in a wrapping grid. */
+  style?: ViewStyle;
+}
+
+/** A card that links to another screen: icon, title, a line about it, and a chevron (hubs and "More"). */
+export function LinkCard({ href, icon, title, hint, testID, iconBadge, style }: LinkCardProps) {
+  const glyph = <Feather name={icon} size={22} color={colors.crust} />;
+  return (
+    <Link href={href as never} asChild>
+      <LinkPressable accessibilityRole="link" testID={testID} style={StyleSheet.flatten([styles.card, styles.linkCard, style])} highlightStyle={styles.pressed}>
+        {iconBadge ? <View style={styles.badge}>{glyph}</View> : glyph}
+        <View style={styles.text}>
+          <AppText variant="bodyStrong">{title}</AppText>
+          {hint ? (
+            <AppText variant="small" color="muted">
+              {hint}
+            </AppText>
+          ) : null}
+        </View>
+        <Feather name="chevron-right" size={20} color={colors.muted} />
+      </LinkPressable>
+    </Link>
+  );
+}
+
 const styles = StyleSheet.create({
   cards: { gap: space.sm },
   card: {
@@ -58,5 +94,8 @@ const styles = StyleSheet.create({
     borderColor: colors.border,
   },
   compact: { padding: space.md },
+  linkCard: { minHeight: layout.minTouch + 16 },
+  badge: { width: 44, height: 44, borderRadius: 22, backgroundColor: colors.crustSoft, alignItems: "center", justifyContent: "center" },
+  text: { flex: 1, gap: space.xxs },
   pressed: { backgroundColor: colors.rowHover },
 });

@@ -1,15 +1,13 @@
 import React from "react";
 import { StyleSheet, View } from "react-native";
-import { Link } from "expo-router";
 import Feather from "@expo/vector-icons/Feather";
 import { Screen } from "../../ui/Screen";
 import { PageHeader } from "../../ui/PageHeader";
-import { LinkPressable } from "../../ui/LinkPressable";
-import { AppText } from "../../ui/Text";
+import { LinkCard } from "../../ui/ListCard";
 import { useSignedInUser } from "../../auth/useAuth";
 import { useIsWide } from "../../shell/useIsWide";
 import type { Role } from "../../../shared/roles";
-import { colors, layout, radii, space } from "../../theme";
+import { layout, space } from "../../theme";
 
 const LINKS: { key: string; href: string; icon: React.ComponentProps<typeof Feather>["name"]; title: string; about: string; roles?: Role[] }[] = [
   { key: "invoices", href: "/office/invoices", icon: "file-text", title: "Invoices", about: "Every invoice and statement; record payments, issue credit notes." },
@@ -29,20 +27,7 @@ export function BillingHubScreen() {
       <PageHeader overline="Billing" title="Money" subtitle="Payouts, what is owed, exports and the e-mail that carries invoices." testID="money-title" />
       <View style={[styles.grid, wide && styles.gridWide]}>
         {LINKS.filter((l) => !l.roles || l.roles.includes(user.role)).map((l) => (
-          <Link key={l.key} href={l.href as never} asChild>
-            <LinkPressable accessibilityRole="link" testID={`money-${l.key}`} style={StyleSheet.flatten([styles.tile, wide && styles.tileWide])} highlightStyle={styles.hover}>
-              <View style={styles.icon}>
-                <Feather name={l.icon} size={22} color={colors.crust} />
-              </View>
-              <View style={styles.text}>
-                <AppText variant="bodyStrong">{l.title}</AppText>
-                <AppText variant="small" color="muted">
-                  {l.about}
-                </AppText>
-              </View>
-              <Feather name="chevron-right" size={20} color={colors.muted} />
-            </LinkPressable>
-          </Link>
+          <LinkCard key={l.key} href={l.href} icon={l.icon} title={l.title} hint={l.about} iconBadge testID={`money-${l.key}`} style={wide ? styles.tileWide : undefined} />
         ))}
       </View>
     </Screen>
@@ -52,19 +37,5 @@ export function BillingHubScreen() {
 const styles = StyleSheet.create({
   grid: { gap: space.sm },
   gridWide: { flexDirection: "row", flexWrap: "wrap", gap: space.lg },
-  tile: {
-    minHeight: layout.minTouch + 24,
-    flexDirection: "row",
-    alignItems: "center",
-    gap: space.md,
-    padding: space.lg,
-    backgroundColor: colors.surface,
-    borderRadius: radii.lg,
-    borderWidth: 1,
-    borderColor: colors.border,
-  },
-  tileWide: { flexBasis: 320, flexGrow: 1 },
-  hover: { backgroundColor: colors.rowHover },
-  icon: { width: 44, height: 44, borderRadius: 22, backgroundColor: colors.crustSoft, alignItems: "center", justifyContent: "center" },
-  text: { flex: 1, gap: space.xxs },
+  tileWide: { flexBasis: 320, flexGrow: 1, minHeight: layout.minTouch + 24 },
 });

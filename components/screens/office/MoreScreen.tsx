@@ -1,15 +1,12 @@
 import React from "react";
 import { StyleSheet, View } from "react-native";
-import { Link } from "expo-router";
-import Feather from "@expo/vector-icons/Feather";
 import { Screen } from "../../ui/Screen";
 import { PageHeader } from "../../ui/PageHeader";
-import { LinkPressable } from "../../ui/LinkPressable";
-import { AppText } from "../../ui/Text";
+import { LinkCard } from "../../ui/ListCard";
 import { EmptyState } from "../../ui/States";
 import { useSignedInUser } from "../../auth/useAuth";
 import { tabsFor } from "../../shell/navItems";
-import { colors, layout, radii, space } from "../../theme";
+import { space } from "../../theme";
 import type { HomeArea } from "../../../shared/roles";
 
 const HINTS: Record<string, string> = {
@@ -34,20 +31,7 @@ export function MoreScreen({ area = "office" }: { area?: HomeArea }) {
       {more.length === 0 ? <EmptyState icon="grid" title="Everything is in the tab bar" message="There are no more screens for your role." testID="more-empty" /> : null}
       <View style={styles.list}>
         {more.map((item) => (
-          <Link key={item.key} href={item.href as never} asChild>
-            <LinkPressable accessibilityRole="link" testID={`more-${item.key}`} style={styles.row} highlightStyle={styles.hover}>
-              <Feather name={item.icon} size={22} color={colors.crust} />
-              <View style={styles.text}>
-                <AppText variant="bodyStrong">{item.label}</AppText>
-                {HINTS[item.key] ? (
-                  <AppText variant="small" color="muted">
-                    {HINTS[item.key]}
-                  </AppText>
-                ) : null}
-              </View>
-              <Feather name="chevron-right" size={20} color={colors.muted} />
-            </LinkPressable>
-          </Link>
+          <LinkCard key={item.key} href={item.href} icon={item.icon} title={item.label} hint={HINTS[item.key]} testID={`more-${item.key}`} />
         ))}
       </View>
     </Screen>
@@ -56,17 +40,4 @@ export function MoreScreen({ area = "office" }: { area?: HomeArea }) {
 
 const styles = StyleSheet.create({
   list: { gap: space.sm },
-  row: {
-    minHeight: layout.minTouch + 16,
-    flexDirection: "row",
-    alignItems: "center",
-    gap: space.md,
-    padding: space.lg,
-    backgroundColor: colors.surface,
-    borderRadius: radii.lg,
-    borderWidth: 1,
-    borderColor: colors.border,
-  },
-  hover: { backgroundColor: colors.rowHover },
-  text: { flex: 1, gap: space.xxs },
 });

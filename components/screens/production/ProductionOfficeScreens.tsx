@@ -1,6 +1,5 @@
 import React, { useState } from "react";
 import { StyleSheet, View } from "react-native";
-import { Link } from "expo-router";
 import Feather from "@expo/vector-icons/Feather";
 import { z } from "zod";
 import { Screen } from "../../ui/Screen";
@@ -9,7 +8,7 @@ import { Card } from "../../ui/Card";
 import { Button } from "../../ui/Button";
 import { TextField } from "../../ui/TextField";
 import { TextLink } from "../../ui/TextLink";
-import { LinkPressable } from "../../ui/LinkPressable";
+import { LinkCard } from "../../ui/ListCard";
 import { FormError, Notice } from "../../ui/FormError";
 import { ErrorState, LoadingState } from "../../ui/States";
 import { AppText } from "../../ui/Text";
@@ -19,7 +18,7 @@ import { formatDay } from "../../ordering/dates";
 import { kitchenPaths } from "../../production/paths";
 import { formatMass } from "../../../shared/units";
 import type { FieldErrors } from "../../../shared/errors";
-import { colors, layout, radii, space } from "../../theme";
+import { space } from "../../theme";
 
 /** The same rules as the API's PUT /api/production/settings. */
 export const productionSettingsSchema = z.object({
@@ -117,18 +116,7 @@ export function ProductionHubScreen() {
       <PageHeader title="Production" subtitle={next.data ? `Next bake day: ${formatDay(next.data)}.` : "What the bakery makes, and what it needs."} testID="production-hub-title" />
       <View style={styles.list}>
         {HUB_ITEMS.map((item) => (
-          <Link key={item.key} href={item.href() as never} asChild>
-            <LinkPressable accessibilityRole="link" testID={`production-${item.key}`} style={styles.row} highlightStyle={styles.hover}>
-              <Feather name={item.icon} size={22} color={colors.crust} />
-              <View style={styles.text}>
-                <AppText variant="bodyStrong">{item.label}</AppText>
-                <AppText variant="small" color="muted">
-                  {item.hint}
-                </AppText>
-              </View>
-              <Feather name="chevron-right" size={20} color={colors.muted} />
-            </LinkPressable>
-          </Link>
+          <LinkCard key={item.key} href={item.href()} icon={item.icon} title={item.label} hint={item.hint} testID={`production-${item.key}`} />
         ))}
       </View>
     </Screen>
@@ -139,17 +127,4 @@ const styles = StyleSheet.create({
   grid: { flexDirection: "row", flexWrap: "wrap", gap: space.md },
   cell: { flexGrow: 1, flexBasis: 200 },
   list: { gap: space.sm },
-  row: {
-    minHeight: layout.minTouch + 16,
-    flexDirection: "row",
-    alignItems: "center",
-    gap: space.md,
-    padding: space.lg,
-    backgroundColor: colors.surface,
-    borderRadius: radii.lg,
-    borderWidth: 1,
-    borderColor: colors.border,
-  },
-  hover: { backgroundColor: colors.rowHover },
-  text: { flex: 1, gap: space.xxs },
 });
