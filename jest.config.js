@@ -16,6 +16,8 @@ module.exports = {
     {
       displayName: "app",
       preset: "jest-expo",
+      // A cold transform cache (a fresh CI machine) makes a file's first render take well over Jest's 5 s default.
+      testTimeout: 30000,
       testMatch: ["<rootDir>/tests/app/**/*.test.tsx"],
       setupFilesAfterEnv: ["<rootDir>/tests/app/setup.ts"],
       transformIgnorePatterns: [
