@@ -16,8 +16,6 @@ module.exports = {
     {
       displayName: "app",
       preset: "jest-expo",
-      // A cold transform cache (a fresh CI machine) makes a file's first render take well over Jest's 5 s default.
-      testTimeout: 30000,
       testMatch: ["<rootDir>/tests/app/**/*.test.tsx"],
       setupFilesAfterEnv: ["<rootDir>/tests/app/setup.ts"],
       transformIgnorePatterns: [
@@ -28,6 +26,13 @@ module.exports = {
       displayName: "server",
       testEnvironment: "node",
       testMatch: ["<rootDir>/tests/server/**/*.test.ts", "<rootDir>/tests/shared/**/*.test.ts"],
+      transform: { "^.+\\.(t|j)sx?$": swc },
+      setupFiles: ["reflect-metadata"],
+    },
+    {
+      displayName: "fuzz",
+      testEnvironment: "node",
+      testMatch: ["<rootDir>/tests/fuzz/**/*.test.ts"],
       transform: { "^.+\\.(t|j)sx?$": swc },
       setupFiles: ["reflect-metadata"],
     },
