@@ -304,6 +304,10 @@ export class TaxCertificate {
   @Column({ type: "varchar", length: 40 })
   contentType: string;
 
+  /** Bytes stored for this certificate: counted against the account's storage quota (rows from before: 0). */
+  @Column({ type: "int", default: 0 })
+  sizeBytes: number;
+
   @Column({ type: "varchar", length: 10, default: "pending" })
   status: "pending" | "approved" | "rejected";
 
