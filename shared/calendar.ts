@@ -35,19 +35,59 @@ export function isCalendarDate(value: string): boolean {
   return DateTime.fromISO(value, { zone: "UTC" }).isValid;
 }
 
+/**
+ * The dates Panwise works with anywhere (API input, forms): 2000-01-01 to 2099-12-31. A bakery orders
+ * weeks ahead and keeps a few years of history, so a century is ample; everything outside is a typo
+ * or an attack, and refusing it keeps every date four-digit and every range small.
+ */
+export const DATE_MIN = "2000-01-01";
+export const DATE_MAX = "2099-12-31";
+/** The longest run of dates dateRange builds (a hard ceiling; the calendar asks for at most 120 days). */
+export const MAX_RANGE_DAYS = 400;
+
+const DAY_MS = 86_400_000;
+
+function utcDate(date: string): DateTime {
+  if (!isCalendarDate(date)) throw new RangeError(`Not a YYYY-MM-DD calendar date: ${JSON.stringify(String(date).slice(0, 40))}`);
+  return DateTime.fromISO(date, { zone: "UTC" });
+}
+
+/** Whole days from one YYYY-MM-DD date to another (negative when `to` is earlier): arithmetic on UTC midnights. */
+export function daysBetween(from: string, to: string): number {
+  return Math.round((utcDate(to).toMillis() - utcDate(from).toMillis()) / DAY_MS);
+}
+
+/** Within DATE_MIN..DATE_MAX, compared as day counts. */
+export function isSupportedDate(date: string): boolean {
+  return isCalendarDate(date) && daysBetween(DATE_MIN, date) >= 0 && daysBetween(date, DATE_MAX) >= 0;
+}
+
 export function weekdayOf(date: string): Weekday {
   return DateTime.fromISO(date, { zone: "UTC" }).weekday as Weekday;
 }
 
+/**
+ * The date `days` days later (or earlier). Past 9999-12-31 luxon writes "+010000-01-01", which sorts
+ * before "9999-12-31" as a string (from memory of ISO 8601's expanded years; seen on this machine), so a
+ * result outside the years 0000–9999 is refused rather than returned.
+ */
 export function addDays(date: string, days: number): string {
-  return DateTime.fromISO(date, { zone: "UTC" }).plus({ days }).toISODate()!;
+  if (!Number.isSafeInteger(days)) throw new RangeError(`Not a whole number of days: ${days}`);
+  const d = utcDate(date).plus({ days });
+  if (!d.isValid || d.year < 0 || d.year > 9999) throw new RangeError(`${date} ${days < 0 ? "-" : "+"} ${Math.abs(days)} days is outside the years 0000–9999.`);
+  return d.toISODate()!;
 }
 
-/** Dates from..to inclusive. */
-export function dateRange(from: string, to: string): string[] {
-  const out: string[] = [];
-  for (let d = from; d <= to; d = addDays(d, 1)) out.push(d);
-  return out;
+/**
+ * Dates from..to inclusive; empty when `to` is before `from`. The length is worked out first from day
+ * counts, and a span longer than `maxDays` throws before anything is built.
+ */
+export function dateRange(from: string, to: string, maxDays: number = MAX_RANGE_DAYS): string[] {
+  const span = daysBetween(from, to);
+  if (span < 0) return [];
+  if (span + 1 > maxDays) throw new RangeError(`${from} to ${to} is ${span + 1} days, more than the ${maxDays} days a range may hold.`);
+  const start = utcDate(from);
+  return Array.from({ length: span + 1 }, (_, i) => start.plus({ days: i }).toISODate()!);
 }
 
 /** Today's date in the bakery's zone at the given instant. */
@@ -83,7 +123,7 @@ export function dateStatus(date: string, settings: CalendarSettings, now: Date, 
   if (!settings.deliveryWeekdays.includes(weekday) || (routeWeekdays && !routeWeekdays.includes(weekday))) reason = "not_delivery_day";
   else if (settings.closures.includes(date)) reason = "closed";
   else if (now.getTime() >= cutoff.toMillis()) reason = "past_cutoff";
-  else if (date > addDays(today, settings.horizonDays)) reason = "beyond_horizon";
+  else if (daysBetween(today, date) > settings.horizonDays) reason = "beyond_horizon";
   return { date, orderable: reason === null, reason, cutoffAt: cutoff.toISO()! };
 }
 

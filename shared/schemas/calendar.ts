@@ -1,9 +1,38 @@
 import { z } from "zod";
-import { isCalendarDate, WEEKDAYS, type NotOrderableReason, type Weekday } from "../calendar";
+import { DATE_MAX, DATE_MIN, daysBetween, isCalendarDate, isSupportedDate, WEEKDAYS, type NotOrderableReason, type Weekday } from "../calendar";
 
+export const DATE_LIMIT_MESSAGE = `Dates run from ${DATE_MIN} to ${DATE_MAX}.`;
+
+/** A YYYY-MM-DD calendar date within DATE_MIN..DATE_MAX (shared/calendar.ts). */
 export const dateSchema = z
   .string({ required_error: "Choose a date.", invalid_type_error: "Dates are written YYYY-MM-DD." })
-  .refine(isCalendarDate, "That is not a calendar date (use YYYY-MM-DD).");
+  .superRefine((value, ctx) => {
+    if (!isCalendarDate(value)) ctx.addIssue({ code: "custom", message: "That is not a calendar date (use YYYY-MM-DD)." });
+    else if (!isSupportedDate(value)) ctx.addIssue({ code: "custom", message: DATE_LIMIT_MESSAGE });
+  });
+
+/** Days the calendar endpoint answers for at once. */
+export const CALENDAR_MAX_DAYS = 120;
+/** Days of orders the order list answers for at once (a year, leap day included). */
+export const ORDER_LIST_MAX_DAYS = 366;
+
+/**
+ * A superRefine for an object holding a start and an end date: the end must not be before the start and,
+ * with maxDays, the span (both ends counted) must not exceed it. Worked out from day counts, never from
+ * string order; skipped when either date is missing or already refused by dateSchema.
+ */
+export function dateRangeCheck<K extends string, L extends string>(opts: { from: K; to: L; maxDays?: number; what?: string; reversed?: string }) {
+  return (value: { [P in K | L]?: string | null }, ctx: z.RefinementCtx) => {
+    const from = value[opts.from];
+    const to = value[opts.to];
+    if (typeof from !== "string" || typeof to !== "string" || !isSupportedDate(from) || !isSupportedDate(to)) return;
+    const span = daysBetween(from, to) + 1;
+    if (span < 1) ctx.addIssue({ code: "custom", path: [opts.to], message: opts.reversed ?? "The end date must not be before the start." });
+    else if (opts.maxDays && span > opts.maxDays) {
+      ctx.addIssue({ code: "custom", path: [opts.to], message: `Ask for at most ${opts.maxDays} days${opts.what ? ` of ${opts.what}` : ""} at a time; this range is ${span.toLocaleString("en-US")} days.` });
+    }
+  };
+}
 
 export const weekdaysSchema = z
   .array(z.number().int().refine((n): n is Weekday => (WEEKDAYS as readonly number[]).includes(n), "Weekdays are 1 (Mon) to 7 (Sun)."))
@@ -48,7 +77,7 @@ export interface CalendarDayDto {
 
 export const calendarQuerySchema = z
   .object({ from: dateSchema, to: dateSchema, accountId: z.coerce.number().int().positive().optional() })
-  .refine((q) => q.to >= q.from, { path: ["to"], message: "The end date must not be before the start." });
+  .superRefine(dateRangeCheck({ from: "from", to: "to", maxDays: CALENDAR_MAX_DAYS }));
 
 export const accountDeliverySchema = z.object({
   routeWeekdays: weekdaysSchema.nullable(),

@@ -1,4 +1,5 @@
-import { cutoffFor, dateStatus, isCalendarDate, type CalendarSettings } from "../../shared/calendar";
+import { DATE_MAX, DATE_MIN, MAX_RANGE_DAYS, addDays, cutoffFor, dateRange, dateStatus, daysBetween, isCalendarDate, isSupportedDate, type CalendarSettings } from "../../shared/calendar";
+import { dateSchema } from "../../shared/schemas/calendar";
 
 /**
  * Source: the IANA time zone database (tzdata), zone America/Chicago — US rules since 2007: daylight
@@ -71,5 +72,70 @@ describe("date status", () => {
     expect(isCalendarDate("2026-02-30")).toBe(false);
     expect(isCalendarDate("2026-2-3")).toBe(false);
     expect(isCalendarDate("tomorrow")).toBe(false);
+  });
+});
+
+/**
+ * Day arithmetic near the end of four-digit years. Reference: ECMAScript time values (ECMA-262 §21.4.1,
+ * a day is exactly 86,400,000 ms of UTC) through Date.UTC, independent of luxon. Past 9999-12-31 luxon
+ * writes "+010000-01-01" (ISO 8601 expanded year), which sorts before "9999-12-31" as a string.
+ */
+const utcDays = (y: number, m: number, d: number) => Date.UTC(y, m - 1, d) / 86_400_000;
+
+describe("addDays and dateRange near year 9999", () => {
+  it("adds days across month, leap-day and year ends", () => {
+    expect(addDays("2028-02-28", 1)).toBe("2028-02-29");
+    expect(addDays("2026-12-31", 1)).toBe("2027-01-01");
+    expect(addDays("2027-01-01", -1)).toBe("2026-12-31");
+    expect(addDays("9999-12-30", 1)).toBe("9999-12-31");
+  });
+
+  it("refuses a result past 9999-12-31 or before 0000-01-01 instead of writing +010000-01-01", () => {
+    expect(() => addDays("9999-12-31", 1)).toThrow(RangeError);
+    expect(() => addDays("0000-01-01", -1)).toThrow(RangeError);
+    expect(() => addDays("2026-02-30", 1)).toThrow(RangeError);
+    expect(() => addDays("2026-12-01", 0.5)).toThrow(RangeError);
+  });
+
+  it("counts days arithmetically, as Date.UTC does", () => {
+    expect(daysBetween("2026-12-01", "9999-12-31")).toBe(utcDays(9999, 12, 31) - utcDays(2026, 12, 1));
+    expect(daysBetween("1900-01-01", "2400-12-31")).toBe(utcDays(2400, 12, 31) - utcDays(1900, 1, 1));
+    expect(daysBetween("2026-12-10", "2026-12-01")).toBe(-9);
+  });
+
+  it("builds a range that ends on 9999-12-31 and stops there", () => {
+    expect(dateRange("9999-12-29", "9999-12-31")).toEqual(["9999-12-29", "9999-12-30", "9999-12-31"]);
+    expect(dateRange("2028-02-27", "2028-03-01")).toEqual(["2028-02-27", "2028-02-28", "2028-02-29", "2028-03-01"]);
+    expect(dateRange("2026-12-10", "2026-12-01")).toEqual([]);
+  });
+
+  it("throws at once, before building anything, for a span above its maximum", () => {
+    daysBetween("2026-01-01", "2026-01-02"); // warm up luxon's parser
+    const started = performance.now();
+    expect(() => dateRange("2026-12-01", "9999-12-31")).toThrow(/more than the 400 days/);
+    expect(() => dateRange("1900-01-01", "2400-12-31")).toThrow(RangeError);
+    expect(() => dateRange("2026-01-01", "2026-01-10", 9)).toThrow(RangeError);
+    expect(performance.now() - started).toBeLessThan(50);
+    expect(dateRange("2026-01-01", "2026-01-10", 10)).toHaveLength(10);
+    expect(dateRange("2026-01-01", addDays("2026-01-01", MAX_RANGE_DAYS - 1))).toHaveLength(MAX_RANGE_DAYS);
+    expect(() => dateRange("2026-12-01", "10000-01-01")).toThrow(RangeError);
+  });
+});
+
+describe("dateSchema: real dates from 2000-01-01 to 2099-12-31", () => {
+  it("accepts the limits themselves and refuses what lies outside, naming the limits", () => {
+    expect([DATE_MIN, DATE_MAX]).toEqual(["2000-01-01", "2099-12-31"]);
+    for (const ok of ["2000-01-01", "2026-12-01", "2099-12-31"]) expect(dateSchema.safeParse(ok).success).toBe(true);
+    for (const bad of ["1999-12-31", "1900-01-01", "2100-01-01", "2400-12-31", "9999-12-31"]) {
+      const r = dateSchema.safeParse(bad);
+      expect(r.success).toBe(false);
+      expect(r.error!.issues).toHaveLength(1);
+      expect(r.error!.issues[0].message).toBe("Dates run from 2000-01-01 to 2099-12-31.");
+    }
+    for (const bad of ["10000-01-01", "+010000-01-01", "2026-02-30", "2026-12-1"]) {
+      expect(dateSchema.safeParse(bad).error!.issues[0].message).toBe("That is not a calendar date (use YYYY-MM-DD).");
+    }
+    expect(isSupportedDate("2099-12-31")).toBe(true);
+    expect(isSupportedDate("2100-01-01")).toBe(false);
   });
 });
