@@ -1,26 +1,23 @@
-import fs from "node:fs";
-import path from "node:path";
-import crypto from "node:crypto";
 import express, { Router } from "express";
-import multer from "multer";
 import { z } from "zod";
 import type { AppContext } from "../http/context";
-import { HttpError, badRequest, notFound, parse } from "../http/errors";
+import { badRequest, notFound, parse } from "../http/errors";
 import { allow, currentUser } from "../http/auth";
 import { idSchema } from "../../shared/schemas/common";
 import { dateSchema } from "../../shared/schemas/calendar";
 import { PAYMENT_TERMS } from "../../shared/billing";
 import { ROLES } from "../../shared/roles";
 import { CustomerAccount } from "../accounts/account.entity";
-import { TaxCertificate } from "./billing.entity";
 import { getBakery } from "../bakery/bakery.service";
 import { Bakery } from "../bakery/bakery.entity";
 import { resolveAccount } from "../calendar/calendar.service";
 import * as invoices from "./invoices.service";
 import * as payments from "./payments.service";
 import { renderInvoicePdf } from "./invoice.pdf";
-import { sniff } from "../catalog/catalog.service";
-import { localToday } from "../../shared/calendar";
+import * as certificates from "./certificates.service";
+import { checkUpload, singleFileUpload } from "../http/upload";
+import { certificateStore } from "../files/file-store";
+import { sendStoredFile } from "../files/serve";
 
 const idParam = z.object({ id: idSchema });
 const OFFICE = ["owner", "bookkeeper"] as const;
@@ -161,32 +158,27 @@ export function accountBillingRoutes(ctx: AppContext): Router {
     await repo.update({ id }, { paymentTerms });
     res.json({ paymentTerms });
   });
+  // Certificates (server/billing/certificates.service.ts): quotas per account, expiry range, bytes checked and
+  // polyglots refused or re-encoded (server/http/upload.ts), stored by content hash (server/files/file-store.ts).
   r.get("/:id/certificates", allow("owner", "bookkeeper", "buyer"), async (req, res) => {
     const { id } = parse(idParam, req.params);
     const account = await resolveAccount(ctx, currentUser(req), id);
-    const rows = await ctx.dataSource.getRepository(TaxCertificate).find({ where: { accountId: account.id }, order: { id: "DESC" } });
-    const today = localToday(ctx.clock.now(), (await getBakery(ctx)).timeZone);
-    res.json({ certificates: rows.map((c) => ({ id: c.id, status: c.status, expiresOn: c.expiresOn, expired: c.expiresOn < today, contentType: c.contentType, createdAt: c.createdAt.toISOString() })) });
+    res.json(await certificates.listCertificates(ctx, account.id));
   });
-  const upload = multer({ storage: multer.memoryStorage(), limits: { fileSize: 10 * 1024 * 1024, files: 1 } }).single("file");
-  r.post("/:id/certificates", allow("owner", "buyer"), (req, res, next) => upload(req, res, (err: unknown) => {
-    if (err instanceof multer.MulterError && err.code === "LIMIT_FILE_SIZE") return next(new HttpError(413, "payload_too_large", "The certificate file is larger than 10 MB."));
-    if (err) return next(badRequest("The upload could not be read: send one file in the field \"file\" and the expiry date in \"expiresOn\".", { file: "Send one file." }));
+  r.post("/:id/certificates", allow("owner", "buyer"), async (req, _res, next) => {
+    // Before the body is read: the account exists and is the buyer's own, and it has room left.
+    const { id } = parse(idParam, req.params);
+    const account = await resolveAccount(ctx, currentUser(req), id);
+    await certificates.assertRoomBeforeUpload(ctx, account.id);
     next();
-  }), async (req, res) => {
+  }, singleFileUpload(certificates.CERTIFICATE_UPLOAD), async (req, res) => {
     const { id } = parse(idParam, req.params);
     const account = await resolveAccount(ctx, currentUser(req), id);
     const { expiresOn } = parse(z.object({ expiresOn: dateSchema }), req.body);
+    certificates.checkExpiry(expiresOn, await certificates.expiryRange(ctx));
     if (!req.file) throw badRequest("Attach the certificate (PDF, JPEG or PNG).", { file: "Attach the certificate." });
-    const kind = await sniff(req.file.buffer);
-    const ext = kind?.mime === "application/pdf" ? "pdf" : kind?.mime === "image/jpeg" ? "jpg" : kind?.mime === "image/png" ? "png" : null;
-    if (!ext || !kind) throw new HttpError(415, "unsupported_media_type", "Upload the certificate as a PDF, JPEG or PNG.", { file: "PDF, JPEG or PNG only." });
-    const dir = path.join(ctx.config.uploadsDir, "certificates");
-    fs.mkdirSync(dir, { recursive: true });
-    const file = `${crypto.randomBytes(16).toString("hex")}.${ext}`;
-    fs.writeFileSync(path.join(dir, file), req.file.buffer);
-    const row = await ctx.dataSource.getRepository(TaxCertificate).save({ accountId: account.id, file, contentType: kind.mime, status: "pending", expiresOn, reviewedById: null });
-    res.status(201).json({ certificate: { id: row.id, status: row.status, expiresOn: row.expiresOn } });
+    const checked = await checkUpload(req.file.buffer, certificates.CERTIFICATE_UPLOAD);
+    res.status(201).json({ certificate: await certificates.addCertificate(ctx, account.id, checked, expiresOn) });
   });
   return r;
 }
@@ -195,18 +187,14 @@ export function certificateRoutes(ctx: AppContext): Router {
   const r = Router();
   r.post("/:id/review", allow("owner"), async (req, res) => {
     const { id } = parse(idParam, req.params);
-    const { status } = parse(z.object({ status: z.enum(["approved", "rejected"]) }), req.body);
-    const repo = ctx.dataSource.getRepository(TaxCertificate);
-    if (!(await repo.existsBy({ id }))) throw notFound("That certificate");
-    await repo.update({ id }, { status, reviewedById: currentUser(req).id });
-    res.json({ certificate: { id, status } });
+    const { status } = parse(z.object({ status: z.enum(["approved", "rejected"], { errorMap: () => ({ message: "Choose approved or rejected." }) }) }), req.body);
+    res.json({ certificate: await certificates.reviewCertificate(ctx, currentUser(req), id, status) });
   });
+  /** Downloaded, never shown inline or cached: attachment, private no-store, nosniff (server/files/serve.ts). */
   r.get("/:id/file", allow("owner", "bookkeeper", "buyer"), async (req, res) => {
     const { id } = parse(idParam, req.params);
-    const c = await ctx.dataSource.getRepository(TaxCertificate).findOneBy({ id });
-    const user = currentUser(req);
-    if (!c || (user.role === "buyer" && user.accountId !== c.accountId)) throw notFound("That certificate");
-    res.type(c.contentType).sendFile(path.join(ctx.config.uploadsDir, "certificates", c.file));
+    const c = await certificates.certificateFor(ctx, currentUser(req), id);
+    await sendStoredFile(req, res, certificateStore(ctx.config), c.row.file, { kind: "private-attachment", filename: c.filename }, c.contentType);
   });
   return r;
 }

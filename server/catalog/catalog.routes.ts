@@ -1,30 +1,16 @@
-import path from "node:path";
-import fs from "node:fs";
-import { Router, type RequestHandler } from "express";
-import multer from "multer";
+import { Router } from "express";
 import { z } from "zod";
 import type { AppContext } from "../http/context";
-import { HttpError, badRequest, notFound, parse } from "../http/errors";
+import { badRequest, notFound, parse } from "../http/errors";
 import { allow, currentUser } from "../http/auth";
+import { singleFileUpload } from "../http/upload";
+import { isStoredId, photoStore } from "../files/file-store";
+import { sendStoredFile } from "../files/serve";
 import { idSchema } from "../../shared/schemas/common";
 import { ROLES } from "../../shared/roles";
 import * as catalog from "./catalog.service";
 
 const idParam = z.object({ id: idSchema });
-
-/** multer keeps the upload in memory (5 MB cap) so its bytes can be checked before anything is stored. */
-function photoUpload(): RequestHandler {
-  const upload = multer({ storage: multer.memoryStorage(), limits: { fileSize: catalog.PHOTO_MAX_BYTES, files: 1 } }).single("photo");
-  return (req, res, next) =>
-    upload(req, res, (err: unknown) => {
-      if (!err) return next();
-      if (err instanceof multer.MulterError && err.code === "LIMIT_FILE_SIZE") {
-        return next(new HttpError(413, "payload_too_large", "The photo is larger than 5 MB. Use a smaller one.", { photo: "At most 5 MB." }));
-      }
-      if (err) return next(badRequest("The upload could not be read: send one image in the field \"photo\".", { photo: "Send one file in the field \"photo\"." }));
-      next();
-    });
-}
 
 export function catalogRoutes(ctx: AppContext): Router {
   const r = Router();
@@ -47,7 +33,7 @@ export function catalogRoutes(ctx: AppContext): Router {
     const { id } = parse(idParam, req.params);
     res.json({ product: await catalog.updateProduct(ctx, id, { active: false }) });
   });
-  r.put("/:id/photo", allow("owner"), photoUpload(), async (req, res) => {
+  r.put("/:id/photo", allow("owner"), singleFileUpload(catalog.PHOTO_UPLOAD), async (req, res) => {
     const { id } = parse(idParam, req.params);
     if (!req.file) throw badRequest("Choose a photo to upload.", { photo: "Choose a photo to upload." });
     res.json({ product: await catalog.setProductPhoto(ctx, id, req.file.buffer) });
@@ -76,15 +62,16 @@ export function priceListRoutes(ctx: AppContext): Router {
   return r;
 }
 
-/** Product photos, from .data/uploads (outside the web root), cached for a year: names never repeat. */
+/**
+ * Product photos by stored id (the content hash), from the configured data directory, with their type, nosniff
+ * and a year's immutable cache (server/files/serve.ts). Public: an <img> cannot send the sign-in token.
+ */
 export function uploadsRoutes(ctx: AppContext): Router {
   const r = Router();
-  r.get("/:file", (req, res, next) => {
+  r.get("/:file", async (req, res) => {
     const file = String(req.params.file);
-    if (!/^[a-f0-9]{32}\.(jpg|png|webp)$/.test(file)) return next(notFound("That file"));
-    const full = path.join(ctx.config.uploadsDir, file);
-    if (!fs.existsSync(full)) return next(notFound("That file"));
-    res.sendFile(full, { maxAge: "365d", immutable: true, headers: { "X-Content-Type-Options": "nosniff" } });
+    if (!isStoredId(file) || file.endsWith(".pdf")) throw notFound("That file");
+    await sendStoredFile(req, res, photoStore(ctx.config), file, { kind: "public-immutable" });
   });
   return r;
 }

@@ -1,9 +1,6 @@
-import fs from "node:fs";
-import path from "node:path";
-import crypto from "node:crypto";
 import { In, type EntityManager } from "typeorm";
 import type { AppContext } from "../http/context";
-import { HttpError, badRequest, conflict, notFound, parse } from "../http/errors";
+import { badRequest, conflict, notFound, parse } from "../http/errors";
 import { Product } from "./product.entity";
 import { PriceList, PriceListItem } from "./price-list.entity";
 import { CustomerAccount } from "../accounts/account.entity";
@@ -13,6 +10,8 @@ import { sortAllergens, type AllergenCode } from "../../shared/allergens";
 import { derivedAllergens } from "../production/formulas.service";
 import { applyPercentOff } from "../../shared/money";
 import type { SessionUser } from "../../shared/schemas/auth";
+import { checkUpload, type CheckRules } from "../http/upload";
+import { photoStore } from "../files/file-store";
 
 /** How an account's prices are worked out: the list price, or its price list's. */
 export interface Pricing {
@@ -111,35 +110,33 @@ export async function updateProduct(ctx: AppContext, id: number, body: unknown):
 
 // ---- photos -------------------------------------------------------------------------------
 
-/** file-type 16 is CommonJS: under tsx its functions arrive on `default`, under Jest on the module itself. */
-export async function sniff(buffer: Buffer): Promise<{ mime: string; ext: string } | undefined> {
-  const mod = (await import("file-type")) as unknown as { fromBuffer?: typeof import("file-type").fromBuffer; default?: { fromBuffer: typeof import("file-type").fromBuffer } };
-  const fromBuffer = mod.fromBuffer ?? mod.default!.fromBuffer;
-  return fromBuffer(buffer);
-}
-
 export const PHOTO_MAX_BYTES = 5 * 1024 * 1024;
-const PHOTO_TYPES: Record<string, string> = { "image/jpeg": "jpg", "image/png": "png", "image/webp": "webp" };
+/** Photos are shown at most about 1200 px wide (2× for sharp screens): larger ones are scaled down when stored. */
+export const PHOTO_MAX_SIDE = 2400;
 
-/** The photo's type from its bytes (file-type reads the magic numbers), never from its name. */
-export async function sniffImage(buffer: Buffer): Promise<{ mime: string; ext: string } | null> {
-  const found = await sniff(buffer);
-  if (!found || !PHOTO_TYPES[found.mime]) return null;
-  return { mime: found.mime, ext: PHOTO_TYPES[found.mime] };
-}
+export const PHOTO_UPLOAD: CheckRules = {
+  field: "photo",
+  what: "photo",
+  maxBytes: PHOTO_MAX_BYTES,
+  accept: ["image/jpeg", "image/png", "image/webp"],
+  acceptText: "a JPEG, PNG or WebP photo",
+  maxImageSide: PHOTO_MAX_SIDE,
+};
 
+/**
+ * The photo is checked by its bytes and re-encoded (server/http/upload.ts), then stored under its content hash.
+ * Two products may share one stored photo, so the old file goes only when no product uses it any more.
+ */
 export async function setProductPhoto(ctx: AppContext, id: number, buffer: Buffer): Promise<ProductDto> {
   const repo = ctx.dataSource.getRepository(Product);
   const p = await repo.findOneBy({ id });
   if (!p) throw notFound("That product");
-  const kind = await sniffImage(buffer);
-  if (!kind) throw new HttpError(415, "unsupported_media_type", "Upload a JPEG, PNG or WebP photo.", { photo: "Upload a JPEG, PNG or WebP photo." });
-  fs.mkdirSync(ctx.config.uploadsDir, { recursive: true });
-  const file = `${crypto.randomBytes(16).toString("hex")}.${kind.ext}`;
-  fs.writeFileSync(path.join(ctx.config.uploadsDir, file), buffer);
+  const checked = await checkUpload(buffer, PHOTO_UPLOAD);
+  const store = photoStore(ctx.config);
+  const file = await store.save(checked.bytes, checked.ext);
   const old = p.photoFile;
   await repo.update({ id }, { photoFile: file });
-  if (old) fs.rmSync(path.join(ctx.config.uploadsDir, path.basename(old)), { force: true });
+  if (old && old !== file && !(await repo.existsBy({ photoFile: old }))) await store.remove(old);
   return productDto((await repo.findOneBy({ id }))!);
 }
 
