@@ -20,9 +20,15 @@ export function authRoutes(ctx: AppContext): Router {
     res.json({ user: currentUser(req) });
   });
 
+  /** Ends the session on the server: this token, and every other one of this user, is refused from now on. */
+  r.post("/sign-out", allow(...ROLES), async (req, res) => {
+    await auth.signOut(ctx, currentUser(req).id);
+    res.status(204).end();
+  });
+
   r.post("/password-reset", async (req, res) => {
     const body = parse(passwordResetRequestSchema, req.body);
-    await auth.requestPasswordReset(ctx, body.email);
+    await auth.requestPasswordReset(ctx, body.email, req.ip || "unknown");
     res.status(202).json({ message: "If that e-mail has a sign-in, a reset link is on its way. It works for 1 hour." });
   });
 

@@ -3,19 +3,19 @@ import { BakeryClosure } from "../calendar/closure.entity";
 import { CustomerAccount } from "../accounts/account.entity";
 import { User } from "../users/user.entity";
 import { AuthToken } from "../auth/auth-token.entity";
-import { SignInFailure } from "../auth/sign-in-attempt.entity";
+import { AuthRateCounter } from "../auth/rate-counter.entity";
 import { Product } from "../catalog/product.entity";
 import { PriceList, PriceListItem } from "../catalog/price-list.entity";
 import { IdempotencyRecord, Order, OrderLine } from "../orders/order.entity";
 import { StandingOrder, StandingOrderLine } from "../orders/standing-order.entity";
 import { BakeDay, Formula, FormulaVersion, Ingredient } from "../production/production.entity";
 import { OutboxMail } from "../mail/outbox.entity";
-import { CheckoutSessionRecord, CreditNote, DeliveryAdjustment, Invoice, InvoiceLine, NumberCounter, Payment, PayoutReconciliation, Refund, StripeEventRecord, TaxCertificate } from "../billing/billing.entity";
+import { CheckoutSessionRecord, CreditNote, DeliveryAdjustment, Invoice, InvoiceLine, NumberCounter, Payment, PayoutReconciliation, Refund, StripeEventRecord, StripeSyncState, TaxCertificate } from "../billing/billing.entity";
 
 /** Every entity, listed once: the DataSource, the CLI and the tests all take it from here. */
 export const entities = [
-  Bakery, BakeryClosure, CustomerAccount, User, AuthToken, SignInFailure,
+  Bakery, BakeryClosure, CustomerAccount, User, AuthToken, AuthRateCounter,
   Product, PriceList, PriceListItem, Order, OrderLine, IdempotencyRecord, StandingOrder, StandingOrderLine,
   Ingredient, Formula, FormulaVersion, BakeDay, OutboxMail,
-  NumberCounter, Invoice, InvoiceLine, Payment, CreditNote, Refund, CheckoutSessionRecord, StripeEventRecord, PayoutReconciliation, TaxCertificate, DeliveryAdjustment,
+  NumberCounter, Invoice, InvoiceLine, Payment, CreditNote, Refund, CheckoutSessionRecord, StripeEventRecord, StripeSyncState, PayoutReconciliation, TaxCertificate, DeliveryAdjustment,
 ];

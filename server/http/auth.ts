@@ -16,8 +16,9 @@ declare global {
 }
 
 export function signToken(ctx: AppContext, user: User): string {
-  // iat from the server clock, so expiry follows the same clock that checks it.
-  return jwt.sign({ sub: String(user.id), role: user.role, iat: Math.floor(ctx.clock.now().getTime() / 1000) }, ctx.config.jwtSecret, {
+  // iat from the server clock, so expiry follows the same clock that checks it. `ver` is the user's token version:
+  // bumping it (password reset, role change, turned off, sign-out) ends every token issued before.
+  return jwt.sign({ sub: String(user.id), role: user.role, ver: user.tokenVersion, iat: Math.floor(ctx.clock.now().getTime() / 1000) }, ctx.config.jwtSecret, {
     expiresIn: ctx.config.jwtTtlSeconds,
     algorithm: "HS256",
   });
@@ -29,7 +30,8 @@ export function toSessionUser(user: User): SessionUser {
 
 /**
  * Reads the bearer token and loads the user from the database on every request, so a
- * disabled user or a changed role takes effect at once, on every server instance.
+ * disabled user or a changed role takes effect at once, on every server instance; a token whose
+ * version is not the user's current one (signed out, password reset, role changed) is refused.
  */
 export function authenticate(ctx: AppContext): RequestHandler {
   return async (req: Request, _res: Response, next: NextFunction) => {
@@ -37,9 +39,11 @@ export function authenticate(ctx: AppContext): RequestHandler {
     const match = /^Bearer\s+(.+)$/i.exec(header);
     if (!match) return next();
     let sub: string;
+    let ver: unknown;
     try {
       const payload = jwt.verify(match[1], ctx.config.jwtSecret, { algorithms: ["HS256"], clockTimestamp: Math.floor(ctx.clock.now().getTime() / 1000) });
       sub = typeof payload === "object" && payload && typeof payload.sub === "string" ? payload.sub : "";
+      ver = typeof payload === "object" && payload ? (payload as { ver?: unknown }).ver : undefined;
     } catch {
       return next(unauthorized("Your session has expired. Sign in again."));
     }
@@ -47,6 +51,7 @@ export function authenticate(ctx: AppContext): RequestHandler {
     if (!Number.isInteger(id) || id <= 0) return next(unauthorized("Your session is not valid. Sign in again."));
     const user = await ctx.dataSource.getRepository(User).findOneBy({ id });
     if (!user || user.disabled) return next(unauthorized("This sign-in is no longer active. Ask the bakery's owner."));
+    if (typeof ver !== "number" || ver !== user.tokenVersion) return next(unauthorized("Your session has ended. Sign in again."));
     req.user = toSessionUser(user);
     next();
   };

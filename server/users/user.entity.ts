@@ -34,6 +34,13 @@ export class User {
   @Column({ type: "datetime", precision: 3, nullable: true })
   lastSignInAt: Date | null;
 
+  /**
+   * Sign-in tokens carry the version they were issued under; authenticate() refuses any other. A password reset,
+   * a role or account change, turning the sign-in off and signing out add one, so every earlier token dies at once.
+   */
+  @Column({ type: "int", default: 0 })
+  tokenVersion: number;
+
   @CreateDateColumn({ type: "datetime", precision: 3, default: () => "CURRENT_TIMESTAMP(3)" })
   createdAt: Date;
 

@@ -72,7 +72,16 @@ export async function updateUser(
       accountId = null;
     }
     if (actor.id === user.id && nextDisabled) throw conflict("cannot_disable_self", "You cannot turn off your own sign-in.");
-    await repo.update({ id }, { role: nextRole, disabled: nextDisabled, accountId, ...(patch.name ? { name: patch.name } : {}) });
+    // A new role, another account or a turned-off sign-in ends the person's sessions at once (tokenVersion + 1), so
+    // turning them back on later does not revive an old token.
+    const endSessions = nextRole !== user.role || accountId !== user.accountId || nextDisabled !== user.disabled;
+    await repo.update({ id }, {
+      role: nextRole,
+      disabled: nextDisabled,
+      accountId,
+      ...(patch.name ? { name: patch.name } : {}),
+      ...(endSessions ? { tokenVersion: () => "tokenVersion + 1" } : {}),
+    });
   });
   ctx.logger.info({ event: "user_updated", actorId: actor.id, userId: id, changes: Object.keys(patch) }, "user updated");
   return getUser(ctx, id);

@@ -5,7 +5,7 @@ import { CustomerAccount } from "../../server/accounts/account.entity";
 import { Bakery } from "../../server/bakery/bakery.entity";
 import { runLocked } from "../../server/jobs/scheduler";
 import { buildContext } from "../../server/context";
-import bcrypt from "bcryptjs";
+import { verifyPassword } from "../../server/auth/password-hash";
 
 let db: Awaited<ReturnType<typeof createTestDatabase>>;
 beforeAll(async () => {
@@ -33,7 +33,7 @@ it("seeds the demo scenario idempotently", async () => {
   for (const s of DEMO_SIGN_INS) {
     const u = await db.dataSource.getRepository(User).findOneByOrFail({ email: s.email });
     expect(u.role).toBe(s.role);
-    expect(await bcrypt.compare(DEMO_PASSWORD, u.passwordHash)).toBe(true);
+    expect(await verifyPassword(DEMO_PASSWORD, u.passwordHash)).toBe(true);
     if (s.role === "buyer") expect(u.accountId).not.toBeNull();
   }
 });
