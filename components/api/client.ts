@@ -26,6 +26,8 @@ export class ApiError extends Error {
 }
 
 export const NETWORK_MESSAGE = "Panwise can't be reached right now. Check your connection and try again.";
+/** A 503 without the API's own message (a proxy in front answered). */
+export const UNAVAILABLE_MESSAGE = "Panwise is briefly unavailable. Try again in a moment.";
 
 /** A message fit to show a person, whatever was thrown. */
 export function messageOf(error: unknown): string {
@@ -86,7 +88,79 @@ function failure(status: number, data: unknown, sentToken: boolean): ApiError {
     const { code, message, fields, ...details } = data.error;
     return new ApiError(status, code, message, fields, details);
   }
+  if (status === 503) return new ApiError(status, "service_unavailable", UNAVAILABLE_MESSAGE);
   return new ApiError(status, "http_error", status >= 500 ? "Something went wrong on the server. Please try again." : `The request failed (${status}).`);
+}
+
+// ---- retrying safe requests ----------------------------------------------------------------------
+
+/**
+ * Waits before each retry of a GET. GET is a safe method (RFC 9110 §9.2.1), so sending it again changes nothing;
+ * POST, PATCH, PUT and DELETE are never retried here (the person presses the button again, with the same
+ * Idempotency-Key where the API takes one).
+ */
+export const SAFE_RETRY_DELAYS_MS = [500, 1000, 2000];
+/** The longest Retry-After this client waits for before one retry; a longer one is not worth a spinner. */
+export const MAX_RETRY_AFTER_MS = 10_000;
+
+/** Retry-After in milliseconds: delay-seconds or an HTTP-date (RFC 9110 §10.2.3), or null when absent or unreadable. */
+export function retryAfterMs(value: string | null | undefined, now = Date.now()): number | null {
+  if (!value) return null;
+  const text = value.trim();
+  if (/^\d+$/.test(text)) return Number(text) * 1000;
+  const at = Date.parse(text);
+  return Number.isNaN(at) ? null : Math.max(0, at - now);
+}
+
+function headerOf(res: Response, name: string): string | null {
+  // Some fetch stand-ins (tests, old polyfills) have no Headers object.
+  return typeof res.headers?.get === "function" ? res.headers.get(name) : null;
+}
+
+function abortError(): Error {
+  const err = new Error("The request was cancelled.");
+  err.name = "AbortError";
+  return err;
+}
+
+function pause(ms: number, signal?: AbortSignal): Promise<void> {
+  return new Promise((resolve, reject) => {
+    if (signal?.aborted) return reject(abortError());
+    const onAbort = () => {
+      clearTimeout(timer);
+      reject(abortError());
+    };
+    const timer = setTimeout(() => {
+      signal?.removeEventListener?.("abort", onAbort);
+      resolve();
+    }, ms);
+    signal?.addEventListener?.("abort", onAbort, { once: true });
+  });
+}
+
+/**
+ * Send a request; for a GET, send it again (a few times, with backoff) when the network failed or the server
+ * answered 503 with a Retry-After (the API does so while its database restarts), waiting at least as long as
+ * Retry-After asks. Returns the last Response, or throws the network ApiError.
+ */
+async function sendWithRetries(method: string, send: () => Promise<Response>, signal?: AbortSignal): Promise<Response> {
+  const retries = method === "GET" ? SAFE_RETRY_DELAYS_MS.length : 0;
+  for (let attempt = 0; ; attempt++) {
+    let res: Response | null = null;
+    try {
+      res = await send();
+    } catch (err) {
+      if ((err as { name?: string })?.name === "AbortError") throw err;
+      if (attempt >= retries) throw new ApiError(0, "network_error", NETWORK_MESSAGE);
+    }
+    if (res) {
+      const after = res.status === 503 ? retryAfterMs(headerOf(res, "Retry-After")) : null;
+      if (after === null || attempt >= retries || after > MAX_RETRY_AFTER_MS) return res;
+      await pause(Math.max(after, SAFE_RETRY_DELAYS_MS[attempt]), signal);
+    } else {
+      await pause(SAFE_RETRY_DELAYS_MS[attempt], signal);
+    }
+  }
 }
 
 /** Call the API and return its JSON, or throw an ApiError. */
@@ -97,13 +171,8 @@ export async function api<T>(path: string, options: RequestOptions = {}): Promis
   const token = auth ? authToken : null;
   if (token) headers.Authorization = `Bearer ${token}`;
 
-  let res: Response;
-  try {
-    res = await fetch(buildUrl(path, query), { method, headers, body: body === undefined ? undefined : JSON.stringify(body), signal });
-  } catch (err) {
-    if ((err as { name?: string })?.name === "AbortError") throw err;
-    throw new ApiError(0, "network_error", NETWORK_MESSAGE);
-  }
+  const url = buildUrl(path, query);
+  const res = await sendWithRetries(method, () => fetch(url, { method, headers, body: body === undefined ? undefined : JSON.stringify(body), signal }), signal);
 
   const data: unknown = res.status === 204 ? undefined : parseJson(await res.text());
   if (!res.ok) throw failure(res.status, data, !!token);
@@ -115,12 +184,8 @@ export async function apiBlob(path: string, query?: Query): Promise<Blob> {
   const headers: Record<string, string> = {};
   const token = authToken;
   if (token) headers.Authorization = `Bearer ${token}`;
-  let res: Response;
-  try {
-    res = await fetch(buildUrl(path, query), { method: "GET", headers });
-  } catch {
-    throw new ApiError(0, "network_error", NETWORK_MESSAGE);
-  }
+  const url = buildUrl(path, query);
+  const res = await sendWithRetries("GET", () => fetch(url, { method: "GET", headers }));
   if (!res.ok) throw failure(res.status, parseJson(await res.text()), !!token);
   return res.blob();
 }

@@ -1,5 +1,7 @@
 import { act, fireEvent, screen, waitFor } from "expo-router/testing-library";
 import { BUYER, apiError, buyerOrderingRoutes, calendarDay, mockApi, orderDto, renderApp, signedInAs } from "./helpers";
+import { ApiError, api, retryAfterMs } from "../../components/api/client";
+import { clearDraft, readDraft, writeDraft } from "../../components/ordering/draft";
 
 beforeEach(() => signedInAs(BUYER));
 
@@ -181,5 +183,170 @@ describe("order screen for a date", () => {
     expect(await screen.findByTestId("order-readonly")).toHaveTextContent(/locked for baking/);
     expect(screen.getByText("3 × Milk-bread dinner rolls")).toBeOnTheScreen();
     expect(screen.queryByTestId("order-submit")).toBeNull();
+  });
+});
+
+// ---- Panwise briefly unavailable (its database restarting): GETs retried, the order kept on the device ----
+
+const UNAVAILABLE = "Ordering is briefly unavailable; nothing was saved; try again in a moment.";
+const OWNER_KEY = { userId: BUYER.id, accountId: BUYER.accountId! };
+
+/** Give mockApi's answers a Retry-After header on 503s (its fake Response has no headers of its own). */
+function withRetryAfter(seconds: string) {
+  const inner = globalThis.fetch as unknown as (...a: unknown[]) => Promise<{ status: number }>;
+  (globalThis as { fetch?: unknown }).fetch = jest.fn(async (...args: unknown[]) => {
+    const res = await inner(...args);
+    return { ...res, headers: { get: (name: string) => (res.status === 503 && name.toLowerCase() === "retry-after" ? seconds : null) } };
+  });
+}
+
+describe("when Panwise is briefly unavailable", () => {
+  beforeEach(() => clearDraft(OWNER_KEY, "2025-12-03"));
+
+  it("keeps the order on the device when saving answers 503, puts it back on return, and clears it once placed", async () => {
+    let down = true;
+    const api = mockApi(
+      buyerOrderingRoutes(DAY, {
+        "POST /api/orders": () => (down ? apiError(503, "service_unavailable", UNAVAILABLE) : { status: 201, body: { order: orderDto({ lines: [], totalCents: 9000 }) } }),
+      }),
+    );
+    withRetryAfter("5");
+    const first = renderApp("/buyer/order/2025-12-03");
+    fireEvent.changeText(await screen.findByTestId("qty-101"), "5");
+    fireEvent.changeText(screen.getByTestId("order-po"), "PO-9");
+    fireEvent.press(screen.getByTestId("order-submit"));
+    // The server's own words, and the order kept; an order is never sent again on its own.
+    expect(await screen.findByTestId("order-error-message")).toHaveTextContent(/Ordering is briefly unavailable; nothing was saved; try again in a moment\. Your order is kept on this device: press the button again to send it\.$/);
+    expect(api.callsTo("POST", "/api/orders")).toHaveLength(1);
+    expect(readDraft(OWNER_KEY, "2025-12-03")).toMatchObject({ quantities: { 101: "5" }, poNumber: "PO-9", orderId: null });
+
+    // The buyer leaves and comes back: the order is filled in again.
+    first.unmount();
+    renderApp("/buyer/order/2025-12-03");
+    expect(await screen.findByTestId("order-draft-restored")).toHaveTextContent(/didn't reach the bakery; it was kept on this device.*Place order/);
+    expect(screen.getByTestId("qty-101")).toHaveDisplayValue("5");
+    expect(screen.getByTestId("order-po")).toHaveDisplayValue("PO-9");
+    expect(screen.getByTestId("order-total")).toHaveTextContent("$90.00");
+
+    down = false;
+    fireEvent.press(screen.getByTestId("order-submit"));
+    expect(await screen.findByTestId("order-notice")).toHaveTextContent(/Order placed/);
+    expect(api.callsTo("POST", "/api/orders")).toHaveLength(2);
+    expect(api.callsTo("POST", "/api/orders")[1].body).toEqual({ deliveryDate: "2025-12-03", lines: [{ productId: 101, quantity: 5 }], poNumber: "PO-9" });
+    expect(readDraft(OWNER_KEY, "2025-12-03")).toBeNull();
+  });
+
+  it("keeps changes to an existing order through a dropped connection, and drops the draft when the bakery already has it", async () => {
+    const order = orderDto();
+    let saved = order;
+    let online = false;
+    mockApi(
+      buyerOrderingRoutes(calendarDay({ order: { id: 501, status: "open", totalCents: 5400, itemCount: 3, source: "one_off" } }), {
+        "GET /api/orders/:id": () => ({ body: { order: saved } }),
+        "PATCH /api/orders/:id": () => {
+          if (!online) throw new TypeError("Network request failed");
+          saved = { ...order, totalCents: 12600, lines: [{ ...order.lines[0], quantity: 7, lineTotalCents: 12600 }] };
+          return { body: { order: saved } };
+        },
+      }),
+    );
+    const first = renderApp("/buyer/order/2025-12-03");
+    expect(await screen.findByTestId("qty-101")).toHaveDisplayValue("3");
+    fireEvent.changeText(screen.getByTestId("qty-101"), "7");
+    fireEvent.press(screen.getByTestId("order-submit"));
+    expect(await screen.findByTestId("order-error-message")).toHaveTextContent(/can't be reached.*kept on this device/);
+    expect(readDraft(OWNER_KEY, "2025-12-03")).toMatchObject({ quantities: { 101: "7" }, orderId: 501 });
+    first.unmount();
+
+    // Back on the screen: the bakery still has 3; the kept 7 is filled in and can be saved.
+    const second = renderApp("/buyer/order/2025-12-03");
+    expect(await screen.findByTestId("order-draft-restored")).toHaveTextContent(/Save changes/);
+    expect(screen.getByTestId("qty-101")).toHaveDisplayValue("7");
+    online = true;
+    fireEvent.press(screen.getByTestId("order-submit"));
+    expect(await screen.findByTestId("order-notice")).toHaveTextContent(/Changes saved/);
+    expect(readDraft(OWNER_KEY, "2025-12-03")).toBeNull();
+    second.unmount();
+
+    // A draft saying what the bakery already has (the change did get through) is dropped, not shown.
+    writeDraft(OWNER_KEY, "2025-12-03", { quantities: { 101: "7" }, poNumber: "", note: "", orderId: 501 });
+    renderApp("/buyer/order/2025-12-03");
+    expect(await screen.findByTestId("qty-101")).toHaveDisplayValue("7");
+    expect(screen.queryByTestId("order-draft-restored")).toBeNull();
+    expect(readDraft(OWNER_KEY, "2025-12-03")).toBeNull();
+  });
+
+  it("loads the date after a 503 with Retry-After by asking again", async () => {
+    let calendarCalls = 0;
+    const api = mockApi(
+      buyerOrderingRoutes(DAY, {
+        "GET /api/calendar": () => (++calendarCalls === 1 ? apiError(503, "service_unavailable", "Panwise is briefly unavailable; try again in a moment.") : { body: { days: [DAY] } }),
+      }),
+    );
+    withRetryAfter("1");
+    renderApp("/buyer/order/2025-12-03");
+    expect(await screen.findByTestId("qty-101", {}, { timeout: 5000 })).toBeOnTheScreen();
+    expect(api.callsTo("GET", "/api/calendar")).toHaveLength(2);
+    expect(screen.queryByTestId("order-error")).toBeNull();
+  });
+});
+
+describe("api client retries", () => {
+  afterEach(() => jest.useRealTimers());
+
+  it("sends a GET again after network failures, with backoff, and gives up after three retries", async () => {
+    jest.useFakeTimers();
+    let calls = 0;
+    (globalThis as { fetch?: unknown }).fetch = jest.fn(async () => {
+      calls++;
+      if (calls < 3) throw new TypeError("Failed to fetch");
+      return { ok: true, status: 200, text: async () => JSON.stringify({ ok: 1 }) };
+    });
+    const got = api("/api/bakery");
+    await jest.advanceTimersByTimeAsync(499);
+    expect(calls).toBe(1);
+    await jest.advanceTimersByTimeAsync(1);
+    expect(calls).toBe(2);
+    await jest.advanceTimersByTimeAsync(1000);
+    await expect(got).resolves.toEqual({ ok: 1 });
+    expect(calls).toBe(3);
+
+    calls = -100;
+    const lost = api("/api/bakery").catch((e: unknown) => e);
+    await jest.advanceTimersByTimeAsync(500 + 1000 + 2000);
+    const err = await lost;
+    expect(err).toBeInstanceOf(ApiError);
+    expect(err).toMatchObject({ status: 0, code: "network_error" });
+    expect(calls).toBe(-96); // the first try and three retries
+  });
+
+  it("waits as long as Retry-After asks, shows the server's message when it stays unavailable, and never retries a POST", async () => {
+    jest.useFakeTimers();
+    const calls: string[] = [];
+    (globalThis as { fetch?: unknown }).fetch = jest.fn(async (_url: string, init: { method?: string } = {}) => {
+      calls.push(init.method ?? "GET");
+      const text = JSON.stringify({ error: { code: "service_unavailable", message: "Panwise is briefly unavailable; try again in a moment." } });
+      return { ok: false, status: 503, headers: { get: (n: string) => (n === "Retry-After" ? "3" : null) }, text: async () => text };
+    });
+    const got = api("/api/orders").catch((e: unknown) => e);
+    await jest.advanceTimersByTimeAsync(2999);
+    expect(calls).toHaveLength(1);
+    await jest.advanceTimersByTimeAsync(1);
+    expect(calls).toHaveLength(2);
+    await jest.advanceTimersByTimeAsync(3000 * 2);
+    expect(await got).toMatchObject({ status: 503, code: "service_unavailable", message: "Panwise is briefly unavailable; try again in a moment." });
+    expect(calls).toHaveLength(4);
+
+    calls.length = 0;
+    const posted = await api("/api/orders", { method: "POST", body: {} }).catch((e: unknown) => e);
+    expect(posted).toMatchObject({ status: 503, code: "service_unavailable" });
+    expect(calls).toEqual(["POST"]);
+  });
+
+  it("reads Retry-After as seconds or an HTTP-date (RFC 9110 §10.2.3)", () => {
+    expect(retryAfterMs("5")).toBe(5000);
+    expect(retryAfterMs("Wed, 21 Oct 2015 07:28:10 GMT", Date.parse("2015-10-21T07:28:00Z"))).toBe(10_000);
+    expect(retryAfterMs(null)).toBeNull();
+    expect(retryAfterMs("soon")).toBeNull();
   });
 });

@@ -26,6 +26,7 @@ import { msUntil } from "../../ordering/countdown";
 import { formatCutoff, formatDay, formatDayLong, relativeDay } from "../../ordering/dates";
 import { parseQuantity, quantityProblem, shortfall } from "../../ordering/quantities";
 import { IdempotencyKeeper } from "../../ordering/idempotency";
+import { clearDraft, draftMatches, readDraft, writeDraft, type DraftOwner, type OrderDraft } from "../../ordering/draft";
 import { useIsWide } from "../../shell/useIsWide";
 import { accountStatusNote, itemsLabel } from "./BuyerHome";
 import { AllergenCaution, AllergenChips, CutoffCountdown, OrderStatusBadge, ProductPhoto, useMoney } from "../ordering/parts";
@@ -133,6 +134,7 @@ export function OrderScreen({ date }: { date: string }) {
       timeZone={timeZone}
       now={now}
       header={header}
+      draftOwner={user.accountId ? { userId: user.id, accountId: user.accountId } : null}
       onNotice={setNotice}
       onExists={() => {
         setNotice({ text: "There's already an order for this date (placed on another device or by the bakery). It's shown below: make your changes there.", tone: "info" });
@@ -156,6 +158,8 @@ interface OrderFormProps {
   timeZone?: string;
   now: number;
   header: React.ReactNode;
+  /** Whose device-kept draft this date may have (buyers only). */
+  draftOwner: DraftOwner | null;
   onNotice: (n: { text: string; tone: "success" | "info" } | null) => void;
   onExists: () => void;
 }
@@ -171,7 +175,22 @@ function productCutoff(date: string, day: CalendarDayDto, p: ProductDto, setting
   return Math.min(dayCutoff, cutoffFor(date, s, p.leadDays).toMillis());
 }
 
-function OrderForm({ date, day, products, existing, minimumCents, settings, timeZone, now, header, onNotice, onExists }: OrderFormProps) {
+/** A draft kept on this device for the date, unless it says what the bakery already has (then it is dropped). */
+function restorableDraft(owner: DraftOwner | null, date: string, existing: OrderDto | null, closed: boolean): OrderDraft | null {
+  if (!owner) return null;
+  const draft = readDraft(owner, date);
+  if (!draft) return null;
+  if (closed || (existing && draftMatches(draft, initialQuantities(existing), existing.poNumber ?? "", existing.note ?? ""))) {
+    clearDraft(owner, date);
+    return null;
+  }
+  return draft;
+}
+
+/** A failure after which the same order can simply be sent again: no answer, or the server briefly unavailable. */
+const isTransient = (err: unknown) => err instanceof ApiError && (err.status === 0 || err.status >= 500);
+
+function OrderForm({ date, day, products, existing, minimumCents, settings, timeZone, now, header, draftOwner, onNotice, onExists }: OrderFormProps) {
   const wide = useIsWide();
   const money = useMoney();
   const create = useCreateOrderMutation();
@@ -180,9 +199,11 @@ function OrderForm({ date, day, products, existing, minimumCents, settings, time
   const keeper = useRef(new IdempotencyKeeper()).current;
 
   const [initial] = useState(() => ({ qty: initialQuantities(existing), po: existing?.poNumber ?? "", note: existing?.note ?? "" }));
-  const [qty, setQty] = useState<Record<number, string>>(initial.qty);
-  const [po, setPo] = useState(initial.po);
-  const [note, setNote] = useState(initial.note);
+  // An order that could not be saved earlier on this device comes back as it was typed.
+  const [restored, setRestored] = useState(() => restorableDraft(draftOwner, date, existing, msUntil(existing ? existing.cutoffAt : day.cutoffAt, now) <= 0));
+  const [qty, setQty] = useState<Record<number, string>>(restored?.quantities ?? initial.qty);
+  const [po, setPo] = useState(restored?.poNumber ?? initial.po);
+  const [note, setNote] = useState(restored?.note ?? initial.note);
   const [lineErrors, setLineErrors] = useState<Record<number, string>>({});
   const [fields, setFields] = useState<FieldErrors>({});
   const [formError, setFormError] = useState<string | null>(null);
@@ -242,7 +263,26 @@ function OrderForm({ date, day, products, existing, minimumCents, settings, time
     onNotice(null);
   };
 
+  const keepDraft = () => {
+    if (draftOwner) writeDraft(draftOwner, date, { quantities: qty, poNumber: po, note, orderId: existing?.id ?? null });
+  };
+  const dropDraft = () => {
+    if (draftOwner) clearDraft(draftOwner, date);
+    setRestored(null);
+  };
+
   const fail = (sent: { productId: number; quantity: number }[]) => (err: unknown) => {
+    if (isTransient(err)) {
+      // Nothing reached the bakery: keep the order on the device, so leaving this screen loses nothing.
+      keepDraft();
+      const e = err as ApiError;
+      setFormError(
+        e.code === "network_error"
+          ? `${e.message} Nothing was lost: your order is kept on this device; press the button again to send it.`
+          : `${e.message} Your order is kept on this device: press the button again to send it.`,
+      );
+      return;
+    }
     if (err instanceof ApiError) {
       if (err.code === "cutoff_passed" || err.code === "date_not_orderable" || err.code === "order_closed") {
         const at = typeof err.details.cutoffAt === "string" ? Date.parse(err.details.cutoffAt) : Number.NaN;
@@ -282,10 +322,6 @@ function OrderForm({ date, day, products, existing, minimumCents, settings, time
         );
         return;
       }
-      if (err.code === "network_error") {
-        setFormError(`${err.message} Nothing was lost: press the button again to send it.`);
-        return;
-      }
     }
     setFormError(messageOf(err));
   };
@@ -301,7 +337,10 @@ function OrderForm({ date, day, products, existing, minimumCents, settings, time
       update.mutate(
         { lines: sent, poNumber: po.trim(), note: note.trim() },
         {
-          onSuccess: (o) => onNotice({ text: `Changes saved. Your order for ${formatDay(date)} is now ${money(o.totalCents)}.`, tone: "success" }),
+          onSuccess: (o) => {
+            dropDraft();
+            onNotice({ text: `Changes saved. Your order for ${formatDay(date)} is now ${money(o.totalCents)}.`, tone: "success" });
+          },
           onError: fail(sent),
         },
       );
@@ -313,6 +352,7 @@ function OrderForm({ date, day, products, existing, minimumCents, settings, time
       {
         onSuccess: (o) => {
           keeper.reset();
+          dropDraft();
           setPlaced(true);
           onNotice({ text: `Order placed for ${formatDayLong(date)}: ${itemsLabel(o.lines.reduce((s, l) => s + l.quantity, 0))}, ${money(o.totalCents)}.`, tone: "success" });
         },
@@ -324,7 +364,10 @@ function OrderForm({ date, day, products, existing, minimumCents, settings, time
   const doCancel = () => {
     setFormError(null);
     cancel.mutate(undefined, {
-      onSuccess: () => onNotice({ text: `Your order for ${formatDayLong(date)} is cancelled. You can still order for this date until the cut-off.`, tone: "info" }),
+      onSuccess: () => {
+        dropDraft();
+        onNotice({ text: `Your order for ${formatDayLong(date)} is cancelled. You can still order for this date until the cut-off.`, tone: "info" });
+      },
       onError: (err) => {
         setConfirmCancel(false);
         if (err instanceof ApiError && (err.code === "cutoff_passed" || err.code === "order_closed")) setServerClosed(err.message);
@@ -454,6 +497,13 @@ function OrderForm({ date, day, products, existing, minimumCents, settings, time
               ? "Made from your standing order and changed by hand: later changes to the standing order won't touch this date."
               : "Made from your standing order. Changing it here changes this date only."
           }
+        />
+      ) : null}
+      {restored && !locked ? (
+        <Notice
+          tone="info"
+          testID="order-draft-restored"
+          message={`Your order from ${formatCutoff(restored.savedAt, timeZone)} didn't reach the bakery; it was kept on this device and is filled in below. ${existing ? "Press “Save changes” to send it." : "Press “Place order” to send it."}`}
         />
       ) : null}
       <FormError message={formError} testID="order-error-message" />
