@@ -12,6 +12,7 @@ const TABLE: Record<string, Role[] | "public"> = {
   "GET /api/health": "public",
   "POST /api/auth/sign-in": "public",
   "GET /api/auth/me": ALL,
+  "POST /api/auth/sign-out": ALL, // ends the token it is called with: the case below signs that role in again
   "POST /api/auth/password-reset": "public",
   "POST /api/auth/password-reset/confirm": "public",
   "GET /api/auth/invitations/:token": "public",
@@ -102,13 +103,17 @@ const TABLE: Record<string, Role[] | "public"> = {
 
 let t: TestApp;
 const tokens: Partial<Record<Role, string>> = {};
+const people: Partial<Record<Role, { email: string }>> = {};
 let accountId = 0;
 beforeAll(async () => {
   t = await startTestApp();
   await makeBakery(t.ds);
   const account = await makeAccount(t.ds);
   accountId = account.id;
-  for (const role of ROLES) tokens[role] = await tokenFor(t, await makeUser(t.ds, role, role === "buyer" ? { accountId } : {}));
+  for (const role of ROLES) {
+    people[role] = await makeUser(t.ds, role, role === "buyer" ? { accountId } : {});
+    tokens[role] = await tokenFor(t, people[role]!);
+  }
 });
 afterAll(() => t.close());
 
@@ -129,6 +134,7 @@ it.each(cases)("$route as $who", async ({ route, allowed, who }) => {
   let req = t.http()[method.toLowerCase() as "get" | "post" | "patch" | "delete"](path);
   if (who !== "anonymous") req = req.set("Authorization", `Bearer ${tokens[who]}`);
   const res = await req.send({});
+  if (route === "POST /api/auth/sign-out" && who !== "anonymous") tokens[who] = await tokenFor(t, people[who]!);
   if (allowed === "public" || (who !== "anonymous" && allowed.includes(who))) {
     expect([401, 403]).not.toContain(res.status);
   } else if (who === "anonymous") {

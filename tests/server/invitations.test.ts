@@ -2,6 +2,7 @@ import { startTestApp, makeAccount, makeBakery, makeUser, tokenFor, waitForMail,
 import { processOutbox } from "../../server/mail/outbox.service";
 import { OutboxMail } from "../../server/mail/outbox.entity";
 import { startMailFake } from "../../fakes/mail/mail-fake";
+import { PASSWORD_COMMON } from "../../shared/schemas/common";
 
 let t: TestApp;
 let ownerToken: string;
@@ -94,8 +95,15 @@ describe("invitations", () => {
     const token = linkToken((await waitForMail(t, "weak@staff.test")).text);
     const res = await t.http().post("/api/auth/invitations/accept").send({ token, password: "123456789", name: "" });
     expect(res.status).toBe(400);
-    expect(res.body.error.fields.password).toBe("Use at least 10 characters.");
+    expect(res.body.error.fields.password).toBe("Use at least 12 characters.");
     expect(res.body.error.fields.name).toBe("Enter your name.");
+    // OWASP ASVS 4.0.3 V2.1.7: a common password is refused on the server, on the password field, and the link still works.
+    const common = await t.http().post("/api/auth/invitations/accept").send({ token, password: "password1234", name: "Wes" });
+    expect(common.status).toBe(400);
+    expect(common.body.error.fields.password).toBe(PASSWORD_COMMON);
+    const ok = await t.http().post("/api/auth/invitations/accept").send({ token, password: "walnut sourdough loaf", name: "Wes" });
+    expect(ok.status).toBe(200);
+    expect((await t.http().get("/api/auth/me").set("Authorization", `Bearer ${ok.body.token}`)).status).toBe(200);
   });
 
   it("with the mail server down the invitation is kept and its mail arrives, once, when the server is back", async () => {

@@ -59,14 +59,26 @@ describe("people (owner)", () => {
     expect(back.body.user).toMatchObject({ role: "baker", accountId: null });
   });
 
-  it("a role change takes effect on the next request", async () => {
+  it("a role change takes effect on the next request: the old session ends, a new one has the new role", async () => {
     const owner = await makeUser(t.ds, "owner");
     const ownerToken = await tokenFor(t, owner);
     const books = await makeUser(t.ds, "bookkeeper");
     const booksToken = await tokenFor(t, books);
     expect((await as(booksToken).get("/api/accounts")).status).toBe(200);
     await as(ownerToken).patch(`/api/users/${books.id}`).send({ role: "baker" });
-    expect((await as(booksToken).get("/api/accounts")).status).toBe(403);
+    expect((await as(booksToken).get("/api/accounts")).status).toBe(401);
+    expect((await as(await tokenFor(t, books)).get("/api/accounts")).status).toBe(403);
+  });
+
+  it("moving a buyer to another account ends their sessions", async () => {
+    const owner = await makeUser(t.ds, "owner");
+    const ownerToken = await tokenFor(t, owner);
+    const buyer = await makeUser(t.ds, "buyer");
+    const buyerToken = await tokenFor(t, buyer);
+    expect((await as(buyerToken).get(`/api/accounts/${buyer.accountId}`)).status).toBe(200);
+    const other = await makeAccount(t.ds);
+    expect((await as(ownerToken).patch(`/api/users/${buyer.id}`).send({ accountId: other.id })).status).toBe(200);
+    expect((await as(buyerToken).get(`/api/accounts/${other.id}`)).status).toBe(401);
   });
 
   it("validates patches and ids", async () => {

@@ -15,7 +15,7 @@ import { createTestDatabase } from "./db";
 import { Bakery } from "../../../server/bakery/bakery.entity";
 import { CustomerAccount } from "../../../server/accounts/account.entity";
 import { User } from "../../../server/users/user.entity";
-import { hashPassword } from "../../../server/auth/auth.service";
+import { closePasswordHashing, hashPassword } from "../../../server/auth/password-hash";
 import type { Role } from "../../../shared/roles";
 import type { AppContext } from "../../../server/http/context";
 import { processOutbox } from "../../../server/mail/outbox.service";
@@ -72,6 +72,7 @@ export async function startTestApp(opts: { now?: string; stripe?: boolean } = {}
       await t.mail.close(); // a test may have swapped in a new mail fake
       if (t.mail !== mail) await mail.close();
       await db.drop();
+      await closePasswordHashing();
     },
   };
   return t;
