@@ -37,6 +37,14 @@ module.exports = {
       setupFiles: ["reflect-metadata"],
     },
     {
+      // Faults on purpose: MariaDB killed mid-burst (its own mariadbd), the start command restarting what dies.
+      displayName: "reliability",
+      testEnvironment: "node",
+      testMatch: ["<rootDir>/tests/reliability/**/*.test.ts"],
+      transform: { "^.+\\.(t|j)sx?$": swc },
+      setupFiles: ["reflect-metadata"],
+    },
+    {
       displayName: "browser",
       testEnvironment: "node",
       testMatch: ["<rootDir>/tests/browser/**/*.test.ts"],

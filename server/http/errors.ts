@@ -2,6 +2,10 @@ import type { ErrorRequestHandler, RequestHandler } from "express";
 import { ZodError, type ZodTypeAny, type z } from "zod";
 import { fieldErrorsFrom } from "../../shared/schemas/common";
 import type { FieldErrors } from "../../shared/errors";
+import { isDatabaseUnavailable } from "../db/retry";
+
+/** Seconds a client is asked to wait when the database is unreachable (a MariaDB restart takes a few). */
+export const DB_RETRY_AFTER_SECONDS = 5;
 
 /** An error meant for the client: its status, code and message are sent as they are. */
 export class HttpError extends Error {
@@ -51,6 +55,19 @@ export const errorHandler: ErrorRequestHandler = (err, req, res, _next) => {
     httpError = new HttpError(413, "payload_too_large", "The request body is too large.");
   } else if (err && typeof err === "object" && "type" in err && (err as { type: string }).type === "entity.parse.failed") {
     httpError = badRequest("The request body is not valid JSON.");
+  } else if (err instanceof URIError || (err instanceof Error && err.name === "URIError")) {
+    // The router's decodeURIComponent of a path parameter failed ("%", "%E0%A4%A"): the client sent a malformed
+    // percent-encoding (RFC 3986 §2.1), so a 400 and no error-level log. The router marks these status 400.
+    httpError = new HttpError(400, "bad_request", "The address contains a malformed percent-encoding (such as a lone %).");
+  } else if (isDatabaseUnavailable(err)) {
+    // The database is unreachable (stopped, restarting, out of connections): the transaction was rolled back with its
+    // connection, so answer 503 with Retry-After (RFC 9110 §15.6.4 and §10.2.3), not a 500. mysql2's pool drops dead
+    // connections and opens new ones when MariaDB is back, with no restart of the server.
+    req.log?.warn({ event: "database_unavailable", code: (err as { code?: unknown }).code ?? (err as { driverError?: { code?: unknown } }).driverError?.code }, "database unreachable; answered 503");
+    const orderWrite = req.method !== "GET" && req.method !== "HEAD" && /^\/api\/(orders|standing-orders)(\/|$|\?)/.test(req.originalUrl);
+    httpError = new HttpError(503, "service_unavailable",
+      orderWrite ? "Ordering is briefly unavailable; nothing was saved; try again in a moment." : "Panwise is briefly unavailable; try again in a moment.",
+      undefined, undefined, { "Retry-After": String(DB_RETRY_AFTER_SECONDS) });
   } else {
     req.log?.error({ err }, "unhandled error");
     httpError = new HttpError(500, "internal_error", "Something went wrong on our side. Please try again.");
