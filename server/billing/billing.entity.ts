@@ -80,6 +80,13 @@ export class Invoice {
   @Column({ type: "int", default: 0 })
   refundedCents: number;
 
+  /**
+   * The part of refundedCents that gave back an overpayment (a card payment that arrived after the invoice
+   * was settled another way). It does not make the invoice "refunded": the sale itself was not refunded.
+   */
+  @Column({ type: "int", default: 0 })
+  overpaymentRefundedCents: number;
+
   @Column({ type: "boolean", default: false })
   taxExempt: boolean;
 
@@ -231,6 +238,10 @@ export class Refund {
   @Column({ type: "int", nullable: true })
   creditNoteId: number | null;
 
+  /** Gave back an overpayment (Stripe refund metadata purpose=overpayment), not part of the sale. */
+  @Column({ type: "boolean", default: false })
+  overpayment: boolean;
+
   @CreateDateColumn({ type: "datetime", precision: 3, default: () => "CURRENT_TIMESTAMP(3)" })
   createdAt: Date;
 }
@@ -260,8 +271,13 @@ export class CheckoutSessionRecord {
   createdAt: Date;
 }
 
-/** Every Stripe event handled, by id: a replay or duplicate is acknowledged and changes nothing. */
+/**
+ * Every Stripe event handled, by id: a replay or duplicate is acknowledged and changes nothing. An event that
+ * does not match what Panwise created and what Stripe answers is kept as "rejected" with the reason, and
+ * shown on the invoice it claimed to pay.
+ */
 @Entity({ name: "stripe_event" })
+@Index(["invoiceId", "outcome"])
 export class StripeEventRecord {
   @PrimaryColumn({ type: "varchar", length: 80 })
   id: string;
@@ -269,8 +285,43 @@ export class StripeEventRecord {
   @Column({ type: "varchar", length: 60 })
   type: string;
 
+  /** "applied": handled (including events with nothing to change); "rejected": refused, never applied. */
+  @Column({ type: "varchar", length: 10, default: "applied" })
+  outcome: "applied" | "rejected";
+
+  @Column({ type: "varchar", length: 300, default: "" })
+  reason: string;
+
+  /** The invoice the event named (its metadata), when it named one. */
+  @Column({ type: "int", nullable: true })
+  invoiceId: number | null;
+
+  /** "webhook" (delivered) or "catch-up" (found later by listing Stripe's events or sessions). */
+  @Column({ type: "varchar", length: 10, default: "webhook" })
+  source: "webhook" | "catch-up";
+
+  /** The event's own `created` (Unix seconds, Stripe's clock). */
+  @Column({ type: "int", nullable: true })
+  stripeCreated: number | null;
+
   @CreateDateColumn({ type: "datetime", precision: 3, default: () => "CURRENT_TIMESTAMP(3)" })
   receivedAt: Date;
+}
+
+/**
+ * Where the catch-up job has got to, per kind: `createdCursor` is a Stripe `created` time (Unix seconds)
+ * before which every event has been seen. One row per name; the job runs under a named lock, so one writer.
+ */
+@Entity({ name: "stripe_sync_state" })
+export class StripeSyncState {
+  @PrimaryColumn({ type: "varchar", length: 40 })
+  name: string;
+
+  @Column({ type: "int" })
+  createdCursor: number;
+
+  @UpdateDateColumn({ type: "datetime", precision: 3, default: () => "CURRENT_TIMESTAMP(3)", onUpdate: "CURRENT_TIMESTAMP(3)" })
+  updatedAt: Date;
 }
 
 @Entity({ name: "payout_reconciliation" })

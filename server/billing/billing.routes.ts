@@ -1,7 +1,7 @@
 import express, { Router } from "express";
 import { z } from "zod";
 import type { AppContext } from "../http/context";
-import { badRequest, notFound, parse } from "../http/errors";
+import { badRequest, conflict, notFound, parse } from "../http/errors";
 import { allow, currentUser } from "../http/auth";
 import { idSchema } from "../../shared/schemas/common";
 import { dateSchema } from "../../shared/schemas/calendar";
@@ -14,6 +14,7 @@ import { resolveAccount } from "../calendar/calendar.service";
 import * as invoices from "./invoices.service";
 import * as payments from "./payments.service";
 import { renderInvoicePdf } from "./invoice.pdf";
+import { withJobLock } from "../jobs/scheduler";
 import * as certificates from "./certificates.service";
 import { checkUpload, singleFileUpload } from "../http/upload";
 import { certificateStore } from "../files/file-store";
@@ -27,8 +28,9 @@ const money = z.number({ invalid_type_error: "Enter an amount in cents." }).int(
 export function stripeWebhookRoute(ctx: AppContext): Router {
   const r = Router();
   r.post("/", express.raw({ type: "*/*", limit: "1mb" }), async (req, res) => {
+    // 2xx for every authentic event, rejected ones too (see payments.handleWebhook for why).
     const result = await payments.handleWebhook(ctx, Buffer.isBuffer(req.body) ? req.body : Buffer.from(""), req.get("stripe-signature"));
-    res.json({ received: true, duplicate: !result.handled });
+    res.json({ received: true, duplicate: !result.handled, rejected: result.outcome === "rejected" });
   });
   return r;
 }
@@ -58,8 +60,10 @@ export function invoiceRoutes(ctx: AppContext): Router {
   });
   r.post("/statements", allow(...OFFICE), async (req, res) => {
     const { through } = parse(z.object({ through: dateSchema.optional() }), req.body);
-    const issued = await invoices.issueStatements(ctx, through);
-    res.json({ issued: issued.map((i) => i.number) });
+    // One run at a time, under the same MariaDB named lock as the weekly job (server/jobs/scheduler.ts).
+    const run = await withJobLock(ctx, "weekly-statements", () => invoices.issueStatements(ctx, through));
+    if (!run.ran) throw conflict("already_running", "Statements are already being issued; try again in a minute.");
+    res.json({ issued: run.value.map((i) => i.number) });
   });
   r.get("/:id", allow(...OFFICE, "buyer"), async (req, res) => {
     const { id } = parse(idParam, req.params);
@@ -79,7 +83,11 @@ export function invoiceRoutes(ctx: AppContext): Router {
   r.post("/:id/payments", allow(...OFFICE), async (req, res) => {
     const { id } = parse(idParam, req.params);
     const input = parse(z.object({ amountCents: money, method: z.enum(["bank_transfer", "cheque", "cash", "other"], { errorMap: () => ({ message: "Choose bank transfer, cheque, cash or other." }) }), reference: z.string().trim().min(1, "Enter the transfer or cheque reference.").max(120), receivedOn: dateSchema }), req.body);
-    res.status(201).json({ payment: await invoices.recordManualPayment(ctx, currentUser(req), id, input) });
+    res.status(201).json({ payment: await payments.recordManualPaymentAndExpire(ctx, currentUser(req), id, input) });
+  });
+  r.post("/:id/overpayment-refund", allow(...OFFICE), async (req, res) => {
+    const { id } = parse(idParam, req.params);
+    res.status(201).json({ refund: await payments.refundOverpayment(ctx, id) });
   });
   r.post("/:id/credit-notes", allow(...OFFICE), async (req, res) => {
     const { id } = parse(idParam, req.params);

@@ -2,7 +2,7 @@ import { DateTime } from "luxon";
 import { In, IsNull, LessThan, type EntityManager } from "typeorm";
 import type { AppContext } from "../http/context";
 import { badRequest, conflict, notFound } from "../http/errors";
-import { CreditNote, DeliveryAdjustment, Invoice, InvoiceLine, NumberCounter, Payment, Refund, TaxCertificate, type InvoiceStatus } from "./billing.entity";
+import { CreditNote, DeliveryAdjustment, Invoice, InvoiceLine, NumberCounter, Payment, Refund, StripeEventRecord, TaxCertificate, type InvoiceStatus } from "./billing.entity";
 import { Order, OrderLine } from "../orders/order.entity";
 import { CustomerAccount } from "../accounts/account.entity";
 import { getBakery } from "../bakery/bakery.service";
@@ -13,6 +13,7 @@ import { renderInvoicePdf } from "./invoice.pdf";
 import { retryOnDeadlock } from "../db/retry";
 import { amountDue, dueDate, formatDocNumber, invoiceTotals, taxCents, type PaymentTerms } from "../../shared/billing";
 import { localToday, addDays } from "../../shared/calendar";
+import { toDecimal } from "../../shared/money";
 import type { SessionUser } from "../../shared/schemas/auth";
 
 // ---- numbers ----------------------------------------------------------------------------------
@@ -43,11 +44,22 @@ export async function validExemption(m: EntityManager, accountId: number, onDate
 
 // ---- status -------------------------------------------------------------------------------------
 
-export function statusOf(inv: Pick<Invoice, "status" | "totalCents" | "creditedCents" | "paidCents" | "refundedCents">): InvoiceStatus {
+export function statusOf(inv: Pick<Invoice, "status" | "totalCents" | "creditedCents" | "paidCents" | "refundedCents"> & { overpaymentRefundedCents?: number }): InvoiceStatus {
   if (inv.status === "void") return "void";
-  if (inv.refundedCents > 0 && inv.refundedCents >= inv.paidCents && inv.paidCents > 0) return "refunded";
-  if (inv.refundedCents > 0) return "partially_refunded";
+  // Money given back because it was paid twice is not a refund of the sale.
+  const saleRefunded = inv.refundedCents - (inv.overpaymentRefundedCents ?? 0);
+  const paid = inv.paidCents - (inv.overpaymentRefundedCents ?? 0);
+  if (saleRefunded > 0 && saleRefunded >= paid && paid > 0) return "refunded";
+  if (saleRefunded > 0) return "partially_refunded";
   return amountDue({ ...inv, refundedCents: 0 }) === 0 ? "paid" : "open";
+}
+
+/**
+ * What was paid beyond what the invoice is worth (after credit notes and refunds): a card payment that arrived
+ * after the invoice was settled another way. 0 when not overpaid.
+ */
+export function overpaidCents(inv: Pick<Invoice, "totalCents" | "creditedCents" | "paidCents" | "refundedCents">): number {
+  return Math.max(0, inv.paidCents - inv.refundedCents - (inv.totalCents - inv.creditedCents));
 }
 
 async function refreshStatus(m: EntityManager, invoiceId: number): Promise<Invoice> {
@@ -294,6 +306,10 @@ export async function recordPayment(ctx: AppContext, m: EntityManager, p: { invo
     throw err;
   }
   await m.getRepository(Invoice).increment({ id: inv.id }, "paidCents", p.amountCents);
+  if (p.amountCents > amountDue(inv)) {
+    // Kept (the money was taken) and shown to the bookkeeper as an overpayment, with a refund in one action.
+    ctx.logger.warn({ invoiceId: inv.id, amountCents: p.amountCents, dueCents: amountDue(inv), method: p.method }, "payment exceeds what the invoice owes: overpayment");
+  }
   const updated = await refreshStatus(m, inv.id);
   if (updated.status === "paid") await liftHoldIfClear(ctx, m, inv.accountId);
   return payment;
@@ -321,15 +337,16 @@ export async function recordManualPayment(ctx: AppContext, actor: SessionUser, i
 }
 
 /** A Stripe refund seen (from our own call or a charge.refunded event): recorded once per refund id. */
-export async function recordRefund(ctx: AppContext, m: EntityManager, r: { invoiceId: number; stripeRefundId: string; stripeChargeId: string | null; amountCents: number; creditNoteId?: number | null }) {
+export async function recordRefund(ctx: AppContext, m: EntityManager, r: { invoiceId: number; stripeRefundId: string; stripeChargeId: string | null; amountCents: number; creditNoteId?: number | null; overpayment?: boolean }) {
   if (await m.getRepository(Refund).existsBy({ stripeRefundId: r.stripeRefundId })) return false;
   try {
-    await m.getRepository(Refund).insert({ invoiceId: r.invoiceId, stripeRefundId: r.stripeRefundId, stripeChargeId: r.stripeChargeId, amountCents: r.amountCents, creditNoteId: r.creditNoteId ?? null });
+    await m.getRepository(Refund).insert({ invoiceId: r.invoiceId, stripeRefundId: r.stripeRefundId, stripeChargeId: r.stripeChargeId, amountCents: r.amountCents, creditNoteId: r.creditNoteId ?? null, overpayment: !!r.overpayment });
   } catch (err) {
     if ((err as { driverError?: { errno?: number } }).driverError?.errno === 1062) return false;
     throw err;
   }
   await m.getRepository(Invoice).increment({ id: r.invoiceId }, "refundedCents", r.amountCents);
+  if (r.overpayment) await m.getRepository(Invoice).increment({ id: r.invoiceId }, "overpaymentRefundedCents", r.amountCents);
   await refreshStatus(m, r.invoiceId);
   return true;
 }
@@ -342,19 +359,27 @@ export async function invoiceDetail(ctx: AppContext, id: number, m: EntityManage
   // The invoice's own mails (the invoice itself and payment receipts) name its number in the subject.
   const emails = await m.getRepository(OutboxMail).createQueryBuilder("o")
     .where("o.kind IN ('invoice', 'receipt') AND o.subject LIKE :n", { n: `%${inv.number}%` }).orderBy("o.id", "ASC").getMany();
-  const [lines, payments, credits, refunds, account] = await Promise.all([
+  const [lines, payments, credits, refunds, account, rejected] = await Promise.all([
     m.getRepository(InvoiceLine).find({ where: { invoiceId: id }, order: { deliveryDate: "ASC", id: "ASC" } }),
     m.getRepository(Payment).find({ where: { invoiceId: id }, order: { id: "ASC" } }),
     m.getRepository(CreditNote).find({ where: [{ invoiceId: id }, { carriedToInvoiceId: id }], order: { id: "ASC" } }),
     m.getRepository(Refund).find({ where: { invoiceId: id }, order: { id: "ASC" } }),
     m.getRepository(CustomerAccount).findOneByOrFail({ id: inv.accountId }),
+    m.getRepository(StripeEventRecord).find({ where: { invoiceId: id, outcome: "rejected" }, order: { receivedAt: "DESC" }, take: 20 }),
   ]);
+  // For the bookkeeper: money paid twice (refund it in one action), and payment events that were refused.
+  const over = overpaidCents(inv);
+  const alerts = [
+    ...(over > 0 ? [{ kind: "overpayment" as const, amountCents: over, eventId: null, at: null, message: `This invoice was paid more than it owes: ${toDecimal(over, inv.currency)} ${inv.currency} came in after it was settled. Refund it to the card.` }] : []),
+    ...rejected.map((e) => ({ kind: "rejected_event" as const, amountCents: null, eventId: e.id, at: e.receivedAt.toISOString(), message: `A payment notice from Stripe (${e.type}) was rejected and not applied: ${e.reason}` })),
+  ];
   return {
     invoice: { ...invoiceDto(inv, account.businessName, localToday(ctx.clock.now(), (await getBakery(ctx, m)).timeZone)) },
     lines: lines.map((l) => ({ id: l.id, orderId: l.orderId, deliveryDate: l.deliveryDate, description: l.description, quantity: l.quantity, unitPriceCents: l.unitPriceCents, amountCents: l.amountCents })),
     payments: payments.map((p) => ({ id: p.id, method: p.method, amountCents: p.amountCents, reference: p.reference, receivedOn: p.receivedOn, stripePaymentIntentId: p.stripePaymentIntentId, stripeChargeId: p.stripeChargeId })),
     creditNotes: credits.map((c) => ({ id: c.id, number: c.number, reason: c.reason, totalCents: c.totalCents, subtotalCents: c.subtotalCents, taxCents: c.taxCents, disposition: c.disposition, issueDate: c.issueDate, lines: JSON.parse(c.lines), carriedFromInvoiceId: c.carriedToInvoiceId === id ? c.invoiceId : null })),
-    refunds: refunds.map((r) => ({ id: r.id, stripeRefundId: r.stripeRefundId, amountCents: r.amountCents, createdAt: r.createdAt.toISOString() })),
+    refunds: refunds.map((r) => ({ id: r.id, stripeRefundId: r.stripeRefundId, amountCents: r.amountCents, overpayment: r.overpayment, createdAt: r.createdAt.toISOString() })),
+    alerts,
     emails: emails.map((e) => ({ id: e.id, kind: e.kind, to: e.toAddress, subject: e.subject, status: e.status, sentAt: e.sentAt?.toISOString() ?? null, createdAt: e.createdAt.toISOString() })),
   };
 }
@@ -364,7 +389,7 @@ export function invoiceDto(inv: Invoice, accountName: string, today: string) {
   return {
     id: inv.id, number: inv.number, accountId: inv.accountId, accountName, kind: inv.kind, status: inv.status, issueDate: inv.issueDate, dueDate: inv.dueDate,
     periodStart: inv.periodStart, periodEnd: inv.periodEnd, currency: inv.currency, subtotalCents: inv.subtotalCents, taxRateBp: inv.taxRateBp, taxCents: inv.taxCents,
-    totalCents: inv.totalCents, creditedCents: inv.creditedCents, paidCents: inv.paidCents, refundedCents: inv.refundedCents, amountDueCents: due,
+    totalCents: inv.totalCents, creditedCents: inv.creditedCents, paidCents: inv.paidCents, refundedCents: inv.refundedCents, amountDueCents: due, overpaidCents: overpaidCents(inv),
     overdue: inv.status === "open" && due > 0 && inv.dueDate < today, taxExempt: inv.taxExempt, sentAt: inv.sentAt?.toISOString() ?? null,
   };
 }
@@ -387,7 +412,7 @@ export async function listInvoices(ctx: AppContext, actor: SessionUser, q: { sta
   const rows = entities.map((inv, i) => invoiceDto(inv, (raw[i] as { accountName: string }).accountName, today));
   return {
     invoices: rows,
-    totals: { count: rows.length, totalCents: rows.reduce((s, r) => s + r.totalCents, 0), dueCents: rows.reduce((s, r) => s + r.amountDueCents, 0), paidCents: rows.reduce((s, r) => s + r.paidCents, 0) },
+    totals: { count: rows.length, totalCents: rows.reduce((s, r) => s + r.totalCents, 0), dueCents: rows.reduce((s, r) => s + r.amountDueCents, 0), paidCents: rows.reduce((s, r) => s + r.paidCents, 0), overpaidCount: rows.filter((r) => r.overpaidCents > 0).length },
   };
 }
 

@@ -1,12 +1,12 @@
 import type Stripe from "stripe";
 import { stringify } from "csv-stringify/sync";
-import { In } from "typeorm";
+import { In, IsNull, type EntityManager } from "typeorm";
 import type { AppContext } from "../http/context";
 import { HttpError, badRequest, conflict, notFound } from "../http/errors";
 import { CheckoutSessionRecord, CreditNote, Invoice, Payment, PayoutReconciliation, Refund, StripeEventRecord } from "./billing.entity";
 import { CustomerAccount } from "../accounts/account.entity";
 import { getBakery } from "../bakery/bakery.service";
-import { createCreditNote, recordPayment, recordRefund } from "./invoices.service";
+import { createCreditNote, overpaidCents, recordManualPayment, recordPayment, recordRefund } from "./invoices.service";
 import { enqueueMail } from "../mail/outbox.service";
 import { receiptMail } from "../mail/templates";
 import { AGING_BUCKETS, agingBucket, amountDue, taxCents, type AgingBucket } from "../../shared/billing";
@@ -60,71 +60,321 @@ export async function createCheckout(ctx: AppContext, actor: SessionUser, invoic
   return { url: session.url! };
 }
 
-// ---- webhooks ------------------------------------------------------------------------------------
+// ---- Stripe events: one code path for webhooks and the catch-up job ------------------------------
 
 /**
- * Verify the signature on the raw body, then handle each event once (recorded by id, in the same
- * transaction as its effect). A payment is keyed by its payment intent, so the session-completed and
- * payment-succeeded events for one payment, in any order or repeated, record it once.
+ * Stripe's tolerance for webhook timestamps: 5 minutes (Stripe docs, "Verify webhook signatures": the
+ * SDKs' default tolerance of 300 s between the signed timestamp and now protects against replay).
  */
-export async function handleWebhook(ctx: AppContext, raw: Buffer, signature: string | undefined): Promise<{ handled: boolean }> {
-  let event: Stripe.Event;
+export const WEBHOOK_TOLERANCE_SEC = 300;
+
+/** An event that does not match what Panwise created and what Stripe answers: recorded as rejected, never applied. */
+class Rejection extends Error {}
+const reject = (message: string) => new Rejection(message);
+
+type Obj = Record<string, unknown>;
+const isObj = (v: unknown): v is Obj => !!v && typeof v === "object" && !Array.isArray(v);
+const text = (o: Obj, k: string): string | undefined => (typeof o[k] === "string" ? (o[k] as string) : undefined);
+const idOf = (v: unknown): string | undefined => (typeof v === "string" ? v : isObj(v) && typeof v.id === "string" ? v.id : undefined);
+const num = (o: Obj, k: string): number | undefined => (typeof o[k] === "number" ? (o[k] as number) : undefined);
+/** An invoice id as an event may name it: a whole number that fits the column, or nothing. */
+const invoiceIdFrom = (v: unknown): number | null => {
+  const n = typeof v === "string" && /^\d{1,10}$/.test(v) ? Number(v) : typeof v === "number" ? v : NaN;
+  return Number.isInteger(n) && n > 0 && n <= 2147483647 ? n : null;
+};
+const claimedInvoice = (o: Obj): number | null => invoiceIdFrom(isObj(o.metadata) ? o.metadata.invoiceId : undefined) ?? invoiceIdFrom(o.client_reference_id);
+const money = (cents: number, currency: string) => `${toDecimal(cents, currency.toUpperCase())} ${currency.toUpperCase()}`;
+const isMissing = (err: unknown) => (err as { code?: string; statusCode?: number })?.code === "resource_missing" || (err as { statusCode?: number })?.statusCode === 404;
+
+/** The `t=` of a Stripe-Signature header (`t=<unix>,v1=<hex>`), when there is exactly one. */
+function signedAt(header: string): number | null {
+  const ts = header.split(",").map((kv) => kv.trim().split("=")).filter(([k]) => k === "t");
+  if (ts.length !== 1 || !/^\d{1,12}$/.test(ts[0][1] ?? "")) return null;
+  return Number(ts[0][1]);
+}
+
+/**
+ * The signature on the raw body (the SDK's constructEvent), the timestamp within the tolerance both ways
+ * (the SDK checks only that it is not too old; a timestamp a year ahead passed), and the shape of an event.
+ */
+export function verifyWebhook(ctx: AppContext, raw: Buffer, signature: string | undefined): Stripe.Event {
+  let parsed: unknown;
   try {
-    event = ctx.stripe.webhooks.constructEvent(raw, signature ?? "", ctx.config.stripe.webhookSecret);
-  } catch {
-    throw badRequest("The webhook signature did not verify.");
+    parsed = ctx.stripe.webhooks.constructEvent(raw, signature ?? "", ctx.config.stripe.webhookSecret, WEBHOOK_TOLERANCE_SEC);
+  } catch (err) {
+    if ((err as { type?: string }).type === "StripeSignatureVerificationError") throw badRequest("The webhook signature did not verify.");
+    throw badRequest("The webhook payload is not a Stripe event: it is not JSON."); // signed, but not JSON
   }
-  return ctx.dataSource.transaction(async (m) => {
+  // The signature is over the sender's wall-clock time, so it is compared with this machine's, not the business clock.
+  const t = signedAt(signature ?? "");
+  if (t === null || t - Math.floor(Date.now() / 1000) > WEBHOOK_TOLERANCE_SEC) {
+    throw badRequest(`The webhook signature's timestamp is more than ${WEBHOOK_TOLERANCE_SEC} seconds in the future.`);
+  }
+  const e = parsed as Obj;
+  const ok = isObj(e) && typeof e.id === "string" && e.id.length > 0 && e.id.length <= 80 && typeof e.type === "string" && e.type.length > 0 && e.type.length <= 60 && isObj(e.data) && isObj((e.data as Obj).object);
+  if (!ok) throw badRequest("The webhook payload is not a Stripe event (an object with an id, a type and data.object).");
+  return parsed as Stripe.Event;
+}
+
+export interface EventResult {
+  /** False when the event had been seen before (by id). */
+  handled: boolean;
+  outcome?: "applied" | "rejected";
+  reason?: string;
+}
+
+/**
+ * Verify the signature, then handle the event once. 2xx for every authentic event, rejected ones included:
+ * Stripe treats anything else as a failed delivery and retries it for up to three days (Stripe docs,
+ * "Webhooks": return a 2xx quickly; non-2xx are retried), and a rejection is final, so a retry would only
+ * repeat it. 400 for a bad signature or a payload that is not an event; 503 when Stripe itself cannot be
+ * asked (then the retry is wanted).
+ */
+export async function handleWebhook(ctx: AppContext, raw: Buffer, signature: string | undefined): Promise<EventResult> {
+  return handleEvent(ctx, verifyWebhook(ctx, raw, signature), "webhook");
+}
+
+interface Plan {
+  invoiceId: number | null;
+  apply(m: EntityManager): Promise<void>;
+  /** After the commit: calls to Stripe that follow from the change (expiring pages that no longer match). */
+  after?(): Promise<void>;
+}
+const noop = (invoiceId: number | null): Plan => ({ invoiceId, apply: async () => undefined });
+
+/**
+ * The one code path for an event, whether a webhook delivered it or the catch-up job found it: what it
+ * claims is checked against Panwise's own records and what Stripe answers when asked, outside any
+ * transaction; then the event id and its effect are written in one transaction (a replay changes nothing).
+ */
+export async function handleEvent(ctx: AppContext, event: Stripe.Event, source: "webhook" | "catch-up"): Promise<EventResult> {
+  const events = ctx.dataSource.getRepository(StripeEventRecord);
+  if (await events.existsBy({ id: event.id })) return { handled: false };
+  const object = event.data.object as unknown as Obj;
+  const record = { id: event.id, type: event.type, source, stripeCreated: Number.isInteger(event.created) && event.created > 0 && event.created < 2 ** 31 ? event.created : null };
+  let plan: Plan;
+  try {
+    plan = await planEvent(ctx, event.type, object);
+  } catch (err) {
+    if (!(err instanceof Rejection)) {
+      if (isConnectionError(err)) throw unavailable();
+      throw err;
+    }
+    const invoiceId = claimedInvoice(object);
+    const reason = err.message.slice(0, 300);
+    ctx.logger.warn({ eventId: event.id, type: event.type, invoiceId, source, reason }, "Stripe event rejected: not applied");
     try {
-      await m.getRepository(StripeEventRecord).insert({ id: event.id, type: event.type });
+      await events.insert({ ...record, outcome: "rejected", reason, invoiceId: invoiceId && (await ctx.dataSource.getRepository(Invoice).existsBy({ id: invoiceId })) ? invoiceId : null });
+    } catch (e) {
+      if ((e as { driverError?: { errno?: number } }).driverError?.errno === 1062) return { handled: false };
+      throw e;
+    }
+    return { handled: true, outcome: "rejected", reason };
+  }
+  const result = await retryOnDeadlock(() => ctx.dataSource.transaction(async (m): Promise<EventResult> => {
+    try {
+      await m.getRepository(StripeEventRecord).insert({ ...record, outcome: "applied", reason: "", invoiceId: plan.invoiceId });
     } catch (err) {
       if ((err as { driverError?: { errno?: number } }).driverError?.errno === 1062) return { handled: false };
       throw err;
     }
-    switch (event.type) {
-      case "checkout.session.completed": {
-        const s = event.data.object as Stripe.Checkout.Session;
-        const invoiceId = Number(s.metadata?.invoiceId);
-        await m.getRepository(CheckoutSessionRecord).update({ id: s.id }, { status: "complete" });
-        if (invoiceId && s.payment_status === "paid" && typeof s.payment_intent === "string") {
-          const pi = await ctx.stripe.paymentIntents.retrieve(s.payment_intent).catch(() => null);
-          const charge = pi && typeof pi.latest_charge === "string" ? pi.latest_charge : null;
-          const p = await recordPayment(ctx, m, { invoiceId, amountCents: s.amount_total ?? 0, method: "card", reference: s.id, stripePaymentIntentId: s.payment_intent, stripeChargeId: charge });
-          if (p) await queueReceipt(ctx, m, invoiceId, p.amountCents, "card");
-        }
-        break;
-      }
-      case "payment_intent.succeeded": {
-        const pi = event.data.object as Stripe.PaymentIntent;
-        const invoiceId = Number(pi.metadata?.invoiceId);
-        if (invoiceId) {
-          const p = await recordPayment(ctx, m, { invoiceId, amountCents: pi.amount_received || pi.amount, method: "card", reference: pi.id, stripePaymentIntentId: pi.id, stripeChargeId: typeof pi.latest_charge === "string" ? pi.latest_charge : null });
-          if (p) await queueReceipt(ctx, m, invoiceId, p.amountCents, "card");
-        }
-        break;
-      }
-      case "charge.refunded": {
-        const ch = event.data.object as Stripe.Charge;
-        const pi = typeof ch.payment_intent === "string" ? ch.payment_intent : ch.payment_intent?.id ?? null;
-        const payment = (await m.getRepository(Payment).findOneBy({ stripeChargeId: ch.id })) ?? (pi ? await m.getRepository(Payment).findOneBy({ stripePaymentIntentId: pi }) : null);
-        if (!payment) {
-          // The payment's own events have not landed yet: refuse, so this event is rolled back and Stripe retries it.
-          if (pi || ch.metadata?.invoiceId) throw new HttpError(409, "payment_not_seen_yet", "The payment for this refund is not recorded yet; retry later.");
-          break;
-        }
-        if (!payment.stripeChargeId) await m.getRepository(Payment).update({ id: payment.id }, { stripeChargeId: ch.id });
-        const refunds = ch.refunds?.data?.length ? ch.refunds.data : (await ctx.stripe.refunds.list({ charge: ch.id, limit: 100 })).data;
-        for (const r of refunds) await recordRefund(ctx, m, { invoiceId: payment.invoiceId, stripeRefundId: r.id, stripeChargeId: ch.id, amountCents: r.amount });
-        break;
-      }
-      default:
-        break; // payment_intent.payment_failed, payout.paid and others: recorded, nothing to change here
-    }
-    return { handled: true };
-  });
+    await plan.apply(m);
+    return { handled: true, outcome: "applied" };
+  }));
+  if (result.handled) await plan.after?.();
+  return result;
 }
 
-async function queueReceipt(ctx: AppContext, m: import("typeorm").EntityManager, invoiceId: number, amountCents: number, method: string) {
+async function planEvent(ctx: AppContext, type: string, o: Obj): Promise<Plan> {
+  switch (type) {
+    case "checkout.session.completed":
+      return planSessionPayment(ctx, o, { sessionId: text(o, "id"), paymentIntentId: idOf(o.payment_intent), invoiceId: claimedInvoice(o), amount: num(o, "amount_total"), currency: text(o, "currency") });
+    case "payment_intent.succeeded":
+      return planIntentPayment(ctx, o);
+    case "charge.refunded":
+      return planRefunds(ctx, o);
+    case "checkout.session.expired": {
+      const id = text(o, "id");
+      const rec = id ? await ctx.dataSource.getRepository(CheckoutSessionRecord).findOneBy({ id }) : null;
+      if (!rec || rec.status !== "open") return noop(rec?.invoiceId ?? null);
+      const s = await ctx.stripe.checkout.sessions.retrieve(rec.id).catch((err) => { if (isMissing(err)) throw reject(`Stripe has no checkout session ${rec.id}.`); throw err; });
+      return { invoiceId: rec.invoiceId, apply: async (m) => { if (s.status === "expired") await m.getRepository(CheckoutSessionRecord).update({ id: rec.id }, { status: "expired" }); } };
+    }
+    default:
+      return noop(null); // payment_intent.payment_failed, payout.paid and others: recorded, nothing to change here
+  }
+}
+
+interface PaymentClaim { sessionId?: string; paymentIntentId?: string; invoiceId: number | null; amount?: number; currency?: string }
+
+/** A payment Panwise already recorded: the event may repeat it, but not say something else about it. */
+async function checkAgainstKnown(ctx: AppContext, known: Payment, claim: PaymentClaim): Promise<Plan> {
+  const inv = await ctx.dataSource.getRepository(Invoice).findOneByOrFail({ id: known.invoiceId });
+  if (claim.invoiceId && claim.invoiceId !== known.invoiceId) throw reject(`The event names invoice ${claim.invoiceId}, but this payment belongs to another invoice (${inv.number}).`);
+  if (claim.amount !== undefined && claim.amount !== known.amountCents) throw reject(`The event's amount (${claim.amount}) differs from the payment Stripe took (${money(known.amountCents, inv.currency)}).`);
+  if (claim.currency !== undefined && claim.currency.toUpperCase() !== inv.currency) throw reject(`The event's currency (${claim.currency}) is not the invoice's (${inv.currency}).`);
+  return noop(known.invoiceId);
+}
+
+/**
+ * checkout.session.completed (or a session the catch-up found paid): the session must be one Panwise created
+ * for this invoice, and Stripe must say it is paid, in the invoice's currency, for exactly the amount Panwise
+ * asked. The payment recorded is that amount, never the event's.
+ */
+async function planSessionPayment(ctx: AppContext, o: Obj, claim: PaymentClaim): Promise<Plan> {
+  const sessionId = claim.sessionId;
+  if (!sessionId) throw reject("The event names no checkout session.");
+  const payments = ctx.dataSource.getRepository(Payment);
+  const rec = await ctx.dataSource.getRepository(CheckoutSessionRecord).findOneBy({ id: sessionId });
+  if (!rec) {
+    // Recorded already under this session (the demo seed pays without a page of its own): a repeat, checked.
+    const known = await payments.findOneBy({ reference: sessionId, method: "card" });
+    if (known && (!claim.paymentIntentId || known.stripePaymentIntentId === claim.paymentIntentId)) return checkAgainstKnown(ctx, known, claim);
+    throw reject(`Panwise did not create checkout session ${sessionId}.`);
+  }
+  const inv = await ctx.dataSource.getRepository(Invoice).findOneByOrFail({ id: rec.invoiceId });
+  if (claim.invoiceId && claim.invoiceId !== rec.invoiceId) throw reject(`The event names invoice ${claim.invoiceId}, but checkout session ${sessionId} belongs to another invoice (${inv.number}).`);
+  const knownByIntent = claim.paymentIntentId ? await payments.findOneBy({ stripePaymentIntentId: claim.paymentIntentId }) : null;
+  if (knownByIntent) {
+    if (knownByIntent.invoiceId !== rec.invoiceId) throw reject(`Payment intent ${claim.paymentIntentId} paid another invoice.`);
+    const plan = await checkAgainstKnown(ctx, knownByIntent, { ...claim, amount: claim.amount ?? rec.amountCents });
+    return { ...plan, apply: async (m) => void (await m.getRepository(CheckoutSessionRecord).update({ id: rec.id, status: "open" }, { status: "complete" })) };
+  }
+  let s: Stripe.Checkout.Session;
+  try {
+    s = await ctx.stripe.checkout.sessions.retrieve(sessionId, { expand: ["payment_intent"] });
+  } catch (err) {
+    if (isMissing(err)) throw reject(`Stripe has no checkout session ${sessionId}.`);
+    throw err;
+  }
+  const pi = isObj(s.payment_intent) ? (s.payment_intent as Stripe.PaymentIntent) : null;
+  if (s.metadata?.invoiceId !== String(rec.invoiceId) || (s.client_reference_id && s.client_reference_id !== String(rec.invoiceId))) throw reject(`Stripe says checkout session ${sessionId} belongs to another invoice.`);
+  if (s.status !== "complete" || s.payment_status !== "paid" || !pi || pi.status !== "succeeded") throw reject(`Stripe says checkout session ${sessionId} is not paid (status ${s.status}, ${s.payment_status}).`);
+  if (claim.paymentIntentId && claim.paymentIntentId !== pi.id) throw reject(`The event's payment intent (${claim.paymentIntentId}) is not the session's (${pi.id}).`);
+  const cur = inv.currency;
+  if ((s.currency ?? "").toUpperCase() !== cur || pi.currency.toUpperCase() !== cur) throw reject(`Stripe's currency (${s.currency}) is not the invoice's (${cur}).`);
+  if (claim.currency !== undefined && claim.currency.toUpperCase() !== cur) throw reject(`The event's currency (${claim.currency}) is not the invoice's (${cur}).`);
+  if (!(rec.amountCents > 0)) throw reject(`Checkout session ${sessionId} was made for no amount.`);
+  if (s.amount_total !== rec.amountCents || pi.amount_received !== rec.amountCents) throw reject(`The amount Stripe took (${money(pi.amount_received, cur)}) differs from the ${money(rec.amountCents, cur)} Panwise asked for.`);
+  if (claim.amount !== undefined && claim.amount !== rec.amountCents) throw reject(`The event's amount (${claim.amount}) differs from the ${money(rec.amountCents, cur)} of checkout session ${sessionId}.`);
+  const charge = typeof pi.latest_charge === "string" ? pi.latest_charge : pi.latest_charge?.id ?? null;
+  return {
+    invoiceId: rec.invoiceId,
+    async apply(m) {
+      await m.getRepository(CheckoutSessionRecord).update({ id: rec.id }, { status: "complete" });
+      const p = await recordPayment(ctx, m, { invoiceId: rec.invoiceId, amountCents: rec.amountCents, method: "card", reference: rec.id, stripePaymentIntentId: pi.id, stripeChargeId: charge });
+      if (p) await queueReceipt(ctx, m, rec.invoiceId, p.amountCents, "card");
+    },
+    // What is owed changed: any other open page for this invoice no longer matches it.
+    after: () => expireStaleSessions(ctx, rec.invoiceId).then(() => undefined),
+  };
+}
+
+/** payment_intent.succeeded: found through its checkout session (Stripe's list by payment_intent), then as above. */
+async function planIntentPayment(ctx: AppContext, o: Obj): Promise<Plan> {
+  const piId = text(o, "id");
+  const claim: PaymentClaim = { paymentIntentId: piId, invoiceId: claimedInvoice(o), amount: num(o, "amount_received") ?? num(o, "amount"), currency: text(o, "currency") };
+  if (!piId) throw reject("The event names no payment intent.");
+  const known = await ctx.dataSource.getRepository(Payment).findOneBy({ stripePaymentIntentId: piId });
+  if (known) return checkAgainstKnown(ctx, known, claim);
+  const sessions = await ctx.stripe.checkout.sessions.list({ payment_intent: piId, limit: 1 });
+  const session = sessions.data[0];
+  if (!session) throw reject(`Payment intent ${piId} was not paid through a checkout session Panwise created.`);
+  return planSessionPayment(ctx, o, { ...claim, sessionId: session.id });
+}
+
+/**
+ * charge.refunded: the refunds are read from Stripe (never from the event), each recorded once by id. A
+ * refund of a payment not recorded yet records that payment first, checked as a session payment.
+ */
+async function planRefunds(ctx: AppContext, o: Obj): Promise<Plan> {
+  const chargeId = text(o, "id");
+  if (!chargeId) throw reject("The event names no charge.");
+  let charge: Stripe.Charge;
+  try {
+    charge = await ctx.stripe.charges.retrieve(chargeId);
+  } catch (err) {
+    if (isMissing(err)) throw reject(`Stripe has no charge ${chargeId}.`);
+    throw err;
+  }
+  const piId = idOf(charge.payment_intent);
+  const repo = ctx.dataSource.getRepository(Payment);
+  const payment = (await repo.findOneBy({ stripeChargeId: chargeId })) ?? (piId ? await repo.findOneBy({ stripePaymentIntentId: piId }) : null);
+  let first: Plan | null = null;
+  let invoiceId: number;
+  let paidCents: number;
+  if (payment) {
+    invoiceId = payment.invoiceId;
+    paidCents = payment.amountCents;
+  } else {
+    const session = piId ? (await ctx.stripe.checkout.sessions.list({ payment_intent: piId, limit: 1 })).data[0] : undefined;
+    if (!session) throw reject(`Charge ${chargeId} is not a payment Panwise took.`);
+    first = await planSessionPayment(ctx, {}, { sessionId: session.id, paymentIntentId: piId, invoiceId: null });
+    invoiceId = first.invoiceId!;
+    paidCents = charge.amount;
+  }
+  const inv = await ctx.dataSource.getRepository(Invoice).findOneByOrFail({ id: invoiceId });
+  const claimedRefunded = num(o, "amount_refunded");
+  // Refunds only grow: an earlier event may show less than Stripe does now, never more.
+  if (claimedRefunded !== undefined && claimedRefunded > charge.amount_refunded) throw reject(`The event says ${claimedRefunded} was refunded on charge ${chargeId}; Stripe shows ${money(charge.amount_refunded, charge.currency)}.`);
+  if (charge.currency.toUpperCase() !== inv.currency) throw reject(`Charge ${chargeId} is not in the invoice's currency (${inv.currency}).`);
+  const refunds = (await ctx.stripe.refunds.list({ charge: chargeId, limit: 100 }).autoPagingToArray({ limit: 1000 }))
+    .filter((r) => r.status !== "failed" && r.status !== "canceled");
+  if (refunds.some((r) => !(r.amount > 0) || r.currency.toUpperCase() !== inv.currency)) throw reject(`A refund on charge ${chargeId} has an amount or currency Panwise cannot take.`);
+  if (refunds.reduce((s, r) => s + r.amount, 0) > paidCents) throw reject(`The refunds on charge ${chargeId} are more than the payment.`);
+  return {
+    invoiceId,
+    async apply(m) {
+      if (first) await first.apply(m);
+      await m.getRepository(Payment).update({ stripePaymentIntentId: piId ?? "", stripeChargeId: IsNull() }, { stripeChargeId: chargeId });
+      // Oldest first, so the invoice's figures grow in the order Stripe made them.
+      for (const r of [...refunds].reverse()) await recordRefund(ctx, m, { invoiceId, stripeRefundId: r.id, stripeChargeId: chargeId, amountCents: r.amount, overpayment: r.metadata?.purpose === "overpayment" });
+    },
+    after: first?.after,
+  };
+}
+
+// ---- open payment pages that no longer match what is owed -------------------------------------------
+
+/**
+ * Expire the invoice's open checkout sessions whose amount is not what is owed now (Stripe API: "Expire a
+ * Checkout Session", POST /v1/checkout/sessions/:id/expire — an expired session can no longer be paid).
+ * Called after anything that changes what is owed. When Stripe cannot be reached the session stays open
+ * here and the catch-up job expires it later. Returns how many were expired.
+ */
+export async function expireStaleSessions(ctx: AppContext, invoiceId: number): Promise<number> {
+  const inv = await ctx.dataSource.getRepository(Invoice).findOneBy({ id: invoiceId });
+  if (!inv) return 0;
+  const due = inv.status === "void" ? 0 : amountDue(inv);
+  const open = await ctx.dataSource.getRepository(CheckoutSessionRecord).findBy({ invoiceId, status: "open" });
+  let expired = 0;
+  for (const s of open) {
+    if (due > 0 && s.amountCents === due) continue;
+    if (await expireSession(ctx, s)) expired++;
+  }
+  return expired;
+}
+
+async function expireSession(ctx: AppContext, s: CheckoutSessionRecord): Promise<boolean> {
+  const repo = ctx.dataSource.getRepository(CheckoutSessionRecord);
+  try {
+    await ctx.stripe.checkout.sessions.expire(s.id);
+    await repo.update({ id: s.id }, { status: "expired" });
+    return true;
+  } catch (err) {
+    if (isConnectionError(err)) {
+      ctx.logger.warn({ session: s.id, invoiceId: s.invoiceId }, "could not expire a checkout session (Stripe unreachable); the catch-up job will try again");
+      return false;
+    }
+    // Not open at Stripe any more (paid a moment ago, or expired): keep what Stripe says. A payment arrives by its events.
+    const now = await ctx.stripe.checkout.sessions.retrieve(s.id).catch(() => null);
+    if (now && now.status && now.status !== "open") await repo.update({ id: s.id, status: "open" }, { status: now.status === "complete" ? "complete" : "expired" });
+    else ctx.logger.warn({ err, session: s.id }, "could not expire a checkout session");
+    return false;
+  }
+}
+
+async function queueReceipt(ctx: AppContext, m: EntityManager, invoiceId: number, amountCents: number, method: string) {
   const inv = await m.getRepository(Invoice).findOneByOrFail({ id: invoiceId });
   const account = await m.getRepository(CustomerAccount).findOneByOrFail({ id: inv.accountId });
   const bakery = await getBakery(ctx, m);
@@ -138,7 +388,14 @@ async function queueReceipt(ctx: AppContext, m: import("typeorm").EntityManager,
  * A credit note against an invoice for short or damaged goods: applied to what is still owed, refunded
  * through Stripe when it was paid by card, or carried to the account's next invoice.
  */
-export async function issueCreditNote(ctx: AppContext, invoiceId: number, input: { reason: string; lines: { description: string; quantity: number; unitPriceCents: number }[]; carry?: boolean }) {
+export async function issueCreditNote(ctx: AppContext, invoiceId: number, input: { reason: string; lines: { description: string; quantity: number; unitPriceCents: number }[]; carry?: boolean }): Promise<CreditNote> {
+  const cn = await creditNoteAndRefund(ctx, invoiceId, input);
+  // What is owed may have changed: a payment page for the old amount must not stay payable.
+  await expireStaleSessions(ctx, invoiceId);
+  return cn;
+}
+
+async function creditNoteAndRefund(ctx: AppContext, invoiceId: number, input: { reason: string; lines: { description: string; quantity: number; unitPriceCents: number }[]; carry?: boolean }): Promise<CreditNote> {
   const inv = await ctx.dataSource.getRepository(Invoice).findOneBy({ id: invoiceId });
   if (!inv) throw notFound("That invoice");
   if (inv.status === "void") throw conflict("invoice_void", "This invoice is void.");
@@ -178,6 +435,56 @@ export async function issueCreditNote(ctx: AppContext, invoiceId: number, input:
     }));
   }
   return ctx.dataSource.transaction((m) => createCreditNote(ctx, m, inv, lines, input.reason, "carry"));
+}
+
+/** A manual payment (transfer, cheque, cash), then any open card page that no longer matches what is owed is expired. */
+export async function recordManualPaymentAndExpire(ctx: AppContext, actor: SessionUser, invoiceId: number, input: Parameters<typeof recordManualPayment>[3]) {
+  const payment = await recordManualPayment(ctx, actor, invoiceId, input);
+  await expireStaleSessions(ctx, invoiceId);
+  return payment;
+}
+
+// ---- overpayments ---------------------------------------------------------------------------------
+
+/**
+ * Give back what was paid beyond what the invoice owes (a card page paid after the invoice was settled
+ * another way), to the card it came from, newest card payment first. Stripe refund reason "duplicate"
+ * (Stripe API, Refunds: reason is duplicate, fraudulent or requested_by_customer); metadata purpose=overpayment
+ * lets the charge.refunded event record it the same way. Retrying after a failure reuses the idempotency
+ * key, so Stripe answers with the first refund instead of making a second.
+ */
+export async function refundOverpayment(ctx: AppContext, invoiceId: number): Promise<{ stripeRefundId: string; amountCents: number; refunds: { stripeRefundId: string; amountCents: number }[] }> {
+  const inv = await ctx.dataSource.getRepository(Invoice).findOneBy({ id: invoiceId });
+  if (!inv) throw notFound("That invoice");
+  const over = overpaidCents(inv);
+  if (over <= 0) throw conflict("nothing_overpaid", "This invoice has not been paid more than it owes: there is nothing to refund.");
+  const cards = await ctx.dataSource.getRepository(Payment).find({ where: { invoiceId, method: "card" }, order: { id: "DESC" } });
+  const done: { stripeRefundId: string; amountCents: number }[] = [];
+  let left = over;
+  for (const p of cards) {
+    if (left <= 0) break;
+    if (!p.stripePaymentIntentId) continue;
+    const [row] = await ctx.dataSource.query("SELECT COALESCE(SUM(amountCents), 0) AS s FROM refund WHERE invoiceId = ? AND stripeChargeId = ?", [invoiceId, p.stripeChargeId ?? ""]);
+    const room = p.amountCents - Number(row.s);
+    if (room <= 0) continue;
+    const amount = Math.min(left, room);
+    let refund: Stripe.Refund;
+    try {
+      refund = await ctx.stripe.refunds.create(
+        { payment_intent: p.stripePaymentIntentId, amount, reason: "duplicate", metadata: { invoiceId: String(inv.id), invoiceNumber: inv.number, purpose: "overpayment" } },
+        { idempotencyKey: `overpayment-${inv.id}-${p.id}-${inv.paidCents}-${inv.refundedCents}-${amount}` },
+      );
+    } catch (err) {
+      if (isConnectionError(err)) throw new HttpError(503, "payments_unavailable", "Card payments are not reachable right now. Nothing was refunded; please try again in a minute.");
+      throw err;
+    }
+    await retryOnDeadlock(() => ctx.dataSource.transaction((m) => recordRefund(ctx, m, { invoiceId, stripeRefundId: refund.id, stripeChargeId: typeof refund.charge === "string" ? refund.charge : p.stripeChargeId, amountCents: refund.amount, overpayment: true })));
+    done.push({ stripeRefundId: refund.id, amountCents: refund.amount });
+    left -= refund.amount;
+  }
+  if (!done.length) throw conflict("not_refundable_by_card", "The extra money did not come by card, so it cannot go back to a card: pay it back by transfer.");
+  ctx.logger.info({ invoiceId, amountCents: over - left }, "overpayment refunded to the card");
+  return { stripeRefundId: done[0].stripeRefundId, amountCents: done.reduce((s, r) => s + r.amountCents, 0), refunds: done };
 }
 
 // ---- payouts and reconciliation ------------------------------------------------------------------
@@ -268,6 +575,30 @@ export async function aging(ctx: AppContext) {
 }
 
 /**
+ * CSV with formula injection neutralised (OWASP "CSV Injection": a cell starting with =, +, -, @, tab or CR
+ * is run as a formula by spreadsheets). Text cells go through csv-stringify's `escape_formulas` (a leading
+ * "'"). Amounts are passed as numbers of minor units and written by `cast.number` as plain decimals
+ * ("-12.50"); csv-stringify leaves a numeric field's leading "-" alone (lib/api/index.js: the "-" case skips
+ * fields whose type is number), and a cell that is only a signed decimal is read as a number, not a formula
+ * (the same exemption Oracle APEX documents for its CSV escaping: "sign characters are only escaped if they
+ * are not part of numbers"). Counts are written as digit strings. Every cast result is checked to be a number.
+ */
+export function csvTable(header: string[], rows: { currency: string; cells: (string | number | null)[] }[]): string {
+  const head = stringify([header], { escape_formulas: true });
+  return head + rows.map((r) => stringify([r.cells.map((c) => c ?? "")], {
+    escape_formulas: true,
+    cast: {
+      number: (cents: number) => {
+        if (!Number.isInteger(cents)) throw new Error(`CSV amounts are whole minor units, got ${cents}`);
+        const out = toDecimal(cents, r.currency);
+        if (!/^-?\d+(\.\d+)?$/.test(out)) throw new Error(`not a plain decimal: ${out}`);
+        return out;
+      },
+    },
+  })).join("");
+}
+
+/**
  * CSV exports (RFC 4180 through csv-stringify). Column spec, documented in DEVELOPERS.md: amounts are
  * decimal in the currency's units with the ISO 4217 code in its own column; dates YYYY-MM-DD.
  */
@@ -275,22 +606,21 @@ export async function exportCsv(ctx: AppContext, kind: "invoices" | "payments" |
   const accounts = new Map((await ctx.dataSource.getRepository(CustomerAccount).find()).map((a) => [a.id, a.businessName]));
   if (kind === "invoices") {
     const rows = await ctx.dataSource.getRepository(Invoice).find({ order: { id: "ASC" } });
-    return stringify([["number", "account", "kind", "status", "issue_date", "due_date", "currency", "subtotal", "tax", "total", "credited", "paid", "refunded", "amount_due"],
-      ...rows.map((i) => [i.number, accounts.get(i.accountId) ?? "", i.kind, i.status, i.issueDate, i.dueDate, i.currency, toDecimal(i.subtotalCents, i.currency), toDecimal(i.taxCents, i.currency), toDecimal(i.totalCents, i.currency), toDecimal(i.creditedCents, i.currency), toDecimal(i.paidCents, i.currency), toDecimal(i.refundedCents, i.currency), toDecimal(amountDue(i), i.currency)])]);
+    return csvTable(["number", "account", "kind", "status", "issue_date", "due_date", "currency", "subtotal", "tax", "total", "credited", "paid", "refunded", "amount_due"],
+      rows.map((i) => ({ currency: i.currency, cells: [i.number, accounts.get(i.accountId) ?? "", i.kind, i.status, i.issueDate, i.dueDate, i.currency, i.subtotalCents, i.taxCents, i.totalCents, i.creditedCents, i.paidCents, i.refundedCents, amountDue(i)] })));
   }
   if (kind === "payments") {
     const rows = await ctx.dataSource.getRepository(Payment).find({ order: { id: "ASC" } });
     const invoices = new Map((await ctx.dataSource.getRepository(Invoice).find()).map((i) => [i.id, i]));
-    return stringify([["received_on", "invoice", "account", "method", "currency", "amount", "reference", "stripe_payment_intent", "stripe_charge"],
-      ...rows.map((p) => { const i = invoices.get(p.invoiceId)!; return [p.receivedOn, i.number, accounts.get(i.accountId) ?? "", p.method, i.currency, toDecimal(p.amountCents, i.currency), p.reference, p.stripePaymentIntentId ?? "", p.stripeChargeId ?? ""]; })]);
+    return csvTable(["received_on", "invoice", "account", "method", "currency", "amount", "reference", "stripe_payment_intent", "stripe_charge"],
+      rows.map((p) => { const i = invoices.get(p.invoiceId)!; return { currency: i.currency, cells: [p.receivedOn, i.number, accounts.get(i.accountId) ?? "", p.method, i.currency, p.amountCents, p.reference, p.stripePaymentIntentId ?? "", p.stripeChargeId ?? ""] }; }));
   }
   const payouts = await listPayouts(ctx);
-  const out: (string | number)[][] = [["payout", "arrival_date", "status", "currency", "amount", "gross", "fees", "refunds", "net", "transactions", "unmatched", "reconciled_at"]];
+  const out: { currency: string; cells: (string | number | null)[] }[] = [];
   for (const p of payouts) {
     const d = await payoutDetail(ctx, p.id);
     const cur = p.currency.toUpperCase();
-    out.push([p.id, p.arrivalDate, p.status, cur, toDecimal(p.amountCents, cur), toDecimal(d.grossCents, cur), toDecimal(d.feesCents, cur), toDecimal(d.refundsCents, cur), toDecimal(d.netCents, cur), d.transactions.length, d.unmatched, p.reconciledAt ?? ""]);
+    out.push({ currency: cur, cells: [p.id, p.arrivalDate, p.status, cur, p.amountCents, d.grossCents, d.feesCents, d.refundsCents, d.netCents, String(d.transactions.length), String(d.unmatched), p.reconciledAt ?? ""] });
   }
-  return stringify(out);
+  return csvTable(["payout", "arrival_date", "status", "currency", "amount", "gross", "fees", "refunds", "net", "transactions", "unmatched", "reconciled_at"], out);
 }
-

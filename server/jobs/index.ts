@@ -5,6 +5,7 @@ import { materialiseAll } from "../orders/standing.service";
 import { freezeDue } from "../production/plan.service";
 import { processOutbox } from "../mail/outbox.service";
 import { applyCreditHolds, autoDeliver, invoiceUninvoicedCardOrders, issueStatements } from "../billing/invoices.service";
+import { catchUpStripe } from "./stripe-catch-up";
 
 /** Every scheduled job the server runs (each under a MariaDB named lock). */
 export const jobs: Job[] = [
@@ -17,4 +18,6 @@ export const jobs: Job[] = [
   { name: "weekly-statements", everyMs: 60 * 60 * 1000, run: async (ctx) => void (await issueStatements(ctx)) },
   { name: "credit-holds", everyMs: 15 * 60 * 1000, run: async (ctx) => void (await applyCreditHolds(ctx)) },
   { name: "invoice-card-orders", everyMs: 10 * 60 * 1000, run: async (ctx) => void (await invoiceUninvoicedCardOrders(ctx)) },
+  // Missed Stripe webhooks: on start and every STRIPE_CATCH_UP_EVERY_MS (3 minutes by default).
+  { name: "stripe-catch-up", everyMs: (ctx) => ctx.config.stripe.catchUpEveryMs, run: catchUpStripe },
 ];

@@ -1,30 +1,54 @@
+import crypto from "node:crypto";
 import type { AppContext } from "../http/context";
 
 export interface Job {
   name: string;
-  everyMs: number;
+  /** How often it runs; a function when it comes from the configuration. */
+  everyMs: number | ((ctx: AppContext) => number);
   run(ctx: AppContext): Promise<void>;
 }
 
 /**
- * Run a job under a MariaDB named lock (GET_LOCK), so that with several server instances
- * against one database only one runs it at a time. Returns false when another holds the lock.
+ * The MariaDB named lock a job runs under; a route that does the same work by hand takes the same one.
+ * "Names are locked on a server-wide basis" (MariaDB docs, GET_LOCK), not per database, so the name carries
+ * the database: two Panwise databases on one MariaDB server (or test runs side by side) never block each
+ * other. Hashed to keep names short (MySQL caps lock names at 64 characters, from memory).
  */
-export async function runLocked(ctx: AppContext, job: Job): Promise<boolean> {
+export const jobLockName = (job: string, database: string) => `panwise:${crypto.createHash("sha256").update(database).digest("hex").slice(0, 12)}:job:${job}`;
+const databaseOf = (ctx: AppContext) => String(ctx.dataSource.options.database ?? "");
+
+/** A job's own lock, for work done by hand that must not run beside the job (statements issued "now"). */
+export async function withJobLock<T>(ctx: AppContext, job: string, work: () => Promise<T>) {
+  return withNamedLock(ctx, jobLockName(job, databaseOf(ctx)), work);
+}
+
+/**
+ * Run `work` while holding a MariaDB named lock (GET_LOCK with timeout 0: MariaDB docs, GET_LOCK — 1 when
+ * obtained, 0 when another connection holds it), so only one holder at a time across every server instance
+ * on the database. `{ ran: false }` when another holds it.
+ */
+export async function withNamedLock<T>(ctx: AppContext, name: string, work: () => Promise<T>): Promise<{ ran: true; value: T } | { ran: false }> {
   const runner = ctx.dataSource.createQueryRunner();
   await runner.connect();
   try {
-    const [row] = await runner.query("SELECT GET_LOCK(?, 0) AS got", [`panwise:job:${job.name}`]);
-    if (Number(row?.got) !== 1) return false;
+    const [row] = await runner.query("SELECT GET_LOCK(?, 0) AS got", [name]);
+    if (Number(row?.got) !== 1) return { ran: false };
     try {
-      await job.run(ctx);
+      return { ran: true, value: await work() };
     } finally {
-      await runner.query("SELECT RELEASE_LOCK(?)", [`panwise:job:${job.name}`]);
+      await runner.query("SELECT RELEASE_LOCK(?)", [name]);
     }
-    return true;
   } finally {
     await runner.release();
   }
+}
+
+/**
+ * Run a job under its MariaDB named lock, so that with several server instances against one database only
+ * one runs it at a time. Returns false when another holds the lock.
+ */
+export async function runLocked(ctx: AppContext, job: Job): Promise<boolean> {
+  return (await withNamedLock(ctx, jobLockName(job.name, databaseOf(ctx)), () => job.run(ctx))).ran;
 }
 
 export function startScheduler(ctx: AppContext, jobs: Job[]): { stop(): Promise<void>; trigger(name: string): void } {
@@ -41,7 +65,7 @@ export function startScheduler(ctx: AppContext, jobs: Job[]): { stop(): Promise<
         .finally(() => running.delete(p));
       running.add(p);
     };
-    timers.push(setInterval(tick, job.everyMs));
+    timers.push(setInterval(tick, typeof job.everyMs === "function" ? job.everyMs(ctx) : job.everyMs));
     ticks.set(job.name, tick);
     setImmediate(tick);
   }

@@ -87,6 +87,7 @@ const TABLE: Record<string, Role[] | "public"> = {
   "POST /api/invoices/:id/checkout": ["owner", "bookkeeper", "buyer"],
   "POST /api/invoices/:id/payments": ["owner", "bookkeeper"],
   "POST /api/invoices/:id/credit-notes": ["owner", "bookkeeper"],
+  "POST /api/invoices/:id/overpayment-refund": ["owner", "bookkeeper"],
   "GET /api/payouts": ["owner", "bookkeeper"],
   "GET /api/payouts/:id": ["owner", "bookkeeper"],
   "POST /api/payouts/:id/reconcile": ["owner", "bookkeeper"],

@@ -145,6 +145,24 @@ describe("dispatch, invoices and statements", () => {
   });
 });
 
+describe("issuing statements by hand (issue 8 item 12)", () => {
+  it("six at once: one run at a time under a MariaDB named lock, the others 409 already_running, no 500 and no duplicate", async () => {
+    const accounts = await Promise.all([1, 2, 3].map((n) => makeAccount(t.ds, { businessName: `Busy Terms ${n}`, paymentTerms: "net7" })));
+    for (const a of accounts) for (const d of ["2026-06-01", "2026-06-02", "2026-06-03"]) await order(a.id, d, 2, "delivered");
+    const answers = await Promise.all(Array.from({ length: 6 }, () => t.http().post("/api/invoices/statements").set(auth(books)).send({ through: "2026-06-07" })));
+    const statuses = answers.map((r) => r.status);
+    expect(statuses.filter((s) => s !== 200 && s !== 409)).toEqual([]);
+    expect(statuses.filter((s) => s === 200).length).toBeGreaterThanOrEqual(1);
+    for (const r of answers.filter((x) => x.status === 409)) {
+      expect(r.body.error).toEqual({ code: "already_running", message: "Statements are already being issued; try again in a minute." });
+    }
+    // Every account got exactly one statement, whichever request issued it.
+    for (const a of accounts) expect(await t.ds.getRepository(Invoice).countBy({ accountId: a.id })).toBe(1);
+    const issued = answers.filter((r) => r.status === 200).flatMap((r) => r.body.issued as string[]);
+    expect(new Set(issued).size).toBe(issued.length);
+  });
+});
+
 describe("invoice numbers", () => {
   it("are unique and gapless when two server processes issue 200 at once (two separate connection pools)", async () => {
     const other = createDataSource({ ...loadConfig().db, database: t.ds.options.database as string });

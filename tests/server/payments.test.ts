@@ -1,4 +1,5 @@
 import Stripe from "stripe";
+import { startStripeFake } from "../../fakes/stripe/stripe-fake";
 import { startTestApp, makeAccount, makeBakery, makeProduct, makeUser, tokenFor, auth, type TestApp } from "./helpers/app";
 import { Order, OrderLine } from "../../server/orders/order.entity";
 import { Invoice, Payment, StripeEventRecord } from "../../server/billing/billing.entity";
@@ -83,18 +84,30 @@ describe("card payments through Stripe's hosted checkout (the local fake, real S
   });
 
   it("a webhook delivered three times and out of order pays the invoice once", async () => {
-    const inv = await invoiceFor(3);
-    const pi = `pi_replay_${inv.id}`;
-    const secret = t.ctx.config.stripe.webhookSecret;
-    const send = (payload: string) => t.http().post("/api/webhooks/stripe").set("Content-Type", "application/json").set("Stripe-Signature", Stripe.webhooks.generateTestHeaderString({ payload, secret })).send(payload);
-    const succeeded = JSON.stringify({ id: `evt_pi_${inv.id}`, object: "event", type: "payment_intent.succeeded", data: { object: { id: pi, object: "payment_intent", amount: inv.totalCents, amount_received: inv.totalCents, metadata: { invoiceId: String(inv.id) }, latest_charge: `ch_replay_${inv.id}` } } });
-    const completed = JSON.stringify({ id: `evt_cs_${inv.id}`, object: "event", type: "checkout.session.completed", data: { object: { id: `cs_replay_${inv.id}`, object: "checkout.session", payment_status: "paid", amount_total: inv.totalCents, payment_intent: pi, metadata: { invoiceId: String(inv.id) } } } });
-    for (const p of [succeeded, completed, succeeded, completed, succeeded]) expect((await send(p)).status).toBe(200);
-    const again = await send(succeeded);
-    expect(again.body).toEqual({ received: true, duplicate: true });
-    const row = await t.ds.getRepository(Invoice).findOneByOrFail({ id: inv.id });
-    expect(row).toMatchObject({ status: "paid", paidCents: inv.totalCents });
-    expect(await t.ds.getRepository(Payment).countBy({ invoiceId: inv.id })).toBe(1);
+    // A second fake that sends no webhooks: its genuine events are delivered here by hand, in the wrong order and repeated.
+    const quiet = await startStripeFake({ port: 0 });
+    const real = t.ctx.stripe;
+    t.ctx.stripe = new Stripe("sk_test_quiet", { host: "127.0.0.1", port: quiet.port, protocol: "http", maxNetworkRetries: 0 });
+    try {
+      const inv = await invoiceFor(3);
+      const { body } = await t.http().post(`/api/invoices/${inv.id}/checkout`).set(auth(buyer));
+      expect((await payOnHostedPage(body.url, "4242 4242 4242 4242")).status).toBe(303);
+      const events = Object.values(quiet.state.events);
+      const succeeded = JSON.stringify(events.find((e) => e.type === "payment_intent.succeeded"));
+      const completed = JSON.stringify(events.find((e) => e.type === "checkout.session.completed"));
+      const secret = t.ctx.config.stripe.webhookSecret;
+      const send = (payload: string) => t.http().post("/api/webhooks/stripe").set("Content-Type", "application/json").set("Stripe-Signature", Stripe.webhooks.generateTestHeaderString({ payload, secret })).send(payload);
+      for (const p of [succeeded, completed, succeeded, completed, succeeded]) expect((await send(p)).status).toBe(200);
+      const again = await send(succeeded);
+      expect(again.body).toEqual({ received: true, duplicate: true, rejected: false });
+      const row = await t.ds.getRepository(Invoice).findOneByOrFail({ id: inv.id });
+      expect(row).toMatchObject({ status: "paid", paidCents: inv.totalCents });
+      expect(await t.ds.getRepository(Payment).countBy({ invoiceId: inv.id })).toBe(1);
+      expect(await t.ds.query("SELECT outcome FROM stripe_event WHERE id IN (?, ?)", [JSON.parse(succeeded).id, JSON.parse(completed).id])).toEqual([{ outcome: "applied" }, { outcome: "applied" }]);
+    } finally {
+      t.ctx.stripe = real;
+      await quiet.close();
+    }
   });
 
   it("a bad signature gets 400 and changes nothing; the official SDK verifies the fake's signatures", async () => {
@@ -157,7 +170,7 @@ describe("card payments through Stripe's hosted checkout (the local fake, real S
     expect(detail.status).toBe(200);
     expect(detail.body.unmatched).toBe(0);
     expect(detail.body.netMatchesPayout).toBe(true);
-    // Every card payment made on the hosted page is in the payout (the replay test's synthetic payment never reached Stripe).
+    // Every card payment made on the hosted page of this fake is in the payout (the replay test paid on a second fake).
     const cardPayments = (await t.ds.getRepository(Payment).countBy({ method: "card" })) - 1;
     expect(detail.body.transactions.filter((x: { type: string }) => x.type === "charge").length).toBe(cardPayments);
     for (const x of detail.body.transactions) expect(x.invoiceNumber).toMatch(/^PB-2026-/);
