@@ -2,6 +2,7 @@ import fs from "node:fs";
 import path from "node:path";
 import zlib from "node:zlib";
 import { parse as parseCsv } from "csv-parse/sync";
+import sharp from "sharp";
 import { startTestApp, makeAccount, makeBakery, makeProduct, makeUser, tokenFor, auth, type TestApp } from "./helpers/app";
 import { CustomerAccount } from "../../server/accounts/account.entity";
 
@@ -42,7 +43,8 @@ function tinyPng(): Buffer {
   const ihdr = Buffer.from([0, 0, 0, 1, 0, 0, 0, 1, 8, 2, 0, 0, 0]);
   return Buffer.concat([Buffer.from([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a]), chunk("IHDR", ihdr), chunk("IDAT", zlib.deflateSync(Buffer.from([0, 200, 120, 60]))), chunk("IEND", Buffer.alloc(0))]);
 }
-const tinyJpeg = () => Buffer.concat([Buffer.from([0xff, 0xd8, 0xff, 0xe0, 0x00, 0x10, 0x4a, 0x46, 0x49, 0x46, 0x00, 0x01]), Buffer.alloc(64), Buffer.from([0xff, 0xd9])]);
+/** A decodable JPEG (photos are decoded and re-encoded when stored, so a header-only fake no longer passes). */
+const tinyJpeg = () => sharp({ create: { width: 2, height: 2, channels: 3, background: "#d9a35f" } }).jpeg().toBuffer();
 
 describe("catalog", () => {
   let id: number;
@@ -101,16 +103,17 @@ describe("catalog", () => {
     it("accepts a PNG, stores it under a generated name, serves it with long cache headers", async () => {
       const res = await t.http().put(`/api/products/${id}/photo`).set(auth(owner)).attach("photo", tinyPng(), { filename: "rolls.txt", contentType: "text/plain" });
       expect(res.status).toBe(200);
-      expect(res.body.product.photoUrl).toMatch(/^\/api\/uploads\/[a-f0-9]{32}\.png$/);
+      expect(res.body.product.photoUrl).toMatch(/^\/api\/uploads\/[a-f0-9]{64}\.png$/); // SHA-256 of the stored bytes
       const img = await t.http().get(res.body.product.photoUrl);
       expect(img.status).toBe(200);
       expect(img.headers["content-type"]).toBe("image/png");
-      expect(img.headers["cache-control"]).toContain("max-age=31536000");
+      expect(img.headers["cache-control"]).toBe("public, max-age=31536000, immutable");
+      expect(img.headers["x-content-type-options"]).toBe("nosniff");
     });
 
     it("replacing a photo removes the old file", async () => {
       const before = fs.readdirSync(t.ctx.config.uploadsDir);
-      const res = await t.http().put(`/api/products/${id}/photo`).set(auth(owner)).attach("photo", tinyJpeg(), { filename: "rolls.png", contentType: "image/png" });
+      const res = await t.http().put(`/api/products/${id}/photo`).set(auth(owner)).attach("photo", await tinyJpeg(), { filename: "rolls.png", contentType: "image/png" });
       expect(res.status).toBe(200);
       expect(res.body.product.photoUrl).toMatch(/\.jpg$/);
       const after = fs.readdirSync(t.ctx.config.uploadsDir);
