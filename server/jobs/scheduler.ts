@@ -51,19 +51,34 @@ export async function runLocked(ctx: AppContext, job: Job): Promise<boolean> {
   return (await withNamedLock(ctx, jobLockName(job.name, databaseOf(ctx)), () => job.run(ctx))).ran;
 }
 
+/**
+ * Jobs run one at a time, in the order they fall due: each holds a pooled connection for its named lock
+ * and needs more for its work, so running every due job at once (ten at start-up) could take the whole
+ * pool and leave every request, /api/health included, waiting for a connection. A job that is already
+ * waiting or running is not queued twice.
+ */
 export function startScheduler(ctx: AppContext, jobs: Job[]): { stop(): Promise<void>; trigger(name: string): void } {
   const timers: NodeJS.Timeout[] = [];
-  const running = new Set<Promise<unknown>>();
   const ticks = new Map<string, () => void>();
   const soon = new Set<string>();
+  const queued: Job[] = [];
+  let current: Promise<void> | null = null;
   let stopped = false;
+
+  const drain = () => {
+    if (current || stopped) return;
+    const job = queued.shift();
+    if (!job) return;
+    current = runLocked(ctx, job)
+      .then(() => undefined, (err) => ctx.logger.error({ err, job: job.name }, "scheduled job failed"))
+      .finally(() => { current = null; setImmediate(drain); });
+  };
+
   for (const job of jobs) {
     const tick = () => {
-      if (stopped) return;
-      const p = runLocked(ctx, job)
-        .catch((err) => ctx.logger.error({ err, job: job.name }, "scheduled job failed"))
-        .finally(() => running.delete(p));
-      running.add(p);
+      if (stopped || queued.includes(job)) return;
+      queued.push(job);
+      drain();
     };
     timers.push(setInterval(tick, typeof job.everyMs === "function" ? job.everyMs(ctx) : job.everyMs));
     ticks.set(job.name, tick);
@@ -79,7 +94,8 @@ export function startScheduler(ctx: AppContext, jobs: Job[]): { stop(): Promise<
     async stop() {
       stopped = true;
       timers.forEach(clearInterval);
-      await Promise.allSettled([...running]);
+      queued.length = 0;
+      await current;
     },
   };
 }
