@@ -1,6 +1,7 @@
 // npm start — everything from one command: installs, private MariaDB, migrations, demo data,
 // web build, mail fake and the server. Ctrl-C stops all of it. Node built-ins only.
 import fs from "node:fs";
+import crypto from "node:crypto";
 import path from "node:path";
 import { DATA, StartupError, capture, fail, httpOk, log, portFree, processAlive, readPid, startChild, waitFor, warn } from "./lib/env.mjs";
 import { ensureDebPackages, ensureNodeModules } from "./lib/deps.mjs";
@@ -13,6 +14,8 @@ const MAIL_HTTP_PORT = Number(process.env.MAIL_HTTP_PORT || 8025);
 const useMailFake = !process.env.SMTP_URL;
 const STRIPE_FAKE_PORT = Number(process.env.STRIPE_API_PORT || 12111);
 const useStripeFake = !process.env.STRIPE_API_HOST;
+// The fake and the server share a signing secret of this run's own (the one in the repository is public).
+const STRIPE_WEBHOOK_SECRET = process.env.STRIPE_WEBHOOK_SECRET || (useStripeFake ? `whsec_${crypto.randomBytes(24).toString("hex")}` : "");
 const PIDFILE = path.join(DATA, "start.pid");
 
 const cleanups = [];
@@ -79,7 +82,7 @@ async function main() {
   if (useStripeFake) {
     // Started before the seed: the demo's card payments go through it. Its webhooks reach the server once it is up (they retry).
     const stripe = startChild("stripe", "node", ["--import", "tsx", "fakes/stripe/main.ts"], {
-      env: { STRIPE_FAKE_PORT: String(STRIPE_FAKE_PORT), STRIPE_WEBHOOK_URL: `http://127.0.0.1:${PORT}/api/webhooks/stripe`, STRIPE_FAKE_STATE: path.join(DATA, "stripe-fake.json") },
+      env: { STRIPE_WEBHOOK_SECRET, STRIPE_FAKE_PORT: String(STRIPE_FAKE_PORT), STRIPE_WEBHOOK_URL: `http://127.0.0.1:${PORT}/api/webhooks/stripe`, STRIPE_FAKE_STATE: path.join(DATA, "stripe-fake.json") },
     });
     cleanups.push(stopChild(stripe, "Stripe fake"));
     watch(stripe, "the Stripe fake");
@@ -101,7 +104,7 @@ async function main() {
     env.SMTP_URL = `smtp://127.0.0.1:${MAIL_SMTP_PORT}`;
   }
 
-  const server = startChild("server", "node", ["--import", "tsx", "server/index.ts"], { env: { ...env, PORT: String(PORT), STRIPE_API_PORT: String(STRIPE_FAKE_PORT) } });
+  const server = startChild("server", "node", ["--import", "tsx", "server/index.ts"], { env: { ...env, PORT: String(PORT), STRIPE_API_PORT: String(STRIPE_FAKE_PORT), ...(STRIPE_WEBHOOK_SECRET ? { STRIPE_WEBHOOK_SECRET } : {}) } });
   cleanups.push(stopChild(server, "server"));
   watch(server, "the server");
   await waitFor("the server", () => httpOk(`http://127.0.0.1:${PORT}/api/health`), { timeoutMs: 60000 });

@@ -6,6 +6,7 @@ import { ensureDebPackages, ensureNodeModules } from "./lib/deps.mjs";
 import { createDatabase, dropDatabases, ensureAppUser, ensureMariadb } from "./lib/mariadb.mjs";
 import { ensureWebBuild, webDist } from "./lib/web-build.mjs";
 import fs from "node:fs";
+import crypto from "node:crypto";
 import path from "node:path";
 
 const args = process.argv.slice(2);
@@ -61,7 +62,9 @@ async function main() {
     const [port, smtpPort, mailHttpPort, stripePort] = [await freePort(), await freePort(), await freePort(), await freePort()];
     const env = { ...testEnv, DB_NAME: dbName, NODE_ENV: "production", LOG_LEVEL: "warn", PORT: String(port), SMTP_URL: `smtp://127.0.0.1:${smtpPort}`,
       MAIL_SMTP_PORT: String(smtpPort), MAIL_HTTP_PORT: String(mailHttpPort), PUBLIC_URL: `http://127.0.0.1:${port}`, WEB_DIST: webDist(),
-      STRIPE_API_PORT: String(stripePort), STRIPE_FAKE_PORT: String(stripePort), STRIPE_WEBHOOK_URL: `http://127.0.0.1:${port}/api/webhooks/stripe`, STRIPE_FAKE_STATE: path.join(testEnv.PANWISE_DATA_DIR, "stripe-fake.json") };
+      STRIPE_API_PORT: String(stripePort), STRIPE_FAKE_PORT: String(stripePort), STRIPE_WEBHOOK_URL: `http://127.0.0.1:${port}/api/webhooks/stripe`, STRIPE_FAKE_STATE: path.join(testEnv.PANWISE_DATA_DIR, "stripe-fake.json"),
+      // Production mode refuses the published local secret and key: this run's own, given to the fake and the server alike.
+      STRIPE_WEBHOOK_SECRET: `whsec_${crypto.randomBytes(24).toString("hex")}`, STRIPE_SECRET_KEY: `sk_test_${crypto.randomBytes(12).toString("hex")}` };
     const stripe = startChild("stripe", "node", ["--import", "tsx", "fakes/stripe/main.ts"], { env, quiet: true });
     cleanups.push(stopChild(stripe));
     await waitFor("the test Stripe fake", () => httpOk(`http://127.0.0.1:${stripePort}/_fake/webhooks`), { timeoutMs: 30000 });

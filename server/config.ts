@@ -111,7 +111,17 @@ export function stripeSettings(env: NodeJS.ProcessEnv = process.env): StripeSett
 export function loadConfig(): Config {
   const port = int("PORT", 8080);
   const host = process.env.HOST || "127.0.0.1";
+  let stripe: StripeSettings | undefined;
   return {
+    // Real Stripe: set STRIPE_SECRET_KEY and STRIPE_WEBHOOK_SECRET, and STRIPE_API_HOST=api.stripe.com
+    // STRIPE_API_PORT=443 STRIPE_API_PROTOCOL=https. Checked when first read (the server builds its Stripe
+    // client at start, and refuses to start), so tools that only need the database settings still load.
+    get stripe(): StripeSettings {
+      return (stripe ??= stripeSettings());
+    },
+    set stripe(value: StripeSettings) {
+      stripe = value;
+    },
     host,
     port,
     publicUrl: (process.env.PUBLIC_URL || `http://127.0.0.1:${port}`).replace(/\/$/, ""),
@@ -129,7 +139,5 @@ export function loadConfig(): Config {
     webDist: process.env.WEB_DIST ? path.resolve(process.env.WEB_DIST) : path.join(ROOT_DIR, "dist"),
     uploadsDir: path.join(DATA_DIR, "uploads"),
     logLevel: process.env.LOG_LEVEL || (process.env.NODE_ENV === "test" ? "silent" : "info"),
-    // Real Stripe: set STRIPE_SECRET_KEY and STRIPE_WEBHOOK_SECRET, and STRIPE_API_HOST=api.stripe.com STRIPE_API_PORT=443 STRIPE_API_PROTOCOL=https.
-    stripe: stripeSettings(),
   };
 }

@@ -42,6 +42,8 @@ async function main() {
 }
 
 main().catch((err) => {
-  console.error(JSON.stringify({ level: 60, msg: "server failed to start", err: err instanceof Error ? err.message : String(err) }));
+  // One line that says what is wrong (e.g. the Stripe settings), not a stack trace.
+  const message = err instanceof Error ? err.message : String(err);
+  console.error(JSON.stringify({ level: 60, time: Date.now(), msg: `Panwise server did not start: ${message}` }));
   process.exit(1);
 });

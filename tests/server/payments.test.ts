@@ -4,6 +4,7 @@ import { startTestApp, makeAccount, makeBakery, makeProduct, makeUser, tokenFor,
 import { Order, OrderLine } from "../../server/orders/order.entity";
 import { Invoice, Payment, StripeEventRecord } from "../../server/billing/billing.entity";
 import { confirmDispatch } from "../../server/billing/invoices.service";
+import { csvTable } from "../../server/billing/payments.service";
 import { parse as parseCsv } from "csv-parse/sync";
 import { formatMoney, minorUnitExponent } from "../../shared/money";
 import { taxCents } from "../../shared/billing";
@@ -187,6 +188,39 @@ describe("card payments through Stripe's hosted checkout (the local fake, real S
     expect(pays.some((p) => p.stripe_charge.startsWith("ch_"))).toBe(true);
     const outs = parseCsv((await t.http().get("/api/reports/exports/payouts.csv").set(auth(books))).text, { columns: true }) as Record<string, string>[];
     expect(outs.find((p) => p.payout === payout!.id)).toMatchObject({ unmatched: "0", net: (payout!.amount / 100).toFixed(2) });
+  });
+
+  it("CSV exports neutralise formulas in text cells (OWASP CSV Injection) and keep amounts numeric, negative ones too", async () => {
+    const evil = await makeAccount(t.ds, { businessName: '=HYPERLINK("http://evil.test/x","PO")', paymentTerms: "card" });
+    const date = "2026-06-28";
+    const o = await t.ds.getRepository(Order).save(t.ds.getRepository(Order).create({ accountId: evil.id, deliveryDate: date, status: "locked", totalCents: 1800, source: "one_off", editedByHand: false, createdById: null, poNumber: null, note: null }));
+    await t.ds.getRepository(OrderLine).insert({ orderId: o.id, productId: rolls.id, productName: "Rolls", saleUnit: "tray", quantity: 1, unitPriceCents: 1800, lineTotalCents: 1800 });
+    await confirmDispatch(t.ctx, date, []);
+    const inv = await t.ds.getRepository(Invoice).findOneByOrFail({ accountId: evil.id });
+    const refs = ["-2+3+cmd|' /C calc'!A0", "@SUM(1+1)*cmd|' /C calc'!A0", "\t=1+1", "+1+1"];
+    for (const reference of refs) {
+      expect((await t.http().post(`/api/invoices/${inv.id}/payments`).set(auth(books)).send({ amountCents: 100, method: "other", reference, receivedOn: "2026-06-10" })).status).toBe(201);
+    }
+    const invoicesCsv = parseCsv((await t.http().get("/api/reports/exports/invoices.csv").set(auth(books))).text, { columns: true }) as Record<string, string>[];
+    const row = invoicesCsv.find((r) => r.number === inv.number)!;
+    expect(row.account).toBe(`'${evil.businessName}`);
+    expect(row.total).toBe((inv.totalCents / 100).toFixed(2));
+    const paymentsCsv = parseCsv((await t.http().get("/api/reports/exports/payments.csv").set(auth(books))).text, { columns: true, relax_quotes: true }) as Record<string, string>[];
+    const mine = paymentsCsv.filter((r) => r.invoice === inv.number);
+    expect(mine.map((r) => r.reference)).toEqual(refs.map((r) => `'${r.trim()}`));
+    expect(mine.every((r) => r.account === `'${evil.businessName}` && r.amount === "1.00")).toBe(true);
+    // No text cell of any export starts with a formula character; every amount column is a plain decimal.
+    const amountCols = new Set(["subtotal", "tax", "total", "credited", "paid", "refunded", "amount_due", "amount", "gross", "fees", "refunds", "net"]);
+    const payoutsCsv = parseCsv((await t.http().get("/api/reports/exports/payouts.csv").set(auth(books))).text, { columns: true }) as Record<string, string>[];
+    for (const r of [...invoicesCsv, ...paymentsCsv, ...payoutsCsv]) {
+      for (const [k, v] of Object.entries(r)) {
+        if (amountCols.has(k)) expect({ k, v }).toEqual({ k, v: expect.stringMatching(/^-?\d+\.\d{2}$/) });
+        else expect({ k, v }).toEqual({ k, v: expect.not.stringMatching(/^[=+\-@\t\r]/) });
+      }
+    }
+    // A negative amount (a refund, a net below zero) stays a number a spreadsheet can add up; text that merely looks like one is escaped.
+    const csv = csvTable(["what", "amount"], [{ currency: "USD", cells: ["-12.50 off", -1250] }, { currency: "JPY", cells: ["refund", -1250] }]);
+    expect(parseCsv(csv, { columns: true })).toEqual([{ what: "'-12.50 off", amount: "-12.50" }, { what: "refund", amount: "-1250" }]);
   });
 
   it("uses ISO 4217 minor units when formatting and when sending amounts to Stripe", async () => {
