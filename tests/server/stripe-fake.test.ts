@@ -411,6 +411,24 @@ describe("balance and payouts", () => {
   });
 });
 
+describe("what Panwise's catch-up job asks (server/jobs/stripe-catch-up.ts)", () => {
+  beforeAll(() => fake.reset());
+
+  it("lists events by created[gte] and types[], pages them all, and finds a session by its payment intent", async () => {
+    const before = Math.floor(Date.now() / 1000);
+    const { session, pi, charge } = await paidSession();
+    await stripe.refunds.create({ charge: charge.id, amount: 100 });
+    const wanted = ["checkout.session.completed", "payment_intent.succeeded", "charge.refunded"];
+    const listed = await stripe.events.list({ created: { gte: before }, types: wanted, limit: 1 }).autoPagingToArray({ limit: 100 });
+    expect(listed.map((e) => e.type).sort()).toEqual([...wanted].sort());
+    expect(listed.every((e) => e.created >= before)).toBe(true);
+    expect(await stripe.events.list({ created: { gte: before + 3600 }, types: wanted })).toMatchObject({ data: [] });
+    const found = await stripe.checkout.sessions.list({ payment_intent: pi.id, limit: 1 });
+    expect(found.data.map((s) => s.id)).toEqual([session.id]);
+    expect((await stripe.checkout.sessions.list({ payment_intent: "pi_not_here" })).data).toEqual([]);
+  });
+});
+
 describe("list pagination", () => {
   beforeAll(() => fake.reset());
 
