@@ -4,13 +4,13 @@ import type { AppContext } from "../http/context";
 import { badRequest, conflict, notFound, parse } from "../http/errors";
 import { allow, currentUser } from "../http/auth";
 import { idSchema } from "../../shared/schemas/common";
-import { dateSchema } from "../../shared/schemas/calendar";
+import { dateRangeCheck, dateSchema } from "../../shared/schemas/calendar";
 import { PAYMENT_TERMS } from "../../shared/billing";
 import { ROLES } from "../../shared/roles";
 import { CustomerAccount } from "../accounts/account.entity";
 import { getBakery } from "../bakery/bakery.service";
 import { Bakery } from "../bakery/bakery.entity";
-import { resolveAccount } from "../calendar/calendar.service";
+import { refuseAfterToday, resolveAccount } from "../calendar/calendar.service";
 import * as invoices from "./invoices.service";
 import * as payments from "./payments.service";
 import { renderInvoicePdf } from "./invoice.pdf";
@@ -54,12 +54,13 @@ export function invoiceRoutes(ctx: AppContext): Router {
     overdue: z.enum(["1", "true"]).optional().transform((v) => !!v),
     q: z.string().trim().max(80).optional(),
     sort: z.enum(["newest", "oldest", "due", "amount", "account"]).optional(),
-  });
+  }).superRefine(dateRangeCheck({ from: "from", to: "to" }));
   r.get("/", allow(...OFFICE, "buyer"), async (req, res) => {
     res.json(await invoices.listInvoices(ctx, currentUser(req), parse(listQuery, req.query)));
   });
   r.post("/statements", allow(...OFFICE), async (req, res) => {
     const { through } = parse(z.object({ through: dateSchema.optional() }), req.body);
+    await refuseAfterToday(ctx, through, "through", "Statements run through today at the latest.");
     // One run at a time, under the same MariaDB named lock as the weekly job (server/jobs/scheduler.ts).
     const run = await withJobLock(ctx, "weekly-statements", () => invoices.issueStatements(ctx, through));
     if (!run.ran) throw conflict("already_running", "Statements are already being issued; try again in a minute.");

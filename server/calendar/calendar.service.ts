@@ -6,8 +6,8 @@ import { CustomerAccount } from "../accounts/account.entity";
 import { Order } from "../orders/order.entity";
 import { getBakery } from "../bakery/bakery.service";
 import { badRequest, notFound } from "../http/errors";
-import { REASON_TEXT, dateRange, dateStatus, weekdayOf, type CalendarSettings, type Weekday } from "../../shared/calendar";
-import type { CalendarDayDto, CalendarSettingsDto, CalendarSettingsInput } from "../../shared/schemas/calendar";
+import { REASON_TEXT, dateRange, dateStatus, daysBetween, isSupportedDate, localToday, weekdayOf, type CalendarSettings, type Weekday } from "../../shared/calendar";
+import { CALENDAR_MAX_DAYS, DATE_LIMIT_MESSAGE, type CalendarDayDto, type CalendarSettingsDto, type CalendarSettingsInput } from "../../shared/schemas/calendar";
 import type { SessionUser } from "../../shared/schemas/auth";
 
 export const parseWeekdays = (s: string | null): Weekday[] | null =>
@@ -57,6 +57,13 @@ export async function putSettings(ctx: AppContext, input: CalendarSettingsInput 
   return getSettingsDto(ctx);
 }
 
+/** A date after today in the bakery's zone is refused with a 400 on `field` (say, a statement period that ends in the future). */
+export async function refuseAfterToday(ctx: AppContext, date: string | undefined, field: string, message: string): Promise<void> {
+  if (date === undefined) return;
+  const today = localToday(ctx.clock.now(), (await getBakery(ctx)).timeZone);
+  if (daysBetween(today, date) > 0) throw badRequest(message, { [field]: message });
+}
+
 /** Office users name the account; buyers always get their own. */
 export async function resolveAccount(ctx: AppContext, actor: SessionUser, accountId: number | undefined, m: EntityManager = ctx.dataSource.manager): Promise<CustomerAccount> {
   let id: number;
@@ -73,7 +80,11 @@ export async function resolveAccount(ctx: AppContext, actor: SessionUser, accoun
 }
 
 export async function calendarFor(ctx: AppContext, actor: SessionUser, q: { from: string; to: string; accountId?: number }): Promise<CalendarDayDto[]> {
-  if (dateRange(q.from, q.to).length > 120) throw badRequest("Ask for at most 120 days at a time.", { to: "At most 120 days after the start." });
+  // The span is checked from day counts before anything is built or read (calendarQuerySchema checks it too).
+  if (!isSupportedDate(q.from) || !isSupportedDate(q.to)) throw badRequest(DATE_LIMIT_MESSAGE, { to: DATE_LIMIT_MESSAGE });
+  const span = daysBetween(q.from, q.to) + 1;
+  if (span < 1) throw badRequest("The end date must not be before the start.", { to: "The end date must not be before the start." });
+  if (span > CALENDAR_MAX_DAYS) throw badRequest(`Ask for at most ${CALENDAR_MAX_DAYS} days at a time.`, { to: `At most ${CALENDAR_MAX_DAYS} days after the start.` });
   const account = await resolveAccount(ctx, actor, q.accountId);
   const settings = await loadCalendarSettings(ctx);
   const routeDays = parseWeekdays(account.routeWeekdays);
@@ -85,7 +96,7 @@ export async function calendarFor(ctx: AppContext, actor: SessionUser, q: { from
     .groupBy("o.id").getRawMany<{ id: number; deliveryDate: string; status: string; totalCents: number; source: string; itemCount: string }>();
   const byDate = new Map(orders.map((o) => [String(o.deliveryDate).slice(0, 10), o]));
   const now = ctx.clock.now();
-  return dateRange(q.from, q.to).map((date) => {
+  return dateRange(q.from, q.to, CALENDAR_MAX_DAYS).map((date) => {
     const st = dateStatus(date, settings, now, routeDays);
     const o = byDate.get(date);
     return {

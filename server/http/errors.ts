@@ -36,8 +36,9 @@ export function parse<S extends ZodTypeAny>(schema: S, value: unknown): z.output
 
 export function validationError(error: ZodError): HttpError {
   const fields = fieldErrorsFrom(error);
-  const count = Object.keys(fields).length;
-  return badRequest(count === 1 ? Object.values(fields)[0] : "Some fields need attention.", fields);
+  // One message for every field (say, both dates of a range outside the limits) is the message itself.
+  const messages = new Set(Object.values(fields));
+  return badRequest(messages.size === 1 ? [...messages][0] : "Some fields need attention.", fields);
 }
 
 export const apiNotFound: RequestHandler = (req, _res, next) => {

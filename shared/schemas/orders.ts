@@ -1,5 +1,5 @@
 import { z } from "zod";
-import { dateSchema } from "./calendar";
+import { ORDER_LIST_MAX_DAYS, dateRangeCheck, dateSchema } from "./calendar";
 import type { AllergenCode } from "../allergens";
 import type { Weekday } from "../calendar";
 
@@ -12,10 +12,19 @@ export const ORDER_STATUS_LABELS: Record<OrderStatus, string> = {
   cancelled: "Cancelled",
 };
 
+/** Most units on one line: the same ceiling as a product's own maximum (shared/schemas/catalog.ts). */
+export const MAX_LINE_QUANTITY = 10_000;
+/**
+ * Most cents one order line, or one order, may come to: the top of the signed INT columns that hold them
+ * (MariaDB Knowledge Base, "INT": −2147483648 to 2147483647), i.e. 2^31 − 1.
+ */
+export const MAX_ORDER_CENTS = 2_147_483_647;
+
 export const quantitySchema = z
   .number({ required_error: "Enter a quantity.", invalid_type_error: "The quantity must be a number." })
   .int("Quantities are whole units.")
-  .positive("The quantity must be at least 1.");
+  .positive("The quantity must be at least 1.")
+  .max(MAX_LINE_QUANTITY, `At most ${MAX_LINE_QUANTITY.toLocaleString("en-US")} units on one line.`);
 
 const lineSchema = z.object({
   productId: z.number({ required_error: "Choose a product.", invalid_type_error: "Choose a product." }).int().positive("Choose a product."),
@@ -46,11 +55,15 @@ export const orderCreateSchema = z.object({
 });
 export type OrderCreateInput = z.input<typeof orderCreateSchema>;
 
-export const orderUpdateSchema = z.object({ lines: linesSchema.optional(), poNumber: poSchema, note: noteSchema });
+export const NOTHING_TO_CHANGE = "Nothing to change: send the lines, the PO number or the note.";
+export const orderUpdateSchema = z
+  .object({ lines: linesSchema.optional(), poNumber: poSchema, note: noteSchema })
+  .refine((v) => v.lines !== undefined || v.poNumber !== undefined || v.note !== undefined, { message: NOTHING_TO_CHANGE });
 export type OrderUpdateInput = z.input<typeof orderUpdateSchema>;
 
 export const orderListQuerySchema = z
-  .object({ from: dateSchema.optional(), to: dateSchema.optional(), accountId: z.coerce.number().int().positive().optional(), status: z.enum(ORDER_STATUSES).optional() });
+  .object({ from: dateSchema.optional(), to: dateSchema.optional(), accountId: z.coerce.number().int().positive().optional(), status: z.enum(ORDER_STATUSES).optional() })
+  .superRefine(dateRangeCheck({ from: "from", to: "to", maxDays: ORDER_LIST_MAX_DAYS, what: "orders" }));
 
 export interface OrderLineDto {
   productId: number;
@@ -90,12 +103,12 @@ export const standingOrderSchema = z
     intervalWeeks: z.union([z.literal(1), z.literal(2)], { errorMap: () => ({ message: "Choose every week or every other week." }) }),
     skipDates: z.array(dateSchema).max(200).default([]),
     lines: z
-      .array(z.object({ productId: z.number().int().positive(), weekday: z.number().int().min(1).max(7), quantity: z.number().int("Quantities are whole units.").min(0, "Quantities cannot be negative.") }))
+      .array(z.object({ productId: z.number().int().positive(), weekday: z.number().int().min(1).max(7), quantity: z.number().int("Quantities are whole units.").min(0, "Quantities cannot be negative.").max(MAX_LINE_QUANTITY, `At most ${MAX_LINE_QUANTITY.toLocaleString("en-US")} units on one line.`) }))
       .max(500),
     active: z.boolean().default(true),
   })
   .superRefine((v, ctx) => {
-    if (v.endDate && v.endDate < v.startDate) ctx.addIssue({ code: "custom", path: ["endDate"], message: "The end date must be after the start date." });
+    dateRangeCheck({ from: "startDate", to: "endDate", reversed: "The end date must be after the start date." })(v, ctx);
     const seen = new Set<string>();
     v.lines.forEach((l, i) => {
       const k = `${l.productId}:${l.weekday}`;
