@@ -4,6 +4,7 @@ import type { AppContext } from "../http/context";
 import { notFound, conflict } from "../http/errors";
 import { OutboxMail } from "./outbox.entity";
 import type { OutgoingMail } from "./mailer";
+import { isDatabaseUnavailable } from "../db/retry";
 
 export const MAX_ATTEMPTS = 12;
 const SENDING_STALE_MS = 5 * 60 * 1000;
@@ -31,13 +32,50 @@ export async function enqueueMail(m: EntityManager, ctx: AppContext, kind: strin
 
 const backoffMs = (attempts: number) => Math.min(5 * 60 * 1000, 1000 * 2 ** Math.max(0, attempts - 1));
 
+/** Waits between tries at recording "sent" while the database does not answer (about 4 s in all). */
+export const MARK_SENT_RETRY_MS = [100, 250, 500, 1000, 2000];
+
 /**
- * Send what is due. Each row is claimed ("sending") before the SMTP call and marked "sent" after it, so a
- * mail goes at most once; a row left "sending" by a crashed process is retried after 5 minutes with the
- * same Message-ID. Runs under the scheduler's MariaDB named lock, so one instance sends at a time.
+ * Mails the mail server accepted whose "sent" could not be written yet (the database was unreachable), per
+ * DataSource: written first thing in the next round, before any row left "sending" goes back in the queue.
+ */
+const unrecorded = new WeakMap<object, Map<number, { sentAt: Date; attempts: number }>>();
+function unrecordedOf(ctx: AppContext) {
+  let m = unrecorded.get(ctx.dataSource);
+  if (!m) unrecorded.set(ctx.dataSource, (m = new Map()));
+  return m;
+}
+
+/** Record "sent" right after the SMTP accept, holding the row's claim; try again for a few seconds while the database is away. */
+async function markSent(ctx: AppContext, id: number, sentAt: Date, attempts: number): Promise<boolean> {
+  const repo = ctx.dataSource.getRepository(OutboxMail);
+  for (let i = 0; ; i++) {
+    try {
+      await repo.update({ id }, { status: "sent", sentAt, attempts, lastError: null });
+      return true;
+    } catch (err) {
+      if (!isDatabaseUnavailable(err)) throw err;
+      if (i >= MARK_SENT_RETRY_MS.length) return false;
+      await new Promise((r) => setTimeout(r, MARK_SENT_RETRY_MS[i]));
+    }
+  }
+}
+
+/**
+ * Send what is due. At-least-once: each row is claimed ("sending") before the SMTP call and marked "sent"
+ * right after the server accepts it. If the database is unreachable at that moment, this process retries the
+ * mark for a few seconds and then keeps it in memory, writing it first in the next round; only when the
+ * process itself dies in that gap does the row, after 5 minutes "sending", go out again — with the same
+ * Message-ID, so mail clients can tell it is a repeat. Runs under the scheduler's MariaDB named lock, so one
+ * instance sends at a time.
  */
 export async function processOutbox(ctx: AppContext, limit = 100): Promise<{ sent: number; failed: number }> {
   const repo = ctx.dataSource.getRepository(OutboxMail);
+  const pendingMarks = unrecordedOf(ctx);
+  for (const [id, mark] of [...pendingMarks]) {
+    await repo.update({ id }, { status: "sent", sentAt: mark.sentAt, attempts: mark.attempts, lastError: null });
+    pendingMarks.delete(id);
+  }
   const now = ctx.clock.now();
   await repo.update({ status: "sending", nextAttemptAt: LessThan(new Date(now.getTime() - SENDING_STALE_MS)) }, { status: "pending" });
   const due = await repo.find({ where: { status: "pending", nextAttemptAt: LessThanOrEqual(now) }, order: { id: "ASC" }, take: limit });
@@ -61,9 +99,14 @@ export async function processOutbox(ctx: AppContext, limit = 100): Promise<{ sen
       sendError = err;
     }
     if (!sendError) {
-      // Sent: a database hiccup here leaves the row "sending"; it is retried (same Message-ID) only after 5 minutes.
-      await repo.update({ id: row.id }, { status: "sent", sentAt: ctx.clock.now(), attempts: row.attempts + 1, lastError: null });
       sent++;
+      const sentAt = ctx.clock.now();
+      if (!(await markSent(ctx, row.id, sentAt, row.attempts + 1))) {
+        // Still no database: remember it here, so the next round records it instead of sending it again.
+        pendingMarks.set(row.id, { sentAt, attempts: row.attempts + 1 });
+        ctx.logger.warn({ outboxId: row.id, event: "mail_sent_unrecorded" }, "mail sent but the database is unreachable; recording it when it is back");
+        break;
+      }
     } else {
       const err = sendError;
       const attempts = row.attempts + 1;

@@ -1,5 +1,6 @@
 import { startTestApp, makeAccount, makeBakery, makeProduct, makeUser, tokenFor, auth, type TestApp } from "./helpers/app";
-import { processOutbox, MAX_ATTEMPTS } from "../../server/mail/outbox.service";
+import { processOutbox, MAX_ATTEMPTS, MARK_SENT_RETRY_MS, enqueueMail } from "../../server/mail/outbox.service";
+import { QueryFailedError } from "typeorm";
 import { OutboxMail } from "../../server/mail/outbox.entity";
 import { startMailFake } from "../../fakes/mail/mail-fake";
 
@@ -87,4 +88,82 @@ describe("mail that is never lost", () => {
     const again = await t.http().post(`/api/outbox/${row.id}/resend`).set(auth(owner));
     expect(again.status).toBe(409);
   });
+});
+
+describe("a database crash right after the mail server accepted a mail", () => {
+  // What mysql2 gives TypeORM when MariaDB is gone: a fatal ECONNREFUSED (see tests/reliability/db-unavailable.test.ts).
+  const refused = () => new QueryFailedError("UPDATE `mail_outbox` …", [], Object.assign(new Error("connect ECONNREFUSED 127.0.0.1:3307"), { code: "ECONNREFUSED", fatal: true }));
+
+  /** Make the outbox's "sent" updates fail while `down()` says the database is away. */
+  function failSentUpdates(down: () => boolean) {
+    const repo = t.ds.getRepository(OutboxMail);
+    const original = repo.update.bind(repo);
+    const seen = { refused: 0 };
+    const spy = jest.spyOn(repo, "update").mockImplementation(((criteria: unknown, partial: { status?: string }) => {
+      if (partial?.status === "sent" && down()) {
+        seen.refused++;
+        return Promise.reject(refused());
+      }
+      return original(criteria as never, partial as never);
+    }) as typeof repo.update);
+    return { seen, restore: () => spy.mockRestore() };
+  }
+
+  async function queue(to: string) {
+    const row = await t.ds.transaction((m) => enqueueMail(m, t.ctx, "order_placed", { to, fromName: "Test Bakery", subject: `Order received for ${to}`, html: "<p>x</p>", text: "x" }));
+    return row;
+  }
+
+  async function deliveredTo(to: string) {
+    // SMTP delivery to the fake is asynchronous: give it a moment.
+    await new Promise((r) => setTimeout(r, 100));
+    return t.mail.messages.filter((m) => m.to.includes(to));
+  }
+
+  it("a blip shorter than the retries: recorded as sent at once, sent once", async () => {
+    const row = await queue("blip@cafe.test");
+    let failures = 2;
+    const db = failSentUpdates(() => failures-- > 0);
+    try {
+      await expect(processOutbox(t.ctx)).resolves.toMatchObject({ sent: 1 });
+    } finally {
+      db.restore();
+    }
+    expect(db.seen.refused).toBe(2);
+    expect((await t.ds.getRepository(OutboxMail).findOneByOrFail({ id: row.id })).status).toBe("sent");
+    t.clock.advance(10 * 60 * 1000);
+    await processOutbox(t.ctx);
+    const got = await deliveredTo("blip@cafe.test");
+    expect(got).toHaveLength(1);
+    expect(got[0].messageId).toBe(row.messageId);
+  });
+
+  it("an outage longer than the retries: remembered, recorded when the database is back, never sent twice", async () => {
+    const row = await queue("outage@cafe.test");
+    const later = await queue("later@cafe.test");
+    let down = true;
+    const db = failSentUpdates(() => down);
+    try {
+      await processOutbox(t.ctx);
+      expect(db.seen.refused).toBe(MARK_SENT_RETRY_MS.length + 1);
+      // Accepted by the mail server, but the database still says "sending"; the next mail waits its turn.
+      expect((await t.ds.getRepository(OutboxMail).findOneByOrFail({ id: row.id })).status).toBe("sending");
+      expect((await t.ds.getRepository(OutboxMail).findOneByOrFail({ id: later.id })).status).toBe("pending");
+      down = false;
+      // Well past the 5 minutes after which a row left "sending" goes back in the queue.
+      t.clock.advance(10 * 60 * 1000);
+      await processOutbox(t.ctx);
+      t.clock.advance(10 * 60 * 1000);
+      await processOutbox(t.ctx);
+    } finally {
+      db.restore();
+    }
+    const stored = await t.ds.getRepository(OutboxMail).findOneByOrFail({ id: row.id });
+    expect(stored.status).toBe("sent");
+    expect(stored.attempts).toBe(1);
+    const got = await deliveredTo("outage@cafe.test");
+    expect(got).toHaveLength(1);
+    expect(got[0].messageId).toBe(row.messageId);
+    expect(await deliveredTo("later@cafe.test")).toHaveLength(1);
+  }, 30_000);
 });
