@@ -38,11 +38,31 @@ export async function board(ctx: AppContext, date: string): Promise<BoardDto> {
   };
 }
 
-/** The board as CSV (RFC 4180 through csv-stringify): one row per account, a column per product, a totals row. */
+/** A money cell: a decimal string, kept as written even when negative (see boardCsv). */
+interface MoneyCell { money: string }
+
+/**
+ * The board as CSV (RFC 4180 through csv-stringify): one row per account, a column per product, a totals row.
+ * Text cells that start with = + - @ TAB or CR are prefixed with ' (csv-stringify `escape_formulas`; OWASP
+ * "CSV Injection"), so a PO number or account name cannot run as a spreadsheet formula. Quantities are
+ * numbers, which csv-stringify never escapes. Amounts are decimal strings ("18.00", to keep the cents);
+ * escape_formulas would turn a negative one into "'-1.50", so a money cell — only ever digits, a point and
+ * perhaps a leading minus, which no spreadsheet reads as a formula — is written with escaping off.
+ * Order totals are never negative today; this keeps them numbers if that changes.
+ */
 export function boardCsv(b: BoardDto, currency: string): string {
   const header = ["Delivery date", "Account", "Status", "PO number", ...b.products.map((p) => `${p.name} (${p.saleUnit})`), `Order total (${currency})`];
-  const money = (c: number) => toDecimal(c, currency);
+  const money = (c: number): MoneyCell => ({ money: toDecimal(c, currency) });
   const rows = b.rows.map((r) => [b.date, r.accountName, r.status, r.poNumber ?? "", ...b.products.map((p) => r.quantities[p.id] ?? 0), money(r.totalCents)]);
   const totals = [b.date, "Total", "", "", ...b.products.map((p) => p.total), money(b.totalCents)];
-  return stringify([header, ...rows, totals]);
+  return stringify([header, ...rows, totals], {
+    escape_formulas: true,
+    cast: {
+      object: (v) => {
+        const m = (v as Partial<MoneyCell>).money;
+        if (typeof m === "string" && /^-?\d+(\.\d+)?$/.test(m)) return { value: m, escape_formulas: false };
+        return JSON.stringify(v);
+      },
+    },
+  });
 }

@@ -1,11 +1,11 @@
 import { Router } from "express";
 import { z } from "zod";
 import type { AppContext } from "../http/context";
-import { parse } from "../http/errors";
+import { badRequest, parse } from "../http/errors";
 import { allow, currentUser } from "../http/auth";
 import { idSchema } from "../../shared/schemas/common";
 import { dateSchema } from "../../shared/schemas/calendar";
-import { orderCreateSchema, orderListQuerySchema, orderUpdateSchema, standingOrderSchema } from "../../shared/schemas/orders";
+import { NOTHING_TO_CHANGE, orderCreateSchema, orderListQuerySchema, orderUpdateSchema, standingOrderSchema } from "../../shared/schemas/orders";
 import { resolveAccount } from "../calendar/calendar.service";
 import { getBakery } from "../bakery/bakery.service";
 import * as orders from "./orders.service";
@@ -49,6 +49,8 @@ export function ordersRoutes(ctx: AppContext): Router {
   });
   r.patch("/:id", allow(...ORDERING), async (req, res) => {
     const { id } = parse(idParam, req.params);
+    // express.json only parses application/json; anything else leaves no body, which would change nothing.
+    if (!req.is("application/json") || typeof req.body !== "object" || req.body === null || Array.isArray(req.body)) throw badRequest(`${NOTHING_TO_CHANGE} Send them as a JSON object.`);
     const input = parse(orderUpdateSchema, req.body);
     res.json({ order: await orders.updateOrder(ctx, currentUser(req), id, input) });
   });
@@ -100,7 +102,8 @@ export function publicFeedRoutes(ctx: AppContext): Router {
   r.get("/:file", async (req, res) => {
     const token = String(req.params.file).replace(/\.ics$/, "");
     const body = await feed.renderFeed(ctx, token);
-    res.type("text/calendar; charset=utf-8").set("Cache-Control", "private, max-age=300").send(body);
+    // Deliveries, addresses and totals: not to be stored by any cache (the /api no-store header stays).
+    res.type("text/calendar; charset=utf-8").send(body);
   });
   return r;
 }

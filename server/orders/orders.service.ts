@@ -15,7 +15,7 @@ import { sortAllergens } from "../../shared/allergens";
 import { formatMoney } from "../../shared/money";
 import type { FieldErrors } from "../../shared/errors";
 import type { SessionUser } from "../../shared/schemas/auth";
-import type { OrderDto, OrderStatus } from "../../shared/schemas/orders";
+import { MAX_ORDER_CENTS, type OrderDto, type OrderStatus } from "../../shared/schemas/orders";
 import { orderMail } from "../mail/templates";
 import { retryOnDeadlock } from "../db/retry";
 import { derivedAllergens } from "../production/formulas.service";
@@ -121,14 +121,29 @@ async function checkLines(ctx: AppContext, m: EntityManager, lines: LineInput[],
   return products;
 }
 
-async function priceLines(ctx: AppContext, m: EntityManager, accountId: number, lines: LineInput[], products: Map<number, Product>) {
+async function priceLines(ctx: AppContext, m: EntityManager, accountId: number, lines: LineInput[], products: Map<number, Product>, currency: string) {
   const pricing = await pricingFor(ctx, accountId, m);
   const priced = lines.map((l) => {
     const p = products.get(l.productId)!;
     const unit = pricing.price(p);
     return { productId: p.id, productName: p.name, saleUnit: p.saleUnit, quantity: l.quantity, unitPriceCents: unit, lineTotalCents: unit * l.quantity };
   });
-  return { priced, total: priced.reduce((s, l) => s + l.lineTotalCents, 0) };
+  // Line and order totals live in INT columns: above 2^31 − 1 cents the database would refuse the row.
+  const most = formatMoney(MAX_ORDER_CENTS, currency);
+  const fields: FieldErrors = {};
+  priced.forEach((l, i) => {
+    if (l.lineTotalCents > MAX_ORDER_CENTS) fields[`lines.${i}.quantity`] = `This line comes to ${formatMoney(l.lineTotalCents, currency)}; one line can be at most ${most}.`;
+  });
+  if (Object.keys(fields).length) throw badRequest(Object.keys(fields).length === 1 ? Object.values(fields)[0] : `Some lines come to more than ${most}, the most one line can be.`, fields);
+  const total = priced.reduce((s, l) => s + l.lineTotalCents, 0);
+  if (total > MAX_ORDER_CENTS) throw badRequest(`This order comes to ${formatMoney(total, currency)}; one order can be at most ${most}.`, { lines: `One order can be at most ${most}.` });
+  return { priced, total };
+}
+
+/** The same products and quantities, whatever their order. */
+function sameLines(a: LineInput[], b: LineInput[]): boolean {
+  const key = (ls: LineInput[]) => ls.map((l) => `${l.productId}:${l.quantity}`).sort().join(",");
+  return a.length === b.length && key(a) === key(b);
 }
 
 function refuseBelowMinimum(account: CustomerAccount, total: number, currency: string) {
@@ -155,7 +170,7 @@ export async function createOrder(ctx: AppContext, actor: SessionUser | null, in
     if (st.reason === "past_cutoff") throw cutoffPassed(DateTime.fromISO(st.cutoffAt, { setZone: true }), settings.timeZone, input.deliveryDate);
     if (!st.orderable) throw new HttpError(409, "date_not_orderable", `You can't order for this date: ${REASON_TEXT[st.reason!].toLowerCase()}.`, undefined, { reason: st.reason });
     const products = await checkLines(ctx, m, input.lines, input.deliveryDate, settings);
-    const { priced, total } = await priceLines(ctx, m, account.id, input.lines, products);
+    const { priced, total } = await priceLines(ctx, m, account.id, input.lines, products, bakery.currency);
     refuseBelowMinimum(account, total, bakery.currency);
     const orders = m.getRepository(Order);
     const existing = await orders.findOneBy({ accountId: account.id, deliveryDate: input.deliveryDate });
@@ -179,7 +194,7 @@ export async function createOrder(ctx: AppContext, actor: SessionUser | null, in
   return opts.manager ? run(opts.manager) : retryOnDeadlock(() => ctx.dataSource.transaction("READ COMMITTED", run));
 }
 
-/** Replace lines, PO number or note of an open order before its cut-off. */
+/** Replace lines, PO number or note of an open order before its cut-off. A request that changes nothing writes nothing and mails nothing. */
 export async function updateOrder(ctx: AppContext, actor: SessionUser, id: number, input: { lines?: LineInput[]; poNumber?: string; note?: string }): Promise<OrderDto> {
   const bakery = await getBakery(ctx);
   const settings = await loadCalendarSettings(ctx);
@@ -189,11 +204,12 @@ export async function updateOrder(ctx: AppContext, actor: SessionUser, id: numbe
     const oldProducts = await m.getRepository(Product).findBy({ id: In(existingLines.map((l) => l.productId).concat([0])) });
     const account = await m.getRepository(CustomerAccount).findOneByOrFail({ id: order.accountId });
     const patch: Partial<Order> = { editedByHand: order.source === "standing" ? true : order.editedByHand };
-    if (input.poNumber !== undefined) patch.poNumber = input.poNumber || null;
-    if (input.note !== undefined) patch.note = input.note || null;
-    if (input.lines) {
-      const products = await checkLines(ctx, m, input.lines, order.deliveryDate, settings, oldProducts);
-      const { priced, total } = await priceLines(ctx, m, account.id, input.lines, products);
+    if (input.poNumber !== undefined && (input.poNumber || null) !== order.poNumber) patch.poNumber = input.poNumber || null;
+    if (input.note !== undefined && (input.note || null) !== order.note) patch.note = input.note || null;
+    const newLines = input.lines && !sameLines(input.lines, existingLines) ? input.lines : undefined;
+    if (newLines) {
+      const products = await checkLines(ctx, m, newLines, order.deliveryDate, settings, oldProducts);
+      const { priced, total } = await priceLines(ctx, m, account.id, newLines, products, bakery.currency);
       refuseBelowMinimum(account, total, bakery.currency);
       await m.getRepository(OrderLine).delete({ orderId: order.id });
       await m.getRepository(OrderLine).insert(priced.map((l) => ({ ...l, orderId: order.id })));
@@ -201,6 +217,8 @@ export async function updateOrder(ctx: AppContext, actor: SessionUser, id: numbe
     } else {
       const c = orderCutoff(order.deliveryDate, settings, oldProducts);
       if (ctx.clock.now().getTime() >= c.toMillis()) throw cutoffPassed(c, settings.timeZone, order.deliveryDate);
+      // Same lines, same PO number, same note: nothing changed, so no write and no "Order changed" mail.
+      if (!("poNumber" in patch) && !("note" in patch)) return (await orderDtos(ctx, [order], m))[0];
     }
     await m.getRepository(Order).update({ id: order.id }, patch);
     const changed = (await orderDtos(ctx, [(await m.getRepository(Order).findOneBy({ id: order.id }))!], m))[0];

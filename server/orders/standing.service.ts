@@ -11,7 +11,7 @@ import { createOrder, orderCutoff } from "./orders.service";
 import { addDays, dateStatus, localToday, weekdayOf, type Weekday } from "../../shared/calendar";
 import { expandRule, weeklyRule } from "../../shared/recurrence";
 import type { SessionUser } from "../../shared/schemas/auth";
-import type { StandingOrderDto, StandingOrderInput } from "../../shared/schemas/orders";
+import { MAX_ORDER_CENTS, type StandingOrderDto, type StandingOrderInput } from "../../shared/schemas/orders";
 
 async function load(m: EntityManager, accountId: number) {
   const so = await m.getRepository(StandingOrder).findOneBy({ accountId });
@@ -174,6 +174,11 @@ async function syncOrder(ctx: AppContext, o: Order, dayLines: { productId: numbe
       const unit = pricing.price(p);
       return { orderId: o.id, productId: p.id, productName: p.name, saleUnit: p.saleUnit, quantity: l.quantity, unitPriceCents: unit, lineTotalCents: unit * l.quantity };
     });
+    // Above 2^31 − 1 cents the INT columns would refuse the row: leave the order as it is (createOrder refuses such orders with a 400).
+    if (priced.some((l) => l.lineTotalCents > MAX_ORDER_CENTS) || priced.reduce((s, l) => s + l.lineTotalCents, 0) > MAX_ORDER_CENTS) {
+      ctx.logger.info({ orderId: o.id }, "standing order not synced: the order would exceed the most one order can be");
+      return false;
+    }
     await m.getRepository(OrderLine).delete({ orderId: o.id });
     await m.getRepository(OrderLine).insert(priced);
     await m.getRepository(Order).update({ id: o.id }, { status: "open", totalCents: priced.reduce((s, l) => s + l.lineTotalCents, 0) });

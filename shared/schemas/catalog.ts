@@ -8,6 +8,12 @@ const intIn = (label: string, min: number, max: number) =>
     .min(min, `${label} must be at least ${min}.`)
     .max(max, `${label} can be at most ${max}.`);
 
+/**
+ * Highest unit price, in cents (100,000.00). With at most 10,000 units a line (shared/schemas/orders.ts)
+ * a line can still pass 2^31 − 1 cents; the order service refuses those with the limit named.
+ */
+export const MAX_PRICE_CENTS = 10_000_000;
+
 export const productInputSchema = z
   .object({
     name: z.string({ required_error: "Enter the product's name." }).trim().min(1, "Enter the product's name.").max(120, "Use at most 120 characters."),
@@ -19,7 +25,7 @@ export const productInputSchema = z
     panLengthMm: intIn("Pan length", 10, 2000),
     panWidthMm: intIn("Pan width", 10, 2000),
     unitsPerPan: intIn("Units per pan", 1, 100),
-    priceCents: intIn("Price", 0, 10_000_000),
+    priceCents: intIn("Price", 0, MAX_PRICE_CENTS),
     minQuantity: intIn("Minimum quantity", 1, 10000).default(1),
     maxQuantity: intIn("Maximum quantity", 1, 10000).default(100),
     leadDays: intIn("Lead days", 0, 14).nullable().default(null),
@@ -64,7 +70,7 @@ export const priceListInputSchema = z
     name: z.string().trim().min(1, "Name the price list.").max(80, "Use at most 80 characters."),
     kind: z.enum(PRICE_LIST_KINDS, { errorMap: () => ({ message: "Choose per-product prices or a percentage off." }) }),
     percentOff: z.coerce.number({ invalid_type_error: "Enter a percentage." }).min(0, "At least 0 %.").max(90, "At most 90 %.").multipleOf(0.01, "Use at most two decimals.").default(0),
-    items: z.array(z.object({ productId: z.number().int().positive(), priceCents: z.number().int("Prices are whole cents.").min(0, "Prices cannot be negative.") })).default([]),
+    items: z.array(z.object({ productId: z.number().int().positive(), priceCents: z.number().int("Prices are whole cents.").min(0, "Prices cannot be negative.").max(MAX_PRICE_CENTS, `Prices can be at most ${MAX_PRICE_CENTS} cents (100,000.00).`) })).default([]),
   })
   .superRefine((v, ctx) => {
     const seen = new Set<number>();

@@ -225,3 +225,129 @@ describe("changing and cancelling", () => {
     expect(all.body.orders.map((o: { id: number }) => o.id)).toEqual([id]);
   });
 });
+
+/** Issue 8 item 12: amounts above the INT columns, and PATCHes that change nothing. */
+describe("limits on amounts", () => {
+  let big: { id: number };
+  beforeAll(async () => {
+    // The highest unit price a product may have (MAX_PRICE_CENTS, 100,000.00) and the most units a line may hold.
+    big = await makeProduct(t.ds, { name: "Wedding tower", priceCents: 10_000_000, maxQuantity: 10_000 });
+  });
+
+  it("a line over 2^31 − 1 cents is a 400 that names the limit, not a 500", async () => {
+    const acct = await makeAccount(t.ds);
+    const res = await post(owner, { accountId: acct.id, deliveryDate: "2026-06-17", lines: [{ productId: big.id, quantity: 300 }] });
+    expect(res.status).toBe(400);
+    expect(res.body.error.code).toBe("validation_failed");
+    // 2^31 − 1 cents = $21,474,836.47 (the top of MariaDB's signed INT, MariaDB Knowledge Base "INT").
+    expect(res.body.error.fields["lines.0.quantity"]).toBe("This line comes to $30,000,000.00; one line can be at most $21,474,836.47.");
+    expect(await t.ds.getRepository(Order).countBy({ accountId: acct.id })).toBe(0);
+  });
+
+  it("an order whose lines together pass the limit is refused the same way", async () => {
+    const other = await makeProduct(t.ds, { name: "Second tower", priceCents: 10_000_000, maxQuantity: 10_000 });
+    const acct = await makeAccount(t.ds);
+    const res = await post(owner, { accountId: acct.id, deliveryDate: "2026-06-17", lines: [{ productId: big.id, quantity: 150 }, { productId: other.id, quantity: 150 }] });
+    expect(res.status).toBe(400);
+    expect(res.body.error.message).toBe("This order comes to $30,000,000.00; one order can be at most $21,474,836.47.");
+    const ok = await post(owner, { accountId: acct.id, deliveryDate: "2026-06-17", lines: [{ productId: big.id, quantity: 100 }] });
+    expect(ok.status).toBe(201);
+    const patched = await t.http().patch(`/api/orders/${ok.body.order.id}`).set(auth(owner)).send({ lines: [{ productId: big.id, quantity: 215 }] });
+    expect(patched.status).toBe(400);
+    expect(patched.body.error.fields["lines.0.quantity"]).toMatch(/at most \$21,474,836\.47/);
+  });
+
+  it("a huge quantity or price names its own limit", async () => {
+    const acct = await makeAccount(t.ds);
+    const huge = await post(owner, { accountId: acct.id, deliveryDate: "2026-06-17", lines: [{ productId: big.id, quantity: 1e20 }] });
+    expect(huge.status).toBe(400);
+    expect(huge.body.error.fields["lines.0.quantity"]).toBe("At most 10,000 units on one line.");
+    const list = await t.http().post("/api/price-lists").set(auth(owner)).send({ name: "Gold", kind: "fixed", items: [{ productId: big.id, priceCents: 3_000_000_000 }] });
+    expect(list.status).toBe(400);
+    expect(list.body.error.fields["items.0.priceCents"]).toBe("Prices can be at most 10000000 cents (100,000.00).");
+  });
+});
+
+describe("a PATCH that changes nothing", () => {
+  let orderId: number;
+  let buyerMail: string;
+  const changedMails = async () => Number((await t.ds.query("SELECT COUNT(*) AS n FROM mail_outbox WHERE kind = 'order_changed' AND toAddress = ?", [buyerMail]))[0].n);
+  beforeAll(async () => {
+    const acct = await makeAccount(t.ds);
+    const u = await makeUser(t.ds, "buyer", { accountId: acct.id });
+    buyerMail = u.email;
+    const res = await post(owner, { accountId: acct.id, deliveryDate: "2026-06-18", lines: [{ productId: rolls.id, quantity: 2 }, { productId: buns.id, quantity: 1 }], poNumber: "PO-9", note: "Side door" });
+    expect(res.status).toBe(201);
+    orderId = res.body.order.id;
+  });
+
+  it("an empty JSON object is a 400 'nothing to change' and no mail", async () => {
+    const res = await t.http().patch(`/api/orders/${orderId}`).set(auth(owner)).send({});
+    expect(res.status).toBe(400);
+    expect(res.body.error.message).toBe("Nothing to change: send the lines, the PO number or the note.");
+    expect(await changedMails()).toBe(0);
+  });
+
+  it("a body that is not JSON (or no body at all) is a 400 too", async () => {
+    const text = await t.http().patch(`/api/orders/${orderId}`).set(auth(owner)).set("Content-Type", "text/plain").send("poNumber=PO-10");
+    expect(text.status).toBe(400);
+    expect(text.body.error.message).toMatch(/^Nothing to change/);
+    const none = await t.http().patch(`/api/orders/${orderId}`).set(auth(owner));
+    expect(none.status).toBe(400);
+    const array = await t.http().patch(`/api/orders/${orderId}`).set(auth(owner)).send([{ note: "x" }]);
+    expect(array.status).toBe(400);
+    const unknown = await t.http().patch(`/api/orders/${orderId}`).set(auth(owner)).send({ colour: "blue" });
+    expect(unknown.status).toBe(400);
+    expect(await changedMails()).toBe(0);
+  });
+
+  it("the same lines (in any order), PO and note answer 200 with the order unchanged, and send no 'Order changed' mail", async () => {
+    const before = await t.ds.getRepository(Order).findOneByOrFail({ id: orderId });
+    const res = await t.http().patch(`/api/orders/${orderId}`).set(auth(owner)).send({ lines: [{ productId: buns.id, quantity: 1 }, { productId: rolls.id, quantity: 2 }], poNumber: "PO-9", note: "Side door" });
+    expect(res.status).toBe(200);
+    expect(res.body.order).toMatchObject({ id: orderId, poNumber: "PO-9", note: "Side door", totalCents: 2 * 1800 + 1440 });
+    const after = await t.ds.getRepository(Order).findOneByOrFail({ id: orderId });
+    expect(after.updatedAt.getTime()).toBe(before.updatedAt.getTime());
+    expect(await changedMails()).toBe(0);
+    // A real change still mails.
+    const changed = await t.http().patch(`/api/orders/${orderId}`).set(auth(owner)).send({ note: "Front door" });
+    expect(changed.status).toBe(200);
+    expect(await changedMails()).toBe(1);
+  });
+});
+
+/** Issue 8 item 6: OWASP "CSV Injection" — cells starting with = + - @ TAB or CR are neutralised with a leading '. */
+describe("orders board CSV", () => {
+  it("neutralises a formula in the PO number and an account name starting with @, and keeps numbers as numbers", async () => {
+    const { parse: parseCsv } = await import("csv-parse/sync");
+    const acct = await makeAccount(t.ds, { businessName: "@SUM(1+1)*cmd|' /C calc'!A0" });
+    const po = '=HYPERLINK("http://evil.test/x","PO")';
+    const placed = await post(owner, { accountId: acct.id, deliveryDate: "2026-06-19", lines: [{ productId: rolls.id, quantity: 3 }], poNumber: po });
+    expect(placed.status).toBe(201);
+    const res = await t.http().get("/api/orders/board.csv?date=2026-06-19").set(auth(owner));
+    expect(res.status).toBe(200);
+    const rows: string[][] = parseCsv(res.text);
+    const header = rows[0];
+    const row = rows.find((r) => r[1].includes("SUM(1+1)"))!;
+    expect(row[header.indexOf("Account")]).toBe("'@SUM(1+1)*cmd|' /C calc'!A0");
+    expect(row[header.indexOf("PO number")]).toBe(`'${po}`);
+    expect(row[header.indexOf("Dinner rolls (tray of 15 rolls)")]).toBe("3");
+    expect(row[header.indexOf("Order total (USD)")]).toBe("54.00");
+    expect(rows.flat().filter((c) => /^[=+\-@\t\r]/.test(c))).toEqual([]);
+  });
+
+  it("writes a negative amount as a number, while a text cell starting with - is neutralised", async () => {
+    const { parse: parseCsv } = await import("csv-parse/sync");
+    const { boardCsv } = await import("../../server/orders/board.service");
+    const csv = boardCsv({
+      date: "2026-06-19",
+      products: [{ id: 1, name: "-Rolls", saleUnit: "tray", total: 2 }],
+      rows: [{ accountId: 1, accountName: "-2+3+cmd", orderId: 1, status: "open", poNumber: "\tPO", quantities: { 1: 2 }, totalCents: -150 }],
+      totalCents: -150,
+    }, "USD");
+    const rows: string[][] = parseCsv(csv);
+    expect(rows[0][4]).toBe("'-Rolls (tray)");
+    expect(rows[1].slice(1, 6)).toEqual(["'-2+3+cmd", "open", "'\tPO", "2", "-1.50"]);
+    expect(rows[2][5]).toBe("-1.50");
+  });
+});
