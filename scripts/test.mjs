@@ -54,6 +54,8 @@ async function main() {
 
   if (only("types")) stage("type check (tsc --noEmit)", "npx", ["tsc", "--noEmit", "-p", "tsconfig.json"]);
   if (only("jest")) stage("jest: app screens + server API + shared", "npx", ["jest", "--selectProjects", "app", "server", "--ci"], testEnv);
+  // The API fuzz: every route, every role, thousands of malformed requests against a server process (tests/fuzz).
+  if (only("fuzz")) stage("fuzz: malformed input on every API route (fast-check)", "npx", ["jest", "--selectProjects", "fuzz", "--runInBand", "--ci", "--forceExit"], testEnv);
 
   if (only("browser")) {
     await ensureWebBuild();
