@@ -9,14 +9,30 @@ export const ACCOUNT_STATUS_LABELS: Record<AccountStatus, string> = {
   closed: "Closed",
 };
 
-const text = (label: string, max: number, required = false) => {
-  const base = z.string({ invalid_type_error: `${label} must be text.` }).trim().max(max, `${label} can be at most ${max} characters.`);
-  return required ? base.min(1, `Enter the ${label.toLowerCase()}.`) : base.default("");
+/**
+ * Control characters (Unicode general category Cc: U+0000–U+001F, U+007F–U+009F) and the line and
+ * paragraph separators U+2028/U+2029. Names travel into the calendar feed, CSV exports and mail headers,
+ * where a CR or LF starts a new line: RFC 5545 §3.3.11 allows no CONTROL characters in TEXT, and RFC 5322
+ * §2.2 none in a header field body.
+ */
+const CONTROL = /[\u0000-\u001F\u007F-\u009F\u2028\u2029]/;
+/** The same, but line breaks (and tabs) are fine: for multi-line text such as an address. */
+const CONTROL_BUT_LINES = /[\u0000-\u0008\u000B-\u001F\u007F-\u009F]/;
+
+const text = (label: string, max: number, opts: { required?: boolean; multiline?: boolean } = {}) => {
+  let base = z.string({ invalid_type_error: `${label} must be text.` }).trim().max(max, `${label} can be at most ${max} characters.`);
+  if (opts.required) base = base.min(1, `Enter the ${label.toLowerCase()}.`);
+  const checked = opts.multiline
+    ? base
+        .transform((v) => v.replace(/\r\n?|[\u2028\u2029]/g, "\n"))
+        .refine((v) => !CONTROL_BUT_LINES.test(v), `${label} cannot contain control characters.`)
+    : base.refine((v) => !CONTROL.test(v), `${label} must be one line, without line breaks or control characters.`);
+  return opts.required ? checked : checked.default("");
 };
 
 export const accountInputSchema = z.object({
-  businessName: text("Business name", 160, true),
-  deliveryAddress: text("Delivery address", 500, true),
+  businessName: text("Business name", 160, { required: true }),
+  deliveryAddress: text("Delivery address", 500, { required: true, multiline: true }),
   contactName: text("Contact name", 120),
   contactPhone: z
     .string()
@@ -26,7 +42,7 @@ export const accountInputSchema = z.object({
     .default(""),
   billingEmail: emailSchema,
   status: z.enum(ACCOUNT_STATUSES, { errorMap: () => ({ message: "Choose active, on hold or closed." }) }).default("active"),
-  notes: text("Notes", 2000),
+  notes: text("Notes", 2000, { multiline: true }),
 });
 export type AccountInput = z.input<typeof accountInputSchema>;
 
