@@ -6,7 +6,7 @@ import crypto from "node:crypto";
 export const ROOT_DIR = path.resolve(__dirname, "..");
 export const DATA_DIR = process.env.PANWISE_DATA_DIR ? path.resolve(process.env.PANWISE_DATA_DIR) : path.join(ROOT_DIR, ".data");
 
-function int(name: string, fallback: number, env: NodeJS.ProcessEnv = process.env): number {
+function int(name: string, fallback: number, env: Record<string, string | undefined> = process.env): number {
   const raw = env[name];
   if (raw === undefined || raw === "") return fallback;
   const n = Number(raw);
@@ -72,7 +72,9 @@ export function isLoopbackHost(host: string): boolean {
   return h === "localhost" || h === "::1" || /^127\.\d{1,3}\.\d{1,3}\.\d{1,3}$/.test(h);
 }
 
-function positiveMs(env: NodeJS.ProcessEnv, name: string, fallback: number): number {
+type Env = Record<string, string | undefined>;
+
+function positiveMs(env: Env, name: string, fallback: number): number {
   const raw = env[name];
   if (raw === undefined || raw === "") return fallback;
   const n = Number(raw);
@@ -84,7 +86,7 @@ function positiveMs(env: NodeJS.ProcessEnv, name: string, fallback: number): num
  * Stripe settings, refusing the published local secret and key unless the server talks to the local fake
  * (STRIPE_API_HOST unset or loopback) outside production. Throws one message naming what to set.
  */
-export function stripeSettings(env: NodeJS.ProcessEnv = process.env): StripeSettings {
+export function stripeSettings(env: Env = process.env): StripeSettings {
   const host = env.STRIPE_API_HOST || "127.0.0.1";
   const secretKey = env.STRIPE_SECRET_KEY || LOCAL_FAKE_SECRET_KEY;
   const webhookSecret = env.STRIPE_WEBHOOK_SECRET || LOCAL_FAKE_WEBHOOK_SECRET;

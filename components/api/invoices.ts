@@ -35,6 +35,8 @@ export interface InvoiceDto {
   paidCents: number;
   refundedCents: number;
   amountDueCents: number;
+  /** Paid beyond what the invoice is worth (a card page paid after it was settled another way): refund it. */
+  overpaidCents: number;
   overdue: boolean;
   taxExempt: boolean;
   sentAt: string | null;
@@ -45,6 +47,8 @@ export interface InvoiceTotalsDto {
   totalCents: number;
   dueCents: number;
   paidCents: number;
+  /** How many of the listed invoices were paid more than they owe. */
+  overpaidCount?: number;
 }
 
 export interface InvoiceListDto {
@@ -97,7 +101,24 @@ export interface RefundDto {
   id: number;
   stripeRefundId: string;
   amountCents: number;
+  /** Gave back an overpayment rather than part of the sale. */
+  overpayment?: boolean;
   createdAt: string;
+}
+
+/** Something on the invoice the bookkeeper should look at. */
+export interface InvoiceAlertDto {
+  /** "overpayment": paid more than it owes; "rejected_event": a payment notice from Stripe that did not check out. */
+  kind: "overpayment" | "rejected_event";
+  message: string;
+  amountCents: number | null;
+  eventId: string | null;
+  at: string | null;
+}
+
+export interface OverpaymentRefundResult {
+  stripeRefundId: string;
+  amountCents: number;
 }
 
 export interface InvoiceEmailDto {
@@ -118,6 +139,8 @@ export interface InvoiceDetailDto {
   refunds: RefundDto[];
   /** The invoice mail and payment receipts, with their delivery status. */
   emails?: InvoiceEmailDto[];
+  /** Overpayments and rejected payment notices (office screens show them). */
+  alerts?: InvoiceAlertDto[];
 }
 
 export interface InvoiceListParams {
@@ -167,6 +190,7 @@ export const invoicesApi = {
   checkout: (id: number) => api<{ url: string }>(`/api/invoices/${id}/checkout`, { method: "POST" }),
   recordPayment: (id: number, input: PaymentInput) => api<{ payment: PaymentDto }>(`/api/invoices/${id}/payments`, { method: "POST", body: input }).then((r) => r.payment),
   creditNote: (id: number, input: CreditNoteInput) => api<{ creditNote: CreditNoteResult }>(`/api/invoices/${id}/credit-notes`, { method: "POST", body: input }).then((r) => r.creditNote),
+  refundOverpayment: (id: number) => api<{ refund: OverpaymentRefundResult }>(`/api/invoices/${id}/overpayment-refund`, { method: "POST" }).then((r) => r.refund),
   issueStatements: (through?: string) => api<{ issued: string[] }>("/api/invoices/statements", { method: "POST", body: through ? { through } : {} }).then((r) => r.issued),
 };
 
@@ -211,6 +235,12 @@ export function useRecordPaymentMutation(id: number) {
 export function useCreditNoteMutation(id: number) {
   const changed = useBillingChanged();
   return useMutation({ mutationFn: (input: CreditNoteInput) => invoicesApi.creditNote(id, input), onSuccess: changed });
+}
+
+/** Give back what was paid twice, to the card it came from (one action). */
+export function useRefundOverpaymentMutation(id: number) {
+  const changed = useBillingChanged();
+  return useMutation({ mutationFn: () => invoicesApi.refundOverpayment(id), onSuccess: changed });
 }
 
 export function useIssueStatementsMutation() {

@@ -23,6 +23,7 @@ export function invoiceDto(overrides: Partial<InvoiceDto> = {}): InvoiceDto {
     paidCents: 0,
     refundedCents: 0,
     amountDueCents: 5873,
+    overpaidCents: 0,
     overdue: false,
     taxExempt: false,
     sentAt: "2025-12-01T23:00:00.000Z",

@@ -240,6 +240,70 @@ describe("invoice detail", () => {
     open.mockRestore();
   });
 
+  it("flags an invoice paid twice and refunds the extra to the card in one action; shows rejected payment notices", async () => {
+    setWidth(1280);
+    signedInAs(BOOKKEEPER);
+    const overpaid = invoiceDetail(
+      { status: "paid", paidCents: 2 * 5873, amountDueCents: 0, overpaidCents: 5873 },
+      {
+        payments: [
+          { id: 71, method: "bank_transfer", amountCents: 5873, reference: "BT-1", receivedOn: "2025-12-02", stripePaymentIntentId: null, stripeChargeId: null },
+          { id: 72, method: "card", amountCents: 5873, reference: "cs_test_1", receivedOn: "2025-12-02", stripePaymentIntentId: "pi_1", stripeChargeId: "ch_1" },
+        ],
+        alerts: [
+          { kind: "overpayment", amountCents: 5873, eventId: null, at: null, message: "This invoice was paid more than it owes: 58.73 USD came in after it was settled. Refund it to the card." },
+          { kind: "rejected_event", amountCents: null, eventId: "evt_forged", at: "2025-12-02T10:00:00.000Z", message: "A payment notice from Stripe (payment_intent.succeeded) was rejected and not applied: Payment intent pi_x was not paid through a checkout session Panwise created." },
+        ],
+      },
+    );
+    const refunded = invoiceDetail({ status: "paid", paidCents: 2 * 5873, refundedCents: 5873, amountDueCents: 0, overpaidCents: 0 }, { payments: overpaid.payments, refunds: [{ id: 9, stripeRefundId: "re_1", amountCents: 5873, overpayment: true, createdAt: "2025-12-02T11:00:00.000Z" }], alerts: [] });
+    let done = false;
+    const api = mockApi({
+      ...sessionRoutes(BOOKKEEPER),
+      "GET /api/invoices/:id": () => ({ body: done ? refunded : overpaid }),
+      "POST /api/invoices/:id/overpayment-refund": () => {
+        done = true;
+        return { status: 201, body: { refund: { stripeRefundId: "re_1", amountCents: 5873, refunds: [{ stripeRefundId: "re_1", amountCents: 5873 }] } } };
+      },
+    });
+    renderApp("/office/invoices/41");
+    expect(await screen.findByTestId("invoice-alert-overpayment")).toHaveTextContent(/Paid twice: \$58\.73 too much.*Overpaid.*came in after it was settled/);
+    expect(screen.getByTestId("invoice-alert-rejected_event")).toHaveTextContent(/Payment notice rejected.*Not applied.*was rejected and not applied/);
+    fireEvent.press(screen.getByTestId("refund-overpayment"));
+    expect(await screen.findByTestId("refund-overpayment-done")).toHaveTextContent(/Refunded \$58\.73 to the card\.$/);
+    expect(api.callsTo("POST", "/api/invoices/41/overpayment-refund")).toHaveLength(1);
+    // Read again: the flag is gone and the refund is listed as an overpayment given back.
+    await waitForGone("invoice-alerts");
+    expect(screen.getByTestId("refund-9")).toHaveTextContent(/\$58\.73.*overpayment given back · re_1/);
+  });
+
+  it("says when the refund of an overpayment fails, and the list flags overpaid invoices", async () => {
+    setWidth(1280);
+    signedInAs(OWNER);
+    const overpaid = invoiceDetail({ status: "paid", paidCents: 2 * 5873, amountDueCents: 0, overpaidCents: 5873 }, { alerts: [{ kind: "overpayment", amountCents: 5873, eventId: null, at: null, message: "This invoice was paid more than it owes." }] });
+    mockApi({
+      ...officeRoutes(OWNER),
+      "GET /api/invoices": { body: { invoices: [invoiceDto({ status: "paid", paidCents: 11746, amountDueCents: 0, overpaidCents: 5873 })], totals: { count: 1, totalCents: 5873, dueCents: 0, paidCents: 11746, overpaidCount: 1 } } },
+      "GET /api/invoices/:id": { body: overpaid },
+      "POST /api/invoices/:id/overpayment-refund": apiError(503, "payments_unavailable", "Card payments are not reachable right now. Nothing was refunded; please try again in a minute."),
+    });
+    const app = renderApp("/office/invoices");
+    expect(await screen.findByTestId("invoices-overpaid")).toHaveTextContent(/1 invoice was paid more than it owes\. Open it to refund the extra to the card\.$/);
+    expect(screen.getByTestId("invoice-overpaid-41")).toHaveTextContent(/^Overpaid \$58\.73$/);
+    fireEvent.press(screen.getByTestId("invoice-row-41"));
+    await waitFor(() => expect(app.getPathname()).toBe("/office/invoices/41"));
+    fireEvent.press(await screen.findByTestId("refund-overpayment"));
+    expect(await screen.findByTestId("refund-overpayment-error")).toHaveTextContent(/Nothing was refunded/);
+  });
+
+  it("tells the buyer who paid twice that the extra goes back to the card, without the office's actions", async () => {
+    signedInAs(BUYER);
+    mockApi({ ...detailRoutes(BUYER, invoiceDetail({ status: "paid", paidCents: 11746, amountDueCents: 0, overpaidCents: 5873 }, { alerts: [{ kind: "overpayment", amountCents: 5873, eventId: null, at: null, message: "…" }] })) });
+    renderApp("/buyer/invoices/41");
+    expect(await screen.findByTestId("invoice-overpaid-note")).toHaveTextContent(/You paid \$58\.73 more than this invoice\. The bakery refunds it to your card\.$/);
+    expect(screen.queryByTestId("refund-overpayment")).toBeNull();
+  });
+
   it("says so when the invoice is not the buyer's", async () => {
     signedInAs(BUYER);
     mockApi(detailRoutes(BUYER));

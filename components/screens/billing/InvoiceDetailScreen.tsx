@@ -6,12 +6,12 @@ import { Card } from "../../ui/Card";
 import { DetailList } from "../../ui/DetailList";
 import { Button } from "../../ui/Button";
 import { TextLink } from "../../ui/TextLink";
-import { FormError } from "../../ui/FormError";
+import { FormError, Notice } from "../../ui/FormError";
 import { Badge } from "../../ui/Badge";
 import { EmptyState, ErrorState, LoadingState } from "../../ui/States";
 import { AppText } from "../../ui/Text";
 import { ApiError, messageOf } from "../../api/client";
-import { downloadInvoicePdf, useInvoiceQuery, type InvoiceDetailDto, type InvoiceDto } from "../../api/invoices";
+import { downloadInvoicePdf, useInvoiceQuery, useRefundOverpaymentMutation, type InvoiceDetailDto, type InvoiceDto } from "../../api/invoices";
 import { useBillingSettingsQuery } from "../../api/billingSettings";
 import { useBakeryTimeZone } from "../../api/bakery";
 import { formatDateTime } from "../../format";
@@ -31,6 +31,7 @@ export interface InvoiceDetailProps {
 export function InvoiceDetailScreen({ id, mode }: InvoiceDetailProps) {
   const valid = Number.isInteger(id) && id > 0;
   const detail = useInvoiceQuery(valid ? id : null);
+  const refund = useRefundOverpaymentMutation(valid ? id : 0);
   const wide = useIsWide();
   const office = mode === "office";
   const listHref = office ? "/office/invoices" : "/buyer/invoices";
@@ -72,6 +73,11 @@ export function InvoiceDetailScreen({ id, mode }: InvoiceDetailProps) {
         testID="invoice-title"
         actions={<PdfButton invoice={inv} />}
       />
+      {office && d.alerts?.length ? <AlertsCard detail={d} refund={refund} /> : null}
+      {office && refund.isSuccess ? <Notice message={`Refunded ${money(refund.data.amountCents, inv.currency)} to the card.`} testID="refund-overpayment-done" /> : null}
+      {!office && inv.overpaidCents > 0 ? (
+        <Notice tone="info" message={`You paid ${money(inv.overpaidCents, inv.currency)} more than this invoice. The bakery refunds it to your card.`} testID="invoice-overpaid-note" />
+      ) : null}
       {/* On a phone what is owed, and paying it, come first. */}
       {!wide ? <SummaryCard invoice={inv} office={office} payable={payable} /> : null}
       <View style={[billingStyles.grid, wide && billingStyles.gridWide]}>
@@ -90,6 +96,43 @@ export function InvoiceDetailScreen({ id, mode }: InvoiceDetailProps) {
         </View>
       </View>
     </Screen>
+  );
+}
+
+/**
+ * For the office: an overpayment (a card page paid after the invoice was settled another way), with its
+ * refund in one action, and payment notices from Stripe that were rejected (not applied).
+ */
+function AlertsCard({ detail, refund }: { detail: InvoiceDetailDto; refund: ReturnType<typeof useRefundOverpaymentMutation> }) {
+  const inv = detail.invoice;
+  const alerts = detail.alerts ?? [];
+  return (
+    <Card title="Needs your attention" testID="invoice-alerts">
+      {alerts.map((a, i) => (
+        <View key={`${a.kind}-${a.eventId ?? i}`} style={[styles.entry, i > 0 && styles.divider]} testID={`invoice-alert-${a.kind}`}>
+          <View style={billingStyles.cardTop}>
+            <AppText variant="bodyStrong" style={billingStyles.grow}>
+              {a.kind === "overpayment" ? `Paid twice: ${money(a.amountCents ?? 0, inv.currency)} too much` : "Payment notice rejected"}
+            </AppText>
+            <Badge label={a.kind === "overpayment" ? "Overpaid" : "Not applied"} tone={a.kind === "overpayment" ? "amber" : "danger"} />
+          </View>
+          <AppText variant="small">{a.message}</AppText>
+          {a.kind === "overpayment" ? (
+            <View style={styles.action}>
+              <Button
+                label={`Refund ${money(a.amountCents ?? 0, inv.currency)} to the card`}
+                icon="rotate-ccw"
+                busy={refund.isPending}
+                disabled={refund.isSuccess}
+                onPress={() => refund.mutate()}
+                testID="refund-overpayment"
+              />
+              <FormError message={refund.isError ? messageOf(refund.error) : null} testID="refund-overpayment-error" />
+            </View>
+          ) : null}
+        </View>
+      ))}
+    </Card>
   );
 }
 
@@ -244,7 +287,7 @@ function RefundsCard({ detail }: { detail: InvoiceDetailDto }) {
       {detail.refunds.map((r, i) => (
         <View key={r.id} style={[styles.entry, i > 0 && styles.divider]} testID={`refund-${r.id}`}>
           <AppText variant="bodyStrong">{money(r.amountCents, cur)}</AppText>
-          <AppText variant="small" color="muted">{`${formatDateTime(r.createdAt, timeZone)} · ${r.stripeRefundId}`}</AppText>
+          <AppText variant="small" color="muted">{`${formatDateTime(r.createdAt, timeZone)} · ${r.overpayment ? "overpayment given back · " : ""}${r.stripeRefundId}`}</AppText>
         </View>
       ))}
     </Card>
@@ -287,4 +330,5 @@ const styles = StyleSheet.create({
   divider: { borderTopWidth: 1, borderTopColor: colors.border },
   sums: { padding: space.md, borderRadius: radii.md, backgroundColor: colors.page, gap: space.xxs },
   entry: { gap: space.xxs, paddingVertical: space.sm },
+  action: { gap: space.xs, marginTop: space.xs, alignItems: "flex-start" },
 });

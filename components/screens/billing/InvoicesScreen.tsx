@@ -18,6 +18,7 @@ import { useDebounced } from "../../forms/useDebounced";
 import { cleanDate } from "../../ordering/dates";
 import { useIsWide } from "../../shell/useIsWide";
 import { BillingTable, Figure, InvoiceStatusBadge, billingStyles, day, money } from "./parts";
+import { Badge } from "../../ui/Badge";
 import { colors, space } from "../../theme";
 
 type Show = "all" | InvoiceStatus | "overdue";
@@ -150,16 +151,21 @@ export function InvoicesScreen({ mode, accountId: startAccount }: InvoicesScreen
             testID="invoices-empty"
           />
         )
-      ) : wide ? (
-        <InvoiceTable invoices={invoices.data.invoices} totals={invoices.data.totals} office={office} onOpen={open} />
       ) : (
         <>
-          <TotalsTiles totals={invoices.data.totals} currency={invoices.data.invoices[0]?.currency} />
-          <View style={billingStyles.cards} testID="invoices-list">
-            {invoices.data.invoices.map((inv) => (
-              <InvoiceCard key={inv.id} invoice={inv} href={`${base}/${inv.id}`} office={office} />
-            ))}
-          </View>
+          {office && (invoices.data.totals.overpaidCount ?? 0) > 0 ? <OverpaidNotice count={invoices.data.totals.overpaidCount ?? 0} /> : null}
+          {wide ? (
+            <InvoiceTable invoices={invoices.data.invoices} totals={invoices.data.totals} office={office} onOpen={open} />
+          ) : (
+            <>
+              <TotalsTiles totals={invoices.data.totals} currency={invoices.data.invoices[0]?.currency} />
+              <View style={billingStyles.cards} testID="invoices-list">
+                {invoices.data.invoices.map((inv) => (
+                  <InvoiceCard key={inv.id} invoice={inv} href={`${base}/${inv.id}`} office={office} />
+                ))}
+              </View>
+            </>
+          )}
         </>
       )}
     </Screen>
@@ -246,7 +252,7 @@ function InvoiceTable({ invoices, totals, office, onOpen }: { invoices: InvoiceD
         ...(office ? [{ key: "account", label: "Account", flex: 1.5, render: (i: InvoiceDto) => i.accountName }] : []),
         { key: "issued", label: "Issued", flex: 1.15, render: (i) => day(i.issueDate) },
         { key: "due", label: "Due", flex: 1.15, render: (i) => <AppText color={i.overdue ? "dangerInk" : "ink"}>{day(i.dueDate)}</AppText> },
-        { key: "status", label: "Status", flex: 0.95, render: (i) => <InvoiceStatusBadge invoice={i} testID={`invoice-status-${i.id}`} /> },
+        { key: "status", label: "Status", flex: 0.95, render: (i) => <StatusCell invoice={i} office={office} /> },
         { key: "total", label: "Total", flex: 0.9, align: "right", render: (i) => money(i.totalCents, i.currency), footer: <AppText variant="bodyStrong" align="right" testID="invoices-total-amount">{money(totals.totalCents, cur)}</AppText> },
         { key: "paid", label: "Paid", flex: 0.9, align: "right", render: (i) => money(i.paidCents, i.currency), footer: <AppText variant="bodyStrong" align="right" testID="invoices-total-paid">{money(totals.paidCents, cur)}</AppText> },
         {
@@ -266,6 +272,27 @@ function InvoiceTable({ invoices, totals, office, onOpen }: { invoices: InvoiceD
   );
 }
 
+/** Money paid twice is the bookkeeper's to give back: said above the list, flagged on each row. */
+function OverpaidNotice({ count }: { count: number }) {
+  return (
+    <Notice
+      tone="info"
+      testID="invoices-overpaid"
+      message={`${count === 1 ? "1 invoice was" : `${count} invoices were`} paid more than ${count === 1 ? "it owes" : "they owe"}. Open ${count === 1 ? "it" : "them"} to refund the extra to the card.`}
+    />
+  );
+}
+
+/** The status, and for the office a flag on an invoice paid more than it owes. */
+function StatusCell({ invoice: i, office }: { invoice: InvoiceDto; office: boolean }) {
+  return (
+    <View style={styles.status}>
+      <InvoiceStatusBadge invoice={i} testID={`invoice-status-${i.id}`} />
+      {office && i.overpaidCents > 0 ? <Badge label={`Overpaid ${money(i.overpaidCents, i.currency)}`} tone="amber" testID={`invoice-overpaid-${i.id}`} /> : null}
+    </View>
+  );
+}
+
 function InvoiceCard({ invoice: i, href, office }: { invoice: InvoiceDto; href: string; office: boolean }) {
   return (
     <Link href={href as never} asChild>
@@ -281,7 +308,7 @@ function InvoiceCard({ invoice: i, href, office }: { invoice: InvoiceDto; href: 
             <AppText variant="bodyStrong" style={billingStyles.grow}>
               {i.number}
             </AppText>
-            <InvoiceStatusBadge invoice={i} testID={`invoice-status-${i.id}`} />
+            <StatusCell invoice={i} office={office} />
           </View>
           {office ? <AppText variant="small">{i.accountName}</AppText> : null}
           <AppText variant="small" color="muted">
@@ -301,6 +328,7 @@ const styles = StyleSheet.create({
   search: { flexGrow: 1, flexBasis: 280, maxWidth: 420 },
   date: { flexBasis: 160, flexGrow: 0, minWidth: 150 },
   statements: { gap: space.sm },
+  status: { gap: space.xxs },
   flex: { flex: 1, minWidth: 200 },
 });
 
