@@ -17,6 +17,8 @@ import { formulaRoutes, ingredientRoutes, productionRoutes } from "./production/
 import { outboxRoutes } from "./mail/outbox.routes";
 import { accountBillingRoutes, billingSettingsRoutes, certificateRoutes, deliveryRoutes, invoiceRoutes, payoutRoutes, reportRoutes, stripeWebhookRoute } from "./billing/billing.routes";
 
+export const PERMISSIONS_POLICY = "camera=(), microphone=(), geolocation=(), payment=(), usb=(), serial=(), hid=(), bluetooth=(), midi=(), display-capture=(), browsing-topics=()";
+
 export function redactUrl(url: string | undefined): string {
   return (url || "").replace(/(\/api\/auth\/invitations\/)[^/?]+/, "$1[redacted]").replace(/(\/api\/feeds\/)[^/?]+/, "$1[redacted]").replace(/([?&]token=)[^&]+/, "$1[redacted]");
 }
@@ -77,7 +79,10 @@ export function createApp(ctx: AppContext) {
       contentSecurityPolicy: {
         directives: {
           "default-src": ["'self'"],
-          "script-src": ["'self'", "'unsafe-inline'"],
+          // No inline scripts: the exported page loads its one bundle with <script src> (dist/index.html), and the
+          // sign-in token sits in localStorage, where an injected inline script could read it (OWASP XSS Prevention
+          // Cheat Sheet; CSP Level 3 §6.1.1 script-src). Styles stay inline: react-native-web writes style elements.
+          "script-src": ["'self'"],
           "style-src": ["'self'", "'unsafe-inline'"],
           "img-src": ["'self'", "data:", "blob:"],
           "font-src": ["'self'", "data:"],
@@ -114,6 +119,20 @@ export function createApp(ctx: AppContext) {
     });
   }
 
+  // Browser features the app never uses are switched off for every page (W3C Permissions Policy; MDN
+  // "Permissions-Policy"). Photos and certificates come through a file input, which needs no camera permission;
+  // card payments happen on Stripe's hosted page, so no Payment Request API here either.
+  app.use((_req, res, next) => {
+    res.setHeader("Permissions-Policy", PERMISSIONS_POLICY);
+    next();
+  });
+  // Every API answer carries personal or money data (or a token): no browser or proxy may store it
+  // (RFC 9111 §5.2.2.5 no-store; OWASP REST Security Cheat Sheet, "Security headers"). Handlers that serve
+  // files may set their own, stricter or equal, header after this.
+  app.use("/api", (_req, res, next) => {
+    res.setHeader("Cache-Control", "no-store");
+    next();
+  });
   app.use("/api", apiRouter(ctx), errorHandler);
 
   // The exported web app, with the SPA fallback for client-side routes.
