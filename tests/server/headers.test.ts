@@ -59,17 +59,20 @@ describe("Content-Security-Policy", () => {
 
 describe("Cache-Control on the API", () => {
   it("is no-store on API answers with personal or money data, errors included", async () => {
-    const answers = await Promise.all([
-      request(app).get("/api/orders").set(auth(owner)),
-      request(app).get("/api/invoices").set(auth(owner)),
-      request(app).get("/api/auth/me").set(auth(owner)),
-      request(app).post("/api/auth/sign-in").send({ email: "nobody@x.test", password: "wrong password!" }),
-      request(app).get("/api/orders"),
-      request(app).get("/api/no-such-route").set(auth(owner)),
-      request(app).get("/api/orders/board?date=9999-12-31").set(auth(owner)),
-      request(app).get("/api/health"),
-    ]);
-    for (const res of answers) expect({ url: res.req.path, cacheControl: res.headers["cache-control"] }).toEqual({ url: res.req.path, cacheControl: "no-store" });
+    const calls: [string, () => request.Test][] = [
+      ["GET /api/orders", () => request(app).get("/api/orders").set(auth(owner))],
+      ["GET /api/invoices", () => request(app).get("/api/invoices").set(auth(owner))],
+      ["GET /api/auth/me", () => request(app).get("/api/auth/me").set(auth(owner))],
+      ["POST /api/auth/sign-in (refused)", () => request(app).post("/api/auth/sign-in").send({ email: "nobody@x.test", password: "wrong password!" })],
+      ["GET /api/orders signed out", () => request(app).get("/api/orders")],
+      ["GET /api/no-such-route", () => request(app).get("/api/no-such-route").set(auth(owner))],
+      ["GET /api/orders/board (400)", () => request(app).get("/api/orders/board?date=9999-12-31").set(auth(owner))],
+      ["GET /api/health", () => request(app).get("/api/health")],
+    ];
+    for (const [name, send] of calls) {
+      const res = await send();
+      expect({ name, cacheControl: res.headers["cache-control"] }).toEqual({ name, cacheControl: "no-store" });
+    }
   });
 
   it("leaves the web app's own files cacheable", async () => {
