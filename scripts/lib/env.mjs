@@ -6,7 +6,8 @@ import path from "node:path";
 import { fileURLToPath } from "node:url";
 
 export const ROOT = path.resolve(path.dirname(fileURLToPath(import.meta.url)), "..", "..");
-export const DATA = path.join(ROOT, ".data");
+/** Local state (MariaDB, secrets, uploads, the Stripe fake's state): PANWISE_DATA_DIR, as the server reads it, or .data/. */
+export const DATA = process.env.PANWISE_DATA_DIR ? path.resolve(process.env.PANWISE_DATA_DIR) : path.join(ROOT, ".data");
 
 const useColour = process.stdout.isTTY;
 const paint = (code, s) => (useColour ? `\x1b[${code}m${s}\x1b[0m` : s);
@@ -33,9 +34,26 @@ export function capture(cmd, args, opts = {}) {
   return { status: res.error ? -1 : res.status, stdout: res.stdout || "", stderr: res.stderr || (res.error ? res.error.message : "") };
 }
 
-/** Start a long-running child; returns it. Output is prefixed so interleaved logs stay readable. */
-export function startChild(name, cmd, args, { env = {}, quiet = false } = {}) {
-  const child = spawn(cmd, args, { cwd: ROOT, env: { ...process.env, ...env }, stdio: ["ignore", "pipe", "pipe"] });
+/** Children that are running right now (startChild, runAsync), so a stop on a signal can end them all. */
+export const liveChildren = new Set();
+function track(child) {
+  liveChildren.add(child);
+  child.once("exit", () => liveChildren.delete(child));
+  child.once("error", () => liveChildren.delete(child));
+  return child;
+}
+
+/** Preload for Node children: they stop (SIGTERM to themselves) when their parent's IPC channel closes. */
+export const PARENT_WATCH = path.join(ROOT, "scripts", "lib", "parent-watch.mjs");
+
+/**
+ * Start a long-running child; returns it. Output is prefixed so interleaved logs stay readable.
+ * `ipc: true` opens an IPC channel: a Node child preloaded with PARENT_WATCH sees it close when this process
+ * dies, however it dies, and stops itself.
+ */
+export function startChild(name, cmd, args, { env = {}, quiet = false, ipc = false } = {}) {
+  const stdio = ipc ? ["ignore", "pipe", "pipe", "ipc"] : ["ignore", "pipe", "pipe"];
+  const child = track(spawn(cmd, args, { cwd: ROOT, env: { ...process.env, ...env }, stdio }));
   const forward = (stream, out) => {
     let buf = "";
     stream.on("data", (chunk) => {
@@ -51,6 +69,15 @@ export function startChild(name, cmd, args, { env = {}, quiet = false } = {}) {
   forward(child.stdout, process.stdout);
   forward(child.stderr, process.stderr);
   return child;
+}
+
+/** Run a command to completion without blocking this process (signals are still handled meanwhile); resolves with its exit status. */
+export function runAsync(cmd, args, opts = {}) {
+  return new Promise((resolve) => {
+    const child = track(spawn(cmd, args, { stdio: "inherit", cwd: ROOT, ...opts }));
+    child.once("error", (err) => resolve({ status: -1, signal: null, error: err }));
+    child.once("exit", (status, signal) => resolve({ status, signal }));
+  });
 }
 
 /** Is a TCP port on 127.0.0.1 free to listen on? */

@@ -3,6 +3,7 @@
 import fs from "node:fs";
 import path from "node:path";
 import { spawn } from "node:child_process";
+import { fileURLToPath } from "node:url";
 import { DATA, capture, fail, log, portFree, processAlive, readPid, run, waitFor } from "./env.mjs";
 
 const BASE = path.join(DATA, "mariadb");
@@ -12,6 +13,8 @@ export const SOCKET = path.join(RUNDIR, "mysqld.sock");
 const PIDFILE = path.join(RUNDIR, "mariadbd.pid");
 const LOCKFILE = path.join(RUNDIR, "start.lock");
 const ERRLOG = path.join(BASE, "error.log");
+export const MARIADB_PIDFILE = PIDFILE;
+const WATCHDOG = path.join(path.dirname(fileURLToPath(import.meta.url)), "watchdog.mjs");
 
 export const dbSettings = () => ({
   port: Number(process.env.DB_PORT || 3307),
@@ -29,7 +32,7 @@ export function ping() {
 
 function initialise() {
   if (fs.existsSync(path.join(DATADIR, "mysql"))) return;
-  log("initialising a private MariaDB data directory in .data/mariadb…");
+  log(`initialising a private MariaDB data directory in ${path.relative(process.cwd(), BASE) || BASE}…`);
   fs.rmSync(DATADIR, { recursive: true, force: true });
   fs.mkdirSync(DATADIR, { recursive: true });
   const args = ["--no-defaults", `--datadir=${DATADIR}`, "--auth-root-authentication-method=socket", "--skip-test-db",
@@ -59,20 +62,35 @@ const releaseLock = () => {
   if (readPid(LOCKFILE) === process.pid) fs.rmSync(LOCKFILE, { force: true });
 };
 
+/** A watchdog that stops mariadbd when this process dies, however it dies (see watchdog.mjs). */
+function startWatchdog(pid) {
+  try {
+    const dog = spawn(process.execPath, [WATCHDOG, String(pid)], { stdio: ["ignore", "ignore", "ignore", "ipc"] });
+    dog.on("error", () => {});
+    dog.unref();
+    dog.channel?.unref();
+    return dog;
+  } catch {
+    return null;
+  }
+}
+
 /**
- * Make sure the private MariaDB is running. Returns { startedHere, stop }.
- * If another Panwise process already runs it, it is reused and left alone.
+ * Make sure the private MariaDB is running. Returns { startedHere, stop, pid, exit }: when started here, `exit`
+ * resolves with { code, signal } once that mariadbd exits (for a supervisor), and a watchdog stops it if this
+ * process dies without stopping it. If another Panwise process already runs it, it is reused and left alone.
  */
 export async function ensureMariadb() {
   const { port } = dbSettings();
+  const foreign = () => ({ startedHere: false, stop: async () => {}, pid: readPid(PIDFILE), exit: null });
   if (!takeLock()) {
     // Someone else is starting it right now; wait for them to finish.
     await waitFor("MariaDB started by another Panwise process", () => ping(), { timeoutMs: 60000 });
-    return { startedHere: false, stop: async () => {} };
+    return foreign();
   }
   try {
     const pid = readPid(PIDFILE);
-    if (pid && processAlive(pid) && ping()) return { startedHere: false, stop: async () => {} };
+    if (pid && processAlive(pid) && ping()) return foreign();
     if (pid && processAlive(pid)) {
       // A mariadbd from an earlier run still shutting down or hung: wait for it to go away.
       await waitFor("an earlier MariaDB to stop", () => !processAlive(pid), { timeoutMs: 40000 }).catch(() =>
@@ -90,18 +108,29 @@ export async function ensureMariadb() {
     if (process.getuid?.() === 0) args.push("--user=root");
     const child = spawn("/usr/sbin/mariadbd", args, { stdio: "ignore", detached: false });
     let exited = false;
-    child.on("exit", () => { exited = true; });
-    await waitFor("MariaDB to accept connections", () => {
-      if (exited) fail(`mariadbd exited during start-up; see ${ERRLOG}`);
-      return ping();
-    }, { timeoutMs: 60000 });
+    const exit = new Promise((resolve) => child.on("exit", (code, signal) => { exited = true; resolve({ code, signal }); }));
+    child.on("error", () => { exited = true; });
+    const dog = startWatchdog(child.pid);
+    const stopDog = () => { try { dog?.kill("SIGTERM"); } catch { /* gone */ } };
+    void exit.then(stopDog);
+    try {
+      await waitFor("MariaDB to accept connections", () => {
+        if (exited) fail(`mariadbd exited during start-up; see ${ERRLOG}`);
+        return ping();
+      }, { timeoutMs: 60000 });
+    } catch (err) {
+      if (!exited) child.kill("SIGKILL");
+      stopDog();
+      throw err;
+    }
     log(`MariaDB is up on 127.0.0.1:${port} (pid ${child.pid})`);
     const stop = async () => {
-      if (exited) return;
+      if (exited) return stopDog();
       child.kill("SIGTERM");
       await waitFor("MariaDB to stop", () => exited || !processAlive(child.pid), { timeoutMs: 60000 }).catch(() => child.kill("SIGKILL"));
+      stopDog();
     };
-    return { startedHere: true, stop };
+    return { startedHere: true, stop, pid: child.pid, exit };
   } finally {
     releaseLock();
   }

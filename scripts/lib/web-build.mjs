@@ -2,7 +2,7 @@
 import crypto from "node:crypto";
 import fs from "node:fs";
 import path from "node:path";
-import { ROOT, DATA, fail, log, run } from "./env.mjs";
+import { ROOT, DATA, fail, log, runAsync } from "./env.mjs";
 
 const SOURCES = ["app", "components", "shared", "assets", "app.json", "babel.config.js", "package-lock.json", "tsconfig.json"];
 
@@ -52,9 +52,11 @@ export async function ensureWebBuild({ force = false } = {}) {
     if (!force && fs.existsSync(stamp) && fs.readFileSync(stamp, "utf8") === hash) return false; // built by the other one
     log("building the web app (expo export)…");
     const started = Date.now();
-    run("npx", ["expo", "export", "--platform", "web", "--output-dir", dist], {
+    // Not spawnSync: the calling command keeps handling Ctrl-C and SIGTERM while the export runs (and ends it).
+    const res = await runAsync("npx", ["expo", "export", "--platform", "web", "--output-dir", dist], {
       env: { ...process.env, EXPO_OFFLINE: "1", EXPO_NO_TELEMETRY: "1", CI: "1" },
     });
+    if (res.status !== 0) fail(`expo export exited with ${res.status ?? res.signal}`);
     fs.writeFileSync(stamp, hash);
     log(`web app built in ${Math.round((Date.now() - started) / 1000)} s`);
     return true;
