@@ -175,6 +175,13 @@ export interface ProductDemand {
   piecesPerUnit: number;
   pieceGrams: number;
   formulaId: number | null;
+  /**
+   * The product's bake, resolved (shared/components.ts resolveBake): its own oven temperature (°C), bake minutes and
+   * cool minutes, or else its formula's bake and cool steps. The plan service always sets them; null = none known.
+   */
+  bakeTempC?: number | null;
+  bakeMinutes?: number | null;
+  coolMinutes?: number | null;
 }
 
 export interface PlannedProduct extends ProductDemand {

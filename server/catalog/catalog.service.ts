@@ -5,9 +5,11 @@ import { Product } from "./product.entity";
 import { PriceList, PriceListItem } from "./price-list.entity";
 import { CustomerAccount } from "../accounts/account.entity";
 import { Formula } from "../production/production.entity";
+import { Ingredient } from "../production/production.entity";
 import { productInputSchema, priceListInputSchema, type PriceListDto, type ProductDto } from "../../shared/schemas/catalog";
-import { sortAllergens, type AllergenCode } from "../../shared/allergens";
-import { derivedAllergens } from "../production/formulas.service";
+import { sortAllergens } from "../../shared/allergens";
+import { missingDerived, resolveBake, type ComponentLine } from "../../shared/components";
+import { componentDto, componentLine, derivedFor, productMakeup, replaceComponents, type ProductMakeup } from "./components.service";
 import { applyPercentOff } from "../../shared/money";
 import type { SessionUser } from "../../shared/schemas/auth";
 import { checkUpload, type CheckRules } from "../http/upload";
@@ -37,10 +39,12 @@ export async function pricingFor(ctx: AppContext, accountId: number | null, m: E
 export const photoUrl = (p: Product) => (p.photoFile ? `/api/uploads/${p.photoFile}` : null);
 
 /**
- * A product with a formula takes its allergens from the formula's ingredients; its own list is used
- * only while it has no formula. The "may contain" note is always the product's own.
+ * A product's declared allergens are the union of its formula's ingredients', its components' ingredients' and its own
+ * additions (server/catalog/components.service.ts): its own list never replaces the derived one. The "may contain"
+ * note is always the product's own. Buyers get no components (the recipe stays in the bakery), only the sources.
  */
-export function productDto(p: Product, pricing?: Pricing, derived?: Map<number, AllergenCode[]>): ProductDto {
+export function productDto(p: Product, makeup: ProductMakeup, lib: Map<number, Ingredient>, opts: { pricing?: Pricing; forBuyer?: boolean } = {}): ProductDto {
+  const { pricing, forBuyer } = opts;
   return {
     id: p.id,
     name: p.name,
@@ -58,11 +62,33 @@ export function productDto(p: Product, pricing?: Pricing, derived?: Map<number, 
     minQuantity: p.minQuantity,
     maxQuantity: p.maxQuantity,
     leadDays: p.leadDays,
-    allergens: derived?.get(p.id) ?? sortAllergens(p.allergens.split(",").filter(Boolean)),
+    allergens: makeup.allergens.declared,
+    derivedAllergens: makeup.allergens.derived,
+    addedAllergens: makeup.allergens.added,
+    allergenSources: makeup.allergens.sources,
     mayContain: p.mayContain,
     active: p.active,
     formulaId: p.formulaId,
+    formulaName: makeup.formulaName,
+    boughtIn: p.boughtIn,
+    bakeTempC: p.bakeTempC,
+    bakeMinutes: p.bakeMinutes,
+    coolMinutes: p.coolMinutes,
+    formulaBake: makeup.formulaBake,
+    bake: resolveBake(p, makeup.formulaSteps),
+    components: forBuyer ? [] : makeup.components.map((c) => componentDto(c, lib)),
   };
+}
+
+async function library(m: EntityManager): Promise<Map<number, Ingredient>> {
+  return new Map((await m.getRepository(Ingredient).find()).map((i) => [i.id, i]));
+}
+
+/** DTOs for many products at once (one query per table). */
+export async function productDtos(ctx: AppContext, rows: Product[], opts: { pricing?: Pricing; forBuyer?: boolean } = {}, m: EntityManager = ctx.dataSource.manager): Promise<ProductDto[]> {
+  const lib = await library(m);
+  const makeup = await productMakeup(m, rows, lib);
+  return rows.map((p) => productDto(p, makeup.get(p.id)!, lib, opts));
 }
 
 export async function listProducts(ctx: AppContext, actor: SessionUser, includeArchived: boolean): Promise<ProductDto[]> {
@@ -70,42 +96,89 @@ export async function listProducts(ctx: AppContext, actor: SessionUser, includeA
   const showAll = includeArchived && actor.role !== "buyer";
   const rows = await repo.find({ where: showAll ? {} : { active: true }, order: { sortOrder: "ASC", name: "ASC" } });
   const pricing = await pricingFor(ctx, actor.role === "buyer" ? actor.accountId : null);
-  const derived = await derivedAllergens(ctx.dataSource.manager, rows);
-  return rows.map((p) => productDto(p, pricing, derived));
+  return productDtos(ctx, rows, { pricing, forBuyer: actor.role === "buyer" });
 }
 
 export async function getProduct(ctx: AppContext, actor: SessionUser, id: number): Promise<ProductDto> {
   const p = await ctx.dataSource.getRepository(Product).findOneBy({ id });
   if (!p || (actor.role === "buyer" && !p.active)) throw notFound("That product");
-  return productDto(p, await pricingFor(ctx, actor.role === "buyer" ? actor.accountId : null), await derivedAllergens(ctx.dataSource.manager, [p]));
+  const pricing = await pricingFor(ctx, actor.role === "buyer" ? actor.accountId : null);
+  return (await productDtos(ctx, [p], { pricing, forBuyer: actor.role === "buyer" }))[0];
 }
 
-function toColumns(input: ReturnType<typeof productInputSchema.parse>) {
-  const { allergens, ...rest } = input;
-  return { ...rest, allergens: sortAllergens(allergens).join(","), formulaId: input.formulaId ?? null };
+async function productOut(ctx: AppContext, id: number): Promise<ProductDto> {
+  return (await productDtos(ctx, [await ctx.dataSource.getRepository(Product).findOneByOrFail({ id })]))[0];
 }
+
+type ParsedProduct = ReturnType<typeof productInputSchema.parse>;
+
+/**
+ * Check what the database must confirm (the formula and the components' ingredients exist), then work out what the
+ * product derives. A declaration sent without a derived allergen is a 400 naming it and its source: a product may add
+ * allergens, never take one away. Returns the columns to store (the product's own list holds only its additions).
+ */
+async function prepare(ctx: AppContext, input: ParsedProduct, sentAllergens: boolean, components: ComponentLine[]) {
+  const m = ctx.dataSource.manager;
+  if (input.formulaId && !(await m.getRepository(Formula).existsBy({ id: input.formulaId }))) throw badRequest("Choose an existing formula.", { formulaId: "Choose an existing formula." });
+  const ingredientIds = [...new Set(components.map((c) => c.ingredientId))];
+  if (ingredientIds.length) {
+    const found = new Set((await m.getRepository(Ingredient).findBy({ id: In(ingredientIds) })).map((i) => i.id));
+    const fields: Record<string, string> = {};
+    components.forEach((c, i) => { if (!found.has(c.ingredientId)) fields[`components.${i}.ingredientId`] = "Choose an ingredient from the library."; });
+    if (Object.keys(fields).length) throw badRequest("A component uses an ingredient that is not in the library.", fields);
+  }
+  const derived = await derivedFor(m, input.formulaId ?? null, components);
+  if (sentAllergens) {
+    const missing = missingDerived(input.allergens, derived);
+    if (missing) throw badRequest(missing.message, { allergens: missing.message });
+  }
+  const { allergens, components: _components, ...rest } = input;
+  return {
+    ...rest,
+    formulaId: input.formulaId ?? null,
+    allergens: sortAllergens(allergens).filter((a) => !derived.derived.includes(a)).join(","),
+  };
+}
+
+const linesOf = (input: ParsedProduct): ComponentLine[] =>
+  (input.components ?? []).map((c) => ({ kind: c.kind, name: c.name, ingredientId: c.ingredientId, grams: c.grams, per: c.per, note: c.note }));
+
+const isObject = (body: unknown): body is Record<string, unknown> => !!body && typeof body === "object" && !Array.isArray(body);
 
 export async function createProduct(ctx: AppContext, body: unknown): Promise<ProductDto> {
   const input = parse(productInputSchema, body);
-  const repo = ctx.dataSource.getRepository(Product);
-  if (input.formulaId && !(await ctx.dataSource.getRepository(Formula).existsBy({ id: input.formulaId }))) throw badRequest("Choose an existing formula.", { formulaId: "Choose an existing formula." });
-  const saved = await repo.save(repo.create({ ...toColumns(input), photoFile: null, sortOrder: await repo.count() }));
-  return productDto(saved, undefined, await derivedAllergens(ctx.dataSource.manager, [saved]));
+  const lines = linesOf(input);
+  const columns = await prepare(ctx, input, isObject(body) && "allergens" in body, lines);
+  const id = await ctx.dataSource.transaction(async (m) => {
+    const repo = m.getRepository(Product);
+    const saved = await repo.save(repo.create({ ...columns, photoFile: null, sortOrder: await repo.count() }));
+    await replaceComponents(m, saved.id, lines);
+    return saved.id;
+  });
+  return productOut(ctx, id);
 }
 
-/** A patch is merged with the product and validated as a whole, so min ≤ max holds across fields. */
+/**
+ * A patch is merged with the product and validated as a whole, so min ≤ max and "a formula or bought in" hold across
+ * fields. Components are replaced only when the patch sends them; the allergens only when it sends them.
+ */
 export async function updateProduct(ctx: AppContext, id: number, body: unknown): Promise<ProductDto> {
   const repo = ctx.dataSource.getRepository(Product);
   const p = await repo.findOneBy({ id });
   if (!p) throw notFound("That product");
-  if (!body || typeof body !== "object" || Array.isArray(body)) throw badRequest("Send the fields to change as an object.");
-  const current = productDto(p);
-  const merged = { ...current, priceCents: current.listPriceCents, ...(body as object) };
+  if (!isObject(body)) throw badRequest("Send the fields to change as an object.");
+  const [current] = await productDtos(ctx, [p]);
+  const { listPriceCents, components, addedAllergens, ...rest } = current;
+  const merged = { ...rest, priceCents: listPriceCents, allergens: addedAllergens, components, ...body };
   const input = parse(productInputSchema, merged);
-  if (input.formulaId && !(await ctx.dataSource.getRepository(Formula).existsBy({ id: input.formulaId }))) throw badRequest("Choose an existing formula.", { formulaId: "Choose an existing formula." });
-  await repo.update({ id }, toColumns(input));
-  const updated = (await repo.findOneBy({ id }))!;
-  return productDto(updated, undefined, await derivedAllergens(ctx.dataSource.manager, [updated]));
+  const sentComponents = "components" in body;
+  const lines = sentComponents ? linesOf(input) : (await productMakeup(ctx.dataSource.manager, [p])).get(id)!.components.map(componentLine);
+  const columns = await prepare(ctx, input, "allergens" in body, lines);
+  await ctx.dataSource.transaction(async (m) => {
+    await m.getRepository(Product).update({ id }, columns);
+    if (sentComponents) await replaceComponents(m, id, lines);
+  });
+  return productOut(ctx, id);
 }
 
 // ---- photos -------------------------------------------------------------------------------
@@ -137,7 +210,7 @@ export async function setProductPhoto(ctx: AppContext, id: number, buffer: Buffe
   const old = p.photoFile;
   await repo.update({ id }, { photoFile: file });
   if (old && old !== file && !(await repo.existsBy({ photoFile: old }))) await store.remove(old);
-  return productDto((await repo.findOneBy({ id }))!);
+  return productOut(ctx, id);
 }
 
 // ---- price lists -------------------------------------------------------------------------

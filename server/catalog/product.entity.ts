@@ -49,7 +49,10 @@ export class Product {
   @Column({ type: "int", nullable: true })
   leadDays: number | null;
 
-  /** Allergen codes, comma-separated, from the fixed list in shared/allergens.ts. */
+  /**
+   * The product's own allergen codes, comma-separated, from the fixed list in shared/allergens.ts: what it adds to
+   * those its formula and components derive (for a bought-in product, its whole declaration). Never a replacement.
+   */
   @Column({ type: "varchar", length: 300, default: "" })
   allergens: string;
 
@@ -61,6 +64,20 @@ export class Product {
 
   @Column({ type: "int", nullable: true })
   formulaId: number | null;
+
+  /** The explicit choice "bought in / not planned": production plans no dough for it. Never together with a formula. */
+  @Column({ type: "boolean", default: false })
+  boughtIn: boolean;
+
+  /** The product's own bake (°C, minutes) and cooling minutes; null = the formula's bake and cool steps. */
+  @Column({ type: "int", nullable: true })
+  bakeTempC: number | null;
+
+  @Column({ type: "int", nullable: true })
+  bakeMinutes: number | null;
+
+  @Column({ type: "int", nullable: true })
+  coolMinutes: number | null;
 
   @Column({ type: "int", default: 0 })
   sortOrder: number;

@@ -6,6 +6,7 @@ import { AuthToken } from "../auth/auth-token.entity";
 import { AuthRateCounter } from "../auth/rate-counter.entity";
 import { Product } from "../catalog/product.entity";
 import { PriceList, PriceListItem } from "../catalog/price-list.entity";
+import { ProductComponent } from "../catalog/product-component.entity";
 import { IdempotencyRecord, Order, OrderLine } from "../orders/order.entity";
 import { StandingOrder, StandingOrderLine } from "../orders/standing-order.entity";
 import { BakeDay, Formula, FormulaVersion, Ingredient } from "../production/production.entity";
@@ -15,7 +16,7 @@ import { CheckoutSessionRecord, CreditNote, DeliveryAdjustment, Invoice, Invoice
 /** Every entity, listed once: the DataSource, the CLI and the tests all take it from here. */
 export const entities = [
   Bakery, BakeryClosure, CustomerAccount, User, AuthToken, AuthRateCounter,
-  Product, PriceList, PriceListItem, Order, OrderLine, IdempotencyRecord, StandingOrder, StandingOrderLine,
+  Product, ProductComponent, PriceList, PriceListItem, Order, OrderLine, IdempotencyRecord, StandingOrder, StandingOrderLine,
   Ingredient, Formula, FormulaVersion, BakeDay, OutboxMail,
   NumberCounter, Invoice, InvoiceLine, Payment, CreditNote, Refund, CheckoutSessionRecord, StripeEventRecord, StripeSyncState, PayoutReconciliation, TaxCertificate, DeliveryAdjustment,
 ];

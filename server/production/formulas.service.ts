@@ -1,8 +1,9 @@
-import { In, type EntityManager } from "typeorm";
+import type { EntityManager } from "typeorm";
 import type { AppContext } from "../http/context";
 import { badRequest, conflict, notFound, parse } from "../http/errors";
 import { Formula, FormulaVersion, Ingredient } from "./production.entity";
 import { Product } from "../catalog/product.entity";
+import { declaredAllergensOf } from "../catalog/components.service";
 import { formulaFigures, validateFormula, type FormulaSpec, type IngredientInfo } from "../../shared/production";
 import { formulaInputSchema, ingredientInputSchema, type FormulaDto, type IngredientDto } from "../../shared/schemas/production";
 import { sortAllergens, type AllergenCode } from "../../shared/allergens";
@@ -120,16 +121,10 @@ export async function saveFormula(ctx: AppContext, actorId: number, id: number |
   return getFormula(ctx, formulaId);
 }
 
-/** Allergens of many products at once: from their formulas' ingredients (or their own list when they have no formula). */
+/**
+ * Declared allergens of many products at once: the union of their formulas' ingredients, their components'
+ * ingredients and their own additions (server/catalog/components.service.ts). Never the product's own list alone.
+ */
 export async function derivedAllergens(m: EntityManager, products: Product[]): Promise<Map<number, AllergenCode[]>> {
-  const formulaIds = [...new Set(products.map((p) => p.formulaId).filter((x): x is number => !!x))];
-  const out = new Map<number, AllergenCode[]>();
-  if (formulaIds.length === 0) return out;
-  const lib = await ingredientLibrary(m);
-  const formulas = await m.getRepository(Formula).findBy({ id: In(formulaIds) });
-  const byFormula = new Map<number, AllergenCode[]>();
-  for (const f of formulas) byFormula.set(f.id, formulaAllergens(await formulaSpec(m, f.id), lib));
-  for (const p of products) if (p.formulaId && byFormula.has(p.formulaId)) out.set(p.id, byFormula.get(p.formulaId)!);
-  return out;
+  return declaredAllergensOf(m, products);
 }
-

@@ -12,6 +12,8 @@ import { expandRule } from "../../shared/recurrence";
 import { Ingredient } from "./production.entity";
 import { bakeWaves, planDough, planProduct, roundGrams, scheduleTimeline, type FormulaSpec, type PlannedProduct } from "../../shared/production";
 import type { PlanDto } from "../../shared/schemas/production";
+import { componentCards, componentTotals, resolveBake } from "../../shared/components";
+import { componentLine, productMakeup } from "../catalog/components.service";
 
 interface DayRow { productId: number; units: string; openUnits: string }
 
@@ -89,12 +91,26 @@ export async function computePlan(ctx: AppContext, date: string, opts: { version
     .filter((p) => p.pans > 0 || p.units > 0);
 
   const warnings: string[] = [];
-  for (const p of planned) if (!p.formulaId) warnings.push(`${p.name} has no formula yet, so its dough is not planned. Give it one under Formulas.`);
+  const boughtIn = new Set(products.filter((p) => p.boughtIn).map((p) => p.id));
+  for (const p of planned) if (!p.formulaId && !boughtIn.has(p.productId)) warnings.push(`${p.name} has no formula yet, so its dough is not planned. Give it one under Formulas, or mark it bought in on the product.`);
   const lib = await ingredientLibrary(m);
   const info = new Map([...lib].map(([id, i]) => [id, ingredientInfo(i)]));
   const formulaIds = [...new Set(planned.map((p) => p.formulaId).filter((x): x is number => !!x))];
   const formulas = new Map<number, FormulaSpec & { targetInternalC: number | null }>();
   for (const id of formulaIds) formulas.set(id, await formulaSpec(m, id, versions?.get(id)));
+  // Each product's own bake and cooling, else its formula's (the version this plan uses): for the scheduler.
+  const byProduct = new Map(products.map((p) => [p.id, p]));
+  for (const p of planned) {
+    const own = byProduct.get(p.productId)!;
+    Object.assign(p, resolveBake(own, p.formulaId ? formulas.get(p.formulaId)?.steps : null));
+  }
+  // Components (toppings, washes, fillings, garnishes): one weigh-out card per component per product.
+  const makeup = await productMakeup(m, products, lib);
+  const cards = componentCards(
+    planned.filter((p) => p.formulaId),
+    planned.flatMap((p) => (makeup.get(p.productId)?.components ?? []).map((c) => ({ ...componentLine(c), productId: p.productId }))),
+    (id) => lib.get(id)?.name ?? "?",
+  );
   const temps = { roomC: Number(day.roomC), flourC: Number(day.flourC), pasteC: Number(day.pasteC) };
   const mixerCapacityKg = Number(bakery.mixerCapacityKg);
   const doughs = formulaIds.map((id) => {
@@ -105,6 +121,8 @@ export async function computePlan(ctx: AppContext, date: string, opts: { version
 
   const totals = new Map<number, number>();
   for (const d of doughs) for (const i of d.ingredients) totals.set(i.ingredientId, (totals.get(i.ingredientId) ?? 0) + i.grams);
+  const fromComponents = componentTotals(cards);
+  for (const [id, g] of fromComponents) totals.set(id, (totals.get(id) ?? 0) + g);
   const [h, min] = bakery.dispatchTime.split(":").map(Number);
   const dispatch = DateTime.fromISO(date, { zone: bakery.timeZone }).set({ hour: h, minute: min });
   const capacity = bakery.ovens * bakery.pansPerLoad;
@@ -120,9 +138,16 @@ export async function computePlan(ctx: AppContext, date: string, opts: { version
     computedAt: DateTime.fromJSDate(now, { zone: bakery.timeZone }).toISO()!,
     cutoffAt: cutoff.toISO()!,
     inputs: { ...temps, mixerCapacityKg, dispatchAt: dispatch.toISO()!, ovenCapacityPans: capacity },
-    products: planned.map((p) => ({ productId: p.productId, name: p.name, units: p.units, extraPans: p.extraPans, pans: p.pans, pieces: p.pieces, pieceGrams: p.pieceGrams, formulaId: p.formulaId, panName: p.panName, openUnits: p.openUnits })),
+    products: planned.map((p) => ({
+      productId: p.productId, name: p.name, units: p.units, extraPans: p.extraPans, pans: p.pans, pieces: p.pieces, pieceGrams: p.pieceGrams, formulaId: p.formulaId, panName: p.panName, openUnits: p.openUnits,
+      bakeTempC: p.bakeTempC ?? null, bakeMinutes: p.bakeMinutes ?? null, coolMinutes: p.coolMinutes ?? null,
+      allergens: makeup.get(p.productId)?.allergens.declared ?? [],
+    })),
     doughs,
-    ingredients: [...totals].map(([ingredientId, grams]) => ({ ingredientId, name: lib.get(ingredientId)?.name ?? "?", grams: roundGrams(grams) })).sort((a, b) => b.grams - a.grams),
+    ingredients: [...totals]
+      .map(([ingredientId, grams]) => ({ ingredientId, name: lib.get(ingredientId)?.name ?? "?", grams: roundGrams(grams), ...(fromComponents.has(ingredientId) ? { componentGrams: roundGrams(fromComponents.get(ingredientId)!) } : {}) }))
+      .sort((a, b) => b.grams - a.grams),
+    components: cards,
     timeline,
     warnings,
     progress: JSON.parse(day.progress),

@@ -1,5 +1,6 @@
 import { z } from "zod";
 import { ALLERGEN_CODES, type AllergenCode } from "../allergens";
+import { COMPONENT_KINDS, COMPONENT_PER, componentName, type ComponentKind, type ComponentPer, type ResolvedBake } from "../components";
 
 const intIn = (label: string, min: number, max: number) =>
   z.coerce
@@ -13,6 +14,21 @@ const intIn = (label: string, min: number, max: number) =>
  * a line can still pass 2^31 − 1 cents; the order service refuses those with the limit named.
  */
 export const MAX_PRICE_CENTS = 10_000_000;
+
+/** One ingredient of a component, weighed per piece or per pan (0.1 g resolution, as the column stores it). */
+export const componentInputSchema = z.object({
+  kind: z.enum(COMPONENT_KINDS, { errorMap: () => ({ message: "Choose topping, wash, filling or garnish." }) }),
+  name: z.string().trim().max(80, "Use at most 80 characters.").default(""),
+  ingredientId: z.number({ required_error: "Choose the ingredient.", invalid_type_error: "Choose the ingredient." }).int("Choose the ingredient.").positive("Choose the ingredient."),
+  grams: z.coerce
+    .number({ invalid_type_error: "Enter the grams, e.g. 2 or 1.5." })
+    .min(0.1, "Weigh at least 0.1 g.")
+    .max(10000, "At most 10,000 g.")
+    .refine((g) => Math.abs(g * 10 - Math.round(g * 10)) < 1e-6, "Use at most one decimal, e.g. 1.5 g."),
+  per: z.enum(COMPONENT_PER, { errorMap: () => ({ message: "Choose per piece or per pan." }) }),
+  note: z.string().trim().max(200, "Use at most 200 characters.").default(""),
+});
+export type ComponentInput = z.input<typeof componentInputSchema>;
 
 export const productInputSchema = z
   .object({
@@ -33,9 +49,33 @@ export const productInputSchema = z
     mayContain: z.string().trim().max(300, "Use at most 300 characters.").default(""),
     active: z.boolean().default(true),
     formulaId: z.number().int().positive().nullable().optional(),
+    /** The explicit "bought in / not planned" choice: no dough is planned for it. */
+    boughtIn: z.boolean().default(false),
+    /** The product's own bake and cooling; null = its formula's bake and cool steps. */
+    bakeTempC: intIn("Bake temperature", 90, 300).nullable().default(null),
+    bakeMinutes: intIn("Bake time", 1, 300).nullable().default(null),
+    coolMinutes: intIn("Cooling time", 0, 24 * 60).nullable().default(null),
+    /** When sent, replaces the product's components. */
+    components: z.array(componentInputSchema).max(30, "At most 30 component lines.").optional(),
   })
   .superRefine((v, ctx) => {
     if (v.maxQuantity < v.minQuantity) ctx.addIssue({ code: "custom", path: ["maxQuantity"], message: "The maximum must be at least the minimum." });
+    if (v.formulaId && v.boughtIn) ctx.addIssue({ code: "custom", path: ["boughtIn"], message: "A product is either baked from a formula or bought in, not both." });
+    if (v.active && !v.formulaId && !v.boughtIn) {
+      ctx.addIssue({ code: "custom", path: ["formulaId"], message: "Choose the formula it is baked from, or mark it bought in / not planned: otherwise buyers could order what production cannot plan." });
+    }
+    if (v.boughtIn) {
+      if (v.components?.length) ctx.addIssue({ code: "custom", path: ["components"], message: "A bought-in product has no components to weigh out: remove them, or choose its formula." });
+      for (const k of ["bakeTempC", "bakeMinutes", "coolMinutes"] as const) {
+        if (v[k] !== null) ctx.addIssue({ code: "custom", path: [k], message: "A bought-in product is not baked here: leave the bake and cooling blank." });
+      }
+    }
+    const seen = new Set<string>();
+    v.components?.forEach((c, i) => {
+      const key = `${c.kind}|${componentName(c)}|${c.ingredientId}`;
+      if (seen.has(key)) ctx.addIssue({ code: "custom", path: ["components", i, "ingredientId"], message: "This ingredient is already in this component." });
+      seen.add(key);
+    });
   });
 export type ProductInput = z.input<typeof productInputSchema>;
 
@@ -58,10 +98,41 @@ export interface ProductDto {
   minQuantity: number;
   maxQuantity: number;
   leadDays: number | null;
+  /** The declaration: formula ∪ components ∪ the product's own additions (shared/components.ts declaredAllergens). */
   allergens: AllergenCode[];
+  /** From the formula and the components: the product cannot take these off. */
+  derivedAllergens: AllergenCode[];
+  /** The product's own additions (for a bought-in product, its whole declaration). */
+  addedAllergens: AllergenCode[];
+  /** Where each declared allergen comes from, e.g. { sesame: ["Toasted sesame topping"] }. */
+  allergenSources: Partial<Record<AllergenCode, string[]>>;
   mayContain: string;
   active: boolean;
   formulaId: number | null;
+  formulaName: string | null;
+  boughtIn: boolean;
+  /** The product's own values (null = the formula's). */
+  bakeTempC: number | null;
+  bakeMinutes: number | null;
+  coolMinutes: number | null;
+  /** The formula's bake and cool steps (null without a formula). */
+  formulaBake: ResolvedBake | null;
+  /** What production uses: the product's own, else the formula's. */
+  bake: ResolvedBake;
+  /** Office users only (buyers get []: recipes stay in the bakery). */
+  components: ComponentDto[];
+}
+
+export interface ComponentDto {
+  kind: ComponentKind;
+  /** As stored (may be blank: the kind's label is shown then). */
+  name: string;
+  ingredientId: number;
+  ingredientName: string;
+  grams: number;
+  per: ComponentPer;
+  note: string;
+  allergens: AllergenCode[];
 }
 
 export const PRICE_LIST_KINDS = ["fixed", "percent"] as const;

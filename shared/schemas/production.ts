@@ -2,6 +2,7 @@ import { z } from "zod";
 import { ALLERGEN_CODES, type AllergenCode } from "../allergens";
 import { INGREDIENT_KINDS, STEP_KINDS, type FormulaFigures, type IngredientKind, type StepKind, type TimelineEntry } from "../production";
 import { dateSchema } from "./calendar";
+import type { ComponentCard } from "../components";
 
 const num = (label: string, min: number, max: number) =>
   z.coerce.number({ invalid_type_error: `${label} must be a number.` }).min(min, `${label} must be at least ${min}.`).max(max, `${label} can be at most ${max}.`);
@@ -83,14 +84,23 @@ export interface PlanDto {
   computedAt: string;
   cutoffAt: string;
   inputs: { roomC: number; flourC: number; pasteC: number; mixerCapacityKg: number; dispatchAt: string; ovenCapacityPans: number };
-  products: { productId: number; name: string; units: number; extraPans: number; pans: number; pieces: number; pieceGrams: number; formulaId: number | null; panName: string; openUnits: number }[];
+  products: {
+    productId: number; name: string; units: number; extraPans: number; pans: number; pieces: number; pieceGrams: number; formulaId: number | null; panName: string; openUnits: number;
+    /** Resolved per product (its own value, else its formula's bake/cool step; shared/components.ts resolveBake). Optional in plans frozen before they existed. */
+    bakeTempC?: number | null; bakeMinutes?: number | null; coolMinutes?: number | null;
+    /** The product's declared allergens (formula ∪ components ∪ its own additions). */
+    allergens?: AllergenCode[];
+  }[];
   doughs: {
     formulaId: number; name: string; formulaVersion: number; doughGrams: number; flourGrams: number; targetInternalC: number | null;
     paste: { flourGrams: number; liquidGrams: number; cookToC: number } | null;
     ingredients: { ingredientId: number; name: string; kind: IngredientKind; percent: number; grams: number; pasteGrams: number; finalMixGrams: number }[];
     mixes: { index: number; doughGrams: number; liquidTempC: number | null; liquidTempAdvice: string | null; ingredients: { ingredientId: number; grams: number; pasteGrams: number; finalMixGrams: number }[] }[];
   }[];
-  ingredients: { ingredientId: number; name: string; grams: number }[];
+  /** Dough and components together; `componentGrams` is the part weighed for components. */
+  ingredients: { ingredientId: number; name: string; grams: number; componentGrams?: number }[];
+  /** One weigh-out card per component per product (toppings, washes, fillings, garnishes). */
+  components?: ComponentCard[];
   timeline: TimelineEntry[];
   warnings: string[];
   progress: { mixes: string[]; waves: number[] };
