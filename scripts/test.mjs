@@ -56,6 +56,9 @@ async function main() {
   if (only("jest")) stage("jest: app screens + server API + shared", "npx", ["jest", "--selectProjects", "app", "server", "--ci"], testEnv);
   // The API fuzz: every route, every role, thousands of malformed requests against a server process (tests/fuzz).
   if (only("fuzz")) stage("fuzz: malformed input on every API route (fast-check)", "npx", ["jest", "--selectProjects", "fuzz", "--runInBand", "--ci", "--forceExit"], testEnv);
+  // Faults on purpose (tests/reliability): MariaDB SIGKILLed mid order burst, the start command restarting what dies.
+  // Each test runs its own mariadbd in a temp dir on free ports; the shared one is never touched.
+  if (only("reliability")) stage("reliability: MariaDB killed mid-burst, npm start heals and stops cleanly", "npx", ["jest", "--selectProjects", "reliability", "--runInBand", "--ci"], testEnv);
 
   if (only("browser")) {
     await ensureWebBuild();
