@@ -1,5 +1,5 @@
 import { DateTime } from "luxon";
-import { addDays, formatLocal, isCalendarDate } from "../../shared/calendar";
+import { addDays, formatLocal, isSupportedDate } from "../../shared/calendar";
 
 /** A calendar date (no time zone involved): "Thu 4 Dec". */
 export function formatDay(date: string): string {
@@ -47,7 +47,8 @@ export function formatCutoff(iso: string, timeZone: string | undefined): string 
 /** A date typed by a person, if it is a real YYYY-MM-DD date. */
 export function cleanDate(text: string): string | null {
   const t = text.trim();
-  return isCalendarDate(t) ? t : null;
+  // Only the dates the server accepts (2000-01-01..2099-12-31): addDays refuses to step past 9999-12-31.
+  return isSupportedDate(t) ? t : null;
 }
 
 export { addDays };
