@@ -64,6 +64,12 @@ async function startStack(cmd: string, args: string[]): Promise<{ child: ChildPr
   return { child, output: () => out };
 }
 
+function serverPidIn(pids: Iterable<number>): number | undefined {
+  return [...pids].find((p) => {
+    try { return fs.readFileSync(`/proc/${p}/cmdline`, "utf8").includes("server/index.ts"); } catch { return false; }
+  });
+}
+
 /** The stack's processes now (the command itself and everything under it). */
 function stackPids(root: number): Set<number> {
   return new Set([root, ...descendants(root)]);
@@ -81,6 +87,8 @@ describe("the start command", () => {
     const seen = stackPids(child.pid!);
     const killed = mariadbdPid();
     expect(seen.has(killed)).toBe(true);
+    const serverPid = serverPidIn(seen);
+    expect(serverPid).toBeDefined();
 
     // Already running: a second copy says so and leaves.
     const second = spawnSync(process.execPath, ["scripts/start.mjs"], { cwd: ROOT, env: env(), encoding: "utf8", timeout: 30_000 });
@@ -96,6 +104,8 @@ describe("the start command", () => {
     expect(output()).toContain("MariaDB stopped unexpectedly (signal SIGKILL); restarting in 1 s (attempt 2)");
     const restarted = mariadbdPid();
     expect(restarted).not.toBe(killed);
+    // The same server process serves again: its connection pool recovered by itself.
+    expect(alive(serverPid!)).toBe(true);
     stackPids(child.pid!).forEach((p) => seen.add(p));
 
     child.kill("SIGTERM");
@@ -108,9 +118,7 @@ describe("the start command", () => {
   it("under npm: restarts a SIGKILLed server, and SIGTERM to npm's own process stops every process", async () => {
     const { child, output } = await startStack("npm", ["start"]);
     const seen = stackPids(child.pid!);
-    const serverPid = [...seen].find((p) => {
-      try { return fs.readFileSync(`/proc/${p}/cmdline`, "utf8").includes("server/index.ts"); } catch { return false; }
-    });
+    const serverPid = serverPidIn(seen);
     expect(serverPid).toBeDefined();
     process.kill(serverPid!, "SIGKILL");
     await until(async () => !(await healthy()), 5000, 50);
