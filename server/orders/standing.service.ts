@@ -8,7 +8,7 @@ import { CustomerAccount } from "../accounts/account.entity";
 import { loadCalendarSettings, parseWeekdays, resolveAccount } from "../calendar/calendar.service";
 import { pricingFor } from "../catalog/catalog.service";
 import { createOrder, orderCutoff } from "./orders.service";
-import { addDays, dateStatus, localToday, weekdayOf, type Weekday } from "../../shared/calendar";
+import { addDays, dateStatus, daysBetween, localToday, weekdayOf, type Weekday } from "../../shared/calendar";
 import { expandRule, weeklyRule } from "../../shared/recurrence";
 import type { SessionUser } from "../../shared/schemas/auth";
 import { MAX_ORDER_CENTS, type StandingOrderDto, type StandingOrderInput } from "../../shared/schemas/orders";
@@ -49,6 +49,19 @@ async function dto(ctx: AppContext, so: StandingOrder, lines: StandingOrderLine[
   };
 }
 
+/**
+ * The DTSTART the stored rule starts from. rrule walks every occurrence from DTSTART on, so a start in 2000
+ * cost tens of milliseconds of CPU on each expansion. A start more than a week back moves forward by whole
+ * periods (7 × interval days) to the last such date at least a week before today: every week the rule
+ * picks (RFC 5545 §3.3.10, INTERVAL counted from DTSTART's week with WKST=MO) stays the same, and the
+ * dates it leaves out are all in the past. The start date the person chose is kept as they wrote it.
+ */
+export function ruleStart(startDate: string, intervalWeeks: number, today: string): string {
+  const period = 7 * intervalWeeks;
+  const behind = daysBetween(startDate, today) - 7;
+  return behind > 0 ? addDays(startDate, Math.floor(behind / period) * period) : startDate;
+}
+
 export async function putStandingOrder(ctx: AppContext, actor: SessionUser, input: ReturnType<typeof import("../../shared/schemas/orders").standingOrderSchema.parse>): Promise<StandingOrderDto> {
   const account = await resolveAccount(ctx, actor, input.accountId);
   if (account.status !== "active") throw new HttpError(403, account.status === "on_hold" ? "account_on_hold" : "account_closed", `${account.businessName} is ${account.status === "on_hold" ? "on hold" : "closed"}; the standing order can't be changed now. Please call the bakery.`);
@@ -69,7 +82,7 @@ export async function putStandingOrder(ctx: AppContext, actor: SessionUser, inpu
   if (Object.keys(fields).length) throw badRequest(Object.keys(fields).length === 1 ? Object.values(fields)[0] : "Some quantities need attention.", fields);
 
   const weekdays = [...new Set(input.lines.filter((l) => l.quantity > 0).map((l) => l.weekday as Weekday))];
-  const rule = weeklyRule({ startDate: input.startDate, endDate: input.endDate, intervalWeeks: input.intervalWeeks, weekdays: weekdays.length ? weekdays : [weekdayOf(input.startDate)] });
+  const rule = weeklyRule({ startDate: ruleStart(input.startDate, input.intervalWeeks, localToday(ctx.clock.now(), settings.timeZone)), endDate: input.endDate, intervalWeeks: input.intervalWeeks, weekdays: weekdays.length ? weekdays : [weekdayOf(input.startDate)] });
   await ctx.dataSource.transaction(async (m) => {
     const repo = m.getRepository(StandingOrder);
     let so = await repo.findOneBy({ accountId: account.id });

@@ -173,3 +173,23 @@ describe("POST /api/invoices/statements", () => {
     expect((await call({ role: "bookkeeper", method: "POST", path: "/api/invoices/statements", body: { through: "2026-06-10" } })).status).toBe(200);
   });
 });
+
+describe("standing orders that started long ago", () => {
+  it("keep every upcoming date while the stored rule starts within a period of last week", async () => {
+    const { ruleStart } = await import("../../server/orders/standing.service");
+    const { weeklyRule, expandRule } = await import("../../shared/recurrence");
+    const { daysBetween } = await import("../../shared/calendar");
+    const today = "2026-06-10";
+    for (const [startDate, intervalWeeks] of [["2000-01-03", 1], ["2000-01-03", 2], ["2000-01-06", 2], ["2026-05-01", 2], ["2026-06-09", 1], ["2026-07-01", 2]] as const) {
+      const weekdays = [2, 4, 6] as const;
+      const start = ruleStart(startDate, intervalWeeks, today);
+      // The oracle: the rule as written, expanded by the rrule library itself (RFC 5545 §3.3.10).
+      const asWritten = expandRule(weeklyRule({ startDate, endDate: null, intervalWeeks, weekdays: [...weekdays] }), today, "2026-10-08");
+      const stored = expandRule(weeklyRule({ startDate: start, endDate: null, intervalWeeks, weekdays: [...weekdays] }), today, "2026-10-08");
+      expect(stored).toEqual(asWritten);
+      expect(asWritten.length).toBeGreaterThan(10);
+      expect(Math.abs(daysBetween(start, startDate) % (7 * intervalWeeks))).toBe(0);
+      expect(daysBetween(start, today)).toBeLessThanOrEqual(7 + 7 * intervalWeeks);
+    }
+  });
+});
