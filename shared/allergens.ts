@@ -3,7 +3,11 @@
  * milk, egg, fish, crustacean shellfish, tree nuts, peanuts, wheat, soybeans, sesame) and the 14 groups
  * of EU Regulation 1169/2011 Annex II (cereals containing gluten, crustaceans, eggs, fish, peanuts,
  * soybeans, milk, nuts, celery, mustard, sesame, sulphur dioxide and sulphites, lupin, molluscs).
- * Where both lists name the same thing it is one entry; "wheat" (US) sits beside "gluten" (EU).
+ * Where both lists name the same thing it is one entry; "wheat" (US) sits beside "gluten" (EU). Annex II point 1
+ * names the cereals containing gluten: wheat, rye, barley, oats (and their hybridised strains), so an oat
+ * ingredient carries "gluten".
+ *
+ * A product declares the union of its formula's, its components' and its own allergens (shared/components.ts).
  */
 export const ALLERGENS = [
   { code: "gluten", label: "Cereals containing gluten", us: false, eu: true },
@@ -33,4 +37,16 @@ export const ALLERGEN_CAUTION =
 export function sortAllergens(codes: Iterable<string>): AllergenCode[] {
   const set = new Set(codes);
   return ALLERGENS.filter((a) => set.has(a.code)).map((a) => a.code);
+}
+
+const isCode = (s: string): s is AllergenCode => Object.prototype.hasOwnProperty.call(ALLERGEN_LABEL, s);
+
+/**
+ * One line for a product's allergens, as an e-mail or a sheet prints it: "Contains: Cereals containing gluten, Wheat,
+ * Egg, Milk, Sesame. May contain: Tree nuts." ("may contain" is stored as codes, anything else kept as written).
+ */
+export function allergenStatement(codes: readonly AllergenCode[], mayContain = ""): string {
+  const traces = mayContain.split(",").map((t) => t.trim()).filter(Boolean).map((t) => (isCode(t) ? ALLERGEN_LABEL[t] : t));
+  const contains = codes.length ? `Contains: ${sortAllergens(codes).map((c) => ALLERGEN_LABEL[c]).join(", ")}.` : "Contains none of the listed allergens.";
+  return traces.length ? `${contains} May contain: ${traces.join(", ")}.` : contains;
 }

@@ -1,3 +1,5 @@
+import { allergenStatement } from "../../shared/allergens";
+
 /** E-mail bodies: every mail has an HTML and a plain-text part saying the same thing. */
 const escapeHtml = (s: string) =>
   s.replace(/&/g, "&amp;").replace(/</g, "&lt;").replace(/>/g, "&gt;").replace(/"/g, "&quot;").replace(/'/g, "&#39;");
@@ -69,7 +71,9 @@ export function orderMail(p: {
   const day = new Intl.DateTimeFormat("en-US", { weekday: "long", day: "numeric", month: "long", timeZone: "UTC" }).format(new Date(`${order.deliveryDate}T12:00:00Z`));
   const cutoff = new Intl.DateTimeFormat("en-US", { weekday: "short", day: "numeric", month: "short", hour: "numeric", minute: "2-digit", timeZone: p.timeZone, timeZoneName: "short" }).format(new Date(order.cutoffAt));
   const verb = { placed: "Order received", changed: "Order changed", cancelled: "Order cancelled" }[p.kind];
-  const lines = order.lines.map((l) => `${l.quantity} × ${l.productName} (${l.saleUnit}) — ${money(l.lineTotalCents)}`);
+  // Each line names its allergens (the product's declaration: formula, components and its own), as US FALCPA (as amended
+  // by the FASTER Act of 2021) and EU Regulation 1169/2011 Annex II list them.
+  const lines = order.lines.map((l) => `${l.quantity} × ${l.productName} (${l.saleUnit}) — ${money(l.lineTotalCents)}. ${allergenStatement(l.allergens, l.mayContain)}`);
   const paras =
     p.kind === "cancelled"
       ? [`Your order for ${day} (${order.accountName}) is cancelled. Nothing will be delivered that day.`]
@@ -79,7 +83,7 @@ export function orderMail(p: {
           `Total ${money(order.totalCents)}${order.poNumber ? ` · PO ${order.poNumber}` : ""}`,
           `You can change it until the cut-off, ${cutoff}.`,
         ];
-  return { subject: `${verb}: ${day} — ${p.bakeryName}`, ...layout(p.bakeryName, verb, paras, { label: "View the order", url: p.url }, "Allergens are listed on each product in Panwise; ask the bakery if you have a severe allergy.") };
+  return { subject: `${verb}: ${day} — ${p.bakeryName}`, ...layout(p.bakeryName, verb, paras, { label: "View the order", url: p.url }, "Allergens are listed with each line above and on each product in Panwise; ask the bakery if you have a severe allergy.") };
 }
 
 export function invoiceMail(p: { bakeryName: string; currency: string; number: string; totalCents: number; dueCents: number; dueDate: string; url: string; card: boolean; instructions: string }): Rendered {

@@ -12,6 +12,8 @@ import { weeklyRule } from "../../shared/recurrence";
 import type { Weekday } from "../../shared/calendar";
 import { Formula, FormulaVersion, Ingredient } from "../production/production.entity";
 import type { StepSpec } from "../../shared/production";
+import { ProductComponent } from "../catalog/product-component.entity";
+import type { ComponentKind, ComponentPer } from "../../shared/components";
 
 /** The invented demo scenario: the Hollowbrook Bakehouse and three wholesale customers. */
 export const DEMO_PASSWORD = "panwise-demo";
@@ -70,14 +72,21 @@ export const DEMO_SIGN_INS = [
 const NINE_BY_THIRTEEN = { panName: "9×13 in pan", panLengthMm: 330, panWidthMm: 229 };
 const HALF_SHEET = { panName: "Half sheet pan", panLengthMm: 457, panWidthMm: 330 };
 const PULLMAN = { panName: "13×4 in Pullman pan", panLengthMm: 330, panWidthMm: 102 };
+/**
+ * Products declare no allergens of their own: every one comes from the formula and the components (the declaration
+ * is their union). Bake and cooling default to the formula's steps; the products that differ say so (common practice,
+ * no published source: roughly 15–18 min for small buns, 35–45 min for a 900 g lidded loaf, 1–2 h cooling before
+ * slicing or bagging a loaf).
+ */
+const FORMULA_BAKE = { bakeTempC: null as number | null, bakeMinutes: null as number | null, coolMinutes: null as number | null };
 export const DEMO_PRODUCTS = [
-  { key: "rolls", name: "Milk-bread dinner rolls", description: "Soft, pull-apart rolls made with a cooked milk-and-flour paste. Baked together so the sides stay tender.", saleUnit: "tray of 15 rolls", piecesPerUnit: 15, pieceGrams: 67, ...NINE_BY_THIRTEEN, unitsPerPan: 1, priceCents: 1800, minQuantity: 1, maxQuantity: 40, leadDays: null, allergens: "gluten,wheat,egg,milk", mayContain: "sesame" },
-  { key: "sliders", name: "Milk-bread slider buns", description: "Small round buns for sliders and breakfast sandwiches, brushed with egg.", saleUnit: "dozen buns", piecesPerUnit: 12, pieceGrams: 45, ...HALF_SHEET, unitsPerPan: 2, priceCents: 1440, minQuantity: 1, maxQuantity: 30, leadDays: null, allergens: "gluten,wheat,egg,milk", mayContain: "sesame" },
-  { key: "pullman", name: "Pullman milk loaf", description: "Square, close-crumbed sandwich loaf for toast and tea sandwiches.", saleUnit: "loaf", piecesPerUnit: 1, pieceGrams: 900, ...PULLMAN, unitsPerPan: 1, priceCents: 950, minQuantity: 1, maxQuantity: 30, leadDays: null, allergens: "gluten,wheat,egg,milk", mayContain: "" },
-  { key: "oat", name: "Honey-oat rolls", description: "Milk-bread rolls with rolled oats and a little honey; oat-topped.", saleUnit: "tray of 15 rolls", piecesPerUnit: 15, pieceGrams: 70, ...NINE_BY_THIRTEEN, unitsPerPan: 1, priceCents: 1950, minQuantity: 1, maxQuantity: 30, leadDays: null, allergens: "gluten,wheat,milk", mayContain: "egg,sesame" },
-  { key: "brioche", name: "Brioche burger buns", description: "Rich, egg-glazed buns that hold a burger without going soggy.", saleUnit: "pack of 8 buns", piecesPerUnit: 8, pieceGrams: 90, ...HALF_SHEET, unitsPerPan: 2, priceCents: 1600, minQuantity: 1, maxQuantity: 25, leadDays: null, allergens: "gluten,wheat,egg,milk", mayContain: "sesame" },
-  { key: "sesame", name: "Sesame brioche buns", description: "Our brioche buns topped with toasted sesame.", saleUnit: "pack of 8 buns", piecesPerUnit: 8, pieceGrams: 90, ...HALF_SHEET, unitsPerPan: 2, priceCents: 1700, minQuantity: 1, maxQuantity: 25, leadDays: null, allergens: "gluten,wheat,egg,milk,sesame", mayContain: "" },
-  { key: "swirl", name: "Cinnamon swirl loaf", description: "Milk-bread loaf rolled with cinnamon sugar; needs an extra day's notice.", saleUnit: "loaf", piecesPerUnit: 1, pieceGrams: 800, ...PULLMAN, unitsPerPan: 1, priceCents: 1150, minQuantity: 1, maxQuantity: 12, leadDays: 2, allergens: "gluten,wheat,egg,milk", mayContain: "tree_nuts" },
+  { key: "rolls", name: "Milk-bread dinner rolls", description: "Soft, pull-apart rolls made with a cooked milk-and-flour paste. Baked together so the sides stay tender.", saleUnit: "tray of 15 rolls", piecesPerUnit: 15, pieceGrams: 67, ...NINE_BY_THIRTEEN, unitsPerPan: 1, priceCents: 1800, minQuantity: 1, maxQuantity: 40, leadDays: null, allergens: "", mayContain: "sesame", ...FORMULA_BAKE },
+  { key: "sliders", name: "Milk-bread slider buns", description: "Small round buns for sliders and breakfast sandwiches, brushed with egg.", saleUnit: "dozen buns", piecesPerUnit: 12, pieceGrams: 45, ...HALF_SHEET, unitsPerPan: 2, priceCents: 1440, minQuantity: 1, maxQuantity: 30, leadDays: null, allergens: "", mayContain: "sesame", ...FORMULA_BAKE, bakeMinutes: 16 },
+  { key: "pullman", name: "Pullman milk loaf", description: "Square, close-crumbed sandwich loaf for toast and tea sandwiches.", saleUnit: "loaf", piecesPerUnit: 1, pieceGrams: 900, ...PULLMAN, unitsPerPan: 1, priceCents: 950, minQuantity: 1, maxQuantity: 30, leadDays: null, allergens: "", mayContain: "", ...FORMULA_BAKE, bakeMinutes: 40, coolMinutes: 90 },
+  { key: "oat", name: "Honey-oat rolls", description: "Milk-bread rolls with rolled oats and a little honey; oat-topped.", saleUnit: "tray of 15 rolls", piecesPerUnit: 15, pieceGrams: 70, ...NINE_BY_THIRTEEN, unitsPerPan: 1, priceCents: 1950, minQuantity: 1, maxQuantity: 30, leadDays: null, allergens: "", mayContain: "egg,sesame", ...FORMULA_BAKE },
+  { key: "brioche", name: "Brioche burger buns", description: "Rich, egg-glazed buns that hold a burger without going soggy.", saleUnit: "pack of 8 buns", piecesPerUnit: 8, pieceGrams: 90, ...HALF_SHEET, unitsPerPan: 2, priceCents: 1600, minQuantity: 1, maxQuantity: 25, leadDays: null, allergens: "", mayContain: "sesame", ...FORMULA_BAKE },
+  { key: "sesame", name: "Sesame brioche buns", description: "Our brioche buns topped with toasted sesame.", saleUnit: "pack of 8 buns", piecesPerUnit: 8, pieceGrams: 90, ...HALF_SHEET, unitsPerPan: 2, priceCents: 1700, minQuantity: 1, maxQuantity: 25, leadDays: null, allergens: "", mayContain: "", ...FORMULA_BAKE },
+  { key: "swirl", name: "Cinnamon swirl loaf", description: "Milk-bread loaf rolled with cinnamon sugar; needs an extra day's notice.", saleUnit: "loaf", piecesPerUnit: 1, pieceGrams: 800, ...PULLMAN, unitsPerPan: 1, priceCents: 1150, minQuantity: 1, maxQuantity: 12, leadDays: 2, allergens: "", mayContain: "tree_nuts", ...FORMULA_BAKE, bakeMinutes: 40, coolMinutes: 90 },
 ] as const;
 
 /** Standing orders per account: weekday → product key → quantity. */
@@ -102,8 +111,35 @@ const DEMO_INGREDIENTS = [
   { key: "yeast", name: "Instant yeast", kind: "leavening", waterPercent: "5", allergens: "", packName: "1 lb pack", packGrams: 454, packCostCents: 690 },
   { key: "milkpowder", name: "Nonfat dry milk", kind: "other", waterPercent: "3", allergens: "milk", packName: "1 kg bag", packGrams: 1000, packCostCents: 1150 },
   { key: "honey", name: "Honey", kind: "sugar", waterPercent: "17", allergens: "", packName: "5 lb jar", packGrams: 2268, packCostCents: 2100 },
-  { key: "oats", name: "Rolled oats", kind: "inclusion", waterPercent: "10", allergens: "", packName: "25 lb bag", packGrams: 11340, packCostCents: 2300 },
+  // EU Regulation 1169/2011 Annex II point 1 lists oats among the cereals containing gluten.
+  { key: "oats", name: "Rolled oats", kind: "inclusion", waterPercent: "10", allergens: "gluten", packName: "25 lb bag", packGrams: 11340, packCostCents: 2300 },
+  { key: "sesame", name: "Toasted sesame seeds", kind: "inclusion", waterPercent: "2", allergens: "sesame", packName: "5 lb bag", packGrams: 2268, packCostCents: 1650 },
+  { key: "cinnamon", name: "Ground cinnamon", kind: "other", waterPercent: "10", allergens: "", packName: "1 lb tub", packGrams: 454, packCostCents: 980 },
 ] as const;
+
+/**
+ * The demo's components, grams per piece (invented; an egg wash of egg and milk is common practice, no published
+ * source): egg-washed rolls and buns, the sesame buns' toasted sesame over the wash, the honey-oat topping and the
+ * swirl loaf's cinnamon-sugar filling.
+ */
+const EGG_WASH = (egg: number, milk: number) => [
+  { kind: "wash", name: "Egg wash", ingredient: "egg", grams: egg, per: "piece", note: "Whisk egg and milk; brush just before baking." },
+  { kind: "wash", name: "Egg wash", ingredient: "milk", grams: milk, per: "piece", note: "" },
+] as const;
+const DEMO_COMPONENTS: Record<string, readonly { kind: ComponentKind; name: string; ingredient: string; grams: number; per: ComponentPer; note: string }[]> = {
+  rolls: EGG_WASH(1, 0.3),
+  sliders: EGG_WASH(0.8, 0.2),
+  brioche: EGG_WASH(1.2, 0.3),
+  sesame: [...EGG_WASH(1.2, 0.3), { kind: "topping", name: "Toasted sesame topping", ingredient: "sesame", grams: 2, per: "piece", note: "Sprinkle over the wet wash." }],
+  oat: [
+    { kind: "topping", name: "Honey-oat topping", ingredient: "honey", grams: 0.5, per: "piece", note: "Brush the honey on first." },
+    { kind: "topping", name: "Honey-oat topping", ingredient: "oats", grams: 1.5, per: "piece", note: "Press the oats on." },
+  ],
+  swirl: [
+    { kind: "filling", name: "Cinnamon-sugar filling", ingredient: "sugar", grams: 40, per: "piece", note: "Mix with the cinnamon; spread over the rolled-out dough." },
+    { kind: "filling", name: "Cinnamon-sugar filling", ingredient: "cinnamon", grams: 4, per: "piece", note: "" },
+  ],
+};
 
 const ROLL_STEPS: StepSpec[] = [
   { kind: "paste", minutes: 40 }, { kind: "mix", minutes: 15 }, { kind: "bulk", minutes: 60 }, { kind: "divide", minutes: 25 },
@@ -185,6 +221,10 @@ export async function seedDemo(ds: DataSource): Promise<{ created: number }> {
       if (!row) {
         row = await ingredients.save(ingredients.create(i));
         created++;
+      } else if (key === "oats" && row.allergens === "") {
+        // Demo data seeded before oats carried their gluten flag (EU 1169/2011 Annex II point 1).
+        await ingredients.update({ id: row.id }, { allergens: i.allergens });
+        created++;
       }
       ing[key] = row.id;
     }
@@ -199,6 +239,12 @@ export async function seedDemo(ds: DataSource): Promise<{ created: number }> {
         const p = await products.findOneByOrFail({ id: ids[key] });
         if (p.formulaId === null) await products.update({ id: p.id }, { formulaId: formula.id });
       }
+    }
+    const components = m.getRepository(ProductComponent);
+    for (const [key, rows] of Object.entries(DEMO_COMPONENTS)) {
+      if (await components.existsBy({ productId: ids[key] })) continue;
+      await components.insert(rows.map((c, i) => ({ productId: ids[key], sortOrder: i, kind: c.kind, name: c.name, ingredientId: ing[c.ingredient], grams: c.grams.toFixed(1), per: c.per, note: c.note })));
+      created++;
     }
 
     const lists = m.getRepository(PriceList);

@@ -29,7 +29,7 @@ afterAll(async () => {
 const product = {
   name: "Dinner rolls", description: "Soft rolls", saleUnit: "tray of 15 rolls", piecesPerUnit: 15, pieceGrams: 67,
   panName: "9×13 in pan", panLengthMm: 330, panWidthMm: 229, unitsPerPan: 1, priceCents: 1800, minQuantity: 1, maxQuantity: 40,
-  allergens: ["milk", "wheat", "gluten", "egg"], mayContain: "sesame",
+  allergens: ["milk", "wheat", "gluten", "egg"], mayContain: "sesame", boughtIn: true,
 };
 
 /** A real 1×1 PNG (PNG spec: signature, IHDR, IDAT, IEND with CRC-32 from zlib). */
@@ -87,6 +87,126 @@ describe("catalog", () => {
     expect(acct).toMatchObject({ routeWeekdays: "2,4", minimumOrderCents: 2500 });
     const dup = await t.http().post("/api/price-lists").set(auth(owner)).send({ name: "Dupes", kind: "fixed", items: [{ productId: id, priceCents: 1 }, { productId: id, priceCents: 2 }] });
     expect(dup.body.error.fields["items.1.productId"]).toMatch(/twice/);
+  });
+
+  describe("made from a formula, or bought in", () => {
+    let flourId: number;
+    let sesameId: number;
+    let eggId: number;
+    let formulaId: number;
+    beforeAll(async () => {
+      const ing = async (name: string, kind: string, allergens: string[]) =>
+        (await t.http().post("/api/ingredients").set(auth(owner)).send({ name, kind, waterPercent: 0, allergens, packName: "bag", packGrams: 1000 })).body.ingredient.id as number;
+      flourId = await ing("Catalog flour", "flour", ["gluten", "wheat"]);
+      sesameId = await ing("Catalog sesame", "inclusion", ["sesame"]);
+      eggId = await ing("Catalog egg", "egg", ["egg"]);
+      const f = await t.http().post("/api/formulas").set(auth(owner)).send({
+        name: "Catalog dough", lossPercent: 2, ddtC: 26, frictionC: 12, paste: null, lines: [{ ingredientId: flourId, percent: 100 }],
+        steps: [{ kind: "bake", minutes: 27, temperatureC: 177 }, { kind: "cool", minutes: 30 }],
+      });
+      expect(f.status).toBe(201);
+      formulaId = f.body.formula.id;
+    });
+    const { boughtIn: _b, allergens: _a, ...base } = product;
+
+    it("a new product on offer needs a formula or the explicit bought-in choice, not neither and not both", async () => {
+      const neither = await t.http().post("/api/products").set(auth(owner)).send({ ...base, name: "Unplanned bun" });
+      expect(neither.status).toBe(400);
+      expect(neither.body.error.fields.formulaId).toBe("Choose the formula it is baked from, or mark it bought in / not planned: otherwise buyers could order what production cannot plan.");
+      const both = await t.http().post("/api/products").set(auth(owner)).send({ ...base, name: "Both bun", formulaId, boughtIn: true });
+      expect(both.status).toBe(400);
+      expect(both.body.error.fields.boughtIn).toMatch(/not both/);
+      const archived = await t.http().post("/api/products").set(auth(owner)).send({ ...base, name: "Draft bun", active: false });
+      expect(archived.status).toBe(201); // not on offer: may wait for its formula
+      const restore = await t.http().patch(`/api/products/${archived.body.product.id}`).set(auth(owner)).send({ active: true });
+      expect(restore.status).toBe(400);
+      expect(restore.body.error.fields.formulaId).toMatch(/Choose the formula/);
+      const missing = await t.http().post("/api/products").set(auth(owner)).send({ ...base, name: "Ghost bun", formulaId: 999999 });
+      expect(missing.body.error.fields.formulaId).toBe("Choose an existing formula.");
+    });
+
+    let id: number;
+    it("components are saved with the product, returned on GET, and feed its declared allergens", async () => {
+      const res = await t.http().post("/api/products").set(auth(owner)).send({
+        ...base, name: "Sesame test bun", formulaId,
+        components: [
+          { kind: "wash", name: "Egg wash", ingredientId: eggId, grams: 1.2, per: "piece" },
+          { kind: "topping", name: "Sesame topping", ingredientId: sesameId, grams: 2, per: "piece", note: "Over the wash" },
+        ],
+      });
+      expect(res.status).toBe(201);
+      id = res.body.product.id;
+      const got = (await t.http().get(`/api/products/${id}`).set(auth(owner))).body.product;
+      expect(got.components).toEqual([
+        { kind: "wash", name: "Egg wash", ingredientId: eggId, ingredientName: "Catalog egg", grams: 1.2, per: "piece", note: "", allergens: ["egg"] },
+        { kind: "topping", name: "Sesame topping", ingredientId: sesameId, ingredientName: "Catalog sesame", grams: 2, per: "piece", note: "Over the wash", allergens: ["sesame"] },
+      ]);
+      expect(got.allergens).toEqual(["gluten", "wheat", "egg", "sesame"]);
+      expect(got.derivedAllergens).toEqual(["gluten", "wheat", "egg", "sesame"]);
+      expect(got.allergenSources).toEqual({ gluten: ["Catalog dough dough"], wheat: ["Catalog dough dough"], egg: ["Egg wash"], sesame: ["Sesame topping"] });
+      expect(got).toMatchObject({ formulaName: "Catalog dough", boughtIn: false, formulaBake: { bakeTempC: 177, bakeMinutes: 27, coolMinutes: 30 }, bake: { bakeTempC: 177, bakeMinutes: 27, coolMinutes: 30 } });
+    });
+
+    it("a patch without components keeps them; a patch with them replaces them; the product may add allergens", async () => {
+      const keep = await t.http().patch(`/api/products/${id}`).set(auth(owner)).send({ priceCents: 1900, mayContain: "tree_nuts", allergens: ["gluten", "wheat", "egg", "sesame", "mustard"] });
+      expect(keep.status).toBe(200);
+      expect(keep.body.product.components).toHaveLength(2);
+      expect(keep.body.product.allergens).toEqual(["gluten", "wheat", "egg", "mustard", "sesame"]);
+      expect(keep.body.product.addedAllergens).toEqual(["mustard"]);
+      expect(keep.body.product.allergenSources.mustard).toEqual(["Added by the bakery"]);
+      // Without the topping, sesame is no longer derived; the added mustard stays.
+      const replaced = await t.http().patch(`/api/products/${id}`).set(auth(owner)).send({ components: [{ kind: "wash", name: "Egg wash", ingredientId: eggId, grams: 1.5, per: "pan" }] });
+      expect(replaced.status).toBe(200);
+      expect(replaced.body.product.components).toEqual([expect.objectContaining({ ingredientId: eggId, grams: 1.5, per: "pan" })]);
+      expect(replaced.body.product.allergens).toEqual(["gluten", "wheat", "egg", "mustard"]);
+    });
+
+    it("refuses bad components with field messages", async () => {
+      const bad = await t.http().patch(`/api/products/${id}`).set(auth(owner)).send({
+        components: [
+          { kind: "sprinkle", ingredientId: eggId, grams: 1, per: "piece" },
+          { kind: "wash", ingredientId: eggId, grams: 0.05, per: "piece" },
+          { kind: "wash", ingredientId: eggId, grams: 1.25, per: "tray" },
+        ],
+      });
+      expect(bad.status).toBe(400);
+      expect(bad.body.error.fields).toMatchObject({
+        "components.0.kind": "Choose topping, wash, filling or garnish.",
+        "components.1.grams": "Weigh at least 0.1 g.",
+        "components.2.grams": "Use at most one decimal, e.g. 1.5 g.",
+        "components.2.per": "Choose per piece or per pan.",
+      });
+      const twice = await t.http().patch(`/api/products/${id}`).set(auth(owner)).send({
+        components: [
+          { kind: "topping", name: "Seeds", ingredientId: sesameId, grams: 2, per: "piece" },
+          { kind: "topping", name: "Seeds", ingredientId: sesameId, grams: 3, per: "piece" },
+        ],
+      });
+      expect(twice.body.error.fields).toEqual({ "components.1.ingredientId": "This ingredient is already in this component." });
+      const unknown = await t.http().patch(`/api/products/${id}`).set(auth(owner)).send({ components: [{ kind: "wash", ingredientId: 999999, grams: 1, per: "piece" }] });
+      expect(unknown.status).toBe(400);
+      expect(unknown.body.error.fields["components.0.ingredientId"]).toBe("Choose an ingredient from the library.");
+      const boughtIn = await t.http().post("/api/products").set(auth(owner)).send({ ...base, name: "Bought bun", boughtIn: true, components: [{ kind: "wash", ingredientId: eggId, grams: 1, per: "piece" }], bakeMinutes: 20 });
+      expect(boughtIn.status).toBe(400);
+      expect(boughtIn.body.error.fields.components).toMatch(/bought-in product has no components/);
+      expect(boughtIn.body.error.fields.bakeMinutes).toMatch(/not baked here/);
+    });
+
+    it("the product's own bake temperature and minutes override the formula's, one value at a time", async () => {
+      const res = await t.http().patch(`/api/products/${id}`).set(auth(owner)).send({ bakeMinutes: 16, coolMinutes: 90 });
+      expect(res.status).toBe(200);
+      expect(res.body.product).toMatchObject({ bakeTempC: null, bakeMinutes: 16, coolMinutes: 90, bake: { bakeTempC: 177, bakeMinutes: 16, coolMinutes: 90 } });
+      const bad = await t.http().patch(`/api/products/${id}`).set(auth(owner)).send({ bakeTempC: 500, bakeMinutes: 0, coolMinutes: 2000 });
+      expect(bad.body.error.fields).toMatchObject({ bakeTempC: "Bake temperature can be at most 300.", bakeMinutes: "Bake time must be at least 1.", coolMinutes: "Cooling time can be at most 1440." });
+      const back = await t.http().patch(`/api/products/${id}`).set(auth(owner)).send({ bakeMinutes: null });
+      expect(back.body.product.bake.bakeMinutes).toBe(27);
+    });
+
+    it("switching a product to bought in keeps its own declaration only", async () => {
+      const res = await t.http().patch(`/api/products/${id}`).set(auth(owner)).send({ formulaId: null, boughtIn: true, components: [], coolMinutes: null, allergens: ["gluten", "wheat"] });
+      expect(res.status).toBe(200);
+      expect(res.body.product).toMatchObject({ boughtIn: true, formulaId: null, allergens: ["gluten", "wheat"], derivedAllergens: [], components: [], formulaBake: null });
+    });
   });
 
   it("archiving hides a product from buyers but not from the owner", async () => {
