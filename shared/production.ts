@@ -1,9 +1,8 @@
 /**
  * Production arithmetic: pans, doughs in baker's percentages, the cooked paste, mixes sized for the mixer,
- * liquid temperatures from the desired dough temperature, and a timeline scheduled back from dispatch.
+ * liquid temperatures from the desired dough temperature. The day's schedule is shared/schedule.ts.
  * Pure functions: the server and the screens use the same ones.
  */
-import { DateTime } from "luxon";
 
 export const INGREDIENT_KINDS = ["flour", "liquid", "fat", "sugar", "salt", "leavening", "egg", "inclusion", "other"] as const;
 export type IngredientKind = (typeof INGREDIENT_KINDS)[number];
@@ -300,94 +299,4 @@ export function planDough(
     ingredients: lines.map(({ exact: _exact, ...rest }) => rest),
     mixes,
   };
-}
-
-// ---- timeline --------------------------------------------------------------------------------
-
-export interface TimelineEntry {
-  step: StepKind;
-  label: string;
-  wave: number;
-  formulaId: number;
-  productIds: number[];
-  pans: number;
-  startsAt: string;
-  endsAt: string;
-  temperatureC: number | null;
-}
-
-export interface Wave {
-  wave: number;
-  formulaId: number;
-  pans: { productId: number; pans: number }[];
-}
-
-/** Fill oven loads (ovens × pans per load) with each formula's pans in turn; a load never mixes doughs. */
-export function bakeWaves(products: PlannedProduct[], formulaOrder: number[], capacityPans: number): Wave[] {
-  const waves: Wave[] = [];
-  for (const formulaId of formulaOrder) {
-    let current: Wave | null = null;
-    let room = 0;
-    for (const p of products.filter((x) => x.formulaId === formulaId && x.pans > 0)) {
-      let left = p.pans;
-      while (left > 0) {
-        if (!current || room === 0) {
-          current = { wave: waves.length + 1, formulaId, pans: [] };
-          waves.push(current);
-          room = capacityPans;
-        }
-        const take = Math.min(room, left);
-        const entry = current.pans.find((e) => e.productId === p.productId);
-        if (entry) entry.pans += take;
-        else current.pans.push({ productId: p.productId, pans: take });
-        room -= take;
-        left -= take;
-      }
-    }
-  }
-  return waves;
-}
-
-/**
- * Schedule backwards from dispatch: the last wave's cooling ends at dispatch; each earlier wave's bake
- * ends when the next one goes in. Before each bake, the formula's steps run back to back in reverse
- * order (wash, proof, shape, bench, divide, bulk, knead, rest, mix, paste). Times in the bakery's zone.
- */
-export function scheduleTimeline(waves: Wave[], formulas: Map<number, FormulaSpec>, dispatch: DateTime): TimelineEntry[] {
-  const out: TimelineEntry[] = [];
-  let ovenFreeUntil = dispatch;
-  for (let i = waves.length - 1; i >= 0; i--) {
-    const w = waves[i];
-    const f = formulas.get(w.formulaId)!;
-    const steps = f.steps.filter((s) => s.minutes > 0);
-    const bakeIdx = steps.findIndex((s) => s.kind === "bake");
-    const after = bakeIdx >= 0 ? steps.slice(bakeIdx + 1) : [];
-    const before = bakeIdx >= 0 ? steps.slice(0, bakeIdx) : steps;
-    const bake = bakeIdx >= 0 ? steps[bakeIdx] : null;
-    const afterMinutes = sum(after.map((s) => s.minutes));
-    // The last wave cools by dispatch; earlier waves must leave the oven before the next load goes in.
-    const bakeEnd = i === waves.length - 1 ? dispatch.minus({ minutes: afterMinutes }) : ovenFreeUntil;
-    const productIds = w.pans.map((p) => p.productId);
-    const pans = sum(w.pans.map((p) => p.pans));
-    const push = (s: StepSpec, start: DateTime, end: DateTime) =>
-      out.push({ step: s.kind, label: STEP_LABELS[s.kind], wave: w.wave, formulaId: w.formulaId, productIds, pans, startsAt: start.toISO()!, endsAt: end.toISO()!, temperatureC: s.temperatureC ?? null });
-    let cursor = bakeEnd;
-    if (bake) {
-      const start = bakeEnd.minus({ minutes: bake.minutes });
-      push(bake, start, bakeEnd);
-      cursor = start;
-      ovenFreeUntil = start;
-    }
-    let afterCursor = bakeEnd;
-    for (const s of after) {
-      push(s, afterCursor, afterCursor.plus({ minutes: s.minutes }));
-      afterCursor = afterCursor.plus({ minutes: s.minutes });
-    }
-    for (const s of [...before].reverse()) {
-      const start = cursor.minus({ minutes: s.minutes });
-      push(s, start, cursor);
-      cursor = start;
-    }
-  }
-  return out.sort((a, b) => (a.startsAt < b.startsAt ? -1 : a.startsAt > b.startsAt ? 1 : a.wave - b.wave));
 }

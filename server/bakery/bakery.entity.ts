@@ -39,19 +39,9 @@ export class Bakery {
   @Column({ type: "int", default: 28 })
   horizonDays: number;
 
-  /** Production: the mixer's dough capacity per batch, in kg. */
-  @Column({ type: "decimal", precision: 6, scale: 2, default: 20 })
-  mixerCapacityKg: string;
-
-  /** Local time the bread leaves, "HH:mm". */
+  /** Local time the bread leaves, "HH:mm". Mixers, ovens and the crew are production settings (server/production). */
   @Column({ type: "char", length: 5, default: "06:30" })
   dispatchTime: string;
-
-  @Column({ type: "int", default: 1 })
-  ovens: number;
-
-  @Column({ type: "int", default: 6 })
-  pansPerLoad: number;
 
   /** Sales tax in basis points (875 = 8.75 %). */
   @Column({ type: "int", default: 0 })

@@ -9,7 +9,7 @@ import { PriceList, PriceListItem } from "../catalog/price-list.entity";
 import { ProductComponent } from "../catalog/product-component.entity";
 import { IdempotencyRecord, Order, OrderLine } from "../orders/order.entity";
 import { StandingOrder, StandingOrderLine } from "../orders/standing-order.entity";
-import { BakeDay, Formula, FormulaVersion, Ingredient } from "../production/production.entity";
+import { BakeDay, BakehouseMixer, BakehouseOven, Formula, FormulaVersion, Ingredient, ProductionSettings } from "../production/production.entity";
 import { OutboxMail } from "../mail/outbox.entity";
 import { CheckoutSessionRecord, CreditNote, DeliveryAdjustment, Invoice, InvoiceLine, NumberCounter, Payment, PayoutReconciliation, Refund, StripeEventRecord, StripeSyncState, TaxCertificate } from "../billing/billing.entity";
 
@@ -17,6 +17,6 @@ import { CheckoutSessionRecord, CreditNote, DeliveryAdjustment, Invoice, Invoice
 export const entities = [
   Bakery, BakeryClosure, CustomerAccount, User, AuthToken, AuthRateCounter,
   Product, ProductComponent, PriceList, PriceListItem, Order, OrderLine, IdempotencyRecord, StandingOrder, StandingOrderLine,
-  Ingredient, Formula, FormulaVersion, BakeDay, OutboxMail,
+  Ingredient, Formula, FormulaVersion, BakeDay, ProductionSettings, BakehouseMixer, BakehouseOven, OutboxMail,
   NumberCounter, Invoice, InvoiceLine, Payment, CreditNote, Refund, CheckoutSessionRecord, StripeEventRecord, StripeSyncState, PayoutReconciliation, TaxCertificate, DeliveryAdjustment,
 ];

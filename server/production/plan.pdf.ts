@@ -2,7 +2,6 @@ import PDFDocument from "pdfkit";
 import { DateTime } from "luxon";
 import type { PlanDto } from "../../shared/schemas/production";
 import { formatMass, formatTemperature, type UnitSystem } from "../../shared/units";
-import { STEP_LABELS } from "../../shared/production";
 import { PRODUCTION_CAUTIONS } from "../../shared/cautions";
 
 const INK = "#2A211B";
@@ -52,7 +51,7 @@ export function renderPlanPdf(plan: PlanDto & { bakeryName: string; timeZone: st
   doc.font("Helvetica-Bold").fontSize(24).fillColor(INK).text(`Bake day: ${day}`);
   doc.font("Helvetica").fontSize(11).fillColor(MUTED)
     .text(`Leaves at ${time(plan.inputs.dispatchAt)} · ${plan.frozen ? `frozen ${plan.frozenAt ? DateTime.fromISO(plan.frozenAt).setZone(plan.timeZone).toFormat("ccc d LLL HH:mm") : ""}` : "not frozen yet"} · ${plan.final ? "final" : "NOT FINAL: orders may still change until the cut-off"}`)
-    .text(`Room ${t(plan.inputs.roomC)} · flour ${t(plan.inputs.flourC)} · paste ${t(plan.inputs.pasteC)} · mixer ${plan.inputs.mixerCapacityKg} kg · oven load ${plan.inputs.ovenCapacityPans} pans`)
+    .text(`Room ${t(plan.inputs.roomC)} · flour ${t(plan.inputs.flourC)} · paste ${t(plan.inputs.pasteC)} · mixer ${plan.inputs.mixerCapacityKg} kg · packing ${plan.inputs.packingMinutes} min from ${time(plan.inputs.packFrom)}`)
     .fillColor(INK);
 
   heading("Pans", 18);
@@ -85,13 +84,16 @@ export function renderPlanPdf(plan: PlanDto & { bakeryName: string; timeZone: st
 
   ensure(120);
   heading("Timeline", 15);
-  const tw = [70, 70, 50, 342];
-  row(["Starts", "Ends", "Wave", "Step"], tw, { bold: true, left: [1, 2, 3] });
+  const tw = [64, 64, 104, 300];
+  if (plan.schedule?.earlierStart) doc.font("Helvetica-Bold").fontSize(11).fillColor("#A3261B").text(plan.schedule.earlierStart.text, { width }).fillColor(INK);
+  row(["Starts", "Ends", "Where", "Step"], tw, { bold: true, left: [1, 2, 3] });
   rule();
   for (const e of plan.timeline) {
     ensure(16);
     const names = plan.products.filter((p) => e.productIds.includes(p.productId)).map((p) => p.name).join(", ");
-    row([time(e.startsAt), time(e.endsAt), String(e.wave), `${STEP_LABELS[e.step]}${e.temperatureC ? ` at ${t(e.temperatureC)}` : ""} — ${e.pans} pans: ${names}`], tw, { left: [1, 2, 3] });
+    const where = e.resource?.name ?? "—";
+    const of = [e.mix ? `mix ${e.mix}` : "", e.load ? `oven load ${e.load}` : ""].filter(Boolean).join(", ");
+    row([time(e.startsAt), time(e.endsAt), where, `${e.label}${e.temperatureC ? ` at ${t(e.temperatureC)}` : ""}${of ? ` (${of})` : ""} — ${e.pans === 1 ? "1 pan" : `${e.pans} pans`}: ${names}`], tw, { left: [1, 2, 3] });
   }
 
   ensure(140);

@@ -10,7 +10,9 @@ import { formulaSpec, ingredientInfo, ingredientLibrary } from "./formulas.servi
 import { cutoffFor, localToday, addDays } from "../../shared/calendar";
 import { expandRule } from "../../shared/recurrence";
 import { Ingredient } from "./production.entity";
-import { bakeWaves, planDough, planProduct, roundGrams, scheduleTimeline, type FormulaSpec, type PlannedProduct } from "../../shared/production";
+import { planDough, planProduct, roundGrams, type FormulaSpec, type PlannedProduct } from "../../shared/production";
+import { scheduleDay } from "../../shared/schedule";
+import { loadProductionSettings, resourcesOf } from "./settings.service";
 import type { PlanDto } from "../../shared/schemas/production";
 import { componentCards, componentTotals, resolveBake } from "../../shared/components";
 import { componentLine, productMakeup } from "../catalog/components.service";
@@ -112,7 +114,9 @@ export async function computePlan(ctx: AppContext, date: string, opts: { version
     (id) => lib.get(id)?.name ?? "?",
   );
   const temps = { roomC: Number(day.roomC), flourC: Number(day.flourC), pasteC: Number(day.pasteC) };
-  const mixerCapacityKg = Number(bakery.mixerCapacityKg);
+  // Doughs are split to fit the largest mixer; the schedule puts each mix on a mixer that holds it.
+  const production = await loadProductionSettings(ctx, m);
+  const mixerCapacityKg = Math.max(...production.mixers.map((x) => x.capacityKg));
   const doughs = formulaIds.map((id) => {
     const f = formulas.get(id)!;
     return { ...planDough(f, info, planned.filter((p) => p.formulaId === id), mixerCapacityKg, temps), targetInternalC: f.targetInternalC };
@@ -123,11 +127,34 @@ export async function computePlan(ctx: AppContext, date: string, opts: { version
   for (const d of doughs) for (const i of d.ingredients) totals.set(i.ingredientId, (totals.get(i.ingredientId) ?? 0) + i.grams);
   const fromComponents = componentTotals(cards);
   for (const [id, g] of fromComponents) totals.set(id, (totals.get(id) ?? 0) + g);
-  const [h, min] = bakery.dispatchTime.split(":").map(Number);
-  const dispatch = DateTime.fromISO(date, { zone: bakery.timeZone }).set({ hour: h, minute: min });
-  const capacity = bakery.ovens * bakery.pansPerLoad;
-  const waves = bakeWaves(planned.filter((p) => p.formulaId), formulaIds, capacity);
-  const timeline = scheduleTimeline(waves, formulas, dispatch);
+  // One schedule for the day: every mix on a mixer, dividing and shaping on the crew, oven loads, back from dispatch.
+  const retard = new Map(production.retard.map((r) => [r.formulaId, r.hours]));
+  const { entries: timeline, warnings: scheduleWarnings, ...schedule } = scheduleDay({
+    date,
+    timeZone: bakery.timeZone,
+    dispatchTime: production.dispatchTime,
+    resources: resourcesOf(production),
+    formulas: formulaIds.map((id) => ({ id, name: formulas.get(id)!.name, steps: formulas.get(id)!.steps, retardHours: retard.get(id) ?? null })),
+    products: planned.filter((p) => p.formulaId).map((p) => {
+      const own = byProduct.get(p.productId)!;
+      return {
+        productId: p.productId, name: p.name, formulaId: p.formulaId, pans: p.pans, pieces: p.pieces, pieceGrams: p.pieceGrams, panLengthMm: own.panLengthMm, panWidthMm: own.panWidthMm,
+        bakeTempC: p.bakeTempC ?? null, bakeMinutes: p.bakeMinutes ?? null, coolMinutes: p.coolMinutes ?? null,
+      };
+    }),
+    mixes: doughs.flatMap((d) => d.mixes.map((x) => ({ formulaId: d.formulaId, index: x.index, doughGrams: x.doughGrams }))),
+  });
+  if (!production.shiftStart) schedule.conflicts = schedule.conflicts.filter((c) => c.kind !== "shift_start");
+  if (!production.shiftStart) schedule.earlierStart = null;
+  for (const c of schedule.conflicts) warnings.push(c.message);
+  warnings.push(...scheduleWarnings);
+  const scheduledMix = new Map(schedule.mixes.map((x) => [`${x.formulaId}:${x.index}`, x]));
+  for (const d of doughs) {
+    d.mixes = d.mixes.map((x) => {
+      const s = scheduledMix.get(`${d.formulaId}:${x.index}`);
+      return { ...x, scheduled: s ? { startsAt: s.startsAt, endsAt: s.endsAt, mixerName: s.mixerName, pasteStartsAt: s.pasteStartsAt, dayBefore: s.dayBefore } : null };
+    });
+  }
   const cutoff = cutoffFor(date, settings);
   const now = ctx.clock.now();
   return {
@@ -137,7 +164,7 @@ export async function computePlan(ctx: AppContext, date: string, opts: { version
     frozenAt: null,
     computedAt: DateTime.fromJSDate(now, { zone: bakery.timeZone }).toISO()!,
     cutoffAt: cutoff.toISO()!,
-    inputs: { ...temps, mixerCapacityKg, dispatchAt: dispatch.toISO()!, ovenCapacityPans: capacity },
+    inputs: { ...temps, mixerCapacityKg, dispatchAt: schedule.dispatchAt, packingMinutes: production.packingMinutes, packFrom: schedule.packFrom, crewPeople: production.crew.people, shiftStartAt: production.shiftStart ? schedule.shiftStartsAt : null },
     products: planned.map((p) => ({
       productId: p.productId, name: p.name, units: p.units, extraPans: p.extraPans, pans: p.pans, pieces: p.pieces, pieceGrams: p.pieceGrams, formulaId: p.formulaId, panName: p.panName, openUnits: p.openUnits,
       bakeTempC: p.bakeTempC ?? null, bakeMinutes: p.bakeMinutes ?? null, coolMinutes: p.coolMinutes ?? null,
@@ -149,6 +176,7 @@ export async function computePlan(ctx: AppContext, date: string, opts: { version
       .sort((a, b) => b.grams - a.grams),
     components: cards,
     timeline,
+    schedule,
     warnings,
     progress: JSON.parse(day.progress),
   };

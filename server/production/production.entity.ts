@@ -111,3 +111,101 @@ export class BakeDay {
   @UpdateDateColumn({ type: "datetime", precision: 3, default: () => "CURRENT_TIMESTAMP(3)", onUpdate: "CURRENT_TIMESTAMP(3)" })
   updatedAt: Date;
 }
+
+/**
+ * The bakehouse's production settings (one row, id 1): the crew and its person-minutes for dividing and
+ * shaping, packing time before dispatch, when the shift starts, and which doughs are retarded overnight.
+ * Without a row the defaults in server/production/settings.service.ts apply.
+ */
+@Entity({ name: "production_settings" })
+export class ProductionSettings {
+  @PrimaryColumn({ type: "int" })
+  id: number;
+
+  /** People on the shift who divide and shape. */
+  @Column({ type: "int" })
+  crewPeople: number;
+
+  /** Person-minutes per piece to divide and round. */
+  @Column({ type: "decimal", precision: 6, scale: 3 })
+  divideMinutesPerPiece: string;
+
+  /** Person-minutes per piece to shape. */
+  @Column({ type: "decimal", precision: 6, scale: 3 })
+  shapeMinutesPerPiece: string;
+
+  /** Person-minutes per pan to fill and set it out. */
+  @Column({ type: "decimal", precision: 6, scale: 3 })
+  panMinutesPerPan: string;
+
+  /** Minutes to pack and load before dispatch. */
+  @Column({ type: "int" })
+  packingMinutes: number;
+
+  /** "03:00" bakery time, the last such time before dispatch; null = no shift start to check against. */
+  @Column({ type: "char", length: 5, nullable: true })
+  shiftStart: string | null;
+
+  /** JSON [{ formulaId, hours }]: doughs retarded overnight and for how long. */
+  @Column({ type: "text" })
+  retard: string;
+
+  @UpdateDateColumn({ type: "datetime", precision: 3, default: () => "CURRENT_TIMESTAMP(3)", onUpdate: "CURRENT_TIMESTAMP(3)" })
+  updatedAt: Date;
+}
+
+/** A mixer: one mix at a time, up to its capacity of dough. */
+@Entity({ name: "bakehouse_mixer" })
+export class BakehouseMixer {
+  @PrimaryGeneratedColumn({ type: "int" })
+  id: number;
+
+  @Column({ type: "varchar", length: 60 })
+  name: string;
+
+  @Column({ type: "decimal", precision: 6, scale: 2 })
+  capacityKg: string;
+
+  @Column({ type: "int", default: 0 })
+  sortOrder: number;
+}
+
+/** An oven: one load at a time, by usable shelf area or by named pan slots; time to change temperature, load and unload. */
+@Entity({ name: "bakehouse_oven" })
+export class BakehouseOven {
+  @PrimaryGeneratedColumn({ type: "int" })
+  id: number;
+
+  @Column({ type: "varchar", length: 60 })
+  name: string;
+
+  /** "area" or "slots". */
+  @Column({ type: "varchar", length: 8 })
+  capacityKind: "area" | "slots";
+
+  /** Usable shelf area per load, cm² (area ovens). */
+  @Column({ type: "int", nullable: true })
+  areaCm2: number | null;
+
+  /** JSON array of slot names (slot ovens; "[]" for area ovens). */
+  @Column({ type: "text" })
+  slotNames: string;
+
+  @Column({ type: "int", nullable: true })
+  slotLengthMm: number | null;
+
+  @Column({ type: "int", nullable: true })
+  slotWidthMm: number | null;
+
+  @Column({ type: "int" })
+  tempChangeMinutes: number;
+
+  @Column({ type: "int" })
+  loadMinutes: number;
+
+  @Column({ type: "int" })
+  unloadMinutes: number;
+
+  @Column({ type: "int", default: 0 })
+  sortOrder: number;
+}

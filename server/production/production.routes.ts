@@ -4,12 +4,12 @@ import type { AppContext } from "../http/context";
 import { parse } from "../http/errors";
 import { allow, currentUser } from "../http/auth";
 import { idSchema } from "../../shared/schemas/common";
-import { bakeDayInputSchema, planQuerySchema } from "../../shared/schemas/production";
+import { bakeDayInputSchema, planQuerySchema, productionSettingsSchema } from "../../shared/schemas/production";
 import { dateSchema } from "../../shared/schemas/calendar";
 import { getBakery } from "../bakery/bakery.service";
-import { Bakery } from "../bakery/bakery.entity";
 import * as formulas from "./formulas.service";
 import * as plans from "./plan.service";
+import * as productionSettings from "./settings.service";
 import { renderPlanPdf } from "./plan.pdf";
 
 const idParam = z.object({ id: idSchema });
@@ -56,24 +56,15 @@ export function formulaRoutes(ctx: AppContext): Router {
   return r;
 }
 
-const productionSettingsSchema = z.object({
-  mixerCapacityKg: z.coerce.number({ invalid_type_error: "Enter the mixer's capacity in kg." }).min(1, "At least 1 kg.").max(500, "At most 500 kg."),
-  dispatchTime: z.string().regex(/^([01]\d|2[0-3]):[0-5]\d$/, "Use a 24-hour time such as 06:30."),
-  ovens: z.coerce.number().int("Whole ovens.").min(1, "At least 1 oven.").max(20),
-  pansPerLoad: z.coerce.number().int("Whole pans.").min(1, "At least 1 pan.").max(100),
-});
-
 export function productionRoutes(ctx: AppContext): Router {
   const r = Router();
+  // Mixers, ovens, crew, packing, shift start, dispatch and overnight retard: the bakehouse the schedule plans for.
   r.get("/settings", allow(...KITCHEN), async (_req, res) => {
-    const b = await getBakery(ctx);
-    res.json({ settings: { mixerCapacityKg: Number(b.mixerCapacityKg), dispatchTime: b.dispatchTime, ovens: b.ovens, pansPerLoad: b.pansPerLoad } });
+    res.json({ settings: await productionSettings.loadProductionSettings(ctx) });
   });
   r.put("/settings", allow("owner"), async (req, res) => {
     const input = parse(productionSettingsSchema, req.body);
-    const b = await getBakery(ctx);
-    await ctx.dataSource.getRepository(Bakery).update({ id: b.id }, { ...input, mixerCapacityKg: String(input.mixerCapacityKg) });
-    res.json({ settings: input });
+    res.json({ settings: await productionSettings.saveProductionSettings(ctx, input) });
   });
   r.get("/next-day", allow(...KITCHEN), async (_req, res) => {
     res.json({ date: await plans.nextBakeDay(ctx) });

@@ -10,7 +10,7 @@ import { BakeryClosure } from "../calendar/closure.entity";
 import { StandingOrder, StandingOrderLine } from "../orders/standing-order.entity";
 import { weeklyRule } from "../../shared/recurrence";
 import type { Weekday } from "../../shared/calendar";
-import { Formula, FormulaVersion, Ingredient } from "../production/production.entity";
+import { BakehouseMixer, BakehouseOven, Formula, FormulaVersion, Ingredient, ProductionSettings } from "../production/production.entity";
 import type { StepSpec } from "../../shared/production";
 import { ProductComponent } from "../catalog/product-component.entity";
 import type { ComponentKind, ComponentPer } from "../../shared/components";
@@ -144,7 +144,7 @@ const DEMO_COMPONENTS: Record<string, readonly { kind: ComponentKind; name: stri
 const ROLL_STEPS: StepSpec[] = [
   { kind: "paste", minutes: 40 }, { kind: "mix", minutes: 15 }, { kind: "bulk", minutes: 60 }, { kind: "divide", minutes: 25 },
   { kind: "bench", minutes: 10 }, { kind: "shape", minutes: 25 }, { kind: "proof", minutes: 50 }, { kind: "wash", minutes: 5 },
-  { kind: "bake", minutes: 27, temperatureC: 177 }, { kind: "cool", minutes: 30 },
+  { kind: "bake", minutes: 27, temperatureC: 177 }, { kind: "cool", minutes: 60 },
 ];
 const DEMO_FORMULAS: { name: string; products: string[]; body: (id: Record<string, number>) => object }[] = [
   {
@@ -169,9 +169,24 @@ const DEMO_FORMULAS: { name: string; products: string[]; body: (id: Record<strin
       lines: [{ ingredientId: id.flour, percent: 100 }, { ingredientId: id.egg, percent: 45 }, { ingredientId: id.milk, percent: 12 }, { ingredientId: id.butter, percent: 40 },
         { ingredientId: id.sugar, percent: 12 }, { ingredientId: id.salt, percent: 2 }, { ingredientId: id.yeast, percent: 1.5 }],
       steps: [{ kind: "mix", minutes: 20 }, { kind: "bulk", minutes: 75 }, { kind: "divide", minutes: 20 }, { kind: "bench", minutes: 10 }, { kind: "shape", minutes: 25 },
-        { kind: "proof", minutes: 70 }, { kind: "wash", minutes: 5 }, { kind: "bake", minutes: 16, temperatureC: 190 }, { kind: "cool", minutes: 30 }] }),
+        { kind: "proof", minutes: 70 }, { kind: "wash", minutes: 5 }, { kind: "bake", minutes: 16, temperatureC: 190 }, { kind: "cool", minutes: 60 }] }),
   },
 ];
+
+/**
+ * The demo bakehouse (invented): a 20 kg spiral mixer and a 60-qt planetary; a three-deck oven (about two half
+ * sheets a deck: 9,100 cm² usable) and a five-shelf convection oven (one half sheet per shelf); three people on
+ * a shift that starts at 23:30 the evening before; 45 min to pack and load. Person-minutes from memory (common
+ * practice, no source): about 9 s to divide and round a roll, 12 s to shape it, 30 s to fill and set out a pan.
+ */
+export const DEMO_BAKEHOUSE = {
+  settings: { crewPeople: 3, divideMinutesPerPiece: "0.15", shapeMinutesPerPiece: "0.2", panMinutesPerPan: "0.5", packingMinutes: 45, shiftStart: "23:30", retard: "[]" },
+  mixers: [{ name: "Spiral mixer", capacityKg: "20", sortOrder: 0 }, { name: "60-qt planetary", capacityKg: "12", sortOrder: 1 }],
+  ovens: [
+    { name: "Deck oven", capacityKind: "area" as const, areaCm2: 9100, slotNames: "[]", slotLengthMm: null, slotWidthMm: null, tempChangeMinutes: 20, loadMinutes: 3, unloadMinutes: 3, sortOrder: 0 },
+    { name: "Convection oven", capacityKind: "slots" as const, areaCm2: null, slotNames: JSON.stringify(["Shelf 1", "Shelf 2", "Shelf 3", "Shelf 4", "Shelf 5"]), slotLengthMm: 460, slotWidthMm: 335, tempChangeMinutes: 10, loadMinutes: 2, unloadMinutes: 2, sortOrder: 1 },
+  ],
+};
 
 /** Idempotent: running it again changes nothing that is already there. */
 export async function seedDemo(ds: DataSource): Promise<{ created: number }> {
@@ -271,6 +286,13 @@ export async function seedDemo(ds: DataSource): Promise<{ created: number }> {
     for (const [name, settings] of Object.entries(accountSettings)) {
       const a = await accounts.findOneByOrFail({ businessName: name });
       if (a.routeWeekdays === null && a.minimumOrderCents === 0) await accounts.update({ id: a.id }, settings);
+    }
+
+    if (!(await m.getRepository(ProductionSettings).existsBy({ id: 1 }))) {
+      await m.getRepository(ProductionSettings).insert({ id: 1, ...DEMO_BAKEHOUSE.settings });
+      if (!(await m.getRepository(BakehouseMixer).count())) await m.getRepository(BakehouseMixer).insert(DEMO_BAKEHOUSE.mixers);
+      if (!(await m.getRepository(BakehouseOven).count())) await m.getRepository(BakehouseOven).insert(DEMO_BAKEHOUSE.ovens);
+      created++;
     }
 
     const closures = m.getRepository(BakeryClosure);

@@ -1,6 +1,7 @@
 import { z } from "zod";
 import { ALLERGEN_CODES, type AllergenCode } from "../allergens";
-import { INGREDIENT_KINDS, STEP_KINDS, type FormulaFigures, type IngredientKind, type StepKind, type TimelineEntry } from "../production";
+import { INGREDIENT_KINDS, STEP_KINDS, type FormulaFigures, type IngredientKind, type StepKind } from "../production";
+import { RETARD_HOURS, type DaySchedule, type OvenSpec, type ScheduleEntry } from "../schedule";
 import { dateSchema } from "./calendar";
 import type { ComponentCard } from "../components";
 
@@ -83,7 +84,8 @@ export interface PlanDto {
   frozenAt: string | null;
   computedAt: string;
   cutoffAt: string;
-  inputs: { roomC: number; flourC: number; pasteC: number; mixerCapacityKg: number; dispatchAt: string; ovenCapacityPans: number };
+  /** mixerCapacityKg: the largest mixer (doughs are split to fit it); packFrom: dispatch less the packing time. */
+  inputs: { roomC: number; flourC: number; pasteC: number; mixerCapacityKg: number; dispatchAt: string; packingMinutes: number; packFrom: string; crewPeople: number; shiftStartAt: string | null };
   products: {
     productId: number; name: string; units: number; extraPans: number; pans: number; pieces: number; pieceGrams: number; formulaId: number | null; panName: string; openUnits: number;
     /** Resolved per product (its own value, else its formula's bake/cool step; shared/components.ts resolveBake). Optional in plans frozen before they existed. */
@@ -95,15 +97,84 @@ export interface PlanDto {
     formulaId: number; name: string; formulaVersion: number; doughGrams: number; flourGrams: number; targetInternalC: number | null;
     paste: { flourGrams: number; liquidGrams: number; cookToC: number } | null;
     ingredients: { ingredientId: number; name: string; kind: IngredientKind; percent: number; grams: number; pasteGrams: number; finalMixGrams: number }[];
-    mixes: { index: number; doughGrams: number; liquidTempC: number | null; liquidTempAdvice: string | null; ingredients: { ingredientId: number; grams: number; pasteGrams: number; finalMixGrams: number }[] }[];
+    mixes: {
+      index: number; doughGrams: number; liquidTempC: number | null; liquidTempAdvice: string | null; ingredients: { ingredientId: number; grams: number; pasteGrams: number; finalMixGrams: number }[];
+      /** When and on which mixer this card is mixed (shared/schedule.ts); absent in plans frozen before the schedule. */
+      scheduled?: { startsAt: string; endsAt: string; mixerName: string; pasteStartsAt: string | null; dayBefore: boolean } | null;
+    }[];
   }[];
   /** Dough and components together; `componentGrams` is the part weighed for components. */
   ingredients: { ingredientId: number; name: string; grams: number; componentGrams?: number }[];
   /** One weigh-out card per component per product (toppings, washes, fillings, garnishes). */
   components?: ComponentCard[];
-  timeline: TimelineEntry[];
+  /** Every step of the day on its mixer, oven or the crew (shared/schedule.ts), in time order. */
+  timeline: ScheduleEntry[];
+  /** The schedule around the timeline: oven loads, conflicts with the day, the earlier start that would fit. */
+  schedule?: Omit<DaySchedule, "entries" | "warnings">;
   warnings: string[];
   progress: { mixes: string[]; waves: number[] };
+}
+
+// ---- production settings: the bakehouse's resources ----------------------------------------------
+
+const hhmm = z.string().trim().regex(/^([01]\d|2[0-3]):[0-5]\d$/, "Use a 24-hour time such as 06:30.");
+const whole = (label: string, min: number, max: number) =>
+  z.coerce.number({ invalid_type_error: `${label}: enter a whole number.` }).int(`${label}: whole numbers only.`).min(min, `${label}: at least ${min}.`).max(max, `${label}: at most ${max}.`);
+
+const ovenCapacitySchema = z.discriminatedUnion("kind", [
+  z.object({ kind: z.literal("area"), areaCm2: whole("Usable shelf area (cm²)", 100, 1_000_000) }),
+  z.object({
+    kind: z.literal("slots"),
+    slots: z.array(z.string().trim().min(1, "Name every slot.").max(30, "Slot names: at most 30 characters.")).min(1, "Name at least one pan slot.").max(200, "At most 200 slots."),
+    slotLengthMm: whole("Slot length (mm)", 50, 3000),
+    slotWidthMm: whole("Slot width (mm)", 50, 3000),
+  }),
+], { errorMap: () => ({ message: "Choose shelf area or pan slots." }) });
+
+/**
+ * PUT /api/production/settings (the owner's settings screen checks with the same schema). Retard hours are
+ * limited to the usual window (common practice, no source: shaped rolls at about 2–4 °C for 8–16 h).
+ */
+export const productionSettingsSchema = z.object({
+  dispatchTime: hhmm,
+  shiftStart: hhmm.nullable().default(null),
+  packingMinutes: whole("Packing and loading minutes", 0, 240),
+  mixers: z.array(z.object({
+    name: z.string().trim().min(1, "Name the mixer.").max(60, "Use at most 60 characters."),
+    capacityKg: num("Mixer capacity (kg)", 1, 500),
+  })).min(1, "Add at least one mixer.").max(10, "At most 10 mixers."),
+  ovens: z.array(z.object({
+    name: z.string().trim().min(1, "Name the oven.").max(60, "Use at most 60 characters."),
+    capacity: ovenCapacitySchema,
+    tempChangeMinutes: whole("Minutes to change temperature", 0, 240),
+    loadMinutes: whole("Minutes to load", 0, 60),
+    unloadMinutes: whole("Minutes to unload", 0, 60),
+  })).min(1, "Add at least one oven.").max(20, "At most 20 ovens."),
+  crew: z.object({
+    people: whole("People on the shift", 1, 50),
+    divideMinutesPerPiece: num("Dividing (person-minutes per piece)", 0, 10),
+    shapeMinutesPerPiece: num("Shaping (person-minutes per piece)", 0, 10),
+    panMinutesPerPan: num("Panning (person-minutes per pan)", 0, 30),
+  }),
+  retard: z.array(z.object({
+    formulaId: z.number().int().positive(),
+    hours: num("Hours in the retarder", RETARD_HOURS.min, RETARD_HOURS.max),
+  })).max(50).default([])
+    .refine((r) => new Set(r.map((x) => x.formulaId)).size === r.length, "Each dough once."),
+});
+export type ProductionSettingsInput = z.output<typeof productionSettingsSchema>;
+
+export interface ProductionSettingsDto {
+  /** "06:30", bakery time: when the vans leave. */
+  dispatchTime: string;
+  /** "03:00", bakery time, or null: when the shift starts (the plan says when a day does not fit it). */
+  shiftStart: string | null;
+  packingMinutes: number;
+  mixers: { id: number; name: string; capacityKg: number }[];
+  ovens: OvenSpec[];
+  crew: { people: number; divideMinutesPerPiece: number; shapeMinutesPerPiece: number; panMinutesPerPan: number };
+  /** Doughs retarded overnight: mixed and shaped the day before, baked from the retarder. */
+  retard: { formulaId: number; hours: number }[];
 }
 
 export { dateSchema };

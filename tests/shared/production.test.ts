@@ -1,6 +1,5 @@
-import { DateTime } from "luxon";
 import {
-  apportion, bakeWaves, formulaFigures, liquidTemperature, planDough, planProduct, roundGrams, scheduleTimeline, validateFormula,
+  apportion, formulaFigures, liquidTemperature, planDough, planProduct, roundGrams, validateFormula,
   type FormulaSpec, type IngredientInfo,
 } from "../../shared/production";
 import { GRAMS_PER_OUNCE, GRAMS_PER_POUND, celsiusToFahrenheit, fahrenheitToCelsius, formatMass, gramsToOunces, mmToInches } from "../../shared/units";
@@ -149,23 +148,6 @@ describe("trade facts (common practice, no source)", () => {
     expect(f.hydrationPercent).toBe(60);
     expect(f.pasteSharePercent).toBe(5);
     expect(f.pastePercent).toBeCloseTo(30, 6); // 5 % flour + 25 % milk
-  });
-
-  it("schedules bake waves back from a 06:30 dispatch, possibly from the evening before", () => {
-    const product = planProduct({ productId: 1, name: "Dinner rolls", units: 10, extraPans: 0, unitsPerPan: 1, piecesPerUnit: 15, pieceGrams: 67, formulaId: 7 });
-    const waves = bakeWaves([product], [7], 6); // one oven of 6 pans: 6 + 4 pans
-    expect(waves.map((w) => w.pans[0].pans)).toEqual([6, 4]);
-    const dispatch = DateTime.fromISO("2026-06-11T06:30", { zone: "America/Chicago" });
-    const tl = scheduleTimeline(waves, new Map([[7, rolls]]), dispatch);
-    const at = (step: string, wave: number) => tl.find((e) => e.step === step && e.wave === wave)!;
-    expect(at("cool", 2).endsAt).toBe("2026-06-11T06:30:00.000-05:00");
-    expect(at("bake", 2).startsAt).toBe("2026-06-11T05:33:00.000-05:00"); // 06:30 − 30 − 27
-    expect(at("bake", 1).endsAt).toBe(at("bake", 2).startsAt);
-    expect(at("bake", 1).startsAt).toBe("2026-06-11T05:06:00.000-05:00");
-    expect(at("paste", 1).startsAt).toBe("2026-06-11T01:26:00.000-05:00"); // 05:06 − 220 min of steps before the bake
-    expect(at("bake", 1).temperatureC).toBe(177);
-    const early = scheduleTimeline(waves, new Map([[7, { ...rolls, steps: rolls.steps.map((s) => (s.kind === "bulk" ? { ...s, minutes: 12 * 60 } : s)) }]]), dispatch);
-    expect(early.find((e) => e.step === "paste")!.startsAt.slice(0, 10)).toBe("2026-06-10"); // the evening before
   });
 });
 
