@@ -210,7 +210,7 @@ export interface DaySchedule {
   /** Packing starts here: every step ends by then. */
   packFrom: string;
   shiftStartsAt: string;
-  /** The first same-day step (not counting a retarded dough's work the day before); null without steps. */
+  /** The first same-day step (not counting a retarded dough's work the day before, nor its night in the retarder); null without steps. */
   startsAt: string | null;
   /** Things worth knowing that are not conflicts (a retard past 16 h, a dough with no bake step). */
   warnings: string[];
@@ -853,7 +853,8 @@ export function scheduleDay(input: ScheduleInput): DaySchedule {
   entries.sort((a, b) => a._start - b._start || a._seq - b._seq);
 
   // ---- E. does the day fit the shift? ----------------------------------------------------------
-  const sameDay = entries.filter((e) => !e.dayBefore);
+  // The retard itself runs overnight from the day before: the day's own work starts after it.
+  const sameDay = entries.filter((e) => !e.dayBefore && e.step !== "retard");
   const first = sameDay.length ? sameDay.reduce((a, b) => (b._start < a._start ? b : a)) : null;
   let earlierStart: DaySchedule["earlierStart"] = null;
   if (first && first._start < shiftStart) {
