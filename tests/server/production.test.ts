@@ -1,6 +1,11 @@
 import { startTestApp, makeAccount, makeBakery, makeProduct, makeUser, tokenFor, auth, type TestApp } from "./helpers/app";
 import { Order, OrderLine } from "../../server/orders/order.entity";
 import { ALLERGENS } from "../../shared/allergens";
+import { Product } from "../../server/catalog/product.entity";
+import { seedDemo } from "../../server/seed/demo";
+import { seedHistory } from "../../server/seed/history";
+import { materialiseAll } from "../../server/orders/standing.service";
+import { scheduleProblems } from "../shared/schedule-checks";
 
 /** Clock: Wed 10 Jun 2026 10:00 CDT. Thu 11 Jun's cut-off: Wed 14:00 CDT. */
 const NOW = "2026-06-10T15:00:00Z";
@@ -152,20 +157,33 @@ describe("the plan for a bake day", () => {
     expect(plan.doughs[0].mixes).toHaveLength(1); // default mixer 20 kg
     expect(plan.doughs[0].mixes[0].liquidTempC).toBe(16);
     expect(plan.ingredients.find((i: { name: string }) => i.name === "Bread flour").grams).toBe(5830);
+    // Without bakehouse settings: one 20 kg mixer, one oven of six pan slots, 30 min packing (settings.service defaults).
     const bake = plan.timeline.filter((e: { step: string }) => e.step === "bake");
-    expect(bake).toHaveLength(2); // 11 pans, one oven of 6
-    expect(plan.timeline.at(-1)).toMatchObject({ step: "cool", endsAt: "2026-06-11T06:30:00.000-05:00" });
+    expect(bake).toHaveLength(2); // 11 pans, one oven of 6 slots
+    expect(plan.schedule.ovenLoads.map((l: { pans: number }) => l.pans).sort()).toEqual([5, 6]);
+    // Every step ends by dispatch less the packing time; the last cooling ends exactly then.
+    expect(plan.inputs).toMatchObject({ dispatchAt: "2026-06-11T06:30:00.000-05:00", packingMinutes: 30, packFrom: "2026-06-11T06:00:00.000-05:00" });
+    const last = Math.max(...plan.timeline.map((e: { endsAt: string }) => Date.parse(e.endsAt)));
+    expect(last).toBe(Date.parse("2026-06-11T06:00:00.000-05:00"));
+    // The weigh-out card carries its own time on the timeline.
+    const mixStep = plan.timeline.find((e: { step: string }) => e.step === "mix");
+    expect(plan.doughs[0].mixes[0].scheduled).toMatchObject({ startsAt: mixStep.startsAt, endsAt: mixStep.endsAt, mixerName: "Mixer" });
   });
 
   it("splits the dough into equal mixes when the mixer is smaller", async () => {
-    await t.http().put("/api/production/settings").set(auth(owner)).send({ mixerCapacityKg: 5, dispatchTime: "06:30", ovens: 1, pansPerLoad: 6 });
+    const before = (await t.http().get("/api/production/settings").set(auth(owner))).body.settings;
+    expect((await t.http().put("/api/production/settings").set(auth(owner)).send({ ...before, mixers: [{ name: "Small spiral", capacityKg: 5 }] })).status).toBe(200);
     const plan = (await t.http().get(`/api/production/plan?date=${THU}`).set(auth(baker))).body.plan;
     expect(plan.doughs[0].mixes).toHaveLength(3); // 11,281 g ÷ 5 kg
     for (const i of plan.doughs[0].ingredients) {
       const sum = plan.doughs[0].mixes.reduce((s: number, m: { ingredients: { ingredientId: number; grams: number }[] }) => s + m.ingredients.find((x) => x.ingredientId === i.ingredientId)!.grams, 0);
       expect(Math.round(sum * 10) / 10).toBe(i.grams);
     }
-    await t.http().put("/api/production/settings").set(auth(owner)).send({ mixerCapacityKg: 20, dispatchTime: "06:30", ovens: 1, pansPerLoad: 6 });
+    // One mixer: the three mixes follow each other, each its own mix step.
+    const mixSteps = plan.timeline.filter((e: { step: string }) => e.step === "mix").sort((a: { startsAt: string }, b: { startsAt: string }) => Date.parse(a.startsAt) - Date.parse(b.startsAt));
+    expect(mixSteps.map((e: { mix: number }) => e.mix).sort()).toEqual([1, 2, 3]);
+    for (let k = 1; k < mixSteps.length; k++) expect(Date.parse(mixSteps[k].startsAt)).toBeGreaterThanOrEqual(Date.parse(mixSteps[k - 1].endsAt));
+    await t.http().put("/api/production/settings").set(auth(owner)).send({ ...before, mixers: [{ name: "Mixer", capacityKg: 20 }] });
   });
 
   it("freezes at the cut-off: a formula edit never silently changes it; recalculating on purpose shows what changed", async () => {
@@ -217,5 +235,152 @@ describe("the plan for a bake day", () => {
   it("is for the kitchen only", async () => {
     expect((await t.http().get(`/api/production/plan?date=${THU}`).set(auth(buyer))).status).toBe(403);
     expect((await t.http().get("/api/production/plan?date=2026-02-30").set(auth(baker))).status).toBe(400);
+  });
+});
+
+describe("bakehouse settings", () => {
+  const valid = () => ({
+    dispatchTime: "06:30", shiftStart: "02:00", packingMinutes: 40,
+    mixers: [{ name: "Spiral mixer", capacityKg: 20 }, { name: "Planetary", capacityKg: 12.5 }],
+    ovens: [
+      { name: "Deck oven", capacity: { kind: "area", areaCm2: 9100 }, tempChangeMinutes: 20, loadMinutes: 3, unloadMinutes: 3 },
+      { name: "Convection oven", capacity: { kind: "slots", slots: ["Shelf 1", "Shelf 2", "Shelf 3"], slotLengthMm: 460, slotWidthMm: 335 }, tempChangeMinutes: 10, loadMinutes: 2, unloadMinutes: 2 },
+    ],
+    crew: { people: 3, divideMinutesPerPiece: 0.15, shapeMinutesPerPiece: 0.2, panMinutesPerPan: 0.5 },
+    retard: [] as { formulaId: number; hours: number }[],
+  });
+
+  it("saves mixers, ovens by area or named slots, the crew, packing, shift start and retard, and answers them back", async () => {
+    const res = await t.http().put("/api/production/settings").set(auth(owner)).send({ ...valid(), retard: [{ formulaId, hours: 12 }] });
+    expect(res.status).toBe(200);
+    const got = (await t.http().get("/api/production/settings").set(auth(baker))).body.settings;
+    expect(got).toMatchObject({ ...valid(), retard: [{ formulaId, hours: 12 }] });
+    expect(got.mixers.map((m: { id: number }) => typeof m.id)).toEqual(["number", "number"]);
+    expect((await t.http().put("/api/production/settings").set(auth(baker)).send(valid())).status).toBe(403);
+  });
+
+  it("refuses settings that cannot work, with a message at each field", async () => {
+    const bad = valid();
+    const res = await t.http().put("/api/production/settings").set(auth(owner)).send({
+      ...bad, shiftStart: "2:00", packingMinutes: -5, mixers: [{ name: "", capacityKg: 0 }],
+      ovens: [{ ...bad.ovens[1], capacity: { kind: "slots", slots: [], slotLengthMm: 10, slotWidthMm: 335 } }],
+      crew: { ...bad.crew, people: 0 }, retard: [{ formulaId, hours: 30 }],
+    });
+    expect(res.status).toBe(400);
+    expect(res.body.error.fields).toMatchObject({
+      shiftStart: "Use a 24-hour time such as 06:30.",
+      packingMinutes: "Packing and loading minutes: at least 0.",
+      "mixers.0.name": "Name the mixer.",
+      "mixers.0.capacityKg": "Mixer capacity (kg) must be at least 1.",
+      "ovens.0.capacity.slots": "Name at least one pan slot.",
+      "ovens.0.capacity.slotLengthMm": "Slot length (mm): at least 50.",
+      "crew.people": "People on the shift: at least 1.",
+      "retard.0.hours": "Hours in the retarder can be at most 16.",
+    });
+    expect((await t.http().put("/api/production/settings").set(auth(owner)).send({ ...valid(), mixers: [] })).body.error.fields.mixers).toBe("Add at least one mixer.");
+    const unknown = await t.http().put("/api/production/settings").set(auth(owner)).send({ ...valid(), retard: [{ formulaId: 99999, hours: 12 }] });
+    expect(unknown.status).toBe(400);
+    expect(unknown.body.error.fields.retard).toBe("Choose doughs from the formulas.");
+  });
+
+  it("plans with them: a retarded dough is mixed and shaped the day before; a late shift start is a conflict with an earlier start", async () => {
+    await t.http().put("/api/production/settings").set(auth(owner)).send({ ...valid(), retard: [{ formulaId, hours: 12 }] });
+    // Thursday's plan is frozen by now (the cut-off test above): recalculate it on purpose with the new settings.
+    const retarded = (await t.http().post(`/api/production/plan/recalculate?date=${THU}`).set(auth(baker))).body.plan;
+    expect(retarded.timeline.find((e: { step: string }) => e.step === "retard")).toBeTruthy();
+    expect(retarded.timeline.filter((e: { step: string; dayBefore: boolean }) => e.step === "mix").every((e: { dayBefore: boolean }) => e.dayBefore)).toBe(true);
+    expect(retarded.doughs[0].mixes[0].scheduled.dayBefore).toBe(true);
+
+    await t.http().put("/api/production/settings").set(auth(owner)).send({ ...valid(), shiftStart: "04:30" });
+    const late = (await t.http().post(`/api/production/plan/recalculate?date=${THU}`).set(auth(baker))).body.plan;
+    const first = Math.min(...late.timeline.map((e: { startsAt: string }) => Date.parse(e.startsAt)));
+    const short = (Date.parse("2026-06-11T04:30:00.000-05:00") - first) / 60_000;
+    expect(short).toBeGreaterThan(0);
+    expect(late.schedule.conflicts[0]).toMatchObject({ kind: "shift_start", minutes: short });
+    expect(late.schedule.earlierStart.minutes).toBe(short);
+    expect(Date.parse(late.schedule.earlierStart.startsAt)).toBe(first);
+    expect(late.schedule.earlierStart.text).toMatch(/^Start (\d+ h )?(\d+ min )?earlier, at \d\d:\d\d\.$/);
+    expect(late.warnings).toContain(late.schedule.conflicts[0].message);
+    expect(late.inputs.shiftStartAt).toBe("2026-06-11T04:30:00.000-05:00");
+
+    // Back to the defaults' shape for anything after.
+    await t.http().put("/api/production/settings").set(auth(owner)).send({ ...valid(), shiftStart: null, mixers: [{ name: "Mixer", capacityKg: 20 }] });
+  });
+});
+
+describe("the seeded demo over its horizon", () => {
+  /** Tue 1 Dec 2026, 12:00 CST: the demo's standing orders run from 2 Nov; the horizon is 28 days. */
+  let d: TestApp;
+  let token: string;
+  beforeAll(async () => {
+    d = await startTestApp({ now: "2026-12-01T18:00:00Z" });
+    await seedDemo(d.ds);
+    await seedHistory(d.ctx);
+    await materialiseAll(d.ctx);
+    token = await tokenFor(d, await makeUser(d.ds, "owner"));
+  });
+  afterAll(() => d.close());
+
+  const demoDates = async () => {
+    const rows: { deliveryDate: string }[] = await d.ds.query("SELECT DISTINCT deliveryDate FROM customer_order WHERE deliveryDate >= '2026-12-01' AND deliveryDate <= '2026-12-29' AND status IN ('open','locked','delivered') ORDER BY deliveryDate");
+    return rows.map((r) => r.deliveryDate);
+  };
+
+  it("every demo date: no overlaps on a mixer, an oven or the crew; one mix step per card; loads fit; all done before packing", async () => {
+    const settings = (await d.http().get("/api/production/settings").set(auth(token))).body.settings;
+    expect(settings).toMatchObject({ shiftStart: "23:30", packingMinutes: 45, crew: { people: 3 } });
+    const products = await d.ds.getRepository(Product).find();
+    const dates = await demoDates();
+    expect(dates.length).toBeGreaterThanOrEqual(15);
+    let loads = 0;
+    for (const date of dates) {
+      const plan = (await d.http().get(`/api/production/plan?date=${date}`).set(auth(token))).body.plan;
+      const problems = scheduleProblems({
+        entries: plan.timeline, schedule: plan.schedule, ovens: settings.ovens, packingMinutes: settings.packingMinutes,
+        cards: plan.doughs.flatMap((x: { formulaId: number; mixes: { index: number }[] }) => x.mixes.map((m) => ({ formulaId: x.formulaId, index: m.index }))),
+        products: plan.products.map((p: { productId: number; pans: number; formulaId: number | null }) => {
+          const row = products.find((x) => x.id === p.productId)!;
+          return { productId: p.productId, pans: p.pans, formulaId: p.formulaId, panLengthMm: row.panLengthMm, panWidthMm: row.panWidthMm };
+        }),
+      });
+      expect({ date, problems }).toEqual({ date, problems: [] });
+      for (const x of plan.doughs) for (const m of x.mixes) expect(m.scheduled).toBeTruthy();
+      // The demo bakehouse's shift (23:30 the evening before) holds every demo day.
+      expect({ date, conflicts: plan.schedule.conflicts }).toEqual({ date, conflicts: [] });
+      loads += plan.schedule.ovenLoads.length;
+    }
+    expect(loads).toBeGreaterThan(dates.length);
+  });
+
+  it("bake and cool times of the demo products sit in the usual ranges (common practice, no source)", async () => {
+    // Small separate buns about 15–18 min; a 900 g lidded (Pullman) loaf 35–45 min; 1–2 h cooling before slicing
+    // or bagging. Pull-apart rolls baked touching in a 9×13 pan take longer than separate buns (from memory: about
+    // 20–30 min), and are held to that.
+    const seen = new Map<string, { bakeMinutes: number; coolMinutes: number; pieceGrams: number; panName: string }>();
+    for (const date of await demoDates()) {
+      const plan = (await d.http().get(`/api/production/plan?date=${date}`).set(auth(token))).body.plan;
+      for (const p of plan.products) seen.set(p.name, p);
+    }
+    expect(seen.size).toBe(7);
+    for (const [name, p] of seen) {
+      expect({ name, cool: p.coolMinutes >= 60 && p.coolMinutes <= 120 }).toEqual({ name, cool: true });
+      if (/buns/i.test(name)) expect({ name, bake: p.bakeMinutes >= 15 && p.bakeMinutes <= 18 }).toEqual({ name, bake: true });
+      else if (/Pullman/.test(p.panName) && p.pieceGrams >= 800) expect({ name, bake: p.bakeMinutes >= 35 && p.bakeMinutes <= 45 }).toEqual({ name, bake: true });
+      else expect({ name, bake: p.bakeMinutes >= 20 && p.bakeMinutes <= 30 }).toEqual({ name, bake: true });
+    }
+    expect(seen.get("Pullman milk loaf")).toMatchObject({ pieceGrams: 900 });
+  });
+
+  it("says what conflicts when the shift starts too late for the day", async () => {
+    const settings = (await d.http().get("/api/production/settings").set(auth(token))).body.settings;
+    await d.http().put("/api/production/settings").set(auth(token)).send({ ...settings, shiftStart: "03:30" });
+    const saturday = (await demoDates()).find((x) => new Date(`${x}T12:00:00Z`).getUTCDay() === 6)!;
+    const plan = (await d.http().get(`/api/production/plan?date=${saturday}`).set(auth(token))).body.plan;
+    const c = plan.schedule.conflicts[0];
+    expect(c).toMatchObject({ kind: "shift_start" });
+    expect(c.message).toMatch(/^The day does not fit the shift: .+ has to start at (Fri )?\d\d:\d\d, (\d+ h )?(\d+ min )?before the shift starts at 03:30/);
+    expect(c.message).toContain(plan.schedule.earlierStart.text);
+    expect(plan.schedule.earlierStart.minutes).toBe(c.minutes);
+    await d.http().put("/api/production/settings").set(auth(token)).send(settings);
   });
 });
