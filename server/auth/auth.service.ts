@@ -7,7 +7,7 @@ import { User } from "../users/user.entity";
 import { CustomerAccount } from "../accounts/account.entity";
 import { AuthToken } from "./auth-token.entity";
 import { RESET_TTL_MS, hashToken, newLinkToken } from "./tokens";
-import { hashPassword, needsRehash, verifyPassword } from "./password-hash";
+import { admitHashing, hashPassword, needsRehash, verifyPassword } from "./password-hash";
 import { assertNotCommonPassword } from "./password-policy";
 import { bump, countIn, giveBack, purgeCounters, takeSlots, type RateLimit, type Refusal } from "./rate-limit";
 import { getBakery } from "../bakery/bakery.service";
@@ -60,6 +60,21 @@ function tooManyAttempts(refusal: Refusal): HttpError {
 const sleep = (ms: number) => new Promise((r) => setTimeout(r, ms));
 
 export async function signIn(ctx: AppContext, email: string, password: string, ip: string): Promise<SignInResponse> {
+  // Admission first (a 503 when the hashing queue could not take this one), so a burst does no database work beyond
+  // what the hashing cap lets through. A request waiting out the slow-down gives its admission back meanwhile.
+  let release = admitHashing();
+  try {
+    return await signInAdmitted(ctx, email, password, ip, async (ms) => {
+      release();
+      await sleep(ms);
+      release = admitHashing();
+    });
+  } finally {
+    release();
+  }
+}
+
+async function signInAdmitted(ctx: AppContext, email: string, password: string, ip: string, wait: (ms: number) => Promise<void>): Promise<SignInResponse> {
   // A slot in both counters is taken before the password is looked at, atomically: under any concurrency at most
   // the limit of attempts is evaluated. A wrong password keeps its slot; anything else gives it back.
   const slots = [pairLimit(email, ip), addressLimit(ip)];
@@ -67,8 +82,8 @@ export async function signIn(ctx: AppContext, email: string, password: string, i
   if (refusal) throw tooManyAttempts(refusal);
   let keepSlots = false;
   try {
-    const wait = slowdownMs(await countIn(ctx, emailFailures(email)));
-    if (wait) await sleep(wait);
+    const delay = slowdownMs(await countIn(ctx, emailFailures(email)));
+    if (delay) await wait(delay);
     const users = ctx.dataSource.getRepository(User);
     const user = await users.findOneBy({ email });
     const ok = await verifyPassword(password, user?.passwordHash ?? null);

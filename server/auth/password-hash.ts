@@ -17,8 +17,8 @@ import { HttpError } from "../http/errors";
  * successful sign-in replaces them with scrypt (see needsRehash). bcrypt only ever looked at the first 72 bytes;
  * those hashes only verify, so nothing new is ever truncated (OWASP ASVS 4.0.3 V2.1.3: no truncation).
  *
- * At most HASH_CONCURRENCY hashes run at once (each scrypt takes 128 MiB and a core for ~0.5 s at N=2^17); up
- * to HASH_QUEUE_MAX more wait their turn; beyond that the request is answered 503 with Retry-After at once.
+ * Only a few hashes run at once (each scrypt takes 128 MiB and a core for ~0.5 s at N=2^17); a bounded number more
+ * wait their turn; beyond that the request is answered 503 with Retry-After at once (see hashingCapacity).
  */
 
 /** OWASP Password Storage Cheat Sheet, scrypt: N=2^17, r=8, p=1. */
@@ -53,10 +53,17 @@ const maxmemFor = ({ logN, r, p }: ScryptParams) => 2 * 128 * 2 ** logN * r * p;
 
 // ---- the cap on concurrent hashing ----
 
-/** Leave a core for the event loop: one hash at a time on this 2-core machine, up to 4 on bigger ones (common practice, no source). */
-export const HASH_CONCURRENCY = Math.max(1, Math.min(4, Number(process.env.HASH_CONCURRENCY) || (os.availableParallelism?.() ?? os.cpus().length) - 1));
-/** Requests allowed to wait for a hashing slot; a wait longer than ~8 s at production cost is not worth queueing (common practice, no source). */
-export const HASH_QUEUE_MAX = 16 * HASH_CONCURRENCY;
+/**
+ * How many hashes run at once: leave a core for the event loop — one at a time on this 2-core machine, up to 4 on
+ * bigger ones — unless HASH_CONCURRENCY says otherwise (common practice, no source). And how many may wait: 8 per
+ * slot, about 4–6 s at production cost; a longer wait is better answered at once with "try again in a few seconds"
+ * (common practice, no source). Read when the first hash is asked for.
+ */
+function hashingCapacity(): { concurrency: number; queue: number } {
+  const cores = os.availableParallelism?.() ?? os.cpus().length;
+  const concurrency = Math.max(1, Math.min(16, Number(process.env.HASH_CONCURRENCY) || Math.min(4, cores - 1)));
+  return { concurrency, queue: 8 * concurrency };
+}
 
 export class BoundedSemaphore {
   private active = 0;
@@ -98,7 +105,32 @@ export class BoundedSemaphore {
 const busy = () =>
   new HttpError(503, "busy", "Sign-in is very busy right now. Wait a few seconds and try again.", undefined, { retryAfterSeconds: 5 }, { "Retry-After": "5" });
 
-export const hashingSlots = new BoundedSemaphore(HASH_CONCURRENCY, HASH_QUEUE_MAX);
+let slots: BoundedSemaphore | null = null;
+/** The process's hashing slots (made on first use, from HASH_CONCURRENCY or the core count). */
+export function hashingSlots(): BoundedSemaphore {
+  if (!slots) {
+    const { concurrency, queue } = hashingCapacity();
+    slots = new BoundedSemaphore(concurrency, queue);
+  }
+  return slots;
+}
+
+/**
+ * Admission for whole requests that end in a hash (sign-in): at most as many at once as can hold or wait for a hashing
+ * slot. Later ones are turned away before any database work, so a burst costs the server and its connection pool
+ * next to nothing beyond what the hashing cap lets through.
+ */
+let admitted = 0;
+/** Take an admission, or throw the 503; call the returned function (once) when done. */
+export function admitHashing(): () => void {
+  if (admitted >= hashingSlots().max + hashingSlots().maxQueue) throw busy();
+  admitted++;
+  let released = false;
+  return () => {
+    if (!released) admitted--;
+    released = true;
+  };
+}
 
 // ---- scrypt ----
 
@@ -144,7 +176,7 @@ const BCRYPT_RE = /^\$2[aby]\$\d\d\$[./A-Za-z0-9]{53}$/;
 let pool: Piscina | null = null;
 function bcryptPool(): Piscina {
   // Idle workers are unref'd and leave after 30 s, so a test process is not kept alive by them.
-  pool ??= new Piscina({ filename: path.join(__dirname, "bcrypt-worker.js"), minThreads: 0, maxThreads: HASH_CONCURRENCY, idleTimeout: 30_000 });
+  pool ??= new Piscina({ filename: path.join(__dirname, "bcrypt-worker.js"), minThreads: 0, maxThreads: hashingSlots().max, idleTimeout: 30_000 });
   return pool;
 }
 
@@ -159,7 +191,7 @@ export async function closePasswordHashing(): Promise<void> {
 
 export async function hashPassword(password: string): Promise<string> {
   const params = currentScryptParams();
-  return hashingSlots.run(() => scryptHash(password, params));
+  return hashingSlots().run(() => scryptHash(password, params));
 }
 
 /** A stored hash to compare against when the e-mail is unknown, with today's parameters: the same work as a real one. */
@@ -168,7 +200,7 @@ function dummyHash(): Promise<string> {
   const params = currentScryptParams();
   const key = `${params.logN},${params.r},${params.p}`;
   if (!dummies.has(key)) {
-    const made = hashingSlots.run(() => scryptHash(crypto.randomBytes(18).toString("base64"), params));
+    const made = hashingSlots().run(() => scryptHash(crypto.randomBytes(18).toString("base64"), params));
     made.catch(() => dummies.delete(key));
     dummies.set(key, made);
   }
@@ -182,15 +214,15 @@ function dummyHash(): Promise<string> {
  */
 export async function verifyPassword(password: string, stored: string | null): Promise<boolean> {
   if (stored && BCRYPT_RE.test(stored)) {
-    return hashingSlots.run(async () => Boolean(await bcryptPool().run({ password, hash: stored })));
+    return hashingSlots().run(async () => Boolean(await bcryptPool().run({ password, hash: stored })));
   }
   const parsed = stored ? parseScrypt(stored) : null;
   if (!parsed) {
     const dummy = parseScrypt(await dummyHash())!;
-    await hashingSlots.run(() => scryptVerify(password, dummy));
+    await hashingSlots().run(() => scryptVerify(password, dummy));
     return false;
   }
-  return hashingSlots.run(() => scryptVerify(password, parsed));
+  return hashingSlots().run(() => scryptVerify(password, parsed));
 }
 
 /** A bcrypt-era hash, or scrypt with other parameters than today's: replace it after a successful sign-in. */

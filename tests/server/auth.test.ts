@@ -10,6 +10,8 @@ import { PASSWORD_COMMON, PASSWORD_PATTERN } from "../../shared/schemas/common";
 // The app reads TRUST_PROXY when it is built: with one proxy trusted, X-Forwarded-For sets the client address,
 // which is how the tests below sign in "from" different addresses (Express docs, "Express behind proxies").
 process.env.TRUST_PROXY = "1";
+// Three hashing slots (27 sign-ins admitted at once), so 20 concurrent attempts meet the rate limit, not the hashing cap.
+process.env.HASH_CONCURRENCY = "3";
 // Every password-reset answer takes at least 150 ms by design, and the slow-down waits on purpose.
 jest.setTimeout(60_000);
 
