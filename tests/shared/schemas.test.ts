@@ -1,7 +1,7 @@
 import { accountInputSchema } from "../../shared/schemas/accounts";
 import { invitationAcceptSchema, signInSchema } from "../../shared/schemas/auth";
 import { invitationCreateSchema } from "../../shared/schemas/users";
-import { fieldErrorsFrom, PASSWORD_MIN_LENGTH } from "../../shared/schemas/common";
+import { fieldErrorsFrom, isRepetitiveOrSequential, passwordLength, PASSWORD_MIN_LENGTH, PASSWORD_PATTERN } from "../../shared/schemas/common";
 import { homeAreaFor } from "../../shared/roles";
 
 describe("shared schemas (used by the server and the forms)", () => {
@@ -9,12 +9,27 @@ describe("shared schemas (used by the server and the forms)", () => {
     expect(signInSchema.parse({ email: "  Owner@Hollowbrook.TEST ", password: "x" }).email).toBe("owner@hollowbrook.test");
   });
 
-  it("requires passwords of at least 10 characters", () => {
-    expect(PASSWORD_MIN_LENGTH).toBe(10);
-    const r = invitationAcceptSchema.safeParse({ token: "abcdefghijkl", password: "123456789", name: "A" });
-    expect(r.success).toBe(false);
-    if (!r.success) expect(fieldErrorsFrom(r.error)).toEqual({ password: "Use at least 10 characters." });
-    expect(invitationAcceptSchema.safeParse({ token: "abcdefghijkl", password: "1234567890", name: "A" }).success).toBe(true);
+  it("follows OWASP ASVS 4.0.3 V2.1 for new passwords: 12 to 128 characters, runs of spaces count once, no repeats or runs", () => {
+    expect(PASSWORD_MIN_LENGTH).toBe(12); // V2.1.1
+    const passwordError = (password: string) => {
+      const r = invitationAcceptSchema.safeParse({ token: "abcdefghijkl", password, name: "A" });
+      return r.success ? null : fieldErrorsFrom(r.error).password ?? null;
+    };
+    expect(passwordError("12345678901")).toBe("Use at least 12 characters.");
+    expect(passwordError("aaaaaaaaaa")).toBe("Use at least 12 characters.");
+    expect(passwordError(" ".repeat(10))).toBe("Use at least 12 characters.");
+    expect(passwordError("rye  and  oat")).toBe("Use at least 12 characters."); // 13 typed, 11 once spaces are combined
+    expect(passwordError("aaaaaaaaaaaa")).toBe(PASSWORD_PATTERN); // NIST SP 800-63B §5.1.1.2
+    expect(passwordError("abababababab")).toBe(PASSWORD_PATTERN);
+    expect(passwordError("123456789012")).toBe(PASSWORD_PATTERN);
+    expect(passwordError("zyxwvutsrqpo")).toBe(PASSWORD_PATTERN);
+    expect(passwordError("x".repeat(129))).toBe("Use at most 128 characters."); // V2.1.2
+    expect(passwordError("rye and oats")).toBeNull();
+    expect(passwordError("panwise-demo")).toBeNull(); // the demo password
+    expect(passwordError("pão de queijo 🧀")).toBeNull(); // any Unicode (V2.1.4), no composition rules (V2.1.9)
+    expect(passwordError("q".repeat(64) + "r".repeat(64))).toBeNull();
+    expect(passwordLength("a  b   c")).toBe(5);
+    expect(isRepetitiveOrSequential("correct horse battery")).toBe(false);
   });
 
   it("ties buyers, and only buyers, to an account", () => {
