@@ -40,9 +40,11 @@ export function ordersRoutes(ctx: AppContext): Router {
   });
   r.post("/", allow(...ORDERING), async (req, res) => {
     const user = currentUser(req);
-    const result = await orders.withIdempotency(ctx, user.id, req.get("idempotency-key") || undefined, req.body, async () => {
+    const result = await orders.withIdempotency(ctx, user.id, req.get("idempotency-key") || undefined, req.body, async (save) => {
       const input = parse(orderCreateSchema, req.body);
-      return { status: 201, body: { order: await orders.createOrder(ctx, user, input) } };
+      // The stored answer is written in the order's own transaction: both are saved, or neither.
+      const order = await orders.createOrder(ctx, user, input, { inTransaction: save && ((m, dto) => save(m, 201, { order: dto })) });
+      return { status: 201, body: { order } };
     });
     if (result.replayed) res.set("Idempotent-Replayed", "true");
     res.status(result.status).json(result.body);

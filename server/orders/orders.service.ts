@@ -158,7 +158,7 @@ function refuseBelowMinimum(account: CustomerAccount, total: number, currency: s
 export interface CreateInput { deliveryDate: string; lines: LineInput[]; poNumber?: string; note?: string; accountId?: number }
 
 /** Place an order. Used by the API and by the standing-order job (source "standing"). */
-export async function createOrder(ctx: AppContext, actor: SessionUser | null, input: CreateInput, opts: { source?: "one_off" | "standing"; manager?: EntityManager; accountId?: number; skipMail?: boolean } = {}): Promise<OrderDto> {
+export async function createOrder(ctx: AppContext, actor: SessionUser | null, input: CreateInput, opts: { source?: "one_off" | "standing"; manager?: EntityManager; accountId?: number; skipMail?: boolean; inTransaction?: (m: EntityManager, order: OrderDto) => Promise<void> } = {}): Promise<OrderDto> {
   const bakery = await getBakery(ctx);
   const settings = await loadCalendarSettings(ctx);
   const run = async (m: EntityManager) => {
@@ -188,6 +188,7 @@ export async function createOrder(ctx: AppContext, actor: SessionUser | null, in
     await m.getRepository(OrderLine).insert(priced.map((l) => ({ ...l, orderId: order.id })));
     const dto = (await orderDtos(ctx, [order], m))[0];
     if (!opts.skipMail) await queueOrderMail(ctx, m, dto, "placed");
+    await opts.inTransaction?.(m, dto);
     return dto;
   };
   // READ COMMITTED: after waiting on the account lock, the check for an existing order must see what the other writer committed.
@@ -298,8 +299,14 @@ export async function lockPastCutoff(ctx: AppContext): Promise<number> {
  * first answer. A concurrent twin is serialised by the account lock, finds the order already there,
  * and then answers with the first request's stored result.
  */
-export async function withIdempotency(ctx: AppContext, userId: number, key: string | undefined, body: unknown, exec: () => Promise<{ status: number; body: unknown }>): Promise<{ status: number; body: unknown; replayed: boolean }> {
-  if (!key) return { ...(await exec()), replayed: false };
+/**
+ * Saves the stored answer of an idempotent request inside the write's own transaction, so a crash between
+ * the order's commit and the record can never answer "nothing was saved" for an order that was saved.
+ */
+export type SaveIdempotent = (m: EntityManager, status: number, body: unknown) => Promise<void>;
+
+export async function withIdempotency(ctx: AppContext, userId: number, key: string | undefined, body: unknown, exec: (save: SaveIdempotent | undefined) => Promise<{ status: number; body: unknown }>): Promise<{ status: number; body: unknown; replayed: boolean }> {
+  if (!key) return { ...(await exec(undefined)), replayed: false };
   if (key.length > 100) throw badRequest("The Idempotency-Key header is too long (at most 100 characters).");
   const requestHash = crypto.createHash("sha256").update(JSON.stringify(body ?? null)).digest("hex");
   const repo = ctx.dataSource.getRepository(IdempotencyRecord);
@@ -311,9 +318,14 @@ export async function withIdempotency(ctx: AppContext, userId: number, key: stri
   };
   const first = await stored();
   if (first) return first;
+  let savedInside = false;
+  const save: SaveIdempotent = async (m, status, answer) => {
+    await m.getRepository(IdempotencyRecord).insert({ userId, idemKey: key, requestHash, status, body: JSON.stringify(answer) });
+    savedInside = true;
+  };
   try {
-    const result = await exec();
-    if (result.status < 300) await repo.insert({ userId, idemKey: key, requestHash, status: result.status, body: JSON.stringify(result.body) });
+    const result = await exec(save);
+    if (result.status < 300 && !savedInside) await repo.insert({ userId, idemKey: key, requestHash, status: result.status, body: JSON.stringify(result.body) });
     return { ...result, replayed: false };
   } catch (err) {
     // A concurrent twin got there first: its order_exists means "already done" — answer as it did.
