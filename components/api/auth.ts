@@ -18,6 +18,8 @@ export interface InvitationPreview {
 export const authApi = {
   signIn: (body: { email: string; password: string }) => api<SignInResponse>("/api/auth/sign-in", { method: "POST", body, auth: false }),
   me: () => api<{ user: SessionUser }>("/api/auth/me"),
+  /** Ends the session on the server (every token of this user stops working). */
+  signOut: () => api<void>("/api/auth/sign-out", { method: "POST" }),
   requestPasswordReset: (body: { email: string }) => api<{ message: string }>("/api/auth/password-reset", { method: "POST", body, auth: false }),
   confirmPasswordReset: (body: { token: string; password: string }) =>
     api<SignInResponse>("/api/auth/password-reset/confirm", { method: "POST", body, auth: false }),

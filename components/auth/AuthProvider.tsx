@@ -13,13 +13,16 @@ export interface AuthContextValue {
   token: string | null;
   /** Keep a session the API handed out (sign-in, accepted invitation, reset password). */
   signIn: (session: { token: string; user: SessionUser }) => void;
-  /** Forget the session and everything fetched with it. */
-  signOut: () => void;
+  /** End the session on the server, then forget it and everything fetched with it (locally even if the server call fails). */
+  signOut: () => Promise<void>;
   /** Why the last session ended on its own (expired, turned off), for the sign-in screen. */
   endedMessage: string | null;
 }
 
 export const AuthContext = createContext<AuthContextValue | null>(null);
+
+/** How long sign-out waits for the server before forgetting the session anyway. */
+export const SIGN_OUT_TIMEOUT_MS = 5000;
 
 export function AuthProvider({ children }: { children: React.ReactNode }) {
   const queryClient = useQueryClient();
@@ -91,8 +94,23 @@ export function AuthProvider({ children }: { children: React.ReactNode }) {
     // eslint-disable-next-line react-hooks/exhaustive-deps
   }, []);
 
-  const signOutByChoice = useCallback(() => {
+  const signOutByChoice = useCallback(async () => {
     setEndedMessage(null);
+    const token = tokenRef.current;
+    // Quiet the 401 handler: a token that is already dead must not show "Your session ended".
+    tokenRef.current = null;
+    if (token) {
+      // Tell the server first, so the token stops working everywhere; give up after a few seconds when it cannot be
+      // reached — signing out on this device must never depend on the network.
+      let timer: ReturnType<typeof setTimeout> | undefined;
+      await Promise.race([
+        authApi.signOut().catch(() => undefined),
+        new Promise<void>((resolve) => {
+          timer = setTimeout(resolve, SIGN_OUT_TIMEOUT_MS);
+        }),
+      ]);
+      if (timer) clearTimeout(timer);
+    }
     signOut();
   }, [signOut]);
 

@@ -1,24 +1,46 @@
 import { fireEvent, screen } from "expo-router/testing-library";
 import { BUYER, account, apiError, mockApi, renderApp, sessionRoutes, waitForLabelGone } from "./helpers";
 import { readSession } from "../../components/auth/storage";
+import { PASSWORD_COMMON, PASSWORD_PATTERN } from "../../shared/schemas/common";
 
 const TOKEN = "tok_abcdefghijklmnop";
 
 describe("set-password: reset", () => {
-  it("asks for at least 10 characters and a matching confirmation before calling the API", async () => {
+  it("says the rules up front, and asks for 12 characters, no repeated runs and a matching confirmation before calling the API", async () => {
     const api = mockApi({});
     renderApp(`/set-password?kind=reset&token=${TOKEN}`);
-    fireEvent.changeText(await screen.findByLabelText("New password"), "short");
-    fireEvent.changeText(screen.getByLabelText("Confirm new password"), "short");
+    expect(
+      await screen.findByText("12 to 128 characters; spaces in a row count once. A few unrelated words work well; common passwords are refused."),
+    ).toBeOnTheScreen();
+    fireEvent.changeText(screen.getByLabelText("New password"), "1234567890");
+    fireEvent.changeText(screen.getByLabelText("Confirm new password"), "1234567890");
     fireEvent.press(screen.getByText("Save new password"));
-    expect(await screen.findByText("Use at least 10 characters.")).toBeOnTheScreen();
+    expect(await screen.findByText("Use at least 12 characters.")).toBeOnTheScreen();
+
+    fireEvent.changeText(screen.getByLabelText("New password"), "aaaaaaaaaaaa");
+    fireEvent.changeText(screen.getByLabelText("Confirm new password"), "aaaaaaaaaaaa");
+    fireEvent.press(screen.getByText("Save new password"));
+    expect(await screen.findByText(PASSWORD_PATTERN)).toBeOnTheScreen();
 
     fireEvent.changeText(screen.getByLabelText("New password"), "long enough password");
     fireEvent.changeText(screen.getByLabelText("Confirm new password"), "long enough passwort");
     fireEvent.press(screen.getByText("Save new password"));
     expect(await screen.findByText("The two passwords don't match.")).toBeOnTheScreen();
-    expect(screen.queryByText("Use at least 10 characters.")).toBeNull();
+    expect(screen.queryByText("Use at least 12 characters.")).toBeNull();
     expect(api.calls).toHaveLength(0);
+  });
+
+  it("shows the server's refusal of a common password on the password field", async () => {
+    const api = mockApi({
+      "POST /api/auth/password-reset/confirm": apiError(400, "validation_failed", PASSWORD_COMMON, { password: PASSWORD_COMMON }),
+    });
+    renderApp(`/set-password?kind=reset&token=${TOKEN}`);
+    fireEvent.changeText(await screen.findByLabelText("New password"), "password1234");
+    fireEvent.changeText(screen.getByLabelText("Confirm new password"), "password1234");
+    fireEvent.press(screen.getByText("Save new password"));
+    expect(await screen.findByText(PASSWORD_COMMON)).toBeOnTheScreen();
+    expect(api.callsTo("POST", "/api/auth/password-reset/confirm")).toHaveLength(1);
+    expect(readSession()).toBeNull();
   });
 
   it("shows a used link's error at the top", async () => {
@@ -71,7 +93,7 @@ describe("set-password: invitation", () => {
     fireEvent.changeText(screen.getByLabelText("Your name"), "Marisol Okafor");
     fireEvent.changeText(screen.getByLabelText("New password"), "1234");
     fireEvent.press(screen.getByText("Create my sign-in"));
-    expect(await screen.findByText("Use at least 10 characters.")).toBeOnTheScreen();
+    expect(await screen.findByText("Use at least 12 characters.")).toBeOnTheScreen();
 
     fireEvent.changeText(screen.getByLabelText("New password"), "croissant-dough-42");
     fireEvent.changeText(screen.getByLabelText("Confirm new password"), "croissant-dough-4");

@@ -14,7 +14,7 @@ import { useInvitationAcceptMutation, useInvitationPreviewQuery, usePasswordRese
 import { messageOf } from "../../api/client";
 import { splitError, validate } from "../../forms/errors";
 import { invitationAcceptSchema, passwordResetConfirmSchema, type SignInResponse } from "../../../shared/schemas/auth";
-import { PASSWORD_MIN_LENGTH } from "../../../shared/schemas/common";
+import { PASSWORD_MAX_LENGTH, PASSWORD_MIN_LENGTH } from "../../../shared/schemas/common";
 import { ROLE_LABELS } from "../../../shared/roles";
 import type { FieldErrors } from "../../../shared/errors";
 import { colors, radii, space } from "../../theme";
@@ -103,7 +103,7 @@ function PasswordFields({
       <TextField
         label="New password"
         accessibilityLabel="New password"
-        hint={`At least ${PASSWORD_MIN_LENGTH} characters. A few words together work well.`}
+        hint={`${PASSWORD_MIN_LENGTH} to ${PASSWORD_MAX_LENGTH} characters; spaces in a row count once. A few unrelated words work well; common passwords are refused.`}
         testID="set-password-password"
         value={pair.password}
         onChangeText={pair.setPassword}
