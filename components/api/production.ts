@@ -1,7 +1,8 @@
 import { Platform } from "react-native";
 import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
 import { api, apiBlob } from "./client";
-import type { PlanDto } from "../../shared/schemas/production";
+import type { z } from "zod";
+import type { PlanDto, ProductionSettingsDto, productionSettingsSchema } from "../../shared/schemas/production";
 import type { UnitSystem } from "../../shared/units";
 
 /** The plan as the API sends it: the stored or live plan, plus what a fresh calculation would change. */
@@ -17,18 +18,14 @@ export interface BakeDayInput {
 
 export interface ProgressInput {
   kind: "mix" | "wave";
-  /** "<formulaId>:<mixIndex>" for a mix, "<waveNumber>" for a wave. */
+  /** "<formulaId>:<mixIndex>" for a mix, "<loadNumber>" for an oven load (kind "wave", its stored name). */
   key: string;
   done: boolean;
 }
 
-export interface ProductionSettingsDto {
-  mixerCapacityKg: number;
-  /** "06:30", the bakery's local time. */
-  dispatchTime: string;
-  ovens: number;
-  pansPerLoad: number;
-}
+/** Mixers, ovens, crew, packing, shift start, dispatch and overnight retard (shared/schemas/production.ts). */
+export type { ProductionSettingsDto };
+export type ProductionSettingsBody = z.input<typeof productionSettingsSchema>;
 
 export interface ForecastDto {
   from: string;
@@ -59,7 +56,7 @@ export const productionApi = {
   pdf: (date: string, units: UnitSystem) => apiBlob("/api/production/plan.pdf", { date, units }),
   forecast: (from: string) => api<{ forecast: ForecastDto }>("/api/production/forecast", { query: { from } }).then((r) => r.forecast),
   settings: () => api<{ settings: ProductionSettingsDto }>("/api/production/settings").then((r) => r.settings),
-  saveSettings: (input: ProductionSettingsDto) => api<{ settings: ProductionSettingsDto }>("/api/production/settings", { method: "PUT", body: input }).then((r) => r.settings),
+  saveSettings: (input: ProductionSettingsBody) => api<{ settings: ProductionSettingsDto }>("/api/production/settings", { method: "PUT", body: input }).then((r) => r.settings),
 };
 
 /** The next bake day in the bakery's zone (the first delivery date whose dispatch is still ahead). */

@@ -3,7 +3,8 @@ import { PRODUCTION_CAUTIONS } from "../../shared/cautions";
 import { addDays, weekdayOf } from "../../shared/calendar";
 import type { CalendarSettingsDto } from "../../shared/schemas/calendar";
 import type { PlanView } from "../api/production";
-import { mixKey } from "../api/production";
+import { mixKey, type ProductionSettingsDto } from "../api/production";
+import type { Units } from "../../shared/units";
 
 export type TimelineEntry = PlanView["timeline"][number];
 export type Caution = (typeof PRODUCTION_CAUTIONS)[number];
@@ -27,9 +28,18 @@ export function cautionFor(step: string): Caution | undefined {
   return PRODUCTION_CAUTIONS.find((c) => c.step === step);
 }
 
-export interface WaveGroup {
-  wave: number;
-  formulaId: number;
+export type OvenLoadView = NonNullable<PlanView["schedule"]>["ovenLoads"][number];
+
+/** A block of the timeline: one weigh-out card's mix (paste to dividing), or one oven load (shaping to cooling). */
+export interface TimelineGroup {
+  key: string;
+  kind: "mix" | "load";
+  formulaId: number | null;
+  /** The card's mix number (mix groups). */
+  mix: number | null;
+  /** The oven load's number (load groups). */
+  load: number | null;
+  ovenLoad: OvenLoadView | null;
   pans: number;
   productIds: number[];
   startsAt: string;
@@ -37,24 +47,90 @@ export interface WaveGroup {
   entries: TimelineEntry[];
 }
 
-/** The timeline by oven wave, each wave's steps in time order, waves in number order. */
-export function groupByWave(timeline: TimelineEntry[]): WaveGroup[] {
-  const map = new Map<number, TimelineEntry[]>();
-  for (const e of timeline) map.set(e.wave, [...(map.get(e.wave) ?? []), e]);
-  return [...map.entries()]
-    .sort(([a], [b]) => a - b)
-    .map(([wave, entries]) => {
-      const sorted = [...entries].sort((a, b) => Date.parse(a.startsAt) - Date.parse(b.startsAt));
-      return {
-        wave,
-        formulaId: sorted[0].formulaId,
-        pans: sorted[0].pans,
-        productIds: sorted[0].productIds,
-        startsAt: sorted[0].startsAt,
-        endsAt: sorted.reduce((end, e) => (Date.parse(e.endsAt) > Date.parse(end) ? e.endsAt : end), sorted[0].endsAt),
-        entries: sorted,
+/** The oven load an entry belongs to (plans frozen before oven loads called it a wave). */
+const loadOf = (e: TimelineEntry): number | null => e.load ?? (e as { wave?: number }).wave ?? null;
+
+/**
+ * The timeline in blocks, in time order: each mix (its paste, mixing, bulk, dividing) and each oven load (the
+ * shaping and proof of its pans, any temperature change before it, the bake and cooling). The blocks grow
+ * with mixes and oven loads, never with pans.
+ */
+export function groupTimeline(plan: Pick<PlanView, "timeline"> & { schedule?: PlanView["schedule"] }): TimelineGroup[] {
+  const groups = new Map<string, TimelineGroup>();
+  for (const e of plan.timeline) {
+    const load = loadOf(e);
+    const key = load !== null ? `load-${load}` : `mix-${e.formulaId}-${e.mix ?? 0}`;
+    let g = groups.get(key);
+    if (!g) {
+      const ovenLoad = load !== null ? plan.schedule?.ovenLoads.find((l) => l.load === load) ?? null : null;
+      g = {
+        key, kind: load !== null ? "load" : "mix", formulaId: e.formulaId ?? null, mix: load !== null ? null : e.mix ?? null, load, ovenLoad,
+        pans: ovenLoad?.pans ?? e.pans, productIds: ovenLoad ? [...new Set(ovenLoad.items.map((i) => i.productId))] : e.productIds,
+        startsAt: e.startsAt, endsAt: e.endsAt, entries: [],
       };
-    });
+      groups.set(key, g);
+    }
+    g.entries.push(e);
+    if (g.kind === "load" && e.step === "bake") {
+      g.formulaId = e.formulaId ?? null;
+      if (!g.ovenLoad) { g.pans = e.pans; g.productIds = e.productIds; }
+    }
+  }
+  for (const g of groups.values()) {
+    g.entries.sort((a, b) => Date.parse(a.startsAt) - Date.parse(b.startsAt));
+    g.startsAt = g.entries[0].startsAt;
+    g.endsAt = g.entries.reduce((end, e) => (Date.parse(e.endsAt) > Date.parse(end) ? e.endsAt : end), g.entries[0].endsAt);
+  }
+  return [...groups.values()].sort((a, b) => Date.parse(a.startsAt) - Date.parse(b.startsAt) || (a.load ?? 0) - (b.load ?? 0));
+}
+
+/** A bar on a resource lane: a mixer's or the crew's step, or an oven's load or temperature change. */
+export interface LaneBar {
+  key: string;
+  startsAt: string;
+  endsAt: string;
+  label: string;
+  step: string;
+}
+
+/** Every mixer, the crew, every oven, with what occupies it when (the lanes of the wide timeline). */
+export function resourceLanes(plan: Pick<PlanView, "timeline"> & { schedule?: PlanView["schedule"] }): { kind: string; id: number; name: string; bars: LaneBar[] }[] {
+  if (!plan.schedule) return [];
+  return plan.schedule.resources.map((r) => {
+    const bars: LaneBar[] = [];
+    if (r.kind === "oven") {
+      for (const l of plan.schedule!.ovenLoads.filter((x) => x.ovenId === r.id)) bars.push({ key: `load-${l.load}`, startsAt: l.startsAt, endsAt: l.endsAt, label: `Oven load ${l.load}`, step: "bake" });
+      for (const e of plan.timeline.filter((x) => x.step === "heat" && x.resource?.kind === "oven" && x.resource.id === r.id)) bars.push({ key: e.id, startsAt: e.startsAt, endsAt: e.endsAt, label: e.label, step: "heat" });
+    } else {
+      for (const e of plan.timeline.filter((x) => x.resource?.kind === r.kind && x.resource.id === r.id)) {
+        bars.push({ key: e.id, startsAt: e.startsAt, endsAt: e.endsAt, label: `${e.label}${e.mix ? `, mix ${e.mix}` : ""}${e.load ? `, oven load ${e.load}` : ""}`, step: e.step });
+      }
+    }
+    bars.sort((a, b) => Date.parse(a.startsAt) - Date.parse(b.startsAt));
+    return { ...r, bars };
+  });
+}
+
+/** "01:40–01:55", with the weekday where a step falls on another day than the bake day ("Fri 23:50–00:30"). */
+export function timeRangeOn(e: Pick<TimelineEntry, "startsAt" | "endsAt">, date: string): string {
+  const day = (iso: string) => {
+    const dt = DateTime.fromISO(iso, { setZone: true });
+    return dt.isValid && dt.toISODate() !== date ? `${dt.toFormat("ccc")} ` : "";
+  };
+  return `${day(e.startsAt)}${localTime(e.startsAt)}–${localTime(e.endsAt)}`;
+}
+
+/** Minutes as a baker reads them: "40 min", "1 h 40 min". */
+export { minutesText } from "../../shared/schedule";
+
+/** One line each for the bake-day footer: the mixers, the ovens, the crew and packing. */
+export function settingsLines(s: ProductionSettingsDto, units: Pick<Units, "capacity">): { mixers: string; ovens: string; crew: string } {
+  const ovens = s.ovens.map((o) => `${o.name} (${o.capacity.kind === "area" ? `${o.capacity.areaCm2.toLocaleString("en-US")} cm² of shelf` : `${o.capacity.slots.length} pan ${o.capacity.slots.length === 1 ? "slot" : "slots"}`})`);
+  return {
+    mixers: s.mixers.map((m) => `${m.name}, ${units.capacity(m.capacityKg)}`).join("; "),
+    ovens: ovens.join("; "),
+    crew: `${s.crew.people === 1 ? "1 person" : `${s.crew.people} people`}${s.shiftStart ? ` from ${s.shiftStart}` : ""} · packing ${s.packingMinutes} min before dispatch`,
+  };
 }
 
 /** Is the clock inside this step? */
@@ -86,14 +162,15 @@ export function hourTicks(span: { start: number; end: number }, sampleIso: strin
 export interface ProgressCount {
   mixesDone: number;
   mixes: number;
+  /** Oven loads baked (stored under the name "waves"). */
   wavesBaked: number;
   waves: number;
 }
 
-/** How far the day has got: mixes weighed and mixed, waves baked (only keys the plan still has count). */
+/** How far the day has got: mixes weighed and mixed, oven loads baked (only keys the plan still has count). */
 export function progressCount(plan: Pick<PlanView, "doughs" | "timeline" | "progress">): ProgressCount {
   const mixKeys = new Set(plan.doughs.flatMap((d) => d.mixes.map((m) => mixKey(d.formulaId, m.index))));
-  const waves = new Set(plan.timeline.map((e) => e.wave));
+  const waves = new Set(plan.timeline.map(loadOf).filter((n): n is number => n !== null));
   return {
     mixesDone: plan.progress.mixes.filter((k) => mixKeys.has(k)).length,
     mixes: mixKeys.size,
@@ -104,9 +181,9 @@ export function progressCount(plan: Pick<PlanView, "doughs" | "timeline" | "prog
 
 const plural = (n: number, one: string, many: string) => (n === 1 ? one : many);
 
-/** "2 of 3 mixes done, 1 of 2 waves baked". */
+/** "2 of 3 mixes done, 1 of 2 oven loads baked". */
 export function progressText(p: ProgressCount): string {
-  return `${p.mixesDone} of ${p.mixes} ${plural(p.mixes, "mix", "mixes")} done, ${p.wavesBaked} of ${p.waves} ${plural(p.waves, "wave", "waves")} baked`;
+  return `${p.mixesDone} of ${p.mixes} ${plural(p.mixes, "mix", "mixes")} done, ${p.wavesBaked} of ${p.waves} ${plural(p.waves, "oven load", "oven loads")} baked`;
 }
 
 /**

@@ -1,7 +1,7 @@
 import { Dimensions } from "react-native";
 import { act, fireEvent, screen, waitFor, within } from "expo-router/testing-library";
 import { BAKER, OWNER, SETTINGS, apiError, mockApi, renderApp, sessionRoutes, signedInAs, type FakeRequest, type Route } from "./helpers";
-import { PRODUCTION_SETTINGS, planView } from "./production-fixtures";
+import { LATE_SHIFT, PRODUCTION_SETTINGS, planView } from "./production-fixtures";
 import { setUnitSystem } from "../../components/production/units";
 import { formatMass, formatTemperature } from "../../shared/units";
 import type { PlanView } from "../../components/api/production";
@@ -51,9 +51,11 @@ describe("bake day", () => {
     expect(screen.getByTestId("pans-102-count")).toHaveTextContent("2");
     expect(screen.getByTestId("pans-total")).toHaveTextContent("9 pans in all");
     expect(screen.getByTestId("plan-status-text")).toHaveTextContent("Not final — orders can change until the cut-off at Tue 2 Dec, 14:00 CST.");
-    expect(screen.getByTestId("plan-progress-text")).toHaveTextContent("0 of 3 mixes done, 0 of 2 waves baked");
+    expect(screen.getByTestId("plan-progress-text")).toHaveTextContent("0 of 3 mixes done, 0 of 3 oven loads baked");
     expect(screen.getByTestId("plan-warnings")).toHaveTextContent(/Milk bread, mix 2: liquid at 1\.5 °C/);
-    expect(await screen.findByTestId("setting-ovens")).toHaveTextContent("1 oven, 6 pans per load (6 pans a wave)");
+    expect(await screen.findByTestId("setting-ovens")).toHaveTextContent("Deck oven (9,100 cm² of shelf); Convection oven (5 pan slots)");
+    expect(screen.getByTestId("setting-mixer")).toHaveTextContent("Spiral mixer, 20 kg; 60-qt planetary, 12 kg");
+    expect(screen.getByTestId("setting-crew")).toHaveTextContent("3 people from 23:30 · packing 45 min before dispatch");
     expect(screen.getByTestId("tab-bake")).toBeOnTheScreen();
   });
 
@@ -91,39 +93,77 @@ describe("bake day", () => {
     expect(screen.getByTestId("mix-3-1-liquid")).toHaveTextContent("16 °C");
   });
 
-  it("lists the timeline by wave with start–end times and the cautions beside their steps", async () => {
+  it("lays the day out as mixes and oven loads in time order, every step with its time, its mixer, oven or crew, and its caution", async () => {
     mockApi(routes());
     renderApp("/bake");
-    const wave1 = await screen.findByTestId("wave-1");
-    expect(wave1).toHaveTextContent(/Wave 1 · Milk bread · 6 pans/);
-    expect(within(wave1).getByTestId("step-1-paste")).toHaveTextContent(/01:00–01:40.*Cook and cool the paste.*Hot paste/);
-    expect(within(wave1).getByTestId("step-1-mix")).toHaveTextContent(/01:40–01:55.*Mix.*Mixer guards/);
-    expect(within(wave1).getByTestId("step-1-divide")).toHaveTextContent(/Allergen separation/);
-    expect(within(wave1).getByTestId("step-1-bake")).toHaveTextContent(/04:50–05:17.*Bake · oven 177 °C.*Hot ovens and pans/);
-    expect(within(wave1).getByTestId("step-1-cool")).toHaveTextContent(/Cooling and storage of dairy-rich dough/);
-    expect(screen.getByTestId("wave-2")).toHaveTextContent(/Wave 2 · Brioche · 2 pans.*Brioche burger buns/);
+    const mix1 = await screen.findByTestId("mix-group-1-1");
+    expect(mix1).toHaveTextContent(/Milk bread · mix 1 of 2.*Makes 6 pans: Milk-bread dinner rolls/);
+    expect(within(mix1).getByTestId("step-f1-m1-paste")).toHaveTextContent(/01:00–01:40.*Cook and cool the paste.*Hot paste/);
+    expect(within(mix1).getByTestId("step-f1-m1-mix")).toHaveTextContent(/01:40–01:55.*Mix.*Spiral mixer.*Mixer guards/);
+    expect(within(mix1).getByTestId("step-f1-m1-divide")).toHaveTextContent(/02:55–03:10.*Divide and round.*Crew \(3 people\).*Allergen separation/);
+    expect(screen.getByTestId("step-f3-m1-mix-resource")).toHaveTextContent("60-qt planetary");
+    const load1 = screen.getByTestId("load-1");
+    expect(load1).toHaveTextContent(/Oven load 1 · Deck oven · 6 pans · 177 °C.*Milk-bread dinner rolls/);
+    expect(within(load1).getByTestId("step-f1-m1-L1-shape")).toHaveTextContent(/03:12–03:34.*Shape and pan · Milk bread, mix 1 · 6 pans.*Crew \(3 people\)/);
+    expect(within(load1).getByTestId("step-f1-m1-L1-proof-note")).toHaveTextContent("21 min longer than the formula's 50 min: the crew is busy with other dough later.");
+    expect(within(load1).getByTestId("step-L1-bake")).toHaveTextContent(/04:50–05:17.*Bake 27 min · oven 177 °C.*Deck oven.*Hot ovens and pans/);
+    expect(within(load1).getByTestId("step-L1-cool-25")).toHaveTextContent(/Cooling and storage/);
+    // The convection oven heats from 177 to 190 °C before the brioche goes in: that step sits with its load.
+    const load3 = screen.getByTestId("load-3");
+    expect(load3).toHaveTextContent(/Oven load 3 · Convection oven · 2 pans · 190 °C.*Brioche burger buns/);
+    expect(within(load3).getByTestId("step-heat-2-287")).toHaveTextContent(/04:47–04:57.*Heat Convection oven · oven 190 °C/);
+    // Blocks in time order: the mixes first, the oven loads by when they go in.
+    const order = screen.getAllByTestId(/^(mix-group-\d+-\d+|load-\d+)$/).map((n) => n.props.testID);
+    expect(order).toEqual(["mix-group-1-1", "mix-group-1-2", "mix-group-3-1", "load-1", "load-3", "load-2"]);
     expect(screen.getByTestId("timeline-dispatch")).toHaveTextContent("Dispatch 06:30");
+    expect(screen.getByTestId("timeline-packing")).toHaveTextContent(/Pack and load from 05:45 \(45 min before dispatch\): every step ends by then\. The shift starts at 23:30\./);
+    expect(screen.queryByTestId("timeline-conflicts")).toBeNull();
     expect(screen.getByTestId("caution-footnote")).toHaveTextContent(/Reminders only/);
   });
 
-  it("draws the timeline as bars on one time scale from 1024 px", async () => {
+  it("says when the day does not fit the shift, which step and by how much, and the start that fits", async () => {
+    mockApi(routes(planView(LATE_SHIFT)));
+    renderApp("/bake");
+    const box = await screen.findByTestId("timeline-conflicts");
+    expect(box).toHaveTextContent(/The day does not fit the shift/);
+    expect(screen.getByTestId("timeline-earlier-start")).toHaveTextContent("Start 40 min earlier, at 01:00.");
+    expect(screen.getByTestId("timeline-conflict-0")).toHaveTextContent(/Cook and cool the paste \(Milk bread, mix 1\) has to start at 01:00, 40 min before the shift starts at 01:40/);
+  });
+
+  it("shows each weigh-out card's mix time and mixer, the same as its mix step", async () => {
+    mockApi(routes());
+    renderApp("/bake");
+    expect(await screen.findByTestId("mix-1-1-time")).toHaveTextContent("Mix 01:40–01:55 on Spiral mixer · paste on at 01:00");
+    expect(screen.getByTestId("mix-1-2-time")).toHaveTextContent("Mix 01:55–02:10 on Spiral mixer · paste on at 01:15");
+    expect(screen.getByTestId("mix-3-1-time")).toHaveTextContent("Mix 01:59–02:19 on 60-qt planetary");
+    expect(screen.getByTestId("step-f1-m1-mix")).toHaveTextContent(/01:40–01:55/);
+  });
+
+  it("from 1024 px draws a lane per mixer, the crew and each oven on one time scale", async () => {
     setWidth(1280);
     mockApi(routes());
     renderApp("/bake");
-    expect(await screen.findByTestId("timeline-chart")).toBeOnTheScreen();
-    expect(screen.getByTestId("step-2-bake")).toHaveTextContent(/05:44–06:00.*Bake · oven 190 °C/);
-    expect(screen.getByLabelText("Wave 1: Mix from 01:40 to 01:55")).toBeOnTheScreen();
+    expect(await screen.findByTestId("timeline-lanes")).toBeOnTheScreen();
+    for (const id of ["lane-mixer-1", "lane-mixer-2", "lane-crew-0", "lane-oven-1", "lane-oven-2"]) expect(screen.getByTestId(id)).toBeOnTheScreen();
+    expect(screen.getByLabelText("Spiral mixer: Mix, mix 1 from 01:40 to 01:55")).toBeOnTheScreen();
+    expect(screen.getByLabelText("Crew (3 people): Shape and pan, mix 1, oven load 1 from 03:12 to 03:34")).toBeOnTheScreen();
+    expect(screen.getByLabelText("Deck oven: Oven load 1 from 04:47 to 05:20")).toBeOnTheScreen();
+    expect(screen.getByLabelText("Convection oven: Heat Convection oven from 04:47 to 04:57")).toBeOnTheScreen();
+    expect(screen.getByTestId("step-L3-bake")).toHaveTextContent(/05:05–05:21.*Bake 16 min · oven 190 °C/);
     expect(screen.getByTestId("app-shell-wide")).toBeOnTheScreen();
   });
 
   it("marks the step under way by the bakery's clock", async () => {
     // The fake bakery's clock reads Tue 2 Dec, 05:30 CST.
-    const today = planView().timeline.map((e) => ({ ...e, startsAt: e.startsAt.replace("2025-12-03", "2025-12-02"), endsAt: e.endsAt.replace("2025-12-03", "2025-12-02") }));
-    mockApi(routes(planView({ date: "2025-12-02", timeline: today })));
+    const move = (iso: string) => iso.replace("2025-12-03", "2025-12-02");
+    const today = planView().timeline.map((e) => ({ ...e, startsAt: move(e.startsAt), endsAt: move(e.endsAt) }));
+    mockApi(routes(planView({ date: "2025-12-02", timeline: today, schedule: undefined })));
     renderApp("/bake/day?date=2025-12-02");
-    const now = await screen.findByTestId("timeline-now");
-    expect(within(screen.getByTestId("step-1-cool")).getByTestId("timeline-now")).toBe(now);
-    expect(screen.getAllByTestId("timeline-now")).toHaveLength(1);
+    const now = await screen.findAllByTestId("timeline-now");
+    expect(now).toContain(within(screen.getByTestId("step-L1-cool-25")).getByTestId("timeline-now"));
+    // Three coolings run at 05:30 (oven loads 1, 2 and 3); nothing else does.
+    expect(screen.getAllByTestId("timeline-now")).toHaveLength(3);
+    expect(within(screen.getByTestId("step-L1-bake")).queryByTestId("timeline-now")).toBeNull();
   });
 
   it("switches to pounds, ounces and °F (NIST factors) and back", async () => {
@@ -137,27 +177,28 @@ describe("bake day", () => {
     expect(screen.getByTestId("mix-1-1-final-2")).toHaveTextContent("Whole milk2 lb 3.27 oz");
     expect(screen.getByTestId("mix-1-1-liquid")).toHaveTextContent("79 °F");
     expect(screen.getByTestId("mix-1-1-paste")).toHaveTextContent(/Cook to 149 °F/);
-    expect(screen.getByTestId("step-1-bake")).toHaveTextContent(/oven 351 °F/);
+    expect(screen.getByTestId("step-L1-bake")).toHaveTextContent(/oven 351 °F/);
+    expect(screen.getByTestId("load-1")).toHaveTextContent(/Oven load 1 · Deck oven · 6 pans · 351 °F/);
     expect(screen.getByLabelText("Room (°F)")).toHaveDisplayValue("72");
     fireEvent.press(screen.getByTestId("units-metric"));
     expect(screen.getByTestId("mix-1-1-final-2")).toHaveTextContent("Whole milk1,000 g");
     expect(screen.getByTestId("mix-1-1-liquid")).toHaveTextContent("26 °C");
   });
 
-  it("ticks a mix weighed and mixed, and a wave baked, with the right progress bodies", async () => {
+  it("ticks a mix weighed and mixed, and an oven load baked, with the right progress bodies", async () => {
     const api = mockApi(routes());
     renderApp("/bake");
     fireEvent.press(await screen.findByTestId("mix-1-1-done"));
     await waitFor(() => expect(api.callsTo("POST", "/api/production/bake-days/2025-12-03/progress")).toHaveLength(1));
     expect(api.callsTo("POST", "/api/production/bake-days/2025-12-03/progress")[0].body).toEqual({ kind: "mix", key: "1:1", done: true });
     expect(await screen.findByTestId("mix-1-1-done-badge")).toHaveTextContent("Mixed");
-    await waitFor(() => expect(screen.getByTestId("plan-progress-text")).toHaveTextContent("1 of 3 mixes done, 0 of 2 waves baked"));
+    await waitFor(() => expect(screen.getByTestId("plan-progress-text")).toHaveTextContent("1 of 3 mixes done, 0 of 3 oven loads baked"));
     expect(screen.getByTestId("mix-1-1-done")).toBeChecked();
 
-    fireEvent.press(screen.getByTestId("wave-1-baked"));
+    fireEvent.press(screen.getByTestId("load-1-baked"));
     await waitFor(() => expect(api.callsTo("POST", "/api/production/bake-days/2025-12-03/progress")).toHaveLength(2));
     expect(api.callsTo("POST", "/api/production/bake-days/2025-12-03/progress")[1].body).toEqual({ kind: "wave", key: "1", done: true });
-    await waitFor(() => expect(screen.getByTestId("plan-progress-text")).toHaveTextContent("1 of 3 mixes done, 1 of 2 waves baked"));
+    await waitFor(() => expect(screen.getByTestId("plan-progress-text")).toHaveTextContent("1 of 3 mixes done, 1 of 3 oven loads baked"));
 
     // And off again.
     fireEvent.press(screen.getByTestId("mix-1-1-done"));

@@ -1,7 +1,7 @@
 import { Dimensions } from "react-native";
 import { fireEvent, screen, waitFor } from "expo-router/testing-library";
 import { BAKER, BOOKKEEPER, OWNER, SUMMARY, apiError, mockApi, renderApp, sessionRoutes, signedInAs, type FakeRequest, type Route } from "./helpers";
-import { FORECAST, INGREDIENTS, PRODUCTION_SETTINGS, ingredient } from "./production-fixtures";
+import { FORECAST, INGREDIENTS, PRODUCTION_SETTINGS, formulaDto, ingredient } from "./production-fixtures";
 import { setUnitSystem } from "../../components/production/units";
 import type { SessionUser } from "../../shared/schemas/auth";
 
@@ -131,25 +131,68 @@ describe("production in the office", () => {
     expect(screen.queryByTestId("office-production-card")).toBeNull();
   });
 
-  it("lets the owner change the production settings, checked before sending", async () => {
+  it("lets the owner set up mixers, ovens by shelf area or named slots, the crew, packing, the shift and overnight retard, checked before sending", async () => {
     signedInAs(OWNER);
-    const api = mockApi(routes(OWNER, { "PUT /api/production/settings": (req: FakeRequest) => ({ body: { settings: req.body } }) }));
+    const api = mockApi(routes(OWNER, {
+      "GET /api/formulas": { body: { formulas: [formulaDto(), formulaDto({ id: 3, name: "Brioche", productIds: [102] })] } },
+      "PUT /api/production/settings": (req: FakeRequest) => ({ body: { settings: req.body } }),
+    }));
     renderApp("/office/production/settings");
-    expect(await screen.findByTestId("settings-mixer")).toHaveDisplayValue("20");
+    expect(await screen.findByTestId("settings-mixer-0-capacity")).toHaveDisplayValue("20");
+    expect(screen.getByTestId("settings-mixer-1-name")).toHaveDisplayValue("60-qt planetary");
+    expect(screen.getByTestId("settings-oven-0-area")).toHaveDisplayValue("9100");
+    // 9,100 cm² ÷ 6.4516 cm²/in² (1 in = 2.54 cm exactly, NIST SP 811) = 1,410.50 in², shown 1,411; a half sheet is 1,508.1 cm² (6.03 fit).
+    expect(screen.getByText(/= 1,411 in², about 6 half sheets/)).toBeOnTheScreen();
+    expect(screen.getByTestId("settings-oven-1-slots")).toHaveDisplayValue("Shelf 1, Shelf 2, Shelf 3, Shelf 4, Shelf 5");
+    expect(screen.getByTestId("settings-shift")).toHaveDisplayValue("23:30");
+    expect(screen.getByTestId("settings-summary")).toHaveTextContent("2 mixers, 2 ovens (9,100 cm² of shelf; 5 pan slots) per load, 3 people on the shift.");
+
     fireEvent.changeText(screen.getByTestId("settings-dispatch"), "6:30");
-    fireEvent.changeText(screen.getByTestId("settings-ovens"), "0");
+    fireEvent.changeText(screen.getByTestId("settings-mixer-0-capacity"), "0");
+    fireEvent.changeText(screen.getByTestId("settings-oven-1-slots"), " , ");
+    fireEvent.changeText(screen.getByTestId("settings-crew-people"), "0");
     fireEvent.press(screen.getByTestId("production-settings-save"));
     expect(screen.getByTestId("settings-dispatch-error")).toHaveTextContent("Use a 24-hour time such as 06:30.");
-    expect(screen.getByTestId("settings-ovens-error")).toHaveTextContent("At least 1 oven.");
+    expect(screen.getByTestId("settings-mixer-0-capacity-error")).toHaveTextContent("Mixer capacity (kg) must be at least 1.");
+    expect(screen.getByTestId("settings-oven-1-slots-error")).toHaveTextContent("Name at least one pan slot.");
+    expect(screen.getByTestId("settings-crew-people-error")).toHaveTextContent("People on the shift: at least 1.");
     expect(api.callsTo("PUT", "/api/production/settings")).toHaveLength(0);
+
     fireEvent.changeText(screen.getByTestId("settings-dispatch"), "05:45");
-    fireEvent.changeText(screen.getByTestId("settings-ovens"), "2");
-    fireEvent.changeText(screen.getByTestId("settings-mixer"), "25,5");
-    expect(screen.getByTestId("settings-wave")).toHaveTextContent("One bake wave holds 12 pans.");
+    fireEvent.changeText(screen.getByTestId("settings-mixer-0-capacity"), "25,5");
+    fireEvent.changeText(screen.getByTestId("settings-oven-1-slots"), "Top, Bottom");
+    fireEvent.changeText(screen.getByTestId("settings-crew-people"), "4");
+    fireEvent.press(screen.getByTestId("settings-mixer-1-remove"));
+    fireEvent.press(screen.getByTestId("settings-oven-add"));
+    fireEvent.changeText(screen.getByTestId("settings-oven-2-name"), "Rack oven");
+    fireEvent.changeText(screen.getByTestId("settings-oven-2-area"), "16000");
+    fireEvent.press(screen.getByTestId("settings-retard-1-on"));
+    fireEvent.changeText(screen.getByTestId("settings-retard-1-hours"), "14");
     fireEvent.press(screen.getByTestId("production-settings-save"));
     await waitFor(() => expect(api.callsTo("PUT", "/api/production/settings")).toHaveLength(1));
-    expect(api.callsTo("PUT", "/api/production/settings")[0].body).toEqual({ mixerCapacityKg: 25.5, dispatchTime: "05:45", ovens: 2, pansPerLoad: 6 });
+    expect(api.callsTo("PUT", "/api/production/settings")[0].body).toEqual({
+      dispatchTime: "05:45", shiftStart: "23:30", packingMinutes: 45,
+      mixers: [{ name: "Spiral mixer", capacityKg: 25.5 }],
+      ovens: [
+        { name: "Deck oven", capacity: { kind: "area", areaCm2: 9100 }, tempChangeMinutes: 20, loadMinutes: 3, unloadMinutes: 3 },
+        { name: "Convection oven", capacity: { kind: "slots", slots: ["Top", "Bottom"], slotLengthMm: 460, slotWidthMm: 335 }, tempChangeMinutes: 10, loadMinutes: 2, unloadMinutes: 2 },
+        { name: "Rack oven", capacity: { kind: "area", areaCm2: 16000 }, tempChangeMinutes: 15, loadMinutes: 2, unloadMinutes: 2 },
+      ],
+      crew: { people: 4, divideMinutesPerPiece: 0.15, shapeMinutesPerPiece: 0.2, panMinutesPerPan: 0.5 },
+      retard: [{ formulaId: 1, hours: 14 }],
+    });
     expect(await screen.findByTestId("production-settings-saved")).toBeOnTheScreen();
+  });
+
+  it("puts the server's message beside the field it names", async () => {
+    signedInAs(OWNER);
+    mockApi(routes(OWNER, {
+      "GET /api/formulas": { body: { formulas: [formulaDto()] } },
+      "PUT /api/production/settings": apiError(400, "validation_error", "Some fields need attention.", { "ovens.0.capacity.areaCm2": "Usable shelf area (cm²): at least 100." }),
+    }));
+    renderApp("/office/production/settings");
+    fireEvent.press(await screen.findByTestId("production-settings-save"));
+    expect(await screen.findByTestId("settings-oven-0-area-error")).toHaveTextContent("Usable shelf area (cm²): at least 100.");
   });
 
   it("puts the baker's ingredients and profile under More", async () => {

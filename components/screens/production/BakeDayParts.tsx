@@ -17,7 +17,7 @@ import { downloadPlanPdf, useProductionSettingsQuery, type PlanView } from "../.
 import { splitError } from "../../forms/errors";
 import { cleanDate, formatCutoff, formatDay, relativeDay } from "../../ordering/dates";
 import { parseQuantity } from "../../ordering/quantities";
-import { localDayTime, progressText, type ProgressCount } from "../../production/plan";
+import { localDayTime, progressText, type ProgressCount, settingsLines } from "../../production/plan";
 import type { Units } from "../../production/units";
 import type { KitchenPaths } from "../../production/paths";
 import type { FieldErrors } from "../../../shared/errors";
@@ -483,9 +483,10 @@ export function SettingsFooter({ units, paths, isOwner }: { units: Units; paths:
       ) : (
         <DetailList
           items={[
-            { label: "Mixer holds", value: units.mass(settings.data.mixerCapacityKg * 1000), testID: "setting-mixer" },
+            { label: settings.data.mixers.length === 1 ? "Mixer" : "Mixers", value: settingsLines(settings.data, units).mixers, testID: "setting-mixer" },
             { label: "Dispatch", value: settings.data.dispatchTime, testID: "setting-dispatch" },
-            { label: "Ovens", value: `${settings.data.ovens === 1 ? "1 oven" : `${settings.data.ovens} ovens`}, ${settings.data.pansPerLoad} pans per load (${settings.data.ovens * settings.data.pansPerLoad} pans a wave)`, testID: "setting-ovens" },
+            { label: settings.data.ovens.length === 1 ? "Oven" : "Ovens", value: settingsLines(settings.data, units).ovens, testID: "setting-ovens" },
+            { label: "Crew", value: settingsLines(settings.data, units).crew, testID: "setting-crew" },
           ]}
         />
       )}

@@ -1,4 +1,5 @@
 import React from "react";
+import { DateTime } from "luxon";
 import { StyleSheet, View } from "react-native";
 import Feather from "@expo/vector-icons/Feather";
 import { AppText, Heading } from "../../ui/Text";
@@ -22,8 +23,9 @@ export interface MixCardProps {
 }
 
 /**
- * One weigh-out card: what goes into one mixer load. The paste (cooked first) and the final mix are
- * weighed separately; the liquid temperature is what makes the dough come out at its target.
+ * One weigh-out card: what goes into one mixer load, and when and on which mixer it is mixed (its mix step on
+ * the timeline). The paste (cooked first) and the final mix are weighed separately; the liquid temperature is
+ * what makes the dough come out at its target.
  */
 export function MixCard({ dough, mix, units, done, busy, onDone }: MixCardProps) {
   const id = `mix-${dough.formulaId}-${mix.index}`;
@@ -44,6 +46,11 @@ export function MixCard({ dough, mix, units, done, busy, onDone }: MixCardProps)
             {dough.name}
           </Heading>
           <AppText variant="small" color="muted">{`Formula version ${dough.formulaVersion}${dough.targetInternalC ? ` · bake to ${units.temp(dough.targetInternalC)} inside` : ""}`}</AppText>
+          {mix.scheduled ? (
+            <AppText variant="bodyStrong" color="crust" testID={`${id}-time`}>
+              {mixTimeText(mix.scheduled, !!(dough.paste && paste.length))}
+            </AppText>
+          ) : null}
         </View>
         {done ? <Badge label="Mixed" tone="sage" testID={`${id}-done-badge`} /> : null}
       </View>
@@ -107,6 +114,17 @@ export function MixCard({ dough, mix, units, done, busy, onDone }: MixCardProps)
       />
     </View>
   );
+}
+
+/** "Mix 01:40–01:55 on the Spiral mixer · paste on at 01:00" (with the weekday when it is the day before). */
+export function mixTimeText(s: NonNullable<Mix["scheduled"]>, withPaste: boolean): string {
+  const at = (iso: string) => {
+    const dt = DateTime.fromISO(iso, { setZone: true });
+    return s.dayBefore ? dt.toFormat("ccc HH:mm") : dt.toFormat("HH:mm");
+  };
+  const paste = withPaste && s.pasteStartsAt ? ` · paste on at ${at(s.pasteStartsAt)}` : "";
+  const retard = s.dayBefore ? " · the day before: this dough is retarded overnight" : "";
+  return `Mix ${at(s.startsAt)}–${DateTime.fromISO(s.endsAt, { setZone: true }).toFormat("HH:mm")} on ${s.mixerName}${paste}${retard}`;
 }
 
 function SectionHead({ title, detail, step }: { title: string; detail?: string; step?: string }) {
