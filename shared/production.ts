@@ -72,8 +72,14 @@ export interface FormulaFigures {
   flourPercent: number;
   /** Liquid-kind lines over flour, percent. */
   hydrationPercent: number;
-  /** Water from every ingredient (by its water content) over flour, percent. */
+  /**
+   * Effective hydration by the usual convention: the water in the wet ingredients (liquids, egg, fats such
+   * as butter, syrups such as honey: each line times its water content) over the flour weight, the paste's
+   * flour included. The flour's own moisture (and that of other dry goods) is not counted.
+   */
   effectiveHydrationPercent: number;
+  /** The flour's own moisture over the flour, percent: shown apart, never inside the hydration. */
+  flourMoisturePercent: number;
   /** Share of the flour cooked in the paste, percent (0 without a paste). */
   pasteSharePercent: number;
   /** The paste's weight as baker's percent (flour + liquid cooked). */
@@ -82,12 +88,21 @@ export interface FormulaFigures {
   doughYieldPerKgFlour: number;
 }
 
+/**
+ * The kinds whose water counts toward effective hydration: the usual convention counts the water brought by
+ * liquids, egg, butter (fats) and honey or syrups (sugars), never the bound moisture of flour and other dry
+ * goods (dry milk, oats, instant yeast). Common practice, no single source; water contents per ingredient are
+ * the library's (USDA FoodData Central for dairy and egg).
+ */
+export const WET_KINDS: readonly IngredientKind[] = ["liquid", "egg", "fat", "sugar"];
+
 export function formulaFigures(f: Pick<FormulaSpec, "lines" | "paste">, ingredients: Map<number, IngredientInfo>): FormulaFigures {
   const lines = f.lines.map((l) => ({ ...l, info: ingredients.get(l.ingredientId) }));
   const totalPercent = sum(lines.map((l) => l.percent));
   const flourPercent = sum(lines.filter((l) => l.info?.kind === "flour").map((l) => l.percent));
   const hydrationPercent = sum(lines.filter((l) => l.info?.kind === "liquid").map((l) => l.percent));
-  const water = sum(lines.map((l) => (l.percent * (l.info?.waterPercent ?? 0)) / 100));
+  const water = sum(lines.filter((l) => l.info && WET_KINDS.includes(l.info.kind)).map((l) => (l.percent * l.info!.waterPercent) / 100));
+  const flourWater = sum(lines.filter((l) => l.info?.kind === "flour").map((l) => (l.percent * l.info!.waterPercent) / 100));
   const pasteSharePercent = f.paste ? f.paste.flourPercent : 0;
   const pasteFlourBp = f.paste ? (flourPercent * f.paste.flourPercent) / 100 : 0;
   return {
@@ -95,10 +110,38 @@ export function formulaFigures(f: Pick<FormulaSpec, "lines" | "paste">, ingredie
     flourPercent,
     hydrationPercent,
     effectiveHydrationPercent: flourPercent > 0 ? (water / flourPercent) * 100 : 0,
+    flourMoisturePercent: flourPercent > 0 ? (flourWater / flourPercent) * 100 : 0,
     pasteSharePercent,
     pastePercent: f.paste ? pasteFlourBp * (1 + f.paste.liquidRatio) : 0,
     doughYieldPerKgFlour: flourPercent > 0 ? (totalPercent / flourPercent) * 1000 : 0,
   };
+}
+
+/**
+ * The paste must reach wheat starch gelatinisation or it does not set: common practice cooks this flour-and-milk
+ * paste to about 60–70 °C (65 °C is usual), so below 60 °C is refused. Common practice, no single source.
+ */
+export const PASTE_MIN_COOK_C = 60;
+export const PASTE_COOK_MESSAGE = "Cook the paste to 60–100 °C: below about 60 °C the wheat starch does not gelatinise and the paste does not set (about 65 °C is usual).";
+
+/**
+ * The friction factor is in °C. Common practice, no single source: about 1–3 °C by hand and roughly 5–16 °C
+ * in a spiral or planetary mixer, depending on the mix time; above 20 °C is implausible in °C and is most
+ * likely a habitual °F factor (26 °F is the textbook example), which would make the liquid far too cold.
+ */
+export const FRICTION_PLAUSIBLE_MAX_C = 20;
+
+/**
+ * Values that can be saved but are probably a mistake (keys match the form's fields). Not refusals: the
+ * baker decides, the screen says why it looks wrong.
+ */
+export function formulaWarnings(f: { frictionC: number }): Record<string, string> {
+  const out: Record<string, string> = {};
+  if (Number.isFinite(f.frictionC) && f.frictionC > FRICTION_PLAUSIBLE_MAX_C) {
+    const asC = round((f.frictionC * 5) / 9, 1);
+    out.frictionC = `${f.frictionC} is high for a friction factor in °C (usually about 1–16 °C in a mixer). If it is a °F factor, in °C it is ${asC}; as it stands the liquid comes out about ${round(f.frictionC - asC, 1)} °C colder.`;
+  }
+  return out;
 }
 
 /** Field messages for a formula that cannot be baked as written (keys match the API's). */
@@ -127,7 +170,7 @@ export function validateFormula(f: Pick<FormulaSpec, "lines" | "paste" | "lossPe
     if (!liquidLine || ingredients.get(p.liquidIngredientId)?.kind !== "liquid") errors["paste.liquidIngredientId"] = "Cook a liquid that is in the formula.";
     if (!(p.flourPercent > 0 && p.flourPercent <= 100)) errors["paste.flourPercent"] = "Cook between 0 and 100 % of the flour.";
     if (!(p.liquidRatio > 0 && p.liquidRatio <= 20)) errors["paste.liquidRatio"] = "Use a liquid-to-flour ratio above 0 and at most 20.";
-    if (!(p.cookToC >= 40 && p.cookToC <= 100)) errors["paste.cookToC"] = "Cook the paste to between 40 and 100 °C.";
+    if (!(p.cookToC >= PASTE_MIN_COOK_C && p.cookToC <= 100)) errors["paste.cookToC"] = PASTE_COOK_MESSAGE;
     if (flourLine && liquidLine && !errors["paste.flourPercent"] && !errors["paste.liquidRatio"]) {
       const pasteFlour = (figures.flourPercent * p.flourPercent) / 100;
       if (pasteFlour > flourLine.percent + EPS) {
@@ -208,7 +251,10 @@ export interface Mix {
   index: number;
   doughGrams: number;
   liquidTempC: number | null;
+  /** The advice in words (metric), when the liquid needs attention; the screens and PDFs word `liquid` in their units. */
   liquidTempAdvice: string | null;
+  /** What to do with the liquid: ice, chill, warm (absent on plans frozen before it existed). */
+  liquid?: LiquidPlan | null;
   ingredients: { ingredientId: number; grams: number; pasteGrams: number; finalMixGrams: number }[];
 }
 
@@ -228,27 +274,139 @@ export interface TemperatureInputs {
   flourC: number;
   /** The paste's temperature when it goes into the mix. */
   pasteC: number;
+  /** Tap water as it comes from the tap (for the ice). Default DEFAULT_TAP_C. */
+  tapC?: number;
+  /** Milk (and any other liquid kept cold) as it comes out of the cooler. Default DEFAULT_MILK_C. */
+  milkC?: number;
 }
+
+/** Tap water varies with the season (roughly 5–25 °C, from memory); 15 °C until the baker measures it. */
+export const DEFAULT_TAP_C = 15;
+/** Milk from a cooler held at 5 °C or below (FDA Food Code 3-501.16(A)(2): cold holding at 5 °C / 41 °F or less). */
+export const DEFAULT_MILK_C = 4;
+/** Liquid no colder than ice water: the ice-and-water mix sits at 0 °C. */
+export const ICE_WATER_C = 0;
+/** Milk can be chilled to about 1 °C before it starts to freeze (milk freezes near −0.5 °C; from memory). */
+export const COLDEST_MILK_C = 1;
+/**
+ * Warmest liquid to add: common practice keeps liquid for a yeasted dough at or below about 40 °C (yeast is
+ * stressed above about 43 °C and killed near 55–60 °C; from memory). Above it the advice is never "hotter".
+ */
+export const WARMEST_LIQUID_C = 40;
+/** Differences this small are left alone (a thermometer reads to about ±1 °C). */
+const LIQUID_TOLERANCE_C = 1;
 
 /**
  * Liquid temperature for a desired dough temperature: liquid = DDT × n − (room + flour + friction [+ paste]),
- * where n counts the factors (3, or 4 with a paste). Below 2 °C or above 40 °C it is flagged with advice.
+ * where n counts the factors (3, or 4 with a paste). Common practice (the desired-dough-temperature method).
  */
-export function liquidTemperature(ddtC: number, frictionC: number, t: TemperatureInputs, withPaste: boolean): { liquidC: number; advice: string | null } {
+export function liquidTemperature(ddtC: number, frictionC: number, t: TemperatureInputs, withPaste: boolean): { liquidC: number } {
   const n = withPaste ? 4 : 3;
-  const liquidC = ddtC * n - (t.roomC + t.flourC + frictionC + (withPaste ? t.pasteC : 0));
-  let advice: string | null = null;
-  if (liquidC < 2) {
-    advice = withPaste
-      ? "Colder than ice water can be: replace part of the liquid with crushed ice (weighed as liquid), let the paste cool further, or chill the flour."
-      : "Colder than ice water can be: replace part of the liquid with crushed ice (weighed as liquid) or chill the flour.";
-  } else if (liquidC > 40) {
-    advice = withPaste
-      ? "Liquid this warm stresses the yeast: add the paste warmer instead (it was cooked hot), or let the flour come up to room temperature."
-      : "Liquid this warm stresses the yeast: let the flour come up to room temperature, or mix in a warmer spot.";
-  }
-  return { liquidC: round(liquidC, 1), advice };
+  return { liquidC: round(ddtC * n - (t.roomC + t.flourC + frictionC + (withPaste ? t.pasteC : 0)), 1) };
 }
+
+/**
+ * Ice to bring water from its supply temperature down to the wanted temperature, weighed in place of that much
+ * water (common practice): ice = W × (T_supply − T_wanted) ÷ (T_supply + 80) in °C, or ÷ (T_supply + 112) in °F.
+ * 80 is the latent heat of melting ice in calories per gram (334 J/g ÷ 4.19 J/g·K); 112 = 144 BTU/lb − 32 °F.
+ * Nothing when the supply is not warmer than wanted.
+ */
+export function iceGrams(waterGrams: number, supply: number, wanted: number, scale: "C" | "F" = "C"): number {
+  if (!(supply > wanted) || waterGrams <= 0) return 0;
+  return (waterGrams * (supply - wanted)) / (supply + (scale === "C" ? 80 : 112));
+}
+
+export type LiquidAction =
+  /** Liquid as it comes is right (within a degree). */
+  | "as_is"
+  /** Part of the water line weighed as crushed ice; the milk straight from the cooler. */
+  | "ice"
+  /** Chill the milk (no water line: never replace milk by ice or water). */
+  | "chill"
+  /** All of the water line as ice and the milk chilled further. */
+  | "ice_and_chill"
+  /** Warm the liquid (it comes colder than wanted), at most WARMEST_LIQUID_C. */
+  | "warm"
+  /** Wanted colder than liquid can be: as cold as it goes, and bring the other factors down. */
+  | "too_cold"
+  /** Wanted warmer than liquid should be: warm to WARMEST_LIQUID_C and give the dough longer. */
+  | "too_warm";
+
+/** What to do with one mix's liquid so the dough comes out at its target. All temperatures °C, weights g. */
+export interface LiquidPlan {
+  /** What the liquid must be (the desired-dough-temperature method). */
+  wantedC: number;
+  action: LiquidAction;
+  tapC: number;
+  milkC: number;
+  /** The mix's water line(s) in the final mix, and its other liquids (milk…). */
+  waterGrams: number;
+  otherLiquidGrams: number;
+  /** The water line the ice replaces part of (the largest water line), if any. */
+  waterIngredientId: number | null;
+  /** The other liquid lines (milk…), chilled or warmed but never iced. */
+  otherIngredientIds: number[];
+  /** Crushed ice weighed as part of the water line (0 when none). */
+  iceGrams: number;
+  /** Chill the milk to this (null: straight from the cooler). */
+  chillToC: number | null;
+  /** Warm the liquid to this (null: no warming). */
+  warmToC: number | null;
+}
+
+/** A liquid line of one mix: pure water (≥ 99.5 % water) is the tap line; anything else (milk) comes from the cooler. */
+export interface MixLiquidLine {
+  ingredientId: number;
+  grams: number;
+  water: boolean;
+}
+
+/**
+ * Turn the wanted liquid temperature into what the baker does. Heat balance with every liquid treated as water
+ * (milk's specific heat is about 93 % of water's, from memory: close enough for a thermometer's degree):
+ * water W at T_tap, milk M at T_milk, ice I at 0 °C melting (80 cal/g) then warming to T:
+ *   (W − I)(T_tap − T) + M(T_milk − T) = I (80 + T)  ⇒  I = [W (T_tap − T) + M (T_milk − T)] ÷ (T_tap + 80),
+ * which is the common-practice formula when there is no milk. Ice only ever replaces water; milk is chilled.
+ */
+export function planLiquid(wantedC: number, lines: MixLiquidLine[], t: Pick<TemperatureInputs, "tapC" | "milkC">): LiquidPlan {
+  const tapC = t.tapC ?? DEFAULT_TAP_C;
+  const milkC = t.milkC ?? DEFAULT_MILK_C;
+  const water = lines.filter((l) => l.water && l.grams > 0);
+  const W = sum(water.map((l) => l.grams));
+  const M = sum(lines.filter((l) => !l.water && l.grams > 0).map((l) => l.grams));
+  const waterIngredientId = water.length ? [...water].sort((a, b) => b.grams - a.grams)[0].ingredientId : null;
+  const otherIngredientIds = lines.filter((l) => !l.water && l.grams > 0).map((l) => l.ingredientId);
+  const base: LiquidPlan = { wantedC, action: "as_is", tapC, milkC, waterGrams: round(W, 1), otherLiquidGrams: round(M, 1), waterIngredientId, otherIngredientIds, iceGrams: 0, chillToC: null, warmToC: null };
+  if (wantedC > WARMEST_LIQUID_C) return { ...base, action: "too_warm", warmToC: WARMEST_LIQUID_C };
+  if (W + M <= 0) return wantedC < ICE_WATER_C ? { ...base, action: "too_cold" } : base;
+  const supplyC = (W * tapC + M * milkC) / (W + M);
+  if (Math.abs(supplyC - wantedC) <= LIQUID_TOLERANCE_C && wantedC >= ICE_WATER_C) return base;
+  if (wantedC > supplyC) return { ...base, action: "warm", warmToC: round(wantedC, 1) };
+  // Colder than it comes. Liquid cannot go below ice water: aim for 0 °C and say the rest must come from elsewhere.
+  const target = Math.max(wantedC, ICE_WATER_C);
+  const tooCold = wantedC < ICE_WATER_C;
+  if (W > 0) {
+    const ice = (W * (tapC - target) + M * (milkC - target)) / (tapC + 80);
+    if (ice <= W + EPS) return { ...base, action: tooCold ? "too_cold" : "ice", iceGrams: roundGrams(Math.max(0, ice)) };
+    // All the water as ice is not enough: the milk takes the rest, M (T_milk' − T) = W (80 + T).
+    const chill = target + (W * (80 + target)) / M;
+    const reachable = chill >= COLDEST_MILK_C;
+    return { ...base, action: tooCold || !reachable ? "too_cold" : "ice_and_chill", iceGrams: roundGrams(W), chillToC: round(Math.max(chill, COLDEST_MILK_C), 1) };
+  }
+  // Milk only: chill it, never ice it.
+  if (target < COLDEST_MILK_C) return { ...base, action: "too_cold", chillToC: COLDEST_MILK_C };
+  return { ...base, action: "chill", chillToC: round(target, 1) };
+}
+
+/** The final-mix liquid lines of a mix, water lines told apart from milk and other cold-kept liquids. */
+export function mixLiquidLines(lines: { ingredientId: number; finalMixGrams: number }[], ingredients: Map<number, IngredientInfo>): MixLiquidLine[] {
+  return lines
+    .filter((l) => ingredients.get(l.ingredientId)?.kind === "liquid" && l.finalMixGrams > 0)
+    .map((l) => ({ ingredientId: l.ingredientId, grams: l.finalMixGrams, water: (ingredients.get(l.ingredientId)?.waterPercent ?? 0) >= 99.5 }));
+}
+
+/** Is the liquid plan a problem to put in front of the baker (the plan's warnings), not just an instruction? */
+export const liquidNeedsAttention = (l: Pick<LiquidPlan, "action">) => l.action === "too_cold" || l.action === "too_warm";
 
 export function planDough(
   formula: FormulaSpec,
@@ -277,7 +435,7 @@ export function planDough(
   });
 
   const mixTemp = liquidTemperature(formula.ddtC, formula.frictionC, temps, !!formula.paste);
-  const mixes: Mix[] = Array.from({ length: nMixes }, (_, i) => ({ index: i + 1, doughGrams: 0, liquidTempC: mixTemp.liquidC, liquidTempAdvice: mixTemp.advice, ingredients: [] }));
+  const mixes: Mix[] = Array.from({ length: nMixes }, (_, i) => ({ index: i + 1, doughGrams: 0, liquidTempC: mixTemp.liquidC, liquidTempAdvice: null, liquid: null, ingredients: [] }));
   for (const l of lines) {
     const step = (g: number) => (g < 50 * nMixes ? 0.1 : 1);
     const parts = apportion(l.grams, nMixes, step(l.grams));
@@ -288,6 +446,7 @@ export function planDough(
     });
   }
   for (const m of mixes) m.doughGrams = roundGrams(sum(m.ingredients.map((i) => i.grams)));
+  for (const m of mixes) m.liquid = planLiquid(mixTemp.liquidC, mixLiquidLines(m.ingredients, ingredients), temps);
 
   return {
     formulaId: formula.id,

@@ -1,8 +1,9 @@
 import {
-  apportion, formulaFigures, liquidTemperature, planDough, planProduct, roundGrams, validateFormula,
+  apportion, formulaFigures, formulaWarnings, iceGrams, liquidTemperature, mixLiquidLines, planDough, planLiquid, planProduct, roundGrams, validateFormula,
   type FormulaSpec, type IngredientInfo,
 } from "../../shared/production";
-import { GRAMS_PER_OUNCE, GRAMS_PER_POUND, celsiusToFahrenheit, fahrenheitToCelsius, formatMass, gramsToOunces, mmToInches } from "../../shared/units";
+import { liquidAdviceText } from "../../shared/cautions";
+import { GRAMS_PER_OUNCE, GRAMS_PER_POUND, celsiusToFahrenheit, fahrenheitToCelsius, formatMass, gramsToOunces, mmToInches, unitsFor } from "../../shared/units";
 
 const lib = new Map<number, IngredientInfo>([
   [1, { id: 1, name: "Bread flour", kind: "flour", waterPercent: 12 }],
@@ -10,7 +11,7 @@ const lib = new Map<number, IngredientInfo>([
   [3, { id: 3, name: "Salt", kind: "salt", waterPercent: 0 }],
   [4, { id: 4, name: "Instant yeast", kind: "leavening", waterPercent: 5 }],
   [5, { id: 5, name: "Whole milk", kind: "liquid", waterPercent: 88 }],
-  [6, { id: 6, name: "Butter", kind: "fat", waterPercent: 16 }],
+  [6, { id: 6, name: "Butter", kind: "fat", waterPercent: 18 }],
   [7, { id: 7, name: "Whole egg", kind: "egg", waterPercent: 76 }],
   [8, { id: 8, name: "Sugar", kind: "sugar", waterPercent: 0 }],
 ]);
@@ -49,20 +50,96 @@ describe("desired dough temperature against a published worked example", () => {
    */
   it("three factors without a paste", () => {
     const c = fahrenheitToCelsius;
-    const { liquidC, advice } = liquidTemperature(c(76), 26 * (5 / 9), { roomC: c(72), flourC: c(70), pasteC: 0 }, false);
+    const { liquidC } = liquidTemperature(c(76), 26 * (5 / 9), { roomC: c(72), flourC: c(70), pasteC: 0 }, false);
     expect(celsiusToFahrenheit(liquidC)).toBeCloseTo(60, 0);
-    expect(advice).toBeNull();
   });
 
-  it("four factors with the paste, and flags liquid colder than 2 °C or warmer than 40 °C", () => {
+  it("four factors with the paste", () => {
     // 26 × 4 − (24 + 22 + 12 + 30) = 16 °C
-    expect(liquidTemperature(26, 12, { roomC: 24, flourC: 22, pasteC: 30 }, true)).toEqual({ liquidC: 16, advice: null });
-    const hot = liquidTemperature(26, 12, { roomC: 30, flourC: 28, pasteC: 60 }, true); // 104 − 130 = −26
-    expect(hot.liquidC).toBe(-26);
-    expect(hot.advice).toMatch(/crushed ice/);
-    const cold = liquidTemperature(26, 4, { roomC: 10, flourC: 8, pasteC: 20 }, true); // 104 − 42 = 62
-    expect(cold.liquidC).toBe(62);
-    expect(cold.advice).toMatch(/stresses the yeast/);
+    expect(liquidTemperature(26, 12, { roomC: 24, flourC: 22, pasteC: 30 }, true)).toEqual({ liquidC: 16 });
+    expect(liquidTemperature(26, 12, { roomC: 30, flourC: 28, pasteC: 60 }, true).liquidC).toBe(-26); // 104 − 130
+    expect(liquidTemperature(26, 4, { roomC: 10, flourC: 8, pasteC: 20 }, true).liquidC).toBe(62); // 104 − 42
+  });
+
+  it("a °F friction habit typed as °C (26) turns 16 °C liquid into about 4 °C, and is warned", () => {
+    // Demo milk bread: DDT 26 °C, room 24, flour 22, paste 30. Friction 12 °C gives 16 °C; 26 gives 2 °C.
+    expect(liquidTemperature(26, 26, { roomC: 24, flourC: 22, pasteC: 30 }, true).liquidC).toBe(2);
+    expect(formulaWarnings({ frictionC: 26 }).frictionC).toMatch(/26 is high for a friction factor in °C.*°F factor, in °C it is 14\.4/);
+    expect(formulaWarnings({ frictionC: 12 })).toEqual({});
+    expect(formulaWarnings({ frictionC: 20 })).toEqual({});
+  });
+});
+
+describe("ice for the liquid (common practice: ice = W × (T_supply − T_wanted) ÷ (T_supply + 80) in °C, + 112 in °F)", () => {
+  it("worked example: 10 kg water, 20 °C supply, 10 °C wanted → 1.0 kg ice; the °F form gives the same ice", () => {
+    expect(iceGrams(10000, 20, 10)).toBeCloseTo(1000, 9);
+    // The same temperatures in °F: 68 °F supply, 50 °F wanted: 10 000 × 18 ÷ 180 = 1000 g.
+    expect(iceGrams(10000, celsiusToFahrenheit(20), celsiusToFahrenheit(10), "F")).toBeCloseTo(1000, 9);
+    // And for other temperatures the two forms agree too (80 cal/g ⇔ 144 BTU/lb; 112 = 144 − 32).
+    for (const [s, w] of [[24, 3], [15, 8], [30, 0]]) {
+      expect(iceGrams(5000, celsiusToFahrenheit(s), celsiusToFahrenheit(w), "F")).toBeCloseTo(iceGrams(5000, s, w), 6);
+    }
+    expect(iceGrams(10000, 10, 20)).toBe(0);
+  });
+
+  it("a water dough: the ice replaces part of the water, by the formula", () => {
+    const l = planLiquid(10, [{ ingredientId: 2, grams: 10000, water: true }], { tapC: 20 });
+    expect(l).toMatchObject({ action: "ice", iceGrams: 1000, waterIngredientId: 2, chillToC: null });
+    const text = liquidAdviceText(l, unitsFor("metric"), (id) => lib.get(id)!.name, false)!;
+    expect(text).toBe("Weigh the water as 9,000 g of water from the tap (20 °C) + 1,000 g of crushed ice. Ice replaces water only.");
+    expect(liquidAdviceText(l, unitsFor("us"), (id) => lib.get(id)!.name, false)).toBe("Weigh the water as 19 lb 13.47 oz of water from the tap (68 °F) + 2 lb 3.27 oz of crushed ice. Ice replaces water only.");
+  });
+
+  it("a milk dough without water: chill the milk, never turn it into ice or water", () => {
+    const l = planLiquid(2, [{ ingredientId: 5, grams: 3000, water: false }], { tapC: 18, milkC: 4 });
+    expect(l).toMatchObject({ action: "chill", iceGrams: 0, chillToC: 2, waterIngredientId: null });
+    const text = liquidAdviceText(l, "metric", (id) => lib.get(id)!.name, true)!;
+    expect(text).toMatch(/^Chill the whole milk to 2 °C before weighing \(it comes at 4 °C\)/);
+    expect(text).not.toMatch(/crushed ice \(weighed|ice as part of the (whole )?milk|replace part of the liquid/i);
+    // Colder than milk can be: as cold as it goes, never ice; the other factors come down (the paste cools further).
+    const cold = planLiquid(-5, [{ ingredientId: 5, grams: 3000, water: false }], { milkC: 4 });
+    expect(cold).toMatchObject({ action: "too_cold", iceGrams: 0, chillToC: 1 });
+    expect(liquidAdviceText(cold, "metric", (id) => lib.get(id)!.name, true)).toMatch(/never replace it with ice or water.*let the paste cool further/);
+  });
+
+  it("milk and water: ice only the water line, by the heat balance, the milk straight from the cooler", () => {
+    // W (T_tap − T) + M (T_milk − T) = I (T_tap + 80): 800 × (16 − 6) + 2000 × (4 − 6) = 4000 → I = 4000 ÷ 96 = 41.7 g
+    const l = planLiquid(6, [{ ingredientId: 5, grams: 2000, water: false }, { ingredientId: 2, grams: 800, water: true }], { tapC: 16, milkC: 4 });
+    expect(l).toMatchObject({ action: "ice", iceGrams: 41.7, waterIngredientId: 2, otherIngredientIds: [5] });
+    expect(liquidAdviceText(l, "metric", (id) => lib.get(id)!.name, true)).toBe("Weigh the water as 758 g of water from the tap (16 °C) + 41.7 g of crushed ice and the whole milk straight from the cooler (4 °C). Ice replaces water only.");
+    // Not enough water to carry the cooling: all of it as ice, and the milk chilled to T + W (80 + T) ÷ M.
+    const more = planLiquid(1, [{ ingredientId: 5, grams: 5000, water: false }, { ingredientId: 2, grams: 50, water: true }], { tapC: 16, milkC: 8 });
+    expect(more).toMatchObject({ action: "ice_and_chill", iceGrams: 50, chillToC: 1.8 }); // 1 + 50 × 81 ÷ 5000 = 1.81
+  });
+
+  it("too warm: never a hotter paste, never liquid above 40 °C, but a longer mix or proof", () => {
+    const l = planLiquid(62, [{ ingredientId: 5, grams: 3000, water: false }], { milkC: 4 });
+    expect(l).toMatchObject({ action: "too_warm", warmToC: 40 });
+    const text = liquidAdviceText(l, "metric", (id) => lib.get(id)!.name, true)!;
+    expect(text).toMatch(/no more than 40 °C/);
+    expect(text).toMatch(/longer mix, or a longer bulk ferment and proof/);
+    expect(text).not.toMatch(/paste (warmer|hotter) instead|add the paste warmer/i);
+    expect(text).toMatch(/Add the paste cooled, as always, not hotter/);
+    expect(liquidAdviceText(l, "us", (id) => lib.get(id)!.name, true)).toMatch(/^144 °F is warmer.*no more than 104 °F/);
+  });
+
+  it("right as it comes: nothing to say; colder supply than wanted: warm it", () => {
+    expect(planLiquid(15.5, [{ ingredientId: 2, grams: 1000, water: true }], { tapC: 15 }).action).toBe("as_is");
+    const warm = planLiquid(30, [{ ingredientId: 2, grams: 1000, water: true }], { tapC: 15 });
+    expect(warm).toMatchObject({ action: "warm", warmToC: 30 });
+    expect(liquidAdviceText(warm, "us", () => "Water", false)).toBe("Warm the liquid to 86 °F; never above 104 °F.");
+  });
+
+  it("planDough works the ice out per mix from its own final-mix water", () => {
+    const lean: FormulaSpec = { id: 1, version: 1, name: "Lean", lossPercent: 0, ddtC: 24, frictionC: 14, paste: null, steps: [],
+      lines: [{ ingredientId: 1, percent: 100 }, { ingredientId: 2, percent: 60 }, { ingredientId: 3, percent: 2 }, { ingredientId: 4, percent: 1 }] };
+    // 16,300 g of dough in 2 mixes (10 kg mixer): 3,000 g water each. Liquid 24 × 3 − (26 + 22 + 14) = 10 °C; tap 20 °C.
+    const products = [planProduct({ productId: 1, name: "x", units: 1630, extraPans: 0, unitsPerPan: 1, piecesPerUnit: 1, pieceGrams: 10, formulaId: 1 })];
+    const dough = planDough(lean, lib, products, 10, { roomC: 26, flourC: 22, pasteC: 0, tapC: 20 });
+    expect(dough.mixes).toHaveLength(2);
+    expect(dough.mixes.map((m) => m.liquidTempC)).toEqual([10, 10]);
+    expect(mixLiquidLines(dough.mixes[0].ingredients, lib)).toEqual([{ ingredientId: 2, grams: 3000, water: true }]);
+    expect(dough.mixes.map((m) => m.liquid!.iceGrams)).toEqual([300, 300]); // 3000 × 10 ÷ 100
   });
 });
 
@@ -141,10 +218,12 @@ describe("trade facts (common practice, no source)", () => {
     expect(dough.mixes[0].liquidTempC).toBe(16);
   });
 
-  it("effective hydration counts the water in milk, butter and egg (USDA FoodData Central, from memory)", () => {
+  it("effective hydration by the usual convention: water in milk, egg and butter over flour, not the flour's own moisture", () => {
     const f = formulaFigures(rolls, lib);
-    // water: flour 100×0.12 + milk 60×0.88 + egg 10×0.76 + butter 10×0.16 + yeast 1.5×0.05 = 74.075
-    expect(f.effectiveHydrationPercent).toBeCloseTo(74.075, 3);
+    // Water contents from USDA FoodData Central (from memory): whole milk 88 %, unsalted butter 18 %, whole egg 76 %.
+    // milk 60×0.88 + egg 10×0.76 + butter 10×0.18 = 62.2 over flour 100. Flour (12 %) and dry yeast are not counted.
+    expect(f.effectiveHydrationPercent).toBeCloseTo(62.2, 6);
+    expect(f.flourMoisturePercent).toBeCloseTo(12, 6);
     expect(f.hydrationPercent).toBe(60);
     expect(f.pasteSharePercent).toBe(5);
     expect(f.pastePercent).toBeCloseTo(30, 6); // 5 % flour + 25 % milk
@@ -159,6 +238,14 @@ describe("formula checks", () => {
     expect(validateFormula({ lossPercent: 2, paste: null, lines: [{ ingredientId: 99, percent: 100 }] }, lib)["lines.0.ingredientId"]).toMatch(/not in the library/);
     const paste = validateFormula({ lossPercent: 2, paste: { flourIngredientId: 1, liquidIngredientId: 5, flourPercent: 20, liquidRatio: 5, cookToC: 65 }, lines: [{ ingredientId: 1, percent: 100 }, { ingredientId: 5, percent: 60 }] }, lib);
     expect(paste["paste.liquidRatio"]).toMatch(/needs 100 % liquid.*only 60 %/);
+  });
+
+  it("refuses a paste cooked below about 60 °C, where wheat starch does not gelatinise (common practice: 60–70 °C)", () => {
+    const withCook = (cookToC: number) => validateFormula({ lossPercent: 2, paste: { flourIngredientId: 1, liquidIngredientId: 5, flourPercent: 5, liquidRatio: 5, cookToC }, lines: [{ ingredientId: 1, percent: 100 }, { ingredientId: 5, percent: 60 }] }, lib)["paste.cookToC"];
+    expect(withCook(40)).toMatch(/60–100 °C.*gelatinise/);
+    expect(withCook(59.9)).toBeDefined();
+    expect(withCook(60)).toBeUndefined();
+    expect(withCook(65)).toBeUndefined();
   });
 
   it("rounds grams to 1 g, or 0.1 g under 50 g, and apportions exactly", () => {
