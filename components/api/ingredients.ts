@@ -1,6 +1,7 @@
 import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
 import { api } from "./client";
 import { formulaKeys } from "./formulas";
+import { productKeys } from "./products";
 import { productionKeys } from "./production";
 import type { IngredientDto, IngredientInput } from "../../shared/schemas/production";
 
@@ -27,6 +28,8 @@ function useIngredientSaved() {
     // Names, water content, allergens and packs show in formulas, plans and the forecast.
     void qc.invalidateQueries({ queryKey: formulaKeys.all });
     void qc.invalidateQueries({ queryKey: productionKeys.all });
+    // Products declare their formula's and components' ingredients' allergens.
+    void qc.invalidateQueries({ queryKey: productKeys.all });
   };
 }
 

@@ -41,6 +41,10 @@ function useProductSaved() {
   return (product: ProductDto) => {
     qc.setQueryData(productKeys.detail(product.id), product);
     void qc.invalidateQueries({ queryKey: productKeys.lists() });
+    // Its formula, components and bake feed the plans and the forecast; formulas list their products.
+    // (productionKeys.all and formulaKeys.all, written out: formulas.ts imports this module.)
+    void qc.invalidateQueries({ queryKey: ["production"] });
+    void qc.invalidateQueries({ queryKey: ["formulas"] });
   };
 }
 

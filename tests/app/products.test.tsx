@@ -1,7 +1,13 @@
 import { fireEvent, screen, waitFor } from "expo-router/testing-library";
 import { BOOKKEEPER, OWNER, PRODUCTS, apiError, mockApi, product, renderApp, sessionRoutes, signedInAs } from "./helpers";
-import { EMPTY_PRODUCT, checkProduct } from "../../components/screens/products/ProductFormScreen";
+import { EMPTY_PRODUCT, checkProduct, previewAllergens } from "../../components/screens/products/ProductFormScreen";
 import { productsApi } from "../../components/api/products";
+import { INGREDIENTS, formulaDto, ingredient } from "./production-fixtures";
+
+/** The library with a sesame topping ingredient; a brioche formula (egg, milk, wheat) beside the milk bread. */
+const LIBRARY = [...INGREDIENTS, ingredient({ id: 20, name: "Toasted sesame seeds", kind: "inclusion", waterPercent: 2, allergens: ["sesame"], packName: "5 lb bag", packGrams: 2268, packCostCents: 1650 })];
+const FORMULAS = [formulaDto(), formulaDto({ id: 3, name: "Brioche", steps: [{ kind: "bake", minutes: 16, temperatureC: 190 }, { kind: "cool", minutes: 30 }], productIds: [] })];
+const kitchenRoutes = { "GET /api/formulas": { body: { formulas: FORMULAS } }, "GET /api/ingredients": { body: { ingredients: LIBRARY } } };
 
 const ALL = [...PRODUCTS, product({ id: 103, name: "Old seeded loaf", active: false })];
 
@@ -73,6 +79,7 @@ describe("product form", () => {
     await fillRequired();
     expect(screen.getByText("= 18 in")).toBeOnTheScreen();
     expect(screen.getByText("= 13 in")).toBeOnTheScreen();
+    fireEvent.press(screen.getByTestId("product-making-bought_in"));
     fireEvent.changeText(screen.getByTestId("product-price"), "$14.40");
     fireEvent.press(screen.getByTestId("product-allergens-milk"));
     fireEvent.press(screen.getByTestId("product-allergens-wheat"));
@@ -93,6 +100,9 @@ describe("product form", () => {
       allergens: ["wheat", "milk"],
       mayContain: "sesame",
       active: true,
+      boughtIn: true,
+      formulaId: null,
+      components: [],
     });
     expect(await screen.findByTestId("product-saved")).toHaveTextContent(/Product added/);
   });
@@ -104,19 +114,186 @@ describe("product form", () => {
     });
     renderApp("/office/products/new");
     await fillRequired();
+    fireEvent.press(screen.getByTestId("product-making-bought_in"));
     fireEvent.changeText(screen.getByTestId("product-price"), "9.50");
     fireEvent.press(screen.getByTestId("product-save"));
     expect(await screen.findByTestId("product-saleUnit-error")).toHaveTextContent("Use at most 60 characters.");
   });
 
   it("checkProduct turns a blank notice into null and keeps unknown trace notes", () => {
-    const r = checkProduct({ ...EMPTY_PRODUCT, name: "A", saleUnit: "loaf", piecesPerUnit: "1", pieceGrams: "900", panName: "Pullman", panLengthMm: "330", panWidthMm: "100", price: "9.5", mayContain: ["tree_nuts"], mayContainOther: ["shared fryer"] });
+    const r = checkProduct({ ...EMPTY_PRODUCT, name: "A", saleUnit: "loaf", piecesPerUnit: "1", pieceGrams: "900", panName: "Pullman", panLengthMm: "330", panWidthMm: "100", price: "9.5", making: "bought_in", mayContain: ["tree_nuts"], mayContainOther: ["shared fryer"] });
     expect(r.ok).toBe(true);
     if (r.ok) {
       expect(r.input.priceCents).toBe(950);
       expect(r.input.leadDays).toBeNull();
       expect(r.input.mayContain).toBe("tree_nuts,shared fryer");
     }
+  });
+});
+
+describe("product form: how it's made", () => {
+  beforeEach(() => signedInAs(OWNER));
+
+  async function fillRequired() {
+    await screen.findByTestId("product-name");
+    fireEvent.changeText(screen.getByTestId("product-name"), "Sesame milk buns");
+    fireEvent.changeText(screen.getByTestId("product-saleUnit"), "dozen buns");
+    fireEvent.changeText(screen.getByTestId("product-piecesPerUnit"), "12");
+    fireEvent.changeText(screen.getByTestId("product-pieceGrams"), "50");
+    fireEvent.changeText(screen.getByTestId("product-panName"), "Half-sheet pan");
+    fireEvent.changeText(screen.getByTestId("product-panLengthMm"), "457");
+    fireEvent.changeText(screen.getByTestId("product-panWidthMm"), "330");
+    fireEvent.changeText(screen.getByTestId("product-price"), "15.00");
+  }
+
+  it("a new product cannot go on offer with neither a formula nor the bought-in choice", async () => {
+    const api = mockApi({ ...sessionRoutes(OWNER), ...kitchenRoutes });
+    renderApp("/office/products/new");
+    await fillRequired();
+    fireEvent.press(screen.getByTestId("product-save"));
+    expect(screen.getByTestId("product-making-error")).toHaveTextContent("Choose the formula it is baked from, or mark it bought in / not planned: otherwise buyers could order what production cannot plan.");
+    fireEvent.press(screen.getByTestId("product-making-formula"));
+    fireEvent.press(screen.getByTestId("product-save"));
+    expect(screen.getByTestId("product-formula-error")).toHaveTextContent("Choose the formula it is baked from.");
+    expect(api.callsTo("POST", "/api/products")).toHaveLength(0);
+  });
+
+  it("picks the formula, adds component rows, shows the derived allergens it cannot take off, and sends it all", async () => {
+    const api = mockApi({
+      ...sessionRoutes(OWNER),
+      ...kitchenRoutes,
+      "POST /api/products": { status: 201, body: { product: product({ id: 130, name: "Sesame milk buns" }) } },
+      "GET /api/products/:id": { body: { product: product({ id: 130, name: "Sesame milk buns" }) } },
+    });
+    renderApp("/office/products/new");
+    await fillRequired();
+    fireEvent.press(screen.getByTestId("product-making-formula"));
+    fireEvent.press(await screen.findByTestId("product-formula"));
+    fireEvent.press(await screen.findByTestId("product-formula-option-1"));
+    // The formula's bake and cool steps are the defaults the blank fields stand for.
+    expect(screen.getByText("Blank: the formula's 27 min.")).toBeOnTheScreen();
+    expect(screen.getByText("Blank: the formula's 177 °C.")).toBeOnTheScreen();
+    fireEvent.changeText(screen.getByTestId("product-bakeMinutes"), "16");
+    expect(screen.getByTestId("product-derived-allergens")).toHaveTextContent(/Egg — Milk bread dough/);
+    expect(screen.queryByTestId("product-derived-sesame")).toBeNull();
+
+    expect(screen.getByTestId("product-components-empty")).toBeOnTheScreen();
+    fireEvent.press(screen.getByTestId("add-component"));
+    fireEvent.changeText(screen.getByTestId("component-0-name"), "Sesame topping");
+    fireEvent.press(screen.getByTestId("component-0-ingredient"));
+    fireEvent.press(await screen.findByTestId("component-0-ingredient-option-20"));
+    fireEvent.changeText(screen.getByTestId("component-0-grams"), "2");
+    // A second line, then removed again.
+    fireEvent.press(screen.getByTestId("add-component"));
+    expect(screen.getByTestId("component-1-name").props.value).toBe("Sesame topping"); // a new line continues the last component
+    fireEvent.press(screen.getByTestId("component-1-remove"));
+    expect(screen.queryByTestId("component-1")).toBeNull();
+
+    // Sesame now comes from the topping: shown, and not offered as something to untick.
+    expect(screen.getByTestId("product-derived-sesame")).toHaveTextContent("Sesame — Sesame topping");
+    expect(screen.queryByTestId("product-allergens-sesame")).toBeNull();
+    expect(screen.queryByTestId("product-allergens-egg")).toBeNull();
+    fireEvent.press(screen.getByTestId("product-allergens-mustard"));
+    expect(screen.getByTestId("product-allergen-preview")).toHaveTextContent(/Egg.*Milk.*Mustard.*Sesame/);
+
+    fireEvent.press(screen.getByTestId("product-save"));
+    await waitFor(() => expect(api.callsTo("POST", "/api/products")).toHaveLength(1));
+    expect(api.callsTo("POST", "/api/products")[0].body).toMatchObject({
+      name: "Sesame milk buns",
+      formulaId: 1,
+      boughtIn: false,
+      bakeTempC: null,
+      bakeMinutes: 16,
+      coolMinutes: null,
+      components: [{ kind: "topping", name: "Sesame topping", ingredientId: 20, grams: 2, per: "piece", note: "" }],
+      allergens: ["gluten", "wheat", "egg", "milk", "mustard", "sesame"],
+    });
+  });
+
+  it("edits a product's components: rows from the server, per pan, the server's row errors beside the row", async () => {
+    const sesameBuns = product({
+      id: 140, name: "Sesame brioche buns", formulaId: 3, formulaName: "Brioche", boughtIn: false,
+      allergens: ["gluten", "wheat", "egg", "milk", "sesame"], derivedAllergens: ["gluten", "wheat", "egg", "milk", "sesame"], addedAllergens: [],
+      allergenSources: { gluten: ["Brioche dough"], wheat: ["Brioche dough"], egg: ["Brioche dough", "Egg wash"], milk: ["Brioche dough", "Egg wash"], sesame: ["Toasted sesame topping"] },
+      components: [
+        { kind: "wash", name: "Egg wash", ingredientId: 5, ingredientName: "Whole egg", grams: 1.2, per: "piece", note: "", allergens: ["egg"] },
+        { kind: "topping", name: "Toasted sesame topping", ingredientId: 20, ingredientName: "Toasted sesame seeds", grams: 2, per: "piece", note: "", allergens: ["sesame"] },
+      ],
+      formulaBake: { bakeTempC: 190, bakeMinutes: 16, coolMinutes: 30 }, bake: { bakeTempC: 190, bakeMinutes: 16, coolMinutes: 30 },
+    });
+    const api = mockApi({
+      ...sessionRoutes(OWNER),
+      ...kitchenRoutes,
+      "GET /api/products/:id": { body: { product: sesameBuns } },
+      "PATCH /api/products/:id": apiError(400, "validation_failed", "Weigh at least 0.1 g.", { "components.1.grams": "Weigh at least 0.1 g." }),
+    });
+    renderApp("/office/products/140");
+    await waitFor(() => expect(screen.getByTestId("component-1-ingredient")).toHaveTextContent(/Toasted sesame seeds/));
+    expect(screen.getByTestId("product-formula")).toHaveTextContent(/Brioche/);
+    await waitFor(() => expect(screen.getByTestId("product-derived-sesame")).toHaveTextContent("Sesame — Toasted sesame topping"));
+    expect(screen.getByTestId("product-derived-egg")).toHaveTextContent("Egg — Brioche dough, Egg wash");
+    fireEvent.press(screen.getByTestId("component-0-per-pan"));
+    fireEvent.press(screen.getByTestId("product-save"));
+    expect(await screen.findByTestId("component-1-grams-error")).toHaveTextContent("Weigh at least 0.1 g.");
+    const body = api.callsTo("PATCH", "/api/products/140")[0].body as { components: unknown; allergens: unknown };
+    expect(body.components).toEqual([
+      { kind: "wash", name: "Egg wash", ingredientId: 5, grams: 1.2, per: "pan", note: "" },
+      { kind: "topping", name: "Toasted sesame topping", ingredientId: 20, grams: 2, per: "piece", note: "" },
+    ]);
+    expect(body.allergens).toEqual(["gluten", "wheat", "egg", "milk", "sesame"]);
+  });
+
+  it("choosing bought in hides the bake and components and sends none", async () => {
+    const api = mockApi({
+      ...sessionRoutes(OWNER),
+      ...kitchenRoutes,
+      "POST /api/products": { status: 201, body: { product: product({ id: 131 }) } },
+      "GET /api/products/:id": { body: { product: product({ id: 131 }) } },
+    });
+    renderApp("/office/products/new");
+    await fillRequired();
+    fireEvent.press(screen.getByTestId("product-making-formula"));
+    fireEvent.press(await screen.findByTestId("add-component"));
+    expect(screen.getByTestId("component-0")).toBeOnTheScreen();
+    fireEvent.press(screen.getByTestId("product-making-bought_in"));
+    expect(screen.queryByTestId("component-0")).toBeNull();
+    expect(screen.queryByTestId("product-bakeMinutes")).toBeNull();
+    expect(screen.getByText("Contains")).toBeOnTheScreen(); // the whole declaration is the product's own
+    fireEvent.press(screen.getByTestId("product-allergens-milk"));
+    fireEvent.press(screen.getByTestId("product-save"));
+    await waitFor(() => expect(api.callsTo("POST", "/api/products")).toHaveLength(1));
+    expect(api.callsTo("POST", "/api/products")[0].body).toMatchObject({ boughtIn: true, formulaId: null, components: [], bakeMinutes: null, allergens: ["milk"] });
+  });
+
+  it("shows the bookkeeper how it's made, its bake, its components and where each allergen comes from", async () => {
+    signedInAs(BOOKKEEPER);
+    mockApi({
+      ...sessionRoutes(BOOKKEEPER),
+      "GET /api/products/:id": {
+        body: {
+          product: product({
+            id: 150, formulaId: 1, formulaName: "Milk bread", boughtIn: false, bakeMinutes: 16,
+            bake: { bakeTempC: 177, bakeMinutes: 16, coolMinutes: 30 }, formulaBake: { bakeTempC: 177, bakeMinutes: 27, coolMinutes: 30 },
+            allergens: ["egg", "milk"], allergenSources: { egg: ["Milk bread dough", "Egg wash"], milk: ["Milk bread dough"] },
+            components: [{ kind: "wash", name: "Egg wash", ingredientId: 5, ingredientName: "Whole egg", grams: 0.8, per: "piece", note: "", allergens: ["egg"] }],
+          }),
+        },
+      },
+    });
+    renderApp("/office/products/150");
+    const facts = await screen.findByTestId("product-facts");
+    expect(facts).toHaveTextContent(/From the Milk bread formula/);
+    expect(facts).toHaveTextContent(/16 min at 177 °C, then 30 min cooling/);
+    expect(facts).toHaveTextContent(/Egg wash: Whole egg 0.8 g per piece/);
+    expect(facts).toHaveTextContent(/Egg \(Milk bread dough, Egg wash\); Milk \(Milk bread dough\)/);
+  });
+
+  it("previewAllergens is the union: the product's own list adds to the derived one and never replaces it", () => {
+    const values = { ...EMPTY_PRODUCT, making: "formula" as const, formulaId: 3, allergens: ["mustard" as const], components: [{ key: "k", kind: "topping" as const, name: "", ingredientId: 20, grams: "2", per: "piece" as const, note: "" }] };
+    const d = previewAllergens(values, FORMULAS.map((f) => (f.id === 3 ? { ...f, allergens: ["gluten", "wheat", "egg", "milk"] } : f)), LIBRARY);
+    expect(d.declared).toEqual(["gluten", "wheat", "egg", "milk", "mustard", "sesame"]);
+    expect(d.derived).toEqual(["gluten", "wheat", "egg", "milk", "sesame"]);
+    expect(d.sources.sesame).toEqual(["Topping"]); // a nameless component goes by its kind
   });
 });
 

@@ -81,7 +81,17 @@ export function ProductsScreen({ archived }: { archived?: string }) {
             { key: "qty", label: "Per order", flex: 1, render: (p) => <AppText>{`${p.minQuantity}–${p.maxQuantity}`}</AppText> },
             { key: "lead", label: "Notice", flex: 1, render: (p) => <AppText>{p.leadDays === null ? "Usual" : `${p.leadDays} days`}</AppText> },
             { key: "allergens", label: "Allergens", flex: 0.9, render: (p) => <AppText>{String(p.allergens.length)}</AppText> },
-            { key: "status", label: "Status", flex: 1, render: (p) => <Badge label={p.active ? "On offer" : "Archived"} tone={p.active ? "sage" : "neutral"} /> },
+            {
+              key: "status",
+              label: "Status",
+              flex: 1.2,
+              render: (p) => (
+                <View style={styles.badges}>
+                  <Badge label={p.active ? "On offer" : "Archived"} tone={p.active ? "sage" : "neutral"} />
+                  <MakingBadge product={p} />
+                </View>
+              ),
+            },
           ]}
         />
       ) : (
@@ -98,7 +108,10 @@ export function ProductsScreen({ archived }: { archived?: string }) {
               <View style={styles.cardText}>
                 <AppText variant="bodyStrong">{p.name}</AppText>
                 <AppText variant="small" color="muted">{`${p.saleUnit} · ${money(p.listPriceCents)}`}</AppText>
-                <Badge label={p.active ? "On offer" : "Archived"} tone={p.active ? "sage" : "neutral"} />
+                <View style={styles.badges}>
+                  <Badge label={p.active ? "On offer" : "Archived"} tone={p.active ? "sage" : "neutral"} />
+                  <MakingBadge product={p} />
+                </View>
               </View>
             </ListCard>
           ))}
@@ -131,7 +144,15 @@ export function ProductsScreen({ archived }: { archived?: string }) {
   );
 }
 
+/** "Bought in", or a warning when a product has neither a formula nor the bought-in choice (production cannot plan it). */
+function MakingBadge({ product: p }: { product: ProductDto }) {
+  if (p.boughtIn) return <Badge label="Bought in" tone="neutral" testID={`product-${p.id}-bought-in`} />;
+  if (p.formulaId === null) return <Badge label="No formula" tone="danger" testID={`product-${p.id}-no-formula`} />;
+  return null;
+}
+
 const styles = StyleSheet.create({
+  badges: { flexDirection: "row", flexWrap: "wrap", gap: space.xs },
   flex: { flex: 1, minWidth: 0 },
   nameCell: { flexDirection: "row", alignItems: "center", gap: space.md },
   cardText: { flex: 1, gap: space.xxs },
