@@ -31,6 +31,7 @@ import { useUnits, type Units } from "../../production/units";
 import { useIsWide } from "../../shell/useIsWide";
 import { CautionsCard } from "./Cautions";
 import { MixCard } from "./MixCard";
+import { ComponentCards } from "./ComponentCards";
 import { Timeline } from "./Timeline";
 import { DateBar, PansCard, PdfButtons, SettingsFooter, StatusCard, TemperaturesCard, TotalsCard, UnitsSwitch, WarningsCard } from "./BakeDayParts";
 import { WEEKDAY_LONG, weekdayOf } from "../../../shared/calendar";
@@ -293,6 +294,7 @@ function PlanBody({ date, plan, units, paths }: PlanBodyProps) {
           <EmptyState icon="box" title="No doughs to mix" message="The ordered products have no formula yet." testID="mixes-empty" />
         )}
       </View>
+      <ComponentCards cards={plan.components} units={units} wide={wide} />
 
       <Timeline
         plan={plan}
