@@ -268,23 +268,74 @@ function lastLocalTimeAtOrBefore(hhmm: string, before: DateTime): DateTime {
   return t;
 }
 
-/** ISO instants in the bakery's zone, fast: the zone's offset looked up once per quarter hour (luxon). */
+const pad2 = (n: number) => (n < 10 ? `0${n}` : String(n));
+/** "00:00" … "23:59", for writing whole-minute instants without a Date each time. */
+const CLOCK = Array.from({ length: 1440 }, (_, m) => `${pad2(Math.floor(m / 60))}:${pad2(m % 60)}`);
+
+const SAMPLE_MS = 6 * 3600_000;
+
+/**
+ * The zone's UTC offset (minutes) at an instant, from luxon, asked rarely: sampled every 6 hours, and where two
+ * samples differ the change is found to the minute by halving. No time zone changes its offset twice within
+ * 6 hours.
+ */
+function offsetTable(zone: Zone) {
+  const samples = new Map<number, number>();
+  const changes = new Map<number, number>();
+  const sample = (k: number) => {
+    let o = samples.get(k);
+    if (o === undefined) {
+      o = zone.offset(k * SAMPLE_MS);
+      samples.set(k, o);
+    }
+    return o;
+  };
+  return (ms: number): number => {
+    const k = Math.floor(ms / SAMPLE_MS);
+    const a = sample(k);
+    const b = sample(k + 1);
+    if (a === b) return a;
+    let at = changes.get(k);
+    if (at === undefined) {
+      let lo = k * SAMPLE_MS;
+      let hi = (k + 1) * SAMPLE_MS;
+      while (hi - lo > MS_PER_MIN) {
+        const mid = lo + Math.floor((hi - lo) / 2 / MS_PER_MIN) * MS_PER_MIN;
+        if (zone.offset(mid) === a) lo = mid;
+        else hi = mid;
+      }
+      at = hi;
+      changes.set(k, at);
+    }
+    return ms < at ? a : b;
+  };
+}
+
+/**
+ * ISO instants in the bakery's zone, written as luxon's toISO() writes them ("2026-06-11T06:30:00.000-05:00"),
+ * fast: offsets from offsetTable, each local date written once; the scheduler's instants are whole minutes.
+ */
 function isoWriter(zone: Zone) {
-  const cache = new Map<number, number>();
+  const offsetAt = offsetTable(zone);
+  const days = new Map<number, string>();
   const utcStyle = DateTime.fromMillis(0, { zone }).toISO()?.endsWith("Z") ?? false;
+  const offsetText = (off: number) => {
+    if (off === 0 && utcStyle) return "Z";
+    const a = Math.abs(off);
+    return `${off < 0 ? "-" : "+"}${pad2(Math.floor(a / 60))}:${pad2(a % 60)}`;
+  };
   return (minutes: number): string => {
     const ms = minutes * MS_PER_MIN;
-    const bucket = Math.floor(ms / 900_000);
-    let off = cache.get(bucket);
-    if (off === undefined) {
-      off = zone.offset(ms);
-      cache.set(bucket, off);
+    const off = offsetAt(ms);
+    if (!Number.isInteger(minutes)) return `${new Date(ms + off * MS_PER_MIN).toISOString().slice(0, 23)}${offsetText(off)}`;
+    const local = minutes + off;
+    const day = Math.floor(local / 1440);
+    let d = days.get(day);
+    if (d === undefined) {
+      d = new Date(day * 86_400_000).toISOString().slice(0, 10);
+      days.set(day, d);
     }
-    const local = new Date(ms + off * MS_PER_MIN).toISOString().slice(0, 23);
-    if (off === 0 && utcStyle) return `${local}Z`;
-    const sign = off < 0 ? "-" : "+";
-    const a = Math.abs(off);
-    return `${local}${sign}${String(Math.floor(a / 60)).padStart(2, "0")}:${String(a % 60).padStart(2, "0")}`;
+    return `${d}T${CLOCK[local - day * 1440]}:00.000${offsetText(off)}`;
   };
 }
 
@@ -588,23 +639,30 @@ export function scheduleDay(input: ScheduleInput): DaySchedule {
     const totalGrams = segs.reduce((s, x) => s + x.pans * x.item.gramsPerPan, 0);
     const totalMix = mixes.reduce((s, m) => s + m.doughGrams, 0) || 1;
     // Global split points in pan count: pan i (0-based) goes to the mix whose share holds its middle.
+    // The boundaries rise, so one walk over the segments finds them all.
     const n = mixes.length;
     const splits: number[] = [];
-    let cumMix = 0;
-    for (let j = 0; j < n - 1; j++) {
-      cumMix += mixes[j].doughGrams;
-      const boundary = (totalGrams * cumMix) / totalMix;
+    {
+      let cumMix = 0;
+      const boundaries = mixes.slice(0, n - 1).map((m) => {
+        cumMix += m.doughGrams;
+        return (totalGrams * cumMix) / totalMix;
+      });
+      let j = 0;
       let cum = 0;
       let idx = 0;
-      let found = totalPans;
       for (const s of segs) {
         const w = s.item.gramsPerPan;
-        const k = Math.ceil((boundary - cum) / w - 0.5 - EPS);
-        if (k < s.pans) { found = idx + Math.max(0, k); break; }
+        while (j < boundaries.length) {
+          const k = Math.ceil((boundaries[j] - cum) / w - 0.5 - EPS);
+          if (k >= s.pans) break;
+          splits.push(idx + Math.max(0, k));
+          j++;
+        }
         cum += s.pans * w;
         idx += s.pans;
       }
-      splits.push(found);
+      while (splits.length < n - 1) splits.push(totalPans);
     }
     // every mix makes at least one pan when there are enough pans
     if (totalPans >= n) {
@@ -613,14 +671,20 @@ export function scheduleDay(input: ScheduleInput): DaySchedule {
     }
     const bounds = [0, ...splits, totalPans];
     let idx = 0;
+    let j = 0;
     for (const s of segs) {
-      for (let j = 0; j < n; j++) {
-        const lo = Math.max(bounds[j], idx);
-        const hi = Math.min(bounds[j + 1], idx + s.pans);
-        if (hi <= lo) continue;
+      const end = idx + s.pans;
+      for (let lo = idx; lo < end;) {
+        while (bounds[j + 1] <= lo) j++;
+        const hi = Math.min(bounds[j + 1], end);
         const key = mixKey(fid, mixes[j].index);
-        const list = mixPortions.get(key) ?? [];
-        let portion = list.find((p) => p.load === s.load);
+        let list = mixPortions.get(key);
+        if (!list) {
+          list = [];
+          mixPortions.set(key, list);
+        }
+        // a mix's segments come load by load, so its current portion is the last one
+        let portion = list.length && list[list.length - 1].load === s.load ? list[list.length - 1] : undefined;
         if (!portion) {
           portion = { load: s.load, pans: new Map(), pieces: 0, gramsPans: 0 };
           list.push(portion);
@@ -628,9 +692,9 @@ export function scheduleDay(input: ScheduleInput): DaySchedule {
         portion.pans.set(s.item.productId, (portion.pans.get(s.item.productId) ?? 0) + (hi - lo));
         portion.pieces += (hi - lo) * s.item.piecesPerPan;
         portion.gramsPans += (hi - lo) * s.item.gramsPerPan;
-        mixPortions.set(key, list);
+        lo = hi;
       }
-      idx += s.pans;
+      idx = end;
     }
   }
 
@@ -777,14 +841,18 @@ export function scheduleDay(input: ScheduleInput): DaySchedule {
   }
 
   // ---- D. write it out --------------------------------------------------------------------------
-  const entries: (ScheduleEntry & { _start: number; _seq: number })[] = [];
-  let seq = 0;
+  const unsorted: ScheduleEntry[] = [];
+  const starts: number[] = [];
   const ids = new Set<string>();
   const push = (e: Omit<ScheduleEntry, "startsAt" | "endsAt" | "label"> & { label?: string }, start: number, end: number) => {
     let id = e.id;
     for (let k = 2; ids.has(id); k++) id = `${e.id}-${k}`;
     ids.add(id);
-    entries.push({ ...e, id, label: e.label ?? SCHEDULE_LABELS[e.step], startsAt: iso(start), endsAt: iso(end), _start: start, _seq: seq++ });
+    unsorted.push({
+      id, step: e.step, label: e.label ?? SCHEDULE_LABELS[e.step], resource: e.resource, formulaId: e.formulaId, mix: e.mix, load: e.load,
+      productIds: e.productIds, pans: e.pans, startsAt: iso(start), endsAt: iso(end), temperatureC: e.temperatureC, dayBefore: e.dayBefore, note: e.note,
+    });
+    starts.push(start);
   };
   const scheduledMixes: ScheduledMix[] = [];
   for (const c of done) {
@@ -850,16 +918,23 @@ export function scheduleDay(input: ScheduleInput): DaySchedule {
     const after = drafts.find((d) => d.oven === h.oven && d.start >= h.end);
     push({ id: `heat-${h.oven.id}-${h.start}`, step: "heat", label: `${h.temp > h.fromTemp ? "Heat" : "Bring down"} ${ref.name}`, resource: ref, formulaId: null, mix: null, load: after ? loadNo.get(after)! : null, productIds: [], pans: 0, temperatureC: h.temp, dayBefore: false, note: null }, h.start, h.end);
   }
-  entries.sort((a, b) => a._start - b._start || a._seq - b._seq);
+  const order = unsorted.map((_, i) => i).sort((a, b) => starts[a] - starts[b] || a - b);
+  const entries = order.map((i) => unsorted[i]);
+  const startOf = order.map((i) => starts[i]);
 
   // ---- E. does the day fit the shift? ----------------------------------------------------------
   // The retard itself runs overnight from the day before: the day's own work starts after it.
-  const sameDay = entries.filter((e) => !e.dayBefore && e.step !== "retard");
-  const first = sameDay.length ? sameDay.reduce((a, b) => (b._start < a._start ? b : a)) : null;
+  let firstAt = -1;
+  let count = 0;
+  for (let i = 0; i < entries.length; i++) {
+    if (entries[i].dayBefore || entries[i].step === "retard") continue;
+    if (firstAt < 0) firstAt = i;
+    if (startOf[i] < shiftStart) count++;
+  }
+  const first = firstAt >= 0 ? { ...entries[firstAt], _start: startOf[firstAt] } : null;
   let earlierStart: DaySchedule["earlierStart"] = null;
   if (first && first._start < shiftStart) {
     const minutes = shiftStart - first._start;
-    const count = sameDay.filter((e) => e._start < shiftStart).length;
     const fname = first.formulaId ? formulas.get(first.formulaId)?.name : null;
     const what = `${first.label}${fname ? ` (${fname}${first.mix ? `, mix ${first.mix}` : ""}${first.load ? `, oven load ${first.load}` : ""})` : ""}`;
     const text = `Start ${minutesText(minutes)} earlier, at ${whenText(first._start)}.`;
@@ -873,7 +948,7 @@ export function scheduleDay(input: ScheduleInput): DaySchedule {
 
   const lanes: ResourceRef[] = [...mixerRefs.values(), crewRef, ...ovenRefs.values()];
   return {
-    entries: entries.map(({ _start: _s, _seq: _q, ...e }) => e),
+    entries,
     ovenLoads,
     mixes: scheduledMixes.sort((a, b) => a.formulaId - b.formulaId || a.index - b.index),
     conflicts,
