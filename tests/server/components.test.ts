@@ -80,6 +80,8 @@ describe("seeded allergens", () => {
       expect(p.derivedAllergens).toEqual(union);
       expect(p.addedAllergens).toEqual([]); // the demo's products add nothing of their own: all is derived
     }
+    // A 900 g lidded loaf bakes and cools longer than the dough's rolls (common practice: 35–45 min, 1–2 h cooling).
+    expect(products.find((p) => p.name === "Pullman milk loaf")!.bake).toMatchObject({ bakeMinutes: 40, coolMinutes: 90 });
     const withComponents = products.filter((p) => p.components.length);
     expect(withComponents.map((p) => p.name).sort()).toEqual(["Brioche burger buns", "Cinnamon swirl loaf", "Honey-oat rolls", "Milk-bread dinner rolls", "Milk-bread slider buns", "Sesame brioche buns"]);
   });
@@ -143,8 +145,15 @@ describe("components on the bake day", () => {
     const res = await t.http().get(`/api/production/plan?date=${SAT}`).set(auth(baker));
     expect(res.status).toBe(200);
     const byName = (n: string) => res.body.plan.products.find((p: { name: string }) => p.name === n);
-    expect(byName("Milk-bread slider buns")).toMatchObject({ bakeTempC: 177, bakeMinutes: 16, coolMinutes: 30 }); // own 16 min; 177 °C and 30 min from Milk bread's steps
-    expect(byName("Sesame brioche buns")).toMatchObject({ bakeTempC: 190, bakeMinutes: 16, coolMinutes: 30 }); // all from Brioche's steps
+    // The formulas' own bake and cool steps, as seeded, are the defaults.
+    const formulas: { name: string; steps: { kind: string; minutes: number; temperatureC?: number | null }[] }[] = (await t.http().get("/api/formulas").set(auth(owner))).body.formulas;
+    const step = (formula: string, kind: string) => formulas.find((f) => f.name === formula)!.steps.find((s) => s.kind === kind)!;
+    // Sliders set their own 16 min; the oven temperature and the cooling are Milk bread's.
+    expect(byName("Milk-bread slider buns")).toMatchObject({ bakeTempC: step("Milk bread", "bake").temperatureC, bakeMinutes: 16, coolMinutes: step("Milk bread", "cool").minutes });
+    expect(step("Milk bread", "bake").minutes).not.toBe(16);
+    expect(byName("Milk-bread slider buns").bakeTempC).toBe(177);
+    // The sesame buns set nothing: all three from Brioche's steps.
+    expect(byName("Sesame brioche buns")).toMatchObject({ bakeTempC: 190, bakeMinutes: step("Brioche", "bake").minutes, coolMinutes: step("Brioche", "cool").minutes });
     expect(byName("Sesame brioche buns").allergens).toContain("sesame");
   });
 
