@@ -52,7 +52,10 @@ export const FLOUR_SACK_KG = 25;
 
 /** What the caution derivation reads from a plan (the plan DTO fits; older frozen plans may lack allergens). */
 export interface CautionDay {
-  products: { name: string; formulaId: number | null; allergens?: readonly string[] | null; components?: readonly { kind: string; name: string; allergens?: readonly string[] | null }[] | null }[];
+  products: { name: string; formulaId: number | null; allergens?: readonly string[] | null }[];
+  /** The day's component cards (toppings, washes…) and the ingredients' kinds, to tell a raw egg wash. */
+  components?: readonly { kind: string; name: string; productName: string; lines: readonly { ingredientId: number }[] }[] | null;
+  ingredients?: readonly { ingredientId: number; kind?: string | null }[];
   doughs: {
     formulaId: number;
     name: string;
@@ -96,7 +99,7 @@ export function dayCautions(day: CautionDay, units: Units | UnitSystem): Caution
   // The paste: each formula's own cook-to temperature; steam from the pot; cooling and holding when made ahead.
   const pastes = day.doughs.filter((d) => d.paste);
   for (const d of pastes) {
-    out.push({ key: `paste-${d.formulaId}`, step: "paste", title: `Hot paste: ${d.name}`, text: pasteCautionText(d.paste!.cookToC, u) });
+    out.push({ key: `paste-${d.formulaId}`, step: "paste", title: `Hot paste (${d.name})`, text: pasteCautionText(d.paste!.cookToC, u) });
   }
   if (pastes.length) {
     const c = FOOD_CODE_COOLING;
@@ -135,16 +138,18 @@ export function dayCautions(day: CautionDay, units: Units | UnitSystem): Caution
   }
 
   // Raw egg wash: a wash component made with egg, or a formula's wash step.
-  const eggWashes = day.products.flatMap((p) => (p.components ?? []).filter((c) => c.kind === "wash" && (c.allergens ?? []).includes("egg")).map((c) => c.name));
+  const kinds = new Map((day.ingredients ?? []).map((i) => [i.ingredientId, i.kind ?? null]));
+  const eggWashes = (day.components ?? []).filter((c) => c.kind === "wash" && c.lines.some((l) => kinds.get(l.ingredientId) === "egg")).map((c) => c.name);
   const washSteps = day.timeline.some((e) => e.step === "wash");
   if (eggWashes.length || washSteps) {
     const c = FOOD_CODE_COOLING;
-    const which = eggWashes.length ? `${list([...new Set(eggWashes)])} is raw egg. ` : "If the wash is made with raw egg: ";
+    const names = [...new Set(eggWashes)];
+    const which = names.length ? `${list(names)} ${names.length === 1 ? "is" : "are"} made with raw egg: ` : "If the wash is made with raw egg: ";
     out.push({
       key: "egg-wash",
       step: "wash",
       title: "Raw egg wash",
-      text: `${which}Keep it at ${t(c.coldC)} or below between uses, make it fresh for the shift, never top up old wash with new, and throw what is left away at the end of the shift. Wash your hands and the brushes after brushing; the washed pieces are baked straight after.`,
+      text: `${which}keep it at ${t(c.coldC)} or below between uses, make it fresh for the shift, never top up old wash with new, and throw what is left away at the end of the shift. Wash your hands and the brushes after brushing; the washed pieces are baked straight after.`,
     });
   }
 
@@ -213,4 +218,34 @@ export function liquidAdviceText(l: LiquidPlan, units: Units | UnitSystem, nameO
     case "too_warm":
       return `${u.temp(l.wantedC)} is warmer than liquid should be for the yeast. Warm the liquid to no more than ${u.temp(WARMEST_LIQUID_C)}, let the flour come up to room temperature, and expect the dough to start below its target: give it a few minutes' longer mix, or a longer bulk ferment and proof.${withPaste ? " Add the paste cooled, as always, not hotter." : ""}`;
   }
+}
+
+interface LiquidDough {
+  name: string;
+  paste: unknown | null;
+  ingredients: { ingredientId: number; name: string }[];
+  mixes: { index: number; liquidTempC: number | null; liquid?: LiquidPlan | null }[];
+}
+
+/** The liquid advice of one mix of a plan's dough, in the reader's units (null when the liquid is right as it comes). */
+export function mixLiquidAdvice(dough: LiquidDough, mix: LiquidDough["mixes"][number], units: Units | UnitSystem): string | null {
+  if (!mix.liquid) return null;
+  const names = new Map(dough.ingredients.map((i) => [i.ingredientId, i.name]));
+  return liquidAdviceText(mix.liquid, units, (id) => names.get(id) ?? "liquid", !!dough.paste);
+}
+
+/**
+ * Liquids that cannot be reached, as plan warnings in the reader's units: "Milk bread, mix 2: liquid at 35 °F — …".
+ * Plans frozen before the liquid plan existed carry these in their own warnings already (in °C) and add none here.
+ */
+export function liquidWarnings(plan: { doughs: LiquidDough[] }, units: Units | UnitSystem): string[] {
+  const u = asUnits(units);
+  const out: string[] = [];
+  for (const d of plan.doughs) {
+    for (const m of d.mixes) {
+      if (!m.liquid || (m.liquid.action !== "too_cold" && m.liquid.action !== "too_warm")) continue;
+      out.push(`${d.name}, mix ${m.index}: liquid at ${u.temp(m.liquid.wantedC)} — ${mixLiquidAdvice(d, m, u)}`);
+    }
+  }
+  return out;
 }

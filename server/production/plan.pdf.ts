@@ -1,129 +1,185 @@
 import PDFDocument from "pdfkit";
 import { DateTime } from "luxon";
 import type { PlanDto } from "../../shared/schemas/production";
-import { formatMass, formatTemperature, type UnitSystem } from "../../shared/units";
-import { PRODUCTION_CAUTIONS } from "../../shared/cautions";
+import { formatPercent, unitsFor, type UnitSystem } from "../../shared/units";
+import { CAUTION_FOOTNOTE, dayCautions, liquidWarnings, mixLiquidAdvice, pasteCautionText } from "../../shared/cautions";
+import { liquidNeedsAttention } from "../../shared/production";
 
 const INK = "#2A211B";
 const MUTED = "#5E5247";
 const CRUST = "#8A3F12";
+const ALERT = "#A3261B";
 const RULE = "#D9CBB8";
+const MARGIN = 40;
+const BOTTOM = 48;
+
+type Font = "Helvetica" | "Helvetica-Bold";
 
 /**
- * The production sheet (overview, doughs, timeline, cautions) followed by one weigh-out card per mix,
- * in large type for a bakery wall. Letter size; pdfkit's built-in Helvetica.
+ * The production sheet (overview, doughs, timeline, cautions) followed by one weigh-out card per mix, in large
+ * type for a bakery wall. Letter size, pdfkit's built-in Helvetica. Every piece of text is drawn inside a measured
+ * box (an x and a width within the margins; its height from heightOfString before it is placed), so nothing
+ * runs past the right margin or splits across a page: long names wrap inside their column. Numbers go through
+ * shared/units.ts in the chosen system, the same formatting the screens use.
  */
 export function renderPlanPdf(plan: PlanDto & { bakeryName: string; timeZone: string }, units: UnitSystem): Promise<Buffer> {
-  const doc = new PDFDocument({ size: "LETTER", margin: 40, info: { Title: `Production sheet ${plan.date}`, Author: plan.bakeryName, Creator: "Panwise" } });
+  const doc = new PDFDocument({ size: "LETTER", margin: MARGIN, info: { Title: `Production sheet ${plan.date}`, Author: plan.bakeryName, Creator: "Panwise" } });
   const chunks: Buffer[] = [];
   doc.on("data", (c: Buffer) => chunks.push(c));
   const done = new Promise<Buffer>((resolve) => doc.on("end", () => resolve(Buffer.concat(chunks))));
-  const g = (grams: number) => formatMass(grams, units);
-  const t = (c: number) => formatTemperature(c, units);
+  const u = unitsFor(units);
   const time = (iso: string) => DateTime.fromISO(iso, { setZone: true }).setZone(plan.timeZone).toFormat("ccc HH:mm");
   const day = DateTime.fromISO(plan.date).toFormat("cccc d LLLL yyyy");
-  const width = doc.page.width - 80;
+  const W = doc.page.width - 2 * MARGIN;
+  const bottom = () => doc.page.height - BOTTOM;
 
-  const heading = (text: string, size = 16) => {
-    doc.moveDown(0.6).fillColor(CRUST).font("Helvetica-Bold").fontSize(size).text(text).fillColor(INK);
+  const ensure = (space: number) => {
+    if (doc.y + space > bottom()) doc.addPage();
   };
-  const rule = () => doc.moveTo(40, doc.y + 2).lineTo(40 + width, doc.y + 2).strokeColor(RULE).lineWidth(1).stroke().moveDown(0.3);
-  const row = (cols: string[], widths: number[], opts: { bold?: boolean; size?: number; left?: number[] } = {}) => {
+  /** A paragraph in a measured box: wraps at `width`, never split across pages when it fits on one. */
+  const para = (text: string, o: { font?: Font; size?: number; color?: string; x?: number; width?: number; gap?: number; spacing?: number } = {}) => {
+    const x = o.x ?? MARGIN;
+    const width = Math.min(o.width ?? W, MARGIN + W - x);
+    doc.font(o.font ?? "Helvetica").fontSize(o.size ?? 10);
+    const opts = { width, characterSpacing: o.spacing ?? 0 };
+    const h = doc.heightOfString(text, opts);
+    if (h <= bottom() - doc.page.margins.top) ensure(h);
+    doc.fillColor(o.color ?? INK).text(text, x, doc.y, opts);
+    doc.x = MARGIN;
+    doc.y += o.gap ?? 2;
+    doc.fillColor(INK);
+  };
+  const heading = (text: string, size = 16) => {
+    doc.y += size * 0.5;
+    para(text, { font: "Helvetica-Bold", size, color: CRUST });
+  };
+  const rule = () => {
+    doc.moveTo(MARGIN, doc.y + 1).lineTo(MARGIN + W, doc.y + 1).strokeColor(RULE).lineWidth(1).stroke();
+    doc.y += 4;
+  };
+  /** A table row: every cell measured in its column (width − 6 gutter), the row as high as its tallest cell. */
+  const row = (cols: string[], widths: number[], o: { bold?: boolean; size?: number; left?: number[]; color?: string } = {}) => {
+    doc.font(o.bold ? "Helvetica-Bold" : "Helvetica").fontSize(o.size ?? 10);
+    const h = Math.max(...cols.map((c, i) => doc.heightOfString(c || " ", { width: widths[i] - 6 })));
+    ensure(h + 3);
     const y = doc.y;
-    let x = 40;
-    doc.font(opts.bold ? "Helvetica-Bold" : "Helvetica").fontSize(opts.size ?? 10);
-    let h = 0;
+    let x = MARGIN;
     cols.forEach((c, i) => {
-      const align = i === 0 || opts.left?.includes(i) ? "left" : "right";
-      doc.text(c, x, y, { width: widths[i] - 6, align });
-      h = Math.max(h, doc.heightOfString(c, { width: widths[i] - 6 }));
+      const align = i === 0 || o.left?.includes(i) ? "left" : "right";
+      doc.fillColor(o.color ?? INK).text(c, x, y, { width: widths[i] - 6, align });
       x += widths[i];
     });
-    doc.x = 40;
+    doc.fillColor(INK);
+    doc.x = MARGIN;
     doc.y = y + h + 3;
   };
-  const ensure = (space: number) => {
-    if (doc.y + space > doc.page.height - 50) doc.addPage();
+  /** Column widths as shares of the printable width (so a table always ends at the right margin). */
+  const cols = (...shares: number[]) => {
+    const total = shares.reduce((a, b) => a + b, 0);
+    return shares.map((s) => (W * s) / total);
   };
 
   // ---- sheet -------------------------------------------------------------------------------
-  doc.font("Helvetica-Bold").fontSize(11).fillColor(CRUST).text(plan.bakeryName.toUpperCase(), { characterSpacing: 1 });
-  doc.font("Helvetica-Bold").fontSize(24).fillColor(INK).text(`Bake day: ${day}`);
-  doc.font("Helvetica").fontSize(11).fillColor(MUTED)
-    .text(`Leaves at ${time(plan.inputs.dispatchAt)} · ${plan.frozen ? `frozen ${plan.frozenAt ? DateTime.fromISO(plan.frozenAt).setZone(plan.timeZone).toFormat("ccc d LLL HH:mm") : ""}` : "not frozen yet"} · ${plan.final ? "final" : "NOT FINAL: orders may still change until the cut-off"}`)
-    .text(`Room ${t(plan.inputs.roomC)} · flour ${t(plan.inputs.flourC)} · paste ${t(plan.inputs.pasteC)} · mixer ${plan.inputs.mixerCapacityKg} kg · packing ${plan.inputs.packingMinutes} min from ${time(plan.inputs.packFrom)}`)
-    .fillColor(INK);
+  para(plan.bakeryName.toUpperCase(), { font: "Helvetica-Bold", size: 11, color: CRUST, spacing: 1 });
+  para(`Bake day: ${day}`, { font: "Helvetica-Bold", size: 24 });
+  const frozen = plan.frozen ? `frozen ${plan.frozenAt ? DateTime.fromISO(plan.frozenAt).setZone(plan.timeZone).toFormat("ccc d LLL HH:mm") : ""}` : "not frozen yet";
+  para(`Leaves at ${time(plan.inputs.dispatchAt)} · ${frozen} · ${plan.final ? "final" : "NOT FINAL: orders may still change until the cut-off"}`, { size: 11, color: MUTED });
+  const supply = [plan.inputs.tapC !== undefined ? `tap water ${u.temp(plan.inputs.tapC)}` : "", plan.inputs.milkC !== undefined ? `milk ${u.temp(plan.inputs.milkC)}` : ""].filter(Boolean).join(" · ");
+  para(
+    `Room ${u.temp(plan.inputs.roomC)} · flour ${u.temp(plan.inputs.flourC)} · paste ${u.temp(plan.inputs.pasteC)}${supply ? ` · ${supply}` : ""} · largest mixer ${u.capacity(plan.inputs.mixerCapacityKg)}` +
+      (plan.inputs.packingMinutes !== undefined && plan.inputs.packFrom ? ` · packing ${plan.inputs.packingMinutes} min from ${time(plan.inputs.packFrom)}` : ""),
+    { size: 11, color: MUTED },
+  );
 
   heading("Pans", 18);
   for (const p of plan.products) {
-    ensure(40);
-    const y = doc.y;
-    doc.font("Helvetica-Bold").fontSize(28).text(String(p.pans), 40, y, { width: 70 });
-    doc.font("Helvetica-Bold").fontSize(13).text(p.name, 115, y + 4, { width: width - 75 });
-    doc.font("Helvetica").fontSize(10).fillColor(MUTED)
-      .text(`${p.panName} · ${p.units} ordered${p.extraPans ? ` + ${p.extraPans} extra pan${p.extraPans > 1 ? "s" : ""}` : ""} · ${p.pieces} pieces of ${g(p.pieceGrams)}`, 115, doc.y, { width: width - 75 })
-      .fillColor(INK);
-    doc.x = 40;
-    doc.y = Math.max(doc.y, y + 34) + 4;
-  }
-  if (plan.warnings.length) {
-    heading("Check", 13);
+    const nameX = MARGIN + 75;
+    const detail = `${p.panName} · ${p.units} ordered${p.extraPans ? ` + ${u.count(p.extraPans, "extra pan", "extra pans")}` : ""} · ${u.count(p.pieces, "piece", "pieces")} of ${u.piece(p.pieceGrams)} scaled dough`;
+    doc.font("Helvetica-Bold").fontSize(13);
+    const nameH = doc.heightOfString(p.name, { width: W - 75 });
     doc.font("Helvetica").fontSize(10);
-    for (const w of plan.warnings) doc.text(`• ${w}`, { width });
+    const detailH = doc.heightOfString(detail, { width: W - 75 });
+    ensure(Math.max(34, nameH + detailH + 6));
+    const y = doc.y;
+    doc.font("Helvetica-Bold").fontSize(28).fillColor(INK).text(String(p.pans), MARGIN, y, { width: 70, lineBreak: false });
+    doc.font("Helvetica").fontSize(8).fillColor(MUTED).text(p.pans === 1 ? "pan" : "pans", MARGIN, y + 28, { width: 70, lineBreak: false });
+    doc.font("Helvetica-Bold").fontSize(13).fillColor(INK).text(p.name, nameX, y + 2, { width: W - 75 });
+    doc.font("Helvetica").fontSize(10).fillColor(MUTED).text(detail, nameX, doc.y, { width: W - 75 });
+    doc.fillColor(INK);
+    doc.x = MARGIN;
+    doc.y = Math.max(doc.y, y + 40) + 4;
+  }
+  const warnings = [...plan.warnings, ...liquidWarnings(plan, u)];
+  if (warnings.length) {
+    heading("Check", 13);
+    for (const w of warnings) para(`• ${w}`);
   }
 
   for (const d of plan.doughs) {
-    ensure(160);
-    heading(`${d.name} — ${g(d.doughGrams)} of dough (formula v${d.formulaVersion})`, 15);
-    doc.font("Helvetica").fontSize(10).fillColor(MUTED).text(`Flour ${g(d.flourGrams)}${d.paste ? ` · paste: ${g(d.paste.flourGrams)} flour + ${g(d.paste.liquidGrams)} liquid, cooked to ${t(d.paste.cookToC)}` : ""} · ${d.mixes.length} mix${d.mixes.length > 1 ? "es" : ""}${d.targetInternalC ? ` · done at about ${t(d.targetInternalC)} inside` : ""}`).fillColor(INK);
-    const widths = [190, 60, 90, 90, 102];
+    ensure(Math.min(70 + 15 * d.ingredients.length, 420)); // the dough's table on one page when it fits
+    heading(`${d.name}: ${u.mass(d.doughGrams)} of dough (formula v${d.formulaVersion})`, 15);
+    para(
+      `Flour ${u.mass(d.flourGrams)}${d.paste ? ` · paste: ${u.mass(d.paste.flourGrams)} flour + ${u.mass(d.paste.liquidGrams)} liquid, cooked to ${u.temp(d.paste.cookToC)}` : ""} · ${u.count(d.mixes.length, "mix", "mixes")}${d.targetInternalC ? ` · done at ${u.temp(d.targetInternalC)} inside` : ""}`,
+      { color: MUTED },
+    );
+    const widths = cols(36, 11, 18, 17, 18);
     row(["Ingredient", "%", "Total", "Paste", "Final mix"], widths, { bold: true });
     rule();
-    for (const i of d.ingredients) row([i.name, String(i.percent), g(i.grams), i.pasteGrams ? g(i.pasteGrams) : "—", g(i.finalMixGrams)], widths);
+    for (const i of d.ingredients) row([i.name, formatPercent(i.percent, 2), u.mass(i.grams), i.pasteGrams ? u.mass(i.pasteGrams) : "—", u.mass(i.finalMixGrams)], widths);
   }
 
   ensure(120);
   heading("Timeline", 15);
-  const tw = [64, 64, 104, 300];
-  if (plan.schedule?.earlierStart) doc.font("Helvetica-Bold").fontSize(11).fillColor("#A3261B").text(plan.schedule.earlierStart.text, { width }).fillColor(INK);
+  if (plan.schedule?.earlierStart) para(plan.schedule.earlierStart.text, { font: "Helvetica-Bold", size: 11, color: ALERT });
+  const tw = cols(12, 12, 20, 56);
   row(["Starts", "Ends", "Where", "Step"], tw, { bold: true, left: [1, 2, 3] });
   rule();
   for (const e of plan.timeline) {
-    ensure(16);
     const names = plan.products.filter((p) => e.productIds.includes(p.productId)).map((p) => p.name).join(", ");
-    const where = e.resource?.name ?? "—";
     const of = [e.mix ? `mix ${e.mix}` : "", e.load ? `oven load ${e.load}` : ""].filter(Boolean).join(", ");
-    row([time(e.startsAt), time(e.endsAt), where, `${e.label}${e.temperatureC ? ` at ${t(e.temperatureC)}` : ""}${of ? ` (${of})` : ""} — ${e.pans === 1 ? "1 pan" : `${e.pans} pans`}: ${names}`], tw, { left: [1, 2, 3] });
+    const pans = e.pans ? ` · ${u.count(e.pans, "pan", "pans")}` : "";
+    row([time(e.startsAt), time(e.endsAt), e.resource?.name ?? "—", `${e.label}${e.temperatureC ? ` at ${u.temp(e.temperatureC)}` : ""}${of ? ` (${of})` : ""}${pans}${names ? `: ${names}` : ""}${e.note ? `. ${e.note}` : ""}`], tw, { left: [1, 2, 3] });
   }
 
-  ensure(140);
   heading("Cautions", 13);
-  doc.font("Helvetica").fontSize(9.5);
-  for (const c of PRODUCTION_CAUTIONS) doc.text(`• ${c.title}: ${c.text}`, { width }).moveDown(0.2);
+  for (const c of dayCautions(plan, u)) {
+    if (c.key === "deferral") para(c.text, { font: "Helvetica-Bold", size: 9.5, gap: 4 });
+    else para(`• ${c.title}: ${c.text}`, { size: 9.5, gap: 4 });
+  }
 
   // ---- one card per mix ------------------------------------------------------------------------
   for (const d of plan.doughs) {
     const names = new Map(d.ingredients.map((i) => [i.ingredientId, i.name]));
     for (const m of d.mixes) {
       doc.addPage();
-      doc.font("Helvetica-Bold").fontSize(12).fillColor(CRUST).text(`${day} · ${plan.bakeryName}`.toUpperCase(), { characterSpacing: 1 });
-      doc.font("Helvetica-Bold").fontSize(30).fillColor(INK).text(`${d.name}`);
-      doc.font("Helvetica-Bold").fontSize(20).text(`Mix ${m.index} of ${d.mixes.length} · ${g(m.doughGrams)}`);
-      doc.font("Helvetica-Bold").fontSize(18).fillColor(m.liquidTempAdvice ? "#A3261B" : INK).text(`Liquid at ${m.liquidTempC === null ? "—" : t(m.liquidTempC)}`);
-      if (m.liquidTempAdvice) doc.font("Helvetica").fontSize(12).text(m.liquidTempAdvice, { width });
-      doc.fillColor(INK).moveDown(0.5);
-      const w = [250, 130, 152];
+      para(`${day} · ${plan.bakeryName}`.toUpperCase(), { font: "Helvetica-Bold", size: 12, color: CRUST, spacing: 1 });
+      para(d.name, { font: "Helvetica-Bold", size: 30 });
+      para(`Mix ${m.index} of ${d.mixes.length} · ${u.mass(m.doughGrams)}`, { font: "Helvetica-Bold", size: 20 });
+      if (m.scheduled) para(`${m.scheduled.dayBefore ? "The day before, " : ""}${time(m.scheduled.startsAt)}–${time(m.scheduled.endsAt)} on ${m.scheduled.mixerName}`, { size: 12, color: MUTED });
+      const attention = m.liquid ? liquidNeedsAttention(m.liquid) : !!m.liquidTempAdvice;
+      para(`Liquid at ${m.liquidTempC === null ? "—" : u.temp(m.liquidTempC)}`, { font: "Helvetica-Bold", size: 18, color: attention ? ALERT : INK });
+      const advice = m.liquid ? mixLiquidAdvice(d, m, u) : m.liquidTempAdvice;
+      if (advice) para(advice, { size: 12, color: attention ? ALERT : INK });
+      doc.y += 6;
+      const w = cols(52, 30, 18);
       if (d.paste) {
-        doc.font("Helvetica-Bold").fontSize(16).fillColor(CRUST).text(`Paste — cook to ${t(d.paste.cookToC)}, stirring; cool before adding`).fillColor(INK);
-        for (const i of m.ingredients.filter((x) => x.pasteGrams > 0)) row([names.get(i.ingredientId) ?? "?", g(i.pasteGrams), "[  ]"], w, { size: 18 });
-        doc.moveDown(0.4);
+        para(`Paste: cook to ${u.temp(d.paste.cookToC)}, stirring; cool before adding`, { font: "Helvetica-Bold", size: 16, color: CRUST });
+        for (const i of m.ingredients.filter((x) => x.pasteGrams > 0)) row([names.get(i.ingredientId) ?? "?", u.mass(i.pasteGrams), "[  ]"], w, { size: 18 });
+        doc.y += 6;
       }
-      doc.font("Helvetica-Bold").fontSize(16).fillColor(CRUST).text("Final mix").fillColor(INK);
-      for (const i of m.ingredients.filter((x) => x.finalMixGrams > 0)) row([names.get(i.ingredientId) ?? "?", g(i.finalMixGrams), "[  ]"], w, { size: 18 });
+      para("Final mix", { font: "Helvetica-Bold", size: 16, color: CRUST });
+      const ice = m.liquid && m.liquid.iceGrams > 0 ? m.liquid : null;
+      for (const i of m.ingredients.filter((x) => x.finalMixGrams > 0)) {
+        const name = names.get(i.ingredientId) ?? "?";
+        if (ice && ice.waterIngredientId === i.ingredientId) {
+          row([`${name} (tap)`, u.mass(Math.max(0, i.finalMixGrams - ice.iceGrams)), "[  ]"], w, { size: 18 });
+          row([`Crushed ice, for the ${name.toLowerCase()}`, u.mass(ice.iceGrams), "[  ]"], w, { size: 18 });
+        } else row([name, u.mass(i.finalMixGrams), "[  ]"], w, { size: 18 });
+      }
       if (d.paste) row(["+ the cooled paste", "", "[  ]"], w, { size: 18 });
-      doc.moveDown(1).font("Helvetica").fontSize(10).fillColor(MUTED)
-        .text("Hot paste scalds: stir with a long spoon, cool before handling. Keep hands clear of a running mixer; guards on. Keep allergen-free work apart. Defer to your local food-safety code and the bakery's own procedures.", { width })
-        .fillColor(INK);
+      doc.y += 10;
+      if (d.targetInternalC) para(`Internal temperature (done at ${u.temp(d.targetInternalC)} or above), one piece per oven load: ________ at ______ by ______`, { font: "Helvetica-Bold", size: 11, gap: 6 });
+      para(`${d.paste ? `${pasteCautionText(d.paste.cookToC, u)} ` : ""}Keep the mixer guard on and hands out of a running bowl. Keep allergen-free work apart. ${CAUTION_FOOTNOTE}`, { size: 10, color: MUTED });
     }
   }
   doc.end();

@@ -10,7 +10,8 @@ import { formulaSpec, ingredientInfo, ingredientLibrary } from "./formulas.servi
 import { cutoffFor, localToday, addDays } from "../../shared/calendar";
 import { expandRule } from "../../shared/recurrence";
 import { Ingredient } from "./production.entity";
-import { planDough, planProduct, roundGrams, type FormulaSpec, type PlannedProduct } from "../../shared/production";
+import { DEFAULT_MILK_C, DEFAULT_TAP_C, liquidNeedsAttention, planDough, planProduct, roundGrams, type FormulaSpec, type PlannedProduct } from "../../shared/production";
+import { liquidAdviceText } from "../../shared/cautions";
 import { scheduleDay } from "../../shared/schedule";
 import { loadProductionSettings, resourcesOf } from "./settings.service";
 import type { PlanDto } from "../../shared/schemas/production";
@@ -38,7 +39,7 @@ async function bakeDay(m: EntityManager, date: string): Promise<BakeDay> {
   const repo = m.getRepository(BakeDay);
   const found = await repo.findOneBy({ date });
   if (found) return found;
-  return repo.create({ date, extraPans: "{}", roomC: "22", flourC: "20", pasteC: "30", frozenPlan: null, frozenAt: null, progress: JSON.stringify({ mixes: [], waves: [] }) });
+  return repo.create({ date, extraPans: "{}", roomC: "22", flourC: "20", pasteC: "30", tapC: String(DEFAULT_TAP_C), milkC: String(DEFAULT_MILK_C), frozenPlan: null, frozenAt: null, progress: JSON.stringify({ mixes: [], waves: [] }) });
 }
 
 /**
@@ -113,7 +114,7 @@ export async function computePlan(ctx: AppContext, date: string, opts: { version
     planned.flatMap((p) => (makeup.get(p.productId)?.components ?? []).map((c) => ({ ...componentLine(c), productId: p.productId }))),
     (id) => lib.get(id)?.name ?? "?",
   );
-  const temps = { roomC: Number(day.roomC), flourC: Number(day.flourC), pasteC: Number(day.pasteC) };
+  const temps = { roomC: Number(day.roomC), flourC: Number(day.flourC), pasteC: Number(day.pasteC), tapC: Number(day.tapC), milkC: Number(day.milkC) };
   // Doughs are split to fit the largest mixer; the schedule puts each mix on a mixer that holds it.
   const production = await loadProductionSettings(ctx, m);
   const mixerCapacityKg = Math.max(...production.mixers.map((x) => x.capacityKg));
@@ -121,7 +122,13 @@ export async function computePlan(ctx: AppContext, date: string, opts: { version
     const f = formulas.get(id)!;
     return { ...planDough(f, info, planned.filter((p) => p.formulaId === id), mixerCapacityKg, temps), targetInternalC: f.targetInternalC };
   });
-  for (const d of doughs) for (const mix of d.mixes) if (mix.liquidTempAdvice) warnings.push(`${d.name}, mix ${mix.index}: liquid at ${mix.liquidTempC} °C — ${mix.liquidTempAdvice}`);
+  // The liquid's ice, chilling or warming is on each card (worded in the reader's units, shared/cautions.ts); a liquid that
+  // cannot be reached is also a warning, which the screens and the PDF word the same way (liquidWarnings).
+  for (const d of doughs) {
+    for (const mix of d.mixes) {
+      if (mix.liquid && liquidNeedsAttention(mix.liquid)) mix.liquidTempAdvice = liquidAdviceText(mix.liquid, "metric", (id) => lib.get(id)?.name ?? "liquid", !!d.paste);
+    }
+  }
 
   const totals = new Map<number, number>();
   for (const d of doughs) for (const i of d.ingredients) totals.set(i.ingredientId, (totals.get(i.ingredientId) ?? 0) + i.grams);
@@ -172,7 +179,7 @@ export async function computePlan(ctx: AppContext, date: string, opts: { version
     })),
     doughs,
     ingredients: [...totals]
-      .map(([ingredientId, grams]) => ({ ingredientId, name: lib.get(ingredientId)?.name ?? "?", grams: roundGrams(grams), ...(fromComponents.has(ingredientId) ? { componentGrams: roundGrams(fromComponents.get(ingredientId)!) } : {}) }))
+      .map(([ingredientId, grams]) => ({ ingredientId, name: lib.get(ingredientId)?.name ?? "?", kind: lib.get(ingredientId)?.kind, grams: roundGrams(grams), ...(fromComponents.has(ingredientId) ? { componentGrams: roundGrams(fromComponents.get(ingredientId)!) } : {}) }))
       .sort((a, b) => b.grams - a.grams),
     components: cards,
     timeline,
@@ -226,10 +233,11 @@ export function diffPlans(a: PlanDto, b: PlanDto): string[] {
     if (e && Math.abs(e.doughGrams - d.doughGrams) >= 1) out.push(`${d.name}: dough ${e.doughGrams} g → ${d.doughGrams} g.`);
   }
   if (a.inputs.roomC !== b.inputs.roomC || a.inputs.flourC !== b.inputs.flourC || a.inputs.pasteC !== b.inputs.pasteC) out.push("Room, flour or paste temperature changed: liquid temperatures differ.");
+  else if ((a.inputs.tapC ?? DEFAULT_TAP_C) !== (b.inputs.tapC ?? DEFAULT_TAP_C) || (a.inputs.milkC ?? DEFAULT_MILK_C) !== (b.inputs.milkC ?? DEFAULT_MILK_C)) out.push("Tap water or milk temperature changed: the ice and chilling on the cards differ.");
   return out;
 }
 
-export async function saveBakeDay(ctx: AppContext, date: string, input: { extraPans: Record<string, number>; roomC: number; flourC: number; pasteC: number }) {
+export async function saveBakeDay(ctx: AppContext, date: string, input: { extraPans: Record<string, number>; roomC: number; flourC: number; pasteC: number; tapC?: number; milkC?: number }) {
   const m = ctx.dataSource.manager;
   const ids = Object.keys(input.extraPans).map(Number);
   if (ids.length && (await m.getRepository(Product).countBy({ id: In(ids) })) !== ids.length) throw badRequest("Extra pans for a product that does not exist.", { extraPans: "Unknown product." });
@@ -237,6 +245,8 @@ export async function saveBakeDay(ctx: AppContext, date: string, input: { extraP
   await m.getRepository(BakeDay).update({ date }, {
     extraPans: JSON.stringify(Object.fromEntries(Object.entries(input.extraPans).filter(([, n]) => n > 0))),
     roomC: String(input.roomC), flourC: String(input.flourC), pasteC: String(input.pasteC),
+    ...(input.tapC === undefined ? {} : { tapC: String(input.tapC) }),
+    ...(input.milkC === undefined ? {} : { milkC: String(input.milkC) }),
   });
   // A frozen day is recalculated on purpose: the baker just changed its inputs.
   return day.frozenPlan ? freeze(ctx, date) : { ...(await computePlan(ctx, date)), changes: [] };

@@ -78,7 +78,7 @@ export class FormulaVersion {
   createdAt: Date;
 }
 
-/** What the baker sets for one bake day: extra pans per product, room and flour temperatures. */
+/** What the baker sets for one bake day: extra pans per product; room, flour, paste, tap water and milk temperatures. */
 @Entity({ name: "bake_day" })
 export class BakeDay {
   @PrimaryColumn({ type: "date" })
@@ -96,6 +96,14 @@ export class BakeDay {
 
   @Column({ type: "decimal", precision: 4, scale: 1, default: 30 })
   pasteC: string;
+
+  /** Tap water as it comes, °C (for the ice on the weigh-out cards). */
+  @Column({ type: "decimal", precision: 4, scale: 1, default: 15 })
+  tapC: string;
+
+  /** Milk (and other liquids kept cold) as it comes out of the cooler, °C. */
+  @Column({ type: "decimal", precision: 4, scale: 1, default: 4 })
+  milkC: string;
 
   /** The frozen plan (JSON), stored at the cut-off or on a deliberate recalculation. */
   @Column({ type: "mediumtext", nullable: true })

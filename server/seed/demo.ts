@@ -98,13 +98,13 @@ const DEMO_STANDING: Record<string, { weekdays: Record<number, Record<string, nu
 
 /**
  * Invented demo ingredients. Water contents of milk, butter and egg are USDA FoodData Central values
- * (from memory: whole milk ~88 %, butter ~16 %, whole egg ~76 %); flour ~12 %.
+ * (from memory: whole milk ~88 %, unsalted butter ~18 % (salted ~16 %), whole egg ~76 %); flour ~12 %.
  */
 const DEMO_INGREDIENTS = [
   { key: "flour", name: "Bread flour", kind: "flour", waterPercent: "12", allergens: "gluten,wheat", packName: "25 kg sack", packGrams: 25000, packCostCents: 2450 },
   { key: "milk", name: "Whole milk", kind: "liquid", waterPercent: "88", allergens: "milk", packName: "1 gal jug", packGrams: 3900, packCostCents: 489 },
   { key: "water", name: "Water", kind: "liquid", waterPercent: "100", allergens: "", packName: "tap", packGrams: 0, packCostCents: 0 },
-  { key: "butter", name: "Unsalted butter", kind: "fat", waterPercent: "16", allergens: "milk", packName: "1 lb block", packGrams: 454, packCostCents: 520 },
+  { key: "butter", name: "Unsalted butter", kind: "fat", waterPercent: "18", allergens: "milk", packName: "1 lb block", packGrams: 454, packCostCents: 520 },
   { key: "egg", name: "Whole egg", kind: "egg", waterPercent: "76", allergens: "egg", packName: "5 lb liquid-egg carton", packGrams: 2268, packCostCents: 1295 },
   { key: "sugar", name: "Granulated sugar", kind: "sugar", waterPercent: "0", allergens: "", packName: "25 lb bag", packGrams: 11340, packCostCents: 1890 },
   { key: "salt", name: "Fine sea salt", kind: "salt", waterPercent: "0", allergens: "", packName: "3 lb box", packGrams: 1361, packCostCents: 450 },

@@ -1,6 +1,6 @@
 import { z } from "zod";
 import { ALLERGEN_CODES, type AllergenCode } from "../allergens";
-import { INGREDIENT_KINDS, STEP_KINDS, type FormulaFigures, type IngredientKind, type StepKind } from "../production";
+import { INGREDIENT_KINDS, PASTE_COOK_MESSAGE, PASTE_MIN_COOK_C, STEP_KINDS, type FormulaFigures, type IngredientKind, type StepKind, type LiquidPlan } from "../production";
 import { RETARD_HOURS, type DaySchedule, type OvenSpec, type ScheduleEntry } from "../schedule";
 import { dateSchema } from "./calendar";
 import type { ComponentCard } from "../components";
@@ -42,7 +42,7 @@ export const formulaInputSchema = z.object({
       liquidIngredientId: z.number().int().positive("Choose the liquid to cook."),
       flourPercent: num("Share of flour cooked", 0.1, 100),
       liquidRatio: num("Liquid-to-flour ratio", 0.1, 20).default(5),
-      cookToC: num("Cook-to temperature", 40, 100).default(65),
+      cookToC: z.coerce.number({ invalid_type_error: "Cook-to temperature must be a number." }).min(PASTE_MIN_COOK_C, PASTE_COOK_MESSAGE).max(100, PASTE_COOK_MESSAGE).default(65),
     })
     .nullable()
     .default(null),
@@ -73,6 +73,9 @@ export const bakeDayInputSchema = z.object({
   roomC: num("Room temperature", -10, 50),
   flourC: num("Flour temperature", -10, 50),
   pasteC: num("Paste temperature", 0, 100),
+  /** Supply temperatures for the ice (optional: unchanged when absent). Water stays liquid from 0 °C. */
+  tapC: num("Tap water temperature", 0, 60).optional(),
+  milkC: num("Milk temperature", -1, 40).optional(),
 });
 
 export const planQuerySchema = z.object({ date: dateSchema });
@@ -85,7 +88,7 @@ export interface PlanDto {
   computedAt: string;
   cutoffAt: string;
   /** mixerCapacityKg: the largest mixer (doughs are split to fit it); packFrom: dispatch less the packing time. */
-  inputs: { roomC: number; flourC: number; pasteC: number; mixerCapacityKg: number; dispatchAt: string; packingMinutes: number; packFrom: string; crewPeople: number; shiftStartAt: string | null };
+  inputs: { roomC: number; flourC: number; pasteC: number; /** Absent in plans frozen before them. */ tapC?: number; milkC?: number; mixerCapacityKg: number; dispatchAt: string; packingMinutes: number; packFrom: string; crewPeople: number; shiftStartAt: string | null };
   products: {
     productId: number; name: string; units: number; extraPans: number; pans: number; pieces: number; pieceGrams: number; formulaId: number | null; panName: string; openUnits: number;
     /** Resolved per product (its own value, else its formula's bake/cool step; shared/components.ts resolveBake). Optional in plans frozen before they existed. */
@@ -98,13 +101,16 @@ export interface PlanDto {
     paste: { flourGrams: number; liquidGrams: number; cookToC: number } | null;
     ingredients: { ingredientId: number; name: string; kind: IngredientKind; percent: number; grams: number; pasteGrams: number; finalMixGrams: number }[];
     mixes: {
-      index: number; doughGrams: number; liquidTempC: number | null; liquidTempAdvice: string | null; ingredients: { ingredientId: number; grams: number; pasteGrams: number; finalMixGrams: number }[];
+      index: number; doughGrams: number; liquidTempC: number | null; liquidTempAdvice: string | null;
+      /** Ice, chilling or warming for the liquid (shared/production.ts planLiquid); absent in plans frozen before it. */
+      liquid?: LiquidPlan | null;
+      ingredients: { ingredientId: number; grams: number; pasteGrams: number; finalMixGrams: number }[];
       /** When and on which mixer this card is mixed (shared/schedule.ts); absent in plans frozen before the schedule. */
       scheduled?: { startsAt: string; endsAt: string; mixerName: string; pasteStartsAt: string | null; dayBefore: boolean } | null;
     }[];
   }[];
   /** Dough and components together; `componentGrams` is the part weighed for components. */
-  ingredients: { ingredientId: number; name: string; grams: number; componentGrams?: number }[];
+  ingredients: { ingredientId: number; name: string; grams: number; componentGrams?: number; /** The ingredient's kind (for the cautions: raw egg in a wash). */ kind?: IngredientKind }[];
   /** One weigh-out card per component per product (toppings, washes, fillings, garnishes). */
   components?: ComponentCard[];
   /** Every step of the day on its mixer, oven or the crew (shared/schedule.ts), in time order. */
