@@ -330,7 +330,8 @@ async function planRefunds(ctx: AppContext, o: Obj): Promise<Plan> {
       // Oldest first, so the invoice's figures grow in the order Stripe made them.
       for (const r of [...refunds].reverse()) await recordRefund(ctx, m, { invoiceId, stripeRefundId: r.id, stripeChargeId: chargeId, amountCents: r.amount, overpayment: r.metadata?.purpose === "overpayment" });
     },
-    after: first?.after,
+    // A refund can change what is owed too: no open page may ask for the old amount.
+    after: () => expireStaleSessions(ctx, invoiceId).then(() => undefined),
   };
 }
 
