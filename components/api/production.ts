@@ -14,6 +14,9 @@ export interface BakeDayInput {
   roomC: number;
   flourC: number;
   pasteC: number;
+  /** Tap water and milk as they come (for the ice and chilling); unchanged when left out. */
+  tapC?: number;
+  milkC?: number;
 }
 
 export interface ProgressInput {

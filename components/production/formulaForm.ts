@@ -1,4 +1,4 @@
-import { formulaFigures, validateFormula, type FormulaFigures, type IngredientInfo, type StepKind } from "../../shared/production";
+import { formulaFigures, formulaWarnings, validateFormula, type FormulaFigures, type IngredientInfo, type StepKind } from "../../shared/production";
 import { formulaInputSchema, type FormulaDto, type FormulaInput, type IngredientDto } from "../../shared/schemas/production";
 import { fieldErrorsFrom } from "../../shared/schemas/common";
 import type { FieldErrors } from "../../shared/errors";
@@ -137,6 +137,11 @@ export function liveProblems(v: FormulaValues, ingredients: Map<number, Ingredie
     if (v.paste.liquidIngredientId === null) errors["paste.liquidIngredientId"] = "Choose the liquid to cook.";
   }
   return errors;
+}
+
+/** Values that can be saved but look wrong (shared formulaWarnings): a friction factor implausible in °C. */
+export function liveWarnings(v: FormulaValues): FieldErrors {
+  return formulaWarnings({ frictionC: readNumber(v.frictionC) });
 }
 
 /** The API body, checked with the shared formulaInputSchema; or the messages per field. */

@@ -231,7 +231,7 @@ describe("bake day", () => {
     fireEvent.press(screen.getByTestId("temps-save"));
     await waitFor(() => expect(api.callsTo("PUT", "/api/production/bake-days/2025-12-03")).toHaveLength(1));
     // 75 °F = 23.9 °C; 68 °F = 20 °C; 86 °F = 30 °C.
-    expect(api.callsTo("PUT", "/api/production/bake-days/2025-12-03")[0].body).toEqual({ extraPans: { "101": 0, "102": 0 }, roomC: 23.9, flourC: 20, pasteC: 30 });
+    expect(api.callsTo("PUT", "/api/production/bake-days/2025-12-03")[0].body).toEqual({ extraPans: { "101": 0, "102": 0 }, roomC: 23.9, flourC: 20, pasteC: 30, tapC: 15, milkC: 4 });
     expect(await screen.findByTestId("temps-saved")).toBeOnTheScreen();
   });
 

@@ -23,10 +23,13 @@ describe("formula figures and checks (shared formulaFigures / validateFormula)",
 
   it("works out the milk bread's figures", () => {
     const f = liveFigures(valuesOf(formulaDto()), infos);
-    // 100 + 58 + 10 + 10 + 10 + 1.8 + 1.3; water 12 + 50.46 + 7.6 + 1.6 + 0.065 of 100 flour; 5 % of flour × (1 + 5).
+    // 100 + 58 + 10 + 10 + 10 + 1.8 + 1.3; 5 % of flour × (1 + 5).
+    // Effective hydration by the usual convention: water in milk (87 % here), egg (76 %) and butter (16 % in this fixture)
+    // over the flour, 50.46 + 7.6 + 1.6 = 59.66 %; the flour's own 12 % moisture (and the dry yeast's) is not counted.
     expect(f.totalPercent).toBeCloseTo(191.1, 6);
     expect(f.hydrationPercent).toBe(58);
-    expect(f.effectiveHydrationPercent).toBeCloseTo(71.725, 6);
+    expect(f.effectiveHydrationPercent).toBeCloseTo(59.66, 6);
+    expect(f.flourMoisturePercent).toBeCloseTo(12, 6);
     expect(f.pastePercent).toBeCloseTo(30, 6);
     expect(f.doughYieldPerKgFlour).toBeCloseTo(1911, 6);
   });
@@ -47,7 +50,7 @@ describe("formulas", () => {
     const row = await screen.findByTestId("formula-row-1");
     expect(row).toHaveTextContent(/Milk bread/);
     expect(row).toHaveTextContent(/v2/);
-    expect(row).toHaveTextContent(/Hydration 58 % \(effective 71\.7 %\) · paste 5 % of flour/);
+    expect(row).toHaveTextContent(/Hydration 58 % \(effective 59\.7 %\) · paste 5 % of flour/);
     expect(row).toHaveTextContent(/For: Milk-bread dinner rolls/);
     expect(screen.getByTestId("formula-row-3")).toHaveTextContent(/no paste.*For: Brioche burger buns/);
     expect(screen.getByTestId("tab-formulas")).toBeOnTheScreen();
@@ -59,7 +62,8 @@ describe("formulas", () => {
     expect(await screen.findByTestId("figure-total")).toHaveTextContent("191.1 %");
     expect(screen.getByTestId("figure-flour")).toHaveTextContent("100 %");
     expect(screen.getByTestId("figure-hydration")).toHaveTextContent("58 %");
-    expect(screen.getByTestId("figure-effective")).toHaveTextContent("71.7 %");
+    expect(screen.getByTestId("figure-effective")).toHaveTextContent("59.7 %");
+    expect(screen.getByTestId("figure-flour-moisture-box")).toHaveTextContent(/12 %.*Flour's own moisture.*not in the hydration/);
     expect(screen.getByTestId("figure-paste-share")).toHaveTextContent("5 %");
     expect(screen.getByTestId("figure-paste")).toHaveTextContent("30 %");
     expect(screen.getByTestId("figure-yield")).toHaveTextContent("1,911 g");
@@ -67,7 +71,7 @@ describe("formulas", () => {
     fireEvent.changeText(screen.getByTestId("line-1-percent"), "62");
     expect(screen.getByTestId("figure-total")).toHaveTextContent("195.1 %");
     expect(screen.getByTestId("figure-hydration")).toHaveTextContent("62 %");
-    expect(screen.getByTestId("figure-effective")).toHaveTextContent("75.2 %");
+    expect(screen.getByTestId("figure-effective")).toHaveTextContent("63.1 %"); // 62 × 0.87 + 7.6 + 1.6
 
     fireEvent.changeText(screen.getByTestId("line-0-percent"), "90");
     expect(screen.getByTestId("formula-lines-error")).toHaveTextContent("The flour lines add up to 90 %; in baker's percentages they must add up to 100 %.");
@@ -86,6 +90,31 @@ describe("formulas", () => {
     expect(screen.getByTestId("paste-ratio-error")).toHaveTextContent("The paste needs 200 % liquid but the formula has only 58 % of that liquid.");
     fireEvent.changeText(screen.getByTestId("paste-share"), "120");
     expect(screen.getByTestId("paste-share-error")).toHaveTextContent("Cook between 0 and 100 % of the flour.");
+  });
+
+  it("warns of a friction factor implausible in °C (a habitual °F 26) without refusing it, and says what the factor is", async () => {
+    const api = mockApi(routes(BAKER, { "PUT /api/formulas/:id": { body: { formula: { ...formulaDto(), version: 3, frictionC: 26 } } } }));
+    renderApp("/bake/formulas/1");
+    const friction = await screen.findByTestId("formula-friction");
+    expect(screen.getByText(/the factor that makes the measured dough temperature come out/)).toBeOnTheScreen();
+    expect(screen.queryByTestId("formula-friction-warning")).toBeNull();
+    fireEvent.changeText(friction, "26");
+    // 26 °F as a temperature difference is 26 × 5/9 = 14.4 °C; typed as °C the liquid comes out 11.6 °C colder.
+    expect(screen.getByTestId("formula-friction-warning")).toHaveTextContent(/26 is high for a friction factor in °C \(usually about 1–16 °C in a mixer\)\. If it is a °F factor, in °C it is 14\.4; as it stands the liquid comes out about 11\.6 °C colder\.$/);
+    fireEvent.press(screen.getByTestId("formula-save"));
+    await waitFor(() => expect(api.callsTo("PUT", "/api/formulas/1")).toHaveLength(1));
+    expect(api.callsTo("PUT", "/api/formulas/1")[0].body).toMatchObject({ frictionC: 26 });
+  });
+
+  it("refuses a paste cooked below about 60 °C (wheat starch gelatinisation; common practice 60–70 °C)", async () => {
+    const api = mockApi(routes());
+    renderApp("/bake/formulas/1");
+    fireEvent.changeText(await screen.findByTestId("paste-cook"), "40");
+    expect(screen.getByTestId("paste-cook-error")).toHaveTextContent("Cook the paste to 60–100 °C: below about 60 °C the wheat starch does not gelatinise and the paste does not set (about 65 °C is usual).");
+    fireEvent.press(screen.getByTestId("formula-save"));
+    expect(api.callsTo("PUT", "/api/formulas/1")).toHaveLength(0);
+    fireEvent.changeText(screen.getByTestId("paste-cook"), "65");
+    expect(screen.queryByTestId("paste-cook-error")).toBeNull();
   });
 
   it("saves an edit as the next version with its note", async () => {

@@ -249,7 +249,7 @@ export function formulaDto(overrides: Partial<FormulaDto> = {}): FormulaDto {
       { kind: "bake", minutes: 27, temperatureC: 177 },
       { kind: "cool", minutes: 30 },
     ],
-    figures: { totalPercent: 191.1, flourPercent: 100, hydrationPercent: 58, effectiveHydrationPercent: 71.725, flourMoisturePercent: 12, pasteSharePercent: 5, pastePercent: 30, doughYieldPerKgFlour: 1911 },
+    figures: { totalPercent: 191.1, flourPercent: 100, hydrationPercent: 58, effectiveHydrationPercent: 59.66, flourMoisturePercent: 12, pasteSharePercent: 5, pastePercent: 30, doughYieldPerKgFlour: 1911 },
     allergens: ["gluten", "wheat", "egg", "milk"],
     productIds: [101],
     ...overrides,

@@ -21,7 +21,10 @@ import { localDayTime, progressText, type ProgressCount, settingsLines } from ".
 import type { Units } from "../../production/units";
 import type { KitchenPaths } from "../../production/paths";
 import type { FieldErrors } from "../../../shared/errors";
-import type { UnitSystem } from "../../../shared/units";
+import { formatCount, unitsFor, type UnitSystem } from "../../../shared/units";
+import { DEFAULT_MILK_C, DEFAULT_TAP_C } from "../../../shared/production";
+
+const METRIC = unitsFor("metric");
 import { colors, fonts, layout, radii, space } from "../../theme";
 
 // ---- date switcher ------------------------------------------------------------------------------
@@ -284,10 +287,12 @@ export interface PansCardProps {
   saving: boolean;
   error: string | null;
   formulasHref: string;
+  /** Piece weights in these units (grams when absent). */
+  units?: Units;
 }
 
 /** Pans per product, big: what goes in the ovens. Extra pans (for the shop, or spares) are the baker's to add. */
-export function PansCard({ plan, extras, onExtra, wide, saving, error, formulasHref }: PansCardProps) {
+export function PansCard({ plan, extras, onExtra, wide, saving, error, formulasHref, units }: PansCardProps) {
   const totalPans = plan.products.reduce((s, p) => s + p.pans, 0);
   return (
     <Card
@@ -328,7 +333,7 @@ export function PansCard({ plan, extras, onExtra, wide, saving, error, formulasH
                     {p.panName}
                   </AppText>
                   <AppText variant="small" color="muted" testID={`pans-${p.productId}-units`}>
-                    {`${p.units} ordered${p.extraPans ? ` + ${p.extraPans} extra ${p.extraPans === 1 ? "pan" : "pans"}` : ""} · ${p.pieces} pieces of ${p.pieceGrams} g`}
+                    {`${p.units} ordered${p.extraPans ? ` + ${formatCount(p.extraPans, "extra pan", "extra pans")}` : ""} · ${formatCount(p.pieces, "piece", "pieces")} of ${(units ?? METRIC).piece(p.pieceGrams)} dough`}
                   </AppText>
                   <View style={styles.badges}>
                     {p.openUnits > 0 ? <Badge label={`${p.openUnits} still open`} tone="amber" /> : null}
@@ -364,37 +369,50 @@ export function PansCard({ plan, extras, onExtra, wide, saving, error, formulasH
 
 // ---- temperatures -------------------------------------------------------------------------------
 
-type TempKey = "roomC" | "flourC" | "pasteC";
+type TempKey = "roomC" | "flourC" | "pasteC" | "tapC" | "milkC";
 const TEMP_FIELDS: { key: TempKey; label: string; hint: string; min: number; max: number; testID: string }[] = [
   { key: "roomC", label: "Room", hint: "The bakery, by the mixer.", min: -10, max: 50, testID: "temp-room" },
   { key: "flourC", label: "Flour", hint: "Stick the probe in the bin.", min: -10, max: 50, testID: "temp-flour" },
   { key: "pasteC", label: "Paste", hint: "When it goes into the mix.", min: 0, max: 100, testID: "temp-paste" },
+  // Supply temperatures: what the liquid is before it is iced, chilled or warmed (shared/production.ts planLiquid).
+  { key: "tapC", label: "Tap water", hint: "As it runs cold from the tap: for the ice.", min: 0, max: 60, testID: "temp-tap" },
+  { key: "milkC", label: "Milk", hint: "Straight from the cooler.", min: -1, max: 40, testID: "temp-milk" },
 ];
+/** Supply temperatures a plan frozen before them does not carry (shared/production.ts defaults). */
+const SUPPLY_DEFAULTS = { tapC: DEFAULT_TAP_C, milkC: DEFAULT_MILK_C };
 
 export interface TemperaturesCardProps {
   plan: PlanView;
   units: Units;
   busy: boolean;
   serverError: unknown;
-  onSave: (temps: { roomC: number; flourC: number; pasteC: number }) => void;
+  onSave: (temps: { roomC: number; flourC: number; pasteC: number; tapC: number; milkC: number }) => void;
   saved: boolean;
 }
 
-/** Room, flour and paste temperatures: the liquid temperatures on the cards are worked out from them. */
+/**
+ * Room, flour and paste temperatures (the liquid temperatures on the cards are worked out from them), and the tap
+ * water and milk as they come (the ice and chilling on the cards are worked out from those).
+ */
 export function TemperaturesCard({ plan, units, busy, serverError, onSave, saved }: TemperaturesCardProps) {
-  const [values, setValues] = useState<Record<TempKey, string>>({
-    roomC: units.tempInput(plan.inputs.roomC),
-    flourC: units.tempInput(plan.inputs.flourC),
-    pasteC: units.tempInput(plan.inputs.pasteC),
-  });
+  const stored: Record<TempKey, number> = {
+    roomC: plan.inputs.roomC,
+    flourC: plan.inputs.flourC,
+    pasteC: plan.inputs.pasteC,
+    tapC: plan.inputs.tapC ?? SUPPLY_DEFAULTS.tapC,
+    milkC: plan.inputs.milkC ?? SUPPLY_DEFAULTS.milkC,
+  };
+  const shownAt = Object.fromEntries(TEMP_FIELDS.map((f) => [f.key, units.tempInput(stored[f.key])])) as Record<TempKey, string>;
+  const [values, setValues] = useState<Record<TempKey, string>>(shownAt);
   const [fields, setFields] = useState<FieldErrors>({});
-  const server = splitError(serverError, ["roomC", "flourC", "pasteC"]);
+  const server = splitError(serverError, ["roomC", "flourC", "pasteC", "tapC", "milkC"]);
   const shown = { ...server.fields, ...fields };
   const submit = () => {
     const errs: FieldErrors = {};
     const out = {} as Record<TempKey, number>;
     for (const f of TEMP_FIELDS) {
-      const c = units.toCelsius(values[f.key]);
+      // A field left as shown keeps its stored °C (4 °C shows as 39 °F, which would read back as 3.9 °C).
+      const c = values[f.key] === shownAt[f.key] ? stored[f.key] : units.toCelsius(values[f.key]);
       if (Number.isNaN(c)) errs[f.key] = "Enter a temperature, e.g. 22.";
       else if (c < f.min || c > f.max) errs[f.key] = `Enter ${units.temp(f.min)} to ${units.temp(f.max)}.`;
       else out[f.key] = c;
@@ -406,7 +424,7 @@ export function TemperaturesCard({ plan, units, busy, serverError, onSave, saved
   return (
     <Card title="Temperatures" testID="temperatures">
       <AppText variant="small" color="muted">
-        {`Measure before weighing. The liquid temperature on each card comes from these and the dough's target.${plan.frozen ? " Saving recalculates the frozen plan." : ""}`}
+        {`Measure before weighing. The liquid temperature on each card comes from these and the dough's target; the ice for the water, or how cold the milk must be, from the tap water and milk.${plan.frozen ? " Saving recalculates the frozen plan." : ""}`}
       </AppText>
       <View style={styles.temps}>
         {TEMP_FIELDS.map((f) => (

@@ -30,6 +30,7 @@ import { kitchenPaths, type KitchenArea, type KitchenPaths } from "../../product
 import { useUnits, type Units } from "../../production/units";
 import { useIsWide } from "../../shell/useIsWide";
 import { CautionsCard } from "./Cautions";
+import { liquidWarnings } from "../../../shared/cautions";
 import { MixCard } from "./MixCard";
 import { ComponentCards } from "./ComponentCards";
 import { Timeline } from "./Timeline";
@@ -187,7 +188,7 @@ function PlanBody({ date, plan, units, paths }: PlanBodyProps) {
     send({ extraPans: body, roomC: plan.inputs.roomC, flourC: plan.inputs.flourC, pasteC: plan.inputs.pasteC }, false);
   };
 
-  const onTemps = (t: { roomC: number; flourC: number; pasteC: number }) => {
+  const onTemps = (t: { roomC: number; flourC: number; pasteC: number; tapC: number; milkC: number }) => {
     setTempsSaved(false);
     const body = extrasBody(extras) ?? Object.fromEntries(plan.products.map((p) => [String(p.productId), p.extraPans]));
     send({ extraPans: body, ...t }, true);
@@ -237,7 +238,7 @@ function PlanBody({ date, plan, units, paths }: PlanBodyProps) {
   const status = <StatusCard plan={plan} timeZone={bakery.data?.timeZone} now={now} progress={progress} recalculating={recalc.isPending} recalcError={recalc.error} onRecalculate={onRecalculate} lastChanges={lastChanges} />;
   const temps = (
     <TemperaturesCard
-      key={`${units.system}-${plan.inputs.roomC}-${plan.inputs.flourC}-${plan.inputs.pasteC}`}
+      key={`${units.system}-${plan.inputs.roomC}-${plan.inputs.flourC}-${plan.inputs.pasteC}-${plan.inputs.tapC}-${plan.inputs.milkC}`}
       plan={plan}
       units={units}
       busy={savingTemps}
@@ -276,8 +277,8 @@ function PlanBody({ date, plan, units, paths }: PlanBodyProps) {
       ) : (
         status
       )}
-      <WarningsCard warnings={plan.warnings} />
-      <PansCard plan={plan} extras={extras} onExtra={onExtra} wide={wide} saving={save.isPending && !savingTemps} error={pansError} formulasHref={paths.formulas} />
+      <WarningsCard warnings={[...plan.warnings, ...liquidWarnings(plan, units)]} />
+      <PansCard plan={plan} extras={extras} onExtra={onExtra} wide={wide} saving={save.isPending && !savingTemps} error={pansError} formulasHref={paths.formulas} units={units} />
       {temps}
       {wide ? null : <PdfButtons date={date} />}
 
@@ -311,7 +312,7 @@ function PlanBody({ date, plan, units, paths }: PlanBodyProps) {
           <TotalsCard plan={plan} units={units} />
         </View>
         <View style={wide ? styles.col1 : undefined}>
-          <CautionsCard />
+          <CautionsCard plan={plan} units={units} />
         </View>
       </View>
       <SettingsFooter units={units} paths={paths} isOwner={user.role === "owner"} />

@@ -3,9 +3,10 @@ import { StyleSheet, View } from "react-native";
 import Feather from "@expo/vector-icons/Feather";
 import { Card } from "../../ui/Card";
 import { AppText } from "../../ui/Text";
-import { CAUTION_FOOTNOTE, PRODUCTION_CAUTIONS } from "../../../shared/cautions";
+import { dayCautions, pasteCautionText, type CautionDay } from "../../../shared/cautions";
 import { STEP_LABELS, type StepKind } from "../../../shared/production";
 import { cautionFor } from "../../production/plan";
+import { useUnits, type Units } from "../../production/units";
 import { colors, radii, space } from "../../theme";
 
 /** The caution's title as a small tag beside a step ("⚠ Hot paste"). */
@@ -22,9 +23,14 @@ export function CautionTag({ step, testID }: { step: string; testID?: string }) 
   );
 }
 
-/** The caution written out, compact, where the work happens (the paste, the mixer). */
-export function CautionNote({ step, testID }: { step: string; testID?: string }) {
-  const c = cautionFor(step);
+/**
+ * The caution written out, compact, where the work happens (the paste, the mixer). The paste's caution carries
+ * the formula's own cook-to temperature, in the units chosen.
+ */
+export function CautionNote({ step, cookToC, testID }: { step: string; cookToC?: number; testID?: string }) {
+  const units = useUnits();
+  const generic = cautionFor(step);
+  const c = step === "paste" && cookToC !== undefined ? { title: "Hot paste", text: pasteCautionText(cookToC, units) } : generic;
   if (!c) return null;
   return (
     <View style={styles.note} testID={testID}>
@@ -37,13 +43,19 @@ export function CautionNote({ step, testID }: { step: string; testID?: string })
   );
 }
 
-/** Every caution by its step, and the footnote: a reminder, not the bakery's procedure. */
-export function CautionsCard() {
+/**
+ * The day's safety reminders, worked out from what it bakes (shared/cautions.ts dayCautions): the allergens of
+ * its products by name, each paste's cook-to temperature, steam, lifting, flour dust, a paste made ahead, raw egg
+ * wash, the internal temperature to record; the last line is always the deferral to local code and practice.
+ */
+export function CautionsCard({ plan, units }: { plan: CautionDay; units: Units }) {
+  const cautions = dayCautions(plan, units);
+  const deferral = cautions[cautions.length - 1];
   return (
     <Card title="Safety reminders" testID="cautions">
       <View style={styles.list}>
-        {PRODUCTION_CAUTIONS.map((c) => (
-          <View key={c.step} style={styles.row} testID={`caution-${c.step}`}>
+        {cautions.slice(0, -1).map((c) => (
+          <View key={c.key} style={styles.row} testID={`caution-${c.key}`}>
             <Feather name="alert-triangle" size={16} color={colors.amberInk} style={styles.icon} />
             <View style={styles.flex}>
               <AppText variant="label">{`${c.title} · ${STEP_LABELS[c.step as StepKind]}`}</AppText>
@@ -55,7 +67,7 @@ export function CautionsCard() {
         ))}
       </View>
       <AppText variant="caption" color="muted" testID="caution-footnote">
-        {CAUTION_FOOTNOTE}
+        {deferral.text}
       </AppText>
     </Card>
   );

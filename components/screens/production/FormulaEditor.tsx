@@ -16,6 +16,7 @@ import {
   formulaFieldKeys,
   liveFigures,
   liveProblems,
+  liveWarnings,
   newKey,
   type FormulaValues,
   type LineValue,
@@ -79,6 +80,8 @@ export function FormulaEditor({ initial, ingredients, infos, submitLabel, busy, 
   const checkedNow = attempted ? formulaBody(v, infos) : null;
   const fields: FieldErrors = { ...serverFields, ...(checkedNow && !checkedNow.ok ? checkedNow.fields : {}), ...live };
   const figures = liveFigures(v, infos);
+  // Values that can be saved but look like a mistake (a °F friction habit): said beside the field, not refused.
+  const warnings = liveWarnings(v);
 
   const update = (patch: Partial<FormulaValues>) => {
     setServerFields({});
@@ -205,7 +208,7 @@ export function FormulaEditor({ initial, ingredients, infos, submitLabel, busy, 
               <TextField label="Liquid : flour" hint="5 means 5 g liquid per 1 g flour." value={v.paste.liquidRatio} onChangeText={(t) => update({ paste: { ...v.paste, liquidRatio: t } })} error={fields["paste.liquidRatio"]} inputMode="decimal" keyboardType="decimal-pad" testID="paste-ratio" />
             </View>
             <View style={styles.cellSmall}>
-              <TextField label="Cook to (°C)" hint={fahrenheitHint(v.paste.cookToC) ?? "Usually 65 °C."} value={v.paste.cookToC} onChangeText={(t) => update({ paste: { ...v.paste, cookToC: t } })} error={fields["paste.cookToC"]} inputMode="decimal" keyboardType="decimal-pad" testID="paste-cook" />
+              <TextField label="Cook to (°C)" hint={fahrenheitHint(v.paste.cookToC) ?? "60–70 °C, usually 65 °C: the starch must gelatinise."} value={v.paste.cookToC} onChangeText={(t) => update({ paste: { ...v.paste, cookToC: t } })} error={fields["paste.cookToC"]} inputMode="decimal" keyboardType="decimal-pad" testID="paste-cook" />
             </View>
           </View>
         </>
@@ -270,7 +273,17 @@ export function FormulaEditor({ initial, ingredients, infos, submitLabel, busy, 
           <TextField label="Dough temperature (°C)" hint={fahrenheitHint(v.ddtC) ?? "The target after mixing."} value={v.ddtC} onChangeText={(t) => update({ ddtC: t })} error={fields.ddtC} inputMode="decimal" keyboardType="decimal-pad" testID="formula-ddt" />
         </View>
         <View style={styles.cellSmall}>
-          <TextField label="Friction (°C)" hint="What the mixer adds." value={v.frictionC} onChangeText={(t) => update({ frictionC: t })} error={fields.frictionC} inputMode="decimal" keyboardType="decimal-pad" testID="formula-friction" />
+          <TextField
+            label="Friction factor (°C)"
+            hint="In °C: the factor that makes the measured dough temperature come out. From a mix you measured: target × factors − room − flour − liquid (− paste)."
+            value={v.frictionC}
+            onChangeText={(t) => update({ frictionC: t })}
+            error={fields.frictionC}
+            inputMode="decimal"
+            keyboardType="decimal-pad"
+            testID="formula-friction"
+          />
+          {warnings.frictionC && !fields.frictionC ? <FieldWarning text={warnings.frictionC} testID="formula-friction-warning" /> : null}
         </View>
         <View style={styles.cellSmall}>
           <TextField label="Baked inside (°C)" optional hint={fahrenheitHint(v.targetInternalC) ?? "Internal temperature when done."} value={v.targetInternalC} onChangeText={(t) => update({ targetInternalC: t })} error={fields.targetInternalC} inputMode="decimal" keyboardType="decimal-pad" testID="formula-internal" />
@@ -323,7 +336,8 @@ export function FiguresPanel({ figures, hasPaste, testID = "formula-figures" }: 
     { label: "Total", value: formatPercent(figures.totalPercent), id: "total", hint: "All lines" },
     { label: "Flour", value: formatPercent(figures.flourPercent), id: "flour", hint: "Must be 100 %" },
     { label: "Hydration", value: formatPercent(figures.hydrationPercent), id: "hydration", hint: "Liquid lines" },
-    { label: "Effective hydration", value: formatPercent(figures.effectiveHydrationPercent), id: "effective", hint: "Water from every ingredient" },
+    { label: "Effective hydration", value: formatPercent(figures.effectiveHydrationPercent), id: "effective", hint: "Water in liquids, egg, butter, honey" },
+    { label: "Flour's own moisture", value: formatPercent(figures.flourMoisturePercent ?? 0), id: "flour-moisture", hint: "Apart: not in the hydration" },
     { label: "Paste share", value: hasPaste ? formatPercent(figures.pasteSharePercent) : "No paste", id: "paste-share", hint: "Flour cooked" },
     { label: "Paste weight", value: hasPaste ? formatPercent(figures.pastePercent) : "–", id: "paste", hint: "Of the flour" },
     { label: "Dough per kg flour", value: `${Math.round(figures.doughYieldPerKgFlour).toLocaleString("en-US")} g`, id: "yield" },
@@ -352,6 +366,18 @@ export function FiguresPanel({ figures, hasPaste, testID = "formula-figures" }: 
         ))}
       </View>
     </Card>
+  );
+}
+
+/** A field that can be saved but probably should not be: amber, beside the field, read out when it appears. */
+function FieldWarning({ text, testID }: { text: string; testID?: string }) {
+  return (
+    <View style={styles.warning} testID={testID} accessibilityLiveRegion="polite">
+      <Feather name="alert-triangle" size={15} color={colors.amberInk} style={styles.warningIcon} />
+      <AppText variant="small" color="amberInk" style={styles.warningText}>
+        {text}
+      </AppText>
+    </View>
   );
 }
 
@@ -405,6 +431,9 @@ const styles = StyleSheet.create({
   iconPressed: { backgroundColor: colors.crustSoft },
   iconDisabled: { borderColor: colors.border, backgroundColor: colors.page },
   figures: { flexDirection: "row", flexWrap: "wrap", gap: space.sm },
+  warning: { flexDirection: "row", gap: space.xs, alignItems: "flex-start", backgroundColor: colors.amberSoft, borderRadius: radii.md, padding: space.sm, marginTop: space.xs },
+  warningIcon: { marginTop: 2 },
+  warningText: { flex: 1 },
   figure: { flexGrow: 1, flexBasis: 130, backgroundColor: colors.sunken, borderRadius: radii.md, padding: space.md, gap: 1 },
   figureValue: { fontFamily: fonts.extrabold, fontSize: 24, lineHeight: 30, fontVariant: ["tabular-nums"] },
 });

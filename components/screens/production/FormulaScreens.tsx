@@ -280,7 +280,7 @@ export function FormulaReadOnly({ formula: f }: { formula: FormulaDto }) {
           items={[
             { label: "Loss allowance", value: formatPercent(f.lossPercent) },
             { label: "Dough temperature", value: withF(f.ddtC) },
-            { label: "Friction", value: `${f.frictionC} °C` },
+            { label: "Friction factor", value: `${f.frictionC} °C` },
             { label: "Baked inside", value: f.targetInternalC === null ? "Not given" : withF(f.targetInternalC) },
           ]}
         />

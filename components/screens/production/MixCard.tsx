@@ -6,6 +6,8 @@ import { AppText, Heading } from "../../ui/Text";
 import { Badge } from "../../ui/Badge";
 import { TickBox } from "../../ui/TickBox";
 import { CautionNote } from "./Cautions";
+import { mixLiquidAdvice } from "../../../shared/cautions";
+import { liquidNeedsAttention } from "../../../shared/production";
 import type { PlanView } from "../../api/production";
 import type { Units } from "../../production/units";
 import { colors, fonts, radii, space } from "../../theme";
@@ -34,7 +36,10 @@ export function MixCard({ dough, mix, units, done, busy, onDone }: MixCardProps)
   const pasteTotal = paste.reduce((s, i) => s + i.pasteGrams, 0);
   const final = mix.ingredients.filter((i) => i.finalMixGrams > 0);
   const of = dough.mixes.length;
-  const flagged = !!mix.liquidTempAdvice;
+  // The liquid's ice, chilling or warming, worded in the chosen units; flagged when the liquid cannot be reached.
+  const flagged = mix.liquid ? liquidNeedsAttention(mix.liquid) : !!mix.liquidTempAdvice;
+  const advice = mix.liquid ? mixLiquidAdvice(dough, mix, units) : mix.liquidTempAdvice;
+  const ice = mix.liquid && mix.liquid.iceGrams > 0 ? mix.liquid : null;
   return (
     <View style={[styles.card, done && styles.cardDone]} testID={id}>
       <View style={styles.head}>
@@ -75,11 +80,11 @@ export function MixCard({ dough, mix, units, done, busy, onDone }: MixCardProps)
           </View>
         ) : null}
       </View>
-      {flagged ? (
-        <View style={styles.advice} accessibilityRole="alert" testID={`${id}-advice`}>
-          <Feather name="thermometer" size={18} color={colors.amberInk} />
-          <AppText variant="bodyStrong" color="amberInk" style={styles.flex}>
-            {mix.liquidTempAdvice}
+      {advice ? (
+        <View style={[styles.advice, !flagged && styles.adviceCalm]} accessibilityRole={flagged ? "alert" : undefined} testID={`${id}-advice`}>
+          <Feather name="thermometer" size={18} color={flagged ? colors.amberInk : colors.ink} />
+          <AppText variant="bodyStrong" color={flagged ? "amberInk" : "ink"} style={styles.flex}>
+            {advice}
           </AppText>
         </View>
       ) : null}
@@ -90,16 +95,23 @@ export function MixCard({ dough, mix, units, done, busy, onDone }: MixCardProps)
           {paste.map((i) => (
             <WeighRow key={i.ingredientId} name={names.get(i.ingredientId) ?? "Ingredient"} amount={units.mass(i.pasteGrams)} testID={`${id}-paste-${i.ingredientId}`} />
           ))}
-          <CautionNote step="paste" testID={`${id}-paste-caution`} />
+          <CautionNote step="paste" cookToC={dough.paste.cookToC} testID={`${id}-paste-caution`} />
         </View>
       ) : null}
 
       <View style={styles.section} testID={`${id}-final`}>
         <SectionHead title="Final mix" detail={mix.liquidTempC !== null ? `Liquid at ${units.temp(mix.liquidTempC)}` : undefined} step={dough.paste && paste.length ? "2" : undefined} />
         {dough.paste && paste.length ? <WeighRow name="Cooled paste (all of it)" amount={units.mass(pasteTotal)} muted testID={`${id}-final-paste`} /> : null}
-        {final.map((i) => (
-          <WeighRow key={i.ingredientId} name={names.get(i.ingredientId) ?? "Ingredient"} amount={units.mass(i.finalMixGrams)} testID={`${id}-final-${i.ingredientId}`} />
-        ))}
+        {final.map((i) =>
+          ice && ice.waterIngredientId === i.ingredientId ? (
+            <React.Fragment key={i.ingredientId}>
+              <WeighRow name={`${names.get(i.ingredientId) ?? "Water"} (tap)`} amount={units.mass(Math.max(0, i.finalMixGrams - ice.iceGrams))} testID={`${id}-final-${i.ingredientId}`} />
+              <WeighRow name={`Crushed ice, for the ${(names.get(i.ingredientId) ?? "water").toLowerCase()}`} amount={units.mass(ice.iceGrams)} testID={`${id}-ice`} />
+            </React.Fragment>
+          ) : (
+            <WeighRow key={i.ingredientId} name={names.get(i.ingredientId) ?? "Ingredient"} amount={units.mass(i.finalMixGrams)} testID={`${id}-final-${i.ingredientId}`} />
+          ),
+        )}
         <CautionNote step="mix" testID={`${id}-mix-caution`} />
       </View>
 
@@ -179,6 +191,7 @@ const styles = StyleSheet.create({
   figureValue: { fontFamily: fonts.extrabold, fontSize: 30, lineHeight: 36, fontVariant: ["tabular-nums"] },
   liquidValue: { fontFamily: fonts.extrabold, fontSize: 44, lineHeight: 50, fontVariant: ["tabular-nums"] },
   advice: { flexDirection: "row", gap: space.sm, alignItems: "flex-start", backgroundColor: colors.amberSoft, borderRadius: radii.md, padding: space.md },
+  adviceCalm: { backgroundColor: colors.sunken },
   section: { gap: space.xs, borderTopWidth: 1, borderTopColor: colors.border, paddingTop: space.md },
   sectionHead: { flexDirection: "row", alignItems: "center", flexWrap: "wrap", gap: space.sm, marginBottom: space.xs },
   sectionDetail: { marginLeft: "auto" },
