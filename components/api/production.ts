@@ -19,7 +19,17 @@ export interface BakeDayInput {
   milkC?: number;
 }
 
-export interface ProgressInput {
+export type ProgressInput = TickInput | InternalReadingInput;
+
+/** The internal temperature reached by an oven load (°C; null clears it), recorded by the baker. */
+export interface InternalReadingInput {
+  kind: "internal";
+  /** The oven load's number. */
+  key: string;
+  valueC: number | null;
+}
+
+export interface TickInput {
   kind: "mix" | "wave";
   /** "<formulaId>:<mixIndex>" for a mix, "<loadNumber>" for an oven load (kind "wave", its stored name). */
   key: string;

@@ -14,7 +14,7 @@ import { DEFAULT_MILK_C, DEFAULT_TAP_C, liquidNeedsAttention, planDough, planPro
 import { liquidAdviceText } from "../../shared/cautions";
 import { scheduleDay } from "../../shared/schedule";
 import { loadProductionSettings, resourcesOf } from "./settings.service";
-import type { PlanDto } from "../../shared/schemas/production";
+import type { PlanDto, PlanProgressDto, ProgressBody } from "../../shared/schemas/production";
 import { componentCards, componentTotals, resolveBake } from "../../shared/components";
 import { componentLine, productMakeup } from "../catalog/components.service";
 
@@ -252,21 +252,25 @@ export async function saveBakeDay(ctx: AppContext, date: string, input: { extraP
   return day.frozenPlan ? freeze(ctx, date) : { ...(await computePlan(ctx, date)), changes: [] };
 }
 
-export async function setProgress(ctx: AppContext, date: string, input: { kind: "mix" | "wave"; key: string; done: boolean }) {
-  const m = ctx.dataSource.manager;
+export async function setProgress(ctx: AppContext, date: string, input: ProgressBody): Promise<PlanProgressDto> {
   return ctx.dataSource.transaction(async (tx) => {
     await bakeDayForWrite(tx, date);
     await tx.query("SELECT date FROM bake_day WHERE date = ? FOR UPDATE", [date]);
     const day = await bakeDay(tx, date);
-    const progress = JSON.parse(day.progress) as { mixes: string[]; waves: number[] };
-    if (input.kind === "mix") {
+    const progress = JSON.parse(day.progress) as PlanProgressDto;
+    if (input.kind === "internal") {
+      // The internal temperature probed in an oven load, with when it was recorded (the server's clock).
+      const internal = { ...(progress.internal ?? {}) };
+      if (input.valueC === null) delete internal[input.key];
+      else internal[input.key] = { c: Math.round(input.valueC * 10) / 10, at: ctx.clock.now().toISOString() };
+      progress.internal = internal;
+    } else if (input.kind === "mix") {
       progress.mixes = input.done ? [...new Set([...progress.mixes, input.key])] : progress.mixes.filter((k) => k !== input.key);
     } else {
       const n = Number(input.key);
       progress.waves = input.done ? [...new Set([...progress.waves, n])].sort((a, b) => a - b) : progress.waves.filter((w) => w !== n);
     }
     await tx.getRepository(BakeDay).update({ date }, { progress: JSON.stringify(progress) });
-    void m;
     return progress;
   });
 }

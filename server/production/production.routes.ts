@@ -4,7 +4,7 @@ import type { AppContext } from "../http/context";
 import { parse } from "../http/errors";
 import { allow, currentUser } from "../http/auth";
 import { idSchema } from "../../shared/schemas/common";
-import { bakeDayInputSchema, planQuerySchema, productionSettingsSchema } from "../../shared/schemas/production";
+import { bakeDayInputSchema, planQuerySchema, productionSettingsSchema, progressInputSchema } from "../../shared/schemas/production";
 import { dateSchema } from "../../shared/schemas/calendar";
 import { getBakery } from "../bakery/bakery.service";
 import * as formulas from "./formulas.service";
@@ -91,7 +91,7 @@ export function productionRoutes(ctx: AppContext): Router {
   });
   r.post("/bake-days/:date/progress", allow(...KITCHEN), async (req, res) => {
     const { date } = parse(z.object({ date: dateSchema }), req.params);
-    const input = parse(z.object({ kind: z.enum(["mix", "wave"]), key: z.string().min(1).max(40), done: z.boolean() }), req.body);
+    const input = parse(progressInputSchema, req.body);
     res.json({ progress: await plans.setProgress(ctx, date, input) });
   });
   r.get("/forecast", allow(...KITCHEN), async (req, res) => {

@@ -118,8 +118,29 @@ export interface PlanDto {
   /** The schedule around the timeline: oven loads, conflicts with the day, the earlier start that would fit. */
   schedule?: Omit<DaySchedule, "entries" | "warnings">;
   warnings: string[];
-  progress: { mixes: string[]; waves: number[] };
+  progress: PlanProgressDto;
 }
+
+/**
+ * What the baker ticks off and records on the day: mixes weighed and mixed, oven loads baked, and the internal
+ * temperature probed in each oven load (°C, with when it was recorded; by load number).
+ */
+export interface PlanProgressDto {
+  mixes: string[];
+  waves: number[];
+  internal?: Record<string, { c: number; at: string }>;
+}
+
+/** POST /api/production/bake-days/:date/progress: a tick, or an internal temperature reading (null clears it). */
+export const progressInputSchema = z.union([
+  z.object({ kind: z.enum(["mix", "wave"]), key: z.string().min(1).max(40), done: z.boolean() }),
+  z.object({
+    kind: z.literal("internal"),
+    key: z.string().regex(/^\d{1,4}$/, "Name the oven load by its number."),
+    valueC: z.number({ invalid_type_error: "Enter the temperature reached, e.g. 92." }).min(20, "Enter the temperature reached inside the bread: 20 to 120 °C.").max(120, "Enter the temperature reached inside the bread: 20 to 120 °C.").nullable(),
+  }),
+]);
+export type ProgressBody = z.output<typeof progressInputSchema>;
 
 // ---- production settings: the bakehouse's resources ----------------------------------------------
 

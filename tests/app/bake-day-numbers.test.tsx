@@ -131,3 +131,33 @@ describe("bake day numbers", () => {
     expect(api.callsTo("PUT", "/api/production/bake-days/2025-12-03")[0].body).toMatchObject({ roomC: 22, flourC: 20, pasteC: 30, tapC: 10, milkC: 4 });
   });
 });
+
+describe("internal temperatures", () => {
+  beforeEach(() => {
+    signedInAs(BAKER);
+    setUnitSystem("us");
+  });
+
+  it("records the temperature reached per oven load, in °C, and says when it is below the dough's target", async () => {
+    let progress: PlanView["progress"] = { mixes: [], waves: [] };
+    const api = mockApi(routes(numbersPlan(), {
+      "GET /api/production/plan": (req: FakeRequest) => ({ body: { plan: { ...numbersPlan(), date: req.query.date, progress } } }),
+      "POST /api/production/bake-days/:date/progress": (req: FakeRequest) => {
+        const b = req.body as { kind: string; key: string; valueC: number };
+        progress = { ...progress, internal: { ...progress.internal, [b.key]: { c: b.valueC, at: "2025-12-03T04:50:00.000-06:00" } } };
+        return { body: { progress } };
+      },
+    }));
+    renderApp("/bake");
+    expect(await screen.findByTestId("internal-1")).toHaveTextContent(/Oven load 1 · Deck oven.*Milk bread · done at 192 °F or above/);
+    fireEvent.changeText(screen.getByTestId("internal-1-input"), "500");
+    fireEvent.press(screen.getByTestId("internal-1-save"));
+    expect(screen.getByTestId("internal-1-input-error")).toHaveTextContent("Enter 68 °F to 248 °F.");
+    // 189 °F = 87.2 °C: below the milk bread's 89 °C (192 °F).
+    fireEvent.changeText(screen.getByTestId("internal-1-input"), "189");
+    fireEvent.press(screen.getByTestId("internal-1-save"));
+    await waitFor(() => expect(api.callsTo("POST", "/api/production/bake-days/2025-12-03/progress")).toHaveLength(1));
+    expect(api.callsTo("POST", "/api/production/bake-days/2025-12-03/progress")[0].body).toEqual({ kind: "internal", key: "1", valueC: 87.2 });
+    expect(await screen.findByTestId("internal-1-recorded")).toHaveTextContent("Reached 189 °F at 04:50: below 192 °F, back in the oven and probe again.");
+  });
+});

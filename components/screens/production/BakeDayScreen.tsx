@@ -30,6 +30,7 @@ import { kitchenPaths, type KitchenArea, type KitchenPaths } from "../../product
 import { useUnits, type Units } from "../../production/units";
 import { useIsWide } from "../../shell/useIsWide";
 import { CautionsCard } from "./Cautions";
+import { InternalTempsCard } from "./InternalTemps";
 import { liquidWarnings } from "../../../shared/cautions";
 import { MixCard } from "./MixCard";
 import { ComponentCards } from "./ComponentCards";
@@ -306,6 +307,8 @@ function PlanBody({ date, plan, units, paths }: PlanBodyProps) {
         busyWave={busyKey?.kind === "wave" ? Number(busyKey.key) : null}
         onBaked={(wave, baked) => tick("wave", String(wave), baked)}
       />
+
+      <InternalTempsCard plan={plan} units={units} />
 
       <View style={[styles.row, wide && styles.rowWide]}>
         <View style={wide ? styles.col1 : undefined}>
