@@ -1,8 +1,9 @@
 import {
-  apportion, formulaFigures, formulaWarnings, iceGrams, liquidTemperature, mixLiquidLines, planDough, planLiquid, planProduct, roundGrams, validateFormula,
+  PASTE_COOK_MESSAGE, apportion, formulaFigures, formulaWarnings, iceGrams, liquidTemperature, mixLiquidLines, planDough, planLiquid, planProduct, roundGrams, validateFormula,
   type FormulaSpec, type IngredientInfo,
 } from "../../shared/production";
 import { liquidAdviceText } from "../../shared/cautions";
+import { formulaInputSchema } from "../../shared/schemas/production";
 import { GRAMS_PER_OUNCE, GRAMS_PER_POUND, celsiusToFahrenheit, fahrenheitToCelsius, formatMass, gramsToOunces, mmToInches, unitsFor } from "../../shared/units";
 
 const lib = new Map<number, IngredientInfo>([
@@ -246,6 +247,10 @@ describe("formula checks", () => {
     expect(withCook(59.9)).toBeDefined();
     expect(withCook(60)).toBeUndefined();
     expect(withCook(65)).toBeUndefined();
+    // The API's schema (what the form checks too) says the same, whatever the value.
+    const parsed = formulaInputSchema.safeParse({ name: "X", paste: { flourIngredientId: 1, liquidIngredientId: 5, flourPercent: 5, liquidRatio: 5, cookToC: 40 }, lines: [] });
+    expect(parsed.success).toBe(false);
+    expect(parsed.success ? null : parsed.error.issues.find((i) => i.path.join(".") === "paste.cookToC")?.message).toBe(PASTE_COOK_MESSAGE);
   });
 
   it("rounds grams to 1 g, or 0.1 g under 50 g, and apportions exactly", () => {
