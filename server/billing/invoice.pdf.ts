@@ -61,8 +61,10 @@ export function renderInvoicePdf(d: Detail & { bakery: Bakery; account: Customer
   total("Subtotal", money(inv.subtotalCents));
   total(inv.taxExempt ? "Sales tax (exempt: certificate on file)" : `Sales tax ${(inv.taxRateBp / 100).toFixed(2)} %`, money(inv.taxCents));
   total("Total", money(inv.totalCents), true);
-  for (const c of d.creditNotes) total(`Credit note ${c.number}: ${c.reason}`, `− ${money(c.totalCents)}`);
-  if (inv.paidCents) total("Paid", `− ${money(inv.paidCents)}`);
+  // An en dash, not U+2212: the built-in Helvetica is WinAnsi-encoded and has no minus sign, so "−" was drawn
+  // as a wrong, wider glyph than pdfkit measured and ran past the right margin.
+  for (const c of d.creditNotes) total(`Credit note ${c.number}: ${c.reason}`, `– ${money(c.totalCents)}`);
+  if (inv.paidCents) total("Paid", `– ${money(inv.paidCents)}`);
   if (inv.refundedCents) total("Refunded", money(inv.refundedCents));
   total(inv.amountDueCents ? "Amount due" : "Paid in full", money(inv.amountDueCents), true);
 

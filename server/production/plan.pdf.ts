@@ -16,6 +16,13 @@ const BOTTOM = 48;
 type Font = "Helvetica" | "Helvetica-Bold";
 
 /**
+ * The built-in Helvetica is WinAnsi-encoded (PDF 32000-1 Annex D): characters outside it are drawn as other glyphs
+ * than pdfkit measured, so they are written with the nearest WinAnsi characters first.
+ */
+const WINANSI_SUBSTITUTES: [RegExp, string][] = [[/\u2212/g, "-"], [/\u2192/g, "->"], [/\u2264/g, "<="], [/\u2265/g, ">="], [/\u2248/g, "~"], [/\u2009|\u202F/g, " "]];
+export const pdfText = (s: string) => WINANSI_SUBSTITUTES.reduce((t, [re, to]) => t.replace(re, to), s);
+
+/**
  * The production sheet (overview, doughs, timeline, cautions) followed by one weigh-out card per mix, in large
  * type for a bakery wall. Letter size, pdfkit's built-in Helvetica. Every piece of text is drawn inside a measured
  * box (an x and a width within the margins; its height from heightOfString before it is placed), so nothing
@@ -37,7 +44,8 @@ export function renderPlanPdf(plan: PlanDto & { bakeryName: string; timeZone: st
     if (doc.y + space > bottom()) doc.addPage();
   };
   /** A paragraph in a measured box: wraps at `width`, never split across pages when it fits on one. */
-  const para = (text: string, o: { font?: Font; size?: number; color?: string; x?: number; width?: number; gap?: number; spacing?: number } = {}) => {
+  const para = (raw: string, o: { font?: Font; size?: number; color?: string; x?: number; width?: number; gap?: number; spacing?: number } = {}) => {
+    const text = pdfText(raw);
     const x = o.x ?? MARGIN;
     const width = Math.min(o.width ?? W, MARGIN + W - x);
     doc.font(o.font ?? "Helvetica").fontSize(o.size ?? 10);
@@ -58,7 +66,8 @@ export function renderPlanPdf(plan: PlanDto & { bakeryName: string; timeZone: st
     doc.y += 4;
   };
   /** A table row: every cell measured in its column (width − 6 gutter), the row as high as its tallest cell. */
-  const row = (cols: string[], widths: number[], o: { bold?: boolean; size?: number; left?: number[]; color?: string } = {}) => {
+  const row = (raw: string[], widths: number[], o: { bold?: boolean; size?: number; left?: number[]; color?: string } = {}) => {
+    const cols = raw.map(pdfText);
     doc.font(o.bold ? "Helvetica-Bold" : "Helvetica").fontSize(o.size ?? 10);
     const h = Math.max(...cols.map((c, i) => doc.heightOfString(c || " ", { width: widths[i] - 6 })));
     ensure(h + 3);
@@ -94,16 +103,17 @@ export function renderPlanPdf(plan: PlanDto & { bakeryName: string; timeZone: st
   heading("Pans", 18);
   for (const p of plan.products) {
     const nameX = MARGIN + 75;
-    const detail = `${p.panName} · ${p.units} ordered${p.extraPans ? ` + ${u.count(p.extraPans, "extra pan", "extra pans")}` : ""} · ${u.count(p.pieces, "piece", "pieces")} of ${u.piece(p.pieceGrams)} scaled dough`;
+    const detail = pdfText(`${p.panName} · ${p.units} ordered${p.extraPans ? ` + ${u.count(p.extraPans, "extra pan", "extra pans")}` : ""} · ${u.count(p.pieces, "piece", "pieces")} of ${u.piece(p.pieceGrams)} scaled dough`);
+    const name = pdfText(p.name);
     doc.font("Helvetica-Bold").fontSize(13);
-    const nameH = doc.heightOfString(p.name, { width: W - 75 });
+    const nameH = doc.heightOfString(name, { width: W - 75 });
     doc.font("Helvetica").fontSize(10);
     const detailH = doc.heightOfString(detail, { width: W - 75 });
     ensure(Math.max(34, nameH + detailH + 6));
     const y = doc.y;
     doc.font("Helvetica-Bold").fontSize(28).fillColor(INK).text(String(p.pans), MARGIN, y, { width: 70, lineBreak: false });
     doc.font("Helvetica").fontSize(8).fillColor(MUTED).text(p.pans === 1 ? "pan" : "pans", MARGIN, y + 28, { width: 70, lineBreak: false });
-    doc.font("Helvetica-Bold").fontSize(13).fillColor(INK).text(p.name, nameX, y + 2, { width: W - 75 });
+    doc.font("Helvetica-Bold").fontSize(13).fillColor(INK).text(name, nameX, y + 2, { width: W - 75 });
     doc.font("Helvetica").fontSize(10).fillColor(MUTED).text(detail, nameX, doc.y, { width: W - 75 });
     doc.fillColor(INK);
     doc.x = MARGIN;

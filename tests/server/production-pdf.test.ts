@@ -4,6 +4,7 @@ import { startTestApp, auth, type TestApp } from "./helpers/app";
 import { seedDemo } from "../../server/seed/demo";
 import { computePlan } from "../../server/production/plan.service";
 import { renderPlanPdf } from "../../server/production/plan.pdf";
+import { renderInvoicePdf } from "../../server/billing/invoice.pdf";
 import { Product } from "../../server/catalog/product.entity";
 import { Formula } from "../../server/production/production.entity";
 import { User } from "../../server/users/user.entity";
@@ -118,7 +119,8 @@ describe("production PDFs fit the page (checked on the extracted text positions)
   });
 
   it("a day with long product, formula and bakery names still fits in both unit systems", async () => {
-    const long = "Extraordinarily-long-named sesame-and-black-onion-seed brioche burger buns for the harbourside restaurant group";
+    // With characters the built-in Helvetica (WinAnsi) does not have: "−" (U+2212) and "→" were drawn wider than measured.
+    const long = "Extraordinarily-long-named sesame-and-black-onion-seed brioche burger buns − harbourside group → 8 per pack ≥ 90 g";
     const longFormula = "Milk bread (Hokkaido style, tangzhong), the bakery's house recipe for every soft roll, bun and sandwich loaf";
     await t.ds.getRepository(Product).update({ name: "Sesame brioche buns" }, { name: long.slice(0, 120) });
     await t.ds.getRepository(Formula).update({ name: "Milk bread" }, { name: longFormula.slice(0, 120) });
@@ -129,6 +131,21 @@ describe("production PDFs fit the page (checked on the extracted text positions)
       expect(overflows(pages)).toEqual([]);
       expect(textOf(pages)).toMatch(/Extraordinarily/);
     }
+  });
+
+  it("the invoice PDF fits too, with long product, account and bakery texts", async () => {
+    const long = "Extraordinarily-long-named sesame-and-black-onion-seed brioche burger buns for the harbourside restaurant group, pack of 8";
+    const detail = {
+      invoice: { number: "HB-2026-000123", kind: "statement", issueDate: "2026-12-01", dueDate: "2026-12-31", periodStart: "2026-11-01", periodEnd: "2026-11-30", currency: "USD", subtotalCents: 123456789, taxExempt: false, taxRateBp: 825, taxCents: 10185185, totalCents: 133641974, paidCents: 100000, refundedCents: 0, amountDueCents: 133541974 },
+      lines: Array.from({ length: 40 }, (_, i) => ({ deliveryDate: "2026-11-02", description: i % 3 ? "Milk-bread dinner rolls, tray of 15" : long, quantity: 1200 + i, unitPriceCents: 1999, amountCents: 2398800 })),
+      creditNotes: [{ number: "CN-2026-000001", reason: "Two trays arrived crushed on the 14th; the driver confirmed it at the door and the café kept the rest of the order", totalCents: 3600 }],
+    };
+    const bakery = { name: "The Hollowbrook Bakehouse and Harbourside Wholesale Kitchen, Incorporated", address: "Unit 14, The Old Granary Buildings, 1200 North Harbourside Industrial Estate Road, Hollowbrook, WI 53000", phone: "+1 414 555 0100", email: "accounts-receivable-and-wholesale@hollowbrook-bakehouse.test", paymentInstructions: "Bank transfer to Hollowbrook Community Credit Union, routing 000000000, account 0000000000000, quoting the invoice number and the account name exactly as printed above" };
+    const account = { businessName: "Juniper Table Restaurant Group and Harbourside Events Catering Company", deliveryAddress: "The loading bay behind 42 Juniper Street, past the blue door, ring twice", billingEmail: "accounts.payable.department@junipertable-restaurant-group.test", paymentTerms: "net30" };
+    const pdf = await renderInvoicePdf({ ...detail, bakery, account } as unknown as Parameters<typeof renderInvoicePdf>[0]);
+    const pages = extract(pdf);
+    expect(textOf(pages)).toMatch(/Extraordinarily/);
+    expect(overflows(pages, 48)).toEqual([]);
   });
 
   it("the sheet is served as a PDF through the API in either system", async () => {
