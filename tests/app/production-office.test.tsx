@@ -32,12 +32,12 @@ describe("purchasing forecast", () => {
     renderApp("/bake/forecast");
     expect(await screen.findByTestId("forecast-item-1-packs")).toHaveTextContent("Buy 2 × 25 kg sack");
     expect(api.callsTo("GET", "/api/production/forecast")[0].query.from).toBe("2025-12-03");
-    expect(screen.getByTestId("forecast-item-1")).toHaveTextContent(/Bread flour.*35\.35 kg.*\$49\.00/);
+    expect(screen.getByTestId("forecast-item-1")).toHaveTextContent(/Bread flour.*35\.345 kg.*\$49\.00/); // 1 g resolution in kg: three decimals
     expect(screen.getByTestId("forecast-item-2-packs")).toHaveTextContent("Buy 5 × 1 gal jug");
     expect(screen.getByTestId("forecast-item-10-packs")).toHaveTextContent("Not bought (e.g. tap water)");
     expect(screen.getByTestId("forecast-total")).toHaveTextContent(/\$73\.45/);
     expect(screen.getByTestId("forecast-lines")).toHaveTextContent(/2.*Ingredients to buy/);
-    expect(screen.getByTestId("forecast-day-2025-12-03")).toHaveTextContent(/Wed 3 Dec.*10\.17 kg.*11 units/);
+    expect(screen.getByTestId("forecast-day-2025-12-03")).toHaveTextContent(/Wed 3 Dec.*10\.169 kg.*11 units/);
     expect(screen.getByTestId("forecast-day-2025-12-07")).toHaveTextContent(/no dough/);
     expect(screen.getByTestId("forecast-range")).toHaveTextContent("Wed 3 Dec – Tue 9 Dec");
     fireEvent.press(screen.getByTestId("forecast-next"));
