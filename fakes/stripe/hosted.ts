@@ -5,8 +5,8 @@ import { luhnValid, normaliseCardNumber } from "./luhn";
 import { messagePage, payPage, type PayField, type PayFormValues } from "./pages";
 
 /**
- * The hosted payment page a Checkout Session's `url` points to: GET shows the order and a card
- * form, POST validates it (Luhn, expiry, CVC), then pays or shows the issuer's decline.
+ * Panwise's local test payment page, where a Checkout Session's `url` points: GET shows what is paid and
+ * a card form, POST checks it (Luhn, expiry, CVC), then pays or shows the bank's decline in our words.
  */
 
 export interface CardCheck {
@@ -14,39 +14,45 @@ export interface CardCheck {
   errors: Partial<Record<PayField, string>>;
 }
 
-/** Validates the form as Stripe's card element does; `now` is used for the expiry check. */
+/**
+ * Checks the form before any charge, with Panwise's own messages: the card number by length (ISO/IEC 7812-1:
+ * 8 to 19 digits; Panwise asks for at least 12, as no payment card in use is shorter, from memory) and check
+ * digit (Luhn, luhn.ts), the expiry (a card is valid through the last day of its month, from memory), the CVC
+ * (3 digits, 4 on American Express, from memory). `now` is used for the expiry check.
+ */
 export function checkCard(values: PayFormValues, askEmail: boolean, now: Date): CardCheck {
   const errors: Partial<Record<PayField, string>> = {};
   const email = values.email.trim();
-  if (askEmail && !/^[^\s@]+@[^\s@]+\.[^\s@]+$/.test(email)) errors.email = email ? "Your email address is invalid." : "Enter your email address.";
+  if (askEmail && !/^[^\s@]+@[^\s@]+\.[^\s@]+$/.test(email)) errors.email = email ? "That e-mail address looks incomplete — it needs a name, an @ and a domain, like name@example.com." : "Enter the e-mail address the receipt should go to.";
 
   const digits = normaliseCardNumber(values.card_number);
-  if (!values.card_number.trim()) errors.card_number = "Enter your card number.";
-  else if (digits === null || digits.length > 19) errors.card_number = "Your card number is invalid.";
-  else if (digits.length < 12) errors.card_number = "Your card number is incomplete.";
-  else if (!luhnValid(digits)) errors.card_number = "Your card number is invalid.";
+  if (!values.card_number.trim()) errors.card_number = "Enter the card number from the front of the card.";
+  else if (digits === null) errors.card_number = "The card number is digits only — take out any letters or signs.";
+  else if (digits.length > 19) errors.card_number = "The card number is too long — check the digits.";
+  else if (digits.length < 12) errors.card_number = "The card number is too short — check the digits.";
+  else if (!luhnValid(digits)) errors.card_number = "That card number does not add up — a digit may be mistyped or two swapped.";
 
   let expMonth = 0;
   let expYear = 0;
   const exp = /^\s*(\d{1,2})\s*\/?\s*(\d{2}|\d{4})\s*$/.exec(values.expiry);
-  if (!values.expiry.trim()) errors.expiry = "Enter the expiry date.";
-  else if (!exp) errors.expiry = "Your card's expiration date is incomplete. Use MM/YY.";
+  if (!values.expiry.trim()) errors.expiry = "Enter the expiry date printed on the card.";
+  else if (!exp) errors.expiry = "Write the expiry date as month and year, like 08/29.";
   else {
     expMonth = Number(exp[1]);
     expYear = exp[2]!.length === 2 ? 2000 + Number(exp[2]) : Number(exp[2]);
     const y = now.getUTCFullYear();
     const m = now.getUTCMonth() + 1;
-    if (expMonth < 1 || expMonth > 12) errors.expiry = "Your card's expiration month is invalid.";
-    else if (expYear < y || (expYear === y && expMonth < m)) errors.expiry = expYear < y ? "Your card's expiration year is in the past." : "Your card's expiration date is in the past.";
-    else if (expYear > y + 50) errors.expiry = "Your card's expiration year is invalid.";
+    if (expMonth < 1 || expMonth > 12) errors.expiry = "The month of the expiry date goes from 01 to 12.";
+    else if (expYear < y || (expYear === y && expMonth < m)) errors.expiry = `This card ran out at the end of ${String(expMonth).padStart(2, "0")}/${expYear} — use a card that is still valid.`;
+    else if (expYear > y + 50) errors.expiry = "That expiry year is too far ahead — check the year.";
   }
 
-  if (!values.cvc.trim()) errors.cvc = "Enter the security code.";
-  else if (!/^\d{3,4}$/.test(values.cvc.trim())) errors.cvc = "Your card's security code is incomplete.";
+  if (!values.cvc.trim()) errors.cvc = "Enter the security code (3 or 4 digits on the card).";
+  else if (!/^\d{3,4}$/.test(values.cvc.trim())) errors.cvc = "The security code is 3 or 4 digits — check it on the card.";
 
   const name = values.name.trim();
-  if (!name) errors.name = "Enter the name on the card.";
-  else if (name.length > 200) errors.name = "The name on the card is too long.";
+  if (!name) errors.name = "Enter the name as it is printed on the card.";
+  else if (name.length > 200) errors.name = "That name is longer than any card holds (200 characters at most).";
 
   const ok = Object.keys(errors).length === 0;
   return { errors, card: ok ? { number: digits!, expMonth, expYear, name, email } : null };
@@ -74,16 +80,16 @@ export function hostedRouter(deps: { account: FakeAccount; store: Store; nowMs: 
     const id = String(req.params.id);
     const session = store.get("checkoutSessions", id);
     if (!session) {
-      html(res, 404, messagePage("Payment page not found", "There is no checkout session with this address. Ask the seller for a new payment link."));
+      html(res, 404, messagePage("Payment page not found", "No payment page lives at this address. Go back to the invoice and choose to pay by card again."));
       return null;
     }
     if (session.status === "expired") {
-      html(res, 410, messagePage("This payment page has expired", "The checkout session expired before it was paid. Go back and start the payment again.", session.cancel_url ? { href: session.cancel_url, text: "Go back" } : undefined));
+      html(res, 410, messagePage("This payment page has expired", "It was not used in time, and nothing was charged. Go back and start the payment again.", session.cancel_url ? { href: session.cancel_url, text: "Go back" } : undefined));
       return null;
     }
     if (session.status === "complete") {
       const success = session.success_url?.replace(/\{CHECKOUT_SESSION_ID\}|%7BCHECKOUT_SESSION_ID%7D/gi, session.id);
-      html(res, method === "POST" ? 409 : 200, messagePage("Already paid", "This order has already been paid. You have not been charged again.", success ? { href: success, text: "Continue" } : undefined));
+      html(res, method === "POST" ? 409 : 200, messagePage("Already paid", "This has already been paid. Nothing more was charged.", success ? { href: success, text: "Continue" } : undefined));
       return null;
     }
     return session;
@@ -114,9 +120,9 @@ export function hostedRouter(deps: { account: FakeAccount; store: Store; nowMs: 
 
     const result = account.pay(session.id, check.card);
     store.save();
-    if (!result.ok) return html(res, 402, payPage({ session, items, values, askEmail, errors: {}, decline: result.decline.message }));
+    if (!result.ok) return html(res, 402, payPage({ session, items, values, askEmail, errors: {}, decline: result.decline }));
     if (result.redirectTo) return void res.redirect(303, result.redirectTo);
-    html(res, 200, messagePage("Payment complete", "Thank you: your payment was received."));
+    html(res, 200, messagePage("Payment received", "Thank you — the payment went through."));
   });
   return router;
 }

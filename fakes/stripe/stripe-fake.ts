@@ -141,8 +141,8 @@ export async function startStripeFake(opts: StripeFakeOptions = {}): Promise<Str
     const s = store.state;
     res.type("html").send(
       messagePage(
-        "Panwise Stripe fake",
-        `Serving the Stripe API on ${publicBase}/v1 for test keys (sk_test_...). ${Object.keys(s.checkoutSessions).length} checkout session(s), ` +
+        "Panwise local Stripe fake (test only)",
+        `Serving the Stripe API on ${publicBase}/v1 for test keys (sk_test_...). ${Object.keys(s.checkoutSessions).length} payment page(s), ` +
           `${Object.keys(s.charges).length} charge(s), available balance ${account.availableBalance()} cents. Webhooks: ${opts.webhookUrl ?? "none"}.`,
       ),
     );

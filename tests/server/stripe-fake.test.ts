@@ -6,7 +6,8 @@ import type { AddressInfo } from "node:net";
 import express from "express";
 import Stripe from "stripe";
 import { startStripeFake, type StripeFake } from "../../fakes/stripe/stripe-fake";
-import { cardBrand, luhnValid } from "../../fakes/stripe/luhn";
+import { DECLINING_TEST_CARDS, cardBrand, luhnValid } from "../../fakes/stripe/luhn";
+import { DECLINE_WORDS, declineWords } from "../../fakes/stripe/pages";
 
 /**
  * The Stripe fake driven by the official `stripe` SDK, the hosted payment page driven with fetch,
@@ -218,8 +219,25 @@ describe("hosted payment page", () => {
     expect(html).toContain("$42.50");
     expect(html).toContain("Milk bread rolls, tray of 24");
     expect(html).toContain(`href="${CANCEL_URL}">Cancel and go back</a>`);
-    expect(html).toContain("Test mode — Panwise Stripe fake");
+    // Issue 10 item 1: a banner that says it is Panwise's local test page and that no money moves; no placeholders.
+    expect(html).toContain("Panwise local test payment page — no money moves.");
+    expect(html).not.toContain("placeholder=");
+    expect(html).not.toMatch(/checkout session/i);
+    expect(html).toContain('<h1 id="pay-heading">2 items</h1>'); // two line items, no payee sent
     expect(html).toMatch(/<button type="submit">Pay \$42\.50<\/button>/);
+  });
+
+  it("names what is paid and to whom from the line item and metadata.payee, as Panwise sends them", async () => {
+    const s = await newSession({
+      line_items: [{ price_data: { currency: "usd", unit_amount: 12850, product_data: { name: "Invoice HB-2026-00042" } }, quantity: 1 }],
+      metadata: { invoiceId: "42", invoiceNumber: "HB-2026-00042", payee: "Hollowbrook Bakehouse" },
+    });
+    const html = await (await fetch(s.url!)).text();
+    expect(html).toContain('<h1 id="pay-heading">Invoice HB-2026-00042 — Hollowbrook Bakehouse</h1>');
+    expect(html).toContain("<title>Pay Invoice HB-2026-00042 — Hollowbrook Bakehouse (test)</title>");
+    expect(html).toContain("$128.50");
+    // The API keeps the metadata as sent (the SDK contract).
+    expect((await stripe.checkout.sessions.retrieve(s.id)).metadata).toEqual({ invoiceId: "42", invoiceNumber: "HB-2026-00042", payee: "Hollowbrook Bakehouse" });
   });
 
   it("pays with 4242…: 303 to success_url, session complete, payment intent, charge and balance transaction", async () => {
@@ -259,11 +277,15 @@ describe("hosted payment page", () => {
     const s = await newSession();
     const generic = await pay(s, CARD.generic);
     expect(generic.status).toBe(402);
-    expect(generic.html).toContain("Your card was declined.");
+    // The page speaks Panwise's words, chosen by decline code; the API keeps Stripe's message (below).
+    expect(generic.html).toContain(DECLINE_WORDS.generic_decline!.replace(/'/g, "&#39;"));
+    expect(generic.html).toContain("The payment did not go through");
+    expect(generic.html).not.toContain("Your card was declined.");
     expect(generic.html).toContain('value="Ann Baker"');
     const funds = await pay(s, CARD.funds);
     expect(funds.status).toBe(402);
-    expect(funds.html).toContain("Your card has insufficient funds.");
+    expect(funds.html).toContain("there is not enough money or credit on the card for this amount");
+    expect(funds.html).not.toContain("Your card has insufficient funds.");
 
     const open = await stripe.checkout.sessions.retrieve(s.id);
     expect(open).toMatchObject({ status: "open", payment_status: "unpaid", payment_intent: null });
@@ -292,15 +314,20 @@ describe("hosted payment page", () => {
     const chargesBefore = Object.keys(fake.state.charges).length;
     const bad = await pay(s, "4242 4242 4242 4241", { expiry: "01/20", cvc: "12" });
     expect(bad.status).toBe(400);
-    expect(bad.html).toContain("Your card number is invalid.");
-    expect(bad.html).toContain("Your card&#39;s expiration year is in the past.");
-    expect(bad.html).toContain("Your card&#39;s security code is incomplete.");
+    expect(bad.html).toContain("That card number does not add up — a digit may be mistyped or two swapped.");
+    expect(bad.html).toContain("This card ran out at the end of 01/2020 — use a card that is still valid.");
+    expect(bad.html).toContain("The security code is 3 or 4 digits — check it on the card.");
+    expect(bad.html).not.toMatch(/Your card/);
     expect(bad.html).toContain('value="4242 4242 4242 4241"');
     expect(bad.html).toContain('value="01/20"');
     expect(bad.html).toMatch(/id="f-card_number"[^>]*aria-describedby="f-card_number-hint f-card_number-error"[^>]*aria-invalid="true"/);
     const short = await pay(s, "4242 4242", { name: "" });
-    expect(short.html).toContain("Your card number is incomplete.");
-    expect(short.html).toContain("Enter the name on the card.");
+    expect(short.html).toContain("The card number is too short — check the digits.");
+    expect(short.html).toContain("Enter the name as it is printed on the card.");
+    const odd = await pay(s, "4242 4242 4242 424x", { expiry: "13/30", cvc: "" });
+    expect(odd.html).toContain("The card number is digits only — take out any letters or signs.");
+    expect(odd.html).toContain("The month of the expiry date goes from 01 to 12.");
+    expect(odd.html).toContain("Enter the security code (3 or 4 digits on the card).");
     expect((await stripe.checkout.sessions.retrieve(s.id)).status).toBe("open");
     expect(Object.keys(fake.state.charges)).toHaveLength(chargesBefore);
   });
@@ -308,10 +335,25 @@ describe("hosted payment page", () => {
   it("asks for an e-mail when the session has none, and creates a customer when customer_creation=always", async () => {
     const s = await newSession({ customer_email: undefined, customer_creation: "always" });
     expect((await fetch(s.url!).then((r) => r.text())).includes('id="f-email"')).toBe(true);
-    expect((await pay(s, CARD.ok, { email: "nope" })).html).toContain("Your email address is invalid.");
+    expect((await pay(s, CARD.ok, { email: "nope" })).html).toContain("That e-mail address looks incomplete — it needs a name, an @ and a domain, like name@example.com.");
     expect((await pay(s, CARD.ok, { email: "new@cafe.test" })).status).toBe(303);
     const done = await stripe.checkout.sessions.retrieve(s.id, { expand: ["customer"] });
     expect(done.customer).toMatchObject({ object: "customer", email: "new@cafe.test", name: "Ann Baker" });
+  });
+});
+
+describe("decline words on the payment page", () => {
+  // Codes from Stripe's docs ("Error codes", "Decline codes"); the words shown are Panwise's own, never Stripe's sentence.
+  it("has Panwise's own sentence for every declining test card, chosen by decline code, and a general one for unknown codes", () => {
+    for (const d of Object.values(DECLINING_TEST_CARDS)) {
+      const words = declineWords(d);
+      expect(words).toBe(DECLINE_WORDS[d.declineCode ?? d.code]);
+      expect(words).not.toBe(d.message);
+      expect(words).toContain("Nothing was taken.");
+    }
+    expect(declineWords({ code: "card_declined", declineCode: "do_not_honor", message: "x" })).toBe(DECLINE_WORDS.generic_decline);
+    expect(declineWords({ code: "something_new", message: "x" })).toBe(DECLINE_WORDS.generic_decline);
+    expect(new Set([DECLINE_WORDS.insufficient_funds, DECLINE_WORDS.expired_card, DECLINE_WORDS.incorrect_cvc, DECLINE_WORDS.processing_error, DECLINE_WORDS.generic_decline]).size).toBe(5);
   });
 });
 
