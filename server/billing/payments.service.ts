@@ -47,7 +47,7 @@ export async function createCheckout(ctx: AppContext, actor: SessionUser, invoic
       line_items: [{ quantity: 1, price_data: { currency: inv.currency.toLowerCase(), unit_amount: due, product_data: { name: `Invoice ${inv.number}` } } }],
       customer_email: account.billingEmail,
       client_reference_id: String(inv.id),
-      metadata: { invoiceId: String(inv.id), invoiceNumber: inv.number },
+      metadata: { invoiceId: String(inv.id), invoiceNumber: inv.number, payee: (await getBakery(ctx)).name }, // payee: the name the payment page shows
       payment_intent_data: { metadata: { invoiceId: String(inv.id), invoiceNumber: inv.number } },
       success_url: `${base}/pay/return?invoice=${inv.id}&session_id={CHECKOUT_SESSION_ID}`,
       cancel_url: `${base}/pay/return?invoice=${inv.id}&cancelled=1`,
@@ -600,6 +600,15 @@ export function csvTable(header: string[], rows: { currency: string; cells: (str
 }
 
 /**
+ * Export column headers: plain words in Title Case, named after what the column holds (never a processor's
+ * object name), as the CSV spec in DEVELOPERS.md sets out. "Ref" is a reference a person can look up at the
+ * card processor or the bank.
+ */
+export const INVOICE_CSV_COLUMNS = ["Invoice Number", "Account", "Kind", "Status", "Issue Date", "Due Date", "Currency", "Subtotal", "Tax", "Total", "Credited", "Paid", "Refunded", "Amount Due"];
+export const PAYMENT_CSV_COLUMNS = ["Received On", "Invoice Number", "Account", "Method", "Currency", "Amount", "Reference", "Card Payment Ref", "Card Charge Ref"];
+export const PAYOUT_CSV_COLUMNS = ["Bank Payout Ref", "Arrival Date", "Status", "Currency", "Amount", "Gross", "Fees", "Refunds", "Net", "Transactions", "Unmatched", "Reconciled At"];
+
+/**
  * CSV exports (RFC 4180 through csv-stringify). Column spec, documented in DEVELOPERS.md: amounts are
  * decimal in the currency's units with the ISO 4217 code in its own column; dates YYYY-MM-DD.
  */
@@ -607,13 +616,13 @@ export async function exportCsv(ctx: AppContext, kind: "invoices" | "payments" |
   const accounts = new Map((await ctx.dataSource.getRepository(CustomerAccount).find()).map((a) => [a.id, a.businessName]));
   if (kind === "invoices") {
     const rows = await ctx.dataSource.getRepository(Invoice).find({ order: { id: "ASC" } });
-    return csvTable(["number", "account", "kind", "status", "issue_date", "due_date", "currency", "subtotal", "tax", "total", "credited", "paid", "refunded", "amount_due"],
+    return csvTable(INVOICE_CSV_COLUMNS,
       rows.map((i) => ({ currency: i.currency, cells: [i.number, accounts.get(i.accountId) ?? "", i.kind, i.status, i.issueDate, i.dueDate, i.currency, i.subtotalCents, i.taxCents, i.totalCents, i.creditedCents, i.paidCents, i.refundedCents, amountDue(i)] })));
   }
   if (kind === "payments") {
     const rows = await ctx.dataSource.getRepository(Payment).find({ order: { id: "ASC" } });
     const invoices = new Map((await ctx.dataSource.getRepository(Invoice).find()).map((i) => [i.id, i]));
-    return csvTable(["received_on", "invoice", "account", "method", "currency", "amount", "reference", "stripe_payment_intent", "stripe_charge"],
+    return csvTable(PAYMENT_CSV_COLUMNS,
       rows.map((p) => { const i = invoices.get(p.invoiceId)!; return { currency: i.currency, cells: [p.receivedOn, i.number, accounts.get(i.accountId) ?? "", p.method, i.currency, p.amountCents, p.reference, p.stripePaymentIntentId ?? "", p.stripeChargeId ?? ""] }; }));
   }
   const payouts = await listPayouts(ctx);
@@ -623,5 +632,5 @@ export async function exportCsv(ctx: AppContext, kind: "invoices" | "payments" |
     const cur = p.currency.toUpperCase();
     out.push({ currency: cur, cells: [p.id, p.arrivalDate, p.status, cur, p.amountCents, d.grossCents, d.feesCents, d.refundsCents, d.netCents, String(d.transactions.length), String(d.unmatched), p.reconciledAt ?? ""] });
   }
-  return csvTable(["payout", "arrival_date", "status", "currency", "amount", "gross", "fees", "refunds", "net", "transactions", "unmatched", "reconciled_at"], out);
+  return csvTable(PAYOUT_CSV_COLUMNS, out);
 }

@@ -51,7 +51,9 @@ interface MoneyCell { money: string }
  * Order totals are never negative today; this keeps them numbers if that changes.
  */
 export function boardCsv(b: BoardDto, currency: string): string {
-  const header = ["Delivery date", "Account", "Status", "PO number", ...b.products.map((p) => `${p.name} (${p.saleUnit})`), `Order total (${currency})`];
+  // Fixed headers in Title Case plain words (the CSV spec in DEVELOPERS.md); a product column is named by the
+  // product and its sale unit as the catalog writes them.
+  const header = ["Delivery Date", "Account", "Status", "PO Number", ...b.products.map((p) => `${p.name} (${p.saleUnit})`), `Order Total (${currency})`];
   const money = (c: number): MoneyCell => ({ money: toDecimal(c, currency) });
   const rows = b.rows.map((r) => [b.date, r.accountName, r.status, r.poNumber ?? "", ...b.products.map((p) => r.quantities[p.id] ?? 0), money(r.totalCents)]);
   const totals = [b.date, "Total", "", "", ...b.products.map((p) => p.total), money(b.totalCents)];

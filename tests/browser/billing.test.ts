@@ -76,7 +76,7 @@ describe("the bookkeeper at desktop width", () => {
       const file = await download;
       expect(file.suggestedFilename()).toMatch(new RegExp(`^${kind}.*\\.csv$`));
       const text = await (await fetch(`${BASE_URL}/api/reports/exports/${kind}.csv`, { headers: { Authorization: `Bearer ${token}` } })).text();
-      expect(text.split("\n")[0]).toContain(kind === "payouts" ? "payout" : kind === "payments" ? "received_on" : "number");
+      expect(text.split("\n")[0]).toContain(kind === "payouts" ? "Bank Payout Ref" : kind === "payments" ? "Received On" : "Invoice Number");
     }
     await page.goto(`${BASE_URL}/office/invoices`);
     await page.getByText(/HB-2026-/).first().waitFor();

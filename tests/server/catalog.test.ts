@@ -301,7 +301,7 @@ describe("orders board", () => {
     expect(csv.headers["content-type"]).toMatch(/text\/csv/);
     expect(csv.headers["content-disposition"]).toContain("orders-2026-06-11.csv");
     const rows: string[][] = parseCsv(csv.text);
-    expect(rows[0][0]).toBe("Delivery date");
+    expect(rows[0][0]).toBe("Delivery Date");
     expect(rows[1][1]).toBe("Another, \"quoted\" Bistro");
     expect(rows.at(-1)![1]).toBe("Total");
     const col = rows[0].indexOf("Dinner rolls (tray of 15 rolls)");

@@ -330,9 +330,9 @@ describe("orders board CSV", () => {
     const header = rows[0];
     const row = rows.find((r) => r[1].includes("SUM(1+1)"))!;
     expect(row[header.indexOf("Account")]).toBe("'@SUM(1+1)*cmd|' /C calc'!A0");
-    expect(row[header.indexOf("PO number")]).toBe(`'${po}`);
+    expect(row[header.indexOf("PO Number")]).toBe(`'${po}`);
     expect(row[header.indexOf("Dinner rolls (tray of 15 rolls)")]).toBe("3");
-    expect(row[header.indexOf("Order total (USD)")]).toBe("54.00");
+    expect(row[header.indexOf("Order Total (USD)")]).toBe("54.00");
     expect(rows.flat().filter((c) => /^[=+\-@\t\r]/.test(c))).toEqual([]);
   });
 

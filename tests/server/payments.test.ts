@@ -182,12 +182,12 @@ describe("card payments through Stripe's hosted checkout (the local fake, real S
     expect(rec.body.reconciled).toMatchObject({ note: "Matches the bank statement" });
 
     const inv = parseCsv((await t.http().get("/api/reports/exports/invoices.csv").set(auth(books))).text, { columns: true }) as Record<string, string>[];
-    expect(inv[0]).toMatchObject({ currency: "USD" });
-    expect(inv.every((r) => /^\d+\.\d{2}$/.test(r.total))).toBe(true); // ISO 4217: USD has 2 decimals
+    expect(inv[0]).toMatchObject({ Currency: "USD" });
+    expect(inv.every((r) => /^\d+\.\d{2}$/.test(r.Total))).toBe(true); // ISO 4217: USD has 2 decimals
     const pays = parseCsv((await t.http().get("/api/reports/exports/payments.csv").set(auth(books))).text, { columns: true }) as Record<string, string>[];
-    expect(pays.some((p) => p.stripe_charge.startsWith("ch_"))).toBe(true);
+    expect(pays.some((p) => p["Card Charge Ref"].startsWith("ch_") && p["Card Payment Ref"].startsWith("pi_"))).toBe(true);
     const outs = parseCsv((await t.http().get("/api/reports/exports/payouts.csv").set(auth(books))).text, { columns: true }) as Record<string, string>[];
-    expect(outs.find((p) => p.payout === payout!.id)).toMatchObject({ unmatched: "0", net: (payout!.amount / 100).toFixed(2) });
+    expect(outs.find((p) => p["Bank Payout Ref"] === payout!.id)).toMatchObject({ Unmatched: "0", Net: (payout!.amount / 100).toFixed(2) });
   });
 
   it("CSV exports neutralise formulas in text cells (OWASP CSV Injection) and keep amounts numeric, negative ones too", async () => {
@@ -202,15 +202,15 @@ describe("card payments through Stripe's hosted checkout (the local fake, real S
       expect((await t.http().post(`/api/invoices/${inv.id}/payments`).set(auth(books)).send({ amountCents: 100, method: "other", reference, receivedOn: "2026-06-10" })).status).toBe(201);
     }
     const invoicesCsv = parseCsv((await t.http().get("/api/reports/exports/invoices.csv").set(auth(books))).text, { columns: true }) as Record<string, string>[];
-    const row = invoicesCsv.find((r) => r.number === inv.number)!;
-    expect(row.account).toBe(`'${evil.businessName}`);
-    expect(row.total).toBe((inv.totalCents / 100).toFixed(2));
+    const row = invoicesCsv.find((r) => r["Invoice Number"] === inv.number)!;
+    expect(row.Account).toBe(`'${evil.businessName}`);
+    expect(row.Total).toBe((inv.totalCents / 100).toFixed(2));
     const paymentsCsv = parseCsv((await t.http().get("/api/reports/exports/payments.csv").set(auth(books))).text, { columns: true, relax_quotes: true }) as Record<string, string>[];
-    const mine = paymentsCsv.filter((r) => r.invoice === inv.number);
-    expect(mine.map((r) => r.reference)).toEqual(refs.map((r) => `'${r.trim()}`));
-    expect(mine.every((r) => r.account === `'${evil.businessName}` && r.amount === "1.00")).toBe(true);
+    const mine = paymentsCsv.filter((r) => r["Invoice Number"] === inv.number);
+    expect(mine.map((r) => r.Reference)).toEqual(refs.map((r) => `'${r.trim()}`));
+    expect(mine.every((r) => r.Account === `'${evil.businessName}` && r.Amount === "1.00")).toBe(true);
     // No text cell of any export starts with a formula character; every amount column is a plain decimal.
-    const amountCols = new Set(["subtotal", "tax", "total", "credited", "paid", "refunded", "amount_due", "amount", "gross", "fees", "refunds", "net"]);
+    const amountCols = new Set(["Subtotal", "Tax", "Total", "Credited", "Paid", "Refunded", "Amount Due", "Amount", "Gross", "Fees", "Refunds", "Net"]);
     const payoutsCsv = parseCsv((await t.http().get("/api/reports/exports/payouts.csv").set(auth(books))).text, { columns: true }) as Record<string, string>[];
     for (const r of [...invoicesCsv, ...paymentsCsv, ...payoutsCsv]) {
       for (const [k, v] of Object.entries(r)) {
@@ -221,6 +221,29 @@ describe("card payments through Stripe's hosted checkout (the local fake, real S
     // A negative amount (a refund, a net below zero) stays a number a spreadsheet can add up; text that merely looks like one is escaped.
     const csv = csvTable(["what", "amount"], [{ currency: "USD", cells: ["-12.50 off", -1250] }, { currency: "JPY", cells: ["refund", -1250] }]);
     expect(parseCsv(csv, { columns: true })).toEqual([{ what: "'-12.50 off", amount: "-12.50" }, { what: "refund", amount: "-1250" }]);
+  });
+
+  it("every CSV header is plain words in Title Case, one style across the exports and the orders board", async () => {
+    // The rule is the CSV spec in DEVELOPERS.md ("CSV exports"): headers are plain words in Title Case, every word
+    // capitalised, acronyms kept (PO); no snake_case and no processor object names. A product column of the orders
+    // board is the product's own name and sale unit, so it is left out; the currency code in "Order Total (USD)" is
+    // ISO 4217.
+    const titleCase = /^(?:[A-Z][a-z]*|[A-Z]{2,})(?: (?:[A-Z][a-z]*|[A-Z]{2,}))*(?: \([A-Z]{3}\))?$/;
+    const headerOf = async (url: string) => (parseCsv((await t.http().get(url).set(auth(books))).text, { to_line: 1 }) as string[][])[0];
+    const heads: Record<string, string[]> = {};
+    for (const kind of ["invoices", "payments", "payouts"]) heads[kind] = await headerOf(`/api/reports/exports/${kind}.csv`);
+    const board = await headerOf("/api/orders/board.csv?date=2026-06-01");
+    const productCols = new Set(board.filter((h) => /\(tray/.test(h)));
+    expect(productCols.size).toBeGreaterThan(0);
+    heads.board = board.filter((h) => !productCols.has(h));
+    for (const [kind, cols] of Object.entries(heads)) {
+      for (const h of cols) expect({ kind, h }).toEqual({ kind, h: expect.stringMatching(titleCase) });
+      expect(cols.join(" ")).not.toMatch(/stripe|_/i);
+    }
+    expect(heads.payments).toEqual(expect.arrayContaining(["Card Payment Ref", "Card Charge Ref"]));
+    expect(heads.board).toEqual(["Delivery Date", "Account", "Status", "PO Number", "Order Total (USD)"]);
+    // The rule itself refuses the old styles.
+    for (const old of ["stripe_payment_intent", "amount_due", "Delivery date", "PO number"]) expect(old).not.toMatch(titleCase);
   });
 
   it("uses ISO 4217 minor units when formatting and when sending amounts to Stripe", async () => {
