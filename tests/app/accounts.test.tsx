@@ -21,7 +21,7 @@ describe("accounts list", () => {
     signedInAs(OWNER);
     mockApi({ ...sessionRoutes(OWNER), "GET /api/accounts": { body: { accounts: ACCOUNTS } } });
     renderApp("/office/accounts");
-    expect(await screen.findByTestId("account-row-11")).toHaveTextContent(/Tidewater Coffee/);
+    expect(await screen.findByTestId("account-row-11")).toHaveTextContent(/Tidewater Café/);
     expect(screen.getByTestId("account-row-12")).toHaveTextContent(/Juniper Table.*On hold/);
     expect(screen.getByTestId("account-row-13")).toHaveTextContent(/Closed/);
     expect(screen.getByTestId("accounts-count")).toHaveTextContent("3 accounts");
@@ -86,7 +86,7 @@ describe("accounts list", () => {
     mockApi({ ...sessionRoutes(BOOKKEEPER), "GET /api/accounts": { body: { accounts: ACCOUNTS } }, "GET /api/accounts/:id": { body: { account: ACCOUNTS[0] } } });
     renderApp("/office/accounts");
     fireEvent.press(await screen.findByTestId("account-row-11"));
-    expect(await screen.findByTestId("account-title")).toHaveTextContent("Tidewater Coffee");
+    expect(await screen.findByTestId("account-title")).toHaveTextContent("Tidewater Café");
     expect(screen.queryByText("New account")).toBeNull();
     expect(screen.queryByTestId("edit-account")).toBeNull();
     expect(screen.queryByTestId("account-status-card")).toBeNull();
@@ -108,7 +108,7 @@ describe("account detail and form", () => {
     });
     renderApp("/office/accounts/11");
     fireEvent.press(await screen.findByTestId("close-account"));
-    expect(screen.getByTestId("close-confirm")).toHaveTextContent(/Close Tidewater Coffee\?/);
+    expect(screen.getByTestId("close-confirm")).toHaveTextContent(/Close Tidewater Café\?/);
     expect(api.callsTo("PATCH", "/api/accounts/11")).toHaveLength(0);
     fireEvent.press(screen.getByText("Yes, close account"));
     expect(await screen.findByTestId("account-status-done")).toHaveTextContent(/now closed/);
@@ -164,12 +164,12 @@ describe("account detail and form", () => {
     });
     const app = renderApp("/office/accounts/11/edit");
     const name = await screen.findByLabelText("Business name");
-    expect(name).toHaveDisplayValue("Tidewater Coffee");
-    fireEvent.changeText(name, "Tidewater Coffee Co.");
+    expect(name).toHaveDisplayValue("Tidewater Café");
+    fireEvent.changeText(name, "Tidewater Café Co.");
     fireEvent.press(screen.getByText("Save changes"));
     await waitFor(() => expect(app.getPathname()).toBe("/office/accounts/11"));
     const body = api.callsTo("PATCH", "/api/accounts/11")[0].body as Record<string, unknown>;
-    expect(body.businessName).toBe("Tidewater Coffee Co.");
+    expect(body.businessName).toBe("Tidewater Café Co.");
     expect(body).not.toHaveProperty("status");
   });
 });

@@ -7,7 +7,7 @@ export function invoiceDto(overrides: Partial<InvoiceDto> = {}): InvoiceDto {
     id: 41,
     number: "HB-2025-00041",
     accountId: 11,
-    accountName: "Tidewater Coffee",
+    accountName: "Tidewater Café",
     kind: "order",
     status: "open",
     issueDate: "2025-12-01",

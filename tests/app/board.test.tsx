@@ -11,7 +11,7 @@ const BOARD: BoardDto = {
   ],
   rows: [
     { accountId: 12, accountName: "Juniper Table", orderId: 902, status: "locked", poNumber: "JT-9", quantities: { 101: 4, 102: 4 }, totalCents: 13600 },
-    { accountId: 11, accountName: "Tidewater Coffee", orderId: 901, status: "open", poNumber: null, quantities: { 101: 3 }, totalCents: 4860 },
+    { accountId: 11, accountName: "Tidewater Café", orderId: 901, status: "open", poNumber: null, quantities: { 101: 3 }, totalCents: 4860 },
   ],
   totalCents: 18460,
 };
@@ -48,7 +48,7 @@ describe("orders board", () => {
     renderApp("/office/orders?date=2025-12-03");
     expect(await screen.findByTestId("board-table")).toBeOnTheScreen();
     expect(screen.getByTestId("board-total-row")).toHaveTextContent(/Total.*2 orders.*7.*4.*\$184\.60/);
-    expect(screen.getByTestId("board-row-901")).toHaveTextContent(/Tidewater Coffee.*3.*–.*\$48\.60/);
+    expect(screen.getByTestId("board-row-901")).toHaveTextContent(/Tidewater Café.*3.*–.*\$48\.60/);
     expect(screen.getByTestId("board-title")).toHaveTextContent("Wednesday 3 December");
   });
 

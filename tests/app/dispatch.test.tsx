@@ -10,7 +10,7 @@ const BOARD: BoardDto = {
   ],
   rows: [
     { accountId: 12, accountName: "Juniper Table", orderId: 902, status: "locked", poNumber: "JT-9", quantities: { 101: 4, 102: 4 }, totalCents: 13600 },
-    { accountId: 11, accountName: "Tidewater Coffee", orderId: 901, status: "locked", poNumber: null, quantities: { 101: 3 }, totalCents: 4860 },
+    { accountId: 11, accountName: "Tidewater Café", orderId: 901, status: "locked", poNumber: null, quantities: { 101: 3 }, totalCents: 4860 },
     { accountId: 13, accountName: "North Pier Coffee", orderId: 903, status: "delivered", poNumber: null, quantities: { 101: 2 }, totalCents: 3600 },
   ],
   totalCents: 22060,

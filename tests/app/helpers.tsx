@@ -22,7 +22,7 @@ export const BUYER: SessionUser = { id: 4, email: "buyer@tidewater.test", name: 
 export function account(overrides: Partial<AccountDto> = {}): AccountDto {
   return {
     id: 11,
-    businessName: "Tidewater Coffee",
+    businessName: "Tidewater Café",
     deliveryAddress: "14 Harbor Row, Back door",
     contactName: "Marisol Okafor",
     contactPhone: "+1 555 0101",
@@ -262,7 +262,7 @@ export function orderDto(overrides: Partial<OrderDto> = {}): OrderDto {
   return {
     id: 501,
     accountId: 11,
-    accountName: "Tidewater Coffee",
+    accountName: "Tidewater Café",
     deliveryDate: "2025-12-03",
     status: "open",
     poNumber: null,

@@ -4,7 +4,7 @@ import { OWNER, account, apiError, invitationDto, mockApi, renderApp, sessionRou
 const USERS = [
   userDto(),
   userDto({ id: 2, email: "baker@hollowbrook.test", name: "Tomas Lindqvist", role: "baker" }),
-  userDto({ id: 4, email: "buyer@tidewater.test", name: "Marisol Okafor", role: "buyer", accountId: 11, accountName: "Tidewater Coffee", lastSignInAt: null }),
+  userDto({ id: 4, email: "buyer@tidewater.test", name: "Marisol Okafor", role: "buyer", accountId: 11, accountName: "Tidewater Café", lastSignInAt: null }),
 ];
 
 describe("people", () => {
@@ -17,7 +17,7 @@ describe("people", () => {
       "GET /api/invitations": { body: { invitations: [invitationDto()] } },
     });
     renderApp("/office/people");
-    expect(await screen.findByTestId("user-row-4")).toHaveTextContent(/Marisol Okafor.*Tidewater Coffee/);
+    expect(await screen.findByTestId("user-row-4")).toHaveTextContent(/Marisol Okafor.*Tidewater Café/);
     expect(screen.getByTestId("user-row-1")).toHaveTextContent(/You/);
     expect(await screen.findByTestId("invitation-71")).toHaveTextContent(/new\.baker@hollowbrook\.test/);
     fireEvent.changeText(screen.getByLabelText("Search people"), "tomas");
@@ -70,7 +70,7 @@ describe("people", () => {
       "GET /api/users": { body: { users: USERS } },
       "GET /api/invitations": { body: { invitations: [] } },
       "GET /api/accounts": { body: { accounts: [account()] } },
-      "PATCH /api/users/:id": (req) => ({ body: { user: { ...USERS[1], ...(req.body as object), accountName: "Tidewater Coffee" } } }),
+      "PATCH /api/users/:id": (req) => ({ body: { user: { ...USERS[1], ...(req.body as object), accountName: "Tidewater Café" } } }),
     });
     renderApp("/office/people");
     fireEvent.press(await screen.findByTestId("user-2-change-role"));
@@ -80,7 +80,7 @@ describe("people", () => {
     expect(api.callsTo("PATCH", "/api/users/2")).toHaveLength(0);
     fireEvent.press(await screen.findByTestId("user-2-account-11"));
     fireEvent.press(screen.getByText("Save role"));
-    expect(await screen.findByTestId("user-2-done")).toHaveTextContent(/now café buyer for Tidewater Coffee/);
+    expect(await screen.findByTestId("user-2-done")).toHaveTextContent(/now café buyer for Tidewater Café/);
     expect(api.callsTo("PATCH", "/api/users/2")[0].body).toEqual({ role: "buyer", accountId: 11 });
   });
 

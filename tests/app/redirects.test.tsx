@@ -36,7 +36,7 @@ describe("who goes where", () => {
     signedInAs(BUYER);
     mockApi({ ...sessionRoutes(BUYER), "GET /api/accounts/:id": { body: { account: account() } } });
     const app = renderApp("/office/people");
-    expect(await screen.findByTestId("buyer-home-title")).toHaveTextContent(/Tidewater Coffee/);
+    expect(await screen.findByTestId("buyer-home-title")).toHaveTextContent(/Tidewater Café/);
     expect(app.getPathname()).toBe("/buyer");
   });
 
