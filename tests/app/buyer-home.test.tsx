@@ -16,7 +16,7 @@ describe("buyer home", () => {
   it("lists the coming delivery dates with their status and a live countdown", async () => {
     const api = mockApi(buyerOrderingRoutes(DAYS[0], { "GET /api/calendar": { body: { days: DAYS } } }));
     renderApp("/buyer");
-    expect(await screen.findByTestId("buyer-home-title")).toHaveTextContent("Tidewater Coffee");
+    expect(await screen.findByTestId("buyer-home-title")).toHaveTextContent("Tidewater Café");
     expect(await screen.findByTestId("day-2025-12-02-status")).toHaveTextContent(/Locked for baking/);
     expect(screen.getByTestId("day-2025-12-02")).toHaveTextContent(/Today · Tue 2 Dec/);
     expect(screen.getByTestId("day-2025-12-03-status")).toHaveTextContent(/Not ordered yet/);
@@ -102,7 +102,9 @@ describe("calendar feed on the account screen", () => {
     renderApp("/buyer/account");
     fireEvent.press(await screen.findByTestId("feed-create"));
     expect(await screen.findByTestId("feed-url")).toHaveTextContent("http://panwise.test/api/feeds/abcdefghijklmnopqrstuvwx.ics");
-    expect(screen.getByTestId("feed-help")).toHaveTextContent(/Add Subscribed Calendar/);
+    // Issue 10 item 4: general steps in our words, no one platform's settings menus.
+    expect(screen.getByTestId("feed-step-2")).toHaveTextContent(/add a calendar by its link \(often called subscribing to a calendar\) and paste the link/);
+    expect(screen.getByTestId("feed-help")).not.toHaveTextContent(/Settings ›|Add Subscribed Calendar|Other calendars|From URL|iPhone|Android/);
     expect(screen.getByTestId("feed-help")).toHaveTextContent(/webcal:\/\//);
     expect(screen.getByTestId("terms-minimum")).toHaveTextContent("$50.00");
     fireEvent.press(screen.getByTestId("feed-revoke"));

@@ -61,7 +61,8 @@ export function CalendarFeedCard({ accountId }: { accountId?: number }) {
       ) : (
         <>
           <View style={styles.urlBox}>
-            <AppText variant="small" color="ink" selectable testID="feed-url" style={styles.url}>
+            <AppText variant="label">Your calendar link</AppText>
+            <AppText variant="bodyStrong" color="ink" selectable testID="feed-url" style={styles.url}>
               {feed.data}
             </AppText>
           </View>
@@ -79,12 +80,16 @@ export function CalendarFeedCard({ accountId }: { accountId?: number }) {
           </View>
           {note ? <Notice tone="info" message={note} testID="feed-note" /> : null}
           <View style={styles.help} testID="feed-help">
-            <AppText variant="label">Adding it on a phone</AppText>
-            <AppText variant="small" color="ink">
-              iPhone: tap “Open in calendar app” and choose Subscribe, or go to Settings › Calendar › Accounts › Add Account › Other › Add Subscribed Calendar and paste the link.
+            {/* General steps, not any one app's menus: subscribing by address is what iCalendar feeds are for (RFC 5545). */}
+            <AppText variant="label">Adding it to your calendar</AppText>
+            <AppText variant="small" color="ink" testID="feed-step-1">
+              1. Copy the link above, or tap “Open in calendar app” on the device whose calendar you use.
             </AppText>
-            <AppText variant="small" color="ink">
-              Android (Google Calendar): on a computer open calendar.google.com › Other calendars › + › From URL, paste the link; it then appears on your phone.
+            <AppText variant="small" color="ink" testID="feed-step-2">
+              2. In your calendar app, add a calendar by its link (often called subscribing to a calendar) and paste the link.
+            </AppText>
+            <AppText variant="small" color="ink" testID="feed-step-3">
+              3. If you add it on a computer, the deliveries also show on phones signed in to the same calendar.
             </AppText>
             <AppText variant="small" color="ink">
               {`The link also works starting with webcal:// (${Platform.OS === "web" ? "some apps ask for that form" : "the button uses it"}). Calendar apps check for changes every few hours.`}
@@ -125,7 +130,7 @@ export function CalendarFeedCard({ accountId }: { accountId?: number }) {
 }
 
 const styles = StyleSheet.create({
-  urlBox: { backgroundColor: colors.sunken, borderRadius: radii.md, padding: space.md },
+  urlBox: { backgroundColor: colors.sunken, borderRadius: radii.md, padding: space.md, gap: space.xs },
   url: { fontFamily: "Nunito_600SemiBold" },
   buttons: { flexDirection: "row", flexWrap: "wrap", gap: space.sm },
   help: { gap: space.xs },
