@@ -4,6 +4,7 @@ import { startTestApp, makeAccount, makeBakery, makeProduct, makeUser, tokenFor,
 import { Order, OrderLine } from "../../server/orders/order.entity";
 import { Invoice, Payment, StripeEventRecord } from "../../server/billing/billing.entity";
 import { confirmDispatch } from "../../server/billing/invoices.service";
+import { Bakery } from "../../server/bakery/bakery.entity";
 import { csvTable } from "../../server/billing/payments.service";
 import { parse as parseCsv } from "csv-parse/sync";
 import { formatMoney, minorUnitExponent } from "../../shared/money";
@@ -69,14 +70,17 @@ describe("card payments through Stripe's hosted checkout (the local fake, real S
     expect(await t.ds.getRepository(StripeEventRecord).count()).toBeGreaterThanOrEqual(2);
   });
 
-  it("a declined card shows Stripe's reason and leaves the invoice open", async () => {
+  it("a declined card shows the bank's answer in our words and leaves the invoice open", async () => {
     const inv = await invoiceFor(1);
     const { body } = await t.http().post(`/api/invoices/${inv.id}/checkout`).set(auth(buyer));
     const declined = await payOnHostedPage(body.url, "4000 0000 0000 0002");
     expect(declined.status).toBe(402);
-    expect(await declined.text()).toContain("Your card was declined.");
+    const declinedPage = await declined.text();
+    expect(declinedPage).toContain("The card&#39;s bank turned this payment down without saying why.");
+    // The page names what is paid and to whom: the invoice number and the bakery (sent as metadata.payee).
+    expect(declinedPage).toContain(`Invoice ${inv.number} — ${(await t.ds.getRepository(Bakery).find({ order: { id: "ASC" }, take: 1 }))[0]!.name}`);
     const broke = await payOnHostedPage(body.url, "4000 0000 0000 9995");
-    expect(await broke.text()).toContain("Your card has insufficient funds.");
+    expect(await broke.text()).toContain("there is not enough money or credit on the card for this amount");
     await t.stripe!.flushWebhooks();
     expect((await t.ds.getRepository(Invoice).findOneByOrFail({ id: inv.id })).status).toBe("open");
     const ok = await payOnHostedPage(body.url, "4242424242424242");
