@@ -20,7 +20,7 @@ async function fillCard(page: Page, card: string) {
 }
 
 describe("a buyer pays an open invoice by card (Stripe's hosted page, the local fake)", () => {
-  it("a declined card shows Stripe's reason; the test card 4242 pays and the invoice shows paid", async () => {
+  it("a declined card shows the bank's answer in our words; the test card 4242 pays and the invoice shows paid", async () => {
     const { context, page } = await newPage(PHONE);
     await signIn(page, "buyer@tidewater.test");
     await page.getByTestId("buyer-home-title").waitFor();
@@ -36,7 +36,8 @@ describe("a buyer pays an open invoice by card (Stripe's hosted page, the local 
     await page.waitForURL((u) => u.href.startsWith(`${STRIPE_URL}/pay/`));
 
     await fillCard(page, "4000 0000 0000 0002");
-    await page.getByText("Your card was declined.").waitFor();
+    // The decline in Panwise's words (fakes/stripe/pages.ts DECLINE_WORDS), never Stripe's sentence.
+    await page.getByText("The card's bank turned this payment down without saying why.", { exact: false }).waitFor();
     await shot(page, "phone-hosted-page-declined");
 
     await fillCard(page, "4242 4242 4242 4242");
