@@ -22,6 +22,12 @@ export interface PayoutTransactionDto {
   netCents: number;
   invoiceId: number | null;
   invoiceNumber: string | null;
+  /** The invoice's account, when the transaction matched one. */
+  accountName: string | null;
+  /** YYYY-MM-DD: the payment's received-on date, the refund's day, or the day the processor booked it. */
+  date: string;
+  /** The card processor's payment reference (payment intent, else charge); null for refunds and adjustments. */
+  cardPaymentRef: string | null;
   matched: boolean;
   problem: string | null;
 }

@@ -520,6 +520,9 @@ export async function payoutDetail(ctx: AppContext, payoutId: string) {
   const refunds = refundIds.length ? await ctx.dataSource.getRepository(Refund).findBy({ stripeRefundId: In(refundIds) }) : [];
   const invoiceIds = [...new Set([...payments.map((p) => p.invoiceId), ...refunds.map((r) => r.invoiceId)])];
   const invoices = new Map((invoiceIds.length ? await ctx.dataSource.getRepository(Invoice).findBy({ id: In(invoiceIds) }) : []).map((i) => [i.id, i]));
+  const accountIds = [...new Set([...invoices.values()].map((i) => i.accountId))];
+  const accounts = new Map((accountIds.length ? await ctx.dataSource.getRepository(CustomerAccount).findBy({ id: In(accountIds) }) : []).map((a) => [a.id, a.businessName]));
+  const { timeZone } = await getBakery(ctx);
   const rows = txns.filter((t) => t.type !== "payout").map((t) => {
     const p = payments.find((x) => x.stripeChargeId === t.source);
     const r = refunds.find((x) => x.stripeRefundId === t.source);
@@ -529,6 +532,12 @@ export async function payoutDetail(ctx: AppContext, payoutId: string) {
     return {
       balanceTransactionId: t.id, type: t.type, source: String(t.source), amountCents: t.amount, feeCents: t.fee, netCents: t.net,
       invoiceId, invoiceNumber: inv?.number ?? null, paymentId: p?.id ?? null, refundId: r?.id ?? null,
+      // What the bookkeeper reads first: whose invoice, and the day the money came in (the payment's received-on
+      // date) or went back (the refund's day); otherwise the day the card processor booked it, in the bakery's zone.
+      accountName: inv ? (accounts.get(inv.accountId) ?? null) : null,
+      date: p?.receivedOn ?? localToday(r?.createdAt ?? new Date(t.created * 1000), timeZone),
+      // The card processor's payment reference (its payment intent) when Panwise knows it; the charge otherwise.
+      cardPaymentRef: p?.stripePaymentIntentId ?? (t.type === "charge" || t.type === "payment" ? String(t.source) : null),
       matched: !!inv && amountMatches, problem: !inv ? "No Panwise payment or refund for this transaction." : !amountMatches ? "The amount differs from what Panwise recorded." : null,
     };
   });

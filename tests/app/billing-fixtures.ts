@@ -57,8 +57,8 @@ export function payoutDetail(overrides: Partial<PayoutDetailDto> = {}): PayoutDe
     netCents: 11058,
     netMatchesPayout: true,
     transactions: [
-      { balanceTransactionId: "txn_1", type: "charge", source: "ch_1", amountCents: 5873, feeCents: 200, netCents: 5673, invoiceId: 41, invoiceNumber: "HB-2025-00041", matched: true, problem: null },
-      { balanceTransactionId: "txn_2", type: "charge", source: "ch_stray", amountCents: 5873, feeCents: 488, netCents: 5385, invoiceId: null, invoiceNumber: null, matched: false, problem: "No Panwise payment or refund for this transaction." },
+      { balanceTransactionId: "txn_1", type: "charge", source: "ch_1", amountCents: 5873, feeCents: 200, netCents: 5673, invoiceId: 41, invoiceNumber: "HB-2025-00041", accountName: "Tidewater Café", date: "2025-12-01", cardPaymentRef: "pi_1", matched: true, problem: null },
+      { balanceTransactionId: "txn_2", type: "charge", source: "ch_stray", amountCents: 5873, feeCents: 488, netCents: 5385, invoiceId: null, invoiceNumber: null, accountName: null, date: "2025-12-02", cardPaymentRef: "ch_stray", matched: false, problem: "No Panwise payment or refund for this transaction." },
     ],
     unmatched: 1,
     reconciled: null,

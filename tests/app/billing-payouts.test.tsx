@@ -54,8 +54,17 @@ describe("payouts", () => {
     expect(screen.getByTestId("payout-unmatched")).toHaveTextContent(/1 transaction doesn't match/);
     const stray = screen.getByTestId("txn-txn_2");
     expect(within(stray).getByTestId("txn-problem-txn_2")).toHaveTextContent("No Panwise payment or refund for this transaction.");
-    expect(screen.getByTestId("txn-txn_1")).toHaveTextContent(/Card payment.*HB-2025-00041.*Matched.*\$58\.73/);
+    // Each row leads with the invoice and its account, the date and the amount received; the fee and what was paid
+    // out are lines of their own; the processor's id comes last, as a reference.
+    const row = screen.getByTestId("txn-txn_1");
+    expect(row).toHaveTextContent(/^Invoice HB-2025-00041.*Matched.*Tidewater Café.*Card payment · 1 Dec 2025.*Card payment reference pi_1.*Received\$58\.73.*Processor fee-\$2\.00.*Paid out\$56\.73$/);
+    expect(within(row).getByTestId("txn-invoice-txn_1")).toHaveTextContent("Invoice HB-2025-00041");
+    expect(within(row).getByTestId("txn-account-txn_1")).toHaveTextContent("Tidewater Café");
+    expect(within(row).getByTestId("txn-fee-txn_1")).toHaveTextContent("Processor fee-$2.00");
+    expect(within(row).getByTestId("txn-ref-txn_1")).toHaveTextContent("Card payment reference pi_1");
     expect(screen.queryByTestId("txn-problem-txn_1")).toBeNull();
+    expect(stray).toHaveTextContent(/^No invoice found.*Card payment · 2 Dec 2025.*No Panwise payment.*Card payment reference ch_stray.*Received\$58\.73.*Processor fee-\$4\.88.*Paid out\$53\.85$/);
+    expect(screen.getByText(/Arrived 4 Dec 2025 · Bank reference po_fake_1/)).toBeOnTheScreen();
 
     fireEvent.press(screen.getByTestId("reconcile"));
     expect(await screen.findByTestId("reconcile-refused")).toHaveTextContent(/do not match/);

@@ -179,6 +179,13 @@ describe("card payments through Stripe's hosted checkout (the local fake, real S
     const cardPayments = (await t.ds.getRepository(Payment).countBy({ method: "card" })) - 1;
     expect(detail.body.transactions.filter((x: { type: string }) => x.type === "charge").length).toBe(cardPayments);
     for (const x of detail.body.transactions) expect(x.invoiceNumber).toMatch(/^PB-2026-/);
+    // Each transaction names the account and the day, and carries the card payment's reference (its payment intent).
+    const byCharge = new Map((await t.ds.getRepository(Payment).findBy({ method: "card" })).map((p) => [p.stripeChargeId, p]));
+    for (const x of detail.body.transactions.filter((y: { type: string }) => y.type === "charge")) {
+      const p = byCharge.get(x.source)!;
+      expect(x).toMatchObject({ accountName: "Card Café", date: p.receivedOn, cardPaymentRef: p.stripePaymentIntentId });
+      expect(x.cardPaymentRef).toMatch(/^pi_/);
+    }
     // Fees: 2.9 % + 30 ¢ per charge (the fake's configured fee, Stripe's US card price).
     const charge = detail.body.transactions.find((x: { type: string }) => x.type === "charge");
     expect(charge.feeCents).toBe(Math.round(charge.amountCents * 0.029) + 30);

@@ -61,11 +61,11 @@ export function PayoutsScreen() {
           rows={payouts.data}
           rowKey={(p) => p.id}
           onRowPress={open}
-          rowLabel={(p) => `Payout ${p.id}, ${money(p.amountCents, p.currency)}, ${p.reconciledAt ? "reconciled" : "to reconcile"}`}
+          rowLabel={(p) => `Payout of ${money(p.amountCents, p.currency)}, ${arrival(p.status, p.arrivalDate)}, ${p.reconciledAt ? "reconciled" : "to reconcile"}`}
           rowTestID={(p) => `payout-row-${p.id}`}
           columns={[
             { key: "arrival", label: "Arrival", flex: 1, render: (p) => day(p.arrivalDate) },
-            { key: "id", label: "Payout", flex: 1.6, render: (p) => <AppText variant="small" selectable>{p.id}</AppText> },
+            { key: "id", label: "Bank reference", flex: 1.6, render: (p) => <AppText variant="small" color="muted" selectable>{p.id}</AppText> },
             { key: "status", label: "Status", flex: 0.9, render: (p) => <Badge label={PAYOUT_STATUS[p.status] ?? p.status} tone={p.status === "failed" ? "danger" : "neutral"} /> },
             { key: "amount", label: "Amount", flex: 1, align: "right", render: (p) => <AppText variant="bodyStrong" align="right">{money(p.amountCents, p.currency)}</AppText> },
             {
@@ -89,8 +89,8 @@ export function PayoutsScreen() {
                     {p.reconciledAt ? <Badge label="Reconciled" tone="sage" testID={`payout-reconciled-${p.id}`} /> : <Badge label="To reconcile" tone="amber" testID={`payout-todo-${p.id}`} />}
                   </View>
                   <AppText variant="small" color="muted">{arrival(p.status, p.arrivalDate)}</AppText>
-                  <AppText variant="small" color="muted" numberOfLines={1}>
-                    {p.id}
+                  <AppText variant="caption" color="muted" numberOfLines={1}>
+                    {`Bank reference ${p.id}`}
                   </AppText>
                 </View>
                 <Feather name="chevron-right" size={20} color={colors.muted} />
@@ -153,7 +153,7 @@ function PayoutBody({ detail: d }: { detail: PayoutDetailDto }) {
   const cur = d.payout.currency;
   return (
     <>
-      <PageHeader overline="Payout" title={money(d.payout.amountCents, cur)} subtitle={`${arrival(d.payout.status, d.payout.arrivalDate)} · ${d.payout.id}`} testID="payout-title" />
+      <PageHeader overline="Payout" title={money(d.payout.amountCents, cur)} subtitle={`${arrival(d.payout.status, d.payout.arrivalDate)} · Bank reference ${d.payout.id}`} testID="payout-title" />
       <View style={billingStyles.figures} testID="payout-sums">
         <Figure label="Card payments (gross)" value={money(d.grossCents, cur)} testID="payout-gross" />
         <Figure label="Processor fees" value={minus(d.feesCents, cur)} testID="payout-fees" />
@@ -175,33 +175,10 @@ function PayoutBody({ detail: d }: { detail: PayoutDetailDto }) {
           <Card title="Transactions" testID="payout-transactions">
             {d.transactions.length === 0 ? (
               <AppText color="muted">This payout has no transactions.</AppText>
-            ) : wide ? (
-              <BillingTable<PayoutTransactionDto>
-                rows={d.transactions}
-                rowKey={(t) => t.balanceTransactionId}
-                rowTestID={(t) => `txn-${t.balanceTransactionId}`}
-                rowAlert={(t) => !t.matched}
-                columns={[
-                  { key: "type", label: "Type", flex: 1, render: (t) => TXN_TYPE[t.type] ?? t.type },
-                  { key: "invoice", label: "Invoice", flex: 1.6, render: (t) => <TxnInvoice t={t} /> },
-                  { key: "amount", label: "Amount", flex: 0.9, align: "right", render: (t) => money(t.amountCents, cur) },
-                  { key: "fee", label: "Fee", flex: 0.7, align: "right", render: (t) => minus(t.feeCents, cur) },
-                  { key: "net", label: "Net", flex: 0.9, align: "right", render: (t) => money(t.netCents, cur) },
-                ]}
-              />
             ) : (
               <View>
                 {d.transactions.map((t, i) => (
-                  <View key={t.balanceTransactionId} style={[styles.txn, i > 0 && styles.divider, !t.matched && styles.txnAlert]} testID={`txn-${t.balanceTransactionId}`}>
-                    <View style={billingStyles.cardTop}>
-                      <AppText variant="bodyStrong" style={billingStyles.grow}>
-                        {TXN_TYPE[t.type] ?? t.type}
-                      </AppText>
-                      <AppText variant="bodyStrong">{money(t.amountCents, cur)}</AppText>
-                    </View>
-                    <TxnInvoice t={t} />
-                    <AppText variant="small" color={t.matched ? "muted" : "ink"}>{`Fee ${minus(t.feeCents, cur)} · net ${money(t.netCents, cur)}`}</AppText>
-                  </View>
+                  <TxnRow key={t.balanceTransactionId} t={t} currency={cur} first={i === 0} wide={wide} />
                 ))}
               </View>
             )}
@@ -215,22 +192,64 @@ function PayoutBody({ detail: d }: { detail: PayoutDetailDto }) {
   );
 }
 
-function TxnInvoice({ t }: { t: PayoutTransactionDto }) {
+/** What a transaction did, in the bookkeeper's words: money received, money refunded, or the processor's own line. */
+const AMOUNT_LABEL: Record<string, string> = { charge: "Received", payment: "Received", refund: "Refunded" };
+
+/**
+ * One transaction of the payout, led by what the bookkeeper checks against the books: the invoice and its account,
+ * the date and the amount received. The processor's fee and what was paid out are lines of their own; the card
+ * processor's ids come last, as references.
+ */
+function TxnRow({ t, currency: cur, first, wide }: { t: PayoutTransactionDto; currency: string; first: boolean; wide: boolean }) {
+  const kind = TXN_TYPE[t.type] ?? "Other transaction";
+  const refLabel = t.type === "refund" ? "Refund reference" : "Card payment reference";
+  const ref = t.type === "refund" ? t.source : t.cardPaymentRef;
   return (
-    <View style={styles.txnInvoice}>
-      {t.invoiceId && t.invoiceNumber ? <TextLink href={`/office/invoices/${t.invoiceId}`} label={t.invoiceNumber} testID={`txn-invoice-${t.balanceTransactionId}`} /> : null}
-      {t.matched ? (
-        <Badge label="Matched" tone="sage" />
-      ) : (
-        <View style={styles.problem}>
-          <Feather name="alert-triangle" size={16} color={colors.dangerInk} />
-          <AppText variant="small" color="dangerInk" style={styles.flex} testID={`txn-problem-${t.balanceTransactionId}`}>
-            {t.problem ?? "Doesn't match Panwise's records."}
-          </AppText>
+    <View style={[styles.txn, !first && styles.divider, !t.matched && styles.txnAlert, wide && styles.txnWide]} testID={`txn-${t.balanceTransactionId}`}>
+      <View style={styles.txnLead}>
+        <View style={styles.txnHead}>
+          {t.invoiceId && t.invoiceNumber ? (
+            <TextLink href={`/office/invoices/${t.invoiceId}`} label={`Invoice ${t.invoiceNumber}`} testID={`txn-invoice-${t.balanceTransactionId}`} />
+          ) : (
+            <AppText variant="bodyStrong">No invoice found</AppText>
+          )}
+          {t.matched ? <Badge label="Matched" tone="sage" /> : null}
         </View>
-      )}
-      <AppText variant="caption" color={t.matched ? "muted" : "ink"} numberOfLines={1} selectable>
-        {t.source}
+        {t.accountName ? (
+          <AppText testID={`txn-account-${t.balanceTransactionId}`}>{t.accountName}</AppText>
+        ) : null}
+        <AppText variant="small" color={t.matched ? "muted" : "ink"} testID={`txn-date-${t.balanceTransactionId}`}>{`${kind} · ${day(t.date)}`}</AppText>
+        {t.matched ? null : (
+          <View style={styles.problem}>
+            <Feather name="alert-triangle" size={16} color={colors.dangerInk} />
+            <AppText variant="small" color="dangerInk" style={styles.flex} testID={`txn-problem-${t.balanceTransactionId}`}>
+              {t.problem ?? "Doesn't match Panwise's records."}
+            </AppText>
+          </View>
+        )}
+        {ref ? (
+          <AppText variant="caption" color={t.matched ? "muted" : "ink"} numberOfLines={1} selectable testID={`txn-ref-${t.balanceTransactionId}`}>
+            {`${refLabel} ${ref}`}
+          </AppText>
+        ) : null}
+      </View>
+      <View style={[styles.txnSums, wide && styles.txnSumsWide]}>
+        <SumLine label={AMOUNT_LABEL[t.type] ?? kind} value={money(t.amountCents, cur)} strong testID={`txn-amount-${t.balanceTransactionId}`} />
+        <SumLine label="Processor fee" value={minus(t.feeCents, cur)} testID={`txn-fee-${t.balanceTransactionId}`} />
+        <SumLine label="Paid out" value={money(t.netCents, cur)} testID={`txn-net-${t.balanceTransactionId}`} />
+      </View>
+    </View>
+  );
+}
+
+function SumLine({ label, value, strong, testID }: { label: string; value: string; strong?: boolean; testID: string }) {
+  return (
+    <View style={styles.sumLine} testID={testID}>
+      <AppText variant={strong ? "bodyStrong" : "small"} color={strong ? "ink" : "muted"} style={styles.flex}>
+        {label}
+      </AppText>
+      <AppText variant={strong ? "bodyStrong" : "small"} color={strong ? "ink" : "muted"} align="right">
+        {value}
       </AppText>
     </View>
   );
@@ -322,6 +341,11 @@ const styles = StyleSheet.create({
   txn: { gap: space.xxs, paddingVertical: space.sm, paddingHorizontal: space.sm, borderRadius: radii.sm },
   txnAlert: { backgroundColor: colors.dangerSoft },
   divider: { borderTopWidth: 1, borderTopColor: colors.border },
-  txnInvoice: { gap: space.xxs },
+  txnWide: { flexDirection: "row", alignItems: "flex-start", gap: space.lg },
+  txnLead: { flex: 1, gap: space.xxs },
+  txnHead: { flexDirection: "row", flexWrap: "wrap", alignItems: "center", gap: space.xs },
+  txnSums: { gap: space.xxs, marginTop: space.xs },
+  txnSumsWide: { width: 220, marginTop: 0 },
+  sumLine: { flexDirection: "row", alignItems: "baseline", gap: space.sm },
   problem: { flexDirection: "row", alignItems: "flex-start", gap: space.xs },
 });
