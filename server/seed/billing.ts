@@ -9,6 +9,7 @@ import { Order } from "../orders/order.entity";
 import { applyCreditHolds, issueInvoice, issueStatements, recordPayment } from "../billing/invoices.service";
 import { getBakery } from "../bakery/bakery.service";
 import { amountDue } from "../../shared/billing";
+import { DEMO_PAYMENT_INSTRUCTIONS } from "./demo";
 
 /**
  * Pay an invoice the way a buyer would, through the Stripe fake's hosted page with Stripe's 4242 test
@@ -51,7 +52,7 @@ export async function seedBilling(ctx: AppContext, payByCard?: (ctx: AppContext,
   await ctx.dataSource.getRepository(Bakery).update({ id: bakery.id }, {
     salesTaxRateBp: bakery.salesTaxRateBp || 875,
     invoicePrefix: bakery.invoicePrefix === "INV" ? "HB" : bakery.invoicePrefix,
-    paymentInstructions: bakery.paymentInstructions || "Bank transfer to Hollowbrook Bakehouse, Prairie Mutual Bank, routing 000000000, account 0001234567 (demo details), quoting the invoice number; or a cheque to the bakery.",
+    paymentInstructions: bakery.paymentInstructions || DEMO_PAYMENT_INSTRUCTIONS,
   });
   const accounts = ctx.dataSource.getRepository(CustomerAccount);
   const terms: Record<string, CustomerAccount["paymentTerms"]> = { "Tidewater Café": "card", "Juniper Table": "net14", "North Pier Coffee": "net7" };

@@ -18,19 +18,23 @@ import type { ComponentKind, ComponentPer } from "../../shared/components";
 /** The invented demo scenario: the Hollowbrook Bakehouse and three wholesale customers. */
 export const DEMO_PASSWORD = "panwise-demo";
 
+/**
+ * Every demo address is a made-up street in the made-up town of Hollowbrook with ZIP 00000, which belongs to no
+ * place (from memory: the lowest ZIP Code the USPS has issued is 00501), so no one can take it for a real address.
+ */
 export const DEMO_BAKERY = {
   name: "Hollowbrook Bakehouse",
   timeZone: "America/Chicago",
   currency: "USD",
   email: "hello@hollowbrook.test",
   phone: "+1 (555) 014-2290",
-  address: "418 Millrace Lane, Hollowbrook, IL 60000",
+  address: "418 Millrace Lane, Hollowbrook, IL 00000",
 };
 
 export const DEMO_ACCOUNTS = [
   {
     businessName: "Tidewater Café",
-    deliveryAddress: "12 Harbor Row, Hollowbrook, IL 60001 — back door on the alley, before 7:00",
+    deliveryAddress: "12 Harbor Row, Hollowbrook, IL 00000 — back door on the alley, before 7:00",
     contactName: "Marisol Okafor",
     contactPhone: "+1 (555) 013-4410",
     billingEmail: "accounts@tidewater.test",
@@ -39,7 +43,7 @@ export const DEMO_ACCOUNTS = [
   },
   {
     businessName: "Juniper Table",
-    deliveryAddress: "77 Orchard Street, Hollowbrook, IL 60002 — kitchen entrance",
+    deliveryAddress: "77 Orchard Street, Hollowbrook, IL 00000 — kitchen entrance",
     contactName: "Declan Reyes",
     contactPhone: "+1 (555) 013-8821",
     billingEmail: "office@junipertable.test",
@@ -48,7 +52,7 @@ export const DEMO_ACCOUNTS = [
   },
   {
     businessName: "North Pier Coffee",
-    deliveryAddress: "3 Pier Road, Hollowbrook, IL 60003",
+    deliveryAddress: "3 Pier Road, Hollowbrook, IL 00000",
     contactName: "Ingrid Halvorsen",
     contactPhone: "+1 (555) 013-2057",
     billingEmail: "ingrid@northpier.test",
@@ -56,6 +60,21 @@ export const DEMO_ACCOUNTS = [
     buyer: { email: "buyer@northpier.test", name: "Ingrid Halvorsen" },
   },
 ];
+
+/**
+ * The demo bakery's closed days. Dates from 5 U.S.C. § 6103: Christmas Day December 25, New Year's Day January 1,
+ * Independence Day July 4, Thanksgiving the fourth Thursday in November (November 25 in 2027).
+ */
+export const DEMO_CLOSURES: { date: string; note: string }[] = [
+  { date: "2026-12-25", note: "Christmas Day" },
+  { date: "2027-01-01", note: "New Year's Day" },
+  { date: "2027-07-04", note: "Independence Day" },
+  { date: "2027-11-25", note: "Thanksgiving Day" },
+];
+
+/** The demo's payment instructions on invoices and statements: an invented bank that says it is not real. */
+export const DEMO_PAYMENT_INSTRUCTIONS =
+  "Bank transfer to Hollowbrook Bakehouse at Hollowbrook Test Savings (demo, not a real bank), routing 000000000, account 0001234567, quoting the invoice number; or a check payable to Hollowbrook Bakehouse.";
 
 export const DEMO_STAFF: { email: string; name: string; role: Role }[] = [
   { email: "owner@hollowbrook.test", name: "Rosalind Hart", role: "owner" },
@@ -194,8 +213,16 @@ export async function seedDemo(ds: DataSource): Promise<{ created: number }> {
   const passwordHash = await hashPassword(DEMO_PASSWORD);
   await ds.transaction(async (m) => {
     const bakeries = m.getRepository(Bakery);
-    if (!(await bakeries.findOne({ where: {} }))) {
+    const bakery = await bakeries.findOne({ where: {} });
+    if (!bakery) {
       await bakeries.insert(DEMO_BAKERY);
+      created++;
+    } else if (bakery.address === DEMO_BAKERY.address.replace("IL 00000", "IL 60000") || bakery.paymentInstructions.includes("Prairie Mutual Bank")) {
+      // Demo data seeded before the demo used ZIP 00000 and an invented bank (server/seed/billing.ts).
+      await bakeries.update({ id: bakery.id }, {
+        address: bakery.address.replace("IL 60000", "IL 00000"),
+        paymentInstructions: bakery.paymentInstructions.includes("Prairie Mutual Bank") ? DEMO_PAYMENT_INSTRUCTIONS : bakery.paymentInstructions,
+      });
       created++;
     }
     const users = m.getRepository(User);
@@ -210,6 +237,10 @@ export async function seedDemo(ds: DataSource): Promise<{ created: number }> {
       let account = await accounts.findOneBy({ businessName: a.businessName });
       if (!account) {
         account = await accounts.save(accounts.create({ ...a, status: "active" }));
+        created++;
+      } else if (/, IL 6000[1-3]\b/.test(account.deliveryAddress)) {
+        // Demo data seeded before the demo addresses used ZIP 00000.
+        await accounts.update({ id: account.id }, { deliveryAddress: account.deliveryAddress.replace(/, IL 6000[1-3]\b/, ", IL 00000") });
         created++;
       }
       if (!(await users.existsBy({ email: buyer.email }))) {
@@ -296,7 +327,9 @@ export async function seedDemo(ds: DataSource): Promise<{ created: number }> {
     }
 
     const closures = m.getRepository(BakeryClosure);
-    for (const c of [{ date: "2026-12-25", note: "Christmas Day" }, { date: "2026-12-26", note: "Boxing Day" }, { date: "2027-01-01", note: "New Year's Day" }]) {
+    // Demo databases seeded before the closures were US holidays carry a "Boxing Day" closure: take that one out.
+    await closures.delete({ date: "2026-12-26", note: "Boxing Day" });
+    for (const c of DEMO_CLOSURES) {
       if (!(await closures.existsBy({ date: c.date }))) {
         await closures.insert(c);
         created++;
