@@ -46,7 +46,7 @@ export function CalendarFeedCard({ accountId }: { accountId?: number }) {
     <Card title={office ? "Delivery calendar link" : "Deliveries in your calendar"} testID="feed-card">
       <AppText color="muted">
         {office
-          ? "A private calendar address for this account's deliveries, kept up to date as orders change. The café's buyers can make or change it from their Account screen too."
+          ? "A private calendar address for this account's deliveries, kept up to date as orders change. The account's buyers can make or change it from their Account screen too."
           : "Subscribe to this private link and every delivery shows up in your phone or computer calendar, kept up to date as orders change. Anyone with the link can see your delivery dates, so keep it to your team."}
       </AppText>
       {feed.isPending ? (
