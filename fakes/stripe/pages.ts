@@ -34,7 +34,7 @@ h1{font-size:1.35rem;margin:0 0 .25rem;overflow-wrap:anywhere}
 .total{font-size:1.75rem;font-weight:700;margin:.25rem 0 1rem}
 table{width:100%;border-collapse:collapse;margin-bottom:1.25rem}
 th,td{padding:.4rem 0;border-bottom:1px solid #e4e0d8;text-align:left;vertical-align:top}
-td.num,th.num{text-align:right;white-space:nowrap}
+td.num,th.num{text-align:right;white-space:nowrap;padding-left:.75rem}
 caption{text-align:left;font-weight:600;padding-bottom:.25rem}
 fieldset{border:0;padding:0;margin:0}
 legend{font-weight:700;font-size:1.1rem;padding:0}
@@ -98,8 +98,8 @@ const FIELDS: Record<PayField, FieldSpec> = {
   email: { label: "Email", hint: "Where the receipt goes", autocomplete: "email", type: "email" },
   // No placeholders: a label and a hint say what goes in (WCAG 2.1 SC 3.3.2 Labels or Instructions; a placeholder vanishes as one types).
   card_number: { label: "Card number", hint: "The long number on the front; spaces are fine.", autocomplete: "cc-number", inputmode: "numeric", maxlength: 23 },
-  expiry: { label: "Expiry date", hint: "Month and year, as MM/YY", autocomplete: "cc-exp", inputmode: "numeric", maxlength: 7 },
-  cvc: { label: "Security code (CVC)", hint: "3 or 4 digits, usually on the back", autocomplete: "cc-csc", inputmode: "numeric", maxlength: 4 },
+  expiry: { label: "Expiry date", hint: "Month and year: MM/YY", autocomplete: "cc-exp", inputmode: "numeric", maxlength: 7 },
+  cvc: { label: "Security code (CVC)", hint: "3 or 4 digits", autocomplete: "cc-csc", inputmode: "numeric", maxlength: 4 },
   name: { label: "Name on card", autocomplete: "cc-name" },
 };
 
