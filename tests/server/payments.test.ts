@@ -1,6 +1,7 @@
 import Stripe from "stripe";
 import { startStripeFake } from "../../fakes/stripe/stripe-fake";
-import { startTestApp, makeAccount, makeBakery, makeProduct, makeUser, tokenFor, auth, type TestApp } from "./helpers/app";
+import { startCardBilling, payOnHostedPage, waitPaid, type CardBilling } from "./helpers/card-billing";
+import { makeAccount, auth, type TestApp } from "./helpers/app";
 import { Order, OrderLine } from "../../server/orders/order.entity";
 import { Invoice, Payment, StripeEventRecord } from "../../server/billing/billing.entity";
 import { confirmDispatch } from "../../server/billing/invoices.service";
@@ -8,48 +9,20 @@ import { Bakery } from "../../server/bakery/bakery.entity";
 import { csvTable } from "../../server/billing/payments.service";
 import { parse as parseCsv } from "csv-parse/sync";
 import { formatMoney, minorUnitExponent } from "../../shared/money";
-import { taxCents } from "../../shared/billing";
 
-const NOW = "2026-06-10T15:00:00Z";
 let t: TestApp;
 let buyer: string;
 let books: string;
 let accountId: number;
 let rolls: { id: number };
+let cb: CardBilling;
 beforeAll(async () => {
-  t = await startTestApp({ now: NOW, stripe: true });
-  await makeBakery(t.ds, { name: "Pay Bakery", salesTaxRateBp: 875, invoicePrefix: "PB" });
-  accountId = (await makeAccount(t.ds, { businessName: "Card Café", paymentTerms: "card" })).id;
-  buyer = await tokenFor(t, await makeUser(t.ds, "buyer", { accountId }));
-  books = await tokenFor(t, await makeUser(t.ds, "bookkeeper"));
-  rolls = await makeProduct(t.ds, { priceCents: 1800 });
+  cb = await startCardBilling({ bakery: "Pay Bakery", invoicePrefix: "PB" });
+  ({ t, buyer, books, accountId, rolls } = cb);
 });
 afterAll(() => t.close());
 
-let day = 1;
-async function invoiceFor(qty: number) {
-  const date = `2026-06-${String(day++).padStart(2, "0")}`;
-  const o = await t.ds.getRepository(Order).save(t.ds.getRepository(Order).create({ accountId, deliveryDate: date, status: "locked", totalCents: qty * 1800, source: "one_off", editedByHand: false, createdById: null, poNumber: null, note: null }));
-  await t.ds.getRepository(OrderLine).insert({ orderId: o.id, productId: rolls.id, productName: "Rolls", saleUnit: "tray", quantity: qty, unitPriceCents: 1800, lineTotalCents: qty * 1800 });
-  await confirmDispatch(t.ctx, date, []);
-  return t.ds.getRepository(Invoice).findOneByOrFail({ accountId, issueDate: "2026-06-10", totalCents: qty * 1800 + taxCents(qty * 1800, 875) });
-}
-
-/** Fill in the fake's hosted page as a person would, with a card number. */
-async function payOnHostedPage(url: string, card: string) {
-  const body = new URLSearchParams({ email: "pay@cardcafe.test", card_number: card, expiry: "12/30", cvc: "123", name: "Card Café" });
-  return fetch(url, { method: "POST", body, redirect: "manual", headers: { "content-type": "application/x-www-form-urlencoded" } });
-}
-
-async function waitPaid(id: number) {
-  for (let i = 0; i < 100; i++) {
-    await t.stripe!.flushWebhooks();
-    const inv = await t.ds.getRepository(Invoice).findOneByOrFail({ id });
-    if (inv.status === "paid") return inv;
-    await new Promise((r) => setTimeout(r, 20));
-  }
-  throw new Error("invoice not paid");
-}
+const invoiceFor = (qty: number) => cb.invoiceFor(qty, { issueDate: "2026-06-10" });
 
 describe("card payments through Stripe's hosted checkout (the local fake, real SDK)", () => {
   it("the buyer pays with 4242 4242 4242 4242; the signed webhook marks the invoice paid, once", async () => {
@@ -60,7 +33,7 @@ describe("card payments through Stripe's hosted checkout (the local fake, real S
     const paid = await payOnHostedPage(res.body.url, "4242 4242 4242 4242");
     expect(paid.status).toBe(303);
     expect(paid.headers.get("location")).toContain(`/pay/return?invoice=${inv.id}&session_id=cs_test_`);
-    const after = await waitPaid(inv.id);
+    const after = await waitPaid(t, inv.id);
     expect(after.paidCents).toBe(inv.totalCents);
     const payments = await t.ds.getRepository(Payment).findBy({ invoiceId: inv.id });
     expect(payments).toHaveLength(1);
@@ -85,7 +58,7 @@ describe("card payments through Stripe's hosted checkout (the local fake, real S
     expect((await t.ds.getRepository(Invoice).findOneByOrFail({ id: inv.id })).status).toBe("open");
     const ok = await payOnHostedPage(body.url, "4242424242424242");
     expect(ok.status).toBe(303);
-    await waitPaid(inv.id);
+    await waitPaid(t, inv.id);
   });
 
   it("a webhook delivered three times and out of order pays the invoice once", async () => {
@@ -134,7 +107,7 @@ describe("card payments through Stripe's hosted checkout (the local fake, real S
     const inv = await invoiceFor(4);
     const { body } = await t.http().post(`/api/invoices/${inv.id}/checkout`).set(auth(buyer));
     await payOnHostedPage(body.url, "4242 4242 4242 4242");
-    await waitPaid(inv.id);
+    await waitPaid(t, inv.id);
     const cn = await t.http().post(`/api/invoices/${inv.id}/credit-notes`).set(auth(books)).send({ reason: "One tray squashed", lines: [{ description: "Rolls (tray)", quantity: 1, unitPriceCents: 1800 }] });
     expect(cn.status).toBe(201);
     expect(cn.body.creditNote).toMatchObject({ disposition: "refund", totalCents: 1800 + 158 });
@@ -153,7 +126,7 @@ describe("card payments through Stripe's hosted checkout (the local fake, real S
     await t.http().post(`/api/invoices/${inv.id}/payments`).set(auth(books)).send({ amountCents: inv.totalCents - 2000, method: "cheque", reference: "CHQ 881", receivedOn: "2026-06-10" });
     const { body } = await t.http().post(`/api/invoices/${inv.id}/checkout`).set(auth(buyer));
     await payOnHostedPage(body.url, "4242 4242 4242 4242");
-    await waitPaid(inv.id);
+    await waitPaid(t, inv.id);
     const cn = await t.http().post(`/api/invoices/${inv.id}/credit-notes`).set(auth(books)).send({ reason: "Two trays short", lines: [{ description: "Rolls (tray)", quantity: 2, unitPriceCents: 1800 }] });
     expect(cn.status).toBe(201);
     expect(cn.body.creditNote.disposition).toBe("carry"); // 39.15 > the 20.00 paid by card

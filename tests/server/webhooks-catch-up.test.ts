@@ -5,15 +5,13 @@ import path from "node:path";
 import fs from "node:fs";
 import { spawn, type ChildProcess } from "node:child_process";
 import Stripe from "stripe";
-import { startTestApp, makeAccount, makeBakery, makeProduct, makeUser, tokenFor, auth, type TestApp } from "./helpers/app";
+import { startCardBilling, payOnHostedPage, type CardBilling } from "./helpers/card-billing";
+import { makeUser, tokenFor, auth, type TestApp } from "./helpers/app";
 import { startStripeFake, type StripeFake } from "../../fakes/stripe/stripe-fake";
-import { Order, OrderLine } from "../../server/orders/order.entity";
 import { CheckoutSessionRecord, Invoice, Payment, Refund } from "../../server/billing/billing.entity";
-import { confirmDispatch } from "../../server/billing/invoices.service";
 import { catchUpEvents, catchUpSessions } from "../../server/jobs/stripe-catch-up";
 import { startScheduler } from "../../server/jobs/scheduler";
 import { jobs } from "../../server/jobs";
-import { taxCents } from "../../shared/billing";
 
 /**
  * Faults: webhooks can be lost (the Stripe fake killed after a payment, before delivering them). Stripe's
@@ -21,34 +19,19 @@ import { taxCents } from "../../shared/billing";
  * for 30 days) and retrieving objects rather than relying on delivery. The catch-up job does both, through
  * the webhook's own code path.
  */
-const NOW = "2026-06-10T15:00:00Z";
 const ROOT = path.resolve(__dirname, "../..");
 let t: TestApp;
 let buyer: string;
 let accountId: number;
 let rolls: { id: number };
+let cb: CardBilling;
 beforeAll(async () => {
-  t = await startTestApp({ now: NOW });
-  await makeBakery(t.ds, { name: "Heal Bakery", salesTaxRateBp: 875, invoicePrefix: "HL" });
-  accountId = (await makeAccount(t.ds, { businessName: "Card Café", paymentTerms: "card" })).id;
-  buyer = await tokenFor(t, await makeUser(t.ds, "buyer", { accountId }));
-  rolls = await makeProduct(t.ds, { priceCents: 1800 });
+  cb = await startCardBilling({ bakery: "Heal Bakery", invoicePrefix: "HL", stripe: false });
+  ({ t, buyer, accountId, rolls } = cb);
 });
 afterAll(() => t.close());
 
-let day = 1;
-async function invoiceFor(qty: number) {
-  const date = `2026-06-${String(day++).padStart(2, "0")}`;
-  const o = await t.ds.getRepository(Order).save(t.ds.getRepository(Order).create({ accountId, deliveryDate: date, status: "locked", totalCents: qty * 1800, source: "one_off", editedByHand: false, createdById: null, poNumber: null, note: null }));
-  await t.ds.getRepository(OrderLine).insert({ orderId: o.id, productId: rolls.id, productName: "Rolls", saleUnit: "tray", quantity: qty, unitPriceCents: 1800, lineTotalCents: qty * 1800 });
-  await confirmDispatch(t.ctx, date, []);
-  return t.ds.getRepository(Invoice).findOneByOrFail({ accountId, totalCents: qty * 1800 + taxCents(qty * 1800, 875) });
-}
-
-async function payOnHostedPage(url: string) {
-  const body = new URLSearchParams({ email: "pay@cardcafe.test", card_number: "4242 4242 4242 4242", expiry: "12/30", cvc: "123", name: "Card Café" });
-  return fetch(url, { method: "POST", body, redirect: "manual", headers: { "content-type": "application/x-www-form-urlencoded" } });
-}
+const invoiceFor = (qty: number) => cb.invoiceFor(qty);
 
 const stripeFor = (port: number) => new Stripe("sk_test_catch_up", { host: "127.0.0.1", port, protocol: "http", maxNetworkRetries: 0 });
 

@@ -1,9 +1,7 @@
 import Stripe from "stripe";
-import { startTestApp, makeAccount, makeBakery, makeProduct, makeUser, tokenFor, auth, type TestApp } from "./helpers/app";
-import { Order, OrderLine } from "../../server/orders/order.entity";
+import { startCardBilling, payOnHostedPage, type CardBilling } from "./helpers/card-billing";
+import { auth, type TestApp } from "./helpers/app";
 import { CheckoutSessionRecord, Invoice, Payment, Refund } from "../../server/billing/billing.entity";
-import { confirmDispatch } from "../../server/billing/invoices.service";
-import { taxCents } from "../../shared/billing";
 
 /**
  * Issue 8 item 3: one invoice must never be payable twice. An open hosted payment page is expired at
@@ -11,35 +9,19 @@ import { taxCents } from "../../shared/billing";
  * what is owed changes; a card payment that still arrives for a settled invoice is kept (the money was
  * taken), shown as an overpayment, and refunded in one action.
  */
-const NOW = "2026-06-10T15:00:00Z";
 let t: TestApp;
 let buyer: string;
 let books: string;
 let accountId: number;
 let rolls: { id: number };
+let cb: CardBilling;
 beforeAll(async () => {
-  t = await startTestApp({ now: NOW, stripe: true });
-  await makeBakery(t.ds, { name: "Twice Bakery", salesTaxRateBp: 875, invoicePrefix: "TB" });
-  accountId = (await makeAccount(t.ds, { businessName: "Card Café", paymentTerms: "card" })).id;
-  buyer = await tokenFor(t, await makeUser(t.ds, "buyer", { accountId }));
-  books = await tokenFor(t, await makeUser(t.ds, "bookkeeper"));
-  rolls = await makeProduct(t.ds, { priceCents: 1800 });
+  cb = await startCardBilling({ bakery: "Twice Bakery", invoicePrefix: "TB" });
+  ({ t, buyer, books, accountId, rolls } = cb);
 });
 afterAll(() => t.close());
 
-let day = 1;
-async function invoiceFor(qty: number) {
-  const date = `2026-06-${String(day++).padStart(2, "0")}`;
-  const o = await t.ds.getRepository(Order).save(t.ds.getRepository(Order).create({ accountId, deliveryDate: date, status: "locked", totalCents: qty * 1800, source: "one_off", editedByHand: false, createdById: null, poNumber: null, note: null }));
-  await t.ds.getRepository(OrderLine).insert({ orderId: o.id, productId: rolls.id, productName: "Rolls", saleUnit: "tray", quantity: qty, unitPriceCents: 1800, lineTotalCents: qty * 1800 });
-  await confirmDispatch(t.ctx, date, []);
-  return t.ds.getRepository(Invoice).findOneByOrFail({ accountId, totalCents: qty * 1800 + taxCents(qty * 1800, 875) });
-}
-
-async function payOnHostedPage(url: string, card = "4242 4242 4242 4242") {
-  const body = new URLSearchParams({ email: "pay@cardcafe.test", card_number: card, expiry: "12/30", cvc: "123", name: "Card Café" });
-  return fetch(url, { method: "POST", body, redirect: "manual", headers: { "content-type": "application/x-www-form-urlencoded" } });
-}
+const invoiceFor = (qty: number) => cb.invoiceFor(qty);
 
 const sessionIdOf = (url: string) => /\/pay\/(cs_test_\w+)/.exec(url)![1];
 

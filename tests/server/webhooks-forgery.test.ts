@@ -1,9 +1,7 @@
 import Stripe from "stripe";
-import { startTestApp, makeAccount, makeBakery, makeProduct, makeUser, tokenFor, auth, type TestApp } from "./helpers/app";
-import { Order, OrderLine } from "../../server/orders/order.entity";
+import { startCardBilling, payOnHostedPage, waitPaid, type CardBilling } from "./helpers/card-billing";
+import { auth, type TestApp } from "./helpers/app";
 import { Invoice, Payment } from "../../server/billing/billing.entity";
-import { confirmDispatch } from "../../server/billing/invoices.service";
-import { taxCents } from "../../shared/billing";
 
 /**
  * Issue 8 items 2 and 12: a webhook signed with the right secret is still only a claim. Every payment
@@ -12,45 +10,19 @@ import { taxCents } from "../../shared/billing";
  * recorded as rejected and never applied. The secret here is the one the server uses: these tests are
  * what an attacker who knows it (it used to be published in the repository) can do.
  */
-const NOW = "2026-06-10T15:00:00Z";
 let t: TestApp;
 let buyer: string;
 let books: string;
 let accountId: number;
 let rolls: { id: number };
+let cb: CardBilling;
 beforeAll(async () => {
-  t = await startTestApp({ now: NOW, stripe: true });
-  await makeBakery(t.ds, { name: "Forge Bakery", salesTaxRateBp: 875, invoicePrefix: "FB" });
-  accountId = (await makeAccount(t.ds, { businessName: "Card Café", paymentTerms: "card" })).id;
-  buyer = await tokenFor(t, await makeUser(t.ds, "buyer", { accountId }));
-  books = await tokenFor(t, await makeUser(t.ds, "bookkeeper"));
-  rolls = await makeProduct(t.ds, { priceCents: 1800 });
+  cb = await startCardBilling({ bakery: "Forge Bakery", invoicePrefix: "FB" });
+  ({ t, buyer, books, accountId, rolls } = cb);
 });
 afterAll(() => t.close());
 
-let day = 1;
-async function invoiceFor(qty: number) {
-  const date = `2026-06-${String(day++).padStart(2, "0")}`;
-  const o = await t.ds.getRepository(Order).save(t.ds.getRepository(Order).create({ accountId, deliveryDate: date, status: "locked", totalCents: qty * 1800, source: "one_off", editedByHand: false, createdById: null, poNumber: null, note: null }));
-  await t.ds.getRepository(OrderLine).insert({ orderId: o.id, productId: rolls.id, productName: "Rolls", saleUnit: "tray", quantity: qty, unitPriceCents: 1800, lineTotalCents: qty * 1800 });
-  await confirmDispatch(t.ctx, date, []);
-  return t.ds.getRepository(Invoice).findOneByOrFail({ accountId, totalCents: qty * 1800 + taxCents(qty * 1800, 875) });
-}
-
-async function payOnHostedPage(url: string, card = "4242 4242 4242 4242") {
-  const body = new URLSearchParams({ email: "pay@cardcafe.test", card_number: card, expiry: "12/30", cvc: "123", name: "Card Café" });
-  return fetch(url, { method: "POST", body, redirect: "manual", headers: { "content-type": "application/x-www-form-urlencoded" } });
-}
-
-async function waitPaid(id: number) {
-  for (let i = 0; i < 100; i++) {
-    await t.stripe!.flushWebhooks();
-    const inv = await t.ds.getRepository(Invoice).findOneByOrFail({ id });
-    if (inv.status === "paid") return inv;
-    await new Promise((r) => setTimeout(r, 20));
-  }
-  throw new Error("invoice not paid");
-}
+const invoiceFor = (qty: number) => cb.invoiceFor(qty);
 
 /** POST a payload to the webhook route, signed with the server's own secret (optionally at another time). */
 function send(payload: string, opts: { timestamp?: number } = {}) {
@@ -108,7 +80,7 @@ describe("forged payment events are checked against the invoice and Stripe, reco
     const b = await invoiceFor(6);
     const { body } = await t.http().post(`/api/invoices/${a.id}/checkout`).set(auth(buyer));
     await payOnHostedPage(body.url);
-    await waitPaid(a.id);
+    await waitPaid(t, a.id);
     const session = Object.values(t.stripe!.state.checkoutSessions).find((s) => s.metadata.invoiceId === String(a.id))!;
     // The real, paid session of A, relabelled as B's.
     const relabelled = event("checkout.session.completed", { ...session, metadata: { invoiceId: String(b.id) }, client_reference_id: String(b.id) });
@@ -131,7 +103,7 @@ describe("forged payment events are checked against the invoice and Stripe, reco
     const inv = await invoiceFor(7);
     const { body } = await t.http().post(`/api/invoices/${inv.id}/checkout`).set(auth(buyer));
     await payOnHostedPage(body.url);
-    await waitPaid(inv.id);
+    await waitPaid(t, inv.id);
     const payment = await t.ds.getRepository(Payment).findOneByOrFail({ invoiceId: inv.id });
     const payload = event("charge.refunded", { id: payment.stripeChargeId, object: "charge", payment_intent: payment.stripePaymentIntentId, amount: inv.totalCents, amount_refunded: inv.totalCents, currency: "usd", refunds: { object: "list", data: [{ id: "re_forged", object: "refund", amount: inv.totalCents, currency: "usd", charge: payment.stripeChargeId, status: "succeeded" }] } });
     expect((await send(payload)).status).toBe(200);
