@@ -5,12 +5,13 @@ import { notFound, conflict } from "../http/errors";
 import { OutboxMail } from "./outbox.entity";
 import type { OutgoingMail } from "./mailer";
 import { isDatabaseUnavailable } from "../db/retry";
+import type { MailKind } from "../../shared/mail";
 
 export const MAX_ATTEMPTS = 12;
 const SENDING_STALE_MS = 5 * 60 * 1000;
 
 /** Queue a mail inside the caller's transaction: it is sent only if that transaction commits. */
-export async function enqueueMail(m: EntityManager, ctx: AppContext, kind: string, mail: OutgoingMail): Promise<OutboxMail> {
+export async function enqueueMail(m: EntityManager, ctx: AppContext, kind: MailKind, mail: OutgoingMail): Promise<OutboxMail> {
   const domain = new URL(ctx.config.publicUrl).hostname || "panwise.local";
   const row = m.getRepository(OutboxMail).create({
     messageId: `<${kind}.${Date.now().toString(36)}.${crypto.randomBytes(8).toString("hex")}@${domain}>`,
