@@ -613,6 +613,11 @@ export function csvTable(header: string[], rows: { currency: string; cells: (str
  * object name), as the CSV spec in DEVELOPERS.md sets out. "Ref" is a reference a person can look up at the
  * card processor or the bank.
  */
+/**
+ * The header style of every CSV (the CSV spec in DEVELOPERS.md): plain words in Title Case, every word capitalised,
+ * acronyms kept (PO), an ISO 4217 currency code in parentheses last ("Order Total (USD)"). The tests check each header row against it.
+ */
+export const CSV_HEADER_STYLE = /^(?:[A-Z][a-z]*|[A-Z]{2,})(?: (?:[A-Z][a-z]*|[A-Z]{2,}))*(?: \([A-Z]{3}\))?$/;
 export const INVOICE_CSV_COLUMNS = ["Invoice Number", "Account", "Kind", "Status", "Issue Date", "Due Date", "Currency", "Subtotal", "Tax", "Total", "Credited", "Paid", "Refunded", "Amount Due"];
 export const PAYMENT_CSV_COLUMNS = ["Received On", "Invoice Number", "Account", "Method", "Currency", "Amount", "Reference", "Card Payment Ref", "Card Charge Ref"];
 export const PAYOUT_CSV_COLUMNS = ["Bank Payout Ref", "Arrival Date", "Status", "Currency", "Amount", "Gross", "Fees", "Refunds", "Net", "Transactions", "Unmatched", "Reconciled At"];

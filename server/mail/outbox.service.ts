@@ -141,7 +141,7 @@ export async function resend(ctx: AppContext, id: number): Promise<void> {
   const repo = ctx.dataSource.getRepository(OutboxMail);
   const row = await repo.findOneBy({ id });
   if (!row) throw notFound("That mail");
-  if (row.status !== "failed") throw conflict("not_failed", "Only a mail that failed can be sent again; this one is " + row.status + ".");
+  if (row.status !== "failed") throw conflict("not_failed", `Only a mail that failed can be sent again; this one ${row.status === "sent" ? "has been sent" : "is still waiting to go"}.`);
   await repo.update({ id, status: "failed" }, { status: "pending", attempts: 0, nextAttemptAt: ctx.clock.now(), lastError: null });
   ctx.kickOutbox?.();
 }

@@ -6,7 +6,7 @@ import { Order, OrderLine } from "../../server/orders/order.entity";
 import { Invoice, Payment, StripeEventRecord } from "../../server/billing/billing.entity";
 import { confirmDispatch } from "../../server/billing/invoices.service";
 import { Bakery } from "../../server/bakery/bakery.entity";
-import { csvTable } from "../../server/billing/payments.service";
+import { CSV_HEADER_STYLE, csvTable } from "../../server/billing/payments.service";
 import { parse as parseCsv } from "csv-parse/sync";
 import { INVOICE_KIND_LABELS, INVOICE_STATUS_LABELS, PAYMENT_METHOD_LABELS, PAYOUT_STATUS_LABELS } from "../../shared/billing";
 import { formatMoney, minorUnitExponent } from "../../shared/money";
@@ -221,7 +221,7 @@ describe("card payments through Stripe's hosted checkout (the local fake, real S
     // capitalised, acronyms kept (PO); no snake_case and no processor object names. A product column of the orders
     // board is the product's own name and sale unit, so it is left out; the currency code in "Order Total (USD)" is
     // ISO 4217.
-    const titleCase = /^(?:[A-Z][a-z]*|[A-Z]{2,})(?: (?:[A-Z][a-z]*|[A-Z]{2,}))*(?: \([A-Z]{3}\))?$/;
+    const titleCase = CSV_HEADER_STYLE;
     const headerOf = async (url: string) => (parseCsv((await t.http().get(url).set(auth(books))).text, { to_line: 1 }) as string[][])[0];
     const heads: Record<string, string[]> = {};
     for (const kind of ["invoices", "payments", "payouts"]) heads[kind] = await headerOf(`/api/reports/exports/${kind}.csv`);
