@@ -45,7 +45,7 @@ interface Word {
 /** JSX attributes a person sees or hears. testID, href, key, style, icon, name, tone, variant … are left out on purpose. */
 const VISIBLE_ATTRS = new Set([
   "label", "title", "subtitle", "overline", "message", "hint", "placeholder", "accessibilityLabel", "accessibilityHint", "aria-label",
-  "about", "text", "confirmLabel", "cancelLabel", "emptyText", "caption", "description", "helper", "helperText", "error", "heading",
+  "about", "text", "rowLabel", "confirmLabel", "cancelLabel", "emptyText", "caption", "description", "helper", "helperText", "error", "heading",
   "alt", "value-label", "tooltip", "retryLabel", "actionLabel", "linkLabel", "body", "note", "footerLabel", "unit", "suffix", "prefix",
 ]);
 /** Object properties whose values people read (choices, columns, table rows, notices). */
