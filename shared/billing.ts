@@ -14,6 +14,34 @@ export const PAYMENT_TERMS_LABELS: Record<PaymentTerms, string> = {
   net30: "Weekly statement, net 30",
 };
 
+/**
+ * What a person reads for the billing codes the server stores: on screens, in e-mails and in the CSV exports
+ * (issue 10 "No raw codes reach a person"). One source for the app and the server.
+ */
+export type InvoiceStatusCode = "open" | "paid" | "void" | "partially_refunded" | "refunded";
+export const INVOICE_STATUS_LABELS: Record<InvoiceStatusCode, string> = {
+  open: "Open",
+  paid: "Paid",
+  void: "Void",
+  partially_refunded: "Part refunded",
+  refunded: "Refunded",
+};
+export type InvoiceKindCode = "order" | "statement";
+export const INVOICE_KIND_LABELS: Record<InvoiceKindCode, string> = { order: "Invoice", statement: "Weekly statement" };
+export type PaymentMethodCode = "card" | "bank_transfer" | "cheque" | "cash" | "other";
+/** The stored code `cheque` stays; a person in the US reads "Check". */
+export const PAYMENT_METHOD_LABELS: Record<PaymentMethodCode, string> = {
+  card: "Card",
+  bank_transfer: "Bank transfer",
+  cheque: "Check",
+  cash: "Cash",
+  other: "Other",
+};
+/** A payout's status as the card processor reports it (Stripe's payout `status`: paid, pending, in_transit, canceled, failed). */
+export const PAYOUT_STATUS_LABELS: Record<string, string> = { paid: "Arrived", pending: "On its way", in_transit: "On its way", failed: "Failed", canceled: "Canceled" };
+/** A status the processor may add later reads as a plain word, never its code. */
+export const payoutStatusLabel = (status: string): string => PAYOUT_STATUS_LABELS[status] ?? "Unknown status";
+
 export function termDays(terms: PaymentTerms): number {
   return terms === "card" ? 0 : Number(terms.slice(3));
 }

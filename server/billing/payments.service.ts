@@ -9,7 +9,7 @@ import { getBakery } from "../bakery/bakery.service";
 import { createCreditNote, overpaidCents, recordManualPayment, recordPayment, recordRefund } from "./invoices.service";
 import { enqueueMail } from "../mail/outbox.service";
 import { receiptMail } from "../mail/templates";
-import { AGING_BUCKETS, agingBucket, amountDue, taxCents, type AgingBucket } from "../../shared/billing";
+import { AGING_BUCKETS, INVOICE_KIND_LABELS, INVOICE_STATUS_LABELS, PAYMENT_METHOD_LABELS, agingBucket, amountDue, payoutStatusLabel, taxCents, type AgingBucket } from "../../shared/billing";
 import { localToday } from "../../shared/calendar";
 import { retryOnDeadlock } from "../db/retry";
 import { toDecimal } from "../../shared/money";
@@ -375,11 +375,11 @@ async function expireSession(ctx: AppContext, s: CheckoutSessionRecord): Promise
   }
 }
 
-async function queueReceipt(ctx: AppContext, m: EntityManager, invoiceId: number, amountCents: number, method: string) {
+async function queueReceipt(ctx: AppContext, m: EntityManager, invoiceId: number, amountCents: number, method: keyof typeof PAYMENT_METHOD_LABELS) {
   const inv = await m.getRepository(Invoice).findOneByOrFail({ id: invoiceId });
   const account = await m.getRepository(CustomerAccount).findOneByOrFail({ id: inv.accountId });
   const bakery = await getBakery(ctx, m);
-  const mail = receiptMail({ bakeryName: bakery.name, currency: bakery.currency, number: inv.number, amountCents, method, url: `${ctx.config.publicUrl}/buyer/invoices/${inv.id}` });
+  const mail = receiptMail({ bakeryName: bakery.name, currency: bakery.currency, number: inv.number, amountCents, method: PAYMENT_METHOD_LABELS[method].toLowerCase(), url: `${ctx.config.publicUrl}/buyer/invoices/${inv.id}` });
   await enqueueMail(m, ctx, "receipt", { to: account.billingEmail, fromName: bakery.name, ...mail });
 }
 
@@ -613,33 +613,39 @@ export function csvTable(header: string[], rows: { currency: string; cells: (str
  * object name), as the CSV spec in DEVELOPERS.md sets out. "Ref" is a reference a person can look up at the
  * card processor or the bank.
  */
+/**
+ * The header style of every CSV (the CSV spec in DEVELOPERS.md): plain words in Title Case, every word capitalised,
+ * acronyms kept (PO), an ISO 4217 currency code in parentheses last ("Order Total (USD)"). The tests check each header row against it.
+ */
+export const CSV_HEADER_STYLE = /^(?:[A-Z][a-z]*|[A-Z]{2,})(?: (?:[A-Z][a-z]*|[A-Z]{2,}))*(?: \([A-Z]{3}\))?$/;
 export const INVOICE_CSV_COLUMNS = ["Invoice Number", "Account", "Kind", "Status", "Issue Date", "Due Date", "Currency", "Subtotal", "Tax", "Total", "Credited", "Paid", "Refunded", "Amount Due"];
 export const PAYMENT_CSV_COLUMNS = ["Received On", "Invoice Number", "Account", "Method", "Currency", "Amount", "Reference", "Card Payment Ref", "Card Charge Ref"];
 export const PAYOUT_CSV_COLUMNS = ["Bank Payout Ref", "Arrival Date", "Status", "Currency", "Amount", "Gross", "Fees", "Refunds", "Net", "Transactions", "Unmatched", "Reconciled At"];
 
 /**
  * CSV exports (RFC 4180 through csv-stringify). Column spec, documented in DEVELOPERS.md: amounts are
- * decimal in the currency's units with the ISO 4217 code in its own column; dates YYYY-MM-DD.
+ * decimal in the currency's units with the ISO 4217 code in its own column; dates YYYY-MM-DD; kind, status
+ * and method columns hold the words a person reads on the screens (shared/billing.ts), never the stored code.
  */
 export async function exportCsv(ctx: AppContext, kind: "invoices" | "payments" | "payouts"): Promise<string> {
   const accounts = new Map((await ctx.dataSource.getRepository(CustomerAccount).find()).map((a) => [a.id, a.businessName]));
   if (kind === "invoices") {
     const rows = await ctx.dataSource.getRepository(Invoice).find({ order: { id: "ASC" } });
     return csvTable(INVOICE_CSV_COLUMNS,
-      rows.map((i) => ({ currency: i.currency, cells: [i.number, accounts.get(i.accountId) ?? "", i.kind, i.status, i.issueDate, i.dueDate, i.currency, i.subtotalCents, i.taxCents, i.totalCents, i.creditedCents, i.paidCents, i.refundedCents, amountDue(i)] })));
+      rows.map((i) => ({ currency: i.currency, cells: [i.number, accounts.get(i.accountId) ?? "", INVOICE_KIND_LABELS[i.kind], INVOICE_STATUS_LABELS[i.status], i.issueDate, i.dueDate, i.currency, i.subtotalCents, i.taxCents, i.totalCents, i.creditedCents, i.paidCents, i.refundedCents, amountDue(i)] })));
   }
   if (kind === "payments") {
     const rows = await ctx.dataSource.getRepository(Payment).find({ order: { id: "ASC" } });
     const invoices = new Map((await ctx.dataSource.getRepository(Invoice).find()).map((i) => [i.id, i]));
     return csvTable(PAYMENT_CSV_COLUMNS,
-      rows.map((p) => { const i = invoices.get(p.invoiceId)!; return { currency: i.currency, cells: [p.receivedOn, i.number, accounts.get(i.accountId) ?? "", p.method, i.currency, p.amountCents, p.reference, p.stripePaymentIntentId ?? "", p.stripeChargeId ?? ""] }; }));
+      rows.map((p) => { const i = invoices.get(p.invoiceId)!; return { currency: i.currency, cells: [p.receivedOn, i.number, accounts.get(i.accountId) ?? "", PAYMENT_METHOD_LABELS[p.method], i.currency, p.amountCents, p.reference, p.stripePaymentIntentId ?? "", p.stripeChargeId ?? ""] }; }));
   }
   const payouts = await listPayouts(ctx);
   const out: { currency: string; cells: (string | number | null)[] }[] = [];
   for (const p of payouts) {
     const d = await payoutDetail(ctx, p.id);
     const cur = p.currency.toUpperCase();
-    out.push({ currency: cur, cells: [p.id, p.arrivalDate, p.status, cur, p.amountCents, d.grossCents, d.feesCents, d.refundsCents, d.netCents, String(d.transactions.length), String(d.unmatched), p.reconciledAt ?? ""] });
+    out.push({ currency: cur, cells: [p.id, p.arrivalDate, payoutStatusLabel(p.status), cur, p.amountCents, d.grossCents, d.feesCents, d.refundsCents, d.netCents, String(d.transactions.length), String(d.unmatched), p.reconciledAt ?? ""] });
   }
   return csvTable(PAYOUT_CSV_COLUMNS, out);
 }

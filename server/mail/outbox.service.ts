@@ -5,12 +5,13 @@ import { notFound, conflict } from "../http/errors";
 import { OutboxMail } from "./outbox.entity";
 import type { OutgoingMail } from "./mailer";
 import { isDatabaseUnavailable } from "../db/retry";
+import type { MailKind } from "../../shared/mail";
 
 export const MAX_ATTEMPTS = 12;
 const SENDING_STALE_MS = 5 * 60 * 1000;
 
 /** Queue a mail inside the caller's transaction: it is sent only if that transaction commits. */
-export async function enqueueMail(m: EntityManager, ctx: AppContext, kind: string, mail: OutgoingMail): Promise<OutboxMail> {
+export async function enqueueMail(m: EntityManager, ctx: AppContext, kind: MailKind, mail: OutgoingMail): Promise<OutboxMail> {
   const domain = new URL(ctx.config.publicUrl).hostname || "panwise.local";
   const row = m.getRepository(OutboxMail).create({
     messageId: `<${kind}.${Date.now().toString(36)}.${crypto.randomBytes(8).toString("hex")}@${domain}>`,
@@ -140,7 +141,7 @@ export async function resend(ctx: AppContext, id: number): Promise<void> {
   const repo = ctx.dataSource.getRepository(OutboxMail);
   const row = await repo.findOneBy({ id });
   if (!row) throw notFound("That mail");
-  if (row.status !== "failed") throw conflict("not_failed", "Only a mail that failed can be sent again; this one is " + row.status + ".");
+  if (row.status !== "failed") throw conflict("not_failed", `Only a mail that failed can be sent again; this one ${row.status === "sent" ? "has been sent" : "is still waiting to go"}.`);
   await repo.update({ id, status: "failed" }, { status: "pending", attempts: 0, nextAttemptAt: ctx.clock.now(), lastError: null });
   ctx.kickOutbox?.();
 }

@@ -1,5 +1,6 @@
 import { stringify } from "csv-stringify/sync";
 import { toDecimal } from "../../shared/money";
+import { ORDER_STATUS_LABELS, type OrderStatus } from "../../shared/schemas/orders";
 import type { AppContext } from "../http/context";
 import { Product } from "../catalog/product.entity";
 import { CustomerAccount } from "../accounts/account.entity";
@@ -7,13 +8,13 @@ import { CustomerAccount } from "../accounts/account.entity";
 export interface BoardDto {
   date: string;
   products: { id: number; name: string; saleUnit: string; total: number }[];
-  rows: { accountId: number; accountName: string; orderId: number; status: string; poNumber: string | null; quantities: Record<number, number>; totalCents: number }[];
+  rows: { accountId: number; accountName: string; orderId: number; status: OrderStatus; poNumber: string | null; quantities: Record<number, number>; totalCents: number }[];
   totalCents: number;
 }
 
 /** Accounts × products for one delivery date, summed in SQL. Cancelled orders are left out. */
 export async function board(ctx: AppContext, date: string): Promise<BoardDto> {
-  const cells: { orderId: number; accountId: number; status: string; poNumber: string | null; totalCents: number; productId: number; qty: string }[] = await ctx.dataSource.query(
+  const cells: { orderId: number; accountId: number; status: OrderStatus; poNumber: string | null; totalCents: number; productId: number; qty: string }[] = await ctx.dataSource.query(
     `SELECT o.id AS orderId, o.accountId, o.status, o.poNumber, o.totalCents, l.productId, SUM(l.quantity) AS qty
        FROM customer_order o JOIN order_line l ON l.orderId = o.id
       WHERE o.deliveryDate = ? AND o.status <> 'cancelled'
@@ -52,10 +53,10 @@ interface MoneyCell { money: string }
  */
 export function boardCsv(b: BoardDto, currency: string): string {
   // Fixed headers in Title Case plain words (the CSV spec in DEVELOPERS.md); a product column is named by the
-  // product and its sale unit as the catalog writes them.
+  // product and its sale unit as the catalog writes them. The status is the label people read, not the code.
   const header = ["Delivery Date", "Account", "Status", "PO Number", ...b.products.map((p) => `${p.name} (${p.saleUnit})`), `Order Total (${currency})`];
   const money = (c: number): MoneyCell => ({ money: toDecimal(c, currency) });
-  const rows = b.rows.map((r) => [b.date, r.accountName, r.status, r.poNumber ?? "", ...b.products.map((p) => r.quantities[p.id] ?? 0), money(r.totalCents)]);
+  const rows = b.rows.map((r) => [b.date, r.accountName, ORDER_STATUS_LABELS[r.status], r.poNumber ?? "", ...b.products.map((p) => r.quantities[p.id] ?? 0), money(r.totalCents)]);
   const totals = [b.date, "Total", "", "", ...b.products.map((p) => p.total), money(b.totalCents)];
   return stringify([header, ...rows, totals], {
     escape_formulas: true,

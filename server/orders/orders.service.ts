@@ -15,7 +15,7 @@ import { sortAllergens } from "../../shared/allergens";
 import { formatMoney } from "../../shared/money";
 import type { FieldErrors } from "../../shared/errors";
 import type { SessionUser } from "../../shared/schemas/auth";
-import { MAX_ORDER_CENTS, type OrderDto, type OrderStatus } from "../../shared/schemas/orders";
+import { MAX_ORDER_CENTS, ORDER_STATUS_LABELS, type OrderDto, type OrderStatus } from "../../shared/schemas/orders";
 import { orderMail } from "../mail/templates";
 import { retryOnDeadlock } from "../db/retry";
 import { derivedAllergens } from "../production/formulas.service";
@@ -257,7 +257,7 @@ async function lockOrderForWrite(ctx: AppContext, m: EntityManager, actor: Sessi
     throw Object.assign(cutoffPassed(dateCutoff, settings.timeZone, order.deliveryDate), { lockOrderId: order.id });
   }
   if (order.status === "locked") throw cutoffPassed(dateCutoff, settings.timeZone, order.deliveryDate);
-  if (order.status !== "open") throw new HttpError(409, "order_closed", `This order is ${order.status} and can no longer be changed.`);
+  if (order.status !== "open") throw new HttpError(409, "order_closed", `This order is ${ORDER_STATUS_LABELS[order.status].toLowerCase()} and can no longer be changed.`);
   refuseIfAccountBlocked(account, bakery);
   return order;
 }

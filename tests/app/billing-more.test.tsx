@@ -25,6 +25,25 @@ describe("outgoing e-mail (owner)", () => {
     await waitFor(() => expect(api.calls.some((c) => c.path === "/api/outbox" && c.query.status === "failed")).toBe(true));
   });
 
+  it("names every kind of mail in words, and an unknown kind as plain \"E-mail\", never its code", async () => {
+    // Issue 10 "No raw codes reach a person": the outbox used to print "order_changed".
+    signedInAs(OWNER);
+    const base = MAILS[1];
+    const mails: OutboxMailDto[] = [
+      { ...base, id: 21, kind: "order_changed", subject: "Mail 21" },
+      { ...base, id: 22, kind: "password_reset", subject: "Mail 22" },
+      { ...base, id: 23, kind: "order_cancelled", subject: "Mail 23" },
+      { ...base, id: 24, kind: "some_future_kind", subject: "Mail 24" },
+    ];
+    mockApi({ ...sessionRoutes(OWNER), "GET /api/outbox": { body: { mails } } });
+    renderApp("/office/money/outbox");
+    expect(await screen.findByTestId("outbox-row-21")).toHaveTextContent(/Order changed/);
+    expect(screen.getByTestId("outbox-row-22")).toHaveTextContent(/Password reset/);
+    expect(screen.getByTestId("outbox-row-23")).toHaveTextContent(/Order canceled/);
+    expect(screen.getByTestId("outbox-row-24")).toHaveTextContent(/E-mail/);
+    for (const id of [21, 22, 23, 24]) expect(screen.getByTestId(`outbox-row-${id}`)).not.toHaveTextContent(/[a-z]+_[a-z]+/);
+  });
+
   it("keeps the bookkeeper out", async () => {
     signedInAs(BOOKKEEPER);
     const api = mockApi({ ...sessionRoutes(BOOKKEEPER), "GET /api/office/summary": { body: { summary: { users: { total: 1, active: 1, disabled: 0, pendingInvitations: 0 }, accounts: { total: 1, active: 1, onHold: 0, closed: 0 } } } } });

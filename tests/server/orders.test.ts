@@ -1,6 +1,7 @@
 import { startTestApp, makeAccount, makeBakery, makeProduct, makeUser, tokenFor, waitForMail, auth, type TestApp } from "./helpers/app";
 import { CustomerAccount } from "../../server/accounts/account.entity";
 import { Order } from "../../server/orders/order.entity";
+import { ORDER_STATUS_LABELS } from "../../shared/schemas/orders";
 import { lockPastCutoff } from "../../server/orders/orders.service";
 
 /** Clock: Wed 10 Jun 2026 10:00 CDT. Thu 11 Jun's cut-off is Wed 10 Jun 14:00 CDT (19:00Z). */
@@ -331,6 +332,9 @@ describe("orders board CSV", () => {
     const row = rows.find((r) => r[1].includes("SUM(1+1)"))!;
     expect(row[header.indexOf("Account")]).toBe("'@SUM(1+1)*cmd|' /C calc'!A0");
     expect(row[header.indexOf("PO Number")]).toBe(`'${po}`);
+    // The status column holds the label people read on the board, not the stored code (issue 10 "No raw codes").
+    expect(row[header.indexOf("Status")]).toBe(ORDER_STATUS_LABELS.open);
+    expect(rows.slice(1).map((r) => r[header.indexOf("Status")]).join(" ")).not.toMatch(/\b(open|locked|delivered)\b/);
     expect(row[header.indexOf("Dinner rolls (tray of 15 rolls)")]).toBe("3");
     expect(row[header.indexOf("Order Total (USD)")]).toBe("54.00");
     expect(rows.flat().filter((c) => /^[=+\-@\t\r]/.test(c))).toEqual([]);
@@ -347,7 +351,7 @@ describe("orders board CSV", () => {
     }, "USD");
     const rows: string[][] = parseCsv(csv);
     expect(rows[0][4]).toBe("'-Rolls (tray)");
-    expect(rows[1].slice(1, 6)).toEqual(["'-2+3+cmd", "open", "'\tPO", "2", "-1.50"]);
+    expect(rows[1].slice(1, 6)).toEqual(["'-2+3+cmd", ORDER_STATUS_LABELS.open, "'\tPO", "2", "-1.50"]);
     expect(rows[2][5]).toBe("-1.50");
   });
 });

@@ -6,8 +6,9 @@ import { Order, OrderLine } from "../../server/orders/order.entity";
 import { Invoice, Payment, StripeEventRecord } from "../../server/billing/billing.entity";
 import { confirmDispatch } from "../../server/billing/invoices.service";
 import { Bakery } from "../../server/bakery/bakery.entity";
-import { csvTable } from "../../server/billing/payments.service";
+import { CSV_HEADER_STYLE, csvTable } from "../../server/billing/payments.service";
 import { parse as parseCsv } from "csv-parse/sync";
+import { INVOICE_KIND_LABELS, INVOICE_STATUS_LABELS, PAYMENT_METHOD_LABELS, PAYOUT_STATUS_LABELS } from "../../shared/billing";
 import { formatMoney, minorUnitExponent } from "../../shared/money";
 
 let t: TestApp;
@@ -172,6 +173,14 @@ describe("card payments through Stripe's hosted checkout (the local fake, real S
     expect(pays.some((p) => p["Card Charge Ref"].startsWith("ch_") && p["Card Payment Ref"].startsWith("pi_"))).toBe(true);
     const outs = parseCsv((await t.http().get("/api/reports/exports/payouts.csv").set(auth(books))).text, { columns: true }) as Record<string, string>[];
     expect(outs.find((p) => p["Bank Payout Ref"] === payout!.id)).toMatchObject({ Unmatched: "0", Net: (payout!.amount / 100).toFixed(2) });
+    // Kind, status and method columns hold the words the screens show (shared/billing.ts), never the stored codes
+    // ("partially_refunded", "bank_transfer", "in_transit"): issue 10 "No raw codes reach a person"; CSV spec in DEVELOPERS.md.
+    expect(inv.map((r) => r.Kind)).toContain(INVOICE_KIND_LABELS.order);
+    for (const r of inv) expect(Object.values(INVOICE_STATUS_LABELS)).toContain(r.Status);
+    expect(pays.map((r) => r.Method)).toContain(PAYMENT_METHOD_LABELS.card);
+    for (const r of pays) expect(Object.values(PAYMENT_METHOD_LABELS)).toContain(r.Method);
+    for (const r of outs) expect(Object.values(PAYOUT_STATUS_LABELS)).toContain(r.Status);
+    for (const r of [...inv, ...pays, ...outs]) for (const k of ["Kind", "Status", "Method"]) if (k in r) expect(r[k]).not.toMatch(/^[a-z_]+$/);
   });
 
   it("CSV exports neutralise formulas in text cells (OWASP CSV Injection) and keep amounts numeric, negative ones too", async () => {
@@ -212,7 +221,7 @@ describe("card payments through Stripe's hosted checkout (the local fake, real S
     // capitalised, acronyms kept (PO); no snake_case and no processor object names. A product column of the orders
     // board is the product's own name and sale unit, so it is left out; the currency code in "Order Total (USD)" is
     // ISO 4217.
-    const titleCase = /^(?:[A-Z][a-z]*|[A-Z]{2,})(?: (?:[A-Z][a-z]*|[A-Z]{2,}))*(?: \([A-Z]{3}\))?$/;
+    const titleCase = CSV_HEADER_STYLE;
     const headerOf = async (url: string) => (parseCsv((await t.http().get(url).set(auth(books))).text, { to_line: 1 }) as string[][])[0];
     const heads: Record<string, string[]> = {};
     for (const kind of ["invoices", "payments", "payouts"]) heads[kind] = await headerOf(`/api/reports/exports/${kind}.csv`);

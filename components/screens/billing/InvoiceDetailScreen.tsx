@@ -304,7 +304,7 @@ function EmailsCard({ detail }: { detail: InvoiceDetailDto }) {
       {(detail.emails ?? []).map((e, i) => (
         <View key={e.id} style={[styles.entry, i > 0 && styles.divider]} testID={`invoice-email-${e.id}`}>
           <AppText variant="bodyStrong">{e.kind === "receipt" ? "Payment receipt" : "Invoice with PDF"}</AppText>
-          <AppText variant="small" color="muted">{`To ${e.to} · ${EMAIL_STATUS[e.status] ?? e.status}${e.sentAt ? `, ${formatDateTime(e.sentAt, timeZone)}` : ""}`}</AppText>
+          <AppText variant="small" color="muted">{`To ${e.to} · ${EMAIL_STATUS[e.status] ?? "Status unknown"}${e.sentAt ? `, ${formatDateTime(e.sentAt, timeZone)}` : ""}`}</AppText>
         </View>
       ))}
     </Card>

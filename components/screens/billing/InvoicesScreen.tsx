@@ -17,7 +17,7 @@ import { messageOf } from "../../api/client";
 import { useDebounced } from "../../forms/useDebounced";
 import { cleanDate } from "../../ordering/dates";
 import { useIsWide } from "../../shell/useIsWide";
-import { BillingTable, Figure, InvoiceStatusBadge, billingStyles, day, money } from "./parts";
+import { BillingTable, Figure, INVOICE_STATUS_LABELS, InvoiceStatusBadge, billingStyles, day, money } from "./parts";
 import { Badge } from "../../ui/Badge";
 import { colors, space } from "../../theme";
 
@@ -228,7 +228,7 @@ function InvoiceTable({ invoices, totals, office, onOpen }: { invoices: InvoiceD
       rows={invoices}
       rowKey={(i) => i.id}
       onRowPress={onOpen}
-      rowLabel={(i) => `${i.number}, ${i.accountName}, ${money(i.totalCents, i.currency)}, ${i.overdue ? "overdue" : i.status}`}
+      rowLabel={(i) => `${i.number}, ${i.accountName}, ${money(i.totalCents, i.currency)}, ${i.overdue ? "overdue" : INVOICE_STATUS_LABELS[i.status].toLowerCase()}`}
       rowTestID={(i) => `invoice-row-${i.id}`}
       footer
       footerTestID="invoices-totals"
@@ -298,7 +298,7 @@ function InvoiceCard({ invoice: i, href, office }: { invoice: InvoiceDto; href: 
     <Link href={href as never} asChild>
       <LinkPressable
         accessibilityRole="link"
-        accessibilityLabel={`${i.number}${office ? `, ${i.accountName}` : ""}, ${money(i.totalCents, i.currency)}, ${i.overdue ? "overdue" : i.status}`}
+        accessibilityLabel={`${i.number}${office ? `, ${i.accountName}` : ""}, ${money(i.totalCents, i.currency)}, ${i.overdue ? "overdue" : INVOICE_STATUS_LABELS[i.status].toLowerCase()}`}
         testID={`invoice-row-${i.id}`}
         style={billingStyles.card}
         highlightStyle={billingStyles.cardHover}

@@ -12,13 +12,13 @@ import { messageOf } from "../../api/client";
 import { MAIL_STATUSES, useOutboxQuery, useResendMailMutation, type MailStatus, type OutboxMailDto } from "../../api/outbox";
 import { useBakeryTimeZone } from "../../api/bakery";
 import { formatDateTime } from "../../format";
+import { mailKindLabel } from "../../../shared/mail";
 import { useIsWide } from "../../shell/useIsWide";
 import { BackLink, BillingTable, billingStyles } from "./parts";
 import { colors, radii, space } from "../../theme";
 
 const STATUS_LABELS: Record<MailStatus, string> = { pending: "Waiting", sending: "Sending", sent: "Sent", failed: "Failed" };
 const STATUS_TONE: Record<MailStatus, BadgeTone> = { pending: "amber", sending: "crust", sent: "sage", failed: "danger" };
-const KIND_LABELS: Record<string, string> = { invoice: "Invoice", receipt: "Receipt", invitation: "Invitation", password_reset: "Password reset" };
 
 type Show = MailStatus | "all";
 
@@ -65,7 +65,7 @@ export function OutboxScreen() {
                 <AppText variant="bodyStrong" numberOfLines={1}>
                   {m.subject}
                 </AppText>
-                <AppText variant="small" color={m.status === "failed" ? "ink" : "muted"} numberOfLines={1}>{`${KIND_LABELS[m.kind] ?? m.kind} · to ${m.to}`}</AppText>
+                <AppText variant="small" color={m.status === "failed" ? "ink" : "muted"} numberOfLines={1}>{`${mailKindLabel(m.kind)} · to ${m.to}`}</AppText>
                 {m.lastError ? (
                   <AppText variant="small" color="dangerInk" numberOfLines={2} testID={`outbox-error-${m.id}`}>
                     {`Last error: ${m.lastError}`}
@@ -87,7 +87,7 @@ export function OutboxScreen() {
             <View style={billingStyles.cardTop}>
               <Badge label={STATUS_LABELS[m.status]} tone={STATUS_TONE[m.status]} testID={`outbox-status-${m.id}`} />
               <AppText variant="small" color={m.status === "failed" ? "ink" : "muted"}>
-                {KIND_LABELS[m.kind] ?? m.kind}
+                {mailKindLabel(m.kind)}
               </AppText>
             </View>
             <AppText variant="bodyStrong">{m.subject}</AppText>

@@ -20,14 +20,14 @@ import { usePayoutQuery, usePayoutsQuery, useReconcilePayoutMutation, type Payou
 import { userKeys, usersApi } from "../../api/users";
 import { useBakeryTimeZone } from "../../api/bakery";
 import { formatDateTime } from "../../format";
+import { payoutStatusLabel } from "../../../shared/billing";
 import { useIsWide } from "../../shell/useIsWide";
 import { BackLink, BillingTable, Figure, billingStyles, day, money } from "./parts";
 import { colors, radii, space } from "../../theme";
 
-const PAYOUT_STATUS: Record<string, string> = { paid: "Arrived", pending: "On its way", in_transit: "On its way", failed: "Failed", canceled: "Cancelled" };
 /** Fees and refunds take money off: shown with a minus, and zero as zero. */
 const minus = (cents: number, currency: string) => (cents ? money(-Math.abs(cents), currency) : money(0, currency));
-const arrival = (status: string, date: string) => (status === "paid" ? `Arrived ${day(date)}` : `${PAYOUT_STATUS[status] ?? status} · due ${day(date)}`);
+const arrival = (status: string, date: string) => (status === "paid" ? `Arrived ${day(date)}` : `${payoutStatusLabel(status)} · due ${day(date)}`);
 
 const TXN_TYPE: Record<string, string> = { charge: "Card payment", payment: "Card payment", refund: "Refund", adjustment: "Adjustment", stripe_fee: "Processor fee" };
 
@@ -66,7 +66,7 @@ export function PayoutsScreen() {
           columns={[
             { key: "arrival", label: "Arrival", flex: 1, render: (p) => day(p.arrivalDate) },
             { key: "id", label: "Bank reference", flex: 1.6, render: (p) => <AppText variant="small" color="muted" selectable>{p.id}</AppText> },
-            { key: "status", label: "Status", flex: 0.9, render: (p) => <Badge label={PAYOUT_STATUS[p.status] ?? p.status} tone={p.status === "failed" ? "danger" : "neutral"} /> },
+            { key: "status", label: "Status", flex: 0.9, render: (p) => <Badge label={payoutStatusLabel(p.status)} tone={p.status === "failed" ? "danger" : "neutral"} /> },
             { key: "amount", label: "Amount", flex: 1, align: "right", render: (p) => <AppText variant="bodyStrong" align="right">{money(p.amountCents, p.currency)}</AppText> },
             {
               key: "rec",

@@ -5,6 +5,7 @@ import { Badge, type BadgeTone } from "../../ui/Badge";
 import { AppText } from "../../ui/Text";
 import { TextLink } from "../../ui/TextLink";
 import { formatMoney } from "../../../shared/money";
+import { INVOICE_KIND_LABELS, INVOICE_STATUS_LABELS as SHARED_INVOICE_STATUS_LABELS, PAYMENT_METHOD_LABELS } from "../../../shared/billing";
 import type { InvoiceDto, InvoiceStatus, PaymentDto, CreditNoteDto } from "../../api/invoices";
 import { colors, layout, radii, space } from "../../theme";
 
@@ -27,13 +28,7 @@ export function percent(bp: number): string {
   return `${whole}${frac ? `.${String(frac).padStart(2, "0").replace(/0$/, "")}` : ""} %`;
 }
 
-export const INVOICE_STATUS_LABELS: Record<InvoiceStatus, string> = {
-  open: "Open",
-  paid: "Paid",
-  void: "Void",
-  partially_refunded: "Part refunded",
-  refunded: "Refunded",
-};
+export const INVOICE_STATUS_LABELS: Record<InvoiceStatus, string> = SHARED_INVOICE_STATUS_LABELS;
 
 const STATUS_TONE: Record<InvoiceStatus, BadgeTone> = { open: "amber", paid: "sage", void: "neutral", partially_refunded: "crust", refunded: "neutral" };
 
@@ -43,13 +38,7 @@ export function InvoiceStatusBadge({ invoice, testID }: { invoice: Pick<InvoiceD
   return <Badge label={INVOICE_STATUS_LABELS[invoice.status]} tone={STATUS_TONE[invoice.status]} testID={testID} />;
 }
 
-export const METHOD_LABELS: Record<PaymentDto["method"], string> = {
-  card: "Card",
-  bank_transfer: "Bank transfer",
-  cheque: "Cheque",
-  cash: "Cash",
-  other: "Other",
-};
+export const METHOD_LABELS: Record<PaymentDto["method"], string> = PAYMENT_METHOD_LABELS;
 
 export const DISPOSITION_LABELS: Record<CreditNoteDto["disposition"], string> = {
   applied: "Taken off this invoice",
@@ -57,7 +46,7 @@ export const DISPOSITION_LABELS: Record<CreditNoteDto["disposition"], string> = 
   carry: "Carried to the next invoice",
 };
 
-export const KIND_LABELS: Record<InvoiceDto["kind"], string> = { order: "Invoice", statement: "Weekly statement" };
+export const KIND_LABELS: Record<InvoiceDto["kind"], string> = INVOICE_KIND_LABELS;
 
 export interface TableColumn<T> {
   key: string;

@@ -12,7 +12,7 @@ import { Badge } from "../../ui/Badge";
 import { useBakeryQuery } from "../../api/bakery";
 import { useOrdersQuery } from "../../api/orders";
 import { addDays, dayHeading } from "../../ordering/dates";
-import { OrderStatusBadge, useMoney } from "../ordering/parts";
+import { OrderStatusBadge, buyerStatusLabel, useMoney } from "../ordering/parts";
 import { itemsLabel } from "./BuyerHome";
 import type { OrderDto } from "../../../shared/schemas/orders";
 import { colors, layout, radii, space } from "../../theme";
@@ -80,7 +80,7 @@ function OrderRow({ order: o, today }: { order: OrderDto; today: string }) {
     <Link href={`/buyer/order/${o.deliveryDate}`} asChild>
       <LinkPressable
         accessibilityRole="link"
-        accessibilityLabel={`${dayHeading(o.deliveryDate, today)}, ${o.status}, ${money(o.totalCents)}`}
+        accessibilityLabel={`${dayHeading(o.deliveryDate, today)}, ${buyerStatusLabel(o.status)}, ${money(o.totalCents)}`}
         testID={`history-order-${o.id}`}
         style={StyleSheet.flatten([styles.row, o.status === "cancelled" && styles.quiet])}
         highlightStyle={styles.hover}

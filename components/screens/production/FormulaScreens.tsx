@@ -291,7 +291,7 @@ export function FormulaReadOnly({ formula: f }: { formula: FormulaDto }) {
             <View style={styles.flex}>
               <AppText variant="bodyStrong">{l.name}</AppText>
               <AppText variant="caption" color="muted">
-                {KIND_LABEL[l.kind] ?? l.kind}
+                {KIND_LABEL[l.kind] ?? "Other"}
               </AppText>
             </View>
             <AppText variant="heading">{formatPercent(l.percent, 2)}</AppText>
