@@ -93,7 +93,7 @@ export function dayCautions(day: CautionDay, units: Units | UnitSystem): Caution
     });
     const head = parts.length ? `Today's products carry ${list(parts)}.` : "";
     const missing = unknown ? ` ${formatCount(unknown, "product has", "products have")} no allergen list on this plan: check their labels.` : "";
-    out.push({ key: "allergens", step: "divide", title: "Allergens today", text: `${head}${missing} Keep allergen-free work apart in time or space, clean benches, tools and trays between products, keep toppings in closed, labelled containers, and keep a label with every rack.`.trim() });
+    out.push({ key: "allergens", step: "divide", title: "Allergens today", text: `${head}${missing} Keep allergen-free work apart in time or space, clean benches, tools and trays between products, keep toppings in closed, labeled containers, and keep a label with every rack.`.trim() });
   }
 
   // The paste: each formula's own cook-to temperature; steam from the pot; cooling and holding when made ahead.
@@ -164,7 +164,7 @@ export function dayCautions(day: CautionDay, units: Units | UnitSystem): Caution
       key: "internal",
       step: "bake",
       title: "Internal temperature: record it",
-      text: `Probe the centre of one piece from every oven load and record the reading, the time and your initials: ${list(targets.map((d) => `${d.name} is done at ${t(d.targetInternalC!)} or above`))}. A load below it goes back in.`,
+      text: `Probe the center of one piece from every oven load and record the reading, the time and your initials: ${list(targets.map((d) => `${d.name} is done at ${t(d.targetInternalC!)} or above`))}. A load below it goes back in.`,
     });
   }
 

@@ -122,7 +122,7 @@ export function formulaFigures(f: Pick<FormulaSpec, "lines" | "paste">, ingredie
  * paste to about 60–70 °C (65 °C is usual), so below 60 °C is refused. Common practice, no single source.
  */
 export const PASTE_MIN_COOK_C = 60;
-export const PASTE_COOK_MESSAGE = "Cook the paste to 60–100 °C: below about 60 °C the wheat starch does not gelatinise and the paste does not set (about 65 °C is usual).";
+export const PASTE_COOK_MESSAGE = "Cook the paste to 60–100 °C: below about 60 °C the wheat starch does not gelatinize and the paste does not set (about 65 °C is usual).";
 
 /**
  * The friction factor is in °C. Common practice, no single source: about 1–3 °C by hand and roughly 5–16 °C

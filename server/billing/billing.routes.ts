@@ -83,7 +83,7 @@ export function invoiceRoutes(ctx: AppContext): Router {
   });
   r.post("/:id/payments", allow(...OFFICE), async (req, res) => {
     const { id } = parse(idParam, req.params);
-    const input = parse(z.object({ amountCents: money, method: z.enum(["bank_transfer", "cheque", "cash", "other"], { errorMap: () => ({ message: "Choose bank transfer, cheque, cash or other." }) }), reference: z.string().trim().min(1, "Enter the transfer or cheque reference.").max(120), receivedOn: dateSchema }), req.body);
+    const input = parse(z.object({ amountCents: money, method: z.enum(["bank_transfer", "cheque", "cash", "other"], { errorMap: () => ({ message: "Choose bank transfer, check, cash or other." }) }), reference: z.string().trim().min(1, "Enter the transfer reference or check number.").max(120), receivedOn: dateSchema }), req.body);
     res.status(201).json({ payment: await payments.recordManualPaymentAndExpire(ctx, currentUser(req), id, input) });
   });
   r.post("/:id/overpayment-refund", allow(...OFFICE), async (req, res) => {

@@ -71,7 +71,7 @@ export function renderInvoicePdf(d: Detail & { bakery: Bakery; account: Customer
   doc.moveDown(1.2).font("Helvetica-Bold").fontSize(11).text("How to pay");
   doc.font("Helvetica").fontSize(10).fillColor(INK)
     .text(account.paymentTerms === "card" ? "Pay by card from Panwise: open the invoice and choose Pay by card." : `Pay by ${date(inv.dueDate)}.`, { width })
-    .text(bakery.paymentInstructions || "Bank transfer or cheque: quote the invoice number.", { width });
+    .text(bakery.paymentInstructions || "Bank transfer or check: quote the invoice number.", { width });
   doc.moveDown(0.6).fillColor(MUTED).fontSize(8.5).text("Amounts in " + inv.currency + ". Sales tax is worked out once on the subtotal and rounded half up to the cent.", { width });
   doc.end();
   return done;

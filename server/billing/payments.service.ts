@@ -438,7 +438,7 @@ async function creditNoteAndRefund(ctx: AppContext, invoiceId: number, input: { 
   return ctx.dataSource.transaction((m) => createCreditNote(ctx, m, inv, lines, input.reason, "carry"));
 }
 
-/** A manual payment (transfer, cheque, cash), then any open card page that no longer matches what is owed is expired. */
+/** A manual payment (transfer, check, cash), then any open card page that no longer matches what is owed is expired. */
 export async function recordManualPaymentAndExpire(ctx: AppContext, actor: SessionUser, invoiceId: number, input: Parameters<typeof recordManualPayment>[3]) {
   const payment = await recordManualPayment(ctx, actor, invoiceId, input);
   await expireStaleSessions(ctx, invoiceId);

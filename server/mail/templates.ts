@@ -70,13 +70,13 @@ export function orderMail(p: {
   const money = (c: number) => new Intl.NumberFormat("en-US", { style: "currency", currency: p.currency }).format(c / 100);
   const day = new Intl.DateTimeFormat("en-US", { weekday: "long", day: "numeric", month: "long", timeZone: "UTC" }).format(new Date(`${order.deliveryDate}T12:00:00Z`));
   const cutoff = new Intl.DateTimeFormat("en-US", { weekday: "short", day: "numeric", month: "short", hour: "numeric", minute: "2-digit", timeZone: p.timeZone, timeZoneName: "short" }).format(new Date(order.cutoffAt));
-  const verb = { placed: "Order received", changed: "Order changed", cancelled: "Order cancelled" }[p.kind];
+  const verb = { placed: "Order placed", changed: "Order changed", cancelled: "Order canceled" }[p.kind];
   // Each line names its allergens (the product's declaration: formula, components and its own), as US FALCPA (as amended
   // by the FASTER Act of 2021) and EU Regulation 1169/2011 Annex II list them.
   const lines = order.lines.map((l) => `${l.quantity} × ${l.productName} (${l.saleUnit}) — ${money(l.lineTotalCents)}. ${allergenStatement(l.allergens, l.mayContain)}`);
   const paras =
     p.kind === "cancelled"
-      ? [`Your order for ${day} (${order.accountName}) is cancelled. Nothing will be delivered that day.`]
+      ? [`Your order for ${day} (${order.accountName}) is canceled. Nothing will be delivered that day.`]
       : [
           `${order.accountName}, delivery ${day}:`,
           ...lines,
@@ -92,7 +92,7 @@ export function invoiceMail(p: { bakeryName: string; currency: string; number: s
   const paras = [
     `Invoice ${p.number} for ${money(p.totalCents)} is attached as a PDF.`,
     p.dueCents > 0 ? `${money(p.dueCents)} is due by ${due}.` : "Nothing is due: it is settled.",
-    p.card ? "You can pay it by card in Panwise." : p.instructions || "Please pay by bank transfer or cheque, quoting the invoice number.",
+    p.card ? "You can pay it by card in Panwise." : p.instructions || "Please pay by bank transfer or check, quoting the invoice number.",
   ];
   return { subject: `Invoice ${p.number} from ${p.bakeryName}`, ...layout(p.bakeryName, `Invoice ${p.number}`, paras, { label: p.card && p.dueCents > 0 ? "View and pay" : "View the invoice", url: p.url }) };
 }

@@ -9,7 +9,7 @@ export const ORDER_STATUS_LABELS: Record<OrderStatus, string> = {
   open: "Open",
   locked: "Locked for baking",
   delivered: "Delivered",
-  cancelled: "Cancelled",
+  cancelled: "Canceled",
 };
 
 /** Most units on one line: the same ceiling as a product's own maximum (shared/schemas/catalog.ts). */

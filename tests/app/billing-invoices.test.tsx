@@ -179,7 +179,7 @@ describe("invoice detail", () => {
     fireEvent.press(screen.getByTestId("payment-submit"));
     expect(screen.getByTestId("payment-amount-error")).toHaveTextContent("Enter an amount like 12.50.");
     expect(screen.getByTestId("payment-method-error")).toHaveTextContent("Choose how it was paid.");
-    expect(screen.getByTestId("payment-reference-error")).toHaveTextContent("Enter the transfer or cheque reference.");
+    expect(screen.getByTestId("payment-reference-error")).toHaveTextContent("Enter the transfer reference or check number.");
     expect(screen.getByTestId("payment-received-on-error")).toHaveTextContent("Write the date as YYYY-MM-DD.");
 
     fireEvent.changeText(screen.getByTestId("payment-amount"), "60.00");

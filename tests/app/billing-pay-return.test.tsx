@@ -53,7 +53,7 @@ describe("payment return page", () => {
     signedInAs(BUYER);
     const api = mockApi({ ...sessionRoutes(BUYER), "GET /api/invoices/:id": { body: OPEN }, "POST /api/invoices/:id/checkout": { status: 201, body: { url: "http://127.0.0.1:12111/pay/cs_test_2" } } });
     renderApp("/pay/return?invoice=41&cancelled=1");
-    expect(await screen.findByTestId("pay-cancelled")).toHaveTextContent("The payment was cancelled");
+    expect(await screen.findByTestId("pay-cancelled")).toHaveTextContent("The payment was canceled");
     expect(screen.queryByTestId("pay-processing")).toBeNull();
     await tick(5000);
     expect(api.callsTo("GET", "/api/invoices/41")).toHaveLength(1);

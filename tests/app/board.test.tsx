@@ -67,7 +67,7 @@ describe("orders board", () => {
     const api = mockApi({ ...routes(OWNER), "POST /api/standing-orders/materialise": { body: { result: { created: 3, updated: 1, cancelled: 0 } } } });
     renderApp("/office/orders");
     fireEvent.press(await screen.findByTestId("materialise"));
-    expect(await screen.findByTestId("materialise-result")).toHaveTextContent(/3 new, 1 updated, 0 cancelled/);
+    expect(await screen.findByTestId("materialise-result")).toHaveTextContent(/3 new, 1 updated, 0 canceled/);
     expect(api.callsTo("POST", "/api/standing-orders/materialise")).toHaveLength(1);
   });
 

@@ -77,7 +77,7 @@ describe("order history", () => {
     expect(await screen.findByTestId("history-order-501")).toHaveTextContent(/Thu 4 Dec.*Order placed.*3 items · \$54\.00.*Standing order.*Changed by hand/);
     expect(screen.queryByTestId("history-order-400")).toBeNull();
     fireEvent.press(screen.getByTestId("history-show-past"));
-    expect(screen.getByTestId("history-order-401-status")).toHaveTextContent(/Cancelled/);
+    expect(screen.getByTestId("history-order-401-status")).toHaveTextContent(/Canceled/);
     expect(screen.getByTestId("history-order-400-status")).toHaveTextContent(/Delivered/);
   });
 });

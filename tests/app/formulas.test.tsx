@@ -110,7 +110,7 @@ describe("formulas", () => {
     const api = mockApi(routes());
     renderApp("/bake/formulas/1");
     fireEvent.changeText(await screen.findByTestId("paste-cook"), "40");
-    expect(screen.getByTestId("paste-cook-error")).toHaveTextContent("Cook the paste to 60–100 °C: below about 60 °C the wheat starch does not gelatinise and the paste does not set (about 65 °C is usual).");
+    expect(screen.getByTestId("paste-cook-error")).toHaveTextContent("Cook the paste to 60–100 °C: below about 60 °C the wheat starch does not gelatinize and the paste does not set (about 65 °C is usual).");
     fireEvent.press(screen.getByTestId("formula-save"));
     expect(api.callsTo("PUT", "/api/formulas/1")).toHaveLength(0);
     fireEvent.changeText(screen.getByTestId("paste-cook"), "65");

@@ -150,7 +150,7 @@ describe("order screen for a date", () => {
     fireEvent.press(screen.getByTestId("order-cancel"));
     fireEvent.press(screen.getByTestId("order-cancel-confirm"));
     await waitFor(() => expect(api.callsTo("DELETE", "/api/orders/501")).toHaveLength(1));
-    expect(await screen.findByTestId("order-notice")).toHaveTextContent(/is cancelled/);
+    expect(await screen.findByTestId("order-notice")).toHaveTextContent(/is canceled/);
   });
 
   it("opens the existing order when the server says one is already there", async () => {

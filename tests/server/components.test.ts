@@ -110,7 +110,7 @@ describe("seeded allergens", () => {
     expect(res.status).toBe(201);
     const line = res.body.order.lines.find((l: { productId: number }) => l.productId === sesame.id);
     expect(line.allergens).toEqual(["gluten", "wheat", "egg", "milk", "sesame"]);
-    const mail = await waitForMail(t, "buyer@northpier.test", { subject: /Order received/ });
+    const mail = await waitForMail(t, "buyer@northpier.test", { subject: /Order placed/ });
     expect(mail.text).toMatch(/3 × Sesame brioche buns \(pack of 8 buns\) — \$[\d.]+\. Contains: Cereals containing gluten, Wheat, Egg, Milk, Sesame\./);
     expect(mail.text).toMatch(/2 × Milk-bread slider buns .*Contains: Cereals containing gluten, Wheat, Egg, Milk\. May contain: Sesame\./);
     expect(mail.html).toContain("Egg, Milk, Sesame.");

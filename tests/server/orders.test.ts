@@ -45,7 +45,7 @@ describe("placing an order", () => {
       cutoffAt: "2026-06-10T14:00:00.000-05:00", source: "one_off",
     });
     expect(res.body.order.lines[0]).toMatchObject({ productName: "Dinner rolls", quantity: 3, unitPriceCents: 1800, lineTotalCents: 5400, allergens: ["gluten", "wheat", "milk"] });
-    const mail = await waitForMail(t, buyerEmail, { subject: /Order received/ });
+    const mail = await waitForMail(t, buyerEmail, { subject: /Order placed/ });
     expect(mail.text).toContain("3 × Dinner rolls");
   });
 

@@ -93,7 +93,7 @@ describe("formula inputs", () => {
     const f = await milkBread();
     const res = await t.http().put(`/api/formulas/${f.id}`).set(auth(token)).send(body(f, { paste: { ...f.paste, cookToC: 40 } }));
     expect(res.status).toBe(400);
-    expect(res.body.error.fields["paste.cookToC"]).toMatch(/60–100 °C: below about 60 °C the wheat starch does not gelatinise/);
+    expect(res.body.error.fields["paste.cookToC"]).toMatch(/60–100 °C: below about 60 °C the wheat starch does not gelatinize/);
   });
 
   it("accepts a friction factor of 26 (the baker decides; the form warns), since it is a valid °C value", async () => {

@@ -243,7 +243,7 @@ describe("formula checks", () => {
 
   it("refuses a paste cooked below about 60 °C, where wheat starch does not gelatinise (common practice: 60–70 °C)", () => {
     const withCook = (cookToC: number) => validateFormula({ lossPercent: 2, paste: { flourIngredientId: 1, liquidIngredientId: 5, flourPercent: 5, liquidRatio: 5, cookToC }, lines: [{ ingredientId: 1, percent: 100 }, { ingredientId: 5, percent: 60 }] }, lib)["paste.cookToC"];
-    expect(withCook(40)).toMatch(/60–100 °C.*gelatinise/);
+    expect(withCook(40)).toMatch(/60–100 °C.*gelatinize/);
     expect(withCook(59.9)).toBeDefined();
     expect(withCook(60)).toBeUndefined();
     expect(withCook(65)).toBeUndefined();

@@ -311,7 +311,7 @@ function EmailsCard({ detail }: { detail: InvoiceDetailDto }) {
   );
 }
 
-/** For statements: the bakery's own transfer or cheque details. */
+/** For statements: the bakery's own transfer or check details. */
 function OtherWaysCard() {
   const settings = useBillingSettingsQuery();
   const text = settings.data?.paymentInstructions;

@@ -35,7 +35,7 @@ export function checkPayment(values: PaymentValues, dueCents: number, currency: 
   else if (cents <= 0) fields.amountCents = "The amount must be more than 0.";
   else if (cents > dueCents) fields.amountCents = `At most ${money(dueCents, currency)}, what is still owed.`;
   if (!values.method) fields.method = "Choose how it was paid.";
-  if (!values.reference.trim()) fields.reference = "Enter the transfer or cheque reference.";
+  if (!values.reference.trim()) fields.reference = "Enter the transfer reference or check number.";
   else if (values.reference.trim().length > 120) fields.reference = "At most 120 characters.";
   if (!cleanDate(values.receivedOn)) fields.receivedOn = "Write the date as YYYY-MM-DD.";
   if (Object.keys(fields).length || cents === null || !values.method) return { ok: false, fields };
@@ -44,7 +44,7 @@ export function checkPayment(values: PaymentValues, dueCents: number, currency: 
 
 const PAYMENT_FIELDS = ["amountCents", "method", "reference", "receivedOn"] as const;
 
-/** The office records money that came in another way than by card: a transfer, a cheque, cash. */
+/** The office records money that came in another way than by card: a transfer, a check, cash. */
 export function RecordPaymentCard({ detail }: { detail: InvoiceDetailDto }) {
   const inv = detail.invoice;
   const today = useBakeryQuery().data?.today ?? "";
@@ -99,7 +99,7 @@ export function RecordPaymentCard({ detail }: { detail: InvoiceDetailDto }) {
       {saved ? <Notice message={saved} testID="payment-saved" /> : null}
       {!open ? (
         <>
-          <AppText color="muted">A bank transfer, cheque or cash that reached the bakery. Card payments are recorded on their own.</AppText>
+          <AppText color="muted">A bank transfer, check or cash that reached the bakery. Card payments are recorded on their own.</AppText>
           <Button label="Record a payment" icon="plus" variant="secondary" onPress={start} testID="record-payment-open" />
         </>
       ) : (
@@ -123,7 +123,7 @@ export function RecordPaymentCard({ detail }: { detail: InvoiceDetailDto }) {
             testID="payment-method"
             choices={PAYMENT_METHODS.map((m) => ({ value: m, label: METHOD_LABELS[m] }))}
           />
-          <TextField label="Reference" hint="The transfer reference or cheque number." value={values.reference} onChangeText={(t) => set({ reference: t })} error={fields.reference} testID="payment-reference" maxLength={120} autoCorrect={false} />
+          <TextField label="Reference" hint="The transfer reference or check number." value={values.reference} onChangeText={(t) => set({ reference: t })} error={fields.reference} testID="payment-reference" maxLength={120} autoCorrect={false} />
           <TextField label="Received on" placeholder="YYYY-MM-DD" value={values.receivedOn} onChangeText={(t) => set({ receivedOn: t })} error={fields.receivedOn} testID="payment-received-on" inputMode="numeric" maxLength={10} />
           <View style={billingStyles.buttons}>
             <Button label="Save payment" icon="check" busy={mutation.isPending} onPress={submit} testID="payment-submit" />

@@ -150,7 +150,7 @@ function PayReturnBody({ invoiceId, cancelled, office }: PayReturnProps & { offi
         <View style={[styles.banner, styles.bannerCalm]}>
           <Feather name="x-circle" size={26} color={colors.crustInk} />
           <Heading level={2} color="crustInk" testID="pay-cancelled">
-            The payment was cancelled
+            The payment was canceled
           </Heading>
         </View>
         <AppText>{`Nothing was charged. ${money(inv.amountDueCents, inv.currency)} is still owed on ${inv.number}.`}</AppText>

@@ -135,7 +135,7 @@ function OfficeActions({ date, isOwner }: { date: string; isOwner: boolean }) {
           message={
             r.created + r.updated + r.cancelled === 0
               ? "Standing orders checked: every order was already up to date."
-              : `Standing orders made: ${r.created} new, ${r.updated} updated, ${r.cancelled} cancelled.`
+              : `Standing orders made: ${r.created} new, ${r.updated} updated, ${r.cancelled} canceled.`
           }
         />
       ) : null}

@@ -366,7 +366,7 @@ function OrderForm({ date, day, products, existing, minimumCents, settings, time
     cancel.mutate(undefined, {
       onSuccess: () => {
         dropDraft();
-        onNotice({ text: `Your order for ${formatDayLong(date)} is cancelled. You can still order for this date until the cut-off.`, tone: "info" });
+        onNotice({ text: `Your order for ${formatDayLong(date)} is canceled. You can still order for this date until the cut-off.`, tone: "info" });
       },
       onError: (err) => {
         setConfirmCancel(false);

@@ -208,7 +208,7 @@ export function FormulaEditor({ initial, ingredients, infos, submitLabel, busy, 
               <TextField label="Liquid : flour" hint="5 means 5 g liquid per 1 g flour." value={v.paste.liquidRatio} onChangeText={(t) => update({ paste: { ...v.paste, liquidRatio: t } })} error={fields["paste.liquidRatio"]} inputMode="decimal" keyboardType="decimal-pad" testID="paste-ratio" />
             </View>
             <View style={styles.cellSmall}>
-              <TextField label="Cook to (°C)" hint={fahrenheitHint(v.paste.cookToC) ?? "60–70 °C, usually 65 °C: the starch must gelatinise."} value={v.paste.cookToC} onChangeText={(t) => update({ paste: { ...v.paste, cookToC: t } })} error={fields["paste.cookToC"]} inputMode="decimal" keyboardType="decimal-pad" testID="paste-cook" />
+              <TextField label="Cook to (°C)" hint={fahrenheitHint(v.paste.cookToC) ?? "60–70 °C, usually 65 °C: the starch must gelatinize."} value={v.paste.cookToC} onChangeText={(t) => update({ paste: { ...v.paste, cookToC: t } })} error={fields["paste.cookToC"]} inputMode="decimal" keyboardType="decimal-pad" testID="paste-cook" />
             </View>
           </View>
         </>

@@ -15,7 +15,7 @@ const MIN_C = 20;
 const MAX_C = 120;
 
 /**
- * The internal temperature reached in each oven load, probed in the centre of one piece and recorded here (with
+ * The internal temperature reached in each oven load, probed in the center of one piece and recorded here (with
  * the time, by the server's clock), beside the target of the load's dough. A reading below the target says so.
  */
 export function InternalTempsCard({ plan, units }: { plan: PlanView; units: Units }) {
@@ -25,7 +25,7 @@ export function InternalTempsCard({ plan, units }: { plan: PlanView; units: Unit
   return (
     <Card title="Internal temperatures" testID="internal-temps">
       <AppText variant="small" color="muted">
-        Probe the centre of one piece from every oven load and record what it reached.
+        Probe the center of one piece from every oven load and record what it reached.
       </AppText>
       <View style={styles.list}>
         {loads.map((l) => {
