@@ -6,7 +6,7 @@ export const ROLE_LABELS: Record<Role, string> = {
   owner: "Owner",
   baker: "Baker",
   bookkeeper: "Bookkeeper",
-  buyer: "Café buyer",
+  buyer: "Wholesale buyer",
 };
 
 /** Which group of screens a role lands in after sign-in. */

@@ -9,6 +9,8 @@ export interface AgingRowDto extends AgingAmounts {
   accountId: number;
   accountName: string;
   onHold: boolean;
+  /** The hold is the automatic credit hold (overdue invoices), not a pause by hand. */
+  creditHold: boolean;
 }
 
 export interface AgingDto {

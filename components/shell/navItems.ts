@@ -47,7 +47,7 @@ export const NAV: Record<HomeArea, NavItem[]> = {
 };
 
 export const AREA_LABEL: Record<HomeArea, string> = {
-  buyer: "Café ordering",
+  buyer: "Wholesale ordering",
   baker: "Bake day",
   office: "Office",
 };

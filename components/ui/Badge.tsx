@@ -2,7 +2,7 @@ import React from "react";
 import { StyleSheet, View } from "react-native";
 import { colors, radii, space, type ColorName } from "../theme";
 import { AppText } from "./Text";
-import { ACCOUNT_STATUS_LABELS, type AccountStatus } from "../../shared/schemas/accounts";
+import { accountStatusLabel, type AccountStatus } from "../../shared/schemas/accounts";
 import { ROLE_LABELS, type Role } from "../../shared/roles";
 
 export type BadgeTone = "sage" | "amber" | "danger" | "crust" | "neutral";
@@ -28,8 +28,9 @@ export function Badge({ label, tone = "neutral", testID }: { label: string; tone
 
 const statusTone: Record<AccountStatus, BadgeTone> = { active: "sage", on_hold: "amber", closed: "danger" };
 
-export function StatusBadge({ status, testID }: { status: AccountStatus; testID?: string }) {
-  return <Badge label={ACCOUNT_STATUS_LABELS[status]} tone={statusTone[status]} testID={testID} />;
+/** An account's status; a hold says whether the bakery paused it or overdue invoices put it on credit hold. */
+export function StatusBadge({ status, creditHold, testID }: { status: AccountStatus; creditHold?: boolean; testID?: string }) {
+  return <Badge label={accountStatusLabel({ status, creditHold })} tone={statusTone[status]} testID={testID} />;
 }
 
 export function RoleBadge({ role }: { role: Role }) {

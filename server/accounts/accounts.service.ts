@@ -69,5 +69,6 @@ export async function accountCounts(ctx: AppContext) {
     .select("a.status", "status").addSelect("COUNT(*)", "n").groupBy("a.status").getRawMany();
   const by = Object.fromEntries(rows.map((r) => [r.status, Number(r.n)])) as Record<string, number>;
   const active = by.active ?? 0, onHold = by.on_hold ?? 0, closed = by.closed ?? 0;
-  return { total: active + onHold + closed, active, onHold, closed };
+  const creditHold = await ctx.dataSource.getRepository(CustomerAccount).countBy({ status: "on_hold", creditHold: true });
+  return { total: active + onHold + closed, active, onHold, paused: onHold - creditHold, creditHold, closed };
 }

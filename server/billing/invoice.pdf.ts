@@ -24,7 +24,7 @@ export function renderInvoicePdf(d: Detail & { bakery: Bakery; account: Customer
 
   doc.font("Helvetica-Bold").fontSize(18).fillColor(CRUST).text(bakery.name);
   doc.font("Helvetica").fontSize(10).fillColor(MUTED).text(bakery.address).text([bakery.phone, bakery.email].filter(Boolean).join(" · "));
-  doc.moveDown(1).fillColor(INK).font("Helvetica-Bold").fontSize(22).text(inv.kind === "statement" ? "Statement invoice" : "Invoice");
+  doc.moveDown(1).fillColor(INK).font("Helvetica-Bold").fontSize(22).text(inv.kind === "statement" ? "Weekly statement" : "Invoice");
   doc.font("Helvetica").fontSize(11)
     .text(`Number: ${inv.number}`)
     .text(`Issued: ${date(inv.issueDate)}    Due: ${date(inv.dueDate)}`)

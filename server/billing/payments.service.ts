@@ -579,7 +579,7 @@ export async function aging(ctx: AppContext) {
     r.total += due;
     rows.set(inv.accountId, r);
   }
-  const list = [...rows].map(([accountId, b]) => ({ accountId, accountName: accounts.get(accountId)?.businessName ?? "", onHold: accounts.get(accountId)?.status === "on_hold", ...b })).sort((a, b) => b.total - a.total);
+  const list = [...rows].map(([accountId, b]) => ({ accountId, accountName: accounts.get(accountId)?.businessName ?? "", onHold: accounts.get(accountId)?.status === "on_hold", creditHold: accounts.get(accountId)?.status === "on_hold" && !!accounts.get(accountId)?.creditHold, ...b })).sort((a, b) => b.total - a.total);
   const totals = Object.fromEntries([...AGING_BUCKETS, "total"].map((k) => [k, list.reduce((s, r) => s + (r as unknown as Record<string, number>)[k], 0)]));
   return { today, buckets: AGING_BUCKETS, accounts: list, totals };
 }

@@ -89,10 +89,10 @@ export async function listOrders(ctx: AppContext, actor: SessionUser, q: { from?
 
 function refuseIfAccountBlocked(account: CustomerAccount, bakery: { name: string; phone: string; email: string }) {
   if (account.status === "on_hold" && account.creditHold) {
-    throw new HttpError(403, "account_on_hold", `${account.businessName} has overdue invoices, so new orders and changes are paused. Pay them under Invoices and ordering opens again at once, or call ${bakery.name} on ${bakery.phone || bakery.email}.`, undefined, { creditHold: true });
+    throw new HttpError(403, "account_on_hold", `${account.businessName} is on credit hold: it has overdue invoices, so new orders and changes wait. Pay them under Invoices and ordering opens again at once, or call ${bakery.name} on ${bakery.phone || bakery.email}.`, undefined, { creditHold: true });
   }
   if (account.status === "on_hold") {
-    throw new HttpError(403, "account_on_hold", `${account.businessName} is on hold, so new orders and changes are paused. Please call ${bakery.name} on ${bakery.phone || bakery.email} to lift the hold.`);
+    throw new HttpError(403, "account_on_hold", `${account.businessName} is paused by the bakery, so new orders and changes wait. Please call ${bakery.name} on ${bakery.phone || bakery.email} to start it again.`);
   }
   if (account.status === "closed") throw new HttpError(403, "account_closed", `${account.businessName} is closed. Ask ${bakery.name} to reopen it.`);
 }

@@ -64,7 +64,7 @@ export function ruleStart(startDate: string, intervalWeeks: number, today: strin
 
 export async function putStandingOrder(ctx: AppContext, actor: SessionUser, input: ReturnType<typeof import("../../shared/schemas/orders").standingOrderSchema.parse>): Promise<StandingOrderDto> {
   const account = await resolveAccount(ctx, actor, input.accountId);
-  if (account.status !== "active") throw new HttpError(403, account.status === "on_hold" ? "account_on_hold" : "account_closed", `${account.businessName} is ${account.status === "on_hold" ? "on hold" : "closed"}; the standing order can't be changed now. Please call the bakery.`);
+  if (account.status !== "active") throw new HttpError(403, account.status === "on_hold" ? "account_on_hold" : "account_closed", `${account.businessName} is ${account.status === "on_hold" ? (account.creditHold ? "on credit hold (an invoice is overdue; paying it lifts the hold)" : "paused by the bakery") : "closed"}; the standing order can't be changed now. Please call the bakery.`);
   const productIds = [...new Set(input.lines.map((l) => l.productId))];
   const products = new Map((await ctx.dataSource.getRepository(Product).findBy({ id: In(productIds.concat([0])) })).map((p) => [p.id, p]));
   const fields: Record<string, string> = {};

@@ -91,7 +91,7 @@ export function renderPlanPdf(plan: PlanDto & { bakeryName: string; timeZone: st
   // ---- sheet -------------------------------------------------------------------------------
   para(plan.bakeryName.toUpperCase(), { font: "Helvetica-Bold", size: 11, color: CRUST, spacing: 1 });
   para(`Bake day: ${day}`, { font: "Helvetica-Bold", size: 24 });
-  const frozen = plan.frozen ? `frozen ${plan.frozenAt ? DateTime.fromISO(plan.frozenAt).setZone(plan.timeZone).toFormat("ccc d LLL HH:mm") : ""}` : "not frozen yet";
+  const frozen = plan.frozen ? `set at the cut-off ${plan.frozenAt ? DateTime.fromISO(plan.frozenAt).setZone(plan.timeZone).toFormat("ccc d LLL HH:mm") : ""}` : "not set yet: follows the orders until the cut-off";
   para(`Leaves at ${time(plan.inputs.dispatchAt)} · ${frozen} · ${plan.final ? "final" : "NOT FINAL: orders may still change until the cut-off"}`, { size: 11, color: MUTED });
   const supply = [plan.inputs.tapC !== undefined ? `tap water ${u.temp(plan.inputs.tapC)}` : "", plan.inputs.milkC !== undefined ? `milk ${u.temp(plan.inputs.milkC)}` : ""].filter(Boolean).join(" · ");
   para(

@@ -5,9 +5,19 @@ export const ACCOUNT_STATUSES = ["active", "on_hold", "closed"] as const;
 export type AccountStatus = (typeof ACCOUNT_STATUSES)[number];
 export const ACCOUNT_STATUS_LABELS: Record<AccountStatus, string> = {
   active: "Active",
-  on_hold: "On hold",
+  on_hold: "Paused",
   closed: "Closed",
 };
+
+/**
+ * Two kinds of hold share the stored status `on_hold`: the owner pausing an account by hand ("Paused"),
+ * and the automatic credit hold when an invoice is overdue (`creditHold`, lifted by paying it).
+ * People always read which one it is.
+ */
+export const CREDIT_HOLD_LABEL = "Credit hold";
+export function accountStatusLabel(a: { status: AccountStatus; creditHold?: boolean }): string {
+  return a.status === "on_hold" && a.creditHold ? CREDIT_HOLD_LABEL : ACCOUNT_STATUS_LABELS[a.status];
+}
 
 /**
  * Control characters (Unicode general category Cc: U+0000–U+001F, U+007F–U+009F) and the line and

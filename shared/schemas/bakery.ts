@@ -14,5 +14,6 @@ export interface BakeryDto {
 
 export interface OfficeSummaryDto {
   users: { total: number; active: number; disabled: number; pendingInvitations: number };
-  accounts: { total: number; active: number; onHold: number; closed: number };
+  /** onHold = paused (by hand) + creditHold (overdue invoices). */
+  accounts: { total: number; active: number; onHold: number; paused: number; creditHold: number; closed: number };
 }

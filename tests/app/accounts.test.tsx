@@ -6,6 +6,7 @@ const ACCOUNTS = [
   account(),
   account({ id: 12, businessName: "Juniper Table", status: "on_hold", contactName: "Declan Reyes", buyerCount: 2 }),
   account({ id: 13, businessName: "North Pier Kiosk", status: "closed", buyerCount: 0 }),
+  account({ id: 14, businessName: "Lantern Deli", status: "on_hold", creditHold: true, buyerCount: 1 }),
 ];
 
 const original = Dimensions.get("window");
@@ -22,9 +23,12 @@ describe("accounts list", () => {
     mockApi({ ...sessionRoutes(OWNER), "GET /api/accounts": { body: { accounts: ACCOUNTS } } });
     renderApp("/office/accounts");
     expect(await screen.findByTestId("account-row-11")).toHaveTextContent(/Tidewater Café/);
-    expect(screen.getByTestId("account-row-12")).toHaveTextContent(/Juniper Table.*On hold/);
+    // A pause by hand reads "Paused"; the automatic hold for overdue invoices reads "Credit hold" (issue 10).
+    expect(screen.getByTestId("account-row-12")).toHaveTextContent(/Juniper Table.*Paused/);
+    expect(screen.getByTestId("account-row-14")).toHaveTextContent(/Lantern Deli.*Credit hold/);
+    expect(screen.getByTestId("account-row-14")).not.toHaveTextContent(/Paused/);
     expect(screen.getByTestId("account-row-13")).toHaveTextContent(/Closed/);
-    expect(screen.getByTestId("accounts-count")).toHaveTextContent("3 accounts");
+    expect(screen.getByTestId("accounts-count")).toHaveTextContent("4 accounts");
     expect(screen.getByText("New account")).toBeOnTheScreen();
   });
 

@@ -95,6 +95,8 @@ describe("bake day numbers", () => {
     expect(screen.getByTestId("plan-warnings")).toHaveTextContent(/Milk bread, mix 2: liquid at 27 °F — 27 °F is colder than the liquid can be/);
     expect(await screen.findByTestId("setting-mixer")).toHaveTextContent(/Spiral mixer, 44 lb; 60-qt planetary, 26 lb/);
     const cautions = screen.getByTestId("cautions");
+    // One name on the screen and on the production PDF (server/production/plan.pdf.ts heading "Cautions"; issue 10).
+    expect(cautions).toHaveTextContent(/^Cautions/);
     expect(cautions).not.toHaveTextContent(/°C/);
     expect(screen.getByTestId("caution-paste-1")).toHaveTextContent(/cooked to 149 °F/);
     expect(screen.getByTestId("caution-paste-ahead")).toHaveTextContent(/from 135 °F to 70 °F within 2 hours and to 41 °F or below within 6 hours/);

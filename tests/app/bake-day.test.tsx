@@ -59,11 +59,11 @@ describe("bake day", () => {
     expect(screen.getByTestId("tab-bake")).toBeOnTheScreen();
   });
 
-  it("says when the plan is final and when it was frozen", async () => {
+  it("says when the plan is final and when it was set at the cut-off", async () => {
     mockApi(routes(planView({ final: true, frozen: true, frozenAt: "2025-12-02T20:00:05.000Z" })));
     renderApp("/bake");
     expect(await screen.findByTestId("plan-status-text")).toHaveTextContent("Final — orders are locked for this day.");
-    expect(screen.getByTestId("plan-frozen-at")).toHaveTextContent("Frozen at Tue 2 Dec, 14:00 CST.");
+    expect(screen.getByTestId("plan-frozen-at")).toHaveTextContent("Plan set at the cut-off and kept; worked out Tue 2 Dec, 14:00 CST.");
   });
 
   it("keeps the paste apart from the final mix on each weigh-out card, with the liquid temperature", async () => {
@@ -256,12 +256,12 @@ describe("bake day", () => {
     fireEvent.press(screen.getByTestId("recalculate-confirm"));
     expect(await screen.findByTestId("plan-changes")).toHaveTextContent(/What changed:.*Milk-bread dinner rolls: 7 → 9 ordered, 7 → 9 pans\./);
     expect(api.callsTo("POST", "/api/production/plan/recalculate")[0].query.date).toBe("2025-12-03");
-    await waitFor(() => expect(screen.getByTestId("plan-frozen-at")).toHaveTextContent("Frozen at Tue 2 Dec, 05:40 CST."));
+    await waitFor(() => expect(screen.getByTestId("plan-frozen-at")).toHaveTextContent("Plan set at the cut-off and kept; worked out Tue 2 Dec, 05:40 CST."));
     // What the recalculation changed is not "pending" any more.
     expect(screen.queryByTestId("plan-pending-changes")).toBeNull();
   });
 
-  it("tells the baker when a frozen plan differs from a fresh calculation", async () => {
+  it("tells the baker when a plan set at the cut-off differs from a fresh calculation", async () => {
     mockApi(routes(planView({ final: true, frozen: true, frozenAt: "2025-12-02T20:00:00.000Z", changes: ["Milk bread: formula version 1 → 2."] })));
     renderApp("/bake");
     expect(await screen.findByTestId("plan-pending-changes")).toHaveTextContent(/Milk bread: formula version 1 → 2\./);

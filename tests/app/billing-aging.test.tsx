@@ -14,8 +14,8 @@ const AGING: AgingDto = {
   today: "2025-12-02",
   buckets: ["current", "1-30", "31-60", "61-90", "90+"],
   accounts: [
-    { accountId: 13, accountName: "North Pier Coffee", onHold: true, current: 0, "1-30": 4200, "31-60": 9150, "61-90": 0, "90+": 0, total: 13350 },
-    { accountId: 12, accountName: "Juniper Table", onHold: false, current: 6075, "1-30": 0, "31-60": 0, "61-90": 0, "90+": 1000, total: 7075 },
+    { accountId: 13, accountName: "North Pier Coffee", onHold: true, creditHold: true, current: 0, "1-30": 4200, "31-60": 9150, "61-90": 0, "90+": 0, total: 13350 },
+    { accountId: 12, accountName: "Juniper Table", onHold: false, creditHold: false, current: 6075, "1-30": 0, "31-60": 0, "61-90": 0, "90+": 1000, total: 7075 },
   ],
   totals: { current: 6075, "1-30": 4200, "31-60": 9150, "61-90": 0, "90+": 1000, total: 20425 },
 };
@@ -27,7 +27,7 @@ describe("aging report", () => {
     mockApi({ ...sessionRoutes(BOOKKEEPER), "GET /api/reports/aging": { body: { aging: AGING } } });
     const app = renderApp("/office/money/aging");
     expect(await screen.findByTestId("aging-table")).toBeOnTheScreen();
-    expect(screen.getByTestId("aging-row-13")).toHaveTextContent(/North Pier Coffee.*On hold.*–.*\$42\.00.*\$91\.50.*–.*–.*\$133\.50/);
+    expect(screen.getByTestId("aging-row-13")).toHaveTextContent(/North Pier Coffee.*Credit hold.*–.*\$42\.00.*\$91\.50.*–.*–.*\$133\.50/);
     expect(screen.getByTestId("aging-hold-13")).toBeOnTheScreen();
     expect(screen.queryByTestId("aging-hold-12")).toBeNull();
     expect(screen.getByTestId("aging-totals")).toHaveTextContent(/Total.*\$60\.75.*\$42\.00.*\$91\.50.*\$0\.00.*\$10\.00.*\$204\.25/);
@@ -44,7 +44,7 @@ describe("aging report", () => {
     renderApp("/office/money/aging");
     expect(await screen.findByTestId("aging-total-31-60")).toHaveTextContent(/31–60 days.*\$91\.50/);
     expect(screen.getByTestId("aging-total-total")).toHaveTextContent(/Total owed.*\$204\.25/);
-    expect(screen.getByTestId("aging-row-13")).toHaveTextContent(/North Pier Coffee.*On hold.*1–30 days.*\$42\.00.*31–60 days.*\$91\.50.*Total.*\$133\.50/);
+    expect(screen.getByTestId("aging-row-13")).toHaveTextContent(/North Pier Coffee.*Credit hold.*1–30 days.*\$42\.00.*31–60 days.*\$91\.50.*Total.*\$133\.50/);
   });
 
   it("says when nothing is owed", async () => {

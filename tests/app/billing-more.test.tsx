@@ -46,7 +46,7 @@ describe("outgoing e-mail (owner)", () => {
 
   it("keeps the bookkeeper out", async () => {
     signedInAs(BOOKKEEPER);
-    const api = mockApi({ ...sessionRoutes(BOOKKEEPER), "GET /api/office/summary": { body: { summary: { users: { total: 1, active: 1, disabled: 0, pendingInvitations: 0 }, accounts: { total: 1, active: 1, onHold: 0, closed: 0 } } } } });
+    const api = mockApi({ ...sessionRoutes(BOOKKEEPER), "GET /api/office/summary": { body: { summary: { users: { total: 1, active: 1, disabled: 0, pendingInvitations: 0 }, accounts: { total: 1, active: 1, onHold: 0, paused: 0, creditHold: 0, closed: 0 } } } } });
     const app = renderApp("/office/money/outbox");
     await screen.findByTestId("office-home-title");
     expect(app.getPathname()).toBe("/office");

@@ -29,8 +29,12 @@ describe("confirm dispatch", () => {
       },
     });
     renderApp("/office/orders?date=2025-12-02");
-    fireEvent.press(await screen.findByTestId("board-confirm-dispatch"));
-    expect(await screen.findByTestId("dispatch-summary")).toHaveTextContent("2 orders to confirm · everything as ordered.");
+    // The action is named after what it records (issue 10: "Dispatch vs delivery").
+    expect(await screen.findByTestId("board-confirm-dispatch")).toHaveTextContent(/Record deliveries/);
+    fireEvent.press(screen.getByTestId("board-confirm-dispatch"));
+    expect(await screen.findByTestId("dispatch-summary")).toHaveTextContent("2 orders to record · everything as ordered.");
+    expect(screen.getByTestId("dispatch-title")).toHaveTextContent(/Record deliveries/);
+    expect(screen.getByTestId("dispatch-confirm")).toHaveTextContent(/Record deliveries/);
     // Orders already delivered show as such, without controls.
     expect(screen.getByTestId("dispatch-delivered-903")).toHaveTextContent(/North Pier Coffee.*Delivered/);
     expect(screen.queryByTestId("dispatch-short-903-101")).toBeNull();
@@ -41,7 +45,7 @@ describe("confirm dispatch", () => {
     fireEvent.press(screen.getByTestId("dispatch-qty-901-101-dec"));
     expect(screen.getByTestId("dispatch-qty-901-101").props.value).toBe("1");
     fireEvent.changeText(screen.getByTestId("dispatch-reason-901-101"), "Two trays scorched");
-    expect(screen.getByTestId("dispatch-summary")).toHaveTextContent("2 orders to confirm · 1 line short.");
+    expect(screen.getByTestId("dispatch-summary")).toHaveTextContent("2 orders to record · 1 line short.");
 
     fireEvent.press(screen.getByTestId("dispatch-confirm"));
     expect(await screen.findByTestId("dispatch-result")).toHaveTextContent(/2 orders marked delivered\. Invoiced at once \(card accounts\): HB-2025-00060\./);
@@ -70,7 +74,7 @@ describe("confirm dispatch", () => {
     expect(api.callsTo("POST", "/api/deliveries/2025-12-02/confirm")[0].body).toEqual({ adjustments: [{ orderId: 902, productId: 102, deliveredQuantity: 0 }] });
   });
 
-  it("is the owner's: the bookkeeper sees no Confirm dispatch button", async () => {
+  it("is the owner's: the bookkeeper sees no Record deliveries button", async () => {
     signedInAs(BOOKKEEPER);
     mockApi({ ...sessionRoutes(BOOKKEEPER), "GET /api/orders/board": { body: { board: BOARD } } });
     renderApp("/office/orders?date=2025-12-02");

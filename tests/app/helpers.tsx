@@ -80,7 +80,7 @@ export const BAKERY: BakeryDto = {
 
 export const SUMMARY: OfficeSummaryDto = {
   users: { total: 7, active: 6, disabled: 1, pendingInvitations: 2 },
-  accounts: { total: 4, active: 2, onHold: 1, closed: 1 },
+  accounts: { total: 4, active: 2, onHold: 1, paused: 1, creditHold: 0, closed: 1 },
 };
 
 // ---- A fake API behind global.fetch ----

@@ -87,7 +87,7 @@ describe("set-password: invitation", () => {
     });
     const app = renderApp(`/set-password?kind=invite&token=${TOKEN}&email=buyer%40tidewater.test`);
     expect(await screen.findByTestId("invitation-for")).toHaveTextContent(/buyer@tidewater\.test/);
-    expect(screen.getByTestId("invitation-for")).toHaveTextContent(/Café buyer/);
+    expect(screen.getByTestId("invitation-for")).toHaveTextContent(/Wholesale buyer/);
     expect(screen.getByLabelText("Your name")).toHaveDisplayValue("Marisol");
 
     fireEvent.changeText(screen.getByLabelText("Your name"), "Marisol Okafor");

@@ -43,7 +43,7 @@ describe("sign-in screen", () => {
     const api = mockApi({
       ...sessionRoutes(OWNER),
       "POST /api/auth/sign-in": { body: { token: "tok-owner", user: OWNER } },
-      "GET /api/office/summary": { body: { summary: { users: { total: 4, active: 4, disabled: 0, pendingInvitations: 0 }, accounts: { total: 3, active: 3, onHold: 0, closed: 0 } } } },
+      "GET /api/office/summary": { body: { summary: { users: { total: 4, active: 4, disabled: 0, pendingInvitations: 0 }, accounts: { total: 3, active: 3, onHold: 0, paused: 0, creditHold: 0, closed: 0 } } } },
     });
     const app = renderApp("/sign-in");
     fireEvent.changeText(await screen.findByLabelText("E-mail"), "owner@hollowbrook.test");

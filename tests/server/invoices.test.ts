@@ -117,9 +117,9 @@ describe("dispatch, invoices and statements", () => {
     const refused = await t.http().post("/api/orders").set(auth(buyer)).send({ deliveryDate: "2026-06-11", lines: [{ productId: rolls.id, quantity: 1 }] });
     expect(refused.status).toBe(403);
     expect(refused.body.error.code).toBe("account_on_hold");
-    expect(refused.body.error.message).toMatch(/overdue invoices/);
+    expect(refused.body.error.message).toMatch(/on credit hold: it has overdue invoices/);
     const aging = await t.http().get("/api/reports/aging").set(auth(books));
-    expect(aging.body.aging.accounts.find((a: { accountId: number }) => a.accountId === acct.id)).toMatchObject({ "1-30": inv.totalCents, onHold: true });
+    expect(aging.body.aging.accounts.find((a: { accountId: number }) => a.accountId === acct.id)).toMatchObject({ "1-30": inv.totalCents, onHold: true, creditHold: true });
     const pay = await t.http().post(`/api/invoices/${inv.id}/payments`).set(auth(books)).send({ amountCents: inv.totalCents, method: "bank_transfer", reference: "BT-7731", receivedOn: "2026-06-10" });
     expect(pay.status).toBe(201);
     expect((await t.ds.getRepository(Invoice).findOneByOrFail({ id: inv.id })).status).toBe("paid");

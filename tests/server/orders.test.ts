@@ -147,6 +147,9 @@ describe("dates, minimums and holds", () => {
     expect(res.status).toBe(403);
     expect(res.body.error.code).toBe("account_on_hold");
     expect(res.body.error.message).toContain("+1 555 0100");
+    // A pause by hand is named as such, not as the credit hold (issue 10: two kinds of hold, two names).
+    expect(res.body.error.message).toMatch(/paused by the bakery/);
+    expect(res.body.error.message).not.toMatch(/credit hold/);
     await t.ds.getRepository(CustomerAccount).update({ id: accountId }, { status: "active" });
   });
 

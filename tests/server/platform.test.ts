@@ -53,7 +53,7 @@ describe("API conventions", () => {
     const res = await t.http().get("/api/office/summary").set("Authorization", `Bearer ${token}`);
     expect(res.status).toBe(200);
     expect(res.body.summary.users.total).toBeGreaterThanOrEqual(2);
-    expect(res.body.summary.accounts).toEqual({ total: 0, active: 0, onHold: 0, closed: 0 });
+    expect(res.body.summary.accounts).toEqual({ total: 0, active: 0, onHold: 0, paused: 0, creditHold: 0, closed: 0 });
   });
 
   it("GET /api/health answers 503 db down when the database is unreachable", async () => {

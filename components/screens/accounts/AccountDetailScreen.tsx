@@ -24,7 +24,7 @@ import { CalendarFeedCard } from "../common/CalendarFeedCard";
 import { AccountBillingCard } from "../billing/AccountBillingCard";
 import { TaxCertificatesCard } from "../billing/TaxCertificates";
 
-/** One customer account. The owner can edit it, put it on hold, close it (after a confirm step) and reopen it. */
+/** One customer account. The owner can edit it, pause it, close it (after a confirm step) and reopen it. */
 export function AccountDetailScreen({ id }: { id: number }) {
   const user = useSignedInUser();
   const isOwner = user.role === "owner";
@@ -68,7 +68,7 @@ export function AccountDetailScreen({ id }: { id: number }) {
       />
       <View style={[styles.grid, wide && styles.gridWide]}>
         <View style={[styles.col, wide && styles.mainCol]}>
-          <Card title="Delivery and billing" action={<StatusBadge status={a.status} testID="account-status" />}>
+          <Card title="Delivery and billing" action={<StatusBadge status={a.status} creditHold={a.creditHold} testID="account-status" />}>
             <DetailList
               items={[
                 { label: "Delivery address", value: a.deliveryAddress },
@@ -101,7 +101,7 @@ export function AccountDetailScreen({ id }: { id: number }) {
 
 const STATUS_HELP: Record<AccountStatus, string> = {
   active: "This account is open for orders.",
-  on_hold: "On hold: the account stays on file, but the bakery has paused it.",
+  on_hold: "Paused: the account stays on file, but the bakery has paused its orders by hand.",
   closed: "Closed: kept for the records only. Buyers can't be invited to it while it's closed.",
 };
 
@@ -146,7 +146,7 @@ function StatusCard({ account }: { account: AccountDto }) {
           ) : (
             <>
               {account.status === "active" ? (
-                <Button label="Put on hold" icon="pause" variant="secondary" busy={mutation.isPending} onPress={() => setStatus("on_hold")} testID="hold-account" />
+                <Button label="Pause account" icon="pause" variant="secondary" busy={mutation.isPending} onPress={() => setStatus("on_hold")} testID="hold-account" />
               ) : (
                 <Button label="Make active" icon="play" variant="accent" busy={mutation.isPending} onPress={() => setStatus("active")} testID="activate-account" />
               )}

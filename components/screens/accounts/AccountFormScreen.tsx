@@ -50,7 +50,7 @@ export function NewAccountScreen() {
   return (
     <Screen narrow testID="account-new">
       <TextLink href="/office/accounts" label="‹ All accounts" />
-      <PageHeader title="New account" subtitle="A café or shop that orders from the bakery." />
+      <PageHeader title="New account" subtitle="A café, restaurant or shop that orders from the bakery." />
       <AccountForm
         initial={EMPTY}
         withStatus
@@ -196,7 +196,7 @@ function AccountForm({ initial, withStatus, submitLabel, busy, onSubmit, cancelH
           error={fields.status}
           choices={[
             { value: "active", label: "Active" },
-            { value: "on_hold", label: "On hold" },
+            { value: "on_hold", label: "Paused" },
           ]}
         />
       ) : null}

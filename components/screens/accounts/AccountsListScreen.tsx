@@ -15,7 +15,7 @@ import { useSignedInUser } from "../../auth/useAuth";
 import { useAccountsQuery } from "../../api/accounts";
 import { useDebounced } from "../../forms/useDebounced";
 import { useIsWide } from "../../shell/useIsWide";
-import { ACCOUNT_STATUS_LABELS, ACCOUNT_STATUSES, type AccountDto, type AccountStatus } from "../../../shared/schemas/accounts";
+import { ACCOUNT_STATUS_LABELS, ACCOUNT_STATUSES, accountStatusLabel, type AccountDto, type AccountStatus } from "../../../shared/schemas/accounts";
 import { space } from "../../theme";
 
 type StatusFilter = AccountStatus | "all";
@@ -44,7 +44,7 @@ export function AccountsListScreen() {
     <Screen testID="accounts-screen">
       <PageHeader
         title="Accounts"
-        subtitle="The cafés and shops that order from the bakery."
+        subtitle="The cafés, restaurants and shops that order from the bakery."
         actions={isOwner ? <LinkButton href="/office/accounts/new" label="New account" icon="plus" testID="new-account" /> : null}
       />
       <View style={[styles.filters, wide && styles.filtersWide]}>
@@ -74,7 +74,7 @@ export function AccountsListScreen() {
           <EmptyState
             icon="briefcase"
             title="No customer accounts yet"
-            message={isOwner ? "Add the first café or shop that orders from you." : "The owner hasn't added any accounts yet."}
+            message={isOwner ? "Add the first café, restaurant or shop that orders from you." : "The owner hasn't added any accounts yet."}
             action={isOwner ? <LinkButton href="/office/accounts/new" label="New account" icon="plus" /> : undefined}
             testID="accounts-empty"
           />
@@ -85,7 +85,7 @@ export function AccountsListScreen() {
           rows={accounts.data}
           rowKey={(a) => a.id}
           onRowPress={open}
-          rowLabel={(a) => `${a.businessName}, ${ACCOUNT_STATUS_LABELS[a.status]}`}
+          rowLabel={(a) => `${a.businessName}, ${accountStatusLabel(a)}`}
           rowTestID={(a) => `account-row-${a.id}`}
           columns={[
             {
@@ -106,7 +106,7 @@ export function AccountsListScreen() {
             { key: "contact", label: "Contact", flex: 1.4, render: (a) => <AppText numberOfLines={1}>{a.contactName || "—"}</AppText> },
             { key: "billing", label: "Billing e-mail", flex: 1.8, render: (a) => <AppText numberOfLines={1}>{a.billingEmail}</AppText> },
             { key: "buyers", label: "Buyers", flex: 0.8, render: (a) => <AppText>{String(a.buyerCount)}</AppText> },
-            { key: "status", label: "Status", flex: 0.9, render: (a) => <StatusBadge status={a.status} /> },
+            { key: "status", label: "Status", flex: 0.9, render: (a) => <StatusBadge status={a.status} creditHold={a.creditHold} /> },
           ]}
         />
       ) : (
@@ -115,7 +115,7 @@ export function AccountsListScreen() {
             <ListCard
               key={a.id}
               onPress={() => open(a)}
-              accessibilityLabel={`${a.businessName}, ${ACCOUNT_STATUS_LABELS[a.status]}`}
+              accessibilityLabel={`${a.businessName}, ${accountStatusLabel(a)}`}
               testID={`account-row-${a.id}`}
             >
               <View style={styles.cardText}>
@@ -123,7 +123,7 @@ export function AccountsListScreen() {
                   <AppText variant="bodyStrong" style={styles.flex}>
                     {a.businessName}
                   </AppText>
-                  <StatusBadge status={a.status} />
+                  <StatusBadge status={a.status} creditHold={a.creditHold} />
                 </View>
                 <AppText variant="small" color="muted" numberOfLines={2}>
                   {a.deliveryAddress}

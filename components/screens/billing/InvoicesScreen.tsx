@@ -92,7 +92,7 @@ export function InvoicesScreen({ mode, accountId: startAccount }: InvoicesScreen
   return (
     <Screen testID="invoices-screen">
       <PageHeader
-        overline={office ? "Billing" : "Café account"}
+        overline={office ? "Billing" : "Your account"}
         title="Invoices"
         subtitle={office ? "Every invoice and weekly statement, with what is still owed." : "Your invoices from the bakery: download them, and pay open ones by card."}
         testID="invoices-title"

@@ -57,7 +57,7 @@ export function PayReturnScreen(props: PayReturnProps) {
     return (
       <AppShell area="baker">
         <Screen narrow testID="pay-return">
-          <EmptyState icon="lock" title="Invoices are for the office and the café" message="Ask the office about this payment." testID="pay-not-yours" />
+          <EmptyState icon="lock" title="Invoices are for the office and the account's buyers" message="Ask the office about this payment." testID="pay-not-yours" />
           <TextLink href={homePathFor(user.role)} label="Back to the bake day" />
         </Screen>
       </AppShell>

@@ -60,7 +60,7 @@ export function ConfirmDispatchScreen({ date: asked }: { date?: string }) {
   return (
     <Screen testID="dispatch-screen">
       <TextLink href={date ? `/office/orders?date=${date}` : "/office/orders"} label="‹ Orders board" testID="dispatch-back" />
-      <PageHeader overline="Confirm dispatch" title={date ? formatDayLong(date) : "Dispatch"} subtitle="Mark the day's orders delivered. Note any line that went out short: the account is credited for it." testID="dispatch-title" />
+      <PageHeader overline="Record deliveries" title={date ? formatDayLong(date) : "Deliveries"} subtitle="Record what went out on the vans: each order is marked delivered. Note any line that went out short: the account is credited for it." testID="dispatch-title" />
       {!date ? (
         bakery.isError ? <ErrorState error={bakery.error} onRetry={() => bakery.refetch()} retrying={bakery.isFetching} testID="dispatch-error" /> : <LoadingState label="Loading the bakery's day…" />
       ) : board.isPending ? (
@@ -137,7 +137,7 @@ function DispatchForm({ date, board }: { date: string; board: BoardDto }) {
       ) : (
         <>
           <AppText color="muted" testID="dispatch-summary">
-            {`${ordersLabel(waiting.length)} to confirm${shortCount ? ` · ${shortCount === 1 ? "1 line" : `${shortCount} lines`} short` : " · everything as ordered"}.`}
+            {`${ordersLabel(waiting.length)} to record${shortCount ? ` · ${shortCount === 1 ? "1 line" : `${shortCount} lines`} short` : " · everything as ordered"}.`}
           </AppText>
           <View style={styles.list}>
             {waiting.map((row) => (
@@ -189,7 +189,7 @@ function DispatchForm({ date, board }: { date: string; board: BoardDto }) {
             ))}
           </View>
           <FormError message={formError} testID="dispatch-form-error" />
-          <Button label="Confirm dispatch" icon="truck" busy={confirm.isPending} onPress={submit} testID="dispatch-confirm" />
+          <Button label="Record deliveries" icon="truck" busy={confirm.isPending} onPress={submit} testID="dispatch-confirm" />
         </>
       )}
       {delivered.length ? (

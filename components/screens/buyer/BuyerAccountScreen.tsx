@@ -27,7 +27,7 @@ export function BuyerAccountScreen() {
     return (
       <Screen narrow testID="buyer-account">
         <PageHeader title="Account" />
-        <EmptyState icon="link" title="No customer account yet" message="Ask the bakery to link your sign-in to your café's account." />
+        <EmptyState icon="link" title="No customer account yet" message="Ask the bakery to link your sign-in to your business's account." />
       </Screen>
     );
   }
@@ -44,7 +44,7 @@ export function BuyerAccountScreen() {
         <>
           <PageHeader overline="Account" title={account.data.businessName} />
           {accountStatusNote(account.data) ? <Notice tone="info" message={accountStatusNote(account.data) ?? ""} /> : null}
-          <Card title="Delivery and billing" action={<StatusBadge status={account.data.status} />}>
+          <Card title="Delivery and billing" action={<StatusBadge status={account.data.status} creditHold={account.data.creditHold} />}>
             <DetailList
               items={[
                 { label: "Business", value: account.data.businessName },

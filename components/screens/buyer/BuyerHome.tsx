@@ -30,8 +30,8 @@ import { colors, layout, radii, space } from "../../theme";
 export const HOME_DAYS = 14;
 
 export function accountStatusNote(account: AccountDto): string | null {
-  if (account.status === "on_hold" && account.creditHold) return "New orders are paused because invoices are overdue. Pay them under Invoices and ordering opens again straight away.";
-  if (account.status === "on_hold") return "This account is on hold. Please contact the bakery before planning new orders.";
+  if (account.status === "on_hold" && account.creditHold) return "This account is on credit hold: new orders wait until the overdue invoices are paid. Pay them under Invoices and ordering opens again straight away.";
+  if (account.status === "on_hold") return "The bakery has paused this account. Please contact the bakery before planning new orders.";
   if (account.status === "closed") return "This account is closed. Contact the bakery if you'd like to order again.";
   return null;
 }
@@ -51,11 +51,11 @@ export function BuyerHome() {
   if (!user.accountId) {
     return (
       <Screen testID="buyer-home">
-        <PageHeader overline="Café ordering" title={`Hello, ${firstName(user.name)}`} testID="buyer-home-title" />
+        <PageHeader overline="Wholesale ordering" title={`Hello, ${firstName(user.name)}`} testID="buyer-home-title" />
         <EmptyState
           icon="link"
           title="Your sign-in isn't linked to a customer account"
-          message="Ask the bakery to link you to your café's account."
+          message="Ask the bakery to link you to your business's account."
           testID="buyer-no-account"
         />
         <BakeryContactCard />
@@ -73,7 +73,7 @@ export function BuyerHome() {
   if (account.isError) {
     return (
       <Screen testID="buyer-home">
-        <PageHeader overline="Café ordering" title={`Hello, ${firstName(user.name)}`} />
+        <PageHeader overline="Wholesale ordering" title={`Hello, ${firstName(user.name)}`} />
         <ErrorState error={account.error} title="Your account didn't load" onRetry={() => account.refetch()} retrying={account.isFetching} />
       </Screen>
     );
@@ -85,7 +85,7 @@ export function BuyerHome() {
 
   return (
     <Screen testID="buyer-home">
-      <PageHeader overline="Café ordering" title={a.businessName} subtitle={subtitle} testID="buyer-home-title" />
+      <PageHeader overline="Wholesale ordering" title={a.businessName} subtitle={subtitle} testID="buyer-home-title" />
       {note ? <Notice tone="info" message={note} testID="buyer-status-note" /> : null}
       <View style={[styles.grid, wide && styles.gridWide]}>
         <View style={[styles.main, wide && styles.mainWide]}>

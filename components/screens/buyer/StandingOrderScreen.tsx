@@ -87,7 +87,7 @@ export function StandingOrderScreen() {
     return (
       <Screen testID="standing-screen">
         <PageHeader title="Standing order" testID="standing-title" />
-        <EmptyState icon="link" title="No customer account yet" message="Ask the bakery to link your sign-in to your café's account." />
+        <EmptyState icon="link" title="No customer account yet" message="Ask the bakery to link your sign-in to your business's account." />
       </Screen>
     );
   }
@@ -242,7 +242,7 @@ function StandingForm({ standing, products, weekdays, today, horizonDays }: Stan
   return (
     <Screen testID="standing-screen">
       <PageHeader
-        overline="Café ordering"
+        overline="Wholesale ordering"
         title="Standing order"
         subtitle="Your usual quantities for each delivery day. The bakery places them as orders by themselves; you can still change any single date."
         testID="standing-title"

@@ -13,7 +13,7 @@ const HINTS: Record<string, string> = {
   production: "Bake day, formulas, ingredients, purchasing forecast and production settings.",
   ingredients: "The ingredient library: kinds, water content, allergens and purchase packs.",
   forecast: "What to buy for the next 7 days, in whole packs.",
-  people: "Sign-ins for staff and café buyers, and invitations.",
+  people: "Sign-ins for staff and wholesale buyers, and invitations.",
   "price-lists": "Own prices or a percentage off for some accounts.",
   calendar: "Delivery weekdays, the cut-off, and closed dates.",
   products: "What the bakery sells: prices, pans, allergens and photos.",

@@ -38,7 +38,8 @@ export function OfficeHome() {
           <Card title="Customer accounts" style={wide ? styles.cellWide : undefined} testID="office-accounts-card">
             <View style={styles.tiles}>
               <StatTile label="Active" value={summary.data.accounts.active} testID="count-accounts-active" />
-              <StatTile label="On hold" value={summary.data.accounts.onHold} testID="count-accounts-on-hold" />
+              <StatTile label="Paused" value={summary.data.accounts.paused} testID="count-accounts-paused" />
+              <StatTile label="Credit hold" value={summary.data.accounts.creditHold} testID="count-accounts-credit-hold" />
               <StatTile label="Closed" value={summary.data.accounts.closed} testID="count-accounts-closed" />
             </View>
             <AppText color="muted">{`${summary.data.accounts.total} accounts in all.`}</AppText>

@@ -6,7 +6,7 @@ import { ErrorState, LoadingState } from "../../ui/States";
 import { AppText } from "../../ui/Text";
 import { useAccountsQuery } from "../../api/accounts";
 import { space } from "../../theme";
-import { ACCOUNT_STATUS_LABELS } from "../../../shared/schemas/accounts";
+import { accountStatusLabel } from "../../../shared/schemas/accounts";
 
 export interface AccountPickerProps {
   value: number | null;
@@ -53,7 +53,7 @@ export function AccountPicker({ value, onChange, error, testID = "account-picker
         choices={shown.map((a) => ({
           value: String(a.id),
           label: a.businessName,
-          hint: a.status === "active" ? a.deliveryAddress : `${ACCOUNT_STATUS_LABELS[a.status]} · ${a.deliveryAddress}`,
+          hint: a.status === "active" ? a.deliveryAddress : `${accountStatusLabel(a)} · ${a.deliveryAddress}`,
         }))}
       />
     </View>

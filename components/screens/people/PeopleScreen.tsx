@@ -34,7 +34,7 @@ export function PeopleScreen({ invited }: { invited?: string }) {
     <Screen testID="people-screen">
       <PageHeader
         title="People"
-        subtitle="Everyone who signs in to Panwise: bakery staff and café buyers."
+        subtitle="Everyone who signs in to Panwise: bakery staff and wholesale buyers."
         actions={<LinkButton href="/office/people/invite" label="Invite someone" icon="user-plus" testID="invite-someone" />}
       />
       {invited ? <Notice message={`Invitation sent to ${invited}.`} testID="invited-notice" /> : null}
@@ -64,7 +64,7 @@ export function PeopleScreen({ invited }: { invited?: string }) {
         ) : users.isError ? (
           <ErrorState error={users.error} title="People didn't load" onRetry={() => users.refetch()} retrying={users.isFetching} testID="people-error" />
         ) : users.data.length === 0 ? (
-          <EmptyState icon="users" title={search ? "No one matches" : "No one here yet"} message={search ? "Try a name, an e-mail or a café." : undefined} testID="people-empty" />
+          <EmptyState icon="users" title={search ? "No one matches" : "No one here yet"} message={search ? "Try a name, an e-mail or an account." : undefined} testID="people-empty" />
         ) : wide ? (
           <View style={styles.table} testID="people-table">
             <View style={styles.tableHead}>

@@ -5,7 +5,7 @@ export const ROLE_HINTS: Record<Role, string> = {
   owner: "Runs Panwise: people, accounts and everything else.",
   baker: "Sees the bake day.",
   bookkeeper: "Sees customer accounts; can't change people.",
-  buyer: "Orders for one café or shop account.",
+  buyer: "Orders for one wholesale account (a café, restaurant or shop).",
 };
 
 export const ROLE_CHOICES: Choice<Role>[] = ROLES.map((r) => ({ value: r, label: ROLE_LABELS[r], hint: ROLE_HINTS[r] }));

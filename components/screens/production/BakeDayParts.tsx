@@ -154,7 +154,7 @@ export interface StatusCardProps {
   bannerOnly?: boolean;
 }
 
-/** Final or not, frozen or live, how far the day has got; recalculate on purpose; the production sheet. */
+/** Final or not, set at the cut-off or live, how far the day has got; recalculate on purpose; the production sheet. */
 export function StatusCard({ plan, timeZone, now, progress, recalculating, recalcError, onRecalculate, lastChanges, bannerOnly }: StatusCardProps) {
   const [confirming, setConfirming] = useState(false);
   const cutoff = formatCutoff(plan.cutoffAt, timeZone) || localDayTime(plan.cutoffAt);
@@ -164,7 +164,7 @@ export function StatusCard({ plan, timeZone, now, progress, recalculating, recal
     : pastCutoff
       ? `Not final — the cut-off (${cutoff}) has passed, but some orders are still open.`
       : `Not final — orders can change until the cut-off at ${cutoff}.`;
-  const stored = plan.frozen && plan.frozenAt ? `Frozen at ${formatCutoff(plan.frozenAt, timeZone) || localDayTime(plan.frozenAt)}.` : `Worked out from the orders as they are now (${formatCutoff(plan.computedAt, timeZone) || localDayTime(plan.computedAt)}).`;
+  const stored = plan.frozen && plan.frozenAt ? `Plan set at the cut-off and kept; worked out ${formatCutoff(plan.frozenAt, timeZone) || localDayTime(plan.frozenAt)}.` : `Worked out from the orders as they are now (${formatCutoff(plan.computedAt, timeZone) || localDayTime(plan.computedAt)}).`;
   const total = progress.mixes + progress.waves;
   return (
     <Card testID="plan-status-card">
@@ -185,13 +185,13 @@ export function StatusCard({ plan, timeZone, now, progress, recalculating, recal
       {plan.changes.length ? (
         <View style={styles.pending} testID="plan-pending-changes">
           <AppText variant="bodyStrong" color="amberInk">
-            Since this plan was frozen, a fresh calculation would differ:
+            Since this plan was set at the cut-off, a fresh calculation would differ:
           </AppText>
           {plan.changes.map((c) => (
             <AppText key={c} variant="small" color="amberInk">{`•  ${c}`}</AppText>
           ))}
           <AppText variant="small" color="amberInk">
-            The cards below still show the frozen plan. Recalculate to use the changes.
+            The cards below still show the plan set at the cut-off. Recalculate to use the changes.
           </AppText>
         </View>
       ) : null}
@@ -306,7 +306,7 @@ export function PansCard({ plan, extras, onExtra, wide, saving, error, formulasH
     >
       {plan.frozen ? (
         <AppText variant="small" color="muted">
-          Changing extra pans recalculates the frozen plan.
+          Changing extra pans recalculates the plan set at the cut-off.
         </AppText>
       ) : null}
       <View style={[styles.pans, wide && styles.pansWide]}>

@@ -52,7 +52,7 @@ export function CautionsCard({ plan, units }: { plan: CautionDay; units: Units }
   const cautions = dayCautions(plan, units);
   const deferral = cautions[cautions.length - 1];
   return (
-    <Card title="Safety reminders" testID="cautions">
+    <Card title="Cautions" testID="cautions">
       <View style={styles.list}>
         {cautions.slice(0, -1).map((c) => (
           <View key={c.key} style={styles.row} testID={`caution-${c.key}`}>

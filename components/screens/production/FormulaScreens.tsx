@@ -248,7 +248,7 @@ export function FormulaScreen({ area, id, version, created }: FormulaScreenProps
         busy={update.isPending}
         onSubmit={(input, fail) => {
           setSaved(null);
-          update.mutate(input, { onSuccess: (s) => setSaved(`${s.name} is saved as version ${s.version}. Plans not yet frozen use it now.`), onError: fail });
+          update.mutate(input, { onSuccess: (s) => setSaved(`${s.name} is saved as version ${s.version}. Plans not yet set at their cut-off use it now.`), onError: fail });
         }}
       />
     );

@@ -293,7 +293,7 @@ function SettingsForm({ initial }: { initial: ProductionSettingsDto }) {
 
       <AppText color="muted" testID="settings-summary">{capacitySummary(values)}</AppText>
       <FormError message={formError} testID="production-settings-form-error" />
-      {saved ? <Notice message="Production settings saved. Plans not yet frozen use them now; recalculate a frozen day to apply them." testID="production-settings-saved" /> : null}
+      {saved ? <Notice message="Production settings saved. Plans not yet set at their cut-off use them now; recalculate a day already set to apply them." testID="production-settings-saved" /> : null}
       <Button label="Save production settings" icon="check" onPress={submit} busy={save.isPending} testID="production-settings-save" block />
     </Card>
   );
