@@ -18,8 +18,8 @@ export interface NavItem {
 export const NAV: Record<HomeArea, NavItem[]> = {
   buyer: [
     { key: "home", label: "Home", href: "/buyer", icon: "home", exact: true, alsoFor: ["/buyer/order"] },
-    { key: "standing", label: "Standing", href: "/buyer/standing", icon: "repeat" },
-    { key: "history", label: "History", href: "/buyer/orders", icon: "list" },
+    { key: "standing", label: "Standing order", href: "/buyer/standing", icon: "repeat" },
+    { key: "history", label: "Orders", href: "/buyer/orders", icon: "list" },
     { key: "invoices", label: "Invoices", href: "/buyer/invoices", icon: "file-text" },
     { key: "account", label: "Account", href: "/buyer/account", icon: "briefcase", alsoFor: ["/buyer/me"] },
   ],
@@ -27,9 +27,9 @@ export const NAV: Record<HomeArea, NavItem[]> = {
     { key: "bake", label: "Bake day", href: "/bake", icon: "sun", exact: true, alsoFor: ["/bake/day"] },
     { key: "orders", label: "Orders", href: "/bake/orders", icon: "clipboard" },
     { key: "formulas", label: "Formulas", href: "/bake/formulas", icon: "book-open" },
-    { key: "forecast", label: "Buying", href: "/bake/forecast", icon: "shopping-cart" },
+    { key: "forecast", label: "Purchasing", href: "/bake/forecast", icon: "shopping-cart" },
     { key: "ingredients", label: "Ingredients", href: "/bake/ingredients", icon: "package" },
-    { key: "me", label: "You", href: "/bake/me", icon: "user" },
+    { key: "me", label: "Profile", href: "/bake/me", icon: "user" },
   ],
   office: [
     { key: "office", label: "Overview", href: "/office", icon: "grid", exact: true },
@@ -42,7 +42,8 @@ export const NAV: Record<HomeArea, NavItem[]> = {
     { key: "price-lists", label: "Price lists", href: "/office/price-lists", icon: "tag", roles: ["owner"] },
     { key: "calendar", label: "Delivery days", href: "/office/calendar", icon: "calendar", roles: ["owner"] },
     { key: "money", label: "Money", href: "/office/money", icon: "dollar-sign", roles: ["owner", "bookkeeper"] },
-    { key: "me", label: "You", href: "/office/me", icon: "user" },
+    { key: "outbox", label: "Outgoing e-mail", href: "/office/outbox", icon: "mail", roles: ["owner"] },
+    { key: "me", label: "Profile", href: "/office/me", icon: "user" },
   ],
 };
 

@@ -23,6 +23,12 @@ describe("invite form", () => {
     expect(api.callsTo("POST", "/api/invitations")).toHaveLength(0);
   });
 
+  it("describes the bookkeeper by the work: invoices and payments (issue 10)", async () => {
+    mockApi(routes());
+    renderApp("/office/people/invite");
+    expect(await screen.findByTestId("invite-role-bookkeeper")).toHaveTextContent(/invoices.*payments/);
+  });
+
   it("requires a customer account for a buyer, offering only open accounts", async () => {
     const api = mockApi(routes({ "POST /api/invitations": { status: 201, body: { invitation: invitationDto({ email: "cafe@tidewater.test", role: "buyer", accountId: 11 }) } } }));
     const app = renderApp("/office/people/invite");

@@ -80,7 +80,7 @@ describe("people", () => {
     expect(api.callsTo("PATCH", "/api/users/2")).toHaveLength(0);
     fireEvent.press(await screen.findByTestId("user-2-account-11"));
     fireEvent.press(screen.getByText("Save role"));
-    expect(await screen.findByTestId("user-2-done")).toHaveTextContent(/now café buyer for Tidewater Café/);
+    expect(await screen.findByTestId("user-2-done")).toHaveTextContent(/now a wholesale buyer for Tidewater Café/);
     expect(api.callsTo("PATCH", "/api/users/2")[0].body).toEqual({ role: "buyer", accountId: 11 });
   });
 

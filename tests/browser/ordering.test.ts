@@ -28,7 +28,7 @@ describe("a café buyer at 390 px", () => {
     // Cancel it.
     await page.getByRole("button", { name: "Cancel this order" }).click();
     await page.getByRole("button", { name: "Yes, cancel order" }).click();
-    await page.getByTestId("order-notice").filter({ hasText: "cancelled" }).waitFor();
+    await page.getByTestId("order-notice").filter({ hasText: "canceled" }).waitFor();
 
     // Place a new one for the same date.
     await page.getByRole("textbox", { name: "Quantity of Pullman milk loaf" }).fill("6");

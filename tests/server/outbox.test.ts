@@ -53,7 +53,7 @@ describe("mail that is never lost", () => {
     await t.mail.close();
     const { enqueueMail } = await import("../../server/mail/outbox.service");
     await t.ds.transaction(async (m) => {
-      for (let i = 0; i < 500; i++) await enqueueMail(m, t.ctx, "order_placed", { to: `burst${i}@cafe.test`, fromName: "Test Bakery", subject: `Order received #${i}`, html: `<p>${i}</p>`, text: String(i) });
+      for (let i = 0; i < 500; i++) await enqueueMail(m, t.ctx, "order_placed", { to: `burst${i}@cafe.test`, fromName: "Test Bakery", subject: `Order placed #${i}`, html: `<p>${i}</p>`, text: String(i) });
     });
     // A minute of the server being down: the worker keeps trying and backing off.
     for (let s = 0; s < 6; s++) {
@@ -61,11 +61,11 @@ describe("mail that is never lost", () => {
       t.clock.advance(10_000);
     }
     t.mail = await startMailFake({ smtpPort, httpPort: 0 });
-    for (let i = 0; i < 20 && t.mail.messages.filter((m) => m.subject.startsWith("Order received #")).length < 500; i++) {
+    for (let i = 0; i < 20 && t.mail.messages.filter((m) => m.subject.startsWith("Order placed #")).length < 500; i++) {
       t.clock.advance(5 * 60 * 1000);
       await processOutbox(t.ctx, 500);
     }
-    const burst = t.mail.messages.filter((m) => m.subject.startsWith("Order received #"));
+    const burst = t.mail.messages.filter((m) => m.subject.startsWith("Order placed #"));
     expect(burst).toHaveLength(500);
     expect(new Set(burst.map((m) => m.to[0])).size).toBe(500);
     expect(await t.ds.getRepository(OutboxMail).countBy({ kind: "order_placed", status: "sent" })).toBeGreaterThanOrEqual(500);
@@ -110,7 +110,7 @@ describe("a database crash right after the mail server accepted a mail", () => {
   }
 
   async function queue(to: string) {
-    const row = await t.ds.transaction((m) => enqueueMail(m, t.ctx, "order_placed", { to, fromName: "Test Bakery", subject: `Order received for ${to}`, html: "<p>x</p>", text: "x" }));
+    const row = await t.ds.transaction((m) => enqueueMail(m, t.ctx, "order_placed", { to, fromName: "Test Bakery", subject: `Order placed for ${to}`, html: "<p>x</p>", text: "x" }));
     return row;
   }
 

@@ -14,7 +14,6 @@ const LINKS: { key: string; href: string; icon: React.ComponentProps<typeof Feat
   { key: "payouts", href: "/office/money/payouts", icon: "dollar-sign", title: "Payouts", about: "Card money sent to the bank, matched to invoices, to reconcile." },
   { key: "aging", href: "/office/money/aging", icon: "clock", title: "Aging", about: "What each account owes, by how long it is past due." },
   { key: "exports", href: "/office/money/exports", icon: "download", title: "Exports", about: "Invoices, payments and payouts as CSV for the accountant." },
-  { key: "outbox", href: "/office/money/outbox", icon: "mail", title: "Outgoing e-mail", about: "Invoice and receipt e-mails: sent, waiting, failed; send again.", roles: ["owner"] },
   { key: "settings", href: "/office/money/settings", icon: "sliders", title: "Billing settings", about: "Sales tax, invoice numbers, credit hold, payment instructions." },
 ];
 

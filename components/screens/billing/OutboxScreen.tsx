@@ -14,7 +14,7 @@ import { useBakeryTimeZone } from "../../api/bakery";
 import { formatDateTime } from "../../format";
 import { mailKindLabel } from "../../../shared/mail";
 import { useIsWide } from "../../shell/useIsWide";
-import { BackLink, BillingTable, billingStyles } from "./parts";
+import { BillingTable, billingStyles } from "./parts";
 import { colors, radii, space } from "../../theme";
 
 const STATUS_LABELS: Record<MailStatus, string> = { pending: "Waiting", sending: "Sending", sent: "Sent", failed: "Failed" };
@@ -105,8 +105,7 @@ export function OutboxScreen() {
 
   return (
     <Screen testID="outbox-screen">
-      <BackLink href="/office/money" label="Money" testID="back-to-money" />
-      <PageHeader overline="Money" title="Outgoing e-mail" subtitle="Every e-mail Panwise sends is kept here and retried with a growing pause until the mail server takes it." testID="outbox-title" />
+      <PageHeader title="Outgoing e-mail" subtitle="Every e-mail sent from the bakery's Panwise: order confirmations, invoices and receipts, invitations and password resets. Each is kept here and retried with a growing pause until the mail server takes it." testID="outbox-title" />
       <ChoiceGroup<Show>
         label="Show"
         value={show}

@@ -60,7 +60,7 @@ export function BuyerAccountScreen() {
           <DeliveryTermsCard accountId={account.data.id} />
           <TaxCertificatesCard accountId={account.data.id} canUpload canReview={false} audience="buyer" />
           <CalendarFeedCard />
-          <Card title="Your sign-in" testID="buyer-account-you">
+          <Card title="Profile" testID="buyer-account-you">
             <AppText color="muted">{`Signed in as ${user.name} (${user.email}). Change your password there.`}</AppText>
             <LinkButton href="/buyer/me" label="Your sign-in and password" icon="user" variant="secondary" testID="buyer-account-me" />
           </Card>

@@ -56,7 +56,7 @@ export function OrderHistoryScreen() {
 
   return (
     <Screen testID="history-screen">
-      <PageHeader overline="Wholesale ordering" title="Order history" subtitle={`Coming orders, and what was delivered in the last ${HISTORY_DAYS} days.`} testID="history-title" />
+      <PageHeader overline="Wholesale ordering" title="Orders" subtitle={`Coming orders, and what was delivered in the last ${HISTORY_DAYS} days.`} testID="history-title" />
       <ChoiceGroup<Show>
         label="Show"
         testID="history-show"

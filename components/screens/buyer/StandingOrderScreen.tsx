@@ -249,7 +249,7 @@ function StandingForm({ standing, products, weekdays, today, horizonDays }: Stan
       />
       {!standing ? <Notice tone="info" message="You don't have a standing order yet. Set quantities below and save to start one." testID="standing-none" /> : null}
       {weekdays.length === 0 ? (
-        <EmptyState icon="calendar" title="No delivery days for you" message="The bakery hasn't set any delivery days on your route. Call them to set it up." testID="standing-no-days" />
+        <EmptyState icon="calendar" title="No delivery days for you" message="The bakery hasn't set any delivery days for your account yet. Call them to set your delivery days." testID="standing-no-days" />
       ) : (
         <>
           <View style={styles.summary} testID="standing-summary">
@@ -470,7 +470,7 @@ function Upcoming({ standing, skipDates, onToggleSkip }: { standing: StandingOrd
     <Card title="Coming dates from your standing order" testID="standing-upcoming">
       {standing.upcoming.length === 0 ? (
         <AppText color="muted" testID="standing-upcoming-empty">
-          {standing.active ? "No dates in the ordering window yet." : "Paused: no dates are being made."}
+          {standing.active ? "No coming dates yet: they appear here as the bakery opens them for ordering." : "Paused: no dates are being made."}
         </AppText>
       ) : (
         <>

@@ -17,7 +17,7 @@ export function ProfileScreen() {
   const reset = usePasswordResetRequestMutation();
   return (
     <Screen narrow testID="profile-screen">
-      <PageHeader overline="Your sign-in" title={user.name} />
+      <PageHeader overline="Profile" title={user.name} />
       <Card title="Details">
         <DetailList
           items={[

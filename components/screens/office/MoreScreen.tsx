@@ -10,15 +10,16 @@ import { space } from "../../theme";
 import type { HomeArea } from "../../../shared/roles";
 
 const HINTS: Record<string, string> = {
-  production: "Bake day, formulas, ingredients, purchasing forecast and production settings.",
+  production: "Bake day, formulas, ingredients, purchasing and production settings.",
   ingredients: "The ingredient library: kinds, water content, allergens and purchase packs.",
   forecast: "What to buy for the next 7 days, in whole packs.",
   people: "Sign-ins for staff and wholesale buyers, and invitations.",
   "price-lists": "Own prices or a percentage off for some accounts.",
   calendar: "Delivery weekdays, the cut-off, and closed dates.",
   products: "What the bakery sells: prices, pans, allergens and photos.",
-  money: "Payouts, aging, CSV exports, outgoing e-mail and billing settings.",
-  me: "Your sign-in and password.",
+  money: "Payouts, aging, CSV exports and billing settings.",
+  outbox: "Every e-mail sent: orders, invoices, receipts, invitations and password resets.",
+  me: "Your profile: name, e-mail and password.",
 };
 
 /** On a phone, the screens of an area (the office, the baker's) that don't fit in the tab bar. */

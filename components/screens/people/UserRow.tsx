@@ -76,7 +76,7 @@ export function UserRow({ user, isSelf, wide }: UserRowProps) {
       {
         onSuccess: (saved) => {
           setEditing(false);
-          setDone(`${saved.name} is now ${ROLE_LABELS[saved.role].toLowerCase()}${saved.accountName ? ` for ${saved.accountName}` : ""}.`);
+          setDone(`${saved.name} is now ${saved.role === "owner" ? "the" : "a"} ${ROLE_LABELS[saved.role].toLowerCase()}${saved.accountName ? ` for ${saved.accountName}` : ""}.`);
         },
         onError: fail,
       },

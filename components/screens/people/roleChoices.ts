@@ -4,7 +4,7 @@ import type { Choice } from "../../ui/ChoiceGroup";
 export const ROLE_HINTS: Record<Role, string> = {
   owner: "Runs Panwise: people, accounts and everything else.",
   baker: "Sees the bake day.",
-  bookkeeper: "Sees customer accounts; can't change people.",
+  bookkeeper: "Issues and sends invoices, records payments, reconciles card payouts; sees orders and customer accounts; can't change people.",
   buyer: "Orders for one wholesale account (a café, restaurant or shop).",
 };
 

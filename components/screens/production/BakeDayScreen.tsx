@@ -321,7 +321,7 @@ function PlanBody({ date, plan, units, paths }: PlanBodyProps) {
       <SettingsFooter units={units} paths={paths} isOwner={user.role === "owner"} />
       <View style={styles.links}>
         <TextLink href={paths.orders(date) as never} label="Orders for this day" testID="open-day-orders" />
-        <TextLink href={paths.forecast() as never} label="Purchasing forecast" testID="open-forecast" />
+        <TextLink href={paths.forecast() as never} label="Purchasing" testID="open-forecast" />
         <TextLink href={paths.formulas as never} label="Formulas" testID="open-formulas" />
       </View>
     </>

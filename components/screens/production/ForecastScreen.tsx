@@ -59,7 +59,7 @@ export function ForecastScreen({ area, from: asked }: { area: KitchenArea; from?
   return (
     <Screen testID="forecast-screen">
       {paths.hub ? <TextLink href={paths.hub as never} label="‹ Production" testID="back-to-production" /> : null}
-      <PageHeader title="Purchasing forecast" subtitle="Seven days of orders, with standing orders still to come, in whole purchase packs (rounded up)." testID="forecast-title" />
+      <PageHeader title="Purchasing" subtitle="Seven days of orders, with standing orders still to come, in whole purchase packs (rounded up)." testID="forecast-title" />
       {from ? (
         <View style={styles.controls}>
           <View style={styles.range}>

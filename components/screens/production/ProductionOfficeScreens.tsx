@@ -328,7 +328,7 @@ const HUB_ITEMS: { key: string; label: string; hint: string; icon: React.Compone
   { key: "day", label: "Bake day", hint: "Pans, weigh-out cards, the timeline and the production sheet.", icon: "sun", href: () => kitchenPaths("office").day() },
   { key: "formulas", label: "Formulas", hint: "Doughs in baker's percentages, with their history.", icon: "book-open", href: () => kitchenPaths("office").formulas },
   { key: "ingredients", label: "Ingredients", hint: "Kinds, water content, allergens and purchase packs.", icon: "package", href: () => kitchenPaths("office").ingredients },
-  { key: "forecast", label: "Purchasing forecast", hint: "What the next 7 days need, in whole packs, with the cost.", icon: "shopping-cart", href: () => kitchenPaths("office").forecast() },
+  { key: "forecast", label: "Purchasing", hint: "What the next 7 days need, in whole packs, with the cost.", icon: "shopping-cart", href: () => kitchenPaths("office").forecast() },
   { key: "settings", label: "Production settings", hint: "Mixers, ovens, the crew, packing, the shift and overnight retard.", icon: "sliders", href: () => "/office/production/settings" },
 ];
 

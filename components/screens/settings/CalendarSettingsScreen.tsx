@@ -33,14 +33,14 @@ export function cutoffExample(today: string, s: Pick<CalendarSettingsDto, "timeZ
   return null;
 }
 
-/** The owner's delivery calendar: delivery weekdays, cut-off, how far ahead, and closure dates. */
+/** The owner's delivery days: delivery weekdays, cut-off, how far ahead, and closure dates. */
 export function CalendarSettingsScreen() {
   const settings = useCalendarSettingsQuery();
   return (
     <Screen narrow testID="calendar-settings">
       <PageHeader title="Delivery days" subtitle="When the bakery delivers and when ordering closes. Changes apply to every account at once." testID="calendar-settings-title" />
       {settings.isPending ? (
-        <LoadingState label="Loading the delivery calendar…" />
+        <LoadingState label="Loading the delivery days…" />
       ) : settings.isError ? (
         <ErrorState error={settings.error} onRetry={() => settings.refetch()} retrying={settings.isFetching} testID="calendar-settings-error" />
       ) : (
@@ -181,8 +181,8 @@ function SettingsForm({ initial }: { initial: CalendarSettingsDto }) {
       </Card>
 
       <FormError message={formError} testID="calendar-form-error" />
-      {saved ? <Notice message="Delivery calendar saved. Buyers see the new dates now." testID="calendar-saved" /> : null}
-      <Button label="Save delivery calendar" icon="check" onPress={submit} busy={save.isPending} testID="calendar-save" block />
+      {saved ? <Notice message="Delivery days saved. Buyers see the new dates now." testID="calendar-saved" /> : null}
+      <Button label="Save delivery days" icon="check" onPress={submit} busy={save.isPending} testID="calendar-save" block />
       <TextLink href="/office/production/settings" label="Production settings: mixer, dispatch time, ovens" testID="open-production-settings" />
     </>
   );

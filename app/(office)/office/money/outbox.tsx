@@ -1,11 +1,7 @@
 import React from "react";
-import { RequireRole } from "../../../../components/auth/RoleGate";
-import { OutboxScreen } from "../../../../components/screens/billing/OutboxScreen";
+import { Redirect } from "expo-router";
 
-export default function OutboxRoute() {
-  return (
-    <RequireRole roles={["owner"]}>
-      <OutboxScreen />
-    </RequireRole>
-  );
+/** Outgoing e-mail moved out of Money (it holds invitations and password resets too); old links still land. */
+export default function OldOutboxRoute() {
+  return <Redirect href="/office/outbox" />;
 }
