@@ -32,6 +32,7 @@ export async function getSettingsDto(ctx: AppContext): Promise<CalendarSettingsD
   const s = await loadCalendarSettings(ctx);
   return {
     timeZone: s.timeZone,
+    locale: (await getBakery(ctx)).locale,
     deliveryWeekdays: s.deliveryWeekdays,
     cutoffTime: s.cutoffTime,
     leadDays: s.leadDays,
@@ -45,6 +46,7 @@ export async function putSettings(ctx: AppContext, input: CalendarSettingsInput 
   await ctx.dataSource.transaction(async (m) => {
     await m.getRepository(Bakery).update({ id: bakery.id }, {
       timeZone: input.timeZone,
+      ...(input.locale ? { locale: input.locale } : {}),
       deliveryWeekdays: formatWeekdays(input.deliveryWeekdays as Weekday[])!,
       cutoffTime: input.cutoffTime,
       leadDays: Number(input.leadDays),
