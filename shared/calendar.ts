@@ -9,6 +9,8 @@ export const WEEKDAY_LONG: Record<Weekday, string> = { 1: "Monday", 2: "Tuesday"
 
 export interface CalendarSettings {
   timeZone: string;
+  /** The bakery's locale, for the words only (shared/format.ts); en-US when left out. */
+  locale?: string;
   /** Weekdays the bakery delivers on. */
   deliveryWeekdays: Weekday[];
   /** Local time of the cut-off, "HH:mm". */

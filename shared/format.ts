@@ -117,6 +117,16 @@ export function formatInstant(instant: string | number | Date, style: InstantSty
 }
 
 /**
+ * A time of day stored as data, "HH:mm" (a cut-off, a dispatch or shift time), as the locale writes it:
+ * "14:00" → "2:00 PM" (en-US), "14:00" (en-GB). Text that is not a valid HH:mm comes back as it is.
+ */
+export function formatTimeOfDay(hhmm: string, locale: string): string {
+  const m = /^([01]\d|2[0-3]):([0-5]\d)$/.exec(hhmm.trim());
+  if (!m) return hhmm;
+  return plain(dateFormat(locale, "UTC", INSTANT_STYLES.time, "time").format(new Date(Date.UTC(2000, 0, 1, Number(m[1]), Number(m[2])))));
+}
+
+/**
  * An ISO 8601 instant in the offset written into it (the production plan writes the bakery's offset into every
  * instant): "3:00 AM" for "…T03:00:00-05:00", whatever the device's zone. Through luxon's toLocaleString (Intl).
  */
@@ -159,6 +169,8 @@ export function formatterFor(locale: string | null | undefined, timeZone?: strin
     /** An instant in the bakery's zone. */
     at: (instant: string | number | Date, style: InstantStyle = "dayTime") => formatInstant(instant, style, l, timeZone),
     time: (instant: string | number | Date) => formatInstant(instant, "time", l, timeZone),
+    /** A stored "HH:mm" time of day. */
+    timeOfDay: (hhmm: string) => formatTimeOfDay(hhmm, l),
     number: (n: number, minDecimals = 0, maxDecimals = minDecimals) => formatNumber(n, l, minDecimals, maxDecimals),
     money: (minor: number, currency = "USD") => formatMoney(minor, currency, l),
   };

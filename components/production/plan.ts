@@ -5,7 +5,7 @@ import type { CalendarSettingsDto } from "../../shared/schemas/calendar";
 import type { PlanView } from "../api/production";
 import { mixKey, type ProductionSettingsDto } from "../api/production";
 import type { Units } from "../../shared/units";
-import { formatAtOwnOffset, formatNumber } from "../../shared/format";
+import { formatAtOwnOffset, formatNumber, formatTimeOfDay } from "../../shared/format";
 import { currentLocale } from "../format";
 
 export type TimelineEntry = PlanView["timeline"][number];
@@ -129,7 +129,7 @@ export function settingsLines(s: ProductionSettingsDto, units: Pick<Units, "capa
   return {
     mixers: s.mixers.map((m) => `${m.name}, ${units.capacity(m.capacityKg)}`).join("; "),
     ovens: ovens.join("; "),
-    crew: `${s.crew.people === 1 ? "1 person" : `${s.crew.people} people`}${s.shiftStart ? ` from ${s.shiftStart}` : ""} · packing ${s.packingMinutes} min before dispatch`,
+    crew: `${s.crew.people === 1 ? "1 person" : `${s.crew.people} people`}${s.shiftStart ? ` from ${formatTimeOfDay(s.shiftStart, currentLocale())}` : ""} · packing ${s.packingMinutes} min before dispatch`,
   };
 }
 
