@@ -13,7 +13,7 @@
  * | `dayShort`    | Tue, Jun 9                | Tue 9 Jun              |
  * | `dayLong`     | Tuesday, June 9           | Tuesday 9 June         |
  * | `dayWithYear` | June 9, 2026              | 9 June 2026            |
- * | `dayFull`     | Tuesday, June 9, 2026     | Tuesday 9 June 2026    |
+ * | `dayFull`     | Tuesday, June 9, 2026     | Tuesday, 9 June 2026   |
  * | `date`        | Jun 9, 2026               | 9 Jun 2026             |
  * | `time`        | 2:00 PM                   | 14:00                  |
  * | `hour`        | 2 PM                      | 14                     |
