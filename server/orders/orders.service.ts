@@ -168,7 +168,7 @@ export async function createOrder(ctx: AppContext, actor: SessionUser | null, in
     await m.getRepository(CustomerAccount).createQueryBuilder("a").setLock("pessimistic_write").where("a.id = :id", { id: account.id }).getOne();
     refuseIfAccountBlocked(account, bakery);
     const st = dateStatus(input.deliveryDate, settings, ctx.clock.now(), parseWeekdays(account.routeWeekdays));
-    if (st.reason === "past_cutoff") throw cutoffPassed(DateTime.fromISO(st.cutoffAt, { setZone: true }), settings.timeZone, input.deliveryDate);
+    if (st.reason === "past_cutoff") throw cutoffPassed(DateTime.fromISO(st.cutoffAt, { setZone: true }), settings.timeZone, input.deliveryDate, settings.locale);
     if (!st.orderable) throw new HttpError(409, "date_not_orderable", `You can't order for this date: ${REASON_TEXT[st.reason!].toLowerCase()}.`, undefined, { reason: st.reason });
     const products = await checkLines(ctx, m, input.lines, input.deliveryDate, settings);
     const { priced, total } = await priceLines(ctx, m, account.id, input.lines, products, bakery.currency, bakery.locale);
@@ -218,7 +218,7 @@ export async function updateOrder(ctx: AppContext, actor: SessionUser, id: numbe
       patch.totalCents = total;
     } else {
       const c = orderCutoff(order.deliveryDate, settings, oldProducts);
-      if (ctx.clock.now().getTime() >= c.toMillis()) throw cutoffPassed(c, settings.timeZone, order.deliveryDate);
+      if (ctx.clock.now().getTime() >= c.toMillis()) throw cutoffPassed(c, settings.timeZone, order.deliveryDate, settings.locale);
       // Same lines, same PO number, same note: nothing changed, so no write and no "Order changed" mail.
       if (!("poNumber" in patch) && !("note" in patch)) return (await orderDtos(ctx, [order], m))[0];
     }
@@ -238,7 +238,7 @@ export async function cancelOrder(ctx: AppContext, actor: SessionUser, id: numbe
     const lines = await m.getRepository(OrderLine).findBy({ orderId: order.id });
     const products = await m.getRepository(Product).findBy({ id: In(lines.map((l) => l.productId).concat([0])) });
     const c = orderCutoff(order.deliveryDate, settings, products);
-    if (ctx.clock.now().getTime() >= c.toMillis()) throw cutoffPassed(c, settings.timeZone, order.deliveryDate);
+    if (ctx.clock.now().getTime() >= c.toMillis()) throw cutoffPassed(c, settings.timeZone, order.deliveryDate, settings.locale);
     await m.getRepository(Order).update({ id: order.id }, { status: "cancelled", editedByHand: order.source === "standing" ? true : order.editedByHand });
     const cancelled = (await orderDtos(ctx, [(await m.getRepository(Order).findOneBy({ id: order.id }))!], m))[0];
     await queueOrderMail(ctx, m, cancelled, "cancelled");
@@ -255,9 +255,9 @@ async function lockOrderForWrite(ctx: AppContext, m: EntityManager, actor: Sessi
   const dateCutoff = cutoffFor(order.deliveryDate, settings);
   if (order.status === "open" && ctx.clock.now().getTime() >= dateCutoff.toMillis()) {
     // The refusal rolls this transaction back; the caller locks the order afterwards (lockAfterRefusal).
-    throw Object.assign(cutoffPassed(dateCutoff, settings.timeZone, order.deliveryDate), { lockOrderId: order.id });
+    throw Object.assign(cutoffPassed(dateCutoff, settings.timeZone, order.deliveryDate, settings.locale), { lockOrderId: order.id });
   }
-  if (order.status === "locked") throw cutoffPassed(dateCutoff, settings.timeZone, order.deliveryDate);
+  if (order.status === "locked") throw cutoffPassed(dateCutoff, settings.timeZone, order.deliveryDate, settings.locale);
   if (order.status !== "open") throw new HttpError(409, "order_closed", `This order is ${order.status} and can no longer be changed.`);
   refuseIfAccountBlocked(account, bakery);
   return order;
