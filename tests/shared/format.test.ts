@@ -154,3 +154,28 @@ describe("the locale setting", () => {
     expect(formatterFor(undefined).day("2026-06-09")).toBe("Tue, Jun 9");
   });
 });
+
+describe("no hand-made display patterns (the rule in DEVELOPERS.md: every display string through shared/format.ts)", () => {
+  // eslint-disable-next-line @typescript-eslint/no-require-imports
+  const fs = require("fs") as typeof import("fs");
+  // eslint-disable-next-line @typescript-eslint/no-require-imports
+  const path = require("path") as typeof import("path");
+  const root = path.join(__dirname, "..", "..");
+  const files: string[] = [];
+  const walk = (dir: string) => {
+    for (const e of fs.readdirSync(dir, { withFileTypes: true })) {
+      const p = path.join(dir, e.name);
+      if (e.isDirectory()) walk(p);
+      else if (/\.tsx?$/.test(e.name)) files.push(p);
+    }
+  };
+  for (const d of ["app", "components", "server", "shared"]) walk(path.join(root, d));
+  it.each([
+    ["luxon toFormat patterns", /\.toFormat\(/],
+    ["toLocaleString / toLocaleDateString / toLocaleTimeString with a fixed locale", /\.toLocale(Date|Time)?String\(\s*["']/],
+    ["Intl formatters with a fixed locale outside shared/format.ts", /new Intl\.(DateTimeFormat|NumberFormat)\(\s*["']/],
+  ])("%s", (_what, re) => {
+    const offenders = files.filter((f) => !f.endsWith(path.join("shared", "format.ts")) && re.test(fs.readFileSync(f, "utf8")));
+    expect(offenders.map((f) => path.relative(root, f))).toEqual([]);
+  });
+});
