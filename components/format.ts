@@ -1,48 +1,47 @@
-/** Dates and times, always in the bakery's own time zone when we know it. */
-export const LOCALE = "en-US";
+/**
+ * Dates, times and numbers on the screens, always in the bakery's own locale and time zone when we know them.
+ * Everything goes through shared/format.ts (Intl); the locale is the bakery's `locale` setting, learned from
+ * the bakery query (components/api/bakery.ts sets it here when it loads) and en-US until then. Components that
+ * must redraw when it changes use `useFormat()` (components/api/bakery.ts).
+ */
+import { DEFAULT_LOCALE, formatCalendarDate, formatInstant, formatNumber, hourIn, localeOr } from "../shared/format";
 
-function safeFormat(date: Date, options: Intl.DateTimeFormatOptions): string {
-  try {
-    return new Intl.DateTimeFormat(LOCALE, options).format(date);
-  } catch {
-    // Unknown time zone on this device: fall back to the device's own.
-    const { timeZone: _dropped, ...rest } = options;
-    return new Intl.DateTimeFormat(LOCALE, rest).format(date);
-  }
+let displayLocale: string = DEFAULT_LOCALE;
+/** The bakery's locale for every screen (the bakery query calls this when it loads). */
+export function setDisplayLocale(tag: string | null | undefined): void {
+  displayLocale = localeOr(tag);
+}
+/** The locale screens format with now: the bakery's, or en-US until the bakery has loaded. */
+export function currentLocale(): string {
+  return displayLocale;
+}
+
+/** A plain number in the bakery's locale: "1,200", "2.5". */
+export function formatNum(n: number, minDecimals = 0, maxDecimals = minDecimals): string {
+  return formatNumber(n, displayLocale, minDecimals, maxDecimals);
 }
 
 /** "Tuesday, December 2, 2025" for the bakery's today. */
 export function formatBakeDay(today: string, now: string, timeZone: string): string {
-  const instant = new Date(now);
-  if (!Number.isNaN(instant.getTime())) {
-    return safeFormat(instant, { timeZone, weekday: "long", year: "numeric", month: "long", day: "numeric" });
-  }
-  // No usable instant: show the calendar date as given (noon UTC avoids any day shift).
-  const date = new Date(`${today}T12:00:00Z`);
-  return safeFormat(date, { timeZone: "UTC", weekday: "long", year: "numeric", month: "long", day: "numeric" });
+  // No usable instant: the calendar date as given (no time zone, no day shift).
+  return formatInstant(now, "dayFull", displayLocale, timeZone) || formatCalendarDate(today, "dayFull", displayLocale);
 }
 
 /** "5:42 AM" at the bakery. */
 export function formatClock(now: string, timeZone: string): string {
-  const instant = new Date(now);
-  if (Number.isNaN(instant.getTime())) return "";
-  return safeFormat(instant, { timeZone, hour: "numeric", minute: "2-digit" });
+  return formatInstant(now, "time", displayLocale, timeZone);
 }
 
 /** "Dec 2, 2025, 5:42 AM", or "Never" for no date. */
 export function formatDateTime(iso: string | null | undefined, timeZone?: string): string {
   if (!iso) return "Never";
-  const d = new Date(iso);
-  if (Number.isNaN(d.getTime())) return "Unknown";
-  return safeFormat(d, { timeZone, year: "numeric", month: "short", day: "numeric", hour: "numeric", minute: "2-digit" });
+  return formatInstant(iso, "dateTime", displayLocale, timeZone) || "Unknown";
 }
 
 /** "Dec 2, 2025". */
 export function formatDate(iso: string | null | undefined, timeZone?: string): string {
   if (!iso) return "Never";
-  const d = new Date(iso);
-  if (Number.isNaN(d.getTime())) return "Unknown";
-  return safeFormat(d, { timeZone, year: "numeric", month: "short", day: "numeric" });
+  return formatInstant(iso, "date", displayLocale, timeZone) || "Unknown";
 }
 
 export function firstName(name: string): string {
@@ -53,12 +52,7 @@ export function firstName(name: string): string {
 export function greetingAt(now: string, timeZone?: string): string {
   const instant = new Date(now);
   if (Number.isNaN(instant.getTime())) return "Hello";
-  let hour: number;
-  try {
-    hour = Number(new Intl.DateTimeFormat("en-GB", { timeZone, hour: "2-digit", hourCycle: "h23" }).format(instant));
-  } catch {
-    hour = instant.getHours();
-  }
+  const hour = hourIn(instant, timeZone);
   if (hour < 12) return "Good morning";
   if (hour < 18) return "Good afternoon";
   return "Good evening";

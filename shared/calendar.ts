@@ -1,4 +1,5 @@
 import { DateTime } from "luxon";
+import { DEFAULT_LOCALE, formatDateTimeIn } from "./format";
 
 /** ISO weekday numbers as luxon and ISO 8601 use them: 1 = Monday … 7 = Sunday. */
 export const WEEKDAYS = [1, 2, 3, 4, 5, 6, 7] as const;
@@ -8,6 +9,8 @@ export const WEEKDAY_LONG: Record<Weekday, string> = { 1: "Monday", 2: "Tuesday"
 
 export interface CalendarSettings {
   timeZone: string;
+  /** The bakery's locale, for the words only (shared/format.ts); en-US when left out. */
+  locale?: string;
   /** Weekdays the bakery delivers on. */
   deliveryWeekdays: Weekday[];
   /** Local time of the cut-off, "HH:mm". */
@@ -127,8 +130,8 @@ export function dateStatus(date: string, settings: CalendarSettings, now: Date, 
   return { date, orderable: reason === null, reason, cutoffAt: cutoff.toISO()! };
 }
 
-/** "Tue 9 Jun, 14:00 CDT": a cut-off as the bakery's people read it. */
-export function formatLocal(instant: string | DateTime, timeZone: string): string {
+/** "Tue, Jun 9, 2:00 PM CDT" (en-US; "Tue 9 Jun, 14:00 GMT-5" in en-GB): a cut-off as the bakery's people read it, in the bakery's locale. */
+export function formatLocal(instant: string | DateTime, timeZone: string, locale: string = DEFAULT_LOCALE): string {
   const dt = typeof instant === "string" ? DateTime.fromISO(instant, { setZone: true }).setZone(timeZone) : instant.setZone(timeZone);
-  return dt.toFormat("ccc d LLL, HH:mm ZZZZ");
+  return formatDateTimeIn(dt, "dayTimeZone", locale);
 }

@@ -8,9 +8,14 @@ export function minorUnitExponent(currency: string): number {
   return MINOR_UNITS[currency.toUpperCase()] ?? 2;
 }
 
+const moneyFormats = new Map<string, Intl.NumberFormat>();
+/** An amount for a person, in the bakery's locale (shared/format.ts passes it): "$12.50" in en-US, "US$12.50" in en-GB. */
 export function formatMoney(minor: number, currency = "USD", locale = "en-US"): string {
   const exp = minorUnitExponent(currency);
-  return new Intl.NumberFormat(locale, { style: "currency", currency, minimumFractionDigits: exp, maximumFractionDigits: exp }).format(minor / 10 ** exp);
+  const key = `${locale}|${currency}`;
+  let f = moneyFormats.get(key);
+  if (!f) moneyFormats.set(key, (f = new Intl.NumberFormat(locale, { style: "currency", currency, minimumFractionDigits: exp, maximumFractionDigits: exp })));
+  return f.format(minor / 10 ** exp).replace(/\u202f/g, " ");
 }
 
 /** "12.50" → 1250 for USD; null when it is not an amount with at most the currency's decimals. */

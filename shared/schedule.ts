@@ -25,6 +25,7 @@
  * the first step that does and by how much, and offers the earlier start.
  */
 import { DateTime, type Zone } from "luxon";
+import { formatAtOwnOffset, localeOr } from "./format";
 import { STEP_LABELS, type StepKind, type StepSpec } from "./production";
 
 // ---- inputs ------------------------------------------------------------------------------------
@@ -107,6 +108,8 @@ export interface ScheduleInput {
   /** The delivery date, YYYY-MM-DD. */
   date: string;
   timeZone: string;
+  /** The bakery's locale for the times in notes and conflicts (shared/format.ts); en-US when left out. */
+  locale?: string;
   /** "06:30", bakery time on the delivery date. */
   dispatchTime: string;
   resources: BakehouseResources;
@@ -523,13 +526,10 @@ export function scheduleDay(input: ScheduleInput): DaySchedule {
   const packFrom = dispatch - Math.max(0, res.packingMinutes);
   const shiftDt = lastLocalTimeAtOrBefore(res.shiftStart, dispatchDt);
   const shiftStart = Math.round(shiftDt.toMillis() / MS_PER_MIN);
-  const hhmm = (min: number) => iso(min).slice(11, 16);
+  const locale = localeOr(input.locale);
   const dayOf = (min: number) => iso(min).slice(0, 10);
-  const whenText = (min: number) => {
-    const d = dayOf(min);
-    if (d === input.date) return hhmm(min);
-    return `${DateTime.fromISO(d).toFormat("ccc")} ${hhmm(min)}`;
-  };
+  /** "4:10 AM", or "Mon 11:50 PM" on another day than the bake day (en-US). */
+  const whenText = (min: number) => formatAtOwnOffset(iso(min), dayOf(min) === input.date ? "time" : "weekdayTime", locale);
 
   const formulas = new Map(input.formulas.map((f) => [f.id, f]));
   const conflicts: ScheduleConflict[] = [];

@@ -6,6 +6,8 @@
  * 1 avoirdupois pound = 453.592 37 g exactly; 1 ounce = 1/16 lb = 28.349 523 125 g exactly;
  * 1 inch = 25.4 mm exactly; t(°F) = t(°C) × 9/5 + 32.
  */
+import { DEFAULT_LOCALE, formatNumber, localeOr } from "./format";
+
 export const GRAMS_PER_POUND = 453.59237;
 export const GRAMS_PER_OUNCE = GRAMS_PER_POUND / 16; // 28.349523125
 export const MM_PER_INCH = 25.4;
@@ -21,14 +23,23 @@ export type UnitSystem = "metric" | "us";
 const EPS = 1e-9;
 /** Half away from zero, with a nudge so 0.5 steps that binary floating point stores as 0.4999… still round up. */
 const roundTo = (x: number, step: number) => Math.round((x + Math.sign(x) * EPS) / step) * step;
-const formats = new Map<string, Intl.NumberFormat>();
-/** en-US digits with thousands commas, min–max decimals (formatters cached: toLocaleString builds one per call). */
-const num = (x: number, min: number, max: number) => {
-  const key = `${min}-${max}`;
-  let f = formats.get(key);
-  if (!f) formats.set(key, (f = new Intl.NumberFormat("en-US", { minimumFractionDigits: min, maximumFractionDigits: max })));
-  return f.format(x);
-};
+/**
+ * Digits in the bakery's locale (shared/format.ts formatNumber, cached), min–max decimals. The sheet's locale is
+ * set by `unitsFor(system, locale)`; the four English locales Panwise offers all group with "," and mark decimals
+ * with ".", so a caller without one (the schemas' messages) writes the same digits.
+ */
+let unitLocale: string = DEFAULT_LOCALE;
+const num = (x: number, min: number, max: number) => formatNumber(x, unitLocale, min, max);
+/** Run fn with this locale's digits (unitsFor's formatters do). */
+function inLocale<T>(locale: string, fn: () => T): T {
+  const before = unitLocale;
+  unitLocale = locale;
+  try {
+    return fn();
+  } finally {
+    unitLocale = before;
+  }
+}
 
 /**
  * A weight to weigh out, at the sheet's resolution: 1 g, or 0.1 g under 50 g (salt, yeast for a small mix).
@@ -115,22 +126,26 @@ export function formatCount(n: number, one: string, many: string): string {
   return `${num(n, 0, 0)} ${n === 1 ? one : many}`;
 }
 
-/** Formatters bound to a unit system (the screens hold one, the PDF makes one per sheet). */
-export function unitsFor(system: UnitSystem) {
+/** Formatters bound to a unit system and the bakery's locale (the screens hold one, the PDF makes one per sheet). */
+export function unitsFor(system: UnitSystem, locale: string = DEFAULT_LOCALE) {
+  const l = localeOr(locale);
   return {
     system,
-    mass: (grams: number) => formatMass(grams, system),
-    piece: (grams: number) => formatPieceWeight(grams, system),
-    capacity: (kg: number) => formatCapacity(kg, system),
-    temp: (celsius: number) => formatTemperature(celsius, system),
+    locale: l,
+    mass: (grams: number) => inLocale(l, () => formatMass(grams, system)),
+    piece: (grams: number) => inLocale(l, () => formatPieceWeight(grams, system)),
+    capacity: (kg: number) => inLocale(l, () => formatCapacity(kg, system)),
+    temp: (celsius: number) => inLocale(l, () => formatTemperature(celsius, system)),
     /** "°C" or "°F". */
     tempUnit: tempUnitOf(system),
     /** A stored °C value as the number typed in this system ("22", "72"). */
     tempInput: (celsius: number) => temperatureInput(celsius, system),
     /** A typed number in this system back to °C (to 0.1), or NaN. */
     toCelsius: (typed: string) => typedToCelsius(typed, system),
-    count: formatCount,
-    percent: formatPercent,
+    count: (n: number, one: string, many: string) => inLocale(l, () => formatCount(n, one, many)),
+    percent: (percent: number, digits = 1) => inLocale(l, () => formatPercent(percent, digits)),
+    /** A plain number in the locale: "1,200". */
+    number: (n: number, minDecimals = 0, maxDecimals = minDecimals) => formatNumber(n, l, minDecimals, maxDecimals),
   };
 }
 

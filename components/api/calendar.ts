@@ -1,4 +1,5 @@
 import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
+import { bakeryKeys } from "./bakery";
 import { api } from "./client";
 import type { CalendarDayDto, CalendarSettingsDto, CalendarSettingsInput } from "../../shared/schemas/calendar";
 
@@ -41,6 +42,8 @@ export function useSaveCalendarSettingsMutation() {
     onSuccess: (settings) => {
       qc.setQueryData(calendarKeys.settings(), settings);
       void qc.invalidateQueries({ queryKey: calendarKeys.all });
+      // The locale is the bakery's: every screen's dates, times and amounts follow it.
+      void qc.invalidateQueries({ queryKey: bakeryKeys.all });
     },
   });
 }

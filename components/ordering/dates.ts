@@ -1,22 +1,21 @@
 import { DateTime } from "luxon";
 import { addDays, formatLocal, isSupportedDate } from "../../shared/calendar";
+import { formatCalendarDate } from "../../shared/format";
+import { currentLocale } from "../format";
 
-/** A calendar date (no time zone involved): "Thu 4 Dec". */
+/** A calendar date (no time zone involved), in the bakery's locale: "Thu, Dec 4" (en-US). */
 export function formatDay(date: string): string {
-  const d = DateTime.fromISO(date, { zone: "UTC" });
-  return d.isValid ? d.toFormat("ccc d LLL") : date;
+  return formatCalendarDate(date, "dayShort", currentLocale());
 }
 
-/** "Thursday 4 December". */
+/** "Thursday, December 4" (en-US). */
 export function formatDayLong(date: string): string {
-  const d = DateTime.fromISO(date, { zone: "UTC" });
-  return d.isValid ? d.toFormat("cccc d LLLL") : date;
+  return formatCalendarDate(date, "dayLong", currentLocale());
 }
 
-/** "Thursday 4 December 2025". */
+/** "Thursday, December 4, 2025" (en-US). */
 export function formatDayWithYear(date: string): string {
-  const d = DateTime.fromISO(date, { zone: "UTC" });
-  return d.isValid ? d.toFormat("cccc d LLLL yyyy") : date;
+  return formatCalendarDate(date, "dayFull", currentLocale());
 }
 
 /** "Today", "Tomorrow" or null, by the bakery's today. */
@@ -27,18 +26,18 @@ export function relativeDay(date: string, today: string | undefined): string | n
   return null;
 }
 
-/** "Tomorrow · Wed 3 Dec" or "Fri 5 Dec". */
+/** "Tomorrow · Wed, Dec 3" or "Fri, Dec 5" (en-US). */
 export function dayHeading(date: string, today: string | undefined): string {
   const rel = relativeDay(date, today);
   return rel ? `${rel} · ${formatDay(date)}` : formatDay(date);
 }
 
-/** A cut-off instant in the bakery's zone, "Wed 3 Dec, 14:00 CST"; "" when unreadable. */
+/** A cut-off instant in the bakery's zone and locale, "Wed, Dec 3, 2:00 PM CST" (en-US); "" when unreadable. */
 export function formatCutoff(iso: string, timeZone: string | undefined): string {
   try {
     const dt = DateTime.fromISO(iso, { setZone: true });
     if (!dt.isValid) return "";
-    return formatLocal(iso, timeZone || dt.zoneName || "UTC");
+    return formatLocal(iso, timeZone || dt.zoneName || "UTC", currentLocale());
   } catch {
     return "";
   }

@@ -5,20 +5,20 @@ import type { CalendarSettingsDto } from "../../shared/schemas/calendar";
 import type { PlanView } from "../api/production";
 import { mixKey, type ProductionSettingsDto } from "../api/production";
 import type { Units } from "../../shared/units";
+import { formatAtOwnOffset, formatNumber, formatTimeOfDay } from "../../shared/format";
+import { currentLocale } from "../format";
 
 export type TimelineEntry = PlanView["timeline"][number];
 export type Caution = (typeof PRODUCTION_CAUTIONS)[number];
 
-/** "01:40": a time in the bakery's zone (the API writes its offset into every instant). */
+/** "1:40 AM" (en-US): a time in the bakery's zone (the API writes its offset into every instant) and locale. */
 export function localTime(iso: string): string {
-  const dt = DateTime.fromISO(iso, { setZone: true });
-  return dt.isValid ? dt.toFormat("HH:mm") : "";
+  return formatAtOwnOffset(iso, "time", currentLocale());
 }
 
-/** "Tue 1 Dec, 14:00": an instant in the bakery's zone, without the zone name. */
+/** "Tue, Dec 1, 2:00 PM" (en-US): an instant in the bakery's zone and locale, without the zone name. */
 export function localDayTime(iso: string): string {
-  const dt = DateTime.fromISO(iso, { setZone: true });
-  return dt.isValid ? dt.toFormat("ccc d LLL, HH:mm") : "";
+  return formatAtOwnOffset(iso, "dayTime", currentLocale());
 }
 
 export const timeRange = (e: Pick<TimelineEntry, "startsAt" | "endsAt">) => `${localTime(e.startsAt)}–${localTime(e.endsAt)}`;
@@ -111,11 +111,11 @@ export function resourceLanes(plan: Pick<PlanView, "timeline"> & { schedule?: Pl
   });
 }
 
-/** "01:40–01:55", with the weekday where a step falls on another day than the bake day ("Fri 23:50–00:30"). */
+/** "1:40 AM–1:55 AM" (en-US), with the weekday where a step falls on another day than the bake day ("Fri 11:50 PM–12:30 AM"). */
 export function timeRangeOn(e: Pick<TimelineEntry, "startsAt" | "endsAt">, date: string): string {
   const day = (iso: string) => {
     const dt = DateTime.fromISO(iso, { setZone: true });
-    return dt.isValid && dt.toISODate() !== date ? `${dt.toFormat("ccc")} ` : "";
+    return dt.isValid && dt.toISODate() !== date ? `${formatAtOwnOffset(iso, "weekday", currentLocale())} ` : "";
   };
   return `${day(e.startsAt)}${localTime(e.startsAt)}–${localTime(e.endsAt)}`;
 }
@@ -125,11 +125,11 @@ export { minutesText } from "../../shared/schedule";
 
 /** One line each for the bake-day footer: the mixers, the ovens, the crew and packing. */
 export function settingsLines(s: ProductionSettingsDto, units: Pick<Units, "capacity">): { mixers: string; ovens: string; crew: string } {
-  const ovens = s.ovens.map((o) => `${o.name} (${o.capacity.kind === "area" ? `${o.capacity.areaCm2.toLocaleString("en-US")} cm² of shelf` : `${o.capacity.slots.length} pan ${o.capacity.slots.length === 1 ? "slot" : "slots"}`})`);
+  const ovens = s.ovens.map((o) => `${o.name} (${o.capacity.kind === "area" ? `${formatNumber(o.capacity.areaCm2, currentLocale())} cm² of shelf` : `${o.capacity.slots.length} pan ${o.capacity.slots.length === 1 ? "slot" : "slots"}`})`);
   return {
     mixers: s.mixers.map((m) => `${m.name}, ${units.capacity(m.capacityKg)}`).join("; "),
     ovens: ovens.join("; "),
-    crew: `${s.crew.people === 1 ? "1 person" : `${s.crew.people} people`}${s.shiftStart ? ` from ${s.shiftStart}` : ""} · packing ${s.packingMinutes} min before dispatch`,
+    crew: `${s.crew.people === 1 ? "1 person" : `${s.crew.people} people`}${s.shiftStart ? ` from ${formatTimeOfDay(s.shiftStart, currentLocale())}` : ""} · packing ${s.packingMinutes} min before dispatch`,
   };
 }
 
@@ -146,14 +146,14 @@ export function timelineSpan(timeline: TimelineEntry[]): { start: number; end: n
   return end > start ? { start, end } : null;
 }
 
-/** Whole hours inside a span, for the chart's grid lines: instants and their "02:00" labels. */
+/** Whole hours inside a span, for the chart's grid lines: instants and their "2 AM" labels (en-US; "02" in en-GB). */
 export function hourTicks(span: { start: number; end: number }, sampleIso: string): { at: number; label: string }[] {
   const zone = DateTime.fromISO(sampleIso, { setZone: true }).zone;
   let t = DateTime.fromMillis(span.start, { zone }).startOf("hour");
   if (t.toMillis() < span.start) t = t.plus({ hours: 1 });
   const out: { at: number; label: string }[] = [];
   while (t.toMillis() <= span.end && out.length < 48) {
-    out.push({ at: t.toMillis(), label: t.toFormat("HH:mm") });
+    out.push({ at: t.toMillis(), label: formatAtOwnOffset(t.toISO()!, "hour", currentLocale()) });
     t = t.plus({ hours: 1 });
   }
   return out;
@@ -212,8 +212,8 @@ export function upcomingBakeDays(from: string, count: number, settings?: Pick<Ca
   return out;
 }
 
-/** The clock as "03:12" in the zone of an instant the plan gave (the bakery's). */
+/** The clock as "3:12 AM" (en-US) in the zone of an instant the plan gave (the bakery's). */
 export function clockIn(now: number, sampleIso: string): string {
   const zone = DateTime.fromISO(sampleIso, { setZone: true }).zone;
-  return DateTime.fromMillis(now, { zone }).toFormat("HH:mm");
+  return formatAtOwnOffset(DateTime.fromMillis(now, { zone }).toISO()!, "time", currentLocale());
 }

@@ -1,6 +1,7 @@
 import { useSyncExternalStore } from "react";
 import { sessionStore } from "../auth/storage";
 import { unitsFor, type Units, type UnitSystem } from "../../shared/units";
+import { currentLocale } from "../format";
 
 // The formatters live in shared/units.ts (the PDFs use the same ones); this module only remembers the choice.
 export { formatPercent, unitsFor, type Units } from "../../shared/units";
@@ -46,5 +47,5 @@ export function useUnitSystem(): [UnitSystem, (system: UnitSystem) => void] {
 
 export function useUnits(): Units & { setSystem: (system: UnitSystem) => void } {
   const [system, setSystem] = useUnitSystem();
-  return { ...unitsFor(system), setSystem };
+  return { ...unitsFor(system, currentLocale()), setSystem };
 }

@@ -16,6 +16,10 @@ export class Bakery {
   @Column({ type: "char", length: 3, default: "USD" })
   currency: string;
 
+  /** BCP 47 locale every date, time, number and amount is written in (shared/format.ts SUPPORTED_LOCALES). */
+  @Column({ type: "varchar", length: 35, default: "en-US" })
+  locale: string;
+
   @Column({ type: "varchar", length: 254, default: "" })
   email: string;
 

@@ -18,6 +18,7 @@ export function bakeryDto(ctx: AppContext, bakery: Bakery): BakeryDto {
     name: bakery.name,
     timeZone: bakery.timeZone,
     currency: bakery.currency,
+    locale: bakery.locale,
     email: bakery.email,
     phone: bakery.phone,
     address: bakery.address,

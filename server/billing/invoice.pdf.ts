@@ -1,8 +1,7 @@
 import PDFDocument from "pdfkit";
-import { DateTime } from "luxon";
 import type { Bakery } from "../bakery/bakery.entity";
 import type { CustomerAccount } from "../accounts/account.entity";
-import { formatMoney } from "../../shared/money";
+import { formatterFor } from "../../shared/format";
 import { PAYMENT_TERMS_LABELS, type PaymentTerms } from "../../shared/billing";
 import type { invoiceDetail } from "./invoices.service";
 
@@ -18,8 +17,9 @@ export function renderInvoicePdf(d: Detail & { bakery: Bakery; account: Customer
   const chunks: Buffer[] = [];
   doc.on("data", (c: Buffer) => chunks.push(c));
   const done = new Promise<Buffer>((resolve) => doc.on("end", () => resolve(Buffer.concat(chunks))));
-  const money = (c: number) => formatMoney(c, inv.currency);
-  const date = (iso: string) => DateTime.fromISO(iso).toFormat("d LLL yyyy");
+  const f = formatterFor(bakery.locale, bakery.timeZone);
+  const money = (c: number) => f.money(c, inv.currency);
+  const date = (iso: string) => f.day(iso.slice(0, 10), "date");
   const width = doc.page.width - 96;
 
   doc.font("Helvetica-Bold").fontSize(18).fillColor(CRUST).text(bakery.name);
@@ -59,7 +59,7 @@ export function renderInvoicePdf(d: Detail & { bakery: Bakery; account: Customer
     doc.x = 48;
   };
   total("Subtotal", money(inv.subtotalCents));
-  total(inv.taxExempt ? "Sales tax (exempt: certificate on file)" : `Sales tax ${(inv.taxRateBp / 100).toFixed(2)} %`, money(inv.taxCents));
+  total(inv.taxExempt ? "Sales tax (exempt: certificate on file)" : `Sales tax ${f.number(inv.taxRateBp / 100, 2)} %`, money(inv.taxCents));
   total("Total", money(inv.totalCents), true);
   // An en dash, not U+2212: the built-in Helvetica is WinAnsi-encoded and has no minus sign, so "−" was drawn
   // as a wrong, wider glyph than pdfkit measured and ran past the right margin.

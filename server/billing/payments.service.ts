@@ -379,7 +379,7 @@ async function queueReceipt(ctx: AppContext, m: EntityManager, invoiceId: number
   const inv = await m.getRepository(Invoice).findOneByOrFail({ id: invoiceId });
   const account = await m.getRepository(CustomerAccount).findOneByOrFail({ id: inv.accountId });
   const bakery = await getBakery(ctx, m);
-  const mail = receiptMail({ bakeryName: bakery.name, currency: bakery.currency, number: inv.number, amountCents, method: PAYMENT_METHOD_LABELS[method].toLowerCase(), url: `${ctx.config.publicUrl}/buyer/invoices/${inv.id}` });
+  const mail = receiptMail({ bakeryName: bakery.name, currency: bakery.currency, locale: bakery.locale, number: inv.number, amountCents, method: PAYMENT_METHOD_LABELS[method].toLowerCase(), url: `${ctx.config.publicUrl}/buyer/invoices/${inv.id}` });
   await enqueueMail(m, ctx, "receipt", { to: account.billingEmail, fromName: bakery.name, ...mail });
 }
 

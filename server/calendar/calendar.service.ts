@@ -1,4 +1,5 @@
 import type { EntityManager } from "typeorm";
+import { localeOr } from "../../shared/format";
 import type { AppContext } from "../http/context";
 import { Bakery } from "../bakery/bakery.entity";
 import { BakeryClosure } from "./closure.entity";
@@ -19,6 +20,7 @@ export async function loadCalendarSettings(ctx: AppContext, m: EntityManager = c
   const closures = await m.getRepository(BakeryClosure).find({ order: { date: "ASC" } });
   return {
     timeZone: bakery.timeZone,
+    locale: bakery.locale,
     deliveryWeekdays: parseWeekdays(bakery.deliveryWeekdays) ?? [],
     cutoffTime: bakery.cutoffTime,
     leadDays: bakery.leadDays,
@@ -32,6 +34,7 @@ export async function getSettingsDto(ctx: AppContext): Promise<CalendarSettingsD
   const s = await loadCalendarSettings(ctx);
   return {
     timeZone: s.timeZone,
+    locale: localeOr(s.locale),
     deliveryWeekdays: s.deliveryWeekdays,
     cutoffTime: s.cutoffTime,
     leadDays: s.leadDays,
@@ -45,6 +48,7 @@ export async function putSettings(ctx: AppContext, input: CalendarSettingsInput 
   await ctx.dataSource.transaction(async (m) => {
     await m.getRepository(Bakery).update({ id: bakery.id }, {
       timeZone: input.timeZone,
+      ...(input.locale ? { locale: input.locale } : {}),
       deliveryWeekdays: formatWeekdays(input.deliveryWeekdays as Weekday[])!,
       cutoffTime: input.cutoffTime,
       leadDays: Number(input.leadDays),

@@ -1,4 +1,5 @@
 import { allergenStatement } from "../../shared/allergens";
+import { formatterFor } from "../../shared/format";
 
 /** E-mail bodies: every mail has an HTML and a plain-text part saying the same thing. */
 const escapeHtml = (s: string) =>
@@ -62,14 +63,17 @@ export function orderMail(p: {
   bakeryName: string;
   currency: string;
   timeZone: string;
+  /** The bakery's locale (dates, times and amounts are written in it); en-US when left out. */
+  locale?: string;
   kind: "placed" | "changed" | "cancelled";
   url: string;
   order: import("../../shared/schemas/orders").OrderDto;
 }): Rendered {
   const { order } = p;
-  const money = (c: number) => new Intl.NumberFormat("en-US", { style: "currency", currency: p.currency }).format(c / 100);
-  const day = new Intl.DateTimeFormat("en-US", { weekday: "long", day: "numeric", month: "long", timeZone: "UTC" }).format(new Date(`${order.deliveryDate}T12:00:00Z`));
-  const cutoff = new Intl.DateTimeFormat("en-US", { weekday: "short", day: "numeric", month: "short", hour: "numeric", minute: "2-digit", timeZone: p.timeZone, timeZoneName: "short" }).format(new Date(order.cutoffAt));
+  const f = formatterFor(p.locale, p.timeZone);
+  const money = (c: number) => f.money(c, p.currency);
+  const day = f.day(order.deliveryDate, "dayLong");
+  const cutoff = f.at(order.cutoffAt, "dayTimeZone");
   const verb = { placed: "Order placed", changed: "Order changed", cancelled: "Order canceled" }[p.kind];
   // Each line names its allergens (the product's declaration: formula, components and its own), as US FALCPA (as amended
   // by the FASTER Act of 2021) and EU Regulation 1169/2011 Annex II list them.
@@ -86,9 +90,10 @@ export function orderMail(p: {
   return { subject: `${verb}: ${day} — ${p.bakeryName}`, ...layout(p.bakeryName, verb, paras, { label: "View the order", url: p.url }, "Allergens are listed with each line above and on each product in Panwise; ask the bakery if you have a severe allergy.") };
 }
 
-export function invoiceMail(p: { bakeryName: string; currency: string; number: string; totalCents: number; dueCents: number; dueDate: string; url: string; card: boolean; instructions: string }): Rendered {
-  const money = (c: number) => new Intl.NumberFormat("en-US", { style: "currency", currency: p.currency }).format(c / 100);
-  const due = new Intl.DateTimeFormat("en-US", { day: "numeric", month: "long", year: "numeric", timeZone: "UTC" }).format(new Date(`${p.dueDate}T12:00:00Z`));
+export function invoiceMail(p: { bakeryName: string; currency: string; locale?: string; number: string; totalCents: number; dueCents: number; dueDate: string; url: string; card: boolean; instructions: string }): Rendered {
+  const f = formatterFor(p.locale);
+  const money = (c: number) => f.money(c, p.currency);
+  const due = f.day(p.dueDate, "dayWithYear");
   const paras = [
     `Invoice ${p.number} for ${money(p.totalCents)} is attached as a PDF.`,
     p.dueCents > 0 ? `${money(p.dueCents)} is due by ${due}.` : "Nothing is due: it is settled.",
@@ -97,7 +102,7 @@ export function invoiceMail(p: { bakeryName: string; currency: string; number: s
   return { subject: `Invoice ${p.number} from ${p.bakeryName}`, ...layout(p.bakeryName, `Invoice ${p.number}`, paras, { label: p.card && p.dueCents > 0 ? "View and pay" : "View the invoice", url: p.url }) };
 }
 
-export function receiptMail(p: { bakeryName: string; currency: string; number: string; amountCents: number; method: string; url: string }): Rendered {
-  const money = (c: number) => new Intl.NumberFormat("en-US", { style: "currency", currency: p.currency }).format(c / 100);
+export function receiptMail(p: { bakeryName: string; currency: string; locale?: string; number: string; amountCents: number; method: string; url: string }): Rendered {
+  const money = (c: number) => formatterFor(p.locale).money(c, p.currency);
   return { subject: `Payment received for ${p.number} — ${p.bakeryName}`, ...layout(p.bakeryName, "Payment received", [`Thank you: we received ${money(p.amountCents)} (${p.method}) for invoice ${p.number}.`], { label: "View the invoice", url: p.url }) };
 }

@@ -61,7 +61,7 @@ export async function renderFeed(ctx: AppContext, token: string): Promise<string
       end: new Date(start.getTime() + 24 * 3600 * 1000),
       allDay: true,
       summary: feedText(`${bakery.name} delivery (${o.lines.reduce((s, l) => s + l.quantity, 0)} items)`),
-      description: feedText([...o.lines.map((l) => `${l.quantity} × ${l.productName} (${l.saleUnit})`), `Total ${formatMoney(o.totalCents, bakery.currency)}`, `Status: ${o.status}`].join("\n")),
+      description: feedText([...o.lines.map((l) => `${l.quantity} × ${l.productName} (${l.saleUnit})`), `Total ${formatMoney(o.totalCents, bakery.currency, bakery.locale)}`, `Status: ${o.status}`].join("\n")),
       location: feedText(account.deliveryAddress),
       stamp: o.updatedAt ? new Date(o.updatedAt) : ctx.clock.now(),
     });

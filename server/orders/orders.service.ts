@@ -11,6 +11,7 @@ import { pricingFor } from "../catalog/catalog.service";
 import { loadCalendarSettings, parseWeekdays, resolveAccount } from "../calendar/calendar.service";
 import { getBakery } from "../bakery/bakery.service";
 import { cutoffFor, dateStatus, formatLocal, REASON_TEXT, type CalendarSettings } from "../../shared/calendar";
+import { formatCalendarDate, localeOr } from "../../shared/format";
 import { sortAllergens } from "../../shared/allergens";
 import { formatMoney } from "../../shared/money";
 import type { FieldErrors } from "../../shared/errors";
@@ -97,9 +98,9 @@ function refuseIfAccountBlocked(account: CustomerAccount, bakery: { name: string
   if (account.status === "closed") throw new HttpError(403, "account_closed", `${account.businessName} is closed. Ask ${bakery.name} to reopen it.`);
 }
 
-function cutoffPassed(at: DateTime, tz: string, date: string): HttpError {
-  const d = DateTime.fromISO(date).toFormat("ccc d LLL");
-  return new HttpError(409, "cutoff_passed", `Orders for ${d} closed at the cut-off, ${formatLocal(at, tz)}. Call the bakery if something has gone wrong.`, undefined, { cutoffAt: at.toISO() });
+function cutoffPassed(at: DateTime, tz: string, date: string, locale?: string): HttpError {
+  const d = formatCalendarDate(date, "dayShort", localeOr(locale));
+  return new HttpError(409, "cutoff_passed", `Orders for ${d} closed at the cut-off, ${formatLocal(at, tz, localeOr(locale))}. Call the bakery if something has gone wrong.`, undefined, { cutoffAt: at.toISO() });
 }
 
 /** Products, quantities and cut-offs for a set of lines; field errors keyed "lines.i.field". */
@@ -117,11 +118,11 @@ async function checkLines(ctx: AppContext, m: EntityManager, lines: LineInput[],
   const now = ctx.clock.now().getTime();
   const all = [...existingProducts, ...lines.map((l) => products.get(l.productId)!)];
   const cutoff = orderCutoff(date, settings, all);
-  if (now >= cutoff.toMillis()) throw cutoffPassed(cutoff, settings.timeZone, date);
+  if (now >= cutoff.toMillis()) throw cutoffPassed(cutoff, settings.timeZone, date, settings.locale);
   return products;
 }
 
-async function priceLines(ctx: AppContext, m: EntityManager, accountId: number, lines: LineInput[], products: Map<number, Product>, currency: string) {
+async function priceLines(ctx: AppContext, m: EntityManager, accountId: number, lines: LineInput[], products: Map<number, Product>, currency: string, locale?: string) {
   const pricing = await pricingFor(ctx, accountId, m);
   const priced = lines.map((l) => {
     const p = products.get(l.productId)!;
@@ -129,14 +130,14 @@ async function priceLines(ctx: AppContext, m: EntityManager, accountId: number, 
     return { productId: p.id, productName: p.name, saleUnit: p.saleUnit, quantity: l.quantity, unitPriceCents: unit, lineTotalCents: unit * l.quantity };
   });
   // Line and order totals live in INT columns: above 2^31 − 1 cents the database would refuse the row.
-  const most = formatMoney(MAX_ORDER_CENTS, currency);
+  const most = formatMoney(MAX_ORDER_CENTS, currency, localeOr(locale));
   const fields: FieldErrors = {};
   priced.forEach((l, i) => {
-    if (l.lineTotalCents > MAX_ORDER_CENTS) fields[`lines.${i}.quantity`] = `This line comes to ${formatMoney(l.lineTotalCents, currency)}; one line can be at most ${most}.`;
+    if (l.lineTotalCents > MAX_ORDER_CENTS) fields[`lines.${i}.quantity`] = `This line comes to ${formatMoney(l.lineTotalCents, currency, localeOr(locale))}; one line can be at most ${most}.`;
   });
   if (Object.keys(fields).length) throw badRequest(Object.keys(fields).length === 1 ? Object.values(fields)[0] : `Some lines come to more than ${most}, the most one line can be.`, fields);
   const total = priced.reduce((s, l) => s + l.lineTotalCents, 0);
-  if (total > MAX_ORDER_CENTS) throw badRequest(`This order comes to ${formatMoney(total, currency)}; one order can be at most ${most}.`, { lines: `One order can be at most ${most}.` });
+  if (total > MAX_ORDER_CENTS) throw badRequest(`This order comes to ${formatMoney(total, currency, localeOr(locale))}; one order can be at most ${most}.`, { lines: `One order can be at most ${most}.` });
   return { priced, total };
 }
 
@@ -146,10 +147,10 @@ function sameLines(a: LineInput[], b: LineInput[]): boolean {
   return a.length === b.length && key(a) === key(b);
 }
 
-function refuseBelowMinimum(account: CustomerAccount, total: number, currency: string) {
+function refuseBelowMinimum(account: CustomerAccount, total: number, currency: string, locale?: string) {
   if (total < account.minimumOrderCents) {
     const shortfall = account.minimumOrderCents - total;
-    throw new HttpError(422, "below_minimum", `The minimum order for ${account.businessName} is ${formatMoney(account.minimumOrderCents, currency)}; add ${formatMoney(shortfall, currency)} more.`, undefined, { shortfallCents: shortfall, minimumOrderCents: account.minimumOrderCents });
+    throw new HttpError(422, "below_minimum", `The minimum order for ${account.businessName} is ${formatMoney(account.minimumOrderCents, currency, localeOr(locale))}; add ${formatMoney(shortfall, currency, localeOr(locale))} more.`, undefined, { shortfallCents: shortfall, minimumOrderCents: account.minimumOrderCents });
   }
 }
 
@@ -167,11 +168,11 @@ export async function createOrder(ctx: AppContext, actor: SessionUser | null, in
     await m.getRepository(CustomerAccount).createQueryBuilder("a").setLock("pessimistic_write").where("a.id = :id", { id: account.id }).getOne();
     refuseIfAccountBlocked(account, bakery);
     const st = dateStatus(input.deliveryDate, settings, ctx.clock.now(), parseWeekdays(account.routeWeekdays));
-    if (st.reason === "past_cutoff") throw cutoffPassed(DateTime.fromISO(st.cutoffAt, { setZone: true }), settings.timeZone, input.deliveryDate);
+    if (st.reason === "past_cutoff") throw cutoffPassed(DateTime.fromISO(st.cutoffAt, { setZone: true }), settings.timeZone, input.deliveryDate, settings.locale);
     if (!st.orderable) throw new HttpError(409, "date_not_orderable", `You can't order for this date: ${REASON_TEXT[st.reason!].toLowerCase()}.`, undefined, { reason: st.reason });
     const products = await checkLines(ctx, m, input.lines, input.deliveryDate, settings);
-    const { priced, total } = await priceLines(ctx, m, account.id, input.lines, products, bakery.currency);
-    refuseBelowMinimum(account, total, bakery.currency);
+    const { priced, total } = await priceLines(ctx, m, account.id, input.lines, products, bakery.currency, bakery.locale);
+    refuseBelowMinimum(account, total, bakery.currency, bakery.locale);
     const orders = m.getRepository(Order);
     const existing = await orders.findOneBy({ accountId: account.id, deliveryDate: input.deliveryDate });
     let order: Order;
@@ -210,14 +211,14 @@ export async function updateOrder(ctx: AppContext, actor: SessionUser, id: numbe
     const newLines = input.lines && !sameLines(input.lines, existingLines) ? input.lines : undefined;
     if (newLines) {
       const products = await checkLines(ctx, m, newLines, order.deliveryDate, settings, oldProducts);
-      const { priced, total } = await priceLines(ctx, m, account.id, newLines, products, bakery.currency);
-      refuseBelowMinimum(account, total, bakery.currency);
+      const { priced, total } = await priceLines(ctx, m, account.id, newLines, products, bakery.currency, bakery.locale);
+      refuseBelowMinimum(account, total, bakery.currency, bakery.locale);
       await m.getRepository(OrderLine).delete({ orderId: order.id });
       await m.getRepository(OrderLine).insert(priced.map((l) => ({ ...l, orderId: order.id })));
       patch.totalCents = total;
     } else {
       const c = orderCutoff(order.deliveryDate, settings, oldProducts);
-      if (ctx.clock.now().getTime() >= c.toMillis()) throw cutoffPassed(c, settings.timeZone, order.deliveryDate);
+      if (ctx.clock.now().getTime() >= c.toMillis()) throw cutoffPassed(c, settings.timeZone, order.deliveryDate, settings.locale);
       // Same lines, same PO number, same note: nothing changed, so no write and no "Order changed" mail.
       if (!("poNumber" in patch) && !("note" in patch)) return (await orderDtos(ctx, [order], m))[0];
     }
@@ -237,7 +238,7 @@ export async function cancelOrder(ctx: AppContext, actor: SessionUser, id: numbe
     const lines = await m.getRepository(OrderLine).findBy({ orderId: order.id });
     const products = await m.getRepository(Product).findBy({ id: In(lines.map((l) => l.productId).concat([0])) });
     const c = orderCutoff(order.deliveryDate, settings, products);
-    if (ctx.clock.now().getTime() >= c.toMillis()) throw cutoffPassed(c, settings.timeZone, order.deliveryDate);
+    if (ctx.clock.now().getTime() >= c.toMillis()) throw cutoffPassed(c, settings.timeZone, order.deliveryDate, settings.locale);
     await m.getRepository(Order).update({ id: order.id }, { status: "cancelled", editedByHand: order.source === "standing" ? true : order.editedByHand });
     const cancelled = (await orderDtos(ctx, [(await m.getRepository(Order).findOneBy({ id: order.id }))!], m))[0];
     await queueOrderMail(ctx, m, cancelled, "cancelled");
@@ -254,9 +255,9 @@ async function lockOrderForWrite(ctx: AppContext, m: EntityManager, actor: Sessi
   const dateCutoff = cutoffFor(order.deliveryDate, settings);
   if (order.status === "open" && ctx.clock.now().getTime() >= dateCutoff.toMillis()) {
     // The refusal rolls this transaction back; the caller locks the order afterwards (lockAfterRefusal).
-    throw Object.assign(cutoffPassed(dateCutoff, settings.timeZone, order.deliveryDate), { lockOrderId: order.id });
+    throw Object.assign(cutoffPassed(dateCutoff, settings.timeZone, order.deliveryDate, settings.locale), { lockOrderId: order.id });
   }
-  if (order.status === "locked") throw cutoffPassed(dateCutoff, settings.timeZone, order.deliveryDate);
+  if (order.status === "locked") throw cutoffPassed(dateCutoff, settings.timeZone, order.deliveryDate, settings.locale);
   if (order.status !== "open") throw new HttpError(409, "order_closed", `This order is ${ORDER_STATUS_LABELS[order.status].toLowerCase()} and can no longer be changed.`);
   refuseIfAccountBlocked(account, bakery);
   return order;
@@ -347,6 +348,6 @@ export async function queueOrderMail(ctx: AppContext, m: EntityManager, order: O
   const buyers = await m.getRepository(User).findBy({ accountId: order.accountId, disabled: false, role: "buyer" });
   if (!buyers.length) return;
   const bakery = await getBakery(ctx, m);
-  const mail = orderMail({ bakeryName: bakery.name, currency: bakery.currency, timeZone: bakery.timeZone, order, kind, url: `${ctx.config.publicUrl}/buyer/order/${order.deliveryDate}` });
+  const mail = orderMail({ bakeryName: bakery.name, currency: bakery.currency, timeZone: bakery.timeZone, locale: bakery.locale, order, kind, url: `${ctx.config.publicUrl}/buyer/order/${order.deliveryDate}` });
   for (const b of buyers) await enqueueMail(m, ctx, `order_${kind}`, { to: b.email, fromName: bakery.name, ...mail });
 }

@@ -1,5 +1,5 @@
 import PDFDocument from "pdfkit";
-import { DateTime } from "luxon";
+import { formatterFor } from "../../shared/format";
 import type { PlanDto } from "../../shared/schemas/production";
 import { formatPercent, unitsFor, type UnitSystem } from "../../shared/units";
 import { CAUTION_FOOTNOTE, dayCautions, liquidWarnings, mixLiquidAdvice, pasteCautionText } from "../../shared/cautions";
@@ -29,14 +29,16 @@ export const pdfText = (s: string) => WINANSI_SUBSTITUTES.reduce((t, [re, to]) =
  * runs past the right margin or splits across a page: long names wrap inside their column. Numbers go through
  * shared/units.ts in the chosen system, the same formatting the screens use.
  */
-export function renderPlanPdf(plan: PlanDto & { bakeryName: string; timeZone: string }, units: UnitSystem): Promise<Buffer> {
+export function renderPlanPdf(plan: PlanDto & { bakeryName: string; timeZone: string; locale?: string }, units: UnitSystem): Promise<Buffer> {
   const doc = new PDFDocument({ size: "LETTER", margin: MARGIN, info: { Title: `Production sheet ${plan.date}`, Author: plan.bakeryName, Creator: "Panwise" } });
   const chunks: Buffer[] = [];
   doc.on("data", (c: Buffer) => chunks.push(c));
   const done = new Promise<Buffer>((resolve) => doc.on("end", () => resolve(Buffer.concat(chunks))));
-  const u = unitsFor(units);
-  const time = (iso: string) => DateTime.fromISO(iso, { setZone: true }).setZone(plan.timeZone).toFormat("ccc HH:mm");
-  const day = DateTime.fromISO(plan.date).toFormat("cccc d LLLL yyyy");
+  // Dates and times in the bakery's locale and zone (shared/format.ts), numbers in its locale too.
+  const f = formatterFor(plan.locale, plan.timeZone);
+  const u = unitsFor(units, f.locale);
+  const time = (iso: string) => f.at(iso, "weekdayTime");
+  const day = f.day(plan.date, "dayFull");
   const W = doc.page.width - 2 * MARGIN;
   const bottom = () => doc.page.height - BOTTOM;
 
@@ -91,7 +93,7 @@ export function renderPlanPdf(plan: PlanDto & { bakeryName: string; timeZone: st
   // ---- sheet -------------------------------------------------------------------------------
   para(plan.bakeryName.toUpperCase(), { font: "Helvetica-Bold", size: 11, color: CRUST, spacing: 1 });
   para(`Bake day: ${day}`, { font: "Helvetica-Bold", size: 24 });
-  const frozen = plan.frozen ? `set at the cut-off ${plan.frozenAt ? DateTime.fromISO(plan.frozenAt).setZone(plan.timeZone).toFormat("ccc d LLL HH:mm") : ""}` : "not set yet: follows the orders until the cut-off";
+  const frozen = plan.frozen ? `set at the cut-off ${plan.frozenAt ? f.at(plan.frozenAt, "dayTime") : ""}` : "not set yet: follows the orders until the cut-off";
   para(`Leaves at ${time(plan.inputs.dispatchAt)} · ${frozen} · ${plan.final ? "final" : "NOT FINAL: orders may still change until the cut-off"}`, { size: 11, color: MUTED });
   const supply = [plan.inputs.tapC !== undefined ? `tap water ${u.temp(plan.inputs.tapC)}` : "", plan.inputs.milkC !== undefined ? `milk ${u.temp(plan.inputs.milkC)}` : ""].filter(Boolean).join(" · ");
   para(
@@ -141,7 +143,7 @@ export function renderPlanPdf(plan: PlanDto & { bakeryName: string; timeZone: st
   ensure(120);
   heading("Timeline", 15);
   if (plan.schedule?.earlierStart) para(plan.schedule.earlierStart.text, { font: "Helvetica-Bold", size: 11, color: ALERT });
-  const tw = cols(12, 12, 20, 56);
+  const tw = cols(14, 14, 19, 53); // "Tue 11:50 PM" fits one line at 10 pt
   row(["Starts", "Ends", "Where", "Step"], tw, { bold: true, left: [1, 2, 3] });
   rule();
   for (const e of plan.timeline) {

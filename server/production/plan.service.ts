@@ -139,6 +139,7 @@ export async function computePlan(ctx: AppContext, date: string, opts: { version
   const { entries: timeline, warnings: scheduleWarnings, ...schedule } = scheduleDay({
     date,
     timeZone: bakery.timeZone,
+    locale: bakery.locale,
     dispatchTime: production.dispatchTime,
     resources: resourcesOf(production),
     formulas: formulaIds.map((id) => ({ id, name: formulas.get(id)!.name, steps: formulas.get(id)!.steps, retardHours: retard.get(id) ?? null })),

@@ -77,7 +77,7 @@ export function productionRoutes(ctx: AppContext): Router {
     const { date, units } = parse(planQuerySchema.extend({ units: z.enum(["metric", "us"]).default("metric") }), req.query);
     const bakery = await getBakery(ctx);
     const plan = await plans.getPlan(ctx, date);
-    const pdf = await renderPlanPdf({ ...plan, bakeryName: bakery.name, timeZone: bakery.timeZone }, units);
+    const pdf = await renderPlanPdf({ ...plan, bakeryName: bakery.name, timeZone: bakery.timeZone, locale: bakery.locale }, units);
     res.type("application/pdf").set("Content-Disposition", `inline; filename="production-${date}.pdf"`).send(pdf);
   });
   r.post("/plan/recalculate", allow(...KITCHEN), async (req, res) => {

@@ -26,6 +26,8 @@ export const DEMO_BAKERY = {
   name: "Hollowbrook Bakehouse",
   timeZone: "America/Chicago",
   currency: "USD",
+  // The demo bakery is American: dates, times and amounts in US English (shared/format.ts).
+  locale: "en-US",
   email: "hello@hollowbrook.test",
   phone: "+1 (555) 014-2290",
   address: "418 Millrace Lane, Hollowbrook, IL 00000",

@@ -3,6 +3,8 @@ export interface BakeryDto {
   name: string;
   timeZone: string;
   currency: string;
+  /** BCP 47 tag every date, time, number and amount is written in (shared/format.ts): "en-US", "en-GB"… */
+  locale: string;
   email: string;
   phone: string;
   address: string;

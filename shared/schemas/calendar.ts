@@ -1,5 +1,6 @@
 import { z } from "zod";
 import { DATE_MAX, DATE_MIN, daysBetween, isCalendarDate, isSupportedDate, WEEKDAYS, type NotOrderableReason, type Weekday } from "../calendar";
+import { DEFAULT_LOCALE, formatNumber, isSupportedLocale, SUPPORTED_LOCALES } from "../format";
 
 export const DATE_LIMIT_MESSAGE = `Dates run from ${DATE_MIN} to ${DATE_MAX}.`;
 
@@ -29,7 +30,7 @@ export function dateRangeCheck<K extends string, L extends string>(opts: { from:
     const span = daysBetween(from, to) + 1;
     if (span < 1) ctx.addIssue({ code: "custom", path: [opts.to], message: opts.reversed ?? "The end date must not be before the start." });
     else if (opts.maxDays && span > opts.maxDays) {
-      ctx.addIssue({ code: "custom", path: [opts.to], message: `Ask for at most ${opts.maxDays} days${opts.what ? ` of ${opts.what}` : ""} at a time; this range is ${span.toLocaleString("en-US")} days.` });
+      ctx.addIssue({ code: "custom", path: [opts.to], message: `Ask for at most ${opts.maxDays} days${opts.what ? ` of ${opts.what}` : ""} at a time; this range is ${formatNumber(span, DEFAULT_LOCALE)} days.` });
     }
   };
 }
@@ -42,12 +43,17 @@ export const weekdaysSchema = z
 export const calendarSettingsSchema = z.object({
   timeZone: z.string().refine((tz) => {
     try {
-      new Intl.DateTimeFormat("en-US", { timeZone: tz });
+      new Intl.DateTimeFormat(DEFAULT_LOCALE, { timeZone: tz });
       return true;
     } catch {
       return false;
     }
   }, "Use an IANA time zone such as America/Chicago."),
+  /** The bakery's locale for dates, times, numbers and amounts; left out, the stored one stays. */
+  locale: z
+    .string({ invalid_type_error: `Choose one of ${SUPPORTED_LOCALES.join(", ")}.` })
+    .refine(isSupportedLocale, `Choose one of ${SUPPORTED_LOCALES.join(", ")}: dates, times and amounts are written in one of these.`)
+    .optional(),
   deliveryWeekdays: weekdaysSchema.refine((d) => d.length > 0, "Choose at least one delivery day."),
   cutoffTime: z.string().regex(/^([01]\d|2[0-3]):[0-5]\d$/, "Use a 24-hour time such as 14:00."),
   leadDays: z.coerce.number().int("Whole days only.").min(0, "At least 0 days.").max(14, "At most 14 days."),
@@ -58,6 +64,7 @@ export type CalendarSettingsInput = z.input<typeof calendarSettingsSchema>;
 
 export interface CalendarSettingsDto {
   timeZone: string;
+  locale: string;
   deliveryWeekdays: Weekday[];
   cutoffTime: string;
   leadDays: number;

@@ -2,6 +2,7 @@ import { z } from "zod";
 import { ORDER_LIST_MAX_DAYS, dateRangeCheck, dateSchema } from "./calendar";
 import type { AllergenCode } from "../allergens";
 import type { Weekday } from "../calendar";
+import { DEFAULT_LOCALE, formatNumber } from "../format";
 
 export const ORDER_STATUSES = ["open", "locked", "delivered", "cancelled"] as const;
 export type OrderStatus = (typeof ORDER_STATUSES)[number];
@@ -24,7 +25,7 @@ export const quantitySchema = z
   .number({ required_error: "Enter a quantity.", invalid_type_error: "The quantity must be a number." })
   .int("Quantities are whole units.")
   .positive("The quantity must be at least 1.")
-  .max(MAX_LINE_QUANTITY, `At most ${MAX_LINE_QUANTITY.toLocaleString("en-US")} units on one line.`);
+  .max(MAX_LINE_QUANTITY, `At most ${formatNumber(MAX_LINE_QUANTITY, DEFAULT_LOCALE)} units on one line.`);
 
 const lineSchema = z.object({
   productId: z.number({ required_error: "Choose a product.", invalid_type_error: "Choose a product." }).int().positive("Choose a product."),
@@ -103,7 +104,7 @@ export const standingOrderSchema = z
     intervalWeeks: z.union([z.literal(1), z.literal(2)], { errorMap: () => ({ message: "Choose every week or every other week." }) }),
     skipDates: z.array(dateSchema).max(200).default([]),
     lines: z
-      .array(z.object({ productId: z.number().int().positive(), weekday: z.number().int().min(1).max(7), quantity: z.number().int("Quantities are whole units.").min(0, "Quantities cannot be negative.").max(MAX_LINE_QUANTITY, `At most ${MAX_LINE_QUANTITY.toLocaleString("en-US")} units on one line.`) }))
+      .array(z.object({ productId: z.number().int().positive(), weekday: z.number().int().min(1).max(7), quantity: z.number().int("Quantities are whole units.").min(0, "Quantities cannot be negative.").max(MAX_LINE_QUANTITY, `At most ${formatNumber(MAX_LINE_QUANTITY, DEFAULT_LOCALE)} units on one line.`) }))
       .max(500),
     active: z.boolean().default(true),
   })

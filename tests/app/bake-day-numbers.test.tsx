@@ -160,6 +160,6 @@ describe("internal temperatures", () => {
     fireEvent.press(screen.getByTestId("internal-1-save"));
     await waitFor(() => expect(api.callsTo("POST", "/api/production/bake-days/2025-12-03/progress")).toHaveLength(1));
     expect(api.callsTo("POST", "/api/production/bake-days/2025-12-03/progress")[0].body).toEqual({ kind: "internal", key: "1", valueC: 87.2 });
-    expect(await screen.findByTestId("internal-1-recorded")).toHaveTextContent("Reached 189 °F at 04:50: below 192 °F, back in the oven and probe again.");
+    expect(await screen.findByTestId("internal-1-recorded")).toHaveTextContent("Reached 189 °F at 4:50 AM: below 192 °F, back in the oven and probe again.");
   });
 });

@@ -41,7 +41,7 @@ describe("bake day", () => {
     expect(await screen.findByTestId("pans-101-count")).toHaveTextContent("7");
     expect(screen.getByTestId("baker-home-title")).toHaveTextContent("Bake day");
     expect(api.callsTo("GET", "/api/production/plan")[0].query.date).toBe("2025-12-03");
-    expect(screen.getByTestId("day-date")).toHaveTextContent("Wed 3 Dec");
+    expect(screen.getByTestId("day-date")).toHaveTextContent("Wed, Dec 3");
     const tile = screen.getByTestId("pans-101");
     expect(tile).toHaveTextContent(/Milk-bread dinner rolls/);
     expect(tile).toHaveTextContent(/9×13 in pan/);
@@ -50,12 +50,12 @@ describe("bake day", () => {
     expect(screen.getByLabelText("7 pans of Milk-bread dinner rolls")).toBeOnTheScreen();
     expect(screen.getByTestId("pans-102-count")).toHaveTextContent("2");
     expect(screen.getByTestId("pans-total")).toHaveTextContent("9 pans in all");
-    expect(screen.getByTestId("plan-status-text")).toHaveTextContent("Not final — orders can change until the cut-off at Tue 2 Dec, 14:00 CST.");
+    expect(screen.getByTestId("plan-status-text")).toHaveTextContent("Not final — orders can change until the cut-off at Tue, Dec 2, 2:00 PM CST.");
     expect(screen.getByTestId("plan-progress-text")).toHaveTextContent("0 of 3 mixes done, 0 of 3 oven loads baked");
     expect(screen.getByTestId("plan-warnings")).toHaveTextContent(/Milk bread, mix 2: liquid at 1\.5 °C/);
     expect(await screen.findByTestId("setting-ovens")).toHaveTextContent("Deck oven (9,100 cm² of shelf); Convection oven (5 pan slots)");
     expect(screen.getByTestId("setting-mixer")).toHaveTextContent("Spiral mixer, 20 kg; 60-qt planetary, 12 kg");
-    expect(screen.getByTestId("setting-crew")).toHaveTextContent("3 people from 23:30 · packing 45 min before dispatch");
+    expect(screen.getByTestId("setting-crew")).toHaveTextContent("3 people from 11:30 PM · packing 45 min before dispatch");
     expect(screen.getByTestId("tab-bake")).toBeOnTheScreen();
   });
 
@@ -63,7 +63,7 @@ describe("bake day", () => {
     mockApi(routes(planView({ final: true, frozen: true, frozenAt: "2025-12-02T20:00:05.000Z" })));
     renderApp("/bake");
     expect(await screen.findByTestId("plan-status-text")).toHaveTextContent("Final — orders are locked for this day.");
-    expect(screen.getByTestId("plan-frozen-at")).toHaveTextContent("Plan set at the cut-off and kept; worked out Tue 2 Dec, 14:00 CST.");
+    expect(screen.getByTestId("plan-frozen-at")).toHaveTextContent("Plan set at the cut-off and kept; worked out Tue, Dec 2, 2:00 PM CST.");
   });
 
   it("keeps the paste apart from the final mix on each weigh-out card, with the liquid temperature", async () => {
@@ -98,25 +98,25 @@ describe("bake day", () => {
     renderApp("/bake");
     const mix1 = await screen.findByTestId("mix-group-1-1");
     expect(mix1).toHaveTextContent(/Milk bread · mix 1 of 2.*Makes 6 pans: Milk-bread dinner rolls/);
-    expect(within(mix1).getByTestId("step-f1-m1-paste")).toHaveTextContent(/01:00–01:40.*Cook and cool the paste.*Hot paste/);
-    expect(within(mix1).getByTestId("step-f1-m1-mix")).toHaveTextContent(/01:40–01:55.*Mix.*Spiral mixer.*Mixer guards/);
-    expect(within(mix1).getByTestId("step-f1-m1-divide")).toHaveTextContent(/02:55–03:10.*Divide and round.*Crew \(3 people\).*Allergen separation/);
+    expect(within(mix1).getByTestId("step-f1-m1-paste")).toHaveTextContent(/1:00 AM–1:40 AM.*Cook and cool the paste.*Hot paste/);
+    expect(within(mix1).getByTestId("step-f1-m1-mix")).toHaveTextContent(/1:40 AM–1:55 AM.*Mix.*Spiral mixer.*Mixer guards/);
+    expect(within(mix1).getByTestId("step-f1-m1-divide")).toHaveTextContent(/2:55 AM–3:10 AM.*Divide and round.*Crew \(3 people\).*Allergen separation/);
     expect(screen.getByTestId("step-f3-m1-mix-resource")).toHaveTextContent("60-qt planetary");
     const load1 = screen.getByTestId("load-1");
     expect(load1).toHaveTextContent(/Oven load 1 · Deck oven · 6 pans · 177 °C.*Milk-bread dinner rolls/);
-    expect(within(load1).getByTestId("step-f1-m1-L1-shape")).toHaveTextContent(/03:12–03:34.*Shape and pan · Milk bread, mix 1 · 6 pans.*Crew \(3 people\)/);
+    expect(within(load1).getByTestId("step-f1-m1-L1-shape")).toHaveTextContent(/3:12 AM–3:34 AM.*Shape and pan · Milk bread, mix 1 · 6 pans.*Crew \(3 people\)/);
     expect(within(load1).getByTestId("step-f1-m1-L1-proof-note")).toHaveTextContent("21 min longer than the formula's 50 min: the crew is busy with other dough later.");
-    expect(within(load1).getByTestId("step-L1-bake")).toHaveTextContent(/04:50–05:17.*Bake 27 min · oven 177 °C.*Deck oven.*Hot ovens and pans/);
+    expect(within(load1).getByTestId("step-L1-bake")).toHaveTextContent(/4:50 AM–5:17 AM.*Bake 27 min · oven 177 °C.*Deck oven.*Hot ovens and pans/);
     expect(within(load1).getByTestId("step-L1-cool-25")).toHaveTextContent(/Cooling and storage/);
     // The convection oven heats from 177 to 190 °C before the brioche goes in: that step sits with its load.
     const load3 = screen.getByTestId("load-3");
     expect(load3).toHaveTextContent(/Oven load 3 · Convection oven · 2 pans · 190 °C.*Brioche burger buns/);
-    expect(within(load3).getByTestId("step-heat-2-287")).toHaveTextContent(/04:47–04:57.*Heat Convection oven · oven 190 °C/);
+    expect(within(load3).getByTestId("step-heat-2-287")).toHaveTextContent(/4:47 AM–4:57 AM.*Heat Convection oven · oven 190 °C/);
     // Blocks in time order: the mixes first, the oven loads by when they go in.
     const order = screen.getAllByTestId(/^(mix-group-\d+-\d+|load-\d+)$/).map((n) => n.props.testID);
     expect(order).toEqual(["mix-group-1-1", "mix-group-1-2", "mix-group-3-1", "load-1", "load-3", "load-2"]);
-    expect(screen.getByTestId("timeline-dispatch")).toHaveTextContent("Dispatch 06:30");
-    expect(screen.getByTestId("timeline-packing")).toHaveTextContent(/Pack and load from 05:45 \(45 min before dispatch\): every step ends by then\. The shift starts at 23:30\./);
+    expect(screen.getByTestId("timeline-dispatch")).toHaveTextContent("Dispatch 6:30 AM");
+    expect(screen.getByTestId("timeline-packing")).toHaveTextContent(/Pack and load from 5:45 AM \(45 min before dispatch\): every step ends by then\. The shift starts at 11:30 PM\./);
     expect(screen.queryByTestId("timeline-conflicts")).toBeNull();
     expect(screen.getByTestId("caution-footnote")).toHaveTextContent(/Reminders only/);
   });
@@ -126,17 +126,17 @@ describe("bake day", () => {
     renderApp("/bake");
     const box = await screen.findByTestId("timeline-conflicts");
     expect(box).toHaveTextContent(/The day does not fit the shift/);
-    expect(screen.getByTestId("timeline-earlier-start")).toHaveTextContent("Start 40 min earlier, at 01:00.");
-    expect(screen.getByTestId("timeline-conflict-0")).toHaveTextContent(/Cook and cool the paste \(Milk bread, mix 1\) has to start at 01:00, 40 min before the shift starts at 01:40/);
+    expect(screen.getByTestId("timeline-earlier-start")).toHaveTextContent("Start 40 min earlier, at 1:00 AM.");
+    expect(screen.getByTestId("timeline-conflict-0")).toHaveTextContent(/Cook and cool the paste \(Milk bread, mix 1\) has to start at 1:00 AM, 40 min before the shift starts at 1:40 AM/);
   });
 
   it("shows each weigh-out card's mix time and mixer, the same as its mix step", async () => {
     mockApi(routes());
     renderApp("/bake");
-    expect(await screen.findByTestId("mix-1-1-time")).toHaveTextContent("Mix 01:40–01:55 on Spiral mixer · paste on at 01:00");
-    expect(screen.getByTestId("mix-1-2-time")).toHaveTextContent("Mix 01:55–02:10 on Spiral mixer · paste on at 01:15");
-    expect(screen.getByTestId("mix-3-1-time")).toHaveTextContent("Mix 01:59–02:19 on 60-qt planetary");
-    expect(screen.getByTestId("step-f1-m1-mix")).toHaveTextContent(/01:40–01:55/);
+    expect(await screen.findByTestId("mix-1-1-time")).toHaveTextContent("Mix 1:40 AM–1:55 AM on Spiral mixer · paste on at 1:00 AM");
+    expect(screen.getByTestId("mix-1-2-time")).toHaveTextContent("Mix 1:55 AM–2:10 AM on Spiral mixer · paste on at 1:15 AM");
+    expect(screen.getByTestId("mix-3-1-time")).toHaveTextContent("Mix 1:59 AM–2:19 AM on 60-qt planetary");
+    expect(screen.getByTestId("step-f1-m1-mix")).toHaveTextContent(/1:40 AM–1:55 AM/);
   });
 
   it("from 1024 px draws a lane per mixer, the crew and each oven on one time scale", async () => {
@@ -145,16 +145,16 @@ describe("bake day", () => {
     renderApp("/bake");
     expect(await screen.findByTestId("timeline-lanes")).toBeOnTheScreen();
     for (const id of ["lane-mixer-1", "lane-mixer-2", "lane-crew-0", "lane-oven-1", "lane-oven-2"]) expect(screen.getByTestId(id)).toBeOnTheScreen();
-    expect(screen.getByLabelText("Spiral mixer: Mix, mix 1 from 01:40 to 01:55")).toBeOnTheScreen();
-    expect(screen.getByLabelText("Crew (3 people): Shape and pan, mix 1, oven load 1 from 03:12 to 03:34")).toBeOnTheScreen();
-    expect(screen.getByLabelText("Deck oven: Oven load 1 from 04:47 to 05:20")).toBeOnTheScreen();
-    expect(screen.getByLabelText("Convection oven: Heat Convection oven from 04:47 to 04:57")).toBeOnTheScreen();
-    expect(screen.getByTestId("step-L3-bake")).toHaveTextContent(/05:05–05:21.*Bake 16 min · oven 190 °C/);
+    expect(screen.getByLabelText("Spiral mixer: Mix, mix 1 from 1:40 AM to 1:55 AM")).toBeOnTheScreen();
+    expect(screen.getByLabelText("Crew (3 people): Shape and pan, mix 1, oven load 1 from 3:12 AM to 3:34 AM")).toBeOnTheScreen();
+    expect(screen.getByLabelText("Deck oven: Oven load 1 from 4:47 AM to 5:20 AM")).toBeOnTheScreen();
+    expect(screen.getByLabelText("Convection oven: Heat Convection oven from 4:47 AM to 4:57 AM")).toBeOnTheScreen();
+    expect(screen.getByTestId("step-L3-bake")).toHaveTextContent(/5:05 AM–5:21 AM.*Bake 16 min · oven 190 °C/);
     expect(screen.getByTestId("app-shell-wide")).toBeOnTheScreen();
   });
 
   it("marks the step under way by the bakery's clock", async () => {
-    // The fake bakery's clock reads Tue 2 Dec, 05:30 CST.
+    // The fake bakery's clock reads Tue, Dec 2, 5:30 AM CST.
     const move = (iso: string) => iso.replace("2025-12-03", "2025-12-02");
     const today = planView().timeline.map((e) => ({ ...e, startsAt: move(e.startsAt), endsAt: move(e.endsAt) }));
     mockApi(routes(planView({ date: "2025-12-02", timeline: today, schedule: undefined })));
@@ -256,7 +256,7 @@ describe("bake day", () => {
     fireEvent.press(screen.getByTestId("recalculate-confirm"));
     expect(await screen.findByTestId("plan-changes")).toHaveTextContent(/What changed:.*Milk-bread dinner rolls: 7 → 9 ordered, 7 → 9 pans\./);
     expect(api.callsTo("POST", "/api/production/plan/recalculate")[0].query.date).toBe("2025-12-03");
-    await waitFor(() => expect(screen.getByTestId("plan-frozen-at")).toHaveTextContent("Plan set at the cut-off and kept; worked out Tue 2 Dec, 05:40 CST."));
+    await waitFor(() => expect(screen.getByTestId("plan-frozen-at")).toHaveTextContent("Plan set at the cut-off and kept; worked out Tue, Dec 2, 5:40 AM CST."));
     // What the recalculation changed is not "pending" any more.
     expect(screen.queryByTestId("plan-pending-changes")).toBeNull();
   });
@@ -288,21 +288,21 @@ describe("bake day", () => {
     // Saturday → Tuesday: no deliveries on Sunday and Monday.
     fireEvent.press(screen.getByTestId("day-next"));
     await waitFor(() => expect(api.calls.some((c) => c.path === "/api/production/plan" && c.query.date === "2025-12-09")).toBe(true));
-    expect(await screen.findByTestId("day-date")).toHaveTextContent("Tue 9 Dec");
+    expect(await screen.findByTestId("day-date")).toHaveTextContent("Tue, Dec 9");
     fireEvent.press(screen.getByTestId("day-prev"));
-    await waitFor(() => expect(screen.getByTestId("day-date")).toHaveTextContent("Sat 6 Dec"));
+    await waitFor(() => expect(screen.getByTestId("day-date")).toHaveTextContent("Sat, Dec 6"));
     fireEvent.press(screen.getByTestId("day-pick"));
     fireEvent.changeText(screen.getByTestId("day-pick-input"), "2025-12-1");
     fireEvent.press(screen.getByTestId("day-pick-go"));
     expect(screen.getByTestId("day-pick-input-error")).toHaveTextContent(/YYYY-MM-DD/);
     fireEvent.press(screen.getByTestId("day-chip-2025-12-04"));
-    await waitFor(() => expect(screen.getByTestId("day-date")).toHaveTextContent("Thu 4 Dec"));
+    await waitFor(() => expect(screen.getByTestId("day-date")).toHaveTextContent("Thu, Dec 4"));
   });
 
   it("says so when nothing is ordered for the day", async () => {
     mockApi(routes(planView({ products: [], doughs: [], ingredients: [], timeline: [], warnings: [] })));
     renderApp("/bake");
-    expect(await screen.findByTestId("bake-day-empty")).toHaveTextContent(/Nothing to bake for Wed 3 Dec.*No orders for this day yet/);
+    expect(await screen.findByTestId("bake-day-empty")).toHaveTextContent(/Nothing to bake for Wed, Dec 3.*No orders for this day yet/);
     expect(screen.queryByTestId("recalculate")).toBeNull();
   });
 

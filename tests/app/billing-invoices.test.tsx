@@ -137,7 +137,7 @@ describe("invoice detail", () => {
     mockApi(detailRoutes(OWNER));
     renderApp("/office/invoices/41");
     expect(await screen.findByTestId("invoice-title")).toHaveTextContent("HB-2025-00041");
-    expect(screen.getByTestId("invoice-line-301")).toHaveTextContent(/1 Dec 2025.*Milk-bread dinner rolls.*3.*\$18\.00.*\$54\.00/);
+    expect(screen.getByTestId("invoice-line-301")).toHaveTextContent(/Dec 1, 2025.*Milk-bread dinner rolls.*3.*\$18\.00.*\$54\.00/);
     expect(screen.getByTestId("invoice-tax")).toHaveTextContent(/Sales tax \(8\.75 %\).*\$4\.73/);
     expect(screen.getByTestId("invoice-total")).toHaveTextContent(/^Total\s*\$58\.73$/);
     expect(screen.getByTestId("invoice-amount-due")).toHaveTextContent("$58.73");

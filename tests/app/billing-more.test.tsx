@@ -109,7 +109,7 @@ describe("tax-exemption certificates", () => {
       "GET /api/calendar-feed": { body: { url: null } },
     });
     renderApp("/buyer/account");
-    expect(await screen.findByTestId("cert-expired-warning")).toHaveTextContent(/expired on 30 Nov 2025: tax is charged again until a new one is approved/);
+    expect(await screen.findByTestId("cert-expired-warning")).toHaveTextContent(/expired on Nov 30, 2025: tax is charged again until a new one is approved/);
     expect(screen.getByTestId("cert-3-status")).toHaveTextContent("Expired");
     expect(screen.queryByTestId("cert-3-approve")).toBeNull();
     expect(screen.getByTestId("buyer-account-me")).toBeOnTheScreen();
@@ -133,7 +133,7 @@ describe("tax-exemption certificates", () => {
     });
     renderApp("/office/accounts/11");
     fireEvent.press(await screen.findByTestId("cert-4-approve"));
-    expect(await screen.findByTestId("cert-valid")).toHaveTextContent(/approved until 31 Dec 2026/);
+    expect(await screen.findByTestId("cert-valid")).toHaveTextContent(/approved until Dec 31, 2026/);
     expect(api.callsTo("POST", "/api/certificates/4/review")[0].body).toEqual({ status: "approved" });
 
     fireEvent.press(screen.getByTestId("account-terms-choice-net14"));

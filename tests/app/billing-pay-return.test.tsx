@@ -23,7 +23,7 @@ describe("payment return page", () => {
     await tick(1500);
     expect(await screen.findByTestId("pay-paid")).toHaveTextContent("Paid");
     expect(screen.getByTestId("pay-receipt-amount")).toHaveTextContent("$58.73");
-    expect(screen.getByTestId("pay-receipt-date")).toHaveTextContent("2 Dec 2025");
+    expect(screen.getByTestId("pay-receipt-date")).toHaveTextContent("Dec 2, 2025");
     expect(screen.getByTestId("pay-receipt-method")).toHaveTextContent("Card");
     expect(screen.getByTestId("pay-back-invoices")).toBeOnTheScreen();
     expect(api.callsTo("GET", "/api/invoices/41")).toHaveLength(3);

@@ -20,7 +20,7 @@ describe("payouts", () => {
     signedInAs(BOOKKEEPER);
     mockApi({ ...sessionRoutes(BOOKKEEPER), "GET /api/payouts": { body: { payouts: PAYOUTS } }, "GET /api/payouts/:id": { body: payoutDetail() } });
     const app = renderApp("/office/money/payouts");
-    expect(await screen.findByTestId("payout-row-po_fake_1")).toHaveTextContent(/\$110\.58.*To reconcile.*4 Dec 2025/);
+    expect(await screen.findByTestId("payout-row-po_fake_1")).toHaveTextContent(/\$110\.58.*To reconcile.*Dec 4, 2025/);
     expect(screen.getByTestId("payout-reconciled-po_fake_0")).toHaveTextContent(/Reconciled/);
     fireEvent.press(screen.getByTestId("payout-row-po_fake_1"));
     expect(await screen.findByTestId("payout-title")).toHaveTextContent("$110.58");
@@ -57,14 +57,14 @@ describe("payouts", () => {
     // Each row leads with the invoice and its account, the date and the amount received; the fee and what was paid
     // out are lines of their own; the processor's id comes last, as a reference.
     const row = screen.getByTestId("txn-txn_1");
-    expect(row).toHaveTextContent(/^Invoice HB-2025-00041.*Matched.*Tidewater Café.*Card payment · 1 Dec 2025.*Card payment reference pi_1.*Received\$58\.73.*Processor fee-\$2\.00.*Paid out\$56\.73$/);
+    expect(row).toHaveTextContent(/^Invoice HB-2025-00041.*Matched.*Tidewater Café.*Card payment · Dec 1, 2025.*Card payment reference pi_1.*Received\$58\.73.*Processor fee-\$2\.00.*Paid out\$56\.73$/);
     expect(within(row).getByTestId("txn-invoice-txn_1")).toHaveTextContent("Invoice HB-2025-00041");
     expect(within(row).getByTestId("txn-account-txn_1")).toHaveTextContent("Tidewater Café");
     expect(within(row).getByTestId("txn-fee-txn_1")).toHaveTextContent("Processor fee-$2.00");
     expect(within(row).getByTestId("txn-ref-txn_1")).toHaveTextContent("Card payment reference pi_1");
     expect(screen.queryByTestId("txn-problem-txn_1")).toBeNull();
-    expect(stray).toHaveTextContent(/^No invoice found.*Card payment · 2 Dec 2025.*No Panwise payment.*Card payment reference ch_stray.*Received\$58\.73.*Processor fee-\$4\.88.*Paid out\$53\.85$/);
-    expect(screen.getByText(/Arrived 4 Dec 2025 · Bank reference po_fake_1/)).toBeOnTheScreen();
+    expect(stray).toHaveTextContent(/^No invoice found.*Card payment · Dec 2, 2025.*No Panwise payment.*Card payment reference ch_stray.*Received\$58\.73.*Processor fee-\$4\.88.*Paid out\$53\.85$/);
+    expect(screen.getByText(/Arrived Dec 4, 2025 · Bank reference po_fake_1/)).toBeOnTheScreen();
 
     fireEvent.press(screen.getByTestId("reconcile"));
     expect(await screen.findByTestId("reconcile-refused")).toHaveTextContent(/do not match/);

@@ -49,7 +49,7 @@ describe("orders board", () => {
     expect(await screen.findByTestId("board-table")).toBeOnTheScreen();
     expect(screen.getByTestId("board-total-row")).toHaveTextContent(/Total.*2 orders.*7.*4.*\$184\.60/);
     expect(screen.getByTestId("board-row-901")).toHaveTextContent(/Tidewater Café.*3.*–.*\$48\.60/);
-    expect(screen.getByTestId("board-title")).toHaveTextContent("Wednesday 3 December");
+    expect(screen.getByTestId("board-title")).toHaveTextContent("Wednesday, December 3");
   });
 
   it("switches dates", async () => {
@@ -59,7 +59,7 @@ describe("orders board", () => {
     await screen.findByTestId("board-total-101");
     fireEvent.press(screen.getByTestId("board-next"));
     await waitFor(() => expect(api.calls.some((c) => c.path === "/api/orders/board" && c.query.date === "2025-12-03")).toBe(true));
-    expect(await screen.findByTestId("board-date")).toHaveTextContent("Wed 3 Dec");
+    expect(await screen.findByTestId("board-date")).toHaveTextContent("Wed, Dec 3");
   });
 
   it("makes standing orders now (owner) and reports what it did", async () => {

@@ -3,7 +3,7 @@ import { BUYER, account, buyerOrderingRoutes, calendarDay, mockApi, orderDto, re
 
 beforeEach(() => signedInAs(BUYER));
 
-// The bakery's clock (helpers BAKERY): Tue 2 Dec 2025, 05:30 in Chicago.
+// The bakery's clock (helpers BAKERY): Tue, Dec 2, 2025, 5:30 AM in Chicago.
 const DAYS = [
   calendarDay({ date: "2025-12-02", weekday: 2, orderable: false, reason: "past_cutoff", reasonText: "Past the cut-off", cutoffAt: "2025-12-01T14:00:00.000-06:00", order: { id: 500, status: "locked", totalCents: 5400, itemCount: 3, source: "standing" } }),
   calendarDay({ date: "2025-12-03", weekday: 3, cutoffAt: "2025-12-02T06:10:00.000-06:00" }),
@@ -18,7 +18,7 @@ describe("buyer home", () => {
     renderApp("/buyer");
     expect(await screen.findByTestId("buyer-home-title")).toHaveTextContent("Tidewater Café");
     expect(await screen.findByTestId("day-2025-12-02-status")).toHaveTextContent(/Locked for baking/);
-    expect(screen.getByTestId("day-2025-12-02")).toHaveTextContent(/Today · Tue 2 Dec/);
+    expect(screen.getByTestId("day-2025-12-02")).toHaveTextContent(/Today · Tue, Dec 2/);
     expect(screen.getByTestId("day-2025-12-03-status")).toHaveTextContent(/Not ordered yet/);
     expect(screen.getByTestId("day-2025-12-04-status")).toHaveTextContent(/Order placed/);
     expect(screen.getByTestId("day-2025-12-04-summary")).toHaveTextContent("5 items · $90.00");
@@ -27,8 +27,8 @@ describe("buyer home", () => {
     expect(screen.queryByTestId("day-2025-12-05")).toBeNull();
     // 40 minutes left for tomorrow: urgent, with the cut-off in the bakery's zone.
     expect(screen.getByTestId("day-2025-12-03-countdown-text")).toHaveTextContent(/Closes in 40 min/);
-    expect(screen.getByTestId("day-2025-12-03-countdown-at")).toHaveTextContent("Cut-off Tue 2 Dec, 06:10 CST");
-    expect(screen.getByTestId("next-cutoff")).toHaveTextContent(/Tomorrow, Wednesday 3 December/);
+    expect(screen.getByTestId("day-2025-12-03-countdown-at")).toHaveTextContent("Cut-off Tue, Dec 2, 6:10 AM CST");
+    expect(screen.getByTestId("next-cutoff")).toHaveTextContent(/Tomorrow, Wednesday, December 3/);
     const q = api.callsTo("GET", "/api/calendar")[0].query;
     expect(q).toEqual({ from: "2025-12-02", to: "2025-12-15" });
 
@@ -43,7 +43,7 @@ describe("buyer home", () => {
     mockApi(buyerOrderingRoutes(DAYS[1], { "GET /api/calendar": (req) => ({ body: { days: req.query.from === req.query.to ? [DAYS[1]] : DAYS } }) }));
     const app = renderApp("/buyer");
     fireEvent.press(await screen.findByTestId("day-2025-12-03"));
-    expect(await screen.findByTestId("order-title")).toHaveTextContent("Wednesday 3 December");
+    expect(await screen.findByTestId("order-title")).toHaveTextContent("Wednesday, December 3");
     expect(app.getPathname()).toBe("/buyer/order/2025-12-03");
   });
 
@@ -74,7 +74,7 @@ describe("order history", () => {
       }),
     );
     renderApp("/buyer/orders");
-    expect(await screen.findByTestId("history-order-501")).toHaveTextContent(/Thu 4 Dec.*Order placed.*3 items · \$54\.00.*Standing order.*Changed by hand/);
+    expect(await screen.findByTestId("history-order-501")).toHaveTextContent(/Thu, Dec 4.*Order placed.*3 items · \$54\.00.*Standing order.*Changed by hand/);
     expect(screen.queryByTestId("history-order-400")).toBeNull();
     fireEvent.press(screen.getByTestId("history-show-past"));
     expect(screen.getByTestId("history-order-401-status")).toHaveTextContent(/Canceled/);

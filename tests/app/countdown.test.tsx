@@ -54,8 +54,8 @@ describe("cut-off countdown", () => {
 
   it("shows the cut-off in the bakery's time zone", () => {
     // Chicago is UTC−6 in December and UTC−5 in June (IANA tz database).
-    expect(formatCutoff("2025-12-02T20:00:00.000Z", "America/Chicago")).toBe("Tue 2 Dec, 14:00 CST");
-    expect(formatCutoff("2026-06-09T19:00:00.000Z", "America/Chicago")).toBe("Tue 9 Jun, 14:00 CDT");
+    expect(formatCutoff("2025-12-02T20:00:00.000Z", "America/Chicago")).toBe("Tue, Dec 2, 2:00 PM CST");
+    expect(formatCutoff("2026-06-09T19:00:00.000Z", "America/Chicago")).toBe("Tue, Jun 9, 2:00 PM CDT");
   });
 });
 

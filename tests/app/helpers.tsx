@@ -71,6 +71,7 @@ export const BAKERY: BakeryDto = {
   name: "Hollowbrook Bakehouse",
   timeZone: "America/Chicago",
   currency: "USD",
+  locale: "en-US",
   email: "hello@hollowbrook.test",
   phone: "+1 555 0100",
   address: "2 Mill Lane, Hollowbrook",
@@ -238,6 +239,7 @@ export const PRODUCTS: ProductDto[] = [
 
 export const SETTINGS: CalendarSettingsDto = {
   timeZone: "America/Chicago",
+  locale: "en-US",
   deliveryWeekdays: [2, 3, 4, 5, 6],
   cutoffTime: "14:00",
   leadDays: 1,

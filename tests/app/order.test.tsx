@@ -11,7 +11,7 @@ describe("order screen for a date", () => {
   it("steps quantities within the product's bounds and keeps a running total", async () => {
     mockApi(buyerOrderingRoutes(DAY));
     renderApp("/buyer/order/2025-12-03");
-    expect(await screen.findByTestId("order-title")).toHaveTextContent("Wednesday 3 December");
+    expect(await screen.findByTestId("order-title")).toHaveTextContent("Wednesday, December 3");
     expect(await screen.findByTestId("qty-101")).toBeOnTheScreen();
     expect(screen.getByTestId("order-total")).toHaveTextContent("$0.00");
 
@@ -59,7 +59,7 @@ describe("order screen for a date", () => {
     const post = api.callsTo("POST", "/api/orders")[0];
     expect(post.body).toEqual({ deliveryDate: "2025-12-03", lines: [{ productId: 101, quantity: 4 }], poNumber: "PO-77" });
     expect(post.headers["Idempotency-Key"]).toMatch(/^[0-9a-f-]{32,36}$/);
-    expect(await screen.findByTestId("order-notice")).toHaveTextContent(/Order placed for Wednesday 3 December/);
+    expect(await screen.findByTestId("order-notice")).toHaveTextContent(/Order placed for Wednesday, December 3/);
   });
 
   it("reuses the idempotency key when the same order is sent again after a dropped connection", async () => {
@@ -101,13 +101,13 @@ describe("order screen for a date", () => {
   it("locks the form when the server says the cut-off has passed", async () => {
     mockApi(
       buyerOrderingRoutes(DAY, {
-        "POST /api/orders": apiError(409, "cutoff_passed", "Orders for Wed 3 Dec closed at the cut-off, Tue 2 Dec, 14:00 CST. Call the bakery if something has gone wrong."),
+        "POST /api/orders": apiError(409, "cutoff_passed", "Orders for Wed, Dec 3 closed at the cut-off, Tue, Dec 2, 2:00 PM CST. Call the bakery if something has gone wrong."),
       }),
     );
     renderApp("/buyer/order/2025-12-03");
     fireEvent.changeText(await screen.findByTestId("qty-101"), "4");
     fireEvent.press(screen.getByTestId("order-submit"));
-    expect(await screen.findByTestId("order-closed")).toHaveTextContent(/Orders for Wed 3 Dec closed at the cut-off, Tue 2 Dec, 14:00 CST/);
+    expect(await screen.findByTestId("order-closed")).toHaveTextContent(/Orders for Wed, Dec 3 closed at the cut-off, Tue, Dec 2, 2:00 PM CST/);
     expect(screen.getByTestId("order-submit")).toBeDisabled();
     expect(screen.getByTestId("order-submit")).toHaveTextContent(/Ordering closed/);
     expect(screen.getByTestId("qty-101")).not.toBeEnabled();
@@ -123,7 +123,7 @@ describe("order screen for a date", () => {
     await act(async () => {
       jest.advanceTimersByTime(7000);
     });
-    expect(await screen.findByTestId("order-closed")).toHaveTextContent(/closed at the cut-off, Tue 2 Dec, 05:30 CST/);
+    expect(await screen.findByTestId("order-closed")).toHaveTextContent(/closed at the cut-off, Tue, Dec 2, 5:30 AM CST/);
     expect(screen.getByTestId("order-submit")).toBeDisabled();
     expect(screen.getByTestId("qty-101-inc")).toBeDisabled();
   });
@@ -145,7 +145,7 @@ describe("order screen for a date", () => {
     fireEvent.press(screen.getByTestId("order-submit"));
     await waitFor(() => expect(api.callsTo("PATCH", "/api/orders/501")).toHaveLength(1));
     expect(api.callsTo("PATCH", "/api/orders/501")[0].body).toEqual({ lines: [{ productId: 101, quantity: 5 }], poNumber: "", note: "" });
-    expect(await screen.findByTestId("order-notice")).toHaveTextContent(/Changes saved\. Your order for Wed 3 Dec is now \$90\.00\./);
+    expect(await screen.findByTestId("order-notice")).toHaveTextContent(/Changes saved\. Your order for Wed, Dec 3 is now \$90\.00\./);
 
     fireEvent.press(screen.getByTestId("order-cancel"));
     fireEvent.press(screen.getByTestId("order-cancel-confirm"));

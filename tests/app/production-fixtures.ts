@@ -83,8 +83,8 @@ export const LATE_SHIFT: Partial<PlanView> = {
   schedule: {
     ...SCHEDULE,
     shiftStartsAt: at("01:40"),
-    conflicts: [{ kind: "shift_start", message: "The day does not fit the shift: Cook and cool the paste (Milk bread, mix 1) has to start at 01:00, 40 min before the shift starts at 01:40 (2 steps start before the shift). Start 40 min earlier, at 01:00.", minutes: 40, entryId: "f1-m1-paste" }],
-    earlierStart: { minutes: 40, startsAt: at("01:00"), text: "Start 40 min earlier, at 01:00." },
+    conflicts: [{ kind: "shift_start", message: "The day does not fit the shift: Cook and cool the paste (Milk bread, mix 1) has to start at 1:00 AM, 40 min before the shift starts at 1:40 AM (2 steps start before the shift). Start 40 min earlier, at 1:00 AM.", minutes: 40, entryId: "f1-m1-paste" }],
+    earlierStart: { minutes: 40, startsAt: at("01:00"), text: "Start 40 min earlier, at 1:00 AM." },
   },
 };
 

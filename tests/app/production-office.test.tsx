@@ -37,9 +37,9 @@ describe("purchasing forecast", () => {
     expect(screen.getByTestId("forecast-item-10-packs")).toHaveTextContent("Not bought (e.g. tap water)");
     expect(screen.getByTestId("forecast-total")).toHaveTextContent(/\$73\.45/);
     expect(screen.getByTestId("forecast-lines")).toHaveTextContent(/2.*Ingredients to buy/);
-    expect(screen.getByTestId("forecast-day-2025-12-03")).toHaveTextContent(/Wed 3 Dec.*10\.169 kg.*11 units/);
+    expect(screen.getByTestId("forecast-day-2025-12-03")).toHaveTextContent(/Wed, Dec 3.*10\.169 kg.*11 units/);
     expect(screen.getByTestId("forecast-day-2025-12-07")).toHaveTextContent(/no dough/);
-    expect(screen.getByTestId("forecast-range")).toHaveTextContent("Wed 3 Dec – Tue 9 Dec");
+    expect(screen.getByTestId("forecast-range")).toHaveTextContent("Wed, Dec 3 – Tue, Dec 9");
     fireEvent.press(screen.getByTestId("forecast-next"));
     await waitFor(() => expect(api.calls.some((c) => c.path === "/api/production/forecast" && c.query.from === "2025-12-10")).toBe(true));
   });
@@ -118,7 +118,7 @@ describe("production in the office", () => {
     fireEvent.press(await screen.findByTestId("more-production"));
     expect(await screen.findByTestId("production-hub-title")).toHaveTextContent("Production");
     for (const key of ["day", "formulas", "ingredients", "forecast", "settings"]) expect(screen.getByTestId(`production-${key}`)).toBeOnTheScreen();
-    expect(await screen.findByText("Next bake day: Wed 3 Dec.")).toBeOnTheScreen();
+    expect(await screen.findByText("Next bake day: Wed, Dec 3.")).toBeOnTheScreen();
     expect(screen.getByTestId("tab-more")).toBeOnTheScreen();
   });
 

@@ -57,7 +57,7 @@ describe("standing order grid", () => {
   it("lists the coming dates and marks the ones changed by hand", async () => {
     mockApi(routes(standingDto()));
     renderApp("/buyer/standing");
-    expect(await screen.findByTestId("upcoming-2025-12-09")).toHaveTextContent(/Tue 9 Dec/);
+    expect(await screen.findByTestId("upcoming-2025-12-09")).toHaveTextContent(/Tue, Dec 9/);
     expect(screen.queryByTestId("upcoming-2025-12-09-edited")).toBeNull();
     expect(screen.getByTestId("upcoming-2025-12-16-edited")).toHaveTextContent("Changed by hand");
   });

@@ -188,7 +188,7 @@ describe("changing and cancelling", () => {
     const res = await t.http().patch(`/api/orders/${order.id}`).set(auth(buyer)).send({ note: "too late" });
     expect(res.status).toBe(409);
     expect(res.body.error.code).toBe("cutoff_passed");
-    expect(res.body.error.message).toContain("Wed 10 Jun, 14:00 CDT");
+    expect(res.body.error.message).toContain("Wed, Jun 10, 2:00 PM CDT");
     expect((await t.ds.getRepository(Order).findOneByOrFail({ id: order.id })).status).toBe("locked");
     const del = await t.http().delete(`/api/orders/${order.id}`).set(auth(buyer));
     expect(del.status).toBe(409);

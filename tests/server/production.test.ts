@@ -300,7 +300,7 @@ describe("bakehouse settings", () => {
     expect(late.schedule.conflicts[0]).toMatchObject({ kind: "shift_start", minutes: short });
     expect(late.schedule.earlierStart.minutes).toBe(short);
     expect(Date.parse(late.schedule.earlierStart.startsAt)).toBe(first);
-    expect(late.schedule.earlierStart.text).toMatch(/^Start (\d+ h )?(\d+ min )?earlier, at \d\d:\d\d\.$/);
+    expect(late.schedule.earlierStart.text).toMatch(/^Start (\d+ h )?(\d+ min )?earlier, at \d{1,2}:\d\d [AP]M\.$/);
     expect(late.warnings).toContain(late.schedule.conflicts[0].message);
     expect(late.inputs.shiftStartAt).toBe("2026-06-11T04:30:00.000-05:00");
 
@@ -379,7 +379,7 @@ describe("the seeded demo over its horizon", () => {
     const plan = (await d.http().get(`/api/production/plan?date=${saturday}`).set(auth(token))).body.plan;
     const c = plan.schedule.conflicts[0];
     expect(c).toMatchObject({ kind: "shift_start" });
-    expect(c.message).toMatch(/^The day does not fit the shift: .+ has to start at (Fri )?\d\d:\d\d, (\d+ h )?(\d+ min )?before the shift starts at 03:30/);
+    expect(c.message).toMatch(/^The day does not fit the shift: .+ has to start at (Fri )?\d{1,2}:\d\d [AP]M, (\d+ h )?(\d+ min )?before the shift starts at 3:30 AM/);
     expect(c.message).toContain(plan.schedule.earlierStart.text);
     expect(plan.schedule.earlierStart.minutes).toBe(c.minutes);
     await d.http().put("/api/production/settings").set(auth(token)).send(settings);

@@ -234,8 +234,10 @@ describe("a day that does not fit the shift", () => {
     const s = scheduleDay(input({ resources: resources({ shiftStart: "01:17" }) }));
     expect(s.conflicts).toHaveLength(1);
     expect(s.conflicts[0]).toMatchObject({ kind: "shift_start", minutes: 40, entryId: "f1-m1-paste" });
-    expect(s.conflicts[0].message).toBe("The day does not fit the shift: Cook and cool the paste (Milk bread, mix 1) has to start at 00:37, 40 min before the shift starts at 01:17. Start 40 min earlier, at 00:37.");
-    expect(s.earlierStart).toEqual({ minutes: 40, startsAt: "2026-06-11T00:37:00.000-05:00", text: "Start 40 min earlier, at 00:37." });
+    expect(s.conflicts[0].message).toBe("The day does not fit the shift: Cook and cool the paste (Milk bread, mix 1) has to start at 12:37 AM, 40 min before the shift starts at 1:17 AM. Start 40 min earlier, at 12:37 AM."); // times in the bakery's locale, en-US (CLDR "h:mm a")
+    expect(s.earlierStart).toEqual({ minutes: 40, startsAt: "2026-06-11T00:37:00.000-05:00", text: "Start 40 min earlier, at 12:37 AM." });
+    // The same day for an en-GB bakery: 24-hour times (CLDR en_GB; ICU leaves a numeric hour unpadded).
+    expect(scheduleDay(input({ locale: "en-GB", resources: resources({ shiftStart: "01:17" }) })).earlierStart?.text).toBe("Start 40 min earlier, at 0:37.");
     // A shift from 00:37 fits exactly.
     expect(scheduleDay(input({ resources: resources({ shiftStart: "00:37" }) })).conflicts).toEqual([]);
   });
@@ -245,7 +247,7 @@ describe("a day that does not fit the shift", () => {
     expect(s.shiftStartsAt).toBe("2026-06-10T23:00:00.000-05:00");
     expect(s.conflicts).toEqual([]);
     const big = scheduleDay(input({ products: [product({ productId: 1, pans: 60 })], mixes: [1, 2, 3].map((index) => ({ formulaId: 1, index, doughGrams: 20500 })), resources: resources({ shiftStart: "23:00" }) }));
-    expect(big.earlierStart?.text).toMatch(/^Start (\d+ h )?\d+ min earlier, at Wed \d\d:\d\d\.$|^Start \d+ h earlier, at Wed \d\d:\d\d\.$/);
+    expect(big.earlierStart?.text).toMatch(/^Start (\d+ h )?\d+ min earlier, at Wed \d{1,2}:\d\d [AP]M\.$|^Start \d+ h earlier, at Wed \d{1,2}:\d\d [AP]M\.$/);
   });
 
   it("writes minutes as a baker reads them", () => {

@@ -1,24 +1,24 @@
 import React from "react";
 import { Pressable, StyleSheet, View } from "react-native";
-import { DateTime } from "luxon";
 import { Badge, type BadgeTone } from "../../ui/Badge";
 import { AppText } from "../../ui/Text";
 import { TextLink } from "../../ui/TextLink";
 import { formatMoney } from "../../../shared/money";
 import { INVOICE_KIND_LABELS, INVOICE_STATUS_LABELS as SHARED_INVOICE_STATUS_LABELS, PAYMENT_METHOD_LABELS } from "../../../shared/billing";
+import { formatCalendarDate } from "../../../shared/format";
+import { currentLocale } from "../../format";
 import type { InvoiceDto, InvoiceStatus, PaymentDto, CreditNoteDto } from "../../api/invoices";
 import { colors, layout, radii, space } from "../../theme";
 
-/** Money in an invoice's (or a payout's lower-case) currency. */
+/** Money in an invoice's (or a payout's lower-case) currency, in the bakery's locale. */
 export function money(cents: number, currency = "USD"): string {
-  return formatMoney(cents, currency.toUpperCase());
+  return formatMoney(cents, currency.toUpperCase(), currentLocale());
 }
 
-/** "2 Mar 2026" for a calendar date (no time zone involved). */
+/** "Mar 2, 2026" (en-US) for a calendar date (no time zone involved). */
 export function day(date: string | null | undefined): string {
   if (!date) return "—";
-  const d = DateTime.fromISO(date.slice(0, 10), { zone: "UTC" });
-  return d.isValid ? d.toFormat("d LLL yyyy") : date;
+  return formatCalendarDate(date.slice(0, 10), "date", currentLocale());
 }
 
 /** Basis points as a percentage: 875 → "8.75 %". */

@@ -6,9 +6,12 @@ import { useCalendarSettingsQuery } from "../../api/calendar";
 import { useAccountDeliveryQuery } from "../../api/delivery";
 import { accountWeekdays, listWeekdays } from "./StandingOrderScreen";
 import { useMoney } from "../ordering/parts";
+import { formatTimeOfDay } from "../../../shared/format";
+import { currentLocale } from "../../format";
 
-/** "14:00 the day before delivery", "14:00 two days before delivery". */
-export function cutoffRule(cutoffTime: string, leadDays: number): string {
+/** "2:00 PM the day before delivery", "2:00 PM, 2 days before delivery" (the stored "14:00" in the bakery's locale). */
+export function cutoffRule(stored: string, leadDays: number): string {
+  const cutoffTime = formatTimeOfDay(stored, currentLocale());
   if (leadDays === 0) return `${cutoffTime} on the delivery day`;
   if (leadDays === 1) return `${cutoffTime} the day before delivery`;
   return `${cutoffTime}, ${leadDays} days before delivery`;

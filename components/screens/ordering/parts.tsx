@@ -6,6 +6,7 @@ import { Badge, type BadgeTone } from "../../ui/Badge";
 import { BASE_URL } from "../../api/client";
 import { useBakeryQuery } from "../../api/bakery";
 import { formatMoney } from "../../../shared/money";
+import { localeOr } from "../../../shared/format";
 import { ALLERGEN_CAUTION, ALLERGEN_LABEL, type AllergenCode } from "../../../shared/allergens";
 import { ORDER_STATUS_LABELS, type OrderStatus } from "../../../shared/schemas/orders";
 import type { CalendarDayDto } from "../../../shared/schemas/calendar";
@@ -14,10 +15,12 @@ import { formatCutoff } from "../../ordering/dates";
 import { mayContainLabel } from "../../ordering/allergens";
 import { colors, radii, space } from "../../theme";
 
-/** Money in the bakery's currency. */
+/** Money in the bakery's currency and locale. */
 export function useMoney(): (cents: number) => string {
-  const currency = useBakeryQuery().data?.currency ?? "USD";
-  return (cents: number) => formatMoney(cents, currency);
+  const bakery = useBakeryQuery().data;
+  const currency = bakery?.currency ?? "USD";
+  const locale = localeOr(bakery?.locale);
+  return (cents: number) => formatMoney(cents, currency, locale);
 }
 
 /** The product's photo, or a drawn stand-in. */

@@ -424,7 +424,7 @@ export function TemperaturesCard({ plan, units, busy, serverError, onSave, saved
   return (
     <Card title="Temperatures" testID="temperatures">
       <AppText variant="small" color="muted">
-        {`Measure before weighing. The liquid temperature on each card comes from these and the dough's target; the ice for the water, or how cold the milk must be, from the tap water and milk.${plan.frozen ? " Saving recalculates the frozen plan." : ""}`}
+        {`Measure before weighing. The liquid temperature on each card comes from these and the dough's target; the ice for the water, or how cold the milk must be, from the tap water and milk.${plan.frozen ? " Saving recalculates the plan set at the cut-off." : ""}`}
       </AppText>
       <View style={styles.temps}>
         {TEMP_FIELDS.map((f) => (

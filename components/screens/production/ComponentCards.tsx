@@ -2,10 +2,11 @@ import React from "react";
 import { StyleSheet, View } from "react-native";
 import { AppText, Heading } from "../../ui/Text";
 import type { Units } from "../../production/units";
+import { formatNum } from "../../format";
 import { COMPONENT_KIND_LABEL, type ComponentCard as ComponentCardData } from "../../../shared/components";
 import { colors, radii, space } from "../../theme";
 
-const count = (n: number, per: "piece" | "pan") => `${n.toLocaleString("en-US")} ${per === "piece" ? (n === 1 ? "piece" : "pieces") : n === 1 ? "pan" : "pans"}`;
+const count = (n: number, per: "piece" | "pan") => `${formatNum(n)} ${per === "piece" ? (n === 1 ? "piece" : "pieces") : n === 1 ? "pan" : "pans"}`;
 
 /** "Toasted sesame seeds · 32 pieces × 2 g = 64 g" — what one line of a component card says. */
 export function componentLineText(l: ComponentCardData["lines"][number], units: Pick<Units, "mass">): string {

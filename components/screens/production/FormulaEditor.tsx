@@ -25,6 +25,7 @@ import {
 import { formatPercent } from "../../production/units";
 import { STEP_KINDS, STEP_LABELS, type FormulaFigures, type IngredientInfo, type StepKind } from "../../../shared/production";
 import { celsiusToFahrenheit } from "../../../shared/units";
+import { formatNum } from "../../format";
 import type { FormulaInput, IngredientDto } from "../../../shared/schemas/production";
 import type { FieldErrors } from "../../../shared/errors";
 import { colors, fonts, layout, radii, space } from "../../theme";
@@ -340,7 +341,7 @@ export function FiguresPanel({ figures, hasPaste, testID = "formula-figures" }: 
     { label: "Flour's own moisture", value: formatPercent(figures.flourMoisturePercent ?? 0), id: "flour-moisture", hint: "Apart: not in the hydration" },
     { label: "Paste share", value: hasPaste ? formatPercent(figures.pasteSharePercent) : "No paste", id: "paste-share", hint: "Flour cooked" },
     { label: "Paste weight", value: hasPaste ? formatPercent(figures.pastePercent) : "–", id: "paste", hint: "Of the flour" },
-    { label: "Dough per kg flour", value: `${Math.round(figures.doughYieldPerKgFlour).toLocaleString("en-US")} g`, id: "yield" },
+    { label: "Dough per kg flour", value: `${formatNum(Math.round(figures.doughYieldPerKgFlour))} g`, id: "yield" },
   ];
   const flourOff = Math.abs(figures.flourPercent - 100) > 0.01;
   return (

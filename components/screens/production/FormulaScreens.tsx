@@ -22,7 +22,7 @@ import { useIngredientsQuery } from "../../api/ingredients";
 import { useProductsQuery } from "../../api/products";
 import { useBakeryTimeZone } from "../../api/bakery";
 import { useIsWide } from "../../shell/useIsWide";
-import { formatDateTime } from "../../format";
+import { formatDateTime, formatNum } from "../../format";
 import { emptyFormula, ingredientMap, valuesOf } from "../../production/formulaForm";
 import { kitchenPaths, type KitchenArea, type KitchenPaths } from "../../production/paths";
 import { formatPercent } from "../../production/units";
@@ -94,7 +94,7 @@ export function FormulasScreen({ area }: { area: KitchenArea }) {
           { key: "hydration", label: "Hydration", render: (f) => <AppText>{formatPercent(f.figures.hydrationPercent)}</AppText> },
           { key: "effective", label: "Effective", render: (f) => <AppText>{formatPercent(f.figures.effectiveHydrationPercent)}</AppText> },
           { key: "paste", label: "Paste share", render: (f) => <AppText>{f.paste ? formatPercent(f.figures.pasteSharePercent) : "No paste"}</AppText> },
-          { key: "yield", label: "Dough / kg flour", render: (f) => <AppText>{`${Math.round(f.figures.doughYieldPerKgFlour).toLocaleString("en-US")} g`}</AppText> },
+          { key: "yield", label: "Dough / kg flour", render: (f) => <AppText>{`${formatNum(Math.round(f.figures.doughYieldPerKgFlour))} g`}</AppText> },
           { key: "products", label: "Products", flex: 2.4, render: (f) => <AppText variant="small">{productNames(f.productIds, products.data)}</AppText> },
         ]}
       />

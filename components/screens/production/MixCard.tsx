@@ -1,5 +1,4 @@
 import React from "react";
-import { DateTime } from "luxon";
 import { StyleSheet, View } from "react-native";
 import Feather from "@expo/vector-icons/Feather";
 import { AppText, Heading } from "../../ui/Text";
@@ -11,6 +10,8 @@ import { liquidNeedsAttention } from "../../../shared/production";
 import type { PlanView } from "../../api/production";
 import type { Units } from "../../production/units";
 import { colors, fonts, radii, space } from "../../theme";
+import { formatAtOwnOffset } from "../../../shared/format";
+import { currentLocale } from "../../format";
 
 export type Dough = PlanView["doughs"][number];
 export type Mix = Dough["mixes"][number];
@@ -128,15 +129,12 @@ export function MixCard({ dough, mix, units, done, busy, onDone }: MixCardProps)
   );
 }
 
-/** "Mix 01:40–01:55 on the Spiral mixer · paste on at 01:00" (with the weekday when it is the day before). */
+/** "Mix 1:40 AM–1:55 AM on the Spiral mixer · paste on at 1:00 AM" (en-US; with the weekday when it is the day before). */
 export function mixTimeText(s: NonNullable<Mix["scheduled"]>, withPaste: boolean): string {
-  const at = (iso: string) => {
-    const dt = DateTime.fromISO(iso, { setZone: true });
-    return s.dayBefore ? dt.toFormat("ccc HH:mm") : dt.toFormat("HH:mm");
-  };
+  const at = (iso: string) => formatAtOwnOffset(iso, s.dayBefore ? "weekdayTime" : "time", currentLocale());
   const paste = withPaste && s.pasteStartsAt ? ` · paste on at ${at(s.pasteStartsAt)}` : "";
   const retard = s.dayBefore ? " · the day before: this dough is retarded overnight" : "";
-  return `Mix ${at(s.startsAt)}–${DateTime.fromISO(s.endsAt, { setZone: true }).toFormat("HH:mm")} on ${s.mixerName}${paste}${retard}`;
+  return `Mix ${at(s.startsAt)}–${formatAtOwnOffset(s.endsAt, "time", currentLocale())} on ${s.mixerName}${paste}${retard}`;
 }
 
 function SectionHead({ title, detail, step }: { title: string; detail?: string; step?: string }) {

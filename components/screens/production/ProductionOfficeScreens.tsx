@@ -18,6 +18,7 @@ import { ChoiceGroup } from "../../ui/ChoiceGroup";
 import { TickBox } from "../../ui/TickBox";
 import { splitError, validate } from "../../forms/errors";
 import { formatDay } from "../../ordering/dates";
+import { formatNum } from "../../format";
 import { kitchenPaths } from "../../production/paths";
 import { formatMass } from "../../../shared/units";
 import type { FieldErrors } from "../../../shared/errors";
@@ -228,7 +229,7 @@ function SettingsForm({ initial }: { initial: ProductionSettingsDto }) {
             {o.kind === "area" ? (
               <TextField
                 label="Usable shelf area per load (cm²)"
-                hint={area > 0 ? `= ${Math.round(area / CM2_PER_IN2).toLocaleString("en-US")} in², about ${Math.floor(area / HALF_SHEET_CM2)} half sheets. The pans' footprints must fit in it.` : "All shelves together; the pans' footprints (length × width) must fit in it."}
+                hint={area > 0 ? `= ${formatNum(Math.round(area / CM2_PER_IN2))} in², about ${Math.floor(area / HALF_SHEET_CM2)} half sheets. The pans' footprints must fit in it.` : "All shelves together; the pans' footprints (length × width) must fit in it."}
                 value={o.areaCm2} onChangeText={setOven(i, "areaCm2")} error={err(`ovens.${i}.capacity.areaCm2`)} inputMode="numeric" keyboardType="number-pad" testID={`settings-oven-${i}-area`}
               />
             ) : (
@@ -301,13 +302,13 @@ function SettingsForm({ initial }: { initial: ProductionSettingsDto }) {
 
 function mmToInchesText(mm: string): string {
   const n = Number(mm);
-  return n > 0 ? `${(n / 25.4).toLocaleString("en-US", { maximumFractionDigits: 1 })} in` : "—";
+  return n > 0 ? `${formatNum(n / 25.4, 0, 1)} in` : "—";
 }
 
 /** "2 mixers, 2 ovens (9,100 cm² of shelf; 5 pan slots), 3 people." */
 function capacitySummary(v: SettingsFormValues): string {
   const ovens = v.ovens.map((o) => {
-    if (o.kind === "area") return `${Number(o.areaCm2) > 0 ? Number(o.areaCm2).toLocaleString("en-US") : "?"} cm² of shelf`;
+    if (o.kind === "area") return `${Number(o.areaCm2) > 0 ? formatNum(Number(o.areaCm2)) : "?"} cm² of shelf`;
     const n = o.slots.split(",").map((x) => x.trim()).filter(Boolean).length;
     return `${n} pan ${n === 1 ? "slot" : "slots"}`;
   });

@@ -299,7 +299,7 @@ const styles = StyleSheet.create({
   chart: { gap: space.xs },
   axis: { flexDirection: "row", height: 20 },
   track: { flex: 1, position: "relative", minHeight: 20, alignSelf: "stretch" },
-  tickLabel: { position: "absolute", top: 0, marginLeft: -18, width: 36, textAlign: "center" },
+  tickLabel: { position: "absolute", top: 0, marginLeft: -20, width: 40, textAlign: "center" }, // "12 AM" in the caption size
   lane: { flexDirection: "row", alignItems: "stretch", minHeight: 44, borderTopWidth: 1, borderTopColor: colors.border },
   laneLabel: { paddingVertical: space.xs, paddingRight: space.sm, justifyContent: "center" },
   gridLine: { position: "absolute", top: 0, bottom: 0, width: 1, backgroundColor: colors.border },

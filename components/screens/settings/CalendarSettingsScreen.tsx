@@ -13,6 +13,9 @@ import { AppText } from "../../ui/Text";
 import { TextLink } from "../../ui/TextLink";
 import { useCalendarSettingsQuery, useSaveCalendarSettingsMutation } from "../../api/calendar";
 import { useBakeryQuery } from "../../api/bakery";
+import { ChoiceGroup } from "../../ui/ChoiceGroup";
+import { DEFAULT_LOCALE, LOCALE_NAMES, SUPPORTED_LOCALES, formatCalendarDate, formatTimeOfDay, isSupportedLocale, type SupportedLocale } from "../../../shared/format";
+import { formatMoney } from "../../../shared/money";
 import { splitError, validate } from "../../forms/errors";
 import { addDays, cleanDate, formatDay } from "../../ordering/dates";
 import { cutoffRule } from "../buyer/DeliveryTermsCard";
@@ -20,6 +23,11 @@ import { WEEKDAYS, WEEKDAY_LONG, WEEKDAY_SHORT, cutoffFor, formatLocal, weekdayO
 import { calendarSettingsSchema, type CalendarSettingsDto } from "../../../shared/schemas/calendar";
 import type { FieldErrors } from "../../../shared/errors";
 import { colors, layout, radii, space } from "../../theme";
+
+/** How a locale writes a day, a time and an amount: "Tue, Jun 9 · 2:00 PM · $1,234.50" (en-US). */
+export function localeSample(locale: string, currency = "USD"): string {
+  return `${formatCalendarDate("2026-06-09", "dayShort", locale)} · ${formatTimeOfDay("14:00", locale)} · ${formatMoney(123450, currency, locale)}`;
+}
 
 /** "A Tuesday delivery closes Mon 1 Dec, 14:00 CST": the rule worked through for the next delivery day. */
 export function cutoffExample(today: string, s: Pick<CalendarSettingsDto, "timeZone" | "deliveryWeekdays" | "cutoffTime" | "leadDays">): string | null {
@@ -54,6 +62,7 @@ function SettingsForm({ initial }: { initial: CalendarSettingsDto }) {
   const save = useSaveCalendarSettingsMutation();
   const bakery = useBakeryQuery();
   const [weekdays, setWeekdays] = useState<Weekday[]>(initial.deliveryWeekdays);
+  const [locale, setLocale] = useState<SupportedLocale>(isSupportedLocale(initial.locale) ? initial.locale : DEFAULT_LOCALE);
   const [cutoffTime, setCutoffTime] = useState(initial.cutoffTime);
   const [leadDays, setLeadDays] = useState(String(initial.leadDays));
   const [horizonDays, setHorizonDays] = useState(String(initial.horizonDays));
@@ -80,7 +89,7 @@ function SettingsForm({ initial }: { initial: CalendarSettingsDto }) {
   const submit = () => {
     setSaved(false);
     setFormError(null);
-    const body = { timeZone: initial.timeZone, deliveryWeekdays: weekdays, cutoffTime: cutoffTime.trim(), leadDays, horizonDays, closures };
+    const body = { timeZone: initial.timeZone, locale, deliveryWeekdays: weekdays, cutoffTime: cutoffTime.trim(), leadDays, horizonDays, closures };
     const checked = validate(calendarSettingsSchema, body);
     if (!checked.ok) {
       setFields(checked.fields);
@@ -90,7 +99,7 @@ function SettingsForm({ initial }: { initial: CalendarSettingsDto }) {
     save.mutate(checked.data, {
       onSuccess: () => setSaved(true),
       onError: (err) => {
-        const split = splitError(err, ["deliveryWeekdays", "cutoffTime", "leadDays", "horizonDays", "closures"]);
+        const split = splitError(err, ["locale", "deliveryWeekdays", "cutoffTime", "leadDays", "horizonDays", "closures"]);
         setFields(split.fields);
         setFormError(split.formError);
       },
@@ -106,6 +115,18 @@ function SettingsForm({ initial }: { initial: CalendarSettingsDto }) {
     <>
       <Card title="Ordering rules" testID="calendar-rules">
         <DetailList items={[{ label: "Time zone", value: initial.timeZone.replace(/_/g, " "), testID: "calendar-timezone" }]} />
+        <ChoiceGroup<SupportedLocale>
+          label="Dates, times and amounts"
+          choices={SUPPORTED_LOCALES.map((l) => ({ value: l, label: LOCALE_NAMES[l], hint: localeSample(l, bakery.data?.currency) }))}
+          value={locale}
+          onChange={(v) => {
+            setLocale(v);
+            setSaved(false);
+          }}
+          error={fields.locale}
+          layout="list"
+          testID="calendar-locale"
+        />
         <MultiChoice<Weekday>
           label="Delivery days"
           hint="Each account can be narrowed to some of these on its own page."
