@@ -149,7 +149,7 @@ function BottomTabs({ items, pathname }: { items: NavItem[]; pathname: string })
               <View style={[styles.tabPill, active && styles.tabPillActive]}>
                 <Feather name={item.icon} size={20} color={active ? colors.crustInk : colors.muted} />
               </View>
-              <AppText variant="caption" color={active ? "crustInk" : "muted"} style={active ? styles.tabLabelActive : undefined}>
+              <AppText variant="caption" color={active ? "crustInk" : "muted"} style={[styles.tabLabel, active && styles.tabLabelActive]}>
                 {item.label}
               </AppText>
             </LinkPressable>
@@ -229,5 +229,7 @@ const styles = StyleSheet.create({
   tab: { flex: 1, minHeight: layout.tabBarHeight, alignItems: "center", justifyContent: "center", gap: space.xxs, paddingVertical: space.xs },
   tabPill: { width: 52, height: 28, borderRadius: radii.pill, alignItems: "center", justifyContent: "center" },
   tabPillActive: { backgroundColor: colors.crustSoft },
+  /** Two-word labels ("Standing order") wrap onto a second line, centred under the icon. */
+  tabLabel: { textAlign: "center" },
   tabLabelActive: { fontFamily: "Nunito_800ExtraBold" },
 });
