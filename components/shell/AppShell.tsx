@@ -229,7 +229,7 @@ const styles = StyleSheet.create({
   tab: { flex: 1, minHeight: layout.tabBarHeight, alignItems: "center", justifyContent: "center", gap: space.xxs, paddingVertical: space.xs },
   tabPill: { width: 52, height: 28, borderRadius: radii.pill, alignItems: "center", justifyContent: "center" },
   tabPillActive: { backgroundColor: colors.crustSoft },
-  /** Two-word labels ("Standing order") wrap onto a second line, centred under the icon. */
+  /** Two-word labels ("Standing order") wrap onto a second line, centered under the icon. */
   tabLabel: { textAlign: "center" },
   tabLabelActive: { fontFamily: "Nunito_800ExtraBold" },
 });
