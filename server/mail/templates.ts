@@ -1,4 +1,5 @@
 import { allergenStatement } from "../../shared/allergens";
+import { quantityText } from "../../shared/quantity";
 
 /** E-mail bodies: every mail has an HTML and a plain-text part saying the same thing. */
 const escapeHtml = (s: string) =>
@@ -73,7 +74,7 @@ export function orderMail(p: {
   const verb = { placed: "Order received", changed: "Order changed", cancelled: "Order cancelled" }[p.kind];
   // Each line names its allergens (the product's declaration: formula, components and its own), as US FALCPA (as amended
   // by the FASTER Act of 2021) and EU Regulation 1169/2011 Annex II list them.
-  const lines = order.lines.map((l) => `${l.quantity} × ${l.productName} (${l.saleUnit}) — ${money(l.lineTotalCents)}. ${allergenStatement(l.allergens, l.mayContain)}`);
+  const lines = order.lines.map((l) => `${l.productName} — ${quantityText(l.quantity, l)} — ${money(l.lineTotalCents)}. ${allergenStatement(l.allergens, l.mayContain)}`);
   const paras =
     p.kind === "cancelled"
       ? [`Your order for ${day} (${order.accountName}) is cancelled. Nothing will be delivered that day.`]

@@ -35,6 +35,8 @@ export const productInputSchema = z
     name: z.string({ required_error: "Enter the product's name." }).trim().min(1, "Enter the product's name.").max(120, "Use at most 120 characters."),
     description: z.string().trim().max(1000, "Use at most 1000 characters.").default(""),
     saleUnit: z.string({ required_error: "Enter how it is sold, e.g. tray of 15 rolls." }).trim().min(1, "Enter how it is sold, e.g. tray of 15 rolls.").max(60, "Use at most 60 characters."),
+    /** "trays of 15 rolls": how a count of more than one reads (shared/quantity.ts). */
+    saleUnitPlural: z.string({ required_error: "Enter the plural of the sale unit, e.g. trays of 15 rolls." }).trim().min(1, "Enter the plural of the sale unit, e.g. trays of 15 rolls.").max(60, "Use at most 60 characters."),
     piecesPerUnit: intIn("Pieces per unit", 1, 500),
     pieceGrams: intIn("Piece weight", 1, 5000),
     panName: z.string().trim().min(1, "Name the pan, e.g. 9×13 in pan.").max(60, "Use at most 60 characters."),
@@ -85,6 +87,8 @@ export interface ProductDto {
   description: string;
   photoUrl: string | null;
   saleUnit: string;
+  /** "trays of 15 rolls" (shared/quantity.ts quantityText). */
+  saleUnitPlural: string;
   piecesPerUnit: number;
   pieceGrams: number;
   panName: string;

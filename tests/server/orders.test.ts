@@ -341,7 +341,7 @@ describe("orders board CSV", () => {
     const { boardCsv } = await import("../../server/orders/board.service");
     const csv = boardCsv({
       date: "2026-06-19",
-      products: [{ id: 1, name: "-Rolls", saleUnit: "tray", total: 2 }],
+      products: [{ id: 1, name: "-Rolls", saleUnit: "tray", saleUnitPlural: "trays", total: 2 }],
       rows: [{ accountId: 1, accountName: "-2+3+cmd", orderId: 1, status: "open", poNumber: "\tPO", quantities: { 1: 2 }, totalCents: -150 }],
       totalCents: -150,
     }, "USD");
