@@ -32,9 +32,9 @@ describe("orders board", () => {
     signedInAs(OWNER);
     const api = mockApi(routes(OWNER));
     renderApp("/office/orders");
-    expect(await screen.findByTestId("board-total-101")).toHaveTextContent(/7.*Milk-bread dinner rolls/);
-    expect(screen.getByTestId("board-total-102")).toHaveTextContent(/4.*Brioche burger buns/);
-    expect(screen.getByTestId("board-grand-total")).toHaveTextContent("2 orders · 11 units · $184.60");
+    expect(await screen.findByTestId("board-total-101")).toHaveTextContent(/7.*Milk-bread dinner rolls.*trays of 15 rolls/);
+    expect(screen.getByTestId("board-total-102")).toHaveTextContent(/4.*Brioche burger buns.*packs of 8 buns/);
+    expect(screen.getByTestId("board-grand-total")).toHaveTextContent("2 orders · 2 products · $184.60"); // 7 trays and 4 packs are never added up
     expect(screen.getByTestId("board-row-902")).toHaveTextContent(/Juniper Table.*PO JT-9.*4.*Milk-bread dinner rolls.*\$136\.00/);
     expect(api.callsTo("GET", "/api/orders/board")[0].query.date).toBe("2025-12-02");
     expect(screen.getByTestId("board-csv")).toBeOnTheScreen();
@@ -84,7 +84,7 @@ describe("orders board", () => {
     mockApi(routes(BAKER));
     renderApp("/bake/orders");
     expect(await screen.findByTestId("board-total-101")).toHaveTextContent(/7/);
-    expect(screen.getByTestId("board-grand-total")).toHaveTextContent("2 orders · 11 units");
+    expect(screen.getByTestId("board-grand-total")).toHaveTextContent("2 orders · 2 products");
     expect(screen.queryByText(/\$184\.60/)).toBeNull();
     expect(screen.queryByTestId("board-csv")).toBeNull();
     expect(screen.queryByTestId("materialise")).toBeNull();

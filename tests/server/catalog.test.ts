@@ -274,7 +274,7 @@ describe("calendar settings and the calendar", () => {
     expect(res.status).toBe(200);
     const day = (d: string) => res.body.days.find((x: { date: string }) => x.date === d);
     expect(day("2026-06-10")).toMatchObject({ orderable: false, reason: "not_delivery_day" }); // a Wednesday; the account's route days are Tue and Thu
-    expect(day("2026-06-11")).toMatchObject({ orderable: true, cutoffAt: "2026-06-10T13:30:00.000-05:00", order: { status: "open", totalCents: 3300, itemCount: 2 } });
+    expect(day("2026-06-11")).toMatchObject({ orderable: true, cutoffAt: "2026-06-10T13:30:00.000-05:00", order: { status: "open", totalCents: 3300, productCount: 1 } });
     expect(day("2026-06-13")).toMatchObject({ orderable: false, reason: "not_delivery_day" });
     expect(day("2026-06-16")).toMatchObject({ orderable: true, order: null });
     expect(day("2026-06-25")).toMatchObject({ orderable: false, reason: "beyond_horizon" });
