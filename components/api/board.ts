@@ -5,7 +5,7 @@ import { api, apiBlob } from "./client";
 /** Accounts × products for one delivery date (cancelled orders left out). */
 export interface BoardDto {
   date: string;
-  products: { id: number; name: string; saleUnit: string; total: number }[];
+  products: { id: number; name: string; saleUnit: string; saleUnitPlural: string; total: number }[];
   rows: { accountId: number; accountName: string; orderId: number; status: string; poNumber: string | null; quantities: Record<string, number>; totalCents: number }[];
   totalCents: number;
 }

@@ -1,9 +1,11 @@
 /** Quantity steps and checks for one product line (0 = not ordering it). */
+import { quantityText } from "../../shared/quantity";
 
 export interface QuantityRule {
   minQuantity: number;
   maxQuantity: number;
   saleUnit: string;
+  saleUnitPlural?: string;
 }
 
 /** "+": from nothing straight to the product's minimum, then one at a time up to its maximum. */
@@ -33,8 +35,8 @@ export function parseQuantity(text: string): number {
 export function quantityProblem(quantity: number, rule: QuantityRule): string | null {
   if (Number.isNaN(quantity)) return "Enter a whole number.";
   if (quantity === 0) return null;
-  if (quantity > rule.maxQuantity) return `At most ${rule.maxQuantity} ${rule.saleUnit} per order.`;
-  if (quantity < rule.minQuantity) return `At least ${rule.minQuantity} ${rule.saleUnit} per order.`;
+  if (quantity > rule.maxQuantity) return `At most ${quantityText(rule.maxQuantity, rule)} per order.`;
+  if (quantity < rule.minQuantity) return `At least ${quantityText(rule.minQuantity, rule)} per order.`;
   return null;
 }
 
@@ -42,4 +44,9 @@ export function quantityProblem(quantity: number, rule: QuantityRule): string | 
 export function shortfall(totalCents: number, minimumCents: number): number {
   if (minimumCents <= 0 || totalCents <= 0) return 0;
   return Math.max(0, minimumCents - totalCents);
+}
+
+/** How many products an order (or a board) has: its quantities are trays, dozens and loaves, which never add up. */
+export function productsLabel(n: number): string {
+  return n === 1 ? "1 product" : `${n} products`;
 }

@@ -15,6 +15,7 @@ import { amountDue, dueDate, formatDocNumber, invoiceTotals, taxCents, type Paym
 import { localToday, addDays } from "../../shared/calendar";
 import { toDecimal } from "../../shared/money";
 import type { SessionUser } from "../../shared/schemas/auth";
+import { quantityText } from "../../shared/quantity";
 
 // ---- numbers ----------------------------------------------------------------------------------
 
@@ -82,8 +83,8 @@ export async function issueInvoice(ctx: AppContext, m: EntityManager, account: C
     .innerJoin(Order, "o", "o.id = l.orderId")
     .leftJoin(InvoiceLine, "il", "il.orderLineId = l.id")
     .where("l.orderId IN (:...ids) AND il.id IS NULL AND o.status = 'delivered'", { ids: orderIds.concat([0]) })
-    .select(["l.id AS id", "l.orderId AS orderId", "o.deliveryDate AS deliveryDate", "l.productId AS productId", "l.productName AS productName", "l.saleUnit AS saleUnit", "l.quantity AS quantity", "l.unitPriceCents AS unitPriceCents", "l.lineTotalCents AS lineTotalCents"])
-    .orderBy("o.deliveryDate").addOrderBy("l.id").getRawMany<{ id: number; orderId: number; deliveryDate: string; productId: number; productName: string; saleUnit: string; quantity: number; unitPriceCents: number; lineTotalCents: number }>();
+    .select(["l.id AS id", "l.orderId AS orderId", "o.deliveryDate AS deliveryDate", "l.productId AS productId", "l.productName AS productName", "l.saleUnit AS saleUnit", "l.saleUnitPlural AS saleUnitPlural", "l.quantity AS quantity", "l.unitPriceCents AS unitPriceCents", "l.lineTotalCents AS lineTotalCents"])
+    .orderBy("o.deliveryDate").addOrderBy("l.id").getRawMany<{ id: number; orderId: number; deliveryDate: string; productId: number; productName: string; saleUnit: string; saleUnitPlural: string; quantity: number; unitPriceCents: number; lineTotalCents: number }>();
   if (!lines.length) return null;
   const today = localToday(ctx.clock.now(), bakery.timeZone);
   const exemption = await validExemption(m, account.id, today);
@@ -99,6 +100,7 @@ export async function issueInvoice(ctx: AppContext, m: EntityManager, account: C
   }));
   await m.getRepository(InvoiceLine).insert(lines.map((l) => ({
     invoiceId: inv.id, orderLineId: l.id, orderId: l.orderId, deliveryDate: String(l.deliveryDate).slice(0, 10),
+    // The unit the price is for (the Qty column holds the count; a credit note copies this description with its own count).
     description: `${l.productName} (${l.saleUnit})`, quantity: l.quantity, unitPriceCents: l.unitPriceCents, amountCents: l.lineTotalCents,
   })));
 
@@ -108,7 +110,7 @@ export async function issueInvoice(ctx: AppContext, m: EntityManager, account: C
     const l = lines.find((x) => x.orderId === a.orderId && x.productId === a.productId);
     if (!l || a.deliveredQuantity >= l.quantity) return [];
     const q = l.quantity - a.deliveredQuantity;
-    return [{ description: `${l.productName} (${l.saleUnit}) delivered ${a.deliveredQuantity} of ${l.quantity}${a.reason ? `: ${a.reason}` : ""}`, quantity: q, unitPriceCents: l.unitPriceCents, amountCents: q * l.unitPriceCents }];
+    return [{ description: `${l.productName}: delivered ${a.deliveredQuantity} of ${quantityText(l.quantity, l)}${a.reason ? `: ${a.reason}` : ""}`, quantity: q, unitPriceCents: l.unitPriceCents, amountCents: q * l.unitPriceCents }];
   });
   if (shortLines.length) {
     const cn = await createCreditNote(ctx, m, inv, shortLines, "Short delivery", "applied");

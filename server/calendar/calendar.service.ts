@@ -95,9 +95,9 @@ export async function calendarFor(ctx: AppContext, actor: SessionUser, q: { from
   const orders = await ctx.dataSource.getRepository(Order).createQueryBuilder("o")
     .leftJoin("o.lines", "l")
     .select(["o.id AS id", "o.deliveryDate AS deliveryDate", "o.status AS status", "o.totalCents AS totalCents", "o.source AS source"])
-    .addSelect("COALESCE(SUM(l.quantity), 0)", "itemCount")
+    .addSelect("COUNT(l.id)", "productCount") // lines are one per product; their quantities are in unlike units
     .where("o.accountId = :a AND o.deliveryDate BETWEEN :from AND :to", { a: account.id, from: q.from, to: q.to })
-    .groupBy("o.id").getRawMany<{ id: number; deliveryDate: string; status: string; totalCents: number; source: string; itemCount: string }>();
+    .groupBy("o.id").getRawMany<{ id: number; deliveryDate: string; status: string; totalCents: number; source: string; productCount: string }>();
   const byDate = new Map(orders.map((o) => [String(o.deliveryDate).slice(0, 10), o]));
   const now = ctx.clock.now();
   return dateRange(q.from, q.to, CALENDAR_MAX_DAYS).map((date) => {
@@ -110,7 +110,7 @@ export async function calendarFor(ctx: AppContext, actor: SessionUser, q: { from
       reason: st.reason,
       reasonText: st.reason ? (st.reason === "closed" && settings.closureNotes.get(date) ? `${REASON_TEXT.closed}: ${settings.closureNotes.get(date)}` : REASON_TEXT[st.reason]) : null,
       cutoffAt: st.cutoffAt,
-      order: o && o.status !== "cancelled" ? { id: Number(o.id), status: o.status, totalCents: Number(o.totalCents), itemCount: Number(o.itemCount), source: o.source } : null,
+      order: o && o.status !== "cancelled" ? { id: Number(o.id), status: o.status, totalCents: Number(o.totalCents), productCount: Number(o.productCount), source: o.source } : null,
     };
   });
 }

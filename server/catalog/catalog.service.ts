@@ -14,6 +14,7 @@ import { applyPercentOff } from "../../shared/money";
 import type { SessionUser } from "../../shared/schemas/auth";
 import { checkUpload, type CheckRules } from "../http/upload";
 import { photoStore } from "../files/file-store";
+import { suggestPlural } from "../../shared/quantity";
 
 /** How an account's prices are worked out: the list price, or its price list's. */
 export interface Pricing {
@@ -51,6 +52,7 @@ export function productDto(p: Product, makeup: ProductMakeup, lib: Map<number, I
     description: p.description,
     photoUrl: photoUrl(p),
     saleUnit: p.saleUnit,
+    saleUnitPlural: p.saleUnitPlural || suggestPlural(p.saleUnit),
     piecesPerUnit: p.piecesPerUnit,
     pieceGrams: p.pieceGrams,
     panName: p.panName,

@@ -18,6 +18,10 @@ export class Product {
   @Column({ type: "varchar", length: 60 })
   saleUnit: string;
 
+  /** The sale unit's plural as the owner wrote it ("trays of 15 rolls"); '' only on rows inserted raw (shared/quantity.ts suggests one then). */
+  @Column({ type: "varchar", length: 60, default: "" })
+  saleUnitPlural: string;
+
   @Column({ type: "int" })
   piecesPerUnit: number;
 

@@ -1,5 +1,6 @@
 import { allergenStatement } from "../../shared/allergens";
 import { formatterFor } from "../../shared/format";
+import { quantityText } from "../../shared/quantity";
 
 /** E-mail bodies: every mail has an HTML and a plain-text part saying the same thing. */
 const escapeHtml = (s: string) =>
@@ -77,7 +78,7 @@ export function orderMail(p: {
   const verb = { placed: "Order placed", changed: "Order changed", cancelled: "Order canceled" }[p.kind];
   // Each line names its allergens (the product's declaration: formula, components and its own), as US FALCPA (as amended
   // by the FASTER Act of 2021) and EU Regulation 1169/2011 Annex II list them.
-  const lines = order.lines.map((l) => `${l.quantity} × ${l.productName} (${l.saleUnit}) — ${money(l.lineTotalCents)}. ${allergenStatement(l.allergens, l.mayContain)}`);
+  const lines = order.lines.map((l) => `${l.productName} — ${quantityText(l.quantity, l)} — ${money(l.lineTotalCents)}. ${allergenStatement(l.allergens, l.mayContain)}`);
   const paras =
     p.kind === "cancelled"
       ? [`Your order for ${day} (${order.accountName}) is canceled. Nothing will be delivered that day.`]

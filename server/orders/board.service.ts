@@ -1,13 +1,14 @@
 import { stringify } from "csv-stringify/sync";
 import { toDecimal } from "../../shared/money";
 import { ORDER_STATUS_LABELS, type OrderStatus } from "../../shared/schemas/orders";
+import { saleUnitFor } from "../../shared/quantity";
 import type { AppContext } from "../http/context";
 import { Product } from "../catalog/product.entity";
 import { CustomerAccount } from "../accounts/account.entity";
 
 export interface BoardDto {
   date: string;
-  products: { id: number; name: string; saleUnit: string; total: number }[];
+  products: { id: number; name: string; saleUnit: string; saleUnitPlural: string; total: number }[];
   rows: { accountId: number; accountName: string; orderId: number; status: OrderStatus; poNumber: string | null; quantities: Record<number, number>; totalCents: number }[];
   totalCents: number;
 }
@@ -33,7 +34,7 @@ export async function board(ctx: AppContext, date: string): Promise<BoardDto> {
   const list = [...rows.values()].sort((a, b) => a.accountName.localeCompare(b.accountName));
   return {
     date,
-    products: products.map((p) => ({ id: p.id, name: p.name, saleUnit: p.saleUnit, total: totals.get(p.id) ?? 0 })),
+    products: products.map((p) => ({ id: p.id, name: p.name, saleUnit: p.saleUnit, saleUnitPlural: saleUnitFor(2, p), total: totals.get(p.id) ?? 0 })),
     rows: list,
     totalCents: list.reduce((s, r) => s + r.totalCents, 0),
   };

@@ -75,6 +75,10 @@ export class OrderLine {
   @Column({ type: "varchar", length: 60 })
   saleUnit: string;
 
+  /** The sale unit's plural as ordered (a snapshot, like the singular); '' only on rows inserted raw. */
+  @Column({ type: "varchar", length: 60, default: "" })
+  saleUnitPlural: string;
+
   @Column({ type: "int" })
   quantity: number;
 

@@ -21,6 +21,7 @@ import { orderMail } from "../mail/templates";
 import { retryOnDeadlock } from "../db/retry";
 import { derivedAllergens } from "../production/formulas.service";
 import { enqueueMail } from "../mail/outbox.service";
+import { quantityText, saleUnitFor } from "../../shared/quantity";
 
 type Settings = CalendarSettings;
 interface LineInput { productId: number; quantity: number }
@@ -47,7 +48,7 @@ export async function orderDtos(ctx: AppContext, orders: Order[], m: EntityManag
       lines: own.map((l) => {
         const p = products.get(l.productId);
         return {
-          productId: l.productId, productName: l.productName, saleUnit: l.saleUnit, quantity: l.quantity,
+          productId: l.productId, productName: l.productName, saleUnit: l.saleUnit, saleUnitPlural: saleUnitFor(2, l), quantity: l.quantity,
           unitPriceCents: l.unitPriceCents, lineTotalCents: l.lineTotalCents,
           allergens: derived.get(l.productId) ?? sortAllergens((p?.allergens ?? "").split(",").filter(Boolean)), mayContain: p?.mayContain ?? "",
         };
@@ -111,8 +112,8 @@ async function checkLines(ctx: AppContext, m: EntityManager, lines: LineInput[],
     const p = products.get(l.productId);
     if (!p) fields[`lines.${i}.productId`] = "This product does not exist.";
     else if (!p.active) fields[`lines.${i}.productId`] = `${p.name} is no longer offered.`;
-    else if (l.quantity > p.maxQuantity) fields[`lines.${i}.quantity`] = `At most ${p.maxQuantity} ${p.saleUnit} per order.`;
-    else if (l.quantity < p.minQuantity) fields[`lines.${i}.quantity`] = `At least ${p.minQuantity} ${p.saleUnit} per order.`;
+    else if (l.quantity > p.maxQuantity) fields[`lines.${i}.quantity`] = `At most ${quantityText(p.maxQuantity, p)} per order.`;
+    else if (l.quantity < p.minQuantity) fields[`lines.${i}.quantity`] = `At least ${quantityText(p.minQuantity, p)} per order.`;
   });
   if (Object.keys(fields).length) throw badRequest(Object.keys(fields).length === 1 ? Object.values(fields)[0] : "Some lines need attention.", fields);
   const now = ctx.clock.now().getTime();
@@ -127,7 +128,7 @@ async function priceLines(ctx: AppContext, m: EntityManager, accountId: number, 
   const priced = lines.map((l) => {
     const p = products.get(l.productId)!;
     const unit = pricing.price(p);
-    return { productId: p.id, productName: p.name, saleUnit: p.saleUnit, quantity: l.quantity, unitPriceCents: unit, lineTotalCents: unit * l.quantity };
+    return { productId: p.id, productName: p.name, saleUnit: p.saleUnit, saleUnitPlural: saleUnitFor(2, p), quantity: l.quantity, unitPriceCents: unit, lineTotalCents: unit * l.quantity };
   });
   // Line and order totals live in INT columns: above 2^31 − 1 cents the database would refuse the row.
   const most = formatMoney(MAX_ORDER_CENTS, currency, localeOr(locale));

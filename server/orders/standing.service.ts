@@ -12,6 +12,7 @@ import { addDays, dateStatus, daysBetween, localToday, weekdayOf, type Weekday }
 import { expandRule, weeklyRule } from "../../shared/recurrence";
 import type { SessionUser } from "../../shared/schemas/auth";
 import { MAX_ORDER_CENTS, type StandingOrderDto, type StandingOrderInput } from "../../shared/schemas/orders";
+import { quantityText, saleUnitFor } from "../../shared/quantity";
 
 async function load(m: EntityManager, accountId: number) {
   const so = await m.getRepository(StandingOrder).findOneBy({ accountId });
@@ -71,8 +72,8 @@ export async function putStandingOrder(ctx: AppContext, actor: SessionUser, inpu
   input.lines.forEach((l, i) => {
     const p = products.get(l.productId);
     if (!p || !p.active) fields[`lines.${i}.productId`] = "This product is not offered.";
-    else if (l.quantity > p.maxQuantity) fields[`lines.${i}.quantity`] = `At most ${p.maxQuantity} ${p.saleUnit} per order.`;
-    else if (l.quantity > 0 && l.quantity < p.minQuantity) fields[`lines.${i}.quantity`] = `At least ${p.minQuantity} ${p.saleUnit} per order.`;
+    else if (l.quantity > p.maxQuantity) fields[`lines.${i}.quantity`] = `At most ${quantityText(p.maxQuantity, p)} per order.`;
+    else if (l.quantity > 0 && l.quantity < p.minQuantity) fields[`lines.${i}.quantity`] = `At least ${quantityText(p.minQuantity, p)} per order.`;
   });
   const settings = await loadCalendarSettings(ctx);
   const routeDays = parseWeekdays(account.routeWeekdays) ?? settings.deliveryWeekdays;
@@ -185,7 +186,7 @@ async function syncOrder(ctx: AppContext, o: Order, dayLines: { productId: numbe
     const priced = dayLines.map((l) => {
       const p = products.get(l.productId)!;
       const unit = pricing.price(p);
-      return { orderId: o.id, productId: p.id, productName: p.name, saleUnit: p.saleUnit, quantity: l.quantity, unitPriceCents: unit, lineTotalCents: unit * l.quantity };
+      return { orderId: o.id, productId: p.id, productName: p.name, saleUnit: p.saleUnit, saleUnitPlural: saleUnitFor(2, p), quantity: l.quantity, unitPriceCents: unit, lineTotalCents: unit * l.quantity };
     });
     // Above 2^31 − 1 cents the INT columns would refuse the row: leave the order as it is (createOrder refuses such orders with a 400).
     if (priced.some((l) => l.lineTotalCents > MAX_ORDER_CENTS) || priced.reduce((s, l) => s + l.lineTotalCents, 0) > MAX_ORDER_CENTS) {

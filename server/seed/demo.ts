@@ -8,6 +8,7 @@ import { Product } from "../catalog/product.entity";
 import { PriceList, PriceListItem } from "../catalog/price-list.entity";
 import { BakeryClosure } from "../calendar/closure.entity";
 import { StandingOrder, StandingOrderLine } from "../orders/standing-order.entity";
+import { OrderLine } from "../orders/order.entity";
 import { weeklyRule } from "../../shared/recurrence";
 import type { Weekday } from "../../shared/calendar";
 import { BakehouseMixer, BakehouseOven, Formula, FormulaVersion, Ingredient, ProductionSettings } from "../production/production.entity";
@@ -101,13 +102,13 @@ const PULLMAN = { panName: "13×4 in Pullman pan", panLengthMm: 330, panWidthMm:
  */
 const FORMULA_BAKE = { bakeTempC: null as number | null, bakeMinutes: null as number | null, coolMinutes: null as number | null };
 export const DEMO_PRODUCTS = [
-  { key: "rolls", name: "Milk-bread dinner rolls", description: "Soft, pull-apart rolls made with a cooked milk-and-flour paste. Baked together so the sides stay tender.", saleUnit: "tray of 15 rolls", piecesPerUnit: 15, pieceGrams: 67, ...NINE_BY_THIRTEEN, unitsPerPan: 1, priceCents: 1800, minQuantity: 1, maxQuantity: 40, leadDays: null, allergens: "", mayContain: "sesame", ...FORMULA_BAKE },
-  { key: "sliders", name: "Milk-bread slider buns", description: "Small round buns for sliders and breakfast sandwiches, brushed with egg.", saleUnit: "dozen buns", piecesPerUnit: 12, pieceGrams: 45, ...HALF_SHEET, unitsPerPan: 2, priceCents: 1440, minQuantity: 1, maxQuantity: 30, leadDays: null, allergens: "", mayContain: "sesame", ...FORMULA_BAKE, bakeMinutes: 16 },
-  { key: "pullman", name: "Pullman milk loaf", description: "Square, close-crumbed sandwich loaf for toast and tea sandwiches.", saleUnit: "loaf", piecesPerUnit: 1, pieceGrams: 900, ...PULLMAN, unitsPerPan: 1, priceCents: 950, minQuantity: 1, maxQuantity: 30, leadDays: null, allergens: "", mayContain: "", ...FORMULA_BAKE, bakeMinutes: 40, coolMinutes: 90 },
-  { key: "oat", name: "Honey-oat rolls", description: "Milk-bread rolls with rolled oats and a little honey; oat-topped.", saleUnit: "tray of 15 rolls", piecesPerUnit: 15, pieceGrams: 70, ...NINE_BY_THIRTEEN, unitsPerPan: 1, priceCents: 1950, minQuantity: 1, maxQuantity: 30, leadDays: null, allergens: "", mayContain: "egg,sesame", ...FORMULA_BAKE },
-  { key: "brioche", name: "Brioche burger buns", description: "Rich, egg-glazed buns that hold a burger without going soggy.", saleUnit: "pack of 8 buns", piecesPerUnit: 8, pieceGrams: 90, ...HALF_SHEET, unitsPerPan: 2, priceCents: 1600, minQuantity: 1, maxQuantity: 25, leadDays: null, allergens: "", mayContain: "sesame", ...FORMULA_BAKE },
-  { key: "sesame", name: "Sesame brioche buns", description: "Our brioche buns topped with toasted sesame.", saleUnit: "pack of 8 buns", piecesPerUnit: 8, pieceGrams: 90, ...HALF_SHEET, unitsPerPan: 2, priceCents: 1700, minQuantity: 1, maxQuantity: 25, leadDays: null, allergens: "", mayContain: "", ...FORMULA_BAKE },
-  { key: "swirl", name: "Cinnamon swirl loaf", description: "Milk-bread loaf rolled with cinnamon sugar; needs an extra day's notice.", saleUnit: "loaf", piecesPerUnit: 1, pieceGrams: 800, ...PULLMAN, unitsPerPan: 1, priceCents: 1150, minQuantity: 1, maxQuantity: 12, leadDays: 2, allergens: "", mayContain: "tree_nuts", ...FORMULA_BAKE, bakeMinutes: 40, coolMinutes: 90 },
+  { key: "rolls", name: "Milk-bread dinner rolls", description: "Soft, pull-apart rolls made with a cooked milk-and-flour paste. Baked together so the sides stay tender.", saleUnit: "tray of 15 rolls", saleUnitPlural: "trays of 15 rolls", piecesPerUnit: 15, pieceGrams: 67, ...NINE_BY_THIRTEEN, unitsPerPan: 1, priceCents: 1800, minQuantity: 1, maxQuantity: 40, leadDays: null, allergens: "", mayContain: "sesame", ...FORMULA_BAKE },
+  { key: "sliders", name: "Milk-bread slider buns", description: "Small round buns for sliders and breakfast sandwiches, brushed with egg.", saleUnit: "dozen buns", saleUnitPlural: "dozen buns", piecesPerUnit: 12, pieceGrams: 45, ...HALF_SHEET, unitsPerPan: 2, priceCents: 1440, minQuantity: 1, maxQuantity: 30, leadDays: null, allergens: "", mayContain: "sesame", ...FORMULA_BAKE, bakeMinutes: 16 },
+  { key: "pullman", name: "Pullman milk loaf", description: "Square, close-crumbed sandwich loaf for toast and tea sandwiches.", saleUnit: "loaf", saleUnitPlural: "loaves", piecesPerUnit: 1, pieceGrams: 900, ...PULLMAN, unitsPerPan: 1, priceCents: 950, minQuantity: 1, maxQuantity: 30, leadDays: null, allergens: "", mayContain: "", ...FORMULA_BAKE, bakeMinutes: 40, coolMinutes: 90 },
+  { key: "oat", name: "Honey-oat rolls", description: "Milk-bread rolls with rolled oats and a little honey; oat-topped.", saleUnit: "tray of 15 rolls", saleUnitPlural: "trays of 15 rolls", piecesPerUnit: 15, pieceGrams: 70, ...NINE_BY_THIRTEEN, unitsPerPan: 1, priceCents: 1950, minQuantity: 1, maxQuantity: 30, leadDays: null, allergens: "", mayContain: "egg,sesame", ...FORMULA_BAKE },
+  { key: "brioche", name: "Brioche burger buns", description: "Rich, egg-glazed buns that hold a burger without going soggy.", saleUnit: "pack of 8 buns", saleUnitPlural: "packs of 8 buns", piecesPerUnit: 8, pieceGrams: 90, ...HALF_SHEET, unitsPerPan: 2, priceCents: 1600, minQuantity: 1, maxQuantity: 25, leadDays: null, allergens: "", mayContain: "sesame", ...FORMULA_BAKE },
+  { key: "sesame", name: "Sesame brioche buns", description: "Our brioche buns topped with toasted sesame.", saleUnit: "pack of 8 buns", saleUnitPlural: "packs of 8 buns", piecesPerUnit: 8, pieceGrams: 90, ...HALF_SHEET, unitsPerPan: 2, priceCents: 1700, minQuantity: 1, maxQuantity: 25, leadDays: null, allergens: "", mayContain: "", ...FORMULA_BAKE },
+  { key: "swirl", name: "Cinnamon swirl loaf", description: "Milk-bread loaf rolled with cinnamon sugar; needs an extra day's notice.", saleUnit: "loaf", saleUnitPlural: "loaves", piecesPerUnit: 1, pieceGrams: 800, ...PULLMAN, unitsPerPan: 1, priceCents: 1150, minQuantity: 1, maxQuantity: 12, leadDays: 2, allergens: "", mayContain: "tree_nuts", ...FORMULA_BAKE, bakeMinutes: 40, coolMinutes: 90 },
 ] as const;
 
 /** Standing orders per account: weekday → product key → quantity. */
@@ -258,6 +259,10 @@ export async function seedDemo(ds: DataSource): Promise<{ created: number }> {
       if (!row) {
         row = await products.save(products.create({ ...p, leadDays: p.leadDays, photoFile: null, active: true, formulaId: null, sortOrder: i }));
         created++;
+      } else if (!row.saleUnitPlural) {
+        // A demo database from before plurals were stored: the product and the lines ordered of it get theirs.
+        await products.update({ id: row.id }, { saleUnitPlural: p.saleUnitPlural });
+        await m.getRepository(OrderLine).update({ productId: row.id, saleUnit: p.saleUnit, saleUnitPlural: "" }, { saleUnitPlural: p.saleUnitPlural });
       }
       ids[key] = row.id;
     }

@@ -9,6 +9,7 @@ import { getBakery } from "../bakery/bakery.service";
 import { loadCalendarSettings, parseWeekdays } from "../calendar/calendar.service";
 import { addDays, cutoffFor, localToday, weekdayOf } from "../../shared/calendar";
 import { expandRule } from "../../shared/recurrence";
+import { saleUnitFor } from "../../shared/quantity";
 
 /**
  * Demo history: the standing orders as they would have run for the past weeks (delivered) and for the
@@ -41,7 +42,7 @@ export async function seedHistory(ctx: AppContext, weeksBack = 4): Promise<numbe
       const priced = dayLines.map((l) => {
         const p = products.get(l.productId)!;
         const unit = pricing.price(p);
-        return { productId: p.id, productName: p.name, saleUnit: p.saleUnit, quantity: l.quantity, unitPriceCents: unit, lineTotalCents: unit * l.quantity };
+        return { productId: p.id, productName: p.name, saleUnit: p.saleUnit, saleUnitPlural: saleUnitFor(2, p), quantity: l.quantity, unitPriceCents: unit, lineTotalCents: unit * l.quantity };
       });
       const [h, m] = bakery.dispatchTime.split(":").map(Number);
       const dispatched = DateTime.fromISO(date, { zone: settings.timeZone }).set({ hour: h, minute: m }).toMillis() <= now.getTime();

@@ -79,7 +79,8 @@ export interface CalendarDayDto {
   reason: NotOrderableReason | null;
   reasonText: string | null;
   cutoffAt: string;
-  order: { id: number; status: string; totalCents: number; itemCount: number; source: string } | null;
+  /** productCount: how many products the order has (never a sum of trays, dozens and loaves). */
+  order: { id: number; status: string; totalCents: number; productCount: number; source: string } | null;
 }
 
 export const calendarQuerySchema = z

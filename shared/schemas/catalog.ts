@@ -34,17 +34,20 @@ export const productInputSchema = z
   .object({
     name: z.string({ required_error: "Enter the product's name." }).trim().min(1, "Enter the product's name.").max(120, "Use at most 120 characters."),
     description: z.string().trim().max(1000, "Use at most 1000 characters.").default(""),
-    saleUnit: z.string({ required_error: "Enter how it is sold, e.g. tray of 15 rolls." }).trim().min(1, "Enter how it is sold, e.g. tray of 15 rolls.").max(60, "Use at most 60 characters."),
+    saleUnit: z.string({ required_error: "Enter the sale unit, e.g. tray of 15 rolls." }).trim().min(1, "Enter the sale unit, e.g. tray of 15 rolls.").max(60, "Use at most 60 characters."),
+    /** "trays of 15 rolls": how a count of more than one reads (shared/quantity.ts). */
+    saleUnitPlural: z.string({ required_error: "Enter the plural of the sale unit, e.g. trays of 15 rolls." }).trim().min(1, "Enter the plural of the sale unit, e.g. trays of 15 rolls.").max(60, "Use at most 60 characters."),
     piecesPerUnit: intIn("Pieces per unit", 1, 500),
     pieceGrams: intIn("Piece weight", 1, 5000),
     panName: z.string().trim().min(1, "Name the pan, e.g. 9×13 in pan.").max(60, "Use at most 60 characters."),
     panLengthMm: intIn("Pan length", 10, 2000),
     panWidthMm: intIn("Pan width", 10, 2000),
     unitsPerPan: intIn("Units per pan", 1, 100),
-    priceCents: intIn("Price", 0, MAX_PRICE_CENTS),
-    minQuantity: intIn("Minimum quantity", 1, 10000).default(1),
-    maxQuantity: intIn("Maximum quantity", 1, 10000).default(100),
-    leadDays: intIn("Lead days", 0, 14).nullable().default(null),
+    // Each message names its field as the product form labels it (components/screens/products/ProductFormScreen.tsx).
+    priceCents: intIn("List price", 0, MAX_PRICE_CENTS),
+    minQuantity: intIn("Minimum per order", 1, 10000).default(1),
+    maxQuantity: intIn("Maximum per order", 1, 10000).default(100),
+    leadDays: intIn("Days of notice", 0, 14).nullable().default(null),
     allergens: z.array(z.enum(ALLERGEN_CODES, { errorMap: () => ({ message: "Choose allergens from the list." }) })).max(20).default([]),
     mayContain: z.string().trim().max(300, "Use at most 300 characters.").default(""),
     active: z.boolean().default(true),
@@ -59,7 +62,7 @@ export const productInputSchema = z
     components: z.array(componentInputSchema).max(30, "At most 30 component lines.").optional(),
   })
   .superRefine((v, ctx) => {
-    if (v.maxQuantity < v.minQuantity) ctx.addIssue({ code: "custom", path: ["maxQuantity"], message: "The maximum must be at least the minimum." });
+    if (v.maxQuantity < v.minQuantity) ctx.addIssue({ code: "custom", path: ["maxQuantity"], message: "The maximum per order must be at least the minimum per order." });
     if (v.formulaId && v.boughtIn) ctx.addIssue({ code: "custom", path: ["boughtIn"], message: "A product is either baked from a formula or bought in, not both." });
     if (v.active && !v.formulaId && !v.boughtIn) {
       ctx.addIssue({ code: "custom", path: ["formulaId"], message: "Choose the formula it is baked from, or mark it bought in / not planned: otherwise buyers could order what production cannot plan." });
@@ -85,6 +88,8 @@ export interface ProductDto {
   description: string;
   photoUrl: string | null;
   saleUnit: string;
+  /** "trays of 15 rolls" (shared/quantity.ts quantityText). */
+  saleUnitPlural: string;
   piecesPerUnit: number;
   pieceGrams: number;
   panName: string;

@@ -70,6 +70,8 @@ export interface OrderLineDto {
   productId: number;
   productName: string;
   saleUnit: string;
+  /** As ordered, like the singular: "trays of 15 rolls". */
+  saleUnitPlural: string;
   quantity: number;
   unitPriceCents: number;
   lineTotalCents: number;

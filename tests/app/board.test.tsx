@@ -6,8 +6,8 @@ import type { BoardDto } from "../../components/api/board";
 const BOARD: BoardDto = {
   date: "2025-12-02",
   products: [
-    { id: 101, name: "Milk-bread dinner rolls", saleUnit: "tray of 15 rolls", total: 7 },
-    { id: 102, name: "Brioche burger buns", saleUnit: "pack of 8 buns", total: 4 },
+    { id: 101, name: "Milk-bread dinner rolls", saleUnit: "tray of 15 rolls", saleUnitPlural: "trays of 15 rolls", total: 7 },
+    { id: 102, name: "Brioche burger buns", saleUnit: "pack of 8 buns", saleUnitPlural: "packs of 8 buns", total: 4 },
   ],
   rows: [
     { accountId: 12, accountName: "Juniper Table", orderId: 902, status: "locked", poNumber: "JT-9", quantities: { 101: 4, 102: 4 }, totalCents: 13600 },
@@ -32,9 +32,9 @@ describe("orders board", () => {
     signedInAs(OWNER);
     const api = mockApi(routes(OWNER));
     renderApp("/office/orders");
-    expect(await screen.findByTestId("board-total-101")).toHaveTextContent(/7.*Milk-bread dinner rolls/);
-    expect(screen.getByTestId("board-total-102")).toHaveTextContent(/4.*Brioche burger buns/);
-    expect(screen.getByTestId("board-grand-total")).toHaveTextContent("2 orders · 11 units · $184.60");
+    expect(await screen.findByTestId("board-total-101")).toHaveTextContent(/7.*Milk-bread dinner rolls.*trays of 15 rolls/);
+    expect(screen.getByTestId("board-total-102")).toHaveTextContent(/4.*Brioche burger buns.*packs of 8 buns/);
+    expect(screen.getByTestId("board-grand-total")).toHaveTextContent("2 orders · 2 products · $184.60"); // 7 trays and 4 packs are never added up
     expect(screen.getByTestId("board-row-902")).toHaveTextContent(/Juniper Table.*PO JT-9.*4.*Milk-bread dinner rolls.*\$136\.00/);
     expect(api.callsTo("GET", "/api/orders/board")[0].query.date).toBe("2025-12-02");
     expect(screen.getByTestId("board-csv")).toBeOnTheScreen();
@@ -84,7 +84,7 @@ describe("orders board", () => {
     mockApi(routes(BAKER));
     renderApp("/bake/orders");
     expect(await screen.findByTestId("board-total-101")).toHaveTextContent(/7/);
-    expect(screen.getByTestId("board-grand-total")).toHaveTextContent("2 orders · 11 units");
+    expect(screen.getByTestId("board-grand-total")).toHaveTextContent("2 orders · 2 products");
     expect(screen.queryByText(/\$184\.60/)).toBeNull();
     expect(screen.queryByTestId("board-csv")).toBeNull();
     expect(screen.queryByTestId("materialise")).toBeNull();

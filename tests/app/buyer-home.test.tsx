@@ -5,9 +5,9 @@ beforeEach(() => signedInAs(BUYER));
 
 // The bakery's clock (helpers BAKERY): Tue, Dec 2, 2025, 5:30 AM in Chicago.
 const DAYS = [
-  calendarDay({ date: "2025-12-02", weekday: 2, orderable: false, reason: "past_cutoff", reasonText: "Past the cut-off", cutoffAt: "2025-12-01T14:00:00.000-06:00", order: { id: 500, status: "locked", totalCents: 5400, itemCount: 3, source: "standing" } }),
+  calendarDay({ date: "2025-12-02", weekday: 2, orderable: false, reason: "past_cutoff", reasonText: "Past the cut-off", cutoffAt: "2025-12-01T14:00:00.000-06:00", order: { id: 500, status: "locked", totalCents: 5400, productCount: 1, source: "standing" } }),
   calendarDay({ date: "2025-12-03", weekday: 3, cutoffAt: "2025-12-02T06:10:00.000-06:00" }),
-  calendarDay({ date: "2025-12-04", weekday: 4, cutoffAt: "2025-12-03T14:00:00.000-06:00", order: { id: 501, status: "open", totalCents: 9000, itemCount: 5, source: "one_off" } }),
+  calendarDay({ date: "2025-12-04", weekday: 4, cutoffAt: "2025-12-03T14:00:00.000-06:00", order: { id: 501, status: "open", totalCents: 9000, productCount: 2, source: "one_off" } }),
   calendarDay({ date: "2025-12-05", weekday: 5, orderable: false, reason: "not_delivery_day", reasonText: "No delivery on this day", cutoffAt: "2025-12-04T14:00:00.000-06:00" }),
   calendarDay({ date: "2025-12-25", weekday: 4, orderable: false, reason: "closed", reasonText: "The bakery is closed: Christmas", cutoffAt: "2025-12-24T14:00:00.000-06:00" }),
 ];
@@ -21,7 +21,7 @@ describe("buyer home", () => {
     expect(screen.getByTestId("day-2025-12-02")).toHaveTextContent(/Today · Tue, Dec 2/);
     expect(screen.getByTestId("day-2025-12-03-status")).toHaveTextContent(/Not ordered yet/);
     expect(screen.getByTestId("day-2025-12-04-status")).toHaveTextContent(/Order placed/);
-    expect(screen.getByTestId("day-2025-12-04-summary")).toHaveTextContent("5 items · $90.00");
+    expect(screen.getByTestId("day-2025-12-04-summary")).toHaveTextContent("2 products · $90.00");
     expect(screen.getByTestId("day-2025-12-25-status")).toHaveTextContent(/The bakery is closed: Christmas/);
     // No delivery on Fridays for this account: not listed.
     expect(screen.queryByTestId("day-2025-12-05")).toBeNull();
@@ -74,7 +74,7 @@ describe("order history", () => {
       }),
     );
     renderApp("/buyer/orders");
-    expect(await screen.findByTestId("history-order-501")).toHaveTextContent(/Thu, Dec 4.*Order placed.*3 items · \$54\.00.*Standing order.*Changed by hand/);
+    expect(await screen.findByTestId("history-order-501")).toHaveTextContent(/Thu, Dec 4.*Order placed.*1 product · \$54\.00.*Milk-bread dinner rolls \(3 trays of 15 rolls\).*Standing order.*Changed by hand/);
     expect(screen.queryByTestId("history-order-400")).toBeNull();
     fireEvent.press(screen.getByTestId("history-show-past"));
     expect(screen.getByTestId("history-order-401-status")).toHaveTextContent(/Canceled/);

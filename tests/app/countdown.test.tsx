@@ -60,7 +60,7 @@ describe("cut-off countdown", () => {
 });
 
 describe("quantity steps", () => {
-  const rule = { minQuantity: 2, maxQuantity: 5, saleUnit: "pack of 8 buns" };
+  const rule = { minQuantity: 2, maxQuantity: 5, saleUnit: "pack of 8 buns", saleUnitPlural: "packs of 8 buns" };
   it("jumps from nothing to the minimum and stops at the maximum", () => {
     expect(stepUp(0, rule)).toBe(2);
     expect(stepUp(2, rule)).toBe(3);
@@ -74,8 +74,8 @@ describe("quantity steps", () => {
     expect(parseQuantity("")).toBe(0);
     expect(parseQuantity(" 7 ")).toBe(7);
     expect(parseQuantity("2.5")).toBeNaN();
-    expect(quantityProblem(6, rule)).toBe("At most 5 pack of 8 buns per order.");
-    expect(quantityProblem(1, rule)).toBe("At least 2 pack of 8 buns per order.");
+    expect(quantityProblem(6, rule)).toBe("At most 5 packs of 8 buns per order.");
+    expect(quantityProblem(1, rule)).toBe("At least 2 packs of 8 buns per order.");
     expect(quantityProblem(0, rule)).toBeNull();
     expect(quantityProblem(Number.NaN, rule)).toBe("Enter a whole number.");
   });

@@ -5,8 +5,8 @@ import type { BoardDto } from "../../components/api/board";
 const BOARD: BoardDto = {
   date: "2025-12-02",
   products: [
-    { id: 101, name: "Milk-bread dinner rolls", saleUnit: "tray of 15 rolls", total: 7 },
-    { id: 102, name: "Brioche burger buns", saleUnit: "pack of 8 buns", total: 4 },
+    { id: 101, name: "Milk-bread dinner rolls", saleUnit: "tray of 15 rolls", saleUnitPlural: "trays of 15 rolls", total: 7 },
+    { id: 102, name: "Brioche burger buns", saleUnit: "pack of 8 buns", saleUnitPlural: "packs of 8 buns", total: 4 },
   ],
   rows: [
     { accountId: 12, accountName: "Juniper Table", orderId: 902, status: "locked", poNumber: "JT-9", quantities: { 101: 4, 102: 4 }, totalCents: 13600 },

@@ -117,6 +117,20 @@ describe("formulas", () => {
     expect(screen.queryByTestId("paste-cook-error")).toBeNull();
   });
 
+  it("names the fields in their errors as the labels do: target internal temperature, desired dough temperature", async () => {
+    const api = mockApi(routes());
+    renderApp("/bake/formulas/1");
+    const internal = await screen.findByTestId("formula-internal");
+    expect(screen.getByLabelText("Target internal temperature (°C)")).toBeOnTheScreen();
+    expect(screen.getByLabelText("Desired dough temperature (°C)")).toBeOnTheScreen();
+    fireEvent.changeText(internal, "120");
+    fireEvent.changeText(screen.getByTestId("formula-ddt"), "50");
+    fireEvent.press(screen.getByTestId("formula-save"));
+    expect(await screen.findByTestId("formula-internal-error")).toHaveTextContent("Target internal temperature can be at most 100.");
+    expect(screen.getByTestId("formula-ddt-error")).toHaveTextContent("Desired dough temperature can be at most 40.");
+    expect(api.callsTo("PUT", "/api/formulas/1")).toHaveLength(0);
+  });
+
   it("saves an edit as the next version with its note", async () => {
     const api = mockApi(routes(BAKER, { "PUT /api/formulas/:id": (req: FakeRequest) => ({ body: { formula: { ...formulaDto(), version: 3, name: (req.body as FormulaDto).name } } }) }));
     renderApp("/bake/formulas/1");

@@ -11,6 +11,7 @@ import type { BakeryDto, OfficeSummaryDto } from "../../shared/schemas/bakery";
 import type { ProductDto } from "../../shared/schemas/catalog";
 import type { CalendarDayDto, CalendarSettingsDto } from "../../shared/schemas/calendar";
 import type { OrderDto, StandingOrderDto } from "../../shared/schemas/orders";
+import { suggestPlural } from "../../shared/quantity";
 
 // ---- People and data shaped like the API's answers ----
 
@@ -202,6 +203,7 @@ export function product(overrides: Partial<ProductDto> = {}): ProductDto {
     description: "Soft pull-apart rolls.",
     photoUrl: null,
     saleUnit: "tray of 15 rolls",
+    saleUnitPlural: suggestPlural(overrides.saleUnit ?? "tray of 15 rolls"),
     piecesPerUnit: 15,
     pieceGrams: 67,
     panName: "9×13 in pan",
@@ -269,7 +271,7 @@ export function orderDto(overrides: Partial<OrderDto> = {}): OrderDto {
     status: "open",
     poNumber: null,
     note: null,
-    lines: [{ productId: 101, productName: "Milk-bread dinner rolls", saleUnit: "tray of 15 rolls", quantity: 3, unitPriceCents: 1800, lineTotalCents: 5400, allergens: ["gluten", "wheat", "egg", "milk"], mayContain: "sesame" }],
+    lines: [{ productId: 101, productName: "Milk-bread dinner rolls", saleUnit: "tray of 15 rolls", saleUnitPlural: "trays of 15 rolls", quantity: 3, unitPriceCents: 1800, lineTotalCents: 5400, allergens: ["gluten", "wheat", "egg", "milk"], mayContain: "sesame" }],
     totalCents: 5400,
     cutoffAt: "2025-12-02T14:00:00.000-06:00",
     source: "one_off",

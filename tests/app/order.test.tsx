@@ -33,8 +33,9 @@ describe("order screen for a date", () => {
     fireEvent.changeText(screen.getByTestId("qty-101"), "3");
     expect(screen.getByTestId("order-total")).toHaveTextContent("$54.00");
     expect(screen.getByTestId("line-101-total")).toHaveTextContent("$54.00");
+    expect(screen.getByTestId("order-items")).toHaveTextContent("1 product");
     fireEvent.changeText(screen.getByTestId("qty-101"), "41");
-    expect(screen.getByTestId("line-101-error")).toHaveTextContent("At most 40 tray of 15 rolls per order.");
+    expect(screen.getByTestId("line-101-error")).toHaveTextContent("At most 40 trays of 15 rolls per order.");
     expect(screen.getByTestId("order-submit")).toBeDisabled();
     expect(screen.getByTestId("allergen-caution")).toBeOnTheScreen();
     expect(screen.getAllByText(/Allergens shown are a guide/)).toHaveLength(1);
@@ -44,7 +45,7 @@ describe("order screen for a date", () => {
   it("shows how much is missing to the account's minimum and places the order with an idempotency key", async () => {
     const api = mockApi(
       buyerOrderingRoutes(DAY, {
-        "POST /api/orders": { status: 201, body: { order: orderDto({ lines: [], totalCents: 7200 }) } },
+        "POST /api/orders": { status: 201, body: { order: orderDto({ lines: [{ productId: 101, productName: "Milk-bread dinner rolls", saleUnit: "tray of 15 rolls", saleUnitPlural: "trays of 15 rolls", quantity: 4, unitPriceCents: 1800, lineTotalCents: 7200, allergens: [], mayContain: "" }], totalCents: 7200 }) } },
       }),
     );
     renderApp("/buyer/order/2025-12-03");
@@ -59,7 +60,7 @@ describe("order screen for a date", () => {
     const post = api.callsTo("POST", "/api/orders")[0];
     expect(post.body).toEqual({ deliveryDate: "2025-12-03", lines: [{ productId: 101, quantity: 4 }], poNumber: "PO-77" });
     expect(post.headers["Idempotency-Key"]).toMatch(/^[0-9a-f-]{32,36}$/);
-    expect(await screen.findByTestId("order-notice")).toHaveTextContent(/Order placed for Wednesday, December 3/);
+    expect(await screen.findByTestId("order-notice")).toHaveTextContent(/Order placed for Wednesday, December 3: Milk-bread dinner rolls \(4 trays of 15 rolls\), \$72\.00/);
   });
 
   it("reuses the idempotency key when the same order is sent again after a dropped connection", async () => {
@@ -86,14 +87,14 @@ describe("order screen for a date", () => {
   it("shows the server's field error next to the line it names", async () => {
     mockApi(
       buyerOrderingRoutes(DAY, {
-        "POST /api/orders": apiError(400, "validation_failed", "At least 2 pack of 8 buns per order.", { "lines.1.quantity": "At least 2 pack of 8 buns per order." }),
+        "POST /api/orders": apiError(400, "validation_failed", "At least 2 packs of 8 buns per order.", { "lines.1.quantity": "At least 2 packs of 8 buns per order." }),
       }),
     );
     renderApp("/buyer/order/2025-12-03");
     fireEvent.changeText(await screen.findByTestId("qty-101"), "3");
     fireEvent.changeText(screen.getByTestId("qty-102"), "2");
     fireEvent.press(screen.getByTestId("order-submit"));
-    expect(await screen.findByTestId("line-102-error")).toHaveTextContent("At least 2 pack of 8 buns per order.");
+    expect(await screen.findByTestId("line-102-error")).toHaveTextContent("At least 2 packs of 8 buns per order.");
     expect(screen.queryByTestId("line-101-error")).toBeNull();
     expect(screen.getByTestId("order-error-message")).toHaveTextContent(/Check Brioche burger buns/);
   });
@@ -131,7 +132,7 @@ describe("order screen for a date", () => {
   it("edits an existing order with PATCH and can cancel it", async () => {
     const order = orderDto();
     const api = mockApi(
-      buyerOrderingRoutes(calendarDay({ order: { id: 501, status: "open", totalCents: 5400, itemCount: 3, source: "one_off" } }), {
+      buyerOrderingRoutes(calendarDay({ order: { id: 501, status: "open", totalCents: 5400, productCount: 1, source: "one_off" } }), {
         "GET /api/orders/:id": { body: { order } },
         "PATCH /api/orders/:id": { body: { order: { ...order, totalCents: 9000, lines: [{ ...order.lines[0], quantity: 5, lineTotalCents: 9000 }] } } },
         "DELETE /api/orders/:id": { body: { order: { ...order, status: "cancelled" } } },
@@ -157,7 +158,7 @@ describe("order screen for a date", () => {
     let placed = false;
     mockApi(
       buyerOrderingRoutes(DAY, {
-        "GET /api/calendar": () => ({ body: { days: [placed ? calendarDay({ order: { id: 501, status: "open", totalCents: 5400, itemCount: 3, source: "one_off" } }) : DAY] } }),
+        "GET /api/calendar": () => ({ body: { days: [placed ? calendarDay({ order: { id: 501, status: "open", totalCents: 5400, productCount: 1, source: "one_off" } }) : DAY] } }),
         "GET /api/orders/:id": { body: { order: orderDto() } },
         "POST /api/orders": () => {
           placed = true;
@@ -175,13 +176,13 @@ describe("order screen for a date", () => {
 
   it("shows a locked order read-only", async () => {
     mockApi(
-      buyerOrderingRoutes(calendarDay({ orderable: false, reason: "past_cutoff", reasonText: "Past the cut-off", order: { id: 501, status: "locked", totalCents: 5400, itemCount: 3, source: "standing" } }), {
+      buyerOrderingRoutes(calendarDay({ orderable: false, reason: "past_cutoff", reasonText: "Past the cut-off", order: { id: 501, status: "locked", totalCents: 5400, productCount: 1, source: "standing" } }), {
         "GET /api/orders/:id": { body: { order: orderDto({ status: "locked", source: "standing" }) } },
       }),
     );
     renderApp("/buyer/order/2025-12-03");
     expect(await screen.findByTestId("order-readonly")).toHaveTextContent(/locked for baking/);
-    expect(screen.getByText("3 × Milk-bread dinner rolls")).toBeOnTheScreen();
+    expect(screen.getByText("3 trays of 15 rolls · $18.00 per tray of 15 rolls")).toBeOnTheScreen();
     expect(screen.queryByTestId("order-submit")).toBeNull();
   });
 });
@@ -241,7 +242,7 @@ describe("when Panwise is briefly unavailable", () => {
     let saved = order;
     let online = false;
     mockApi(
-      buyerOrderingRoutes(calendarDay({ order: { id: 501, status: "open", totalCents: 5400, itemCount: 3, source: "one_off" } }), {
+      buyerOrderingRoutes(calendarDay({ order: { id: 501, status: "open", totalCents: 5400, productCount: 1, source: "one_off" } }), {
         "GET /api/orders/:id": () => ({ body: { order: saved } }),
         "PATCH /api/orders/:id": () => {
           if (!online) throw new TypeError("Network request failed");

@@ -57,16 +57,49 @@ describe("product form", () => {
     renderApp("/office/products/new");
     fireEvent.press(await screen.findByTestId("product-save"));
     expect(screen.getByTestId("product-name-error")).toHaveTextContent("Enter the product's name.");
-    expect(screen.getByTestId("product-price-error")).toHaveTextContent("Enter the price.");
+    expect(screen.getByTestId("product-price-error")).toHaveTextContent("Enter the list price.");
     expect(screen.getByTestId("product-form-error")).toHaveTextContent(/Some fields need attention\./);
     await fillRequired();
     fireEvent.changeText(screen.getByTestId("product-price"), "14.999");
     fireEvent.changeText(screen.getByTestId("product-minQuantity"), "6");
     fireEvent.changeText(screen.getByTestId("product-maxQuantity"), "3");
     fireEvent.press(screen.getByTestId("product-save"));
-    expect(screen.getByTestId("product-price-error")).toHaveTextContent("Write the price in dollars and cents, like 18.00.");
-    expect(screen.getByTestId("product-maxQuantity-error")).toHaveTextContent("The maximum must be at least the minimum.");
+    expect(screen.getByTestId("product-price-error")).toHaveTextContent("Write the list price in dollars and cents, like 18.00.");
+    expect(screen.getByTestId("product-maxQuantity-error")).toHaveTextContent("The maximum per order must be at least the minimum per order.");
     expect(api.callsTo("POST", "/api/products")).toHaveLength(0);
+  });
+
+  it("names each field in its error the way its label does: days of notice, minimum and maximum per order, list price", async () => {
+    mockApi({ ...sessionRoutes(OWNER) });
+    renderApp("/office/products/new");
+    await fillRequired();
+    expect(screen.getByLabelText("Days of notice")).toBeOnTheScreen();
+    expect(screen.getByLabelText("Minimum per order")).toBeOnTheScreen();
+    expect(screen.getByLabelText("Maximum per order")).toBeOnTheScreen();
+    expect(screen.getByLabelText("List price")).toBeOnTheScreen();
+    fireEvent.changeText(screen.getByTestId("product-leadDays"), "20");
+    fireEvent.changeText(screen.getByTestId("product-minQuantity"), "0");
+    fireEvent.changeText(screen.getByTestId("product-maxQuantity"), "20000");
+    fireEvent.press(screen.getByTestId("product-save"));
+    expect(screen.getByTestId("product-leadDays-error")).toHaveTextContent("Days of notice can be at most 14.");
+    expect(screen.getByTestId("product-minQuantity-error")).toHaveTextContent("Minimum per order must be at least 1.");
+    expect(screen.getByTestId("product-maxQuantity-error")).toHaveTextContent("Maximum per order can be at most 10000.");
+  });
+
+  it("suggests the plural from the sale unit, keeps the owner's own once written, and needs one", async () => {
+    mockApi({ ...sessionRoutes(OWNER) });
+    renderApp("/office/products/new");
+    await screen.findByTestId("product-saleUnit");
+    fireEvent.changeText(screen.getByTestId("product-saleUnit"), "tray of 15 rolls");
+    expect(screen.getByTestId("product-saleUnitPlural")).toHaveDisplayValue("trays of 15 rolls");
+    fireEvent.changeText(screen.getByTestId("product-saleUnit"), "loaf");
+    expect(screen.getByTestId("product-saleUnitPlural")).toHaveDisplayValue("loaves");
+    fireEvent.changeText(screen.getByTestId("product-saleUnitPlural"), "loaves, sliced");
+    fireEvent.changeText(screen.getByTestId("product-saleUnit"), "loaf, sliced");
+    expect(screen.getByTestId("product-saleUnitPlural")).toHaveDisplayValue("loaves, sliced");
+    fireEvent.changeText(screen.getByTestId("product-saleUnitPlural"), "");
+    fireEvent.press(screen.getByTestId("product-save"));
+    expect(screen.getByTestId("product-saleUnitPlural-error")).toHaveTextContent("Enter the plural of the sale unit, e.g. trays of 15 rolls.");
   });
 
   it("shows the pan size in inches and sends chosen allergens as codes", async () => {
@@ -93,6 +126,8 @@ describe("product form", () => {
     await waitFor(() => expect(api.callsTo("POST", "/api/products")).toHaveLength(1));
     expect(api.callsTo("POST", "/api/products")[0].body).toMatchObject({
       name: "Potato milk buns",
+      saleUnit: "dozen buns",
+      saleUnitPlural: "dozen buns",
       priceCents: 1440,
       panLengthMm: 457,
       panWidthMm: 330,
@@ -121,7 +156,7 @@ describe("product form", () => {
   });
 
   it("checkProduct turns a blank notice into null and keeps unknown trace notes", () => {
-    const r = checkProduct({ ...EMPTY_PRODUCT, name: "A", saleUnit: "loaf", piecesPerUnit: "1", pieceGrams: "900", panName: "Pullman", panLengthMm: "330", panWidthMm: "100", price: "9.5", making: "bought_in", mayContain: ["tree_nuts"], mayContainOther: ["shared fryer"] });
+    const r = checkProduct({ ...EMPTY_PRODUCT, name: "A", saleUnit: "loaf", saleUnitPlural: "loaves", piecesPerUnit: "1", pieceGrams: "900", panName: "Pullman", panLengthMm: "330", panWidthMm: "100", price: "9.5", making: "bought_in", mayContain: ["tree_nuts"], mayContainOther: ["shared fryer"] });
     expect(r.ok).toBe(true);
     if (r.ok) {
       expect(r.input.priceCents).toBe(950);

@@ -79,7 +79,7 @@ describe("standing order grid", () => {
     const api = mockApi(routes(null));
     renderApp("/buyer/standing");
     fireEvent.changeText(await screen.findByTestId("standing-cell-102-2"), "9");
-    expect(screen.getByTestId("standing-product-102-error")).toHaveTextContent("Tuesday: At most 5 pack of 8 buns per order.");
+    expect(screen.getByTestId("standing-product-102-error")).toHaveTextContent("Tuesday: At most 5 packs of 8 buns per order.");
     fireEvent.press(screen.getByTestId("standing-save"));
     expect(await screen.findByTestId("standing-error-message")).toBeOnTheScreen();
     expect(api.callsTo("PUT", "/api/standing-orders")).toHaveLength(0);

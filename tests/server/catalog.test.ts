@@ -27,7 +27,7 @@ afterAll(async () => {
 });
 
 const product = {
-  name: "Dinner rolls", description: "Soft rolls", saleUnit: "tray of 15 rolls", piecesPerUnit: 15, pieceGrams: 67,
+  name: "Dinner rolls", description: "Soft rolls", saleUnit: "tray of 15 rolls", saleUnitPlural: "trays of 15 rolls", piecesPerUnit: 15, pieceGrams: 67,
   panName: "9×13 in pan", panLengthMm: 330, panWidthMm: 229, unitsPerPan: 1, priceCents: 1800, minQuantity: 1, maxQuantity: 40,
   allergens: ["milk", "wheat", "gluten", "egg"], mayContain: "sesame", boughtIn: true,
 };
@@ -54,6 +54,22 @@ describe("catalog", () => {
     id = res.body.product.id;
     expect(res.body.product).toMatchObject({ name: "Dinner rolls", listPriceCents: 1800, priceCents: 1800, photoUrl: null, active: true });
     expect(res.body.product.allergens).toEqual(["gluten", "wheat", "egg", "milk"]);
+  });
+
+  it("stores the sale unit's plural as the owner writes it, and needs one on create", async () => {
+    const loaf = await t.http().post("/api/products").set(auth(owner)).send({ ...product, name: "Rye loaf", saleUnit: "loaf", saleUnitPlural: "loaves", piecesPerUnit: 1 });
+    expect(loaf.status).toBe(201);
+    expect(loaf.body.product).toMatchObject({ saleUnit: "loaf", saleUnitPlural: "loaves" });
+    expect((await t.http().get(`/api/products/${loaf.body.product.id}`).set(auth(owner))).body.product.saleUnitPlural).toBe("loaves");
+    const renamed = await t.http().patch(`/api/products/${loaf.body.product.id}`).set(auth(owner)).send({ saleUnitPlural: "loaves, sliced" });
+    expect(renamed.body.product.saleUnitPlural).toBe("loaves, sliced");
+    const { saleUnitPlural: _none, ...withoutPlural } = product;
+    const missing = await t.http().post("/api/products").set(auth(owner)).send({ ...withoutPlural, name: "No plural" });
+    expect(missing.status).toBe(400);
+    expect(missing.body.error.fields.saleUnitPlural).toBe("Enter the plural of the sale unit, e.g. trays of 15 rolls.");
+    // The error names the field as the form labels it ("Days of notice", "Maximum per order").
+    const bad = await t.http().post("/api/products").set(auth(owner)).send({ ...product, name: "Too slow", leadDays: 30, maxQuantity: 20000 });
+    expect(bad.body.error.fields).toMatchObject({ leadDays: "Days of notice can be at most 14.", maxQuantity: "Maximum per order can be at most 10000." });
   });
 
   it("refuses bad products with field messages", async () => {
@@ -274,7 +290,7 @@ describe("calendar settings and the calendar", () => {
     expect(res.status).toBe(200);
     const day = (d: string) => res.body.days.find((x: { date: string }) => x.date === d);
     expect(day("2026-06-10")).toMatchObject({ orderable: false, reason: "not_delivery_day" }); // a Wednesday; the account's route days are Tue and Thu
-    expect(day("2026-06-11")).toMatchObject({ orderable: true, cutoffAt: "2026-06-10T13:30:00.000-05:00", order: { status: "open", totalCents: 3300, itemCount: 2 } });
+    expect(day("2026-06-11")).toMatchObject({ orderable: true, cutoffAt: "2026-06-10T13:30:00.000-05:00", order: { status: "open", totalCents: 3300, productCount: 1 } });
     expect(day("2026-06-13")).toMatchObject({ orderable: false, reason: "not_delivery_day" });
     expect(day("2026-06-16")).toMatchObject({ orderable: true, order: null });
     expect(day("2026-06-25")).toMatchObject({ orderable: false, reason: "beyond_horizon" });

@@ -111,8 +111,8 @@ describe("seeded allergens", () => {
     const line = res.body.order.lines.find((l: { productId: number }) => l.productId === sesame.id);
     expect(line.allergens).toEqual(["gluten", "wheat", "egg", "milk", "sesame"]);
     const mail = await waitForMail(t, "buyer@northpier.test", { subject: /Order placed/ });
-    expect(mail.text).toMatch(/3 × Sesame brioche buns \(pack of 8 buns\) — \$[\d.]+\. Contains: Cereals containing gluten, Wheat, Egg, Milk, Sesame\./);
-    expect(mail.text).toMatch(/2 × Milk-bread slider buns .*Contains: Cereals containing gluten, Wheat, Egg, Milk\. May contain: Sesame\./);
+    expect(mail.text).toMatch(/Sesame brioche buns — 3 packs of 8 buns — \$[\d.]+\. Contains: Cereals containing gluten, Wheat, Egg, Milk, Sesame\./);
+    expect(mail.text).toMatch(/Milk-bread slider buns — 2 dozen buns — .*Contains: Cereals containing gluten, Wheat, Egg, Milk\. May contain: Sesame\./);
     expect(mail.html).toContain("Egg, Milk, Sesame.");
     const office = await t.http().get(`/api/orders/${res.body.order.id}`).set(auth(owner));
     expect(office.body.order.lines.find((l: { productId: number }) => l.productId === sesame.id).allergens).toContain("sesame");

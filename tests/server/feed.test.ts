@@ -60,7 +60,12 @@ describe("calendar feed", () => {
       expect(text(cal.getFirstPropertyValue(prop))).toBe("Feed Bakery deliveries — Evil Café\nX-INJECTED:1\nBEGIN:VEVENT\nUID:forged");
     }
     expect(events[0].getFirstPropertyValue("location")).toBe("1 Dock Rd\nATTENDEE:mailto:evil@evil.test\nX-ALSO:2");
-    expect(String(events[0].getFirstPropertyValue("description"))).toContain("2 × Rolls\nX-PRODUCT:3");
+    expect(String(events[0].getFirstPropertyValue("description"))).toContain("Rolls\nX-PRODUCT:3 — 2 trays of 15 rolls");
+    expect(String(events[1].getFirstPropertyValue("description"))).toContain("Rolls\nX-PRODUCT:3 — 1 tray of 15 rolls");
+    // The status as a person reads it (shared/schemas/orders.ts ORDER_STATUS_LABELS), never the stored code "open";
+    // the summary counts products, never trays plus loaves.
+    expect(String(events[0].getFirstPropertyValue("description"))).toMatch(/\nStatus: Open$/);
+    expect(String(events[0].getFirstPropertyValue("summary"))).toBe("Feed Bakery delivery (1 product)");
 
     // The raw lines agree: each DTSTAMP is YYYYMMDDTHHMMSSZ (RFC 5545 §3.3.5 form 2, UTC).
     const stamps = unfold(ics).filter((l) => l.startsWith("DTSTAMP"));

@@ -46,7 +46,8 @@ describe("placing an order", () => {
     });
     expect(res.body.order.lines[0]).toMatchObject({ productName: "Dinner rolls", quantity: 3, unitPriceCents: 1800, lineTotalCents: 5400, allergens: ["gluten", "wheat", "milk"] });
     const mail = await waitForMail(t, buyerEmail, { subject: /Order placed/ });
-    expect(mail.text).toContain("3 × Dinner rolls");
+    expect(mail.text).toContain("Dinner rolls — 3 trays of 15 rolls — $54.00.");
+    expect(mail.text).toContain("Slider buns — 2 dozen buns — $28.80.");
   });
 
   it("refuses a second order for the same date with 409 order_exists and its id", async () => {
@@ -109,6 +110,9 @@ describe("bad input gets a 400 with per-field messages", () => {
     const res = await post(buyer, { deliveryDate: "2026-06-16", lines: [{ productId: buns.id, quantity: 21 }] });
     expect(res.status).toBe(400);
     expect(res.body.error.fields["lines.0.quantity"]).toBe("At most 20 dozen buns per order.");
+    // Counted in the plural of the sale unit ("dozen" takes no -s after a number; "trays" does).
+    const trays = await post(buyer, { deliveryDate: "2026-06-16", lines: [{ productId: rolls.id, quantity: 41 }] });
+    expect(trays.body.error.fields["lines.0.quantity"]).toBe("At most 40 trays of 15 rolls per order.");
   });
 
   it("unknown and archived products", async () => {
@@ -179,7 +183,7 @@ describe("changing and cancelling", () => {
     expect(res.body.order).toMatchObject({ totalCents: 4 * 1440, poNumber: "PO-78", note: "Back door" });
     expect(res.body.order.lines).toHaveLength(1);
     const mail = await waitForMail(t, buyerEmail, { subject: /Order changed/ });
-    expect(mail.text).toContain("4 × Slider buns");
+    expect(mail.text).toContain("Slider buns — 4 dozen buns — $57.60.");
   });
 
   it("refuses a change after the cut-off with 409 cutoff_passed and the cut-off in local time, and locks the order", async () => {
@@ -348,7 +352,7 @@ describe("orders board CSV", () => {
     const { boardCsv } = await import("../../server/orders/board.service");
     const csv = boardCsv({
       date: "2026-06-19",
-      products: [{ id: 1, name: "-Rolls", saleUnit: "tray", total: 2 }],
+      products: [{ id: 1, name: "-Rolls", saleUnit: "tray", saleUnitPlural: "trays", total: 2 }],
       rows: [{ accountId: 1, accountName: "-2+3+cmd", orderId: 1, status: "open", poNumber: "\tPO", quantities: { 1: 2 }, totalCents: -150 }],
       totalCents: -150,
     }, "USD");

@@ -109,7 +109,7 @@ describe("calendar feed (RFC 5545), parsed with ical.js", () => {
     expect(events.map((e) => e.startDate.toString()).sort()).toEqual(open.map((o) => o.deliveryDate).sort());
     expect(events.every((e) => e.startDate.isDate)).toBe(true);
     const e29 = events.find((e) => e.startDate.toString() === "2026-12-29")!;
-    expect(e29.description).toContain("4 × Rolls");
+    expect(e29.description).toContain("Rolls — 4 trays of 15 rolls");
     expect(e29.summary).toContain("Standing Bakery");
 
     const current = await t.http().get("/api/calendar-feed").set(auth(buyer));

@@ -58,7 +58,7 @@ beforeAll(async () => {
   buyer = await tokenFor(t, await makeUser(t.ds, "buyer", { accountId }));
   otherBuyer = await tokenFor(t, await makeUser(t.ds, "buyer"));
   const created = await t.http().post("/api/products").set(auth(owner)).send({
-    name: "Milk bread rolls", description: "", saleUnit: "tray of 15 rolls", piecesPerUnit: 15, pieceGrams: 67,
+    name: "Milk bread rolls", description: "", saleUnit: "tray of 15 rolls", saleUnitPlural: "trays of 15 rolls", piecesPerUnit: 15, pieceGrams: 67,
     panName: "9×13 in pan", panLengthMm: 330, panWidthMm: 229, unitsPerPan: 1, priceCents: 1800, minQuantity: 1, maxQuantity: 40, allergens: ["gluten", "wheat", "milk"], mayContain: "",
     boughtIn: true, // an active product needs a formula or the explicit "bought in" choice
   });

@@ -16,6 +16,7 @@ import { useBoardQuery, type BoardDto } from "../../api/board";
 import { useConfirmDispatchMutation, type DispatchAdjustment } from "../../api/dispatch";
 import { cleanDate, formatDay, formatDayLong } from "../../ordering/dates";
 import { parseQuantity } from "../../ordering/quantities";
+import { quantityText, saleUnitFor } from "../../../shared/quantity";
 import { OrderStatusBadge } from "../ordering/parts";
 import { ordersLabel } from "./OrdersBoardScreen";
 import { colors, radii, space } from "../../theme";
@@ -149,7 +150,7 @@ function DispatchForm({ date, board }: { date: string; board: BoardDto }) {
                     const key = lineKey(row.orderId, Number(pid));
                     const p = products.get(Number(pid));
                     const s = shorts[key];
-                    const name = p ? `${p.name} (${p.saleUnit})` : "Product";
+                    const name = p ? `${p.name} (${saleUnitFor(ordered, p)})` : "Product";
                     return (
                       <View key={key} style={[styles.line, s && styles.lineShort]} testID={`dispatch-line-${key}`}>
                         <View style={styles.lineTop}>
@@ -172,7 +173,7 @@ function DispatchForm({ date, board }: { date: string; board: BoardDto }) {
                             <View style={styles.stepperWrap}>
                               <AppText variant="label">Delivered</AppText>
                               <Stepper value={s.delivered} onChange={(t) => update(key, { delivered: t })} min={0} max={Math.max(0, ordered - 1)} label={`${name} delivered to ${row.accountName}`} invalid={!!problems[key]} testID={`dispatch-qty-${key}`} />
-                              <AppText variant="small" color="muted">{`of ${ordered}`}</AppText>
+                              <AppText variant="small" color="muted">{`of ${p ? quantityText(ordered, p) : ordered}`}</AppText>
                             </View>
                             <TextField label="Why" optional placeholder="Burnt batch, ran out, damaged…" value={s.reason} onChangeText={(t) => update(key, { reason: t })} testID={`dispatch-reason-${key}`} maxLength={200} />
                             {problems[key] ? (

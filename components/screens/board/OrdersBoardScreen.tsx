@@ -18,6 +18,8 @@ import { messageOf } from "../../api/client";
 import { addDays, cleanDate, formatDay, formatDayLong, relativeDay } from "../../ordering/dates";
 import { OrderStatusBadge, useMoney } from "../ordering/parts";
 import { useIsWide } from "../../shell/useIsWide";
+import { productsLabel } from "../../ordering/quantities";
+import { quantityText, saleUnitFor } from "../../../shared/quantity";
 import { colors, layout, radii, space } from "../../theme";
 
 export interface OrdersBoardProps {
@@ -146,25 +148,24 @@ function OfficeActions({ date, isOwner }: { date: string; isOwner: boolean }) {
 function BoardView({ board, showMoney }: { board: BoardDto; showMoney: boolean }) {
   const wide = useIsWide();
   const money = useMoney();
-  const units = board.products.reduce((s, p) => s + p.total, 0);
   return (
     <>
       <Card title="To bake in total" testID="board-totals">
         <View style={styles.tiles}>
           {board.products.map((p) => (
-            <View key={p.id} style={styles.tile} testID={`board-total-${p.id}`} accessible accessibilityLabel={`${p.name}: ${p.total} ${p.saleUnit}`}>
+            <View key={p.id} style={styles.tile} testID={`board-total-${p.id}`} accessible accessibilityLabel={`${p.name}: ${quantityText(p.total, p)}`}>
               <AppText variant="display" style={styles.big}>
                 {String(p.total)}
               </AppText>
               <AppText variant="bodyStrong">{p.name}</AppText>
               <AppText variant="small" color="muted">
-                {p.saleUnit}
+                {saleUnitFor(p.total, p)}
               </AppText>
             </View>
           ))}
         </View>
         <AppText color="muted" testID="board-grand-total">
-          {`${ordersLabel(board.rows.length)} · ${units} units${showMoney ? ` · ${money(board.totalCents)}` : ""}`}
+          {`${ordersLabel(board.rows.length)} · ${productsLabel(board.products.length)}${showMoney ? ` · ${money(board.totalCents)}` : ""}`}
         </AppText>
       </Card>
       <Heading level={2}>By account</Heading>
@@ -262,6 +263,7 @@ function Cell({ w, children, header, right, strong, muted }: { w: number; childr
 function BoardCards({ board, showMoney }: { board: BoardDto; showMoney: boolean }) {
   const money = useMoney();
   const names = new Map(board.products.map((p) => [p.id, p]));
+  const lineName = (p: BoardDto["products"][number] | undefined, q: number) => (p ? `${p.name} (${saleUnitFor(q, p)})` : "Product");
   return (
     <View style={styles.cards} testID="board-list">
       {board.rows.map((r) => (
@@ -281,7 +283,7 @@ function BoardCards({ board, showMoney }: { board: BoardDto; showMoney: boolean 
                   <AppText variant="bodyStrong" style={styles.qty}>
                     {String(q)}
                   </AppText>
-                  <AppText style={styles.flex}>{`${names.get(Number(id))?.name ?? "Product"} (${names.get(Number(id))?.saleUnit ?? ""})`}</AppText>
+                  <AppText style={styles.flex}>{lineName(names.get(Number(id)), q)}</AppText>
                 </View>
               ))}
           </View>

@@ -24,6 +24,7 @@ import { firstName, formatBakeDay } from "../../format";
 import { useIsWide } from "../../shell/useIsWide";
 import type { AccountDto } from "../../../shared/schemas/accounts";
 import type { CalendarDayDto } from "../../../shared/schemas/calendar";
+import { productsLabel } from "../../ordering/quantities";
 import { colors, layout, radii, space } from "../../theme";
 
 /** How many days ahead the home screen looks. */
@@ -157,7 +158,7 @@ function NextCutoff({ day, now, today, timeZone }: { day: CalendarDayDto; now: n
       </AppText>
       <CutoffCountdown cutoffAt={day.cutoffAt} now={now} timeZone={timeZone} testID="next-cutoff-countdown" />
       <AppText color="ink">
-        {day.order ? `Ordered: ${itemsLabel(day.order.itemCount)}, ${money(day.order.totalCents)}${day.order.source === "standing" ? " (from your standing order)" : ""}.` : "Nothing ordered for this delivery yet."}
+        {day.order ? `Ordered: ${productsLabel(day.order.productCount)}, ${money(day.order.totalCents)}${day.order.source === "standing" ? " (from your standing order)" : ""}.` : "Nothing ordered for this delivery yet."}
       </AppText>
       <LinkButton
         href={`/buyer/order/${day.date}`}
@@ -170,15 +171,11 @@ function NextCutoff({ day, now, today, timeZone }: { day: CalendarDayDto; now: n
   );
 }
 
-export function itemsLabel(n: number): string {
-  return n === 1 ? "1 item" : `${n} items`;
-}
-
 function DayRow({ day, now, today, timeZone }: { day: CalendarDayDto; now: number; today: string; timeZone?: string }) {
   const money = useMoney();
   const status = dayStatus(day, now);
   const open = msUntil(day.cutoffAt, now) > 0 && (day.orderable || day.order?.status === "open");
-  const summary = day.order ? `${itemsLabel(day.order.itemCount)} · ${money(day.order.totalCents)}${day.order.source === "standing" ? " · standing order" : ""}` : null;
+  const summary = day.order ? `${productsLabel(day.order.productCount)} · ${money(day.order.totalCents)}${day.order.source === "standing" ? " · standing order" : ""}` : null;
   const a11y = [dayHeading(day.date, today), status.label, summary].filter(Boolean).join(", ");
   return (
     <Link href={`/buyer/order/${day.date}`} asChild>

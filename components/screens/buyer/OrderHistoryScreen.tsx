@@ -13,7 +13,8 @@ import { useBakeryQuery } from "../../api/bakery";
 import { useOrdersQuery } from "../../api/orders";
 import { addDays, dayHeading } from "../../ordering/dates";
 import { OrderStatusBadge, buyerStatusLabel, useMoney } from "../ordering/parts";
-import { itemsLabel } from "./BuyerHome";
+import { productsLabel } from "../../ordering/quantities";
+import { quantityText } from "../../../shared/quantity";
 import type { OrderDto } from "../../../shared/schemas/orders";
 import { colors, layout, radii, space } from "../../theme";
 
@@ -74,8 +75,7 @@ export function OrderHistoryScreen() {
 
 function OrderRow({ order: o, today }: { order: OrderDto; today: string }) {
   const money = useMoney();
-  const count = o.lines.reduce((s, l) => s + l.quantity, 0);
-  const what = o.lines.map((l) => `${l.quantity} × ${l.productName}`).join(", ");
+  const what = o.lines.map((l) => `${l.productName} (${quantityText(l.quantity, l)})`).join(", ");
   return (
     <Link href={`/buyer/order/${o.deliveryDate}`} asChild>
       <LinkPressable
@@ -92,7 +92,7 @@ function OrderRow({ order: o, today }: { order: OrderDto; today: string }) {
             </AppText>
             <OrderStatusBadge status={o.status} testID={`history-order-${o.id}-status`} />
           </View>
-          <AppText variant="small" color="ink">{`${itemsLabel(count)} · ${money(o.totalCents)}${o.poNumber ? ` · PO ${o.poNumber}` : ""}`}</AppText>
+          <AppText variant="small" color="ink">{`${productsLabel(o.lines.length)} · ${money(o.totalCents)}${o.poNumber ? ` · PO ${o.poNumber}` : ""}`}</AppText>
           <AppText variant="small" color="muted" numberOfLines={2}>
             {what}
           </AppText>

@@ -24,11 +24,12 @@ import { ApiError, messageOf } from "../../api/client";
 import { useServerNow } from "../../ordering/useServerNow";
 import { msUntil } from "../../ordering/countdown";
 import { formatCutoff, formatDay, formatDayLong, relativeDay } from "../../ordering/dates";
-import { parseQuantity, quantityProblem, shortfall } from "../../ordering/quantities";
+import { parseQuantity, productsLabel, quantityProblem, shortfall } from "../../ordering/quantities";
 import { IdempotencyKeeper } from "../../ordering/idempotency";
 import { clearDraft, draftMatches, readDraft, writeDraft, type DraftOwner, type OrderDraft } from "../../ordering/draft";
 import { useIsWide } from "../../shell/useIsWide";
-import { accountStatusNote, itemsLabel } from "./BuyerHome";
+import { accountStatusNote } from "./BuyerHome";
+import { quantityText } from "../../../shared/quantity";
 import { AllergenCaution, AllergenChips, CutoffCountdown, OrderStatusBadge, ProductPhoto, useMoney } from "../ordering/parts";
 import { cutoffFor, isCalendarDate, type CalendarSettings } from "../../../shared/calendar";
 import type { CalendarDayDto, CalendarSettingsDto } from "../../../shared/schemas/calendar";
@@ -233,7 +234,6 @@ function OrderForm({ date, day, products, existing, minimumCents, settings, time
   );
   const chosen = lines.filter((l) => !Number.isNaN(l.q) && l.q > 0);
   const total = chosen.reduce((s, l) => s + l.q * l.p.priceCents, 0);
-  const items = chosen.reduce((s, l) => s + l.q, 0);
   const short = shortfall(total, minimumCents);
   const lateChosen = chosen.filter((l) => l.tooLate);
   const problems = lines.filter((l) => l.problem).length + lateChosen.length;
@@ -354,7 +354,7 @@ function OrderForm({ date, day, products, existing, minimumCents, settings, time
           keeper.reset();
           dropDraft();
           setPlaced(true);
-          onNotice({ text: `Order placed for ${formatDayLong(date)}: ${itemsLabel(o.lines.reduce((s, l) => s + l.quantity, 0))}, ${money(o.totalCents)}.`, tone: "success" });
+          onNotice({ text: `Order placed for ${formatDayLong(date)}: ${o.lines.map((l) => `${l.productName} (${quantityText(l.quantity, l)})`).join(", ")}, ${money(o.totalCents)}.`, tone: "success" });
         },
         onError: fail(sent),
       },
@@ -390,7 +390,7 @@ function OrderForm({ date, day, products, existing, minimumCents, settings, time
   const totalText = (
     <View>
       <AppText variant="caption" color="muted" testID="order-items">
-        {items > 0 ? itemsLabel(items) : "Nothing chosen yet"}
+        {chosen.length > 0 ? productsLabel(chosen.length) : "Nothing chosen yet"}
       </AppText>
       <AppText variant="title" testID="order-total" accessibilityLabel={`Order total ${money(total)}`}>
         {money(total)}
@@ -535,7 +535,7 @@ function OrderForm({ date, day, products, existing, minimumCents, settings, time
         <Notice
           tone="info"
           testID="order-gone-lines"
-          message={`No longer offered, and taken off when you save: ${gone.map((l) => `${l.quantity} × ${l.productName}`).join(", ")}.`}
+          message={`No longer offered, and taken off when you save: ${gone.map((l) => `${l.productName} (${quantityText(l.quantity, l)})`).join(", ")}.`}
         />
       ) : null}
     </View>
@@ -678,8 +678,8 @@ function ReadOnlyOrder({ order, timeZone }: { order: OrderDto; timeZone?: string
         {order.lines.map((l, i) => (
           <View key={l.productId} style={[styles.receiptLine, i > 0 && styles.divider]}>
             <View style={styles.flex}>
-              <AppText variant="bodyStrong">{`${l.quantity} × ${l.productName}`}</AppText>
-              <AppText variant="small" color="muted">{`${l.saleUnit} · ${money(l.unitPriceCents)} each`}</AppText>
+              <AppText variant="bodyStrong">{l.productName}</AppText>
+              <AppText variant="small" color="muted">{`${quantityText(l.quantity, l)} · ${money(l.unitPriceCents)} per ${l.saleUnit}`}</AppText>
             </View>
             <AppText variant="bodyStrong">{money(l.lineTotalCents)}</AppText>
           </View>

@@ -203,13 +203,13 @@ export function FormulaEditor({ initial, ingredients, infos, submitLabel, busy, 
           </View>
           <View style={styles.grid}>
             <View style={styles.cellSmall}>
-              <TextField label="Share of flour (%)" hint="Of all the flour." value={v.paste.flourPercent} onChangeText={(t) => update({ paste: { ...v.paste, flourPercent: t } })} error={fields["paste.flourPercent"]} inputMode="decimal" keyboardType="decimal-pad" testID="paste-share" />
+              <TextField label="Share of flour cooked (%)" hint="Of all the flour." value={v.paste.flourPercent} onChangeText={(t) => update({ paste: { ...v.paste, flourPercent: t } })} error={fields["paste.flourPercent"]} inputMode="decimal" keyboardType="decimal-pad" testID="paste-share" />
             </View>
             <View style={styles.cellSmall}>
-              <TextField label="Liquid : flour" hint="5 means 5 g liquid per 1 g flour." value={v.paste.liquidRatio} onChangeText={(t) => update({ paste: { ...v.paste, liquidRatio: t } })} error={fields["paste.liquidRatio"]} inputMode="decimal" keyboardType="decimal-pad" testID="paste-ratio" />
+              <TextField label="Liquid-to-flour ratio" hint="5 means 5 g liquid per 1 g flour." value={v.paste.liquidRatio} onChangeText={(t) => update({ paste: { ...v.paste, liquidRatio: t } })} error={fields["paste.liquidRatio"]} inputMode="decimal" keyboardType="decimal-pad" testID="paste-ratio" />
             </View>
             <View style={styles.cellSmall}>
-              <TextField label="Cook to (°C)" hint={fahrenheitHint(v.paste.cookToC) ?? "60–70 °C, usually 65 °C: the starch must gelatinize."} value={v.paste.cookToC} onChangeText={(t) => update({ paste: { ...v.paste, cookToC: t } })} error={fields["paste.cookToC"]} inputMode="decimal" keyboardType="decimal-pad" testID="paste-cook" />
+              <TextField label="Cook-to temperature (°C)" hint={fahrenheitHint(v.paste.cookToC) ?? "60–70 °C, usually 65 °C: the starch must gelatinize."} value={v.paste.cookToC} onChangeText={(t) => update({ paste: { ...v.paste, cookToC: t } })} error={fields["paste.cookToC"]} inputMode="decimal" keyboardType="decimal-pad" testID="paste-cook" />
             </View>
           </View>
         </>
@@ -271,7 +271,7 @@ export function FormulaEditor({ initial, ingredients, infos, submitLabel, busy, 
           <TextField label="Loss allowance (%)" hint="Scaling and bench loss." value={v.lossPercent} onChangeText={(t) => update({ lossPercent: t })} error={fields.lossPercent} inputMode="decimal" keyboardType="decimal-pad" testID="formula-loss" />
         </View>
         <View style={styles.cellSmall}>
-          <TextField label="Dough temperature (°C)" hint={fahrenheitHint(v.ddtC) ?? "The target after mixing."} value={v.ddtC} onChangeText={(t) => update({ ddtC: t })} error={fields.ddtC} inputMode="decimal" keyboardType="decimal-pad" testID="formula-ddt" />
+          <TextField label="Desired dough temperature (°C)" hint={fahrenheitHint(v.ddtC) ?? "The target after mixing."} value={v.ddtC} onChangeText={(t) => update({ ddtC: t })} error={fields.ddtC} inputMode="decimal" keyboardType="decimal-pad" testID="formula-ddt" />
         </View>
         <View style={styles.cellSmall}>
           <TextField
@@ -287,7 +287,7 @@ export function FormulaEditor({ initial, ingredients, infos, submitLabel, busy, 
           {warnings.frictionC && !fields.frictionC ? <FieldWarning text={warnings.frictionC} testID="formula-friction-warning" /> : null}
         </View>
         <View style={styles.cellSmall}>
-          <TextField label="Baked inside (°C)" optional hint={fahrenheitHint(v.targetInternalC) ?? "Internal temperature when done."} value={v.targetInternalC} onChangeText={(t) => update({ targetInternalC: t })} error={fields.targetInternalC} inputMode="decimal" keyboardType="decimal-pad" testID="formula-internal" />
+          <TextField label="Target internal temperature (°C)" optional hint={fahrenheitHint(v.targetInternalC) ?? "In the center of the loaf when it is done."} value={v.targetInternalC} onChangeText={(t) => update({ targetInternalC: t })} error={fields.targetInternalC} inputMode="decimal" keyboardType="decimal-pad" testID="formula-internal" />
         </View>
       </View>
     </Card>

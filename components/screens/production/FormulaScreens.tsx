@@ -279,9 +279,9 @@ export function FormulaReadOnly({ formula: f }: { formula: FormulaDto }) {
         <DetailList
           items={[
             { label: "Loss allowance", value: formatPercent(f.lossPercent) },
-            { label: "Dough temperature", value: withF(f.ddtC) },
+            { label: "Desired dough temperature", value: withF(f.ddtC) },
             { label: "Friction factor", value: `${f.frictionC} °C` },
-            { label: "Baked inside", value: f.targetInternalC === null ? "Not given" : withF(f.targetInternalC) },
+            { label: "Target internal temperature", value: f.targetInternalC === null ? "Not given" : withF(f.targetInternalC) },
           ]}
         />
       </Card>
@@ -304,9 +304,9 @@ export function FormulaReadOnly({ formula: f }: { formula: FormulaDto }) {
             items={[
               { label: "Flour", value: f.lines.find((l) => l.ingredientId === f.paste!.flourIngredientId)?.name ?? "?" },
               { label: "Liquid", value: f.lines.find((l) => l.ingredientId === f.paste!.liquidIngredientId)?.name ?? "?" },
-              { label: "Share of flour", value: formatPercent(f.paste.flourPercent) },
-              { label: "Liquid : flour", value: `${f.paste.liquidRatio} : 1` },
-              { label: "Cook to", value: withF(f.paste.cookToC) },
+              { label: "Share of flour cooked", value: formatPercent(f.paste.flourPercent) },
+              { label: "Liquid-to-flour ratio", value: `${f.paste.liquidRatio} : 1` },
+              { label: "Cook-to temperature", value: withF(f.paste.cookToC) },
             ]}
           />
         </Card>

@@ -34,6 +34,7 @@ import { ALLERGENS, ALLERGEN_LABEL, sortAllergens, type AllergenCode } from "../
 import { parseMoney, toDecimal } from "../../../shared/money";
 import { productInputSchema, type ProductDto, type ProductInput } from "../../../shared/schemas/catalog";
 import type { FieldErrors } from "../../../shared/errors";
+import { quantityText, suggestPlural } from "../../../shared/quantity";
 import { colors, radii, space } from "../../theme";
 
 /** "How it's made": baked here from a formula, or bought in / not planned. */
@@ -43,6 +44,8 @@ export interface ProductValues {
   name: string;
   description: string;
   saleUnit: string;
+  /** Pre-filled from the singular (shared/quantity.ts suggestPlural) until the owner writes their own. */
+  saleUnitPlural: string;
   piecesPerUnit: string;
   pieceGrams: string;
   panName: string;
@@ -70,7 +73,7 @@ export interface ProductValues {
   mayContainOther: string[];
 }
 
-const FIELDS = ["name", "description", "saleUnit", "piecesPerUnit", "pieceGrams", "panName", "panLengthMm", "panWidthMm", "unitsPerPan", "priceCents", "minQuantity", "maxQuantity", "leadDays", "allergens", "mayContain", "formulaId", "boughtIn", "bakeTempC", "bakeMinutes", "coolMinutes", "components"] as const;
+const FIELDS = ["name", "description", "saleUnit", "saleUnitPlural", "piecesPerUnit", "pieceGrams", "panName", "panLengthMm", "panWidthMm", "unitsPerPan", "priceCents", "minQuantity", "maxQuantity", "leadDays", "allergens", "mayContain", "formulaId", "boughtIn", "bakeTempC", "bakeMinutes", "coolMinutes", "components"] as const;
 const COMPONENT_FIELDS = ["kind", "name", "ingredientId", "grams", "per", "note"] as const;
 /** Every field the form shows a message beside, the component rows' included. */
 export const formFields = (v: Pick<ProductValues, "components">): string[] => [...FIELDS, ...v.components.flatMap((_, i) => COMPONENT_FIELDS.map((k) => `components.${i}.${k}`))];
@@ -79,6 +82,7 @@ export const EMPTY_PRODUCT: ProductValues = {
   name: "",
   description: "",
   saleUnit: "",
+  saleUnitPlural: "",
   piecesPerUnit: "",
   pieceGrams: "",
   panName: "",
@@ -108,6 +112,7 @@ export function valuesOf(p: ProductDto, currency = "USD"): ProductValues {
     name: p.name,
     description: p.description,
     saleUnit: p.saleUnit,
+    saleUnitPlural: p.saleUnitPlural,
     piecesPerUnit: String(p.piecesPerUnit),
     pieceGrams: String(p.pieceGrams),
     panName: p.panName,
@@ -161,6 +166,7 @@ export function checkProduct(values: ProductValues, currency = "USD", opts: { de
     name: values.name,
     description: values.description,
     saleUnit: values.saleUnit,
+    saleUnitPlural: values.saleUnitPlural,
     piecesPerUnit: values.piecesPerUnit,
     pieceGrams: values.pieceGrams,
     panName: values.panName,
@@ -186,7 +192,7 @@ export function checkProduct(values: ProductValues, currency = "USD", opts: { de
   for (const k of ["piecesPerUnit", "pieceGrams", "panLengthMm", "panWidthMm", "unitsPerPan", "minQuantity", "maxQuantity"] as const) {
     if (values[k].trim() === "") fields[k] = "Enter a whole number.";
   }
-  if (priceCents === null) fields.priceCents = values.price.trim() ? "Write the price in dollars and cents, like 18.00." : "Enter the price.";
+  if (priceCents === null) fields.priceCents = values.price.trim() ? "Write the list price in dollars and cents, like 18.00." : "Enter the list price.";
   if (made && values.formulaId === null) fields.formulaId = "Choose the formula it is baked from.";
   if (made) values.components.forEach((c, i) => { if (c.grams.trim() === "") fields[`components.${i}.grams`] = "Enter the grams, e.g. 2 or 1.5."; });
   if (Object.keys(fields).length || !checked.ok) return { ok: false, fields };
@@ -284,8 +290,8 @@ function ProductFacts({ product: p }: { product: ProductDto }) {
           { label: "Sold as", value: `${p.saleUnit} (${p.piecesPerUnit} × ${p.pieceGrams} g)` },
           { label: "Pan", value: `${p.panName}: ${p.panLengthMm} × ${p.panWidthMm} mm (${mmToInches(p.panLengthMm)} × ${mmToInches(p.panWidthMm)}), ${p.unitsPerPan} per pan` },
           { label: "List price", value: money(p.listPriceCents) },
-          { label: "Per order", value: `${p.minQuantity} to ${p.maxQuantity}` },
-          { label: "Notice", value: p.leadDays === null ? "The bakery's usual cut-off" : `${p.leadDays} days before delivery` },
+          { label: "Per order", value: `Minimum ${quantityText(p.minQuantity, p)}, maximum ${quantityText(p.maxQuantity, p)}` },
+          { label: "Days of notice", value: p.leadDays === null ? "The bakery's usual cut-off" : `${p.leadDays} days before delivery` },
           { label: "Made", value: p.formulaId !== null ? `From the ${p.formulaName ?? "chosen"} formula` : p.boughtIn ? "Bought in / not planned" : "Not chosen yet: production cannot plan it" },
           ...(p.formulaId !== null ? [{ label: "Bake", value: bakeText(p) }] : []),
           ...(p.components.length ? [{ label: "Components", value: componentsText(p) }] : []),
@@ -329,6 +335,9 @@ export function ProductForm({ initial, submitLabel, busy, active = true, onSubmi
   const [fields, setFields] = useState<FieldErrors>({});
   const [formError, setFormError] = useState<string | null>(null);
   const set = (key: keyof ProductValues) => (v: string) => setValues((s) => ({ ...s, [key]: v }));
+  // The plural follows the singular while it is blank or still the suggestion; once the owner writes their own it stays.
+  const setSaleUnit = (v: string) =>
+    setValues((s) => ({ ...s, saleUnit: v, saleUnitPlural: s.saleUnitPlural.trim() === "" || s.saleUnitPlural === suggestPlural(s.saleUnit) ? suggestPlural(v) : s.saleUnitPlural }));
   const declared = previewAllergens(values, formulas.data ?? [], ingredients.data ?? []);
   const formula = values.making === "formula" ? formulas.data?.find((f) => f.id === values.formulaId) : undefined;
   const defaults = formulaDefaults(formula);
@@ -376,7 +385,15 @@ export function ProductForm({ initial, submitLabel, busy, active = true, onSubmi
       <AppText variant="overline" color="muted">
         How it's sold
       </AppText>
-      <TextField label="Sale unit" value={values.saleUnit} onChangeText={set("saleUnit")} error={fields.saleUnit} hint="What one unit on an order is, e.g. tray of 15 rolls." testID="product-saleUnit" />
+      <TextField label="Sale unit" value={values.saleUnit} onChangeText={setSaleUnit} error={fields.saleUnit} hint="What one unit on an order is, e.g. tray of 15 rolls." testID="product-saleUnit" />
+      <TextField
+        label="Plural of the sale unit"
+        value={values.saleUnitPlural}
+        onChangeText={set("saleUnitPlural")}
+        error={fields.saleUnitPlural}
+        hint={`How an order of more than one reads: “3 ${values.saleUnitPlural.trim() || "trays of 15 rolls"}”.`}
+        testID="product-saleUnitPlural"
+      />
       <View style={styles.grid}>
         {num("piecesPerUnit", "Pieces per unit")}
         {num("pieceGrams", "Piece weight (g)", { hint: "Scaled dough per piece, before baking." })}
@@ -384,7 +401,7 @@ export function ProductForm({ initial, submitLabel, busy, active = true, onSubmi
       <View style={styles.grid}>
         <View style={[styles.cell, wide && styles.cellWide]}>
           <TextField
-            label="Price (list)"
+            label="List price"
             value={values.price}
             onChangeText={set("price")}
             error={fields.priceCents}
@@ -394,11 +411,11 @@ export function ProductForm({ initial, submitLabel, busy, active = true, onSubmi
             testID="product-price"
           />
         </View>
-        {num("leadDays", "Notice (days)", { optional: true, hint: "Blank: usual cut-off." })}
+        {num("leadDays", "Days of notice", { optional: true, hint: "Blank: usual cut-off." })}
       </View>
       <View style={styles.grid}>
-        {num("minQuantity", "Least per order")}
-        {num("maxQuantity", "Most per order")}
+        {num("minQuantity", "Minimum per order")}
+        {num("maxQuantity", "Maximum per order")}
       </View>
 
       <AppText variant="overline" color="muted">
@@ -444,7 +461,7 @@ export function ProductForm({ initial, submitLabel, busy, active = true, onSubmi
           <View style={styles.grid}>
             {num("bakeTempC", "Bake temperature (°C)", { optional: true, hint: values.bakeTempC.trim() && Number.isFinite(fahrenheit) ? `= ${Math.round(celsiusToFahrenheit(fahrenheit))} °F` : defaults.temp })}
             {num("bakeMinutes", "Bake time (min)", { optional: true, hint: defaults.bake })}
-            {num("coolMinutes", "Cooling (min)", { optional: true, hint: defaults.cool })}
+            {num("coolMinutes", "Cooling time (min)", { optional: true, hint: defaults.cool })}
           </View>
 
           <AppText variant="overline" color="muted">

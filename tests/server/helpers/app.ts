@@ -19,6 +19,7 @@ import { closePasswordHashing, hashPassword } from "../../../server/auth/passwor
 import type { Role } from "../../../shared/roles";
 import type { AppContext } from "../../../server/http/context";
 import { processOutbox } from "../../../server/mail/outbox.service";
+import { suggestPlural } from "../../../shared/quantity";
 
 export const TEST_PASSWORD = "correct horse battery";
 
@@ -132,7 +133,7 @@ export async function makeProduct(ds: DataSource, over: Partial<import("../../..
   const repo = ds.getRepository(Product);
   seq++;
   return repo.save(repo.create({
-    name: `Product ${seq}`, description: "", photoFile: null, saleUnit: "tray of 15 rolls", piecesPerUnit: 15, pieceGrams: 67,
+    name: `Product ${seq}`, description: "", photoFile: null, saleUnit: "tray of 15 rolls", saleUnitPlural: suggestPlural(over.saleUnit ?? "tray of 15 rolls"), piecesPerUnit: 15, pieceGrams: 67,
     panName: "9×13 in pan", panLengthMm: 330, panWidthMm: 229, unitsPerPan: 1, priceCents: 1800, minQuantity: 1, maxQuantity: 40,
     leadDays: null, allergens: "gluten,wheat,milk", mayContain: "", active: true, formulaId: null, sortOrder: seq, ...over,
   }));
