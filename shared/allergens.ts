@@ -22,9 +22,9 @@ export const ALLERGENS = [
   { code: "celery", label: "Celery", us: false, eu: true },
   { code: "mustard", label: "Mustard", us: false, eu: true },
   { code: "sesame", label: "Sesame", us: true, eu: true },
-  { code: "sulphites", label: "Sulphur dioxide and sulphites", us: false, eu: true },
+  { code: "sulphites", label: "Sulfur dioxide and sulfites", us: false, eu: true },
   { code: "lupin", label: "Lupin", us: false, eu: true },
-  { code: "molluscs", label: "Molluscs", us: false, eu: true },
+  { code: "molluscs", label: "Mollusks", us: false, eu: true },
 ] as const;
 
 export type AllergenCode = (typeof ALLERGENS)[number]["code"];

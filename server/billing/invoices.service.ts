@@ -154,7 +154,7 @@ async function queueInvoiceMail(ctx: AppContext, m: EntityManager, inv: Invoice,
   const bakery = await getBakery(ctx, m);
   const detail = await invoiceDetail(ctx, inv.id, m);
   const pdf = await renderInvoicePdf({ ...detail, bakery, account });
-  const mail = invoiceMail({ bakeryName: bakery.name, currency: bakery.currency, locale: bakery.locale, number: inv.number, totalCents: inv.totalCents, dueCents: amountDue(inv), dueDate: inv.dueDate, url: `${ctx.config.publicUrl}/buyer/invoices/${inv.id}`, card: account.paymentTerms === "card", instructions: bakery.paymentInstructions });
+  const mail = invoiceMail({ bakeryName: bakery.name, currency: bakery.currency, locale: bakery.locale, number: inv.number, totalCents: inv.totalCents, dueCents: amountDue(inv), dueDate: inv.dueDate, url: `${ctx.config.publicUrl}/buyer/invoices/${inv.id}`, card: account.paymentTerms === "card", instructions: bakery.paymentInstructions, statement: inv.kind === "statement" });
   await enqueueMail(m, ctx, "invoice", { to: account.billingEmail, fromName: bakery.name, ...mail, attachments: [{ filename: `${inv.number}.pdf`, contentType: "application/pdf", content: pdf }] });
   await m.getRepository(Invoice).update({ id: inv.id }, { sentAt: ctx.clock.now() });
 }

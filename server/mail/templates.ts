@@ -91,16 +91,18 @@ export function orderMail(p: {
   return { subject: `${verb}: ${day} — ${p.bakeryName}`, ...layout(p.bakeryName, verb, paras, { label: "View the order", url: p.url }, "Allergens are listed with each line above and on each product in Panwise; ask the bakery if you have a severe allergy.") };
 }
 
-export function invoiceMail(p: { bakeryName: string; currency: string; locale?: string; number: string; totalCents: number; dueCents: number; dueDate: string; url: string; card: boolean; instructions: string }): Rendered {
+export function invoiceMail(p: { bakeryName: string; currency: string; locale?: string; number: string; totalCents: number; dueCents: number; dueDate: string; url: string; card: boolean; instructions: string; statement?: boolean }): Rendered {
   const f = formatterFor(p.locale);
+  // A statement is called "Weekly statement" on the screen, on its PDF and here (issue 10).
+  const what = p.statement ? "Weekly statement" : "Invoice";
   const money = (c: number) => f.money(c, p.currency);
   const due = f.day(p.dueDate, "dayWithYear");
   const paras = [
-    `Invoice ${p.number} for ${money(p.totalCents)} is attached as a PDF.`,
+    `${what} ${p.number} for ${money(p.totalCents)} is attached as a PDF.`,
     p.dueCents > 0 ? `${money(p.dueCents)} is due by ${due}.` : "Nothing is due: it is settled.",
     p.card ? "You can pay it by card in Panwise." : p.instructions || "Please pay by bank transfer or check, quoting the invoice number.",
   ];
-  return { subject: `Invoice ${p.number} from ${p.bakeryName}`, ...layout(p.bakeryName, `Invoice ${p.number}`, paras, { label: p.card && p.dueCents > 0 ? "View and pay" : "View the invoice", url: p.url }) };
+  return { subject: `${what} ${p.number} from ${p.bakeryName}`, ...layout(p.bakeryName, `${what} ${p.number}`, paras, { label: p.card && p.dueCents > 0 ? "View and pay" : "View the invoice", url: p.url }) };
 }
 
 export function receiptMail(p: { bakeryName: string; currency: string; locale?: string; number: string; amountCents: number; method: string; url: string }): Rendered {

@@ -85,7 +85,7 @@ describe("dispatch, invoices and statements", () => {
   });
 
   it("accounts on terms get one weekly statement, due in their net days; a valid exemption certificate removes the tax", async () => {
-    const acct = await makeAccount(t.ds, { businessName: "Terms Bistro", paymentTerms: "net14" });
+    const acct = await makeAccount(t.ds, { businessName: "Terms Bistro", paymentTerms: "net14", billingEmail: "books@termsbistro.test" });
     for (const d of ["2026-06-02", "2026-06-04", "2026-06-06"]) await order(acct.id, d, 2, "delivered");
     await order(acct.id, "2026-06-09", 5, "delivered"); // this week: not yet on a statement
     await t.ds.query("INSERT INTO tax_certificate (accountId, file, contentType, status, expiresOn) VALUES (?, 'x.pdf', 'application/pdf', 'approved', '2026-12-31')", [acct.id]);
@@ -95,6 +95,9 @@ describe("dispatch, invoices and statements", () => {
     expect(mine[0]).toMatchObject({ kind: "statement", subtotalCents: 6 * 1800, taxCents: 0, taxExempt: true, issueDate: "2026-06-10", dueDate: "2026-06-24", periodStart: "2026-06-02", periodEnd: "2026-06-07" });
     expect(issued.length).toBeGreaterThanOrEqual(1);
     expect((await issueStatements(t.ctx)).filter((i) => i.accountId === acct.id)).toHaveLength(0); // idempotent
+    // The e-mail calls it what the screen and the PDF call it (issue 10: screens and documents agree).
+    const mail = await waitForMail(t, "books@termsbistro.test");
+    expect(mail.subject).toMatch(/^Weekly statement HB-/);
     // An expired certificate stops the exemption.
     await t.ds.query("UPDATE tax_certificate SET expiresOn = '2026-06-01' WHERE accountId = ?", [acct.id]);
     const next = await t.http().post("/api/invoices/statements").set(auth(books)).send({ through: "2026-06-09" });

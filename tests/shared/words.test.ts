@@ -309,7 +309,7 @@ const SNAKE_ALLOW: Record<string, string> = {};
  */
 const EN_GB = [
   "cheque", "cheques", "colour", "colours", "coloured", "favour", "favourite", "behaviour", "centre", "centres", "metre", "metres", "litre", "litres",
-  "organise", "organised", "organising", "organisation", "catalogue", "licence", "programme", "cancelled", "cancelling", "grey", "judgement", "enrolment",
+  "organise", "sulphite", "sulphites", "sulphur", "molluscs", "organised", "organising", "organisation", "catalogue", "licence", "programme", "cancelled", "cancelling", "grey", "judgement", "enrolment",
   "travelled", "labelled", "labelling", "modelled", "fulfil", "aluminium", "whilst", "amongst", "neutralise", "neutralised", "recognise", "realise",
   "apologise", "customise", "finalise", "prioritise", "summarise", "minimise", "maximise", "emphasise", "gelatinise", "caramelise", "caramelised", "authorise",
   "authorised", "optimise", "analyse", "defence", "offence", "practise", "mould", "moulded", "flavour", "flavours", "savoury", "honour", "neighbour",
