@@ -1,9 +1,15 @@
+import { formatCount } from "./units";
 /**
  * A line's quantity is counted in its product's sale unit: "1 loaf", "3 trays of 15 rolls", "2 dozen buns".
  * Every product stores the singular (`saleUnit`) and the plural (`saleUnitPlural`) its owner chose; order lines keep
  * both as ordered. `suggestPlural` only proposes a plural for the product form and fills older rows.
  * ("units" stays the word of the office's production views: those count pieces and pans, not sale units.)
  */
+
+/** "1 product", "3 products": how many products an order has (their quantities, in unlike units, never add up). */
+export function productsText(n: number): string {
+  return formatCount(n, "product", "products");
+}
 
 export interface SaleUnitWords {
   saleUnit: string;

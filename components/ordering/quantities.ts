@@ -1,3 +1,4 @@
+import { productsText } from "../../shared/quantity";
 /** Quantity steps and checks for one product line (0 = not ordering it). */
 import { quantityText } from "../../shared/quantity";
 
@@ -48,5 +49,5 @@ export function shortfall(totalCents: number, minimumCents: number): number {
 
 /** How many products an order (or a board) has: its quantities are trays, dozens and loaves, which never add up. */
 export function productsLabel(n: number): string {
-  return n === 1 ? "1 product" : `${n} products`;
+  return productsText(n);
 }

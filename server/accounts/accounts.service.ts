@@ -65,10 +65,10 @@ export async function updateAccount(ctx: AppContext, actor: SessionUser, id: num
 }
 
 export async function accountCounts(ctx: AppContext) {
-  const rows: { status: AccountStatus; n: string }[] = await ctx.dataSource.getRepository(CustomerAccount).createQueryBuilder("a")
-    .select("a.status", "status").addSelect("COUNT(*)", "n").groupBy("a.status").getRawMany();
+  const rows: { status: AccountStatus; n: string; credit: string }[] = await ctx.dataSource.getRepository(CustomerAccount).createQueryBuilder("a")
+    .select("a.status", "status").addSelect("COUNT(*)", "n").addSelect("SUM(a.status = 'on_hold' AND a.creditHold = 1)", "credit").groupBy("a.status").getRawMany();
   const by = Object.fromEntries(rows.map((r) => [r.status, Number(r.n)])) as Record<string, number>;
   const active = by.active ?? 0, onHold = by.on_hold ?? 0, closed = by.closed ?? 0;
-  const creditHold = await ctx.dataSource.getRepository(CustomerAccount).countBy({ status: "on_hold", creditHold: true });
+  const creditHold = rows.reduce((s, r) => s + Number(r.credit ?? 0), 0);
   return { total: active + onHold + closed, active, onHold, paused: onHold - creditHold, creditHold, closed };
 }

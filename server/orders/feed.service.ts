@@ -9,12 +9,10 @@ import { orderDtos } from "./orders.service";
 import { getBakery } from "../bakery/bakery.service";
 import { addDays, localToday } from "../../shared/calendar";
 import { formatMoney } from "../../shared/money";
-import { quantityText } from "../../shared/quantity";
-import { formatCount } from "../../shared/units";
+import { productsText, quantityText } from "../../shared/quantity";
 import { ORDER_STATUS_LABELS } from "../../shared/schemas/orders";
 
 /** Lines count different sale units (trays, loaves), so the summary counts products, never adds them up. */
-const productCount = (n: number) => formatCount(n, "product", "products");
 
 export const feedUrl = (ctx: AppContext, token: string) => `${ctx.config.publicUrl}/api/feeds/${token}.ics`;
 
@@ -66,7 +64,7 @@ export async function renderFeed(ctx: AppContext, token: string): Promise<string
       start,
       end: new Date(start.getTime() + 24 * 3600 * 1000),
       allDay: true,
-      summary: feedText(`${bakery.name} delivery (${productCount(o.lines.length)})`),
+      summary: feedText(`${bakery.name} delivery (${productsText(o.lines.length)})`),
       description: feedText([...o.lines.map((l) => `${l.productName} — ${quantityText(l.quantity, l)}`), `Total ${formatMoney(o.totalCents, bakery.currency, bakery.locale)}`, `Status: ${ORDER_STATUS_LABELS[o.status]}`].join("\n")),
       location: feedText(account.deliveryAddress),
       stamp: o.updatedAt ? new Date(o.updatedAt) : ctx.clock.now(),

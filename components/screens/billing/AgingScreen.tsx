@@ -12,6 +12,7 @@ import { useAgingQuery, type AgingRowDto } from "../../api/reports";
 import { useBakeryQuery } from "../../api/bakery";
 import { useIsWide } from "../../shell/useIsWide";
 import { AGING_BUCKETS, type AgingBucket } from "../../../shared/billing";
+import { accountStatusLabel } from "../../../shared/schemas/accounts";
 import { BackLink, BillingTable, Figure, SumLine, billingStyles, day, money } from "./parts";
 import { colors } from "../../theme";
 
@@ -44,7 +45,7 @@ export function AgingScreen() {
         rows={a.accounts}
         rowKey={(r) => r.accountId}
         onRowPress={(r) => router.push(invoicesOf(r))}
-        rowLabel={(r) => `${r.accountName}${r.onHold ? (r.creditHold ? ", on credit hold" : ", paused") : ""}: ${m(r.total)} owed`}
+        rowLabel={(r) => `${r.accountName}${r.onHold ? `, ${accountStatusLabel({ status: "on_hold", creditHold: r.creditHold }).toLowerCase()}` : ""}: ${m(r.total)} owed`}
         rowTestID={(r) => `aging-row-${r.accountId}`}
         footer
         footerTestID="aging-totals"
@@ -56,7 +57,7 @@ export function AgingScreen() {
             render: (r) => (
               <View style={billingStyles.cardTop}>
                 <AppText variant="bodyStrong">{r.accountName}</AppText>
-                {r.onHold ? <Badge label={r.creditHold ? "Credit hold" : "Paused"} tone="amber" testID={`aging-hold-${r.accountId}`} /> : null}
+                {r.onHold ? <Badge label={accountStatusLabel({ status: "on_hold", creditHold: r.creditHold })} tone="amber" testID={`aging-hold-${r.accountId}`} /> : null}
               </View>
             ),
             footer: "Total",
@@ -87,13 +88,13 @@ export function AgingScreen() {
         <View style={billingStyles.cards} testID="aging-list">
           {a.accounts.map((r) => (
             <Link key={r.accountId} href={invoicesOf(r) as never} asChild>
-              <LinkPressable accessibilityRole="link" accessibilityLabel={`${r.accountName}${r.onHold ? (r.creditHold ? ", on credit hold" : ", paused") : ""}: ${m(r.total)} owed`} testID={`aging-row-${r.accountId}`} style={billingStyles.card} highlightStyle={billingStyles.cardHover}>
+              <LinkPressable accessibilityRole="link" accessibilityLabel={`${r.accountName}${r.onHold ? `, ${accountStatusLabel({ status: "on_hold", creditHold: r.creditHold }).toLowerCase()}` : ""}: ${m(r.total)} owed`} testID={`aging-row-${r.accountId}`} style={billingStyles.card} highlightStyle={billingStyles.cardHover}>
                 <View style={billingStyles.cardText}>
                   <View style={billingStyles.cardTop}>
                     <AppText variant="bodyStrong" style={billingStyles.grow}>
                       {r.accountName}
                     </AppText>
-                    {r.onHold ? <Badge label={r.creditHold ? "Credit hold" : "Paused"} tone="amber" testID={`aging-hold-${r.accountId}`} /> : null}
+                    {r.onHold ? <Badge label={accountStatusLabel({ status: "on_hold", creditHold: r.creditHold })} tone="amber" testID={`aging-hold-${r.accountId}`} /> : null}
                   </View>
                   {AGING_BUCKETS.filter((b) => r[b] > 0).map((b) => (
                     <SumLine key={b} label={BUCKET_LABELS[b]} value={m(r[b])} tone={b !== "current" ? "danger" : undefined} testID={`aging-${r.accountId}-${b}`} />

@@ -12,6 +12,7 @@ import { useOfficeSummaryQuery } from "../../api/office";
 import { useBakeryQuery } from "../../api/bakery";
 import { firstName, formatBakeDay } from "../../format";
 import { useIsWide } from "../../shell/useIsWide";
+import { ACCOUNT_STATUS_LABELS, CREDIT_HOLD_LABEL } from "../../../shared/schemas/accounts";
 import { space } from "../../theme";
 
 /** The office's home: how many accounts and people there are, and the way to each list. */
@@ -38,8 +39,8 @@ export function OfficeHome() {
           <Card title="Customer accounts" style={wide ? styles.cellWide : undefined} testID="office-accounts-card">
             <View style={styles.tiles}>
               <StatTile label="Active" value={summary.data.accounts.active} testID="count-accounts-active" />
-              <StatTile label="Paused" value={summary.data.accounts.paused} testID="count-accounts-paused" />
-              <StatTile label="Credit hold" value={summary.data.accounts.creditHold} testID="count-accounts-credit-hold" />
+              <StatTile label={ACCOUNT_STATUS_LABELS.on_hold} value={summary.data.accounts.paused} testID="count-accounts-paused" />
+              <StatTile label={CREDIT_HOLD_LABEL} value={summary.data.accounts.creditHold} testID="count-accounts-credit-hold" />
               <StatTile label="Closed" value={summary.data.accounts.closed} testID="count-accounts-closed" />
             </View>
             <AppText color="muted">{`${summary.data.accounts.total} accounts in all.`}</AppText>
