@@ -1,5 +1,5 @@
 import { z } from "zod";
-import { emailSchema } from "./common";
+import { CONTROL, emailSchema } from "./common";
 
 export const ACCOUNT_STATUSES = ["active", "on_hold", "closed"] as const;
 export type AccountStatus = (typeof ACCOUNT_STATUSES)[number];
@@ -19,13 +19,6 @@ export function accountStatusLabel(a: { status: AccountStatus; creditHold?: bool
   return a.status === "on_hold" && a.creditHold ? CREDIT_HOLD_LABEL : ACCOUNT_STATUS_LABELS[a.status];
 }
 
-/**
- * Control characters (Unicode general category Cc: U+0000–U+001F, U+007F–U+009F) and the line and
- * paragraph separators U+2028/U+2029. Names travel into the calendar feed, CSV exports and mail headers,
- * where a CR or LF starts a new line: RFC 5545 §3.3.11 allows no CONTROL characters in TEXT, and RFC 5322
- * §2.2 none in a header field body.
- */
-const CONTROL = /[\u0000-\u001F\u007F-\u009F\u2028\u2029]/;
 /** The same, but line breaks (and tabs) are fine: for multi-line text such as an address. */
 const CONTROL_BUT_LINES = /[\u0000-\u0008\u000B-\u001F\u007F-\u009F]/;
 

@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { isOneLine } from "./common";
 import { ALLERGEN_CODES, type AllergenCode } from "../allergens";
 import { COMPONENT_KINDS, COMPONENT_PER, componentName, type ComponentKind, type ComponentPer, type ResolvedBake } from "../components";
 
@@ -32,11 +33,11 @@ export type ComponentInput = z.input<typeof componentInputSchema>;
 
 export const productInputSchema = z
   .object({
-    name: z.string({ required_error: "Enter the product's name." }).trim().min(1, "Enter the product's name.").max(120, "Use at most 120 characters."),
+    name: z.string({ required_error: "Enter the product's name." }).trim().min(1, "Enter the product's name.").max(120, "Use at most 120 characters.").refine(isOneLine, "Keep the name on one line, without line breaks or control characters."),
     description: z.string().trim().max(1000, "Use at most 1000 characters.").default(""),
-    saleUnit: z.string({ required_error: "Enter the sale unit, e.g. tray of 15 rolls." }).trim().min(1, "Enter the sale unit, e.g. tray of 15 rolls.").max(60, "Use at most 60 characters."),
+    saleUnit: z.string({ required_error: "Enter the sale unit, e.g. tray of 15 rolls." }).trim().min(1, "Enter the sale unit, e.g. tray of 15 rolls.").max(60, "Use at most 60 characters.").refine(isOneLine, "Keep the sale unit on one line, without line breaks or control characters."),
     /** "trays of 15 rolls": how a count of more than one reads (shared/quantity.ts). */
-    saleUnitPlural: z.string({ required_error: "Enter the plural of the sale unit, e.g. trays of 15 rolls." }).trim().min(1, "Enter the plural of the sale unit, e.g. trays of 15 rolls.").max(60, "Use at most 60 characters."),
+    saleUnitPlural: z.string({ required_error: "Enter the plural of the sale unit, e.g. trays of 15 rolls." }).trim().min(1, "Enter the plural of the sale unit, e.g. trays of 15 rolls.").max(60, "Use at most 60 characters.").refine(isOneLine, "Keep the plural on one line, without line breaks or control characters."),
     piecesPerUnit: intIn("Pieces per unit", 1, 500),
     pieceGrams: intIn("Piece weight", 1, 5000),
     panName: z.string().trim().min(1, "Name the pan, e.g. 9×13 in pan.").max(60, "Use at most 60 characters."),

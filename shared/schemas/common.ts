@@ -85,3 +85,16 @@ export function fieldErrorsFrom(error: z.ZodError): FieldErrors {
   }
   return fields;
 }
+
+/**
+ * Control characters (Unicode general category Cc: U+0000–U+001F, U+007F–U+009F) and the line and
+ * paragraph separators U+2028/U+2029. Names (of accounts, products, sale units) travel into the calendar feed, CSV exports and mail headers,
+ * where a CR or LF starts a new line: RFC 5545 §3.3.11 allows no CONTROL characters in TEXT, and RFC 5322
+ * §2.2 none in a header field body.
+ */
+export const CONTROL = /[\u0000-\u001F\u007F-\u009F\u2028\u2029]/;
+
+/** No line breaks or control characters in a one-line name that reaches the feed, e-mails and CSVs. */
+export function isOneLine(v: string): boolean {
+  return !CONTROL.test(v);
+}

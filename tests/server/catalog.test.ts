@@ -63,6 +63,15 @@ describe("catalog", () => {
     expect((await t.http().get(`/api/products/${loaf.body.product.id}`).set(auth(owner))).body.product.saleUnitPlural).toBe("loaves");
     const renamed = await t.http().patch(`/api/products/${loaf.body.product.id}`).set(auth(owner)).send({ saleUnitPlural: "loaves, sliced" });
     expect(renamed.body.product.saleUnitPlural).toBe("loaves, sliced");
+    // Sale units and names reach the calendar feed, e-mail and CSVs: a line break or control character is refused
+    // (RFC 5545 §3.3.11, RFC 5322 §2.2) and the stored value is kept.
+    for (const bad of ["trays\u0000x", "trays\r\nBCC: x"]) {
+      const refused = await t.http().patch(`/api/products/${loaf.body.product.id}`).set(auth(owner)).send({ saleUnitPlural: bad });
+      expect(refused.status).toBe(400);
+      expect(refused.body.error.fields.saleUnitPlural).toMatch(/one line/);
+    }
+    expect((await t.http().patch(`/api/products/${loaf.body.product.id}`).set(auth(owner)).send({ name: "Rye\nloaf" })).status).toBe(400);
+    expect((await t.http().get(`/api/products/${loaf.body.product.id}`).set(auth(owner))).body.product.saleUnitPlural).toBe("loaves, sliced");
     const { saleUnitPlural: _none, ...withoutPlural } = product;
     const missing = await t.http().post("/api/products").set(auth(owner)).send({ ...withoutPlural, name: "No plural" });
     expect(missing.status).toBe(400);
