@@ -3,6 +3,7 @@ import { Pressable, StyleSheet, View } from "react-native";
 import Feather from "@expo/vector-icons/Feather";
 import { colors, layout, radii, space } from "../theme";
 import { AppText } from "./Text";
+import { FieldFrame } from "./Field";
 
 export interface Choice<T extends string> {
   value: T;
@@ -24,10 +25,8 @@ export interface ChoiceGroupProps<T extends string> {
 /** A single-choice control (radio group) built from large pressable options. */
 export function ChoiceGroup<T extends string>({ label, choices, value, onChange, error, testID, layout: shape = "chips" }: ChoiceGroupProps<T>) {
   return (
-    <View style={styles.wrap} testID={testID}>
-      <AppText variant="label" nativeID={testID ? `${testID}-label` : undefined}>
-        {label}
-      </AppText>
+    <View testID={testID}>
+      <FieldFrame label={label} error={error} testID={testID}>
       <View accessibilityRole="radiogroup" accessibilityLabel={label} style={shape === "chips" ? styles.chips : styles.list}>
         {choices.map((c) => {
           const selected = c.value === value;
@@ -62,17 +61,12 @@ export function ChoiceGroup<T extends string>({ label, choices, value, onChange,
           );
         })}
       </View>
-      {error ? (
-        <AppText variant="small" color="dangerInk" testID={testID ? `${testID}-error` : undefined} style={styles.error}>
-          {error}
-        </AppText>
-      ) : null}
+      </FieldFrame>
     </View>
   );
 }
 
 const styles = StyleSheet.create({
-  wrap: { gap: space.xs },
   chips: { flexDirection: "row", flexWrap: "wrap", gap: space.sm },
   list: { gap: space.sm },
   chip: {
@@ -98,5 +92,4 @@ const styles = StyleSheet.create({
   rowText: { flex: 1, gap: space.xxs },
   selected: { backgroundColor: colors.crustSoft, borderColor: colors.crust },
   pressed: { backgroundColor: colors.sunken },
-  error: { fontFamily: "Nunito_600SemiBold" },
 });

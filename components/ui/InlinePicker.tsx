@@ -3,6 +3,7 @@ import { Pressable, StyleSheet, View } from "react-native";
 import Feather from "@expo/vector-icons/Feather";
 import { colors, fonts, layout, radii, space } from "../theme";
 import { AppText } from "./Text";
+import { FieldFrame } from "./Field";
 
 export interface PickerOption<T extends string | number> {
   value: T;
@@ -39,12 +40,7 @@ export function InlinePicker<T extends string | number>({ label, hideLabel, valu
   };
   const chosen = options.find((o) => o.value === value);
   return (
-    <View style={styles.wrap}>
-      {hideLabel ? null : (
-        <AppText variant="label" accessibilityElementsHidden importantForAccessibility="no">
-          {label}
-        </AppText>
-      )}
+    <FieldFrame label={label} hideLabel={hideLabel} error={error} testID={testID} labelForInput>
       <Pressable
         accessibilityRole="button"
         accessibilityLabel={`${label}: ${chosen ? chosen.label : "none chosen"}`}
@@ -96,17 +92,11 @@ export function InlinePicker<T extends string | number>({ label, hideLabel, valu
           )}
         </View>
       ) : null}
-      {error ? (
-        <AppText variant="small" color="dangerInk" testID={testID ? `${testID}-error` : undefined} style={styles.error}>
-          {error}
-        </AppText>
-      ) : null}
-    </View>
+    </FieldFrame>
   );
 }
 
 const styles = StyleSheet.create({
-  wrap: { gap: space.xs },
   field: {
     minHeight: layout.minTouch + 4,
     flexDirection: "row",
@@ -135,5 +125,4 @@ const styles = StyleSheet.create({
     backgroundColor: colors.surface,
   },
   optionOn: { backgroundColor: colors.crustSoft, borderColor: colors.crust },
-  error: { fontFamily: fonts.semibold },
 });

@@ -3,6 +3,7 @@ import { Pressable, StyleSheet, View } from "react-native";
 import Feather from "@expo/vector-icons/Feather";
 import { colors, layout, radii, space } from "../theme";
 import { AppText } from "./Text";
+import { FieldFrame } from "./Field";
 
 export interface MultiChoiceOption<T extends string | number> {
   value: T;
@@ -29,13 +30,8 @@ export function MultiChoice<T extends string | number>({ label, hint, options, v
     onChange(next);
   };
   return (
-    <View style={styles.wrap} testID={testID}>
-      <AppText variant="label">{label}</AppText>
-      {hint ? (
-        <AppText variant="small" color="muted">
-          {hint}
-        </AppText>
-      ) : null}
+    <View testID={testID}>
+      <FieldFrame label={label} hint={hint} error={error} testID={testID}>
       <View style={styles.chips} accessibilityRole="none" aria-label={label}>
         {options.map((o) => {
           const checked = value.includes(o.value);
@@ -58,17 +54,12 @@ export function MultiChoice<T extends string | number>({ label, hint, options, v
           );
         })}
       </View>
-      {error ? (
-        <AppText variant="small" color="dangerInk" testID={testID ? `${testID}-error` : undefined} style={styles.error}>
-          {error}
-        </AppText>
-      ) : null}
+      </FieldFrame>
     </View>
   );
 }
 
 const styles = StyleSheet.create({
-  wrap: { gap: space.xs },
   chips: { flexDirection: "row", flexWrap: "wrap", gap: space.sm },
   chip: {
     minHeight: layout.minTouch,
@@ -84,5 +75,4 @@ const styles = StyleSheet.create({
   checked: { backgroundColor: colors.crustSoft, borderColor: colors.crust },
   pressed: { backgroundColor: colors.sunken },
   disabled: { opacity: 0.6 },
-  error: { fontFamily: "Nunito_600SemiBold" },
 });

@@ -1,7 +1,7 @@
 import React, { forwardRef, useState } from "react";
-import { StyleSheet, TextInput, View, type TextInputProps } from "react-native";
+import { StyleSheet, TextInput, type TextInputProps } from "react-native";
 import { colors, fonts, layout, radii, space } from "../theme";
-import { AppText } from "./Text";
+import { FieldFrame } from "./Field";
 
 export interface TextFieldProps extends Omit<TextInputProps, "style"> {
   label: string;
@@ -12,23 +12,14 @@ export interface TextFieldProps extends Omit<TextInputProps, "style"> {
   optional?: boolean;
 }
 
-/** A labelled input with its hint and its error message right below it. */
+/** A labelled text input in the one field frame (components/ui/Field.tsx): label, hint, input, error. */
 export const TextField = forwardRef<TextInput, TextFieldProps>(function TextField(
   { label, error, hint, testID, optional, multiline, onFocus, onBlur, accessibilityLabel, ...rest },
   ref,
 ) {
   const [focused, setFocused] = useState(false);
   return (
-    <View style={styles.wrap}>
-      <AppText variant="label" accessibilityElementsHidden importantForAccessibility="no">
-        {label}
-        {optional ? <AppText variant="small" color="muted">{"  (optional)"}</AppText> : null}
-      </AppText>
-      {hint ? (
-        <AppText variant="small" color="muted">
-          {hint}
-        </AppText>
-      ) : null}
+    <FieldFrame label={label} hint={hint} error={error} optional={optional} testID={testID} labelForInput>
       <TextInput
         ref={ref}
         accessibilityLabel={accessibilityLabel ?? label}
@@ -52,17 +43,11 @@ export const TextField = forwardRef<TextInput, TextFieldProps>(function TextFiel
         ]}
         {...rest}
       />
-      {error ? (
-        <AppText variant="small" color="dangerInk" testID={testID ? `${testID}-error` : undefined} accessibilityLiveRegion="polite" style={styles.error}>
-          {error}
-        </AppText>
-      ) : null}
-    </View>
+    </FieldFrame>
   );
 });
 
 const styles = StyleSheet.create({
-  wrap: { gap: space.xs },
   input: {
     minHeight: layout.minTouch + 4,
     borderWidth: 1.5,
@@ -78,5 +63,4 @@ const styles = StyleSheet.create({
   multiline: { minHeight: 96, textAlignVertical: "top" },
   focused: { borderColor: colors.focus, borderWidth: 2 },
   invalid: { borderColor: colors.danger, borderWidth: 2 },
-  error: { fontFamily: fonts.semibold },
 });

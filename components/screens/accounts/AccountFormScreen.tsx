@@ -1,4 +1,4 @@
-import React, { useState } from "react";
+import React from "react";
 import { StyleSheet, View } from "react-native";
 import { useRouter } from "expo-router";
 import { Screen } from "../../ui/Screen";
@@ -12,9 +12,8 @@ import { FormError } from "../../ui/FormError";
 import { EmptyState, ErrorState, LoadingState } from "../../ui/States";
 import { useAccountQuery, useCreateAccountMutation, useUpdateAccountMutation } from "../../api/accounts";
 import { ApiError } from "../../api/client";
-import { splitError, validate } from "../../forms/errors";
+import { useZodForm } from "../../forms/useZodForm";
 import { accountInputSchema, type AccountDto, type AccountStatus } from "../../../shared/schemas/accounts";
-import type { FieldErrors } from "../../../shared/errors";
 import { space } from "../../theme";
 
 interface Values {
@@ -55,13 +54,10 @@ export function NewAccountScreen() {
         initial={EMPTY}
         withStatus
         submitLabel="Add account"
-        busy={mutation.isPending}
-        onSubmit={(input, fail) =>
-          mutation.mutate(input, {
-            onSuccess: (saved) => router.replace(`/office/accounts/${saved.id}`),
-            onError: fail,
-          })
-        }
+        onSubmit={async (input) => {
+          const saved = await mutation.mutateAsync(input);
+          router.replace(`/office/accounts/${saved.id}`);
+        }}
         cancelHref="/office/accounts"
       />
     </Screen>
@@ -97,13 +93,10 @@ export function EditAccountScreen({ id }: { id: number }) {
             key={account.data.id}
             initial={valuesOf(account.data)}
             submitLabel="Save changes"
-            busy={mutation.isPending}
-            onSubmit={(input, fail) => {
+            onSubmit={async (input) => {
               const { status: _status, ...patch } = input;
-              mutation.mutate(patch, {
-                onSuccess: (saved) => router.replace(`/office/accounts/${saved.id}`),
-                onError: fail,
-              });
+              const saved = await mutation.mutateAsync(patch);
+              router.replace(`/office/accounts/${saved.id}`);
             }}
             cancelHref={`/office/accounts/${id}`}
           />
@@ -117,59 +110,37 @@ interface AccountFormProps {
   initial: Values;
   withStatus?: boolean;
   submitLabel: string;
-  busy: boolean;
-  onSubmit: (input: Values, fail: (error: unknown) => void) => void;
+  /** Sends the checked input; a rejection shows its errors on the form. */
+  onSubmit: (input: Values) => Promise<unknown>;
   cancelHref: string;
 }
 
-function AccountForm({ initial, withStatus, submitLabel, busy, onSubmit, cancelHref }: AccountFormProps) {
-  const [values, setValues] = useState<Values>(initial);
-  const [fields, setFields] = useState<FieldErrors>({});
-  const [formError, setFormError] = useState<string | null>(null);
-  const set = (key: keyof Values) => (v: string) => setValues((s) => ({ ...s, [key]: v }));
-
-  const submit = () => {
-    if (busy) return;
-    setFormError(null);
-    const checked = validate(accountInputSchema, values);
-    if (!checked.ok) {
-      setFields(checked.fields);
-      setFormError(Object.keys(checked.fields).length > 1 ? "Some fields need attention." : null);
-      return;
-    }
-    setFields({});
-    onSubmit(checked.data as Values, (err) => {
-      const split = splitError(err, FIELDS);
-      setFields(split.fields);
-      setFormError(split.formError);
-    });
-  };
+function AccountForm({ initial, withStatus, submitLabel, onSubmit, cancelHref }: AccountFormProps) {
+  const form = useZodForm({ schema: accountInputSchema, initial, fields: FIELDS });
+  const { values, errors: fields } = form;
+  const submit = () => void form.submit((input) => onSubmit(input as Values));
 
   return (
     <Card testID="account-form">
-      <FormError message={formError} testID="account-form-error" />
-      <TextField label="Business name" testID="account-businessName" value={values.businessName} onChangeText={set("businessName")} error={fields.businessName} autoCapitalize="words" />
+      <FormError message={form.formError} testID="account-form-error" />
+      <TextField label="Business name" testID="account-businessName" {...form.text("businessName")} autoCapitalize="words" />
       <TextField
         label="Delivery address"
         testID="account-deliveryAddress"
-        value={values.deliveryAddress}
-        onChangeText={set("deliveryAddress")}
-        error={fields.deliveryAddress}
+        {...form.text("deliveryAddress")}
         multiline
         hint="Where the driver leaves the order, with any door or gate details."
       />
       <View style={styles.pair}>
         <View style={styles.half}>
-          <TextField label="Contact name" optional testID="account-contactName" value={values.contactName} onChangeText={set("contactName")} error={fields.contactName} autoCapitalize="words" />
+          <TextField label="Contact name" optional testID="account-contactName" {...form.text("contactName")} autoCapitalize="words" />
         </View>
         <View style={styles.half}>
           <TextField
             label="Contact phone"
             optional
             testID="account-contactPhone"
-            value={values.contactPhone}
-            onChangeText={set("contactPhone")}
-            error={fields.contactPhone}
+            {...form.text("contactPhone")}
             keyboardType="phone-pad"
             inputMode="tel"
           />
@@ -178,9 +149,7 @@ function AccountForm({ initial, withStatus, submitLabel, busy, onSubmit, cancelH
       <TextField
         label="Billing e-mail"
         testID="account-billingEmail"
-        value={values.billingEmail}
-        onChangeText={set("billingEmail")}
-        error={fields.billingEmail}
+        {...form.text("billingEmail")}
         keyboardType="email-address"
         inputMode="email"
         autoCapitalize="none"
@@ -192,7 +161,7 @@ function AccountForm({ initial, withStatus, submitLabel, busy, onSubmit, cancelH
           label="Status"
           testID="account-status-choice"
           value={values.status}
-          onChange={(s) => setValues((v) => ({ ...v, status: s }))}
+          onChange={form.set("status")}
           error={fields.status}
           choices={[
             { value: "active", label: "Active" },
@@ -200,9 +169,9 @@ function AccountForm({ initial, withStatus, submitLabel, busy, onSubmit, cancelH
           ]}
         />
       ) : null}
-      <TextField label="Office notes" optional testID="account-notes" value={values.notes} onChangeText={set("notes")} error={fields.notes} multiline hint="Only office staff see these." />
+      <TextField label="Office notes" optional testID="account-notes" {...form.text("notes")} multiline hint="Only office staff see these." />
       <View style={styles.buttons}>
-        <Button label={submitLabel} icon="check" onPress={submit} busy={busy} testID="account-submit" />
+        <Button label={submitLabel} icon="check" onPress={submit} busy={form.submitting} testID="account-submit" />
         <TextLink href={cancelHref as never} label="Cancel" />
       </View>
     </Card>
