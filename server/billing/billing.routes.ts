@@ -22,7 +22,7 @@ import { sendStoredFile } from "../files/serve";
 
 const idParam = z.object({ id: idSchema });
 const OFFICE = ["owner", "bookkeeper"] as const;
-const money = z.number({ invalid_type_error: "Enter an amount in cents." }).int("Whole cents only.").positive("The amount must be more than 0.");
+const money = z.number({ error: (issue) => (issue.input === undefined ? undefined : "Enter an amount in cents.") }).int("Whole cents only.").positive("The amount must be more than 0.");
 
 /** Stripe webhooks need the raw body for the signature: mounted before the JSON parser. */
 export function stripeWebhookRoute(ctx: AppContext): Router {
@@ -83,7 +83,7 @@ export function invoiceRoutes(ctx: AppContext): Router {
   });
   r.post("/:id/payments", allow(...OFFICE), async (req, res) => {
     const { id } = parse(idParam, req.params);
-    const input = parse(z.object({ amountCents: money, method: z.enum(["bank_transfer", "cheque", "cash", "other"], { errorMap: () => ({ message: "Choose bank transfer, check, cash or other." }) }), reference: z.string().trim().min(1, "Enter the transfer reference or check number.").max(120), receivedOn: dateSchema }), req.body);
+    const input = parse(z.object({ amountCents: money, method: z.enum(["bank_transfer", "cheque", "cash", "other"], { error: "Choose bank transfer, check, cash or other." }), reference: z.string().trim().min(1, "Enter the transfer reference or check number.").max(120), receivedOn: dateSchema }), req.body);
     res.status(201).json({ payment: await payments.recordManualPaymentAndExpire(ctx, currentUser(req), id, input) });
   });
   r.post("/:id/overpayment-refund", allow(...OFFICE), async (req, res) => {
@@ -128,7 +128,7 @@ export function reportRoutes(ctx: AppContext): Router {
     res.json({ aging: await payments.aging(ctx) });
   });
   r.get("/exports/:file", async (req, res) => {
-    const { file } = parse(z.object({ file: z.enum(["invoices.csv", "payments.csv", "payouts.csv"], { errorMap: () => ({ message: "Exports: invoices.csv, payments.csv, payouts.csv." }) }) }), req.params);
+    const { file } = parse(z.object({ file: z.enum(["invoices.csv", "payments.csv", "payouts.csv"], { error: "Exports: invoices.csv, payments.csv, payouts.csv." }) }), req.params);
     const csv = await payments.exportCsv(ctx, file.replace(".csv", "") as "invoices" | "payments" | "payouts");
     res.type("text/csv; charset=utf-8").attachment(file).send(csv);
   });
@@ -161,7 +161,7 @@ export function accountBillingRoutes(ctx: AppContext): Router {
   const r = Router();
   r.put("/:id/terms", allow("owner"), async (req, res) => {
     const { id } = parse(idParam, req.params);
-    const { paymentTerms } = parse(z.object({ paymentTerms: z.enum(PAYMENT_TERMS, { errorMap: () => ({ message: "Choose card, net7, net14 or net30." }) }) }), req.body);
+    const { paymentTerms } = parse(z.object({ paymentTerms: z.enum(PAYMENT_TERMS, { error: "Choose card, net7, net14 or net30." }) }), req.body);
     const repo = ctx.dataSource.getRepository(CustomerAccount);
     if (!(await repo.existsBy({ id }))) throw notFound("That account");
     await repo.update({ id }, { paymentTerms });
@@ -196,7 +196,7 @@ export function certificateRoutes(ctx: AppContext): Router {
   const r = Router();
   r.post("/:id/review", allow("owner"), async (req, res) => {
     const { id } = parse(idParam, req.params);
-    const { status } = parse(z.object({ status: z.enum(["approved", "rejected"], { errorMap: () => ({ message: "Choose approved or rejected." }) }) }), req.body);
+    const { status } = parse(z.object({ status: z.enum(["approved", "rejected"], { error: "Choose approved or rejected." }) }), req.body);
     res.json({ certificate: await certificates.reviewCertificate(ctx, currentUser(req), id, status) });
   });
   /** Downloaded, never shown inline or cached: attachment, private no-store, nosniff (server/files/serve.ts). */
