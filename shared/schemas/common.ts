@@ -86,7 +86,11 @@ export const optionalText = (max: number, label = "This") =>
 /** Turn a zod error into per-field messages keyed by dotted path ("lines.0.quantity"). */
 export function fieldErrorsFrom(error: z.ZodError): FieldErrors {
   const fields: FieldErrors = {};
-  for (const issue of error.issues) {
+  // zod 4's .int() also refuses numbers past Number.MAX_SAFE_INTEGER (origin "int", too_big/too_small) before
+  // the field's own .max()/.min() runs; for 1e20 the field's limit ("At most 10,000 units") says more than
+  // "whole units", so those safe-range issues only speak when nothing else does.
+  const safeRange = (issue: z.core.$ZodIssue) => (issue.code === "too_big" || issue.code === "too_small") && issue.origin === "int";
+  for (const issue of [...error.issues.filter((i) => !safeRange(i)), ...error.issues.filter(safeRange)]) {
     const key = issue.path.length ? issue.path.join(".") : "_";
     if (!fields[key]) fields[key] = issue.message;
   }
