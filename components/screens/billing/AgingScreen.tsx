@@ -31,7 +31,7 @@ export function AgingScreen() {
   const aging = useAgingQuery();
   const currency = useBakeryQuery().data?.currency ?? "USD";
   const m = (c: number) => money(c, currency);
-  const invoicesOf = (a: AgingRowDto) => `/office/invoices?accountId=${a.accountId}`;
+  const invoicesOf = (a: AgingRowDto) => `/office/invoices?accountId=${a.accountId}` as const;
 
   let body: React.ReactNode;
   if (aging.isPending) body = <LoadingState label="Loading the aging report…" testID="aging-loading" />;
