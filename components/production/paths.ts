@@ -14,6 +14,8 @@ export interface KitchenPaths {
   formulas: RoutePath;
   newFormula: RoutePath;
   formula: (id: number, version?: number) => RoutePath;
+  /** A formula just made: its page says it was saved. */
+  createdFormula: (id: number) => RoutePath;
   ingredients: RoutePath;
   newIngredient: RoutePath;
   ingredient: (id: number) => RoutePath;
@@ -37,6 +39,7 @@ export function kitchenPaths(area: KitchenArea): KitchenPaths {
       formulas: `${base}/formulas`,
       newFormula: `${base}/formulas/new`,
       formula: (id, version) => (version ? `${base}/formulas/${id}?version=${version}` : `${base}/formulas/${id}`),
+      createdFormula: (id) => `${base}/formulas/${id}?created=1`,
       ingredients: `${base}/ingredients`,
       newIngredient: `${base}/ingredients/new`,
       ingredient: (id) => `${base}/ingredients/${id}`,
@@ -52,6 +55,7 @@ export function kitchenPaths(area: KitchenArea): KitchenPaths {
     formulas: "/bake/formulas",
     newFormula: "/bake/formulas/new",
     formula: (id, version) => (version ? `/bake/formulas/${id}?version=${version}` : `/bake/formulas/${id}`),
+    createdFormula: (id) => `/bake/formulas/${id}?created=1`,
     ingredients: "/bake/ingredients",
     newIngredient: "/bake/ingredients/new",
     ingredient: (id) => `/bake/ingredients/${id}`,

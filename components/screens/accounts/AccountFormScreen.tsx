@@ -1,6 +1,6 @@
 import React, { useState } from "react";
 import { StyleSheet, View } from "react-native";
-import { useRouter } from "expo-router";
+import { useRouter, type Href } from "expo-router";
 import { Screen } from "../../ui/Screen";
 import { PageHeader } from "../../ui/PageHeader";
 import { Card } from "../../ui/Card";
@@ -119,7 +119,7 @@ interface AccountFormProps {
   submitLabel: string;
   busy: boolean;
   onSubmit: (input: Values, fail: (error: unknown) => void) => void;
-  cancelHref: string;
+  cancelHref: Href;
 }
 
 function AccountForm({ initial, withStatus, submitLabel, busy, onSubmit, cancelHref }: AccountFormProps) {
@@ -203,7 +203,7 @@ function AccountForm({ initial, withStatus, submitLabel, busy, onSubmit, cancelH
       <TextField label="Office notes" optional testID="account-notes" value={values.notes} onChangeText={set("notes")} error={fields.notes} multiline hint="Only office staff see these." />
       <View style={styles.buttons}>
         <Button label={submitLabel} icon="check" onPress={submit} busy={busy} testID="account-submit" />
-        <TextLink href={cancelHref as never} label="Cancel" />
+        <TextLink href={cancelHref} label="Cancel" />
       </View>
     </Card>
   );
