@@ -18,6 +18,8 @@ module.exports = {
       preset: "jest-expo",
       testMatch: ["<rootDir>/tests/app/**/*.test.tsx"],
       setupFilesAfterEnv: ["<rootDir>/tests/app/setup.ts"],
+      // The `@/` import alias of tsconfig.json (Metro reads it there; Jest needs it spelled out).
+      moduleNameMapper: { "^@/(.*)$": "<rootDir>/$1" },
       transformIgnorePatterns: [
         "node_modules/(?!((jest-)?react-native|@react-native(-community)?)|expo(nent)?|@expo(nent)?/.*|@expo-google-fonts/.*|react-navigation|@react-navigation/.*|@tanstack/.*|react-native-svg|standard-navigation)",
       ],

@@ -1,6 +1,6 @@
 import React from "react";
 import { Pressable, StyleSheet, View, type ViewStyle } from "react-native";
-import { Link } from "expo-router";
+import { Link, type Href } from "expo-router";
 import Feather from "@expo/vector-icons/Feather";
 import { AppText } from "./Text";
 import { LinkPressable } from "./LinkPressable";
@@ -48,7 +48,7 @@ export function ListCard({ onPress, accessibilityLabel, testID, compact, childre
 }
 
 export interface LinkCardProps {
-  href: string;
+  href: Href;
   icon: React.ComponentProps<typeof Feather>["name"];
   title: string;
   hint?: string;
@@ -63,7 +63,7 @@ export interface LinkCardProps {
 export function LinkCard({ href, icon, title, hint, testID, iconBadge, style }: LinkCardProps) {
   const glyph = <Feather name={icon} size={22} color={colors.crust} />;
   return (
-    <Link href={href as never} asChild>
+    <Link href={href} asChild>
       <LinkPressable accessibilityRole="link" testID={testID} style={StyleSheet.flatten([styles.card, styles.linkCard, style])} highlightStyle={styles.pressed}>
         {iconBadge ? <View style={styles.badge}>{glyph}</View> : glyph}
         <View style={styles.text}>

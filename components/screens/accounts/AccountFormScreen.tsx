@@ -1,6 +1,6 @@
 import React from "react";
 import { StyleSheet, View } from "react-native";
-import { useRouter } from "expo-router";
+import { useRouter, type Href } from "expo-router";
 import { Screen } from "../../ui/Screen";
 import { PageHeader } from "../../ui/PageHeader";
 import { Card } from "../../ui/Card";
@@ -112,7 +112,7 @@ interface AccountFormProps {
   submitLabel: string;
   /** Sends the checked input; a rejection shows its errors on the form. */
   onSubmit: (input: Values) => Promise<unknown>;
-  cancelHref: string;
+  cancelHref: Href;
 }
 
 function AccountForm({ initial, withStatus, submitLabel, onSubmit, cancelHref }: AccountFormProps) {
@@ -172,7 +172,7 @@ function AccountForm({ initial, withStatus, submitLabel, onSubmit, cancelHref }:
       <TextField label="Office notes" optional testID="account-notes" {...form.text("notes")} multiline hint="Only office staff see these." />
       <View style={styles.buttons}>
         <Button label={submitLabel} icon="check" onPress={submit} busy={form.submitting} testID="account-submit" />
-        <TextLink href={cancelHref as never} label="Cancel" />
+        <TextLink href={cancelHref} label="Cancel" />
       </View>
     </Card>
   );

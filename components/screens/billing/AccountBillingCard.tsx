@@ -38,7 +38,7 @@ export function AccountBillingCard({ accountId, canChangeTerms, currentTerms }: 
             : `${money(open.reduce((s, i) => s + i.amountDueCents, 0), cur)} owed on ${invoicesLabel(open.length)}${overdue.length ? `, ${overdue.length} overdue` : ""}.`}
         </AppText>
       )}
-      <LinkButton href={`/office/invoices?accountId=${accountId}` as never} label="See its invoices" icon="file-text" variant="secondary" testID="account-invoices-link" />
+      <LinkButton href={`/office/invoices?accountId=${accountId}`} label="See its invoices" icon="file-text" variant="secondary" testID="account-invoices-link" />
       {currentTerms ? (
         <AppText testID="account-terms-current">
           Payment terms: {PAYMENT_TERMS_LABELS[currentTerms]}

@@ -31,7 +31,7 @@ export function AgingScreen() {
   const aging = useAgingQuery();
   const currency = useBakeryQuery().data?.currency ?? "USD";
   const m = (c: number) => money(c, currency);
-  const invoicesOf = (a: AgingRowDto) => `/office/invoices?accountId=${a.accountId}`;
+  const invoicesOf = (a: AgingRowDto) => `/office/invoices?accountId=${a.accountId}` as const;
 
   let body: React.ReactNode;
   if (aging.isPending) body = <LoadingState label="Loading the aging report…" testID="aging-loading" />;
@@ -87,7 +87,7 @@ export function AgingScreen() {
         </View>
         <View style={billingStyles.cards} testID="aging-list">
           {a.accounts.map((r) => (
-            <Link key={r.accountId} href={invoicesOf(r) as never} asChild>
+            <Link key={r.accountId} href={invoicesOf(r)} asChild>
               <LinkPressable accessibilityRole="link" accessibilityLabel={`${r.accountName}${r.onHold ? `, ${accountStatusLabel({ status: "on_hold", creditHold: r.creditHold }).toLowerCase()}` : ""}: ${m(r.total)} owed`} testID={`aging-row-${r.accountId}`} style={billingStyles.card} highlightStyle={billingStyles.cardHover}>
                 <View style={billingStyles.cardText}>
                   <View style={billingStyles.cardTop}>

@@ -1,6 +1,6 @@
 import React, { useState } from "react";
 import { StyleSheet, View } from "react-native";
-import { Link, useRouter } from "expo-router";
+import { Link, useRouter, type Href } from "expo-router";
 import Feather from "@expo/vector-icons/Feather";
 import { Screen } from "../../ui/Screen";
 import { PageHeader } from "../../ui/PageHeader";
@@ -293,9 +293,9 @@ function StatusCell({ invoice: i, office }: { invoice: InvoiceDto; office: boole
   );
 }
 
-function InvoiceCard({ invoice: i, href, office }: { invoice: InvoiceDto; href: string; office: boolean }) {
+function InvoiceCard({ invoice: i, href, office }: { invoice: InvoiceDto; href: Href; office: boolean }) {
   return (
-    <Link href={href as never} asChild>
+    <Link href={href} asChild>
       <LinkPressable
         accessibilityRole="link"
         accessibilityLabel={`${i.number}${office ? `, ${i.accountName}` : ""}, ${money(i.totalCents, i.currency)}, ${i.overdue ? "overdue" : INVOICE_STATUS_LABELS[i.status].toLowerCase()}`}

@@ -86,8 +86,8 @@ function PayReturnBody({ invoiceId, cancelled, office }: PayReturnProps & { offi
   const base = office ? "/office/invoices" : "/buyer/invoices";
   const backLinks = (
     <View style={styles.links}>
-      {valid ? <LinkButton href={`${base}/${invoiceId}` as never} label="See the invoice" icon="file-text" variant="secondary" testID="pay-see-invoice" /> : null}
-      <LinkButton href={base as never} label="Back to invoices" icon="list" variant="ghost" testID="pay-back-invoices" />
+      {valid ? <LinkButton href={`${base}/${invoiceId}`} label="See the invoice" icon="file-text" variant="secondary" testID="pay-see-invoice" /> : null}
+      <LinkButton href={base} label="Back to invoices" icon="list" variant="ghost" testID="pay-back-invoices" />
     </View>
   );
 

@@ -79,7 +79,7 @@ export function PayoutsScreen() {
       ) : (
         <View style={billingStyles.cards} testID="payouts-list">
           {payouts.data.map((p) => (
-            <Link key={p.id} href={`/office/money/payouts/${p.id}` as never} asChild>
+            <Link key={p.id} href={`/office/money/payouts/${p.id}`} asChild>
               <LinkPressable accessibilityRole="link" accessibilityLabel={`Payout of ${money(p.amountCents, p.currency)}, arrives ${day(p.arrivalDate)}`} testID={`payout-row-${p.id}`} style={billingStyles.card} highlightStyle={billingStyles.cardHover}>
                 <View style={billingStyles.cardText}>
                   <View style={billingStyles.cardTop}>

@@ -2,7 +2,7 @@ import React from "react";
 import { Pressable, StyleSheet, View } from "react-native";
 import { Badge, type BadgeTone } from "../../ui/Badge";
 import { AppText } from "../../ui/Text";
-import { TextLink } from "../../ui/TextLink";
+import { TextLink, type TextLinkProps } from "../../ui/TextLink";
 import { formatMoney } from "../../../shared/money";
 import { INVOICE_KIND_LABELS, INVOICE_STATUS_LABELS as SHARED_INVOICE_STATUS_LABELS, PAYMENT_METHOD_LABELS } from "../../../shared/billing";
 import { formatCalendarDate } from "../../../shared/format";
@@ -139,8 +139,8 @@ export function BillingTable<T>({ columns, rows, rowKey, onRowPress, rowLabel, r
 }
 
 /** "‹ All invoices" and the like, above a detail page's title. */
-export function BackLink({ href, label, testID }: { href: string; label: string; testID?: string }) {
-  return <TextLink href={href as never} label={`‹ ${label}`} testID={testID} />;
+export function BackLink({ href, label, testID }: TextLinkProps) {
+  return <TextLink href={href} label={`‹ ${label}`} testID={testID} />;
 }
 
 /** A label and an amount on one line (invoice totals). */

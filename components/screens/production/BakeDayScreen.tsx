@@ -83,7 +83,7 @@ export function BakeDayScreen({ area, date: asked, home }: BakeDayScreenProps) {
 
   return (
     <Screen testID="bake-day">
-      {paths.hub ? <TextLink href={paths.hub as never} label="‹ Production" testID="back-to-production" /> : null}
+      {paths.hub ? <TextLink href={paths.hub} label="‹ Production" testID="back-to-production" /> : null}
       <PageHeader
         overline={bakery.data?.name ?? "Production"}
         title="Bake day"
@@ -228,7 +228,7 @@ function PlanBody({ date, plan, units, paths }: PlanBodyProps) {
           icon="sun"
           title={`Nothing to bake for ${formatDay(date)}`}
           message={why}
-          action={<LinkButton href={paths.orders(date) as never} label="Orders for this day" icon="clipboard" variant="secondary" />}
+          action={<LinkButton href={paths.orders(date)} label="Orders for this day" icon="clipboard" variant="secondary" />}
           testID="bake-day-empty"
         />
         <SettingsFooter units={units} paths={paths} isOwner={user.role === "owner"} />
@@ -320,9 +320,9 @@ function PlanBody({ date, plan, units, paths }: PlanBodyProps) {
       </View>
       <SettingsFooter units={units} paths={paths} isOwner={user.role === "owner"} />
       <View style={styles.links}>
-        <TextLink href={paths.orders(date) as never} label="Orders for this day" testID="open-day-orders" />
-        <TextLink href={paths.forecast() as never} label="Purchasing" testID="open-forecast" />
-        <TextLink href={paths.formulas as never} label="Formulas" testID="open-formulas" />
+        <TextLink href={paths.orders(date)} label="Orders for this day" testID="open-day-orders" />
+        <TextLink href={paths.forecast()} label="Purchasing" testID="open-forecast" />
+        <TextLink href={paths.formulas} label="Formulas" testID="open-formulas" />
       </View>
     </>
   );

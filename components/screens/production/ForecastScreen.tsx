@@ -58,7 +58,7 @@ export function ForecastScreen({ area, from: asked }: { area: KitchenArea; from?
 
   return (
     <Screen testID="forecast-screen">
-      {paths.hub ? <TextLink href={paths.hub as never} label="‹ Production" testID="back-to-production" /> : null}
+      {paths.hub ? <TextLink href={paths.hub} label="‹ Production" testID="back-to-production" /> : null}
       <PageHeader title="Purchasing" subtitle="Seven days of orders, with standing orders still to come, in whole purchase packs (rounded up)." testID="forecast-title" />
       {from ? (
         <View style={styles.controls}>

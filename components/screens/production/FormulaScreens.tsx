@@ -43,7 +43,7 @@ function productNames(ids: number[], products: ProductDto[] | undefined): string
 }
 
 function Back({ paths }: { paths: KitchenPaths }) {
-  return paths.hub ? <TextLink href={paths.hub as never} label="‹ Production" testID="back-to-production" /> : null;
+  return paths.hub ? <TextLink href={paths.hub} label="‹ Production" testID="back-to-production" /> : null;
 }
 
 // ---- list ---------------------------------------------------------------------------------------
@@ -55,7 +55,7 @@ export function FormulasScreen({ area }: { area: KitchenArea }) {
   const router = useRouter();
   const formulas = useFormulasQuery();
   const products = useProductsQuery();
-  const open = (f: FormulaDto) => router.push(paths.formula(f.id) as never);
+  const open = (f: FormulaDto) => router.push(paths.formula(f.id));
 
   let body: React.ReactNode;
   if (formulas.isPending) body = <LoadingState label="Loading formulas…" testID="formulas-loading" />;
@@ -66,7 +66,7 @@ export function FormulasScreen({ area }: { area: KitchenArea }) {
         icon="book-open"
         title="No formulas yet"
         message="Write the first dough in baker's percentages; then give products their formula."
-        action={<LinkButton href={paths.newFormula as never} label="New formula" icon="plus" />}
+        action={<LinkButton href={paths.newFormula} label="New formula" icon="plus" />}
         testID="formulas-empty"
       />
     );
@@ -127,8 +127,8 @@ export function FormulasScreen({ area }: { area: KitchenArea }) {
         subtitle="Doughs in baker's percentages. Saving an edit keeps the old version for the plans that used it."
         actions={
           <>
-            <LinkButton href={paths.ingredients as never} label="Ingredients" icon="package" variant="secondary" testID="open-ingredients" />
-            <LinkButton href={paths.newFormula as never} label="New formula" icon="plus" testID="new-formula" />
+            <LinkButton href={paths.ingredients} label="Ingredients" icon="package" variant="secondary" testID="open-ingredients" />
+            <LinkButton href={paths.newFormula} label="New formula" icon="plus" testID="new-formula" />
           </>
         }
         testID="formulas-title"
@@ -148,14 +148,14 @@ export function NewFormulaScreen({ area }: { area: KitchenArea }) {
   const [initial] = useState(emptyFormula);
   return (
     <Screen testID="formula-new">
-      <TextLink href={paths.formulas as never} label="‹ All formulas" testID="back-to-formulas" />
+      <TextLink href={paths.formulas} label="‹ All formulas" testID="back-to-formulas" />
       <PageHeader title="New formula" subtitle="Start with the flour at 100 %; every other line is a share of it." testID="formula-title" />
       {ingredients.isPending ? (
         <LoadingState label="Loading the ingredients…" />
       ) : ingredients.isError ? (
         <ErrorState error={ingredients.error} title="The ingredients didn't load" onRetry={() => ingredients.refetch()} retrying={ingredients.isFetching} />
       ) : ingredients.data.length === 0 ? (
-        <EmptyState icon="package" title="No ingredients yet" message="Add the ingredients first; formulas are written from them." action={<LinkButton href={paths.newIngredient as never} label="New ingredient" icon="plus" />} testID="formula-no-ingredients" />
+        <EmptyState icon="package" title="No ingredients yet" message="Add the ingredients first; formulas are written from them." action={<LinkButton href={paths.newIngredient} label="New ingredient" icon="plus" />} testID="formula-no-ingredients" />
       ) : (
         <FormulaEditor
           initial={initial}
@@ -164,7 +164,7 @@ export function NewFormulaScreen({ area }: { area: KitchenArea }) {
           submitLabel="Add formula"
           askNote={false}
           busy={create.isPending}
-          onSubmit={(input, fail) => create.mutate(input, { onSuccess: (f) => router.replace(`${paths.formula(f.id)}?created=1` as never), onError: fail })}
+          onSubmit={(input, fail) => create.mutate(input, { onSuccess: (f) => router.replace(paths.createdFormula(f.id)), onError: fail })}
         />
       )}
     </Screen>
@@ -197,7 +197,7 @@ export function FormulaScreen({ area, id, version, created }: FormulaScreenProps
     return (
       <Screen testID="formula-detail">
         <EmptyState icon="help-circle" title="There's no such formula" testID="formula-not-found" />
-        <TextLink href={paths.formulas as never} label="All formulas" />
+        <TextLink href={paths.formulas} label="All formulas" />
       </Screen>
     );
   }
@@ -211,7 +211,7 @@ export function FormulaScreen({ area, id, version, created }: FormulaScreenProps
   if (current.isError) {
     return (
       <Screen testID="formula-detail">
-        <TextLink href={paths.formulas as never} label="‹ All formulas" />
+        <TextLink href={paths.formulas} label="‹ All formulas" />
         <ErrorState error={current.error} title="The formula didn't load" onRetry={() => current.refetch()} retrying={current.isFetching} testID="formula-error" />
       </Screen>
     );
@@ -228,7 +228,7 @@ export function FormulaScreen({ area, id, version, created }: FormulaScreenProps
     ) : (
       <>
         <Notice tone="info" message={`You are reading version ${asked}, read-only. The current version is ${f.version}.`} testID="formula-old-version" />
-        <TextLink href={paths.formula(id) as never} label="Back to the current version" testID="formula-current-link" />
+        <TextLink href={paths.formula(id)} label="Back to the current version" testID="formula-current-link" />
         <FormulaReadOnly formula={old.data} />
       </>
     );
@@ -256,7 +256,7 @@ export function FormulaScreen({ area, id, version, created }: FormulaScreenProps
 
   return (
     <Screen testID="formula-detail">
-      <TextLink href={paths.formulas as never} label="‹ All formulas" testID="back-to-formulas" />
+      <TextLink href={paths.formulas} label="‹ All formulas" testID="back-to-formulas" />
       <PageHeader overline={asked ? `Version ${asked} of ${f.version}` : `Formula · version ${f.version}`} title={f.name} testID="formula-title" />
       {saved ? <Notice message={saved} testID="formula-saved" /> : null}
       {f.allergens.length ? <AppText variant="small" color="muted" testID="formula-allergens">{`Allergens: ${f.allergens.map((a) => ALLERGEN_LABEL[a]).join(", ")}`}</AppText> : null}
@@ -351,7 +351,7 @@ function HistoryCard({ id, current, reading, paths }: { id: number; current: num
                   </View>
                   <AppText variant="small" color="muted">{`${formatDateTime(h.createdAt, timeZone)}${h.note ? ` · ${h.note}` : ""}`}</AppText>
                 </View>
-                {isReading ? null : <TextLink href={(isCurrent ? paths.formula(id) : paths.formula(id, h.version)) as never} label={isCurrent ? "Edit" : "Open"} testID={`history-${h.version}-open`} />}
+                {isReading ? null : <TextLink href={isCurrent ? paths.formula(id) : paths.formula(id, h.version)} label={isCurrent ? "Edit" : "Open"} testID={`history-${h.version}-open`} />}
               </View>
             );
           })}

@@ -70,7 +70,7 @@ export function checkIngredient(v: IngredientValues): { ok: true; input: Ingredi
 }
 
 function Back({ paths }: { paths: KitchenPaths }) {
-  return paths.hub ? <TextLink href={paths.hub as never} label="‹ Production" testID="back-to-production" /> : null;
+  return paths.hub ? <TextLink href={paths.hub} label="‹ Production" testID="back-to-production" /> : null;
 }
 
 const packText = (i: IngredientDto, money: (c: number) => string) =>
@@ -84,13 +84,13 @@ export function IngredientsScreen({ area }: { area: KitchenArea }) {
   const router = useRouter();
   const money = useMoney();
   const ingredients = useIngredientsQuery();
-  const open = (i: IngredientDto) => router.push(paths.ingredient(i.id) as never);
+  const open = (i: IngredientDto) => router.push(paths.ingredient(i.id));
 
   let body: React.ReactNode;
   if (ingredients.isPending) body = <LoadingState label="Loading ingredients…" testID="ingredients-loading" />;
   else if (ingredients.isError) body = <ErrorState error={ingredients.error} title="Ingredients didn't load" onRetry={() => ingredients.refetch()} retrying={ingredients.isFetching} testID="ingredients-error" />;
   else if (ingredients.data.length === 0)
-    body = <EmptyState icon="package" title="No ingredients yet" message="Add flour, milk, butter and the rest; formulas are written from them." action={<LinkButton href={paths.newIngredient as never} label="New ingredient" icon="plus" />} testID="ingredients-empty" />;
+    body = <EmptyState icon="package" title="No ingredients yet" message="Add flour, milk, butter and the rest; formulas are written from them." action={<LinkButton href={paths.newIngredient} label="New ingredient" icon="plus" />} testID="ingredients-empty" />;
   else if (wide)
     body = (
       <DataTable
@@ -132,8 +132,8 @@ export function IngredientsScreen({ area }: { area: KitchenArea }) {
         subtitle="Kinds and water content drive hydration; allergens flow to products; packs size the purchasing forecast."
         actions={
           <>
-            <LinkButton href={paths.formulas as never} label="Formulas" icon="book-open" variant="secondary" testID="open-formulas" />
-            <LinkButton href={paths.newIngredient as never} label="New ingredient" icon="plus" testID="new-ingredient" />
+            <LinkButton href={paths.formulas} label="Formulas" icon="book-open" variant="secondary" testID="open-formulas" />
+            <LinkButton href={paths.newIngredient} label="New ingredient" icon="plus" testID="new-ingredient" />
           </>
         }
         testID="ingredients-title"
@@ -151,9 +151,9 @@ export function NewIngredientScreen({ area }: { area: KitchenArea }) {
   const create = useCreateIngredientMutation();
   return (
     <Screen narrow testID="ingredient-new">
-      <TextLink href={paths.ingredients as never} label="‹ All ingredients" testID="back-to-ingredients" />
+      <TextLink href={paths.ingredients} label="‹ All ingredients" testID="back-to-ingredients" />
       <PageHeader title="New ingredient" testID="ingredient-title" />
-      <IngredientForm initial={EMPTY_INGREDIENT} submitLabel="Add ingredient" busy={create.isPending} onSubmit={(input, fail) => create.mutate(input, { onSuccess: () => router.replace(paths.ingredients as never), onError: fail })} />
+      <IngredientForm initial={EMPTY_INGREDIENT} submitLabel="Add ingredient" busy={create.isPending} onSubmit={(input, fail) => create.mutate(input, { onSuccess: () => router.replace(paths.ingredients), onError: fail })} />
     </Screen>
   );
 }
@@ -166,7 +166,7 @@ export function IngredientScreen({ area, id }: { area: KitchenArea; id: number }
   const found = ingredients.data?.find((i) => i.id === id);
   return (
     <Screen narrow testID="ingredient-detail">
-      <TextLink href={paths.ingredients as never} label="‹ All ingredients" testID="back-to-ingredients" />
+      <TextLink href={paths.ingredients} label="‹ All ingredients" testID="back-to-ingredients" />
       {ingredients.isPending ? (
         <LoadingState label="Loading the ingredient…" />
       ) : ingredients.isError ? (

@@ -1,6 +1,7 @@
 import React, { useState } from "react";
 import { StyleSheet, View } from "react-native";
 import Feather from "@expo/vector-icons/Feather";
+import type { Href } from "expo-router";
 import { Screen } from "../../ui/Screen";
 import { PageHeader } from "../../ui/PageHeader";
 import { Card } from "../../ui/Card";
@@ -325,7 +326,7 @@ function fieldKeys(v: SettingsFormValues): string[] {
   return keys;
 }
 
-const HUB_ITEMS: { key: string; label: string; hint: string; icon: React.ComponentProps<typeof Feather>["name"]; href: () => string }[] = [
+const HUB_ITEMS: { key: string; label: string; hint: string; icon: React.ComponentProps<typeof Feather>["name"]; href: () => Href }[] = [
   { key: "day", label: "Bake day", hint: "Pans, weigh-out cards, the timeline and the production sheet.", icon: "sun", href: () => kitchenPaths("office").day() },
   { key: "formulas", label: "Formulas", hint: "Doughs in baker's percentages, with their history.", icon: "book-open", href: () => kitchenPaths("office").formulas },
   { key: "ingredients", label: "Ingredients", hint: "Kinds, water content, allergens and purchase packs.", icon: "package", href: () => kitchenPaths("office").ingredients },
