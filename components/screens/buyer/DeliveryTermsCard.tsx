@@ -4,7 +4,7 @@ import { DetailList } from "../../ui/DetailList";
 import { ErrorState, LoadingState } from "../../ui/States";
 import { useCalendarSettingsQuery } from "../../api/calendar";
 import { useAccountDeliveryQuery } from "../../api/delivery";
-import { accountWeekdays, listWeekdays } from "./StandingOrderScreen";
+import { accountWeekdays, listWeekdays } from "../../ordering/standing";
 import { useMoney } from "../ordering/parts";
 import { formatTimeOfDay } from "../../../shared/format";
 import { currentLocale } from "../../format";

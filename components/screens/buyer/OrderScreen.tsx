@@ -54,7 +54,7 @@ export function OrderScreen({ date }: { date: string }) {
         <BackHome />
         {loaded.isError ? <PageHeader overline="Delivery" title={formatDayLong(date)} testID="order-title" /> : null}
         <QueryStates query={loaded} loadingLabel="Loading the order…" loadingTestID="order-loading" errorTitle="This order didn't load" errorTestID="order-error">
-          {() => null}
+          {() => null /* the loaded screen is drawn below, with its own header */}
         </QueryStates>
       </Screen>
     );
