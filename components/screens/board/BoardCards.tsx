@@ -3,7 +3,8 @@ import { StyleSheet, View } from "react-native";
 import { AppText } from "../../ui/Text";
 import type { BoardDto } from "../../api/board";
 import { saleUnitFor } from "../../../shared/quantity";
-import { OrderStatusBadge, useMoney } from "../ordering/parts";
+import { OrderStatusBadge } from "../ordering/OrderStatusBadge";
+import { useMoney } from "../../ordering/useMoney";
 import { colors, radii, space } from "../../theme";
 
 /** The board on a phone: a card per order with its lines. */

@@ -3,7 +3,8 @@ import { ScrollView, StyleSheet, View } from "react-native";
 import { AppText } from "../../ui/Text";
 import type { BoardDto } from "../../api/board";
 import { ordersLabel } from "../../ordering/quantities";
-import { OrderStatusBadge, useMoney } from "../ordering/parts";
+import { OrderStatusBadge } from "../ordering/OrderStatusBadge";
+import { useMoney } from "../../ordering/useMoney";
 import { colors, layout, radii, space } from "../../theme";
 
 // A column per product and a total row: it scrolls sideways, so the columns have fixed widths.

@@ -5,7 +5,7 @@ import { AppText, Heading } from "../../ui/Text";
 import type { BoardDto } from "../../api/board";
 import { ordersLabel, productsLabel } from "../../ordering/quantities";
 import { useIsWide } from "../../shell/useIsWide";
-import { useMoney } from "../ordering/parts";
+import { useMoney } from "../../ordering/useMoney";
 import { quantityText, saleUnitFor } from "../../../shared/quantity";
 import { colors, radii, space } from "../../theme";
 import { BoardCards } from "./BoardCards";

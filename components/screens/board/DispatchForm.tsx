@@ -23,7 +23,7 @@ import {
   type Short,
   type Shorts,
 } from "../../ordering/dispatch";
-import { OrderStatusBadge } from "../ordering/parts";
+import { OrderStatusBadge } from "../ordering/OrderStatusBadge";
 import { space } from "../../theme";
 import { DispatchLine } from "./DispatchLine";
 

@@ -5,7 +5,7 @@ import { QueryStates } from "../../ui/QueryStates";
 import { useCalendarSettingsQuery } from "../../api/calendar";
 import { useAccountDeliveryQuery } from "../../api/delivery";
 import { accountWeekdays, listWeekdays } from "../../ordering/standing";
-import { useMoney } from "../ordering/parts";
+import { useMoney } from "../../ordering/useMoney";
 import { combinedQuery } from "../ordering/combinedQuery";
 import { formatTimeOfDay } from "../../../shared/format";
 import { currentLocale } from "../../format";

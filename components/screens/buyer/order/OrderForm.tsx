@@ -3,7 +3,7 @@ import { StyleSheet, View } from "react-native";
 import { Screen } from "../../../ui/Screen";
 import { useZodForm } from "../../../forms/useZodForm";
 import { useIsWide } from "../../../shell/useIsWide";
-import { useMoney } from "../../ordering/parts";
+import { useMoney } from "../../../ordering/useMoney";
 import { msUntil } from "../../../ordering/countdown";
 import type { DraftOwner } from "../../../ordering/deviceDraft";
 import { blockedReason, canSend, draftLines, goneLines, isDirty, orderValues, sentLines, summarizeDraft, type OrderValues } from "../../../ordering/draft";

@@ -2,7 +2,8 @@ import React from "react";
 import { StyleSheet, View } from "react-native";
 import { AppText } from "../../../ui/Text";
 import { Stepper } from "../../../ui/Stepper";
-import { AllergenChips, ProductPhoto } from "../../ordering/parts";
+import { AllergenChips } from "../../ordering/Allergens";
+import { ProductPhoto } from "../../ordering/ProductPhoto";
 import type { ProductDto } from "../../../../shared/schemas/catalog";
 import { colors, radii, shadow, space } from "../../../theme";
 

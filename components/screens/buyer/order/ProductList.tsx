@@ -3,7 +3,7 @@ import { StyleSheet, View } from "react-native";
 import { Notice } from "../../../ui/FormError";
 import { EmptyState } from "../../../ui/States";
 import { Heading } from "../../../ui/Text";
-import { AllergenCaution } from "../../ordering/parts";
+import { AllergenCaution } from "../../ordering/Allergens";
 import { formatCutoff } from "../../../ordering/dates";
 import { isChosen, type DraftLine, type Quantities } from "../../../ordering/draft";
 import { quantityText } from "../../../../shared/quantity";

@@ -11,7 +11,7 @@ import { useSaveStandingOrderMutation } from "../../../api/standing";
 import { ApiError } from "../../../api/client";
 import { useZodForm } from "../../../forms/useZodForm";
 import { useIsWide } from "../../../shell/useIsWide";
-import { useMoney } from "../../ordering/parts";
+import { useMoney } from "../../../ordering/useMoney";
 import {
   STANDING_FIELDS,
   cellErrorsFrom,

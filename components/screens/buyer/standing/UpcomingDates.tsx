@@ -5,7 +5,7 @@ import { Card } from "../../../ui/Card";
 import { Badge } from "../../../ui/Badge";
 import { LinkPressable } from "../../../ui/LinkPressable";
 import { AppText } from "../../../ui/Text";
-import { OrderStatusBadge } from "../../ordering/parts";
+import { OrderStatusBadge } from "../../ordering/OrderStatusBadge";
 import { formatDay } from "../../../ordering/dates";
 import type { StandingOrderDto } from "../../../../shared/schemas/orders";
 import { colors, layout, radii, space } from "../../../theme";
