@@ -2,11 +2,9 @@ import React from "react";
 import { useRouter } from "expo-router";
 import { Screen } from "../../ui/Screen";
 import { PageHeader } from "../../ui/PageHeader";
-import { QueryStates } from "../../ui/QueryStates";
 import { useSignedInUser } from "../../auth/useAuth";
-import { useBakeryQuery } from "../../api/bakery";
-import { useBoardQuery } from "../../api/board";
-import { cleanDate, formatDay, formatDayLong, relativeDay } from "../../ordering/dates";
+import { formatDayLong, relativeDay } from "../../ordering/dates";
+import { BoardStates, useBoardDate } from "./BoardStates";
 import { BoardView } from "./BoardView";
 import { DateSwitcher } from "./DateSwitcher";
 import { OfficeActions } from "./OfficeActions";
@@ -22,10 +20,8 @@ export interface OrdersBoardProps {
 export function OrdersBoardScreen({ mode, date: asked }: OrdersBoardProps) {
   const user = useSignedInUser();
   const router = useRouter();
-  const bakery = useBakeryQuery();
-  const today = bakery.data?.today;
-  const date = (asked && cleanDate(asked)) || today || null;
-  const board = useBoardQuery(date);
+  const loaded = useBoardDate(asked);
+  const { today, date } = loaded;
   const isOwner = user.role === "owner";
   const office = mode === "office";
 
@@ -41,22 +37,9 @@ export function OrdersBoardScreen({ mode, date: asked }: OrdersBoardProps) {
       />
       {date ? <DateSwitcher date={date} today={today} onChange={go} /> : null}
       {office && date ? <OfficeActions date={date} isOwner={isOwner} /> : null}
-      {date ? (
-        <QueryStates
-          query={board}
-          loadingLabel="Loading the orders…"
-          errorTitle="The orders didn't load"
-          testID="board"
-          isEmpty={(b) => b.rows.length === 0}
-          empty={{ icon: "clipboard", title: `No orders for ${formatDay(date)}`, message: "Orders placed for this date show here as they come in." }}
-        >
-          {(b) => <BoardView board={b} showMoney={office} />}
-        </QueryStates>
-      ) : (
-        <QueryStates query={bakery} loadingLabel="Loading the bakery's day…" errorTestID="board-error">
-          {() => null /* with the bakery's day known, the date is its today */}
-        </QueryStates>
-      )}
+      <BoardStates loaded={loaded} testID="board" empty={{ icon: "clipboard", message: "Orders placed for this date show here as they come in." }}>
+        {(b) => <BoardView board={b} showMoney={office} />}
+      </BoardStates>
     </Screen>
   );
 }
