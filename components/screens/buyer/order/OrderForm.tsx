@@ -44,7 +44,8 @@ export function OrderForm({ date, day, products, existing, minimumCents, setting
   const money = useMoney();
   const baseDeadline = existing ? existing.cutoffAt : day.cutoffAt;
   const closedByClock = msUntil(baseDeadline, now) <= 0;
-  // What "changed" is measured against: the saved order as the form opened.
+  // What "changed" is measured against: the saved order as the form opened (not as saved since; measuring
+  // against the order as it is now is `orderValues(existing)` in its place).
   const [saved] = useState(() => orderValues(existing));
   // An order that could not be saved earlier on this device comes back as it was typed.
   const deviceDraft = useDeviceDraft(draftOwner, date, existing, closedByClock);
