@@ -32,7 +32,7 @@ export function OfficeActions({ date, isOwner }: { date: string; isOwner: boolea
         {isOwner ? (
           <Button label="Make standing orders now" icon="repeat" variant="secondary" busy={materialise.isPending} onPress={() => materialise.mutate()} testID="materialise" />
         ) : null}
-        {isOwner ? <LinkButton href={`/office/dispatch?date=${date}` as never} label="Record deliveries" icon="truck" variant="secondary" testID="board-confirm-dispatch" /> : null}
+        {isOwner ? <LinkButton href={`/office/dispatch?date=${date}`} label="Record deliveries" icon="truck" variant="secondary" testID="board-confirm-dispatch" /> : null}
       </View>
       <FormError message={csvError} testID="board-csv-error" />
       <FormError message={materialise.isError ? messageOf(materialise.error) : null} testID="materialise-error" />
