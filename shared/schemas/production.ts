@@ -102,10 +102,10 @@ export interface PlanDto {
     ingredients: { ingredientId: number; name: string; kind: IngredientKind; percent: number; grams: number; pasteGrams: number; finalMixGrams: number }[];
     mixes: {
       index: number; doughGrams: number; liquidTempC: number | null; liquidTempAdvice: string | null;
-      /** Ice, chilling or warming for the liquid (shared/production.ts planLiquid); absent in plans frozen before it. */
+      /** Ice, chilling or warming for the liquid (shared/production/liquid.ts planLiquid); absent in plans frozen before it. */
       liquid?: LiquidPlan | null;
       ingredients: { ingredientId: number; grams: number; pasteGrams: number; finalMixGrams: number }[];
-      /** When and on which mixer this card is mixed (shared/schedule.ts); absent in plans frozen before the schedule. */
+      /** When and on which mixer this card is mixed (shared/schedule/); absent in plans frozen before the schedule. */
       scheduled?: { startsAt: string; endsAt: string; mixerName: string; pasteStartsAt: string | null; dayBefore: boolean } | null;
     }[];
   }[];
@@ -113,7 +113,7 @@ export interface PlanDto {
   ingredients: { ingredientId: number; name: string; grams: number; componentGrams?: number; /** The ingredient's kind (for the cautions: raw egg in a wash). */ kind?: IngredientKind }[];
   /** One weigh-out card per component per product (toppings, washes, fillings, garnishes). */
   components?: ComponentCard[];
-  /** Every step of the day on its mixer, oven or the crew (shared/schedule.ts), in time order. */
+  /** Every step of the day on its mixer, oven or the crew (shared/schedule/), in time order. */
   timeline: ScheduleEntry[];
   /** The schedule around the timeline: oven loads, conflicts with the day, the earlier start that would fit. */
   schedule?: Omit<DaySchedule, "entries" | "warnings">;
