@@ -79,6 +79,12 @@ export const bakeDayInputSchema = z.object({
 });
 
 export const planQuerySchema = z.object({ date: dateSchema });
+/** GET /api/production/plan.pdf?date=&units= (metric unless "us"). */
+export const planPdfQuerySchema = planQuerySchema.extend({ units: z.enum(["metric", "us"]).default("metric") });
+/** GET /api/production/forecast?from=: the first of the 7 days. */
+export const forecastQuerySchema = z.object({ from: dateSchema });
+/** GET /api/formulas/:id?version=: an earlier version to read (the current one when left out). */
+export const formulaVersionQuerySchema = z.object({ version: z.coerce.number().int().positive().optional() });
 
 export interface PlanDto {
   date: string;
