@@ -13,6 +13,7 @@ import type { materialiseAll } from "../../server/orders/standing.service";
 import type { getFeed } from "../../server/orders/feed.service";
 import type { accountCounts } from "../../server/accounts/accounts.service";
 import type { userCounts } from "../../server/users/users.service";
+import type { invitationPreview } from "../../server/auth/auth.service";
 import type { boardApi, BoardDto } from "../../components/api/board";
 import type { ForecastDto, PlanView, productionApi } from "../../components/api/production";
 import type { FormulaVersionDto, formulasApi } from "../../components/api/formulas";
@@ -20,6 +21,7 @@ import type { OutboxMailDto, outboxApi } from "../../components/api/outbox";
 import type { MaterialiseResult, standingApi } from "../../components/api/standing";
 import type { feedApi } from "../../components/api/feed";
 import type { officeApi } from "../../components/api/office";
+import type { authApi } from "../../components/api/auth";
 import { accountIdQuerySchema, idParamSchema } from "../../shared/schemas/common";
 import { dateQuerySchema } from "../../shared/schemas/calendar";
 import { accountListQuerySchema } from "../../shared/schemas/accounts";
@@ -51,6 +53,7 @@ export type Contract = [
   Expect<Equal<Served<typeof materialiseAll>, Served<typeof standingApi.materialise>>>,
   Expect<Equal<Served<typeof getFeed>["url"], Served<typeof feedApi.get>>>,
   Expect<Equal<{ users: Served<typeof userCounts>; accounts: Served<typeof accountCounts> }, Served<typeof officeApi.summary>>>,
+  Expect<Equal<ReturnType<typeof invitationPreview>, Served<typeof authApi.invitation>>>,
 ];
 
 // ---- and the checks bite --------------------------------------------------------------------------
