@@ -7,37 +7,24 @@
  *
  * Only types are imported here, so this module has no runtime dependencies.
  */
-import type { AccountStatus } from "../../shared/schemas/accounts";
-import type { OrderStatus } from "../../shared/schemas/orders";
+import type { z } from "zod";
+import type { accountListQuerySchema } from "../../shared/schemas/accounts";
+import type { calendarQuerySchema } from "../../shared/schemas/calendar";
+import type { orderListQuerySchema } from "../../shared/schemas/orders";
 import type { MailStatus } from "../../shared/schemas/outbox";
+import type { userListQuerySchema } from "../../shared/schemas/users";
 import type { InvoiceListParams } from "./invoices";
 
-export interface AccountListParams {
-  q?: string;
-  status?: AccountStatus;
-}
-
-export interface OrderListParams {
-  from?: string;
-  to?: string;
-  accountId?: number;
-  status?: OrderStatus;
-}
+/** The list filters are the query schemas' own inputs (shared/schemas), so the client sends what the route parses. */
+export type AccountListParams = z.input<typeof accountListQuerySchema>;
+export type OrderListParams = z.input<typeof orderListQuerySchema>;
+export type UserListParams = z.input<typeof userListQuerySchema>;
+/** from..to (at most 120 days); office users name the account, a buyer always gets their own. */
+export type CalendarParams = z.input<typeof calendarQuerySchema>;
 
 export interface ProductListParams {
   /** Include archived products (office only). */
   all?: boolean;
-}
-
-export interface UserListParams {
-  q?: string;
-}
-
-export interface CalendarParams {
-  from: string;
-  to: string;
-  /** Office users name the account; a buyer always gets their own. */
-  accountId?: number;
 }
 
 // ---- people and accounts -------------------------------------------------------------------------
