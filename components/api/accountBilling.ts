@@ -2,6 +2,7 @@ import { useState } from "react";
 import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
 import { api, apiBlob, uploadFile, type UploadFile } from "./client";
 import { saveBlob } from "./files";
+import { accountBillingKeys } from "./keys";
 import type { PaymentTerms } from "../../shared/billing";
 
 /** A resale / tax-exemption certificate on file for an account. */
@@ -14,10 +15,7 @@ export interface TaxCertificateDto {
   createdAt: string;
 }
 
-export const accountBillingKeys = {
-  all: ["accountBilling"] as const,
-  certificates: (accountId: number) => [...accountBillingKeys.all, "certificates", accountId] as const,
-};
+export { accountBillingKeys } from "./keys";
 
 export const accountBillingApi = {
   setTerms: (accountId: number, paymentTerms: PaymentTerms) => api<{ paymentTerms: PaymentTerms }>(`/api/accounts/${accountId}/terms`, { method: "PUT", body: { paymentTerms } }).then((r) => r.paymentTerms),

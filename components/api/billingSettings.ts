@@ -1,5 +1,6 @@
 import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
 import { api } from "./client";
+import { billingSettingsKeys } from "./keys";
 
 /** The bakery's billing settings; the tax rate is in basis points (875 = 8.75 %). */
 export interface BillingSettingsDto {
@@ -9,10 +10,7 @@ export interface BillingSettingsDto {
   paymentInstructions: string;
 }
 
-export const billingSettingsKeys = {
-  all: ["billingSettings"] as const,
-  detail: () => [...billingSettingsKeys.all, "detail"] as const,
-};
+export { billingSettingsKeys } from "./keys";
 
 export const billingSettingsApi = {
   get: () => api<{ settings: BillingSettingsDto }>("/api/settings/billing").then((r) => r.settings),

@@ -1,6 +1,6 @@
 import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
 import { api } from "./client";
-import { calendarKeys } from "./calendar";
+import { calendarKeys, deliveryKeys } from "./keys";
 import type { Weekday } from "../../shared/calendar";
 
 export interface AccountDeliveryDto {
@@ -10,10 +10,7 @@ export interface AccountDeliveryDto {
   priceListId: number | null;
 }
 
-export const deliveryKeys = {
-  all: ["delivery"] as const,
-  detail: (accountId: number) => [...deliveryKeys.all, accountId] as const,
-};
+export { deliveryKeys } from "./keys";
 
 export const deliveryApi = {
   get: (accountId: number) => api<{ delivery: AccountDeliveryDto }>(`/api/accounts/${accountId}/delivery`).then((r) => r.delivery),

@@ -1,8 +1,6 @@
 import { useMutation, useQueryClient } from "@tanstack/react-query";
 import { api } from "./client";
-import { boardKeys } from "./board";
-import { calendarKeys } from "./calendar";
-import { invoiceKeys } from "./invoices";
+import { boardKeys, calendarKeys, invoiceKeys, orderKeys, reportKeys } from "./keys";
 
 /** A line that went out short: what was delivered of it, and why. */
 export interface DispatchAdjustment {
@@ -31,10 +29,10 @@ export function useConfirmDispatchMutation(date: string) {
     mutationFn: (adjustments: DispatchAdjustment[]) => dispatchApi.confirm(date, adjustments),
     onSuccess: () => {
       void qc.invalidateQueries({ queryKey: boardKeys.all });
-      void qc.invalidateQueries({ queryKey: ["orders"] });
+      void qc.invalidateQueries({ queryKey: orderKeys.all });
       void qc.invalidateQueries({ queryKey: calendarKeys.all });
       void qc.invalidateQueries({ queryKey: invoiceKeys.all });
-      void qc.invalidateQueries({ queryKey: ["reports"] });
+      void qc.invalidateQueries({ queryKey: reportKeys.all });
     },
   });
 }

@@ -2,10 +2,7 @@ import { Linking, Platform } from "react-native";
 import { keepPreviousData, useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
 import { api, apiBlob } from "./client";
 import { saveBlob } from "./files";
-import { accountKeys } from "./accounts";
-import { officeKeys } from "./office";
-import { reportKeys } from "./reports";
-import { payoutKeys } from "./payouts";
+import { accountKeys, invoiceKeys, officeKeys, payoutKeys, reportKeys } from "./keys";
 
 export const INVOICE_STATUSES = ["open", "paid", "void", "partially_refunded", "refunded"] as const;
 export type InvoiceStatus = (typeof INVOICE_STATUSES)[number];
@@ -173,14 +170,7 @@ export interface CreditNoteResult {
   disposition: CreditNoteDto["disposition"];
 }
 
-export const invoiceKeys = {
-  all: ["invoices"] as const,
-  lists: () => [...invoiceKeys.all, "list"] as const,
-  list: (p: InvoiceListParams = {}) =>
-    [...invoiceKeys.lists(), { status: p.status ?? "", accountId: p.accountId ?? 0, from: p.from ?? "", to: p.to ?? "", overdue: !!p.overdue, q: p.q ?? "", sort: p.sort ?? "newest" }] as const,
-  details: () => [...invoiceKeys.all, "detail"] as const,
-  detail: (id: number) => [...invoiceKeys.details(), id] as const,
-};
+export { invoiceKeys } from "./keys";
 
 export const invoicesApi = {
   list: (p: InvoiceListParams = {}) =>

@@ -1,5 +1,6 @@
 import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
 import { api } from "./client";
+import { payoutKeys, reportKeys } from "./keys";
 
 /** A payout from the card processor to the bakery's bank; `currency` is lower case ("usd") as the processor writes it. */
 export interface PayoutDto {
@@ -44,11 +45,7 @@ export interface PayoutDetailDto {
   reconciled: { at: string; byId: number | null; note: string } | null;
 }
 
-export const payoutKeys = {
-  all: ["payouts"] as const,
-  list: () => [...payoutKeys.all, "list"] as const,
-  detail: (id: string) => [...payoutKeys.all, "detail", id] as const,
-};
+export { payoutKeys } from "./keys";
 
 export const payoutsApi = {
   list: () => api<{ payouts: PayoutDto[] }>("/api/payouts").then((r) => r.payouts),
@@ -71,7 +68,7 @@ export function useReconcilePayoutMutation(id: string) {
     onSuccess: (detail) => {
       qc.setQueryData(payoutKeys.detail(id), detail);
       void qc.invalidateQueries({ queryKey: payoutKeys.list() });
-      void qc.invalidateQueries({ queryKey: ["reports"] });
+      void qc.invalidateQueries({ queryKey: reportKeys.all });
     },
   });
 }

@@ -1,6 +1,7 @@
 import { useQuery } from "@tanstack/react-query";
 import { api, apiBlob } from "./client";
 import { saveBlob } from "./files";
+import { reportKeys } from "./keys";
 import type { AgingBucket } from "../../shared/billing";
 
 export type AgingAmounts = Record<AgingBucket, number> & { total: number };
@@ -23,10 +24,7 @@ export interface AgingDto {
 export const EXPORT_FILES = ["invoices.csv", "payments.csv", "payouts.csv"] as const;
 export type ExportFile = (typeof EXPORT_FILES)[number];
 
-export const reportKeys = {
-  all: ["reports"] as const,
-  aging: () => [...reportKeys.all, "aging"] as const,
-};
+export { reportKeys } from "./keys";
 
 export const reportsApi = {
   aging: () => api<{ aging: AgingDto }>("/api/reports/aging").then((r) => r.aging),

@@ -40,7 +40,7 @@ export function authRoutes(ctx: AppContext): Router {
   /** Lets the set-password screen say up front whether a link still works, and for whom. */
   r.get("/invitations/:token", async (req, res) => {
     const row = await findUsableToken(ctx, "invitation", String(req.params.token));
-    res.json({ email: row.email, role: row.role, name: row.name });
+    res.json(auth.invitationPreview(row));
   });
 
   r.post("/invitations/accept", async (req, res) => {

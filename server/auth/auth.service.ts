@@ -14,6 +14,7 @@ import { getBakery } from "../bakery/bakery.service";
 import { passwordResetMail } from "../mail/templates";
 import { enqueueMail } from "../mail/outbox.service";
 import type { SignInResponse } from "../../shared/schemas/auth";
+import type { InvitationPreviewDto } from "../../shared/contracts/auth";
 
 export { hashPassword, verifyPassword } from "./password-hash";
 
@@ -180,6 +181,11 @@ export async function findUsableToken(ctx: AppContext, kind: AuthToken["kind"], 
     throw new HttpError(400, "token_expired", `This ${what} has expired. Ask for a new one.`, { token: "Expired." });
   }
   return row;
+}
+
+/** Who a usable invitation is for (GET /api/auth/invitations/:token). An invitation row always names its role. */
+export function invitationPreview(row: AuthToken): InvitationPreviewDto {
+  return { email: row.email, role: row.role!, name: row.name };
 }
 
 /** Mark a token used, atomically: a second concurrent use finds it already taken. */

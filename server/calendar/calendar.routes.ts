@@ -1,10 +1,9 @@
 import { Router } from "express";
-import { z } from "zod";
 import type { AppContext } from "../http/context";
 import { notFound, parse } from "../http/errors";
 import { allow, currentUser } from "../http/auth";
 import { ROLES } from "../../shared/roles";
-import { idSchema } from "../../shared/schemas/common";
+import { idParamSchema } from "../../shared/schemas/common";
 import { accountDeliverySchema, calendarQuerySchema, calendarSettingsSchema } from "../../shared/schemas/calendar";
 import { CustomerAccount } from "../accounts/account.entity";
 import { PriceList } from "../catalog/price-list.entity";
@@ -36,12 +35,12 @@ export function settingsRoutes(ctx: AppContext): Router {
 export function accountDeliveryRoutes(ctx: AppContext): Router {
   const r = Router();
   r.get("/:id/delivery", allow("owner", "bookkeeper", "buyer"), async (req, res) => {
-    const { id } = parse(z.object({ id: idSchema }), req.params);
+    const { id } = parse(idParamSchema, req.params);
     const account = await calendar.resolveAccount(ctx, currentUser(req), currentUser(req).role === "buyer" ? id : id);
     res.json({ delivery: { routeWeekdays: calendar.parseWeekdays(account.routeWeekdays), minimumOrderCents: account.minimumOrderCents, priceListId: account.priceListId } });
   });
   r.put("/:id/delivery", allow("owner"), async (req, res) => {
-    const { id } = parse(z.object({ id: idSchema }), req.params);
+    const { id } = parse(idParamSchema, req.params);
     const input = parse(accountDeliverySchema, req.body);
     const repo = ctx.dataSource.getRepository(CustomerAccount);
     if (!(await repo.existsBy({ id }))) throw notFound("That account");
