@@ -1,5 +1,5 @@
 import React from "react";
-import { FormulasScreen } from "../../../../components/screens/production/FormulaScreens";
+import { FormulasScreen } from "../../../../components/screens/production/formulas/FormulasScreen";
 
 export default function BakerFormulasRoute() {
   return <FormulasScreen area="baker" />;

@@ -1,6 +1,6 @@
 import React from "react";
 import { RequireRole } from "../../../../components/auth/RoleGate";
-import { ProductionHubScreen } from "../../../../components/screens/production/ProductionOfficeScreens";
+import { ProductionHubScreen } from "../../../../components/screens/production/ProductionHubScreen";
 
 export default function ProductionHubRoute() {
   return (

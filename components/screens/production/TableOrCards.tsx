@@ -1,0 +1,39 @@
+import React from "react";
+import { StyleSheet, View } from "react-native";
+import { DataTable, type Column } from "../../ui/DataTable";
+import { ListCard, ListCards } from "../../ui/ListCard";
+import { useIsWide } from "../../shell/useIsWide";
+
+export interface TableOrCardsProps<T> {
+  rows: T[];
+  rowKey: (row: T) => number;
+  onOpen: (row: T) => void;
+  /** What a screen reader says for the row (the table's and the card's). */
+  rowLabel: (row: T) => string;
+  rowTestID: (row: T) => string;
+  /** The table from 1024 px… */
+  columns: Column<T>[];
+  tableTestID: string;
+  /** …and a card per row below it. */
+  card: (row: T) => React.ReactNode;
+  cardsTestID: string;
+}
+
+/** A list of things that open: a DataTable on wide screens, ListCards on a phone, the same rows and labels. */
+export function TableOrCards<T>({ rows, rowKey, onOpen, rowLabel, rowTestID, columns, tableTestID, card, cardsTestID }: TableOrCardsProps<T>) {
+  const wide = useIsWide();
+  if (wide) return <DataTable testID={tableTestID} rows={rows} rowKey={rowKey} onRowPress={onOpen} rowLabel={rowLabel} rowTestID={rowTestID} columns={columns} />;
+  return (
+    <ListCards testID={cardsTestID}>
+      {rows.map((row) => (
+        <ListCard key={rowKey(row)} onPress={() => onOpen(row)} accessibilityLabel={rowLabel(row)} testID={rowTestID(row)}>
+          <View style={styles.body}>{card(row)}</View>
+        </ListCard>
+      ))}
+    </ListCards>
+  );
+}
+
+const styles = StyleSheet.create({
+  body: { flex: 1, minWidth: 0 },
+});
