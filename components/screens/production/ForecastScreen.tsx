@@ -14,7 +14,8 @@ import { useIsWide } from "../../shell/useIsWide";
 import { addDays, cleanDate, formatDay } from "../../ordering/dates";
 import { kitchenPaths, type KitchenArea } from "../../production/paths";
 import { useUnits, type Units } from "../../production/units";
-import { RoundButton, UnitsSwitch } from "./BakeDayParts";
+import { RoundButton } from "./bakeday/RoundButton";
+import { UnitsSwitch } from "./bakeday/UnitsSwitch";
 import { colors, fonts, layout, radii, space } from "../../theme";
 
 type Item = ForecastDto["items"][number];
