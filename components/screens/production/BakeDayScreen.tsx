@@ -4,6 +4,7 @@ import { useRouter } from "expo-router";
 import { Screen } from "../../ui/Screen";
 import { PageHeader } from "../../ui/PageHeader";
 import { EmptyState, ErrorState, LoadingState } from "../../ui/States";
+import { QueryStates } from "../../ui/QueryStates";
 import { LinkButton } from "../../ui/LinkButton";
 import { TextLink } from "../../ui/TextLink";
 import { FormError } from "../../ui/FormError";
@@ -26,6 +27,7 @@ import { progressCount, stepBakeDay, upcomingBakeDays } from "../../production/p
 import { kitchenPaths, type KitchenArea, type KitchenPaths } from "../../production/paths";
 import { useUnits, type Units } from "../../production/units";
 import { useIsWide } from "../../shell/useIsWide";
+import { BackToProduction } from "./BackToProduction";
 import { CautionsCard } from "./Cautions";
 import { InternalTempsCard } from "./InternalTemps";
 import { liquidWarnings } from "../../../shared/cautions";
@@ -79,17 +81,17 @@ export function BakeDayScreen({ area, date: asked, home }: BakeDayScreenProps) {
     ) : (
       <LoadingState label="Finding the next bake day…" testID="bake-day-loading" />
     );
-  } else if (plan.isPending) {
-    body = <LoadingState label="Working out the plan…" testID="bake-day-loading" />;
-  } else if (plan.isError) {
-    body = <ErrorState error={plan.error} title="The plan didn't load" onRetry={() => plan.refetch()} retrying={plan.isFetching} testID="bake-day-error" />;
   } else {
-    body = <PlanBody key={date} date={date} plan={plan.data} units={units} paths={paths} />;
+    body = (
+      <QueryStates query={plan} loadingLabel="Working out the plan…" errorTitle="The plan didn't load" testID="bake-day">
+        {(data) => <PlanBody key={date} date={date} plan={data} units={units} paths={paths} />}
+      </QueryStates>
+    );
   }
 
   return (
     <Screen testID="bake-day">
-      {paths.hub ? <TextLink href={paths.hub as never} label="‹ Production" testID="back-to-production" /> : null}
+      <BackToProduction paths={paths} />
       <PageHeader
         overline={bakery.data?.name ?? "Production"}
         title="Bake day"

@@ -4,8 +4,8 @@ import { useRouter } from "expo-router";
 import { Screen } from "../../ui/Screen";
 import { PageHeader } from "../../ui/PageHeader";
 import { Card } from "../../ui/Card";
-import { TextLink } from "../../ui/TextLink";
 import { EmptyState, ErrorState, LoadingState } from "../../ui/States";
+import { QueryStates } from "../../ui/QueryStates";
 import { AppText, Heading } from "../../ui/Text";
 import { useBakeryQuery } from "../../api/bakery";
 import { useForecastQuery, useNextBakeDayQuery, type ForecastDto } from "../../api/production";
@@ -16,6 +16,7 @@ import { kitchenPaths, type KitchenArea } from "../../production/paths";
 import { useUnits, type Units } from "../../production/units";
 import { RoundButton } from "./bakeday/RoundButton";
 import { UnitsSwitch } from "./bakeday/UnitsSwitch";
+import { BackToProduction } from "./BackToProduction";
 import { colors, fonts, layout, radii, space } from "../../theme";
 
 type Item = ForecastDto["items"][number];
@@ -42,24 +43,26 @@ export function ForecastScreen({ area, from: asked }: { area: KitchenArea; from?
   let body: React.ReactNode;
   if (!from) {
     body = next.isError && bakery.isError ? <ErrorState error={bakery.error} onRetry={() => { void bakery.refetch(); void next.refetch(); }} retrying={bakery.isFetching} testID="forecast-error" /> : <LoadingState label="Finding the next bake day…" />;
-  } else if (forecast.isPending) {
-    body = <LoadingState label="Adding up the week's doughs…" testID="forecast-loading" />;
-  } else if (forecast.isError) {
-    body = <ErrorState error={forecast.error} title="The forecast didn't load" onRetry={() => forecast.refetch()} retrying={forecast.isFetching} testID="forecast-error" />;
-  } else if (forecast.data.items.length === 0) {
-    body = (
-      <>
-        <DaysStrip forecast={forecast.data} units={units} />
-        <EmptyState icon="shopping-cart" title="Nothing to buy for these days" message="No orders or standing orders need dough in this week yet." testID="forecast-empty" />
-      </>
-    );
   } else {
-    body = <ForecastView forecast={forecast.data} units={units} />;
+    body = (
+      <QueryStates query={forecast} loadingLabel="Adding up the week's doughs…" errorTitle="The forecast didn't load" testID="forecast">
+        {(data) =>
+          data.items.length === 0 ? (
+            <>
+              <DaysStrip forecast={data} units={units} />
+              <EmptyState icon="shopping-cart" title="Nothing to buy for these days" message="No orders or standing orders need dough in this week yet." testID="forecast-empty" />
+            </>
+          ) : (
+            <ForecastView forecast={data} units={units} />
+          )
+        }
+      </QueryStates>
+    );
   }
 
   return (
     <Screen testID="forecast-screen">
-      {paths.hub ? <TextLink href={paths.hub as never} label="‹ Production" testID="back-to-production" /> : null}
+      <BackToProduction paths={paths} />
       <PageHeader title="Purchasing" subtitle="Seven days of orders, with standing orders still to come, in whole purchase packs (rounded up)." testID="forecast-title" />
       {from ? (
         <View style={styles.controls}>

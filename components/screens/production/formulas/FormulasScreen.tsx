@@ -13,7 +13,7 @@ import { formatNum } from "../../../format";
 import { kitchenPaths, type KitchenArea } from "../../../production/paths";
 import { formatPercent } from "../../../production/units";
 import { BackToProduction } from "../BackToProduction";
-import { TableOrCards } from "../TableOrCards";
+import { CardBody, TableOrCards } from "../TableOrCards";
 import { productNames } from "./formulaText";
 import { space } from "../../../theme";
 
@@ -79,7 +79,7 @@ export function FormulasScreen({ area }: { area: KitchenArea }) {
             ]}
             cardsTestID="formulas-list"
             card={(f) => (
-              <>
+              <CardBody>
                 <View style={styles.titleRow}>
                   <AppText variant="heading" style={styles.flex}>
                     {f.name}
@@ -88,7 +88,7 @@ export function FormulasScreen({ area }: { area: KitchenArea }) {
                 </View>
                 <AppText variant="small" color="muted">{`Hydration ${formatPercent(f.figures.hydrationPercent)} (effective ${formatPercent(f.figures.effectiveHydrationPercent)}) · ${f.paste ? `paste ${formatPercent(f.figures.pasteSharePercent)} of flour` : "no paste"}`}</AppText>
                 <AppText variant="small">{`For: ${names(f.productIds)}`}</AppText>
-              </>
+              </CardBody>
             )}
           />
         )}

@@ -14,7 +14,7 @@ import { ALLERGEN_LABEL } from "../../../../shared/allergens";
 import type { IngredientDto } from "../../../../shared/schemas/production";
 import { formatMass } from "../../../../shared/units";
 import { BackToProduction } from "../BackToProduction";
-import { TableOrCards } from "../TableOrCards";
+import { CardBody, TableOrCards } from "../TableOrCards";
 
 const packText = (i: IngredientDto, money: (c: number) => string) =>
   i.packGrams > 0 ? `${i.packName} (${formatMass(i.packGrams, "metric")}) · ${money(i.packCostCents)}` : `${i.packName} · not bought`;
@@ -71,11 +71,11 @@ export function IngredientsScreen({ area }: { area: KitchenArea }) {
             ]}
             cardsTestID="ingredients-list"
             card={(i) => (
-              <>
+              <CardBody>
                 <AppText variant="bodyStrong">{i.name}</AppText>
                 <AppText variant="small" color="muted">{`${KIND_LABEL[i.kind]} · water ${formatPercent(i.waterPercent)}${i.allergens.length ? ` · ${allergenText(i)}` : ""}`}</AppText>
                 <AppText variant="small">{packText(i, money)}</AppText>
-              </>
+              </CardBody>
             )}
           />
         )}
