@@ -12,6 +12,12 @@ import { editorStyles as styles, type EditorCardProps } from "./editorParts";
 
 type NumberKey = "flourPercent" | "liquidRatio" | "cookToC";
 
+/** The paste cooks one flour line and one liquid line of the formula. */
+const COOKED = [
+  { kind: "flour", key: "flourIngredientId", label: "Flour to cook", placeholder: "Choose a flour line", testID: "paste-flour" },
+  { kind: "liquid", key: "liquidIngredientId", label: "Liquid to cook", placeholder: "Choose a liquid line", testID: "paste-liquid" },
+] as const;
+
 /** Part of the flour cooked with part of the liquid before the final mix. */
 export function FormulaPasteCard({ v, fields, update, options, infos }: EditorCardProps & { options: PickerOption<number>[]; infos: Map<number, IngredientInfo> }) {
   const numberField = (key: NumberKey) => ({
@@ -30,28 +36,19 @@ export function FormulaPasteCard({ v, fields, update, options, infos }: EditorCa
       {v.pasteOn ? (
         <>
           <View style={styles.grid}>
-            <View style={styles.cell}>
-              <InlinePicker<number>
-                label="Flour to cook"
-                value={v.paste.flourIngredientId}
-                options={linesOfKind(v, infos, options, "flour")}
-                onChange={(id) => update(setPaste(v, { flourIngredientId: id }))}
-                placeholder="Choose a flour line"
-                error={fields["paste.flourIngredientId"]}
-                testID="paste-flour"
-              />
-            </View>
-            <View style={styles.cell}>
-              <InlinePicker<number>
-                label="Liquid to cook"
-                value={v.paste.liquidIngredientId}
-                options={linesOfKind(v, infos, options, "liquid")}
-                onChange={(id) => update(setPaste(v, { liquidIngredientId: id }))}
-                placeholder="Choose a liquid line"
-                error={fields["paste.liquidIngredientId"]}
-                testID="paste-liquid"
-              />
-            </View>
+            {COOKED.map((c) => (
+              <View key={c.kind} style={styles.cell}>
+                <InlinePicker<number>
+                  label={c.label}
+                  value={v.paste[c.key]}
+                  options={linesOfKind(v, infos, options, c.kind)}
+                  onChange={(id) => update(setPaste(v, { [c.key]: id }))}
+                  placeholder={c.placeholder}
+                  error={fields[`paste.${c.key}`]}
+                  testID={c.testID}
+                />
+              </View>
+            ))}
           </View>
           <View style={styles.grid}>
             <View style={styles.cellSmall}>

@@ -1,18 +1,14 @@
 import React from "react";
 import { StyleSheet, View } from "react-native";
 import { useRouter } from "expo-router";
-import { Screen } from "../../../ui/Screen";
-import { PageHeader } from "../../../ui/PageHeader";
 import { Badge } from "../../../ui/Badge";
-import { LinkButton } from "../../../ui/LinkButton";
-import { QueryStates } from "../../../ui/QueryStates";
 import { AppText } from "../../../ui/Text";
 import { useFormulasQuery } from "../../../api/formulas";
 import { useProductsQuery } from "../../../api/products";
 import { formatNum } from "../../../format";
 import { kitchenPaths, type KitchenArea } from "../../../production/paths";
 import { formatPercent } from "../../../production/units";
-import { BackToProduction } from "../BackToProduction";
+import { LibraryScreen } from "../LibraryScreen";
 import { CardBody, TableOrCards } from "../TableOrCards";
 import { productNames } from "./formulaText";
 import { space } from "../../../theme";
@@ -25,75 +21,60 @@ export function FormulasScreen({ area }: { area: KitchenArea }) {
   const products = useProductsQuery();
   const names = (ids: number[]) => productNames(ids, products.data);
   return (
-    <Screen testID="formulas-screen">
-      <BackToProduction paths={paths} />
-      <PageHeader
-        title="Formulas"
-        subtitle="Doughs in baker's percentages. Saving an edit keeps the old version for the plans that used it."
-        actions={
-          <>
-            <LinkButton href={paths.ingredients as never} label="Ingredients" icon="package" variant="secondary" testID="open-ingredients" />
-            <LinkButton href={paths.newFormula as never} label="New formula" icon="plus" testID="new-formula" />
-          </>
-        }
-        testID="formulas-title"
-      />
-      <QueryStates
-        query={formulas}
-        loadingLabel="Loading formulas…"
-        errorTitle="Formulas didn't load"
-        testID="formulas"
-        isEmpty={(list) => list.length === 0}
-        empty={{
-          icon: "book-open",
-          title: "No formulas yet",
-          message: "Write the first dough in baker's percentages; then give products their formula.",
-          action: <LinkButton href={paths.newFormula as never} label="New formula" icon="plus" />,
-        }}
-      >
-        {(list) => (
-          <TableOrCards
-            rows={list}
-            rowKey={(f) => f.id}
-            onOpen={(f) => router.push(paths.formula(f.id) as never)}
-            rowLabel={(f) => `${f.name}, version ${f.version}`}
-            rowTestID={(f) => `formula-row-${f.id}`}
-            tableTestID="formulas-table"
-            columns={[
-              {
-                key: "name",
-                label: "Formula",
-                flex: 2,
-                render: (f) => (
-                  <View>
-                    <AppText variant="bodyStrong">{f.name}</AppText>
-                    <AppText variant="small" color="muted">{`Version ${f.version}`}</AppText>
-                  </View>
-                ),
-              },
-              { key: "hydration", label: "Hydration", render: (f) => <AppText>{formatPercent(f.figures.hydrationPercent)}</AppText> },
-              { key: "effective", label: "Effective", render: (f) => <AppText>{formatPercent(f.figures.effectiveHydrationPercent)}</AppText> },
-              { key: "paste", label: "Paste share", render: (f) => <AppText>{f.paste ? formatPercent(f.figures.pasteSharePercent) : "No paste"}</AppText> },
-              { key: "yield", label: "Dough / kg flour", render: (f) => <AppText>{`${formatNum(Math.round(f.figures.doughYieldPerKgFlour))} g`}</AppText> },
-              { key: "products", label: "Products", flex: 2.4, render: (f) => <AppText variant="small">{names(f.productIds)}</AppText> },
-            ]}
-            cardsTestID="formulas-list"
-            card={(f) => (
-              <CardBody>
-                <View style={styles.titleRow}>
-                  <AppText variant="heading" style={styles.flex}>
-                    {f.name}
-                  </AppText>
-                  <Badge label={`v${f.version}`} tone="crust" />
+    <LibraryScreen
+      paths={paths}
+      name="formulas"
+      title="Formulas"
+      subtitle="Doughs in baker's percentages. Saving an edit keeps the old version for the plans that used it."
+      other={{ href: paths.ingredients, label: "Ingredients", icon: "package", testID: "open-ingredients" }}
+      add={{ href: paths.newFormula, label: "New formula", testID: "new-formula" }}
+      query={formulas}
+      loadingLabel="Loading formulas…"
+      errorTitle="Formulas didn't load"
+      empty={{ icon: "book-open", title: "No formulas yet", message: "Write the first dough in baker's percentages; then give products their formula." }}
+    >
+      {(list) => (
+        <TableOrCards
+          rows={list}
+          rowKey={(f) => f.id}
+          onOpen={(f) => router.push(paths.formula(f.id) as never)}
+          rowLabel={(f) => `${f.name}, version ${f.version}`}
+          rowTestID={(f) => `formula-row-${f.id}`}
+          tableTestID="formulas-table"
+          columns={[
+            {
+              key: "name",
+              label: "Formula",
+              flex: 2,
+              render: (f) => (
+                <View>
+                  <AppText variant="bodyStrong">{f.name}</AppText>
+                  <AppText variant="small" color="muted">{`Version ${f.version}`}</AppText>
                 </View>
-                <AppText variant="small" color="muted">{`Hydration ${formatPercent(f.figures.hydrationPercent)} (effective ${formatPercent(f.figures.effectiveHydrationPercent)}) · ${f.paste ? `paste ${formatPercent(f.figures.pasteSharePercent)} of flour` : "no paste"}`}</AppText>
-                <AppText variant="small">{`For: ${names(f.productIds)}`}</AppText>
-              </CardBody>
-            )}
-          />
-        )}
-      </QueryStates>
-    </Screen>
+              ),
+            },
+            { key: "hydration", label: "Hydration", render: (f) => <AppText>{formatPercent(f.figures.hydrationPercent)}</AppText> },
+            { key: "effective", label: "Effective", render: (f) => <AppText>{formatPercent(f.figures.effectiveHydrationPercent)}</AppText> },
+            { key: "paste", label: "Paste share", render: (f) => <AppText>{f.paste ? formatPercent(f.figures.pasteSharePercent) : "No paste"}</AppText> },
+            { key: "yield", label: "Dough / kg flour", render: (f) => <AppText>{`${formatNum(Math.round(f.figures.doughYieldPerKgFlour))} g`}</AppText> },
+            { key: "products", label: "Products", flex: 2.4, render: (f) => <AppText variant="small">{names(f.productIds)}</AppText> },
+          ]}
+          cardsTestID="formulas-list"
+          card={(f) => (
+            <CardBody>
+              <View style={styles.titleRow}>
+                <AppText variant="heading" style={styles.flex}>
+                  {f.name}
+                </AppText>
+                <Badge label={`v${f.version}`} tone="crust" />
+              </View>
+              <AppText variant="small" color="muted">{`Hydration ${formatPercent(f.figures.hydrationPercent)} (effective ${formatPercent(f.figures.effectiveHydrationPercent)}) · ${f.paste ? `paste ${formatPercent(f.figures.pasteSharePercent)} of flour` : "no paste"}`}</AppText>
+              <AppText variant="small">{`For: ${names(f.productIds)}`}</AppText>
+            </CardBody>
+          )}
+        />
+      )}
+    </LibraryScreen>
   );
 }
 

@@ -1,9 +1,5 @@
 import React from "react";
 import { useRouter } from "expo-router";
-import { Screen } from "../../../ui/Screen";
-import { PageHeader } from "../../../ui/PageHeader";
-import { LinkButton } from "../../../ui/LinkButton";
-import { QueryStates } from "../../../ui/QueryStates";
 import { AppText } from "../../../ui/Text";
 import { useIngredientsQuery } from "../../../api/ingredients";
 import { useMoney } from "../../ordering/parts";
@@ -13,7 +9,7 @@ import { KIND_LABEL } from "../../../production/ingredientKinds";
 import { ALLERGEN_LABEL } from "../../../../shared/allergens";
 import type { IngredientDto } from "../../../../shared/schemas/production";
 import { formatMass } from "../../../../shared/units";
-import { BackToProduction } from "../BackToProduction";
+import { LibraryScreen } from "../LibraryScreen";
 import { CardBody, TableOrCards } from "../TableOrCards";
 
 const packText = (i: IngredientDto, money: (c: number) => string) =>
@@ -28,58 +24,43 @@ export function IngredientsScreen({ area }: { area: KitchenArea }) {
   const money = useMoney();
   const ingredients = useIngredientsQuery();
   return (
-    <Screen testID="ingredients-screen">
-      <BackToProduction paths={paths} />
-      <PageHeader
-        title="Ingredients"
-        subtitle="Kinds and water content drive hydration; allergens flow to products; packs size the purchasing forecast."
-        actions={
-          <>
-            <LinkButton href={paths.formulas as never} label="Formulas" icon="book-open" variant="secondary" testID="open-formulas" />
-            <LinkButton href={paths.newIngredient as never} label="New ingredient" icon="plus" testID="new-ingredient" />
-          </>
-        }
-        testID="ingredients-title"
-      />
-      <QueryStates
-        query={ingredients}
-        loadingLabel="Loading ingredients…"
-        errorTitle="Ingredients didn't load"
-        testID="ingredients"
-        isEmpty={(list) => list.length === 0}
-        empty={{
-          icon: "package",
-          title: "No ingredients yet",
-          message: "Add flour, milk, butter and the rest; formulas are written from them.",
-          action: <LinkButton href={paths.newIngredient as never} label="New ingredient" icon="plus" />,
-        }}
-      >
-        {(list) => (
-          <TableOrCards
-            rows={list}
-            rowKey={(i) => i.id}
-            onOpen={(i) => router.push(paths.ingredient(i.id) as never)}
-            rowLabel={(i) => `${i.name}, ${KIND_LABEL[i.kind]}`}
-            rowTestID={(i) => `ingredient-row-${i.id}`}
-            tableTestID="ingredients-table"
-            columns={[
-              { key: "name", label: "Ingredient", flex: 1.6, render: (i) => <AppText variant="bodyStrong">{i.name}</AppText> },
-              { key: "kind", label: "Kind", render: (i) => <AppText>{KIND_LABEL[i.kind]}</AppText> },
-              { key: "water", label: "Water", flex: 0.7, render: (i) => <AppText>{formatPercent(i.waterPercent)}</AppText> },
-              { key: "allergens", label: "Allergens", flex: 1.4, render: (i) => <AppText variant="small">{allergenText(i) || "None"}</AppText> },
-              { key: "pack", label: "Purchase pack", flex: 2, render: (i) => <AppText variant="small">{packText(i, money)}</AppText> },
-            ]}
-            cardsTestID="ingredients-list"
-            card={(i) => (
-              <CardBody>
-                <AppText variant="bodyStrong">{i.name}</AppText>
-                <AppText variant="small" color="muted">{`${KIND_LABEL[i.kind]} · water ${formatPercent(i.waterPercent)}${i.allergens.length ? ` · ${allergenText(i)}` : ""}`}</AppText>
-                <AppText variant="small">{packText(i, money)}</AppText>
-              </CardBody>
-            )}
-          />
-        )}
-      </QueryStates>
-    </Screen>
+    <LibraryScreen
+      paths={paths}
+      name="ingredients"
+      title="Ingredients"
+      subtitle="Kinds and water content drive hydration; allergens flow to products; packs size the purchasing forecast."
+      other={{ href: paths.formulas, label: "Formulas", icon: "book-open", testID: "open-formulas" }}
+      add={{ href: paths.newIngredient, label: "New ingredient", testID: "new-ingredient" }}
+      query={ingredients}
+      loadingLabel="Loading ingredients…"
+      errorTitle="Ingredients didn't load"
+      empty={{ icon: "package", title: "No ingredients yet", message: "Add flour, milk, butter and the rest; formulas are written from them." }}
+    >
+      {(list) => (
+        <TableOrCards
+          rows={list}
+          rowKey={(i) => i.id}
+          onOpen={(i) => router.push(paths.ingredient(i.id) as never)}
+          rowLabel={(i) => `${i.name}, ${KIND_LABEL[i.kind]}`}
+          rowTestID={(i) => `ingredient-row-${i.id}`}
+          tableTestID="ingredients-table"
+          columns={[
+            { key: "name", label: "Ingredient", flex: 1.6, render: (i) => <AppText variant="bodyStrong">{i.name}</AppText> },
+            { key: "kind", label: "Kind", render: (i) => <AppText>{KIND_LABEL[i.kind]}</AppText> },
+            { key: "water", label: "Water", flex: 0.7, render: (i) => <AppText>{formatPercent(i.waterPercent)}</AppText> },
+            { key: "allergens", label: "Allergens", flex: 1.4, render: (i) => <AppText variant="small">{allergenText(i) || "None"}</AppText> },
+            { key: "pack", label: "Purchase pack", flex: 2, render: (i) => <AppText variant="small">{packText(i, money)}</AppText> },
+          ]}
+          cardsTestID="ingredients-list"
+          card={(i) => (
+            <CardBody>
+              <AppText variant="bodyStrong">{i.name}</AppText>
+              <AppText variant="small" color="muted">{`${KIND_LABEL[i.kind]} · water ${formatPercent(i.waterPercent)}${i.allergens.length ? ` · ${allergenText(i)}` : ""}`}</AppText>
+              <AppText variant="small">{packText(i, money)}</AppText>
+            </CardBody>
+          )}
+        />
+      )}
+    </LibraryScreen>
   );
 }
