@@ -43,3 +43,15 @@ export function checkTemps(values: TempValues, shown: TempValues, stored: Temps,
   }
   return Object.keys(fields).length ? { ok: false, fields } : { ok: true, input: out };
 }
+
+/** Bread is probed between about 20 and 120 °C (the API refuses anything else). */
+export const INTERNAL_MIN_C = 20;
+export const INTERNAL_MAX_C = 120;
+
+/** An internal temperature reached, as typed in the reader's units, read back to °C (keyed as the API names it). */
+export function checkReading(typed: string, units: Pick<Units, "toCelsius" | "temp" | "tempInput">): CheckResult<number> {
+  const c = units.toCelsius(typed);
+  if (Number.isNaN(c)) return { ok: false, fields: { valueC: `Enter the temperature reached, e.g. ${units.tempInput(92)}.` } };
+  if (c < INTERNAL_MIN_C || c > INTERNAL_MAX_C) return { ok: false, fields: { valueC: `Enter ${units.temp(INTERNAL_MIN_C)} to ${units.temp(INTERNAL_MAX_C)}.` } };
+  return { ok: true, input: c };
+}

@@ -8,7 +8,7 @@ import { EMPTY_INGREDIENT, checkIngredient, ingredientValues } from "../../compo
 import { SETTINGS_FIELDS, addOven, capacitySummary, formValues, mmToInchesText, removeMixer, retardIndex, setOven, setRetard, settingsBody, slotNames } from "../../components/production/settingsForm";
 import { addLine, addStep, fahrenheitHint, ingredientOptions, linesOfKind, moveStep, removeLine, setPasteOn, setStepKind } from "../../components/production/formulaDraft";
 import { FORMULA_FIELDS, emptyFormula, ingredientMap } from "../../components/production/formulaForm";
-import { checkTemps, shownTemps, storedTemps } from "../../components/production/temperatures";
+import { checkReading, checkTemps, shownTemps, storedTemps } from "../../components/production/temperatures";
 import { productionSettingsSchema, type IngredientDto, type ProductionSettingsDto } from "../../shared/schemas/production";
 import { DEFAULT_MILK_C, DEFAULT_TAP_C } from "../../shared/production";
 import { unitsFor } from "../../shared/units";
@@ -191,5 +191,11 @@ describe("the day's temperatures", () => {
       expect(r.fields.tapC).toBe("Enter 32 °F to 140 °F.");
       expect(r.fields.flourC).toBe("Enter a temperature, e.g. 22.");
     }
+  });
+
+  it("reads an internal temperature reached back to °C, within what bread is probed at", () => {
+    expect(checkReading("189", us)).toEqual({ ok: true, input: 87.2 });
+    expect(checkReading("500", us)).toEqual({ ok: false, fields: { valueC: "Enter 68 °F to 248 °F." } });
+    expect(checkReading("", unitsFor("metric"))).toEqual({ ok: false, fields: { valueC: "Enter the temperature reached, e.g. 92." } });
   });
 });
