@@ -14,7 +14,7 @@ import { useIsWide } from "../../shell/useIsWide";
 import { addDays, cleanDate, formatDay } from "../../ordering/dates";
 import { kitchenPaths, type KitchenArea } from "../../production/paths";
 import { useUnits, type Units } from "../../production/units";
-import { RoundButton } from "./bakeday/RoundButton";
+import { RoundIconButton } from "./RoundIconButton";
 import { UnitsSwitch } from "./bakeday/UnitsSwitch";
 import { BackToProduction } from "./BackToProduction";
 import { colors, fonts, layout, radii, space } from "../../theme";
@@ -67,9 +67,9 @@ export function ForecastScreen({ area, from: asked }: { area: KitchenArea; from?
       {from ? (
         <View style={styles.controls}>
           <View style={styles.range}>
-            <RoundButton icon="chevron-left" label={`The 7 days before, from ${formatDay(addDays(from, -7))}`} onPress={() => go(addDays(from, -7))} testID="forecast-prev" />
+            <RoundIconButton large icon="chevron-left" label={`The 7 days before, from ${formatDay(addDays(from, -7))}`} onPress={() => go(addDays(from, -7))} testID="forecast-prev" />
             <AppText variant="heading" testID="forecast-range" align="center" style={styles.rangeText}>{`${formatDay(from)} – ${formatDay(addDays(from, 6))}`}</AppText>
-            <RoundButton icon="chevron-right" label={`The 7 days after, from ${formatDay(addDays(from, 7))}`} onPress={() => go(addDays(from, 7))} testID="forecast-next" />
+            <RoundIconButton large icon="chevron-right" label={`The 7 days after, from ${formatDay(addDays(from, 7))}`} onPress={() => go(addDays(from, 7))} testID="forecast-next" />
           </View>
           <View style={styles.unitsCell}>
             <UnitsSwitch system={units.system} onChange={units.setSystem} />

@@ -6,7 +6,7 @@ import { AppText } from "../../../ui/Text";
 import { useZodForm } from "../../../forms/useZodForm";
 import { checkedSchema } from "../../../forms/checkedSchema";
 import { cleanDate, formatDay, relativeDay } from "../../../ordering/dates";
-import { RoundButton } from "./RoundButton";
+import { RoundIconButton } from "../RoundIconButton";
 import { colors, fonts, radii, space } from "../../../theme";
 
 /** "Any date": a calendar date as typed, cleaned to YYYY-MM-DD. */
@@ -44,7 +44,7 @@ export function DateBar({ extra, date, today, prev, next, nextBakeDay, upcoming,
   return (
     <View style={styles.dateBar} testID="day-switcher">
       <View style={styles.dateRow}>
-        <RoundButton icon="chevron-left" label={`Previous bake day, ${formatDay(prev)}`} onPress={() => onChange(prev)} testID="day-prev" />
+        <RoundIconButton large icon="chevron-left" label={`Previous bake day, ${formatDay(prev)}`} onPress={() => onChange(prev)} testID="day-prev" />
         <View style={styles.dateText}>
           <AppText style={styles.dateBig} align="center" testID="day-date">
             {formatDay(date)}
@@ -55,7 +55,7 @@ export function DateBar({ extra, date, today, prev, next, nextBakeDay, upcoming,
             </AppText>
           ) : null}
         </View>
-        <RoundButton icon="chevron-right" label={`Next bake day, ${formatDay(next)}`} onPress={() => onChange(next)} testID="day-next" />
+        <RoundIconButton large icon="chevron-right" label={`Next bake day, ${formatDay(next)}`} onPress={() => onChange(next)} testID="day-next" />
       </View>
       <View style={styles.quick}>
         {nextBakeDay && nextBakeDay !== date ? <Button label="Next bake day" small variant="secondary" icon="sun" onPress={() => onChange(nextBakeDay)} testID="day-next-bake" /> : null}

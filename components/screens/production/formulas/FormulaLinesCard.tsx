@@ -6,7 +6,8 @@ import { TextField } from "../../../ui/TextField";
 import { InlinePicker, type PickerOption } from "../../../ui/InlinePicker";
 import { AppText } from "../../../ui/Text";
 import { addLine, removeLine, setLine } from "../../../production/formulaDraft";
-import { IconButton, editorStyles, type EditorCardProps, type OpenRow } from "./editorParts";
+import { editorStyles, type EditorCardProps, type OpenRow } from "./editorParts";
+import { RoundIconButton } from "../RoundIconButton";
 import { space } from "../../../theme";
 
 /** The ingredient lines in baker's percentages. */
@@ -50,7 +51,7 @@ export function FormulaLinesCard({ v, fields, update, options, openRow, opened }
                   testID={`line-${i}-percent`}
                 />
               </View>
-              <IconButton icon="trash-2" label={`Remove ingredient ${i + 1}`} onPress={() => update(removeLine(v, i))} testID={`line-${i}-remove`} />
+              <RoundIconButton icon="trash-2" label={`Remove ingredient ${i + 1}`} onPress={() => update(removeLine(v, i))} testID={`line-${i}-remove`} />
             </View>
           </View>
         ))}

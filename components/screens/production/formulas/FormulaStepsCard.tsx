@@ -7,7 +7,8 @@ import { InlinePicker } from "../../../ui/InlinePicker";
 import { AppText } from "../../../ui/Text";
 import { addStep, fahrenheitHint, moveStep, removeStep, setStep, setStepKind } from "../../../production/formulaDraft";
 import { STEP_KINDS, STEP_LABELS, type StepKind } from "../../../../shared/production";
-import { IconButton, editorStyles, type EditorCardProps, type OpenRow } from "./editorParts";
+import { editorStyles, type EditorCardProps, type OpenRow } from "./editorParts";
+import { RoundIconButton } from "../RoundIconButton";
 import { space } from "../../../theme";
 
 const STEP_OPTIONS = STEP_KINDS.map((k) => ({ value: k, label: STEP_LABELS[k] }));
@@ -71,9 +72,9 @@ export function FormulaStepsCard({ v, fields, update, openRow, opened }: EditorC
                 </View>
               ) : null}
               <View style={styles.stepButtons}>
-                <IconButton icon="arrow-up" label={`Move step ${i + 1} earlier`} disabled={i === 0} onPress={() => move(i, -1)} testID={`step-${i}-up`} />
-                <IconButton icon="arrow-down" label={`Move step ${i + 1} later`} disabled={i === v.steps.length - 1} onPress={() => move(i, 1)} testID={`step-${i}-down`} />
-                <IconButton icon="trash-2" label={`Remove step ${i + 1}`} onPress={() => update(removeStep(v, i))} testID={`step-${i}-remove`} />
+                <RoundIconButton icon="arrow-up" label={`Move step ${i + 1} earlier`} disabled={i === 0} onPress={() => move(i, -1)} testID={`step-${i}-up`} />
+                <RoundIconButton icon="arrow-down" label={`Move step ${i + 1} later`} disabled={i === v.steps.length - 1} onPress={() => move(i, 1)} testID={`step-${i}-down`} />
+                <RoundIconButton icon="trash-2" label={`Remove step ${i + 1}`} onPress={() => update(removeStep(v, i))} testID={`step-${i}-remove`} />
               </View>
             </View>
           </View>

@@ -1,11 +1,11 @@
 import React from "react";
-import { Pressable, StyleSheet, View } from "react-native";
+import { StyleSheet, View } from "react-native";
 import Feather from "@expo/vector-icons/Feather";
 import { AppText } from "../../../ui/Text";
 import type { FormulaValues } from "../../../production/formulaForm";
 import type { DraftChange } from "../../../production/formulaDraft";
 import type { FieldErrors } from "../../../../shared/errors";
-import { colors, layout, radii, space } from "../../../theme";
+import { colors, radii, space } from "../../../theme";
 
 /** What every card of the formula editor gets: the draft, the messages to show and the way to change it. */
 export interface EditorCardProps {
@@ -32,22 +32,6 @@ export function FieldWarning({ text, testID }: { text: string; testID?: string }
   );
 }
 
-export function IconButton({ icon, label, onPress, disabled, testID }: { icon: React.ComponentProps<typeof Feather>["name"]; label: string; onPress: () => void; disabled?: boolean; testID?: string }) {
-  return (
-    <Pressable
-      accessibilityRole="button"
-      accessibilityLabel={label}
-      accessibilityState={{ disabled: !!disabled }}
-      disabled={disabled}
-      onPress={onPress}
-      testID={testID}
-      style={({ pressed }) => [styles.icon, pressed && styles.iconPressed, disabled && styles.iconDisabled]}
-    >
-      <Feather name={icon} size={18} color={disabled ? colors.muted : colors.crustInk} />
-    </Pressable>
-  );
-}
-
 /** Layout the editor's cards share. */
 export const editorStyles = StyleSheet.create({
   grid: { flexDirection: "row", flexWrap: "wrap", gap: space.md },
@@ -58,19 +42,6 @@ export const editorStyles = StyleSheet.create({
 });
 
 const styles = StyleSheet.create({
-  icon: {
-    width: layout.minTouch,
-    height: layout.minTouch,
-    borderRadius: radii.pill,
-    borderWidth: 1.5,
-    borderColor: colors.inputBorder,
-    backgroundColor: colors.surface,
-    alignItems: "center",
-    justifyContent: "center",
-    marginBottom: 2,
-  },
-  iconPressed: { backgroundColor: colors.crustSoft },
-  iconDisabled: { borderColor: colors.border, backgroundColor: colors.page },
   warning: { flexDirection: "row", gap: space.xs, alignItems: "flex-start", backgroundColor: colors.amberSoft, borderRadius: radii.md, padding: space.sm, marginTop: space.xs },
   warningIcon: { marginTop: 2 },
   warningText: { flex: 1 },
