@@ -3,6 +3,7 @@ import { StyleSheet, View } from "react-native";
 import { Card } from "../../../ui/Card";
 import { Badge } from "../../../ui/Badge";
 import { Stepper } from "../../../ui/Stepper";
+import { FieldFrame } from "../../../ui/Field";
 import { FormError } from "../../../ui/FormError";
 import { AppText } from "../../../ui/Text";
 import { TextLink } from "../../../ui/TextLink";
@@ -10,7 +11,7 @@ import type { PlanView } from "../../../api/production";
 import { parseQuantity } from "../../../ordering/quantities";
 import type { Units } from "../../../production/units";
 import { formatCount, unitsFor } from "../../../../shared/units";
-import { colors, fonts, layout, radii, space } from "../../../theme";
+import { colors, fonts, radii, space } from "../../../theme";
 
 const METRIC = unitsFor("metric");
 
@@ -76,17 +77,9 @@ export function PansCard({ plan, extras, onExtra, wide, saving, error, formulasH
                   </View>
                 </View>
               </View>
-              <View style={styles.extraRow}>
-                <AppText variant="label" style={styles.flex}>
-                  Extra pans
-                </AppText>
+              <FieldFrame label="Extra pans" error={invalid ? "Enter a whole number of pans, 0 to 100." : null} testID={`extra-${p.productId}`}>
                 <Stepper value={text} onChange={(t) => onExtra(p.productId, t)} min={0} max={100} label={`extra pans of ${p.name}`} invalid={invalid} testID={`extra-${p.productId}`} />
-              </View>
-              {invalid ? (
-                <AppText variant="small" color="dangerInk" testID={`extra-${p.productId}-error`}>
-                  Enter a whole number of pans, 0 to 100.
-                </AppText>
-              ) : null}
+              </FieldFrame>
             </View>
           );
         })}
@@ -113,5 +106,4 @@ const styles = StyleSheet.create({
   panNumber: { fontFamily: fonts.extrabold, fontSize: 60, lineHeight: 66, color: colors.ink, fontVariant: ["tabular-nums"] },
   panName: { fontFamily: fonts.extrabold, fontSize: 21, lineHeight: 27, color: colors.ink },
   badges: { flexDirection: "row", flexWrap: "wrap", gap: space.xs, marginTop: space.xxs },
-  extraRow: { flexDirection: "row", alignItems: "center", gap: space.sm, minHeight: layout.minTouch },
 });
