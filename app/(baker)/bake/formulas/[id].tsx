@@ -1,6 +1,6 @@
 import React from "react";
 import { useLocalSearchParams } from "expo-router";
-import { FormulaScreen } from "@/components/screens/production/FormulaScreens";
+import { FormulaScreen } from "@/components/screens/production/formulas/FormulaScreen";
 import { firstParam, idParam } from "@/components/routing";
 import { ScreenTitle } from "@/components/ui/ScreenTitle";
 

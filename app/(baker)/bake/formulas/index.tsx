@@ -1,5 +1,5 @@
 import React from "react";
-import { FormulasScreen } from "@/components/screens/production/FormulaScreens";
+import { FormulasScreen } from "@/components/screens/production/formulas/FormulasScreen";
 import { ScreenTitle } from "@/components/ui/ScreenTitle";
 
 export default function BakerFormulasRoute() {

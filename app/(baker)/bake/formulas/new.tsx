@@ -1,5 +1,5 @@
 import React from "react";
-import { NewFormulaScreen } from "@/components/screens/production/FormulaScreens";
+import { NewFormulaScreen } from "@/components/screens/production/formulas/NewFormulaScreen";
 import { ScreenTitle } from "@/components/ui/ScreenTitle";
 
 export default function BakerNewFormulaRoute() {

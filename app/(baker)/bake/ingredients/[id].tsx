@@ -1,6 +1,6 @@
 import React from "react";
 import { useLocalSearchParams } from "expo-router";
-import { IngredientScreen } from "@/components/screens/production/IngredientScreens";
+import { IngredientScreen } from "@/components/screens/production/ingredients/IngredientScreen";
 import { idParam } from "@/components/routing";
 import { ScreenTitle } from "@/components/ui/ScreenTitle";
 

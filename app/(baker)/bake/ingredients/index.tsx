@@ -1,5 +1,5 @@
 import React from "react";
-import { IngredientsScreen } from "@/components/screens/production/IngredientScreens";
+import { IngredientsScreen } from "@/components/screens/production/ingredients/IngredientsScreen";
 import { ScreenTitle } from "@/components/ui/ScreenTitle";
 
 export default function BakerIngredientsRoute() {

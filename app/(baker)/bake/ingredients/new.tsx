@@ -1,5 +1,5 @@
 import React from "react";
-import { NewIngredientScreen } from "@/components/screens/production/IngredientScreens";
+import { NewIngredientScreen } from "@/components/screens/production/ingredients/NewIngredientScreen";
 import { ScreenTitle } from "@/components/ui/ScreenTitle";
 
 export default function BakerNewIngredientRoute() {

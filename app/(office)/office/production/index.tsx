@@ -1,6 +1,6 @@
 import React from "react";
 import { RequireRole } from "@/components/auth/RoleGate";
-import { ProductionHubScreen } from "@/components/screens/production/ProductionOfficeScreens";
+import { ProductionHubScreen } from "@/components/screens/production/ProductionHubScreen";
 import { ScreenTitle } from "@/components/ui/ScreenTitle";
 
 export default function ProductionHubRoute() {

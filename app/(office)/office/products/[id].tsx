@@ -1,6 +1,6 @@
 import React from "react";
 import { useLocalSearchParams } from "expo-router";
-import { ProductDetailScreen } from "@/components/screens/products/ProductFormScreen";
+import { ProductDetailScreen } from "@/components/screens/products/ProductDetailScreen";
 import { firstParam, idParam } from "@/components/routing";
 import { ScreenTitle } from "@/components/ui/ScreenTitle";
 

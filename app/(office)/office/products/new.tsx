@@ -1,6 +1,6 @@
 import React from "react";
 import { RequireRole } from "@/components/auth/RoleGate";
-import { NewProductScreen } from "@/components/screens/products/ProductFormScreen";
+import { NewProductScreen } from "@/components/screens/products/NewProductScreen";
 import { ScreenTitle } from "@/components/ui/ScreenTitle";
 
 export default function NewProductRoute() {

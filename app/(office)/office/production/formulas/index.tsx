@@ -1,6 +1,6 @@
 import React from "react";
 import { RequireRole } from "@/components/auth/RoleGate";
-import { FormulasScreen } from "@/components/screens/production/FormulaScreens";
+import { FormulasScreen } from "@/components/screens/production/formulas/FormulasScreen";
 import { ScreenTitle } from "@/components/ui/ScreenTitle";
 
 export default function OfficeFormulasRoute() {

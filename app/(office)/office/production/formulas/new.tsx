@@ -1,6 +1,6 @@
 import React from "react";
 import { RequireRole } from "@/components/auth/RoleGate";
-import { NewFormulaScreen } from "@/components/screens/production/FormulaScreens";
+import { NewFormulaScreen } from "@/components/screens/production/formulas/NewFormulaScreen";
 import { ScreenTitle } from "@/components/ui/ScreenTitle";
 
 export default function OfficeNewFormulaRoute() {

@@ -1,6 +1,6 @@
 import React from "react";
 import { RequireRole } from "@/components/auth/RoleGate";
-import { IngredientsScreen } from "@/components/screens/production/IngredientScreens";
+import { IngredientsScreen } from "@/components/screens/production/ingredients/IngredientsScreen";
 import { ScreenTitle } from "@/components/ui/ScreenTitle";
 
 export default function OfficeIngredientsRoute() {

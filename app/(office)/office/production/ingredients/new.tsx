@@ -1,6 +1,6 @@
 import React from "react";
 import { RequireRole } from "@/components/auth/RoleGate";
-import { NewIngredientScreen } from "@/components/screens/production/IngredientScreens";
+import { NewIngredientScreen } from "@/components/screens/production/ingredients/NewIngredientScreen";
 import { ScreenTitle } from "@/components/ui/ScreenTitle";
 
 export default function OfficeNewIngredientRoute() {
