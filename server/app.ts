@@ -6,6 +6,7 @@ import pinoHttp from "pino-http";
 import type { AppContext } from "./http/context";
 import { apiNotFound, errorHandler } from "./http/errors";
 import { authenticate } from "./http/auth";
+import { requestIdFor } from "./http/request-id";
 import { authRoutes } from "./auth/auth.routes";
 import { invitationsRoutes, usersRoutes } from "./users/users.routes";
 import { accountsRoutes } from "./accounts/accounts.routes";
@@ -96,6 +97,7 @@ export function createApp(ctx: AppContext) {
   app.use(
     pinoHttp({
       logger: ctx.logger,
+      genReqId: requestIdFor,
       customLogLevel: (_req, res, err) => (err || res.statusCode >= 500 ? "error" : res.statusCode >= 400 ? "warn" : "info"),
       serializers: {
         // Link tokens travel in some paths (invitation check, calendar feed): never log them.
