@@ -7,6 +7,7 @@ import type { AppContext } from "./http/context";
 import { apiNotFound, errorHandler } from "./http/errors";
 import { authenticate } from "./http/auth";
 import { requestIdFor } from "./http/request-id";
+import { rateLimits } from "./http/rate-limits";
 import { authRoutes } from "./auth/auth.routes";
 import { invitationsRoutes, usersRoutes } from "./users/users.routes";
 import { accountsRoutes } from "./accounts/accounts.routes";
@@ -55,7 +56,7 @@ export function apiRouter(ctx: AppContext): Router {
   api.use("/orders", ordersRoutes(ctx));
   api.use("/standing-orders", standingOrderRoutes(ctx));
   api.use("/calendar-feed", feedRoutes(ctx));
-  api.use("/feeds", publicFeedRoutes(ctx));
+  api.use("/feeds", rateLimits(ctx).feed, publicFeedRoutes(ctx)); // per address and per feed token
   api.use("/ingredients", ingredientRoutes(ctx));
   api.use("/formulas", formulaRoutes(ctx));
   api.use("/production", productionRoutes(ctx));
