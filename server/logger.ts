@@ -1,5 +1,5 @@
 import pino from "pino";
-import pretty from "pino-pretty";
+import type PinoPretty from "pino-pretty";
 
 const REDACT = {
   paths: ["req.headers.authorization", "req.headers.cookie", "*.password", "*.token", "password", "token"],
@@ -24,6 +24,8 @@ function requestLine(log: Record<string, unknown>, messageKey: string): string {
 export function createLogger(level: string, opts: { pretty?: boolean } = {}) {
   const options = { level, base: { service: "panwise" }, redact: REDACT };
   if (!opts.pretty) return pino(options);
+  // Loaded only here: a JSON logger (tests, production) never needs it.
+  const pretty = require("pino-pretty") as typeof PinoPretty;
   const stream = pretty({
     sync: true,
     singleLine: true,

@@ -1,6 +1,6 @@
 import crypto from "node:crypto";
 import type { Request, RequestHandler } from "express";
-import { RateLimiterMySQL, RateLimiterRes } from "rate-limiter-flexible";
+import type { RateLimiterMySQL } from "rate-limiter-flexible";
 import type { AppContext } from "./context";
 import { HttpError } from "./errors";
 import type { RateLimitSettings } from "../config";
@@ -52,6 +52,8 @@ function poolOf(ctx: AppContext): unknown {
 }
 
 const limitersByContext = new WeakMap<AppContext, Map<LimitName, RateLimiterMySQL>>();
+/** The library, loaded on the first limited request (most processes that build the app never take a point). */
+const library = () => require("rate-limiter-flexible") as typeof import("rate-limiter-flexible");
 
 function limiterFor(ctx: AppContext, name: LimitName): RateLimiterMySQL {
   let made = limitersByContext.get(ctx);
@@ -59,7 +61,7 @@ function limiterFor(ctx: AppContext, name: LimitName): RateLimiterMySQL {
   let limiter = made.get(name);
   if (!limiter) {
     const setting = ctx.config.rateLimits[name];
-    limiter = new RateLimiterMySQL({
+    limiter = new (library().RateLimiterMySQL)({
       storeClient: poolOf(ctx),
       storeType: "pool",
       dbName: String(ctx.dataSource.options.database),
@@ -84,7 +86,7 @@ export async function takePoint(ctx: AppContext, name: LimitName, key: string): 
   try {
     await limiterFor(ctx, name).consume(hash(key));
   } catch (err) {
-    if (err instanceof RateLimiterRes) throw rateLimitedError(name, Math.max(1, Math.ceil(err.msBeforeNext / 1000)));
+    if (err instanceof library().RateLimiterRes) throw rateLimitedError(name, Math.max(1, Math.ceil(err.msBeforeNext / 1000)));
     throw err;
   }
 }

@@ -47,7 +47,7 @@ beforeAll(async () => {
   t = await startTestApp({ now: NOW });
   await seedDemo(t.ds);
   for (const d of DATES) plans[d] = await computePlan(t.ctx, d, { includeStanding: true });
-});
+}, 60_000); // the whole demo seeded and three plans computed: seconds on a busy machine
 afterAll(() => t.close());
 
 const render = (plan: PlanDto, units: "metric" | "us", bakeryName = "Hollowbrook Bakehouse") => renderPlanPdf({ ...plan, bakeryName, timeZone: "America/Chicago" }, units);
