@@ -83,12 +83,23 @@ function limiterFor(ctx: AppContext, name: LimitName): RateLimiterMySQL {
  * unreachable database).
  */
 export async function takePoint(ctx: AppContext, name: LimitName, key: string): Promise<void> {
-  try {
-    await limiterFor(ctx, name).consume(hash(key));
-  } catch (err) {
-    if (err instanceof library().RateLimiterRes) throw rateLimitedError(name, Math.max(1, Math.ceil(err.msBeforeNext / 1000)));
-    throw err;
+  for (let attempt = 1; ; attempt++) {
+    try {
+      await limiterFor(ctx, name).consume(hash(key));
+      return;
+    } catch (err) {
+      if (err instanceof library().RateLimiterRes) throw rateLimitedError(name, Math.max(1, Math.ceil(err.msBeforeNext / 1000)));
+      // Concurrent first requests for one key can deadlock on its new row; InnoDB rolled the loser back, so run it again.
+      if (attempt >= 6 || !isRetryable(err)) throw err;
+      await new Promise((r) => setTimeout(r, 5 * attempt + Math.random() * 10));
+    }
   }
+}
+
+/** A deadlock (1213) or lock wait timeout (1205): the transaction was rolled back and is safe to run again. */
+function isRetryable(err: unknown): boolean {
+  const errno = (err as { errno?: number } | null)?.errno;
+  return errno === 1213 || errno === 1205;
 }
 
 /** Drop the rows of windows that ended (the hourly purge job). */

@@ -86,14 +86,24 @@ describe("calendar-feed fetches", () => {
     expect(statuses).toEqual([404, 404, 404, 404, 404, 429]);
   });
 
+  it("a burst of concurrent fetches of one new token lets exactly the limit through, and never a 500", async () => {
+    const created = await t.http().post(`/api/calendar-feed?accountId=${(await makeAccount(t.ds)).id}`).set(auth(owner));
+    const path = new URL(created.body.url).pathname;
+    const answers = await Promise.all(Array.from({ length: 20 }, () => t.http().get(path).set("X-Forwarded-For", nextAddress())));
+    const statuses = answers.map((r) => r.status).sort();
+    expect(statuses).toEqual([200, 200, ...Array(18).fill(429)]);
+  });
+
   it("keeps the counts in MariaDB, keyed by hashes only", async () => {
     const rows: { key: string; points: number; expire: string }[] = await t.ds.query(`SELECT \`key\`, points, expire FROM ${RATE_LIMIT_TABLE}`);
     expect(rows.length).toBeGreaterThan(0);
     for (const r of rows) expect(r.key).toMatch(/^(tokenCheck|feedToken|feedAddress|checkout):[0-9a-f]{64}$/);
     expect(rows.some((r) => r.key.includes("198.51.100"))).toBe(false);
     // A second app with a context of its own on the same database (another instance) sees the same counts.
+    const ip = nextAddress();
+    for (let i = 0; i < 5; i++) expect((await t.http().get(`/api/feeds/other${i}.ics`).set("X-Forwarded-For", ip)).status).toBe(404);
     const other = request(createApp({ ...t.ctx }));
-    expect((await other.get("/api/feeds/guess0.ics").set("X-Forwarded-For", `198.51.100.${addressSeq}`)).status).toBe(429);
+    expect((await other.get("/api/feeds/other5.ics").set("X-Forwarded-For", ip)).status).toBe(429);
   });
 
   it("the purge drops ended windows only", async () => {
