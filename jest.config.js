@@ -1,10 +1,13 @@
 /** One Jest config, three projects: app screens (jest-expo), server + shared (node), browser journeys (node + Chromium). */
+// The server code compiled as `npm start` runs it: tsx (esbuild) has legacy decorators and emits no decorator metadata
+// (esbuild does not support emitDecoratorMetadata; tsconfig.json has it off), so swc emits none either. An entity
+// column without an explicit `type` then fails here as it does at start-up (tests/server/decorator-metadata.test.ts).
 const swc = [
   "@swc/jest",
   {
     jsc: {
       parser: { syntax: "typescript", decorators: true },
-      transform: { legacyDecorator: true, decoratorMetadata: true },
+      transform: { legacyDecorator: true, decoratorMetadata: false },
       target: "es2022",
     },
     module: { type: "commonjs" },

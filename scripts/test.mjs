@@ -79,7 +79,9 @@ async function main() {
       MAIL_SMTP_PORT: String(smtpPort), MAIL_HTTP_PORT: String(mailHttpPort), PUBLIC_URL: `http://127.0.0.1:${port}`, WEB_DIST: webDist(),
       STRIPE_API_PORT: String(stripePort), STRIPE_FAKE_PORT: String(stripePort), STRIPE_WEBHOOK_URL: `http://127.0.0.1:${port}/api/webhooks/stripe`, STRIPE_FAKE_STATE: path.join(testEnv.PANWISE_DATA_DIR, "stripe-fake.json"),
       // Production mode refuses the published local secret and key: this run's own, given to the fake and the server alike.
-      STRIPE_WEBHOOK_SECRET: `whsec_${crypto.randomBytes(24).toString("hex")}`, STRIPE_SECRET_KEY: `sk_test_${crypto.randomBytes(12).toString("hex")}` };
+      STRIPE_WEBHOOK_SECRET: `whsec_${crypto.randomBytes(24).toString("hex")}`, STRIPE_SECRET_KEY: `sk_test_${crypto.randomBytes(12).toString("hex")}`,
+      // …and a generated JWT secret (production wants JWT_SECRET set, server/config.ts).
+      JWT_SECRET: crypto.randomBytes(48).toString("hex") };
     const stripe = startChild("stripe", "node", ["--import", "tsx", "fakes/stripe/main.ts"], { env, quiet: true });
     cleanups.push(stopChild(stripe));
     await waitFor("the test Stripe fake", () => httpOk(`http://127.0.0.1:${stripePort}/_fake/webhooks`), { timeoutMs: 30000 });

@@ -6,6 +6,8 @@ import pinoHttp from "pino-http";
 import type { AppContext } from "./http/context";
 import { apiNotFound, errorHandler } from "./http/errors";
 import { authenticate } from "./http/auth";
+import { requestIdFor } from "./http/request-id";
+import { rateLimits } from "./http/rate-limits";
 import { authRoutes } from "./auth/auth.routes";
 import { invitationsRoutes, usersRoutes } from "./users/users.routes";
 import { accountsRoutes } from "./accounts/accounts.routes";
@@ -54,7 +56,7 @@ export function apiRouter(ctx: AppContext): Router {
   api.use("/orders", ordersRoutes(ctx));
   api.use("/standing-orders", standingOrderRoutes(ctx));
   api.use("/calendar-feed", feedRoutes(ctx));
-  api.use("/feeds", publicFeedRoutes(ctx));
+  api.use("/feeds", rateLimits(ctx).feed, publicFeedRoutes(ctx)); // per address and per feed token
   api.use("/ingredients", ingredientRoutes(ctx));
   api.use("/formulas", formulaRoutes(ctx));
   api.use("/production", productionRoutes(ctx));
@@ -96,6 +98,7 @@ export function createApp(ctx: AppContext) {
   app.use(
     pinoHttp({
       logger: ctx.logger,
+      genReqId: requestIdFor,
       customLogLevel: (_req, res, err) => (err || res.statusCode >= 500 ? "error" : res.statusCode >= 400 ? "warn" : "info"),
       serializers: {
         // Link tokens travel in some paths (invitation check, calendar feed): never log them.

@@ -157,7 +157,7 @@ describe("issuing statements by hand (issue 8 item 12)", () => {
     expect(statuses.filter((s) => s !== 200 && s !== 409)).toEqual([]);
     expect(statuses.filter((s) => s === 200).length).toBeGreaterThanOrEqual(1);
     for (const r of answers.filter((x) => x.status === 409)) {
-      expect(r.body.error).toEqual({ code: "already_running", message: "Statements are already being issued; try again in a minute." });
+      expect(r.body.error).toEqual({ code: "already_running", message: "Statements are already being issued; try again in a minute.", requestId: expect.any(String) });
     }
     // Every account got exactly one statement, whichever request issued it.
     for (const a of accounts) expect(await t.ds.getRepository(Invoice).countBy({ accountId: a.id })).toBe(1);
