@@ -1,3 +1,3 @@
-import { PayoutsScreen } from "../../../../../components/screens/billing/PayoutsScreens";
+import { PayoutsScreen } from "../../../../../components/screens/billing/PayoutsScreen";
 
 export default PayoutsScreen;
