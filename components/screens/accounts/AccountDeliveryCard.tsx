@@ -14,7 +14,7 @@ import { usePriceListsQuery } from "../../api/priceLists";
 import { useZodForm } from "../../forms/useZodForm";
 import { DELIVERY_FIELDS, deliveryInput, deliverySchema, deliveryValues } from "./deliveryForm";
 import { useMoney } from "../ordering/parts";
-import { describePriceList } from "../pricing/PriceListsScreen";
+import { describePriceList } from "../pricing/priceListForm";
 import { listWeekdays } from "../buyer/StandingOrderScreen";
 import { WEEKDAY_SHORT, type Weekday } from "../../../shared/calendar";
 import type { PriceListDto } from "../../../shared/schemas/catalog";
