@@ -13,9 +13,10 @@ export interface ZodFormOptions<V extends object, S extends ZodTypeAny> {
   initial: V | (() => V);
   /**
    * What the schema parses, made from the form's values. Leave it out when the values are the schema's
-   * input already (`V` = `z.input<S>`); give it where inputs hold text for numbers ("8.75" → 875).
+   * input already (`V` = `z.input<S>`); give it where inputs hold text for numbers ("8.75" → 875). Any field
+   * may still be missing (a choice not made yet): the schema's check says so beside it.
    */
-  toInput?: (values: V) => z.input<S>;
+  toInput?: (values: V) => Draft<z.input<S>>;
   /**
    * The field names this form shows an error beside (the schema's paths, as the server names them too),
    * or a test for them (rows of a list: `lines.0.quantity`). A rejected request's errors for any other name
@@ -62,6 +63,9 @@ export interface ZodForm<V extends object, Out> {
    */
   submit: (onValid: (data: Out) => unknown) => Promise<boolean>;
 }
+
+/** A schema input whose fields may still be left out or null (the form's check names them). */
+export type Draft<T> = T extends object ? { [K in keyof T]?: T[K] | null } : T;
 
 type StringKeys<V> = { [K in keyof V]: V[K] extends string ? K : never }[keyof V];
 

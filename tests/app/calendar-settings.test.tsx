@@ -1,8 +1,8 @@
 /** The owner's delivery days (components/screens/settings): the settings form and its closed dates, both on the one form hook. */
 import { fireEvent, screen, waitFor } from "expo-router/testing-library";
-import { BAKERY, OWNER, SETTINGS, apiError, mockApi, renderApp, sessionRoutes, signedInAs, type FakeRequest } from "./helpers";
+import { BAKERY, OWNER, SETTINGS, apiError, mockApi, renderApp, sessionRoutes, signedInAs, type FakeReply, type FakeRequest } from "./helpers";
 
-function routes(put: (req: FakeRequest) => { status?: number; body: unknown }) {
+function routes(put: (req: FakeRequest) => FakeReply) {
   return { ...sessionRoutes(OWNER), "GET /api/bakery": { body: { bakery: BAKERY } }, "GET /api/settings/calendar": { body: { settings: SETTINGS } }, "PUT /api/settings/calendar": put };
 }
 

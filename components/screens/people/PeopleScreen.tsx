@@ -7,7 +7,7 @@ import { TextField } from "../../ui/TextField";
 import { Button } from "../../ui/Button";
 import { LinkButton } from "../../ui/LinkButton";
 import { FormError, Notice } from "../../ui/FormError";
-import { EmptyState, ErrorState, LoadingState } from "../../ui/States";
+import { QueryStates } from "../../ui/QueryStates";
 import { RoleBadge } from "../../ui/Badge";
 import { AppText } from "../../ui/Text";
 import { useSignedInUser } from "../../auth/useAuth";
@@ -59,13 +59,17 @@ export function PeopleScreen({ invited }: { invited?: string }) {
             />
           </View>
         </View>
-        {users.isPending ? (
-          <LoadingState label="Loading people…" />
-        ) : users.isError ? (
-          <ErrorState error={users.error} title="People didn't load" onRetry={() => users.refetch()} retrying={users.isFetching} testID="people-error" />
-        ) : users.data.length === 0 ? (
-          <EmptyState icon="users" title={search ? "No one matches" : "No one here yet"} message={search ? "Try a name, an e-mail or an account." : undefined} testID="people-empty" />
-        ) : wide ? (
+        <QueryStates
+          query={users}
+          testID="people"
+          loadingTestID="loading"
+          loadingLabel="Loading people…"
+          errorTitle="People didn't load"
+          isEmpty={(rows) => rows.length === 0}
+          empty={{ icon: "users", title: search ? "No one matches" : "No one here yet", message: search ? "Try a name, an e-mail or an account." : undefined }}
+        >
+          {(rows) =>
+            wide ? (
           <View style={styles.table} testID="people-table">
             <View style={styles.tableHead}>
               {[
@@ -82,19 +86,21 @@ export function PeopleScreen({ invited }: { invited?: string }) {
                 </View>
               ))}
             </View>
-            {users.data.map((u, i) => (
+            {rows.map((u, i) => (
               <View key={u.id} style={i > 0 ? styles.divider : undefined}>
                 <UserRow user={u} isSelf={u.id === me.id} wide />
               </View>
             ))}
           </View>
-        ) : (
+            ) : (
           <View style={styles.cards} testID="people-list">
-            {users.data.map((u) => (
+            {rows.map((u) => (
               <UserRow key={u.id} user={u} isSelf={u.id === me.id} wide={false} />
             ))}
           </View>
-        )}
+            )
+          }
+        </QueryStates>
       </View>
     </Screen>
   );
@@ -102,19 +108,20 @@ export function PeopleScreen({ invited }: { invited?: string }) {
 
 function Invitations({ wide }: { wide: boolean }) {
   const invitations = useInvitationsQuery();
-  if (invitations.isPending) return <LoadingState label="Loading invitations…" testID="invitations-loading" />;
-  if (invitations.isError) {
-    return <ErrorState error={invitations.error} title="Invitations didn't load" onRetry={() => invitations.refetch()} retrying={invitations.isFetching} testID="invitations-error" />;
-  }
-  if (invitations.data.length === 0) return null;
   return (
-    <Card title={`Waiting invitations (${invitations.data.length})`} testID="invitations-card">
-      <View>
-        {invitations.data.map((inv, i) => (
-          <InvitationLine key={inv.id} invitation={inv} first={i === 0} wide={wide} />
-        ))}
-      </View>
-    </Card>
+    <QueryStates query={invitations} testID="invitations" loadingLabel="Loading invitations…" errorTitle="Invitations didn't load">
+      {(waiting) =>
+        waiting.length === 0 ? null : (
+          <Card title={`Waiting invitations (${waiting.length})`} testID="invitations-card">
+            <View>
+              {waiting.map((inv, i) => (
+                <InvitationLine key={inv.id} invitation={inv} first={i === 0} wide={wide} />
+              ))}
+            </View>
+          </Card>
+        )
+      }
+    </QueryStates>
   );
 }
 

@@ -1,4 +1,5 @@
 import React, { useState } from "react";
+import { z } from "zod";
 import { StyleSheet, View } from "react-native";
 import { Button } from "../../ui/Button";
 import { ChoiceGroup } from "../../ui/ChoiceGroup";
@@ -8,11 +9,10 @@ import { AppText } from "../../ui/Text";
 import { useUpdateUserMutation } from "../../api/users";
 import { useBakeryTimeZone } from "../../api/bakery";
 import { ApiError, messageOf } from "../../api/client";
-import { splitError, validate } from "../../forms/errors";
+import { useZodForm } from "../../forms/useZodForm";
 import { formatDateTime } from "../../format";
 import { userUpdateSchema, type UserDto } from "../../../shared/schemas/users";
 import { ROLE_LABELS, type Role } from "../../../shared/roles";
-import type { FieldErrors } from "../../../shared/errors";
 import { AccountPicker } from "./AccountPicker";
 import { ROLE_CHOICES } from "./roleChoices";
 import { colors, radii, space } from "../../theme";
@@ -22,6 +22,13 @@ export interface UserRowProps {
   isSelf: boolean;
   wide: boolean;
 }
+
+const ROLE_FIELDS = ["role", "accountId"] as const;
+
+/** A role change: the shared update schema, and a buyer needs the account they order for. */
+const ROLE_CHANGE = userUpdateSchema.superRefine((v, ctx) => {
+  if (v.role === "buyer" && !v.accountId) ctx.addIssue({ code: z.ZodIssueCode.custom, path: ["accountId"], message: "Choose the customer account this buyer orders for." });
+});
 
 /** Why a change was refused, in words the owner can act on. */
 export function userChangeMessage(error: unknown): string {
@@ -36,61 +43,40 @@ export function UserRow({ user, isSelf, wide }: UserRowProps) {
   const mutation = useUpdateUserMutation();
   const timeZone = useBakeryTimeZone();
   const [editing, setEditing] = useState(false);
-  const [role, setRole] = useState<Role>(user.role);
-  const [accountId, setAccountId] = useState<number | null>(user.accountId);
-  const [fields, setFields] = useState<FieldErrors>({});
-  const [error, setError] = useState<string | null>(null);
+  const form = useZodForm({
+    schema: ROLE_CHANGE,
+    initial: { role: user.role, accountId: user.accountId },
+    toInput: (v) => (v.role === "buyer" ? v : { role: v.role, accountId: null }),
+    fields: ROLE_FIELDS,
+    manyMessage: null,
+    errorMessage: userChangeMessage,
+  });
+  const { values, errors: fields } = form;
   const [done, setDone] = useState<string | null>(null);
 
   const startEdit = () => {
-    setRole(user.role);
-    setAccountId(user.accountId);
-    setFields({});
-    setError(null);
+    form.reset({ role: user.role, accountId: user.accountId });
     setDone(null);
     setEditing(true);
   };
 
-  const fail = (err: unknown) => {
-    const split = splitError(err, ["role", "accountId"]);
-    setFields(split.fields);
-    setError(split.formError ? userChangeMessage(err) : null);
-  };
-
   const saveRole = () => {
-    setError(null);
     setDone(null);
-    const patch = role === "buyer" ? { role, accountId } : { role, accountId: null };
-    const checked = validate(userUpdateSchema, patch);
-    if (!checked.ok) {
-      setFields(checked.fields);
-      return;
-    }
-    if (role === "buyer" && !accountId) {
-      setFields({ accountId: "Choose the customer account this buyer orders for." });
-      return;
-    }
-    setFields({});
-    mutation.mutate(
-      { id: user.id, patch: checked.data },
-      {
-        onSuccess: (saved) => {
-          setEditing(false);
-          setDone(`${saved.name} is now ${saved.role === "owner" ? "the" : "a"} ${ROLE_LABELS[saved.role].toLowerCase()}${saved.accountName ? ` for ${saved.accountName}` : ""}.`);
-        },
-        onError: fail,
-      },
-    );
+    void form.submit(async (patch) => {
+      const saved = await mutation.mutateAsync({ id: user.id, patch });
+      setEditing(false);
+      setDone(`${saved.name} is now ${saved.role === "owner" ? "the" : "a"} ${ROLE_LABELS[saved.role].toLowerCase()}${saved.accountName ? ` for ${saved.accountName}` : ""}.`);
+    });
   };
 
   const toggleDisabled = () => {
-    setError(null);
+    form.setFormError(null);
     setDone(null);
     mutation.mutate(
       { id: user.id, patch: { disabled: !user.disabled } },
       {
         onSuccess: (saved) => setDone(saved.disabled ? `${saved.name} can no longer sign in.` : `${saved.name} can sign in again.`),
-        onError: (err) => setError(userChangeMessage(err)),
+        onError: (err) => form.setFormError(userChangeMessage(err)),
       },
     );
   };
@@ -162,13 +148,13 @@ export function UserRow({ user, isSelf, wide }: UserRowProps) {
         </View>
       )}
       {done ? <Notice message={done} testID={`user-${user.id}-done`} /> : null}
-      <FormError message={error} testID={`user-${user.id}-error`} />
+      <FormError message={form.formError} testID={`user-${user.id}-error`} />
       {editing ? (
         <View style={styles.editor} testID={`user-${user.id}-editor`}>
-          <ChoiceGroup<Role> label={`New role for ${user.name}`} choices={ROLE_CHOICES} value={role} onChange={setRole} error={fields.role} testID={`user-${user.id}-role`} />
-          {role === "buyer" ? <AccountPicker value={accountId} onChange={setAccountId} error={fields.accountId} testID={`user-${user.id}-account`} /> : null}
+          <ChoiceGroup<Role> label={`New role for ${user.name}`} choices={ROLE_CHOICES} value={values.role} onChange={form.set("role")} error={fields.role} testID={`user-${user.id}-role`} />
+          {values.role === "buyer" ? <AccountPicker value={values.accountId} onChange={form.set("accountId")} error={fields.accountId} testID={`user-${user.id}-account`} /> : null}
           <View style={styles.actions}>
-            <Button label="Save role" small busy={mutation.isPending} onPress={saveRole} testID={`user-${user.id}-save-role`} />
+            <Button label="Save role" small busy={form.submitting} onPress={saveRole} testID={`user-${user.id}-save-role`} />
             <Button label="Cancel" small variant="ghost" onPress={() => setEditing(false)} />
           </View>
         </View>
