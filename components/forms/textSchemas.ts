@@ -8,7 +8,8 @@ export function readText<T>(read: (text: string) => { value: T } | { message: st
   return z.string().transform((text, ctx): T => {
     const result = read(text);
     if ("message" in result) {
-      ctx.addIssue({ code: z.ZodIssueCode.custom, message: result.message });
+      // Fatal: checks over the whole form (a superRefine) wait until every input could be read.
+      ctx.addIssue({ code: z.ZodIssueCode.custom, message: result.message, fatal: true });
       return z.NEVER;
     }
     return result.value;

@@ -11,7 +11,7 @@ import { QueryStates } from "../../ui/QueryStates";
 import { StatusBadge } from "../../ui/Badge";
 import { AppText } from "../../ui/Text";
 import { useSignedInUser } from "../../auth/useAuth";
-import { useAccountQuery, useUpdateAccountMutation } from "../../api/accounts";
+import { useAccountQuery } from "../../api/accounts";
 import { ApiError } from "../../api/client";
 import { useBakeryTimeZone } from "../../api/bakery";
 import { formatDateTime } from "../../format";
