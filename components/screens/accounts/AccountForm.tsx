@@ -1,7 +1,7 @@
 import React from "react";
 import { StyleSheet, View } from "react-native";
 import { Card } from "../../ui/Card";
-import { TextField } from "../../ui/TextField";
+import { EMAIL_INPUT, TextField } from "../../ui/TextField";
 import { ChoiceGroup } from "../../ui/ChoiceGroup";
 import { Button } from "../../ui/Button";
 import { TextLink } from "../../ui/TextLink";
@@ -81,10 +81,7 @@ export function AccountForm({ initial, withStatus, submitLabel, onSubmit, cancel
         label="Billing e-mail"
         testID="account-billingEmail"
         {...form.text("billingEmail")}
-        keyboardType="email-address"
-        inputMode="email"
-        autoCapitalize="none"
-        autoCorrect={false}
+        {...EMAIL_INPUT}
         hint="Invoices and statements go here."
       />
       {withStatus ? (

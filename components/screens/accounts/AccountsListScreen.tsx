@@ -3,7 +3,7 @@ import { StyleSheet, View } from "react-native";
 import { useRouter } from "expo-router";
 import { Screen } from "../../ui/Screen";
 import { PageHeader } from "../../ui/PageHeader";
-import { TextField } from "../../ui/TextField";
+import { SEARCH_INPUT, TextField } from "../../ui/TextField";
 import { ChoiceGroup } from "../../ui/ChoiceGroup";
 import { QueryStates } from "../../ui/QueryStates";
 import { DataTable } from "../../ui/DataTable";
@@ -55,9 +55,7 @@ export function AccountsListScreen() {
             value={q}
             onChangeText={setQ}
             testID="accounts-search"
-            autoCapitalize="none"
-            autoCorrect={false}
-            returnKeyType="search"
+            {...SEARCH_INPUT}
           />
         </View>
         <ChoiceGroup label="Status" choices={FILTERS} value={status} onChange={setStatus} testID="accounts-status" />

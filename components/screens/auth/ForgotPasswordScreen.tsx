@@ -1,6 +1,6 @@
 import React, { useState } from "react";
 import { AuthFrame } from "./AuthFrame";
-import { TextField } from "../../ui/TextField";
+import { EMAIL_INPUT, TextField } from "../../ui/TextField";
 import { Button } from "../../ui/Button";
 import { FormError, Notice } from "../../ui/FormError";
 import { TextLink } from "../../ui/TextLink";
@@ -36,10 +36,7 @@ export function ForgotPasswordScreen() {
             accessibilityLabel="E-mail"
             testID="forgot-password-email"
             {...form.text("email")}
-            keyboardType="email-address"
-            inputMode="email"
-            autoCapitalize="none"
-            autoCorrect={false}
+            {...EMAIL_INPUT}
             autoComplete="email"
             returnKeyType="send"
             onSubmitEditing={submit}

@@ -1,7 +1,7 @@
 import React, { useRef } from "react";
 import { StyleSheet, View, type TextInput } from "react-native";
 import { AuthFrame } from "./AuthFrame";
-import { TextField } from "../../ui/TextField";
+import { EMAIL_INPUT, TextField } from "../../ui/TextField";
 import { Button } from "../../ui/Button";
 import { FormError } from "../../ui/FormError";
 import { TextLink } from "../../ui/TextLink";
@@ -32,12 +32,9 @@ export function SignInScreen() {
           accessibilityLabel="E-mail"
           testID="sign-in-email"
           {...form.text("email")}
-          keyboardType="email-address"
-          autoCapitalize="none"
-          autoCorrect={false}
+          {...EMAIL_INPUT}
           autoComplete="email"
           textContentType="username"
-          inputMode="email"
           returnKeyType="next"
           onSubmitEditing={() => passwordRef.current?.focus()}
           submitBehavior="submit"

@@ -3,7 +3,7 @@ import { StyleSheet, View } from "react-native";
 import { useRouter } from "expo-router";
 import { Screen } from "../../ui/Screen";
 import { PageHeader } from "../../ui/PageHeader";
-import { TextField } from "../../ui/TextField";
+import { SEARCH_INPUT, TextField } from "../../ui/TextField";
 import { ChoiceGroup } from "../../ui/ChoiceGroup";
 import { Button } from "../../ui/Button";
 import { FormError, Notice } from "../../ui/FormError";
@@ -107,9 +107,7 @@ export function InvoicesScreen({ mode, accountId: startAccount }: InvoicesScreen
             value={q}
             onChangeText={setQ}
             testID="invoices-search"
-            autoCapitalize="none"
-            autoCorrect={false}
-            returnKeyType="search"
+            {...SEARCH_INPUT}
           />
         </View>
         <ChoiceGroup<Show> label="Show" choices={office ? OFFICE_SHOW : BUYER_SHOW} value={show} onChange={setShow} testID="invoices-status" />

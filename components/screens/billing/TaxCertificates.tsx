@@ -8,6 +8,7 @@ import { Badge, type BadgeTone } from "../../ui/Badge";
 import { FormError, Notice } from "../../ui/FormError";
 import { ProgressBar } from "../../ui/ProgressBar";
 import { FieldFrame } from "../../ui/Field";
+import { HiddenFileInput } from "../../ui/HiddenFileInput";
 import { QueryStates } from "../../ui/QueryStates";
 import { AppText } from "../../ui/Text";
 import { messageOf } from "../../api/client";
@@ -176,28 +177,17 @@ function CertificateUpload({ accountId }: { accountId: number }) {
         error={form.errors.file}
         testID="cert-choose"
       >
-      {done ? <Notice message="Certificate uploaded. The bakery will review it." testID="cert-uploaded" /> : null}
-      <FormError message={form.formError} testID="cert-upload-error" />
-      <input
-        ref={input}
-        type="file"
-        accept="application/pdf,image/jpeg,image/png"
-        style={{ display: "none" }}
-        data-testid="cert-input"
-        aria-label="Certificate file"
-        onChange={(e) => {
-          pick(e.currentTarget.files?.[0]);
-          e.currentTarget.value = "";
-        }}
-      />
-      <View style={billingStyles.buttons}>
-        <Button label={file ? "Choose another file" : "Choose file"} icon="paperclip" variant="secondary" onPress={() => input.current?.click()} testID="cert-choose" />
-        {file ? (
-          <AppText variant="small" testID="cert-file-name" style={styles.fileName} numberOfLines={1}>
-            {file.name}
-          </AppText>
-        ) : null}
-      </View>
+        {done ? <Notice message="Certificate uploaded. The bakery will review it." testID="cert-uploaded" /> : null}
+        <FormError message={form.formError} testID="cert-upload-error" />
+        <HiddenFileInput ref={input} accept={CERT_TYPES.join(",")} onPick={pick} label="Certificate file" testID="cert-input" />
+        <View style={billingStyles.buttons}>
+          <Button label={file ? "Choose another file" : "Choose file"} icon="paperclip" variant="secondary" onPress={() => input.current?.click()} testID="cert-choose" />
+          {file ? (
+            <AppText variant="small" testID="cert-file-name" style={styles.fileName} numberOfLines={1}>
+              {file.name}
+            </AppText>
+          ) : null}
+        </View>
       </FieldFrame>
       <TextField label="Expires on" placeholder="YYYY-MM-DD" {...form.text("expiresOn")} testID="cert-expires" inputMode="numeric" maxLength={10} />
       {upload.isPending ? <ProgressBar value={upload.progress} label="Uploading the certificate" testID="cert-progress" /> : null}

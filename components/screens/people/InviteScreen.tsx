@@ -4,7 +4,7 @@ import { useRouter } from "expo-router";
 import { Screen } from "../../ui/Screen";
 import { PageHeader } from "../../ui/PageHeader";
 import { Card } from "../../ui/Card";
-import { TextField } from "../../ui/TextField";
+import { EMAIL_INPUT, TextField } from "../../ui/TextField";
 import { ChoiceGroup } from "../../ui/ChoiceGroup";
 import { Button } from "../../ui/Button";
 import { TextLink } from "../../ui/TextLink";
@@ -54,10 +54,7 @@ export function InviteScreen() {
           label="E-mail"
           testID="invite-email"
           {...form.text("email")}
-          keyboardType="email-address"
-          inputMode="email"
-          autoCapitalize="none"
-          autoCorrect={false}
+          {...EMAIL_INPUT}
         />
         <TextField label="Name" optional hint="They can change it when they accept." testID="invite-name" {...form.text("name")} autoCapitalize="words" />
         <ChoiceGroup<Role>

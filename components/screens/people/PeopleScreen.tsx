@@ -3,7 +3,7 @@ import { StyleSheet, View } from "react-native";
 import { Screen } from "../../ui/Screen";
 import { PageHeader } from "../../ui/PageHeader";
 import { Card } from "../../ui/Card";
-import { TextField } from "../../ui/TextField";
+import { SEARCH_INPUT, TextField } from "../../ui/TextField";
 import { Button } from "../../ui/Button";
 import { LinkButton } from "../../ui/LinkButton";
 import { FormError, Notice } from "../../ui/FormError";
@@ -53,9 +53,7 @@ export function PeopleScreen({ invited }: { invited?: string }) {
               value={q}
               onChangeText={setQ}
               testID="people-search"
-              autoCapitalize="none"
-              autoCorrect={false}
-              returnKeyType="search"
+              {...SEARCH_INPUT}
             />
           </View>
         </View>
