@@ -42,28 +42,54 @@ function Cell({ content, align, strong }: { content: React.ReactNode; align: Col
   return <>{content}</>;
 }
 
+/** The table's frame: a rounded card holding a header row and the rows (for rows a screen builds itself). */
+export function TableFrame({ testID, children }: { testID?: string; children: React.ReactNode }) {
+  return (
+    <View style={styles.table} testID={testID} role="table">
+      {children}
+    </View>
+  );
+}
+
+type ColumnFrame = Pick<Column<unknown>, "key" | "label" | "flex" | "align">;
+
+/** One cell of a column: its share of the width and its alignment. */
+export function TableCell({ column, header, children }: { column: Omit<ColumnFrame, "key" | "label">; header?: boolean; children: React.ReactNode }) {
+  return (
+    <View style={[styles.cell, { flex: column.flex ?? 1 }, column.align === "right" && styles.right]} role={header ? "columnheader" : "cell"}>
+      {children}
+    </View>
+  );
+}
+
+/** The header row: each column's label. */
+export function TableHeaderRow({ columns }: { columns: readonly ColumnFrame[] }) {
+  return (
+    <View style={[styles.row, styles.header]} role="row">
+      {columns.map((c) => (
+        <TableCell key={c.key} column={c} header>
+          <AppText variant="overline" color="muted" align={c.align === "right" ? "right" : undefined}>
+            {c.label}
+          </AppText>
+        </TableCell>
+      ))}
+    </View>
+  );
+}
+
 /**
  * A table for wide screens: a header row, one line per item (rows can open the item, and a row that needs
  * attention is tinted red), and an optional totals row.
  */
 export function DataTable<T>({ columns, rows, rowKey, onRowPress, rowLabel, rowTestID, rowAlert, footer, footerTestID, testID }: DataTableProps<T>) {
-  const cellStyle = (c: Column<T>) => [styles.cell, { flex: c.flex ?? 1 }, c.align === "right" && styles.right];
   return (
-    <View style={styles.table} testID={testID} role="table">
-      <View style={[styles.row, styles.header]} role="row">
-        {columns.map((c) => (
-          <View key={c.key} style={cellStyle(c)} role="columnheader">
-            <AppText variant="overline" color="muted" align={c.align === "right" ? "right" : undefined}>
-              {c.label}
-            </AppText>
-          </View>
-        ))}
-      </View>
+    <TableFrame testID={testID}>
+      <TableHeaderRow columns={columns} />
       {rows.map((row, i) => {
         const cells = columns.map((c) => (
-          <View key={c.key} style={cellStyle(c)} role="cell">
+          <TableCell key={c.key} column={c}>
             <Cell content={c.render(row)} align={c.align} />
-          </View>
+          </TableCell>
         ));
         const divided = i < rows.length - 1;
         const alert = rowAlert?.(row);
@@ -95,13 +121,13 @@ export function DataTable<T>({ columns, rows, rowKey, onRowPress, rowLabel, rowT
       {footer ? (
         <View style={[styles.row, styles.footer]} role="row" testID={footerTestID}>
           {columns.map((c) => (
-            <View key={c.key} style={cellStyle(c)} role="cell">
+            <TableCell key={c.key} column={c}>
               <Cell content={c.footer ?? ""} align={c.align} strong />
-            </View>
+            </TableCell>
           ))}
         </View>
       ) : null}
-    </View>
+    </TableFrame>
   );
 }
 

@@ -1,6 +1,6 @@
 /** The one table (components/ui/DataTable.tsx) and list card (components/ui/ListCard.tsx) every list screen uses. */
 import { Text } from "react-native";
-import { fireEvent, render, screen } from "@testing-library/react-native";
+import { act, fireEvent, render, screen } from "@testing-library/react-native";
 import { DataTable } from "../../components/ui/DataTable";
 import { ListCard } from "../../components/ui/ListCard";
 import { colors } from "../../components/theme";
@@ -68,7 +68,7 @@ describe("DataTable", () => {
 });
 
 describe("ListCard", () => {
-  it("a pressable row, or a card that does not open (no button), tinted when it needs attention", () => {
+  it("a pressable row, or a card that does not open (no button), tinted when it needs attention", async () => {
     const open = jest.fn();
     render(
       <>
@@ -80,6 +80,8 @@ describe("ListCard", () => {
         </ListCard>
       </>,
     );
+    // The chevron's icon font loads after the first render.
+    await act(async () => undefined);
     fireEvent.press(screen.getByRole("button", { name: "Open Tidewater" }));
     expect(open).toHaveBeenCalled();
     expect(screen.getAllByRole("button")).toHaveLength(1);

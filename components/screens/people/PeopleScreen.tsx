@@ -9,6 +9,7 @@ import { LinkButton } from "../../ui/LinkButton";
 import { FormError, Notice } from "../../ui/FormError";
 import { QueryStates } from "../../ui/QueryStates";
 import { RoleBadge } from "../../ui/Badge";
+import { TableFrame, TableHeaderRow } from "../../ui/DataTable";
 import { AppText } from "../../ui/Text";
 import { useSignedInUser } from "../../auth/useAuth";
 import { useUsersQuery } from "../../api/users";
@@ -19,8 +20,8 @@ import { useDebounced } from "../../forms/useDebounced";
 import { formatDateTime } from "../../format";
 import { useIsWide } from "../../shell/useIsWide";
 import type { InvitationDto } from "../../../shared/schemas/users";
-import { UserRow } from "./UserRow";
-import { colors, layout, radii, space } from "../../theme";
+import { PEOPLE_COLUMNS, UserRow } from "./UserRow";
+import { colors, space } from "../../theme";
 
 /** The owner's people desk: everyone with a sign-in, waiting invitations, and the way to invite. */
 export function PeopleScreen({ invited }: { invited?: string }) {
@@ -68,28 +69,14 @@ export function PeopleScreen({ invited }: { invited?: string }) {
         >
           {(rows) =>
             wide ? (
-          <View style={styles.table} testID="people-table">
-            <View style={styles.tableHead}>
-              {[
-                ["Person", 2.2],
-                ["Role", 1.4],
-                ["Sign-in", 0.9],
-                ["Last signed in", 1.2],
-                ["", 2],
-              ].map(([label, flex]) => (
-                <View key={String(label) || "actions"} style={{ flex: Number(flex) }}>
-                  <AppText variant="overline" color="muted">
-                    {String(label)}
-                  </AppText>
-                </View>
-              ))}
-            </View>
+          <TableFrame testID="people-table">
+            <TableHeaderRow columns={PEOPLE_COLUMNS} />
             {rows.map((u, i) => (
               <View key={u.id} style={i > 0 ? styles.divider : undefined}>
                 <UserRow user={u} isSelf={u.id === me.id} wide />
               </View>
             ))}
-          </View>
+          </TableFrame>
             ) : (
           <View style={styles.cards} testID="people-list">
             {rows.map((u) => (
@@ -171,15 +158,6 @@ const styles = StyleSheet.create({
   searchRow: { gap: space.md },
   searchRowWide: { flexDirection: "row", alignItems: "flex-end", justifyContent: "space-between" },
   searchWide: { width: 380 },
-  table: { backgroundColor: colors.surface, borderRadius: radii.lg, borderWidth: 1, borderColor: colors.border, overflow: "hidden" },
-  tableHead: {
-    flexDirection: "row",
-    gap: space.md,
-    backgroundColor: colors.sunken,
-    paddingHorizontal: space.md,
-    minHeight: layout.minTouch,
-    alignItems: "center",
-  },
   divider: { borderTopWidth: 1, borderTopColor: colors.border },
   cards: { gap: space.sm },
   invite: { paddingVertical: space.md, gap: space.sm },

@@ -6,6 +6,7 @@ import { ChoiceGroup } from "../../ui/ChoiceGroup";
 import { FormError, Notice } from "../../ui/FormError";
 import { Badge, RoleBadge } from "../../ui/Badge";
 import { AppText } from "../../ui/Text";
+import { TableCell } from "../../ui/DataTable";
 import { useUpdateUserMutation } from "../../api/users";
 import { useBakeryTimeZone } from "../../api/bakery";
 import { ApiError, messageOf } from "../../api/client";
@@ -24,6 +25,15 @@ export interface UserRowProps {
 }
 
 const ROLE_FIELDS = ["role", "accountId"] as const;
+
+/** The people table's columns (PeopleScreen draws the header, each UserRow its cells). */
+export const PEOPLE_COLUMNS = [
+  { key: "person", label: "Person", flex: 2.2 },
+  { key: "role", label: "Role", flex: 1.4 },
+  { key: "status", label: "Sign-in", flex: 0.9 },
+  { key: "last", label: "Last signed in", flex: 1.2 },
+  { key: "actions", label: "", flex: 2 },
+] as const;
 
 /** A role change: the shared update schema, and a buyer needs the account they order for. */
 const ROLE_CHANGE = userUpdateSchema.superRefine((v, ctx) => {
@@ -125,16 +135,16 @@ export function UserRow({ user, isSelf, wide }: UserRowProps) {
   return (
     <View style={[styles.row, !wide && styles.card]} testID={`user-row-${user.id}`}>
       {wide ? (
-        <View style={styles.wideLine}>
-          <View style={{ flex: 2.2 }}>{who}</View>
-          <View style={{ flex: 1.4 }}>{roleCell}</View>
-          <View style={{ flex: 0.9 }}>{status}</View>
-          <View style={{ flex: 1.2 }}>
+        <View style={styles.wideLine} role="row">
+          <TableCell column={PEOPLE_COLUMNS[0]}>{who}</TableCell>
+          <TableCell column={PEOPLE_COLUMNS[1]}>{roleCell}</TableCell>
+          <TableCell column={PEOPLE_COLUMNS[2]}>{status}</TableCell>
+          <TableCell column={PEOPLE_COLUMNS[3]}>
             <AppText variant="small" color="muted">
               {formatDateTime(user.lastSignInAt, timeZone)}
             </AppText>
-          </View>
-          <View style={{ flex: 2 }}>{actions}</View>
+          </TableCell>
+          <TableCell column={PEOPLE_COLUMNS[4]}>{actions}</TableCell>
         </View>
       ) : (
         <View style={styles.narrow}>
@@ -166,7 +176,7 @@ export function UserRow({ user, isSelf, wide }: UserRowProps) {
 const styles = StyleSheet.create({
   row: { gap: space.sm, paddingVertical: space.md, paddingHorizontal: space.md },
   card: { backgroundColor: colors.surface, borderRadius: radii.lg, borderWidth: 1, borderColor: colors.border, padding: space.lg },
-  wideLine: { flexDirection: "row", alignItems: "center", gap: space.md },
+  wideLine: { flexDirection: "row", alignItems: "center" },
   narrow: { gap: space.sm },
   narrowTop: { flexDirection: "row", justifyContent: "space-between", alignItems: "flex-start", gap: space.sm },
   who: { flexShrink: 1, minWidth: 0, gap: space.xxs },
