@@ -67,7 +67,6 @@ export function AccountsListScreen() {
         loadingTestID="loading"
         loadingLabel="Loading accounts…"
         errorTitle="Accounts didn't load"
-        isEmpty={(rows) => rows.length === 0}
         empty={
           filtered
             ? { icon: "search", title: "No accounts match", message: "Try other words, or show all statuses." }

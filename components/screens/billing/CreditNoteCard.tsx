@@ -6,6 +6,7 @@ import { TextField } from "../../ui/TextField";
 import { ChoiceGroup } from "../../ui/ChoiceGroup";
 import { Button } from "../../ui/Button";
 import { FieldFrame } from "../../ui/Field";
+import { FormActions } from "../../ui/FormActions";
 import { FormError, Notice } from "../../ui/FormError";
 import { AppText } from "../../ui/Text";
 import { useCreditNoteMutation, type InvoiceDetailDto } from "../../api/invoices";
@@ -99,10 +100,7 @@ export function CreditNoteCard({ detail }: { detail: InvoiceDetailDto }) {
           <AppText variant="bodyStrong" testID="credit-preview">
             {`Credit with tax: ${money(previewTotal, inv.currency)}${inv.taxRateBp ? ` (tax ${percent(inv.taxRateBp)})` : ""}`}
           </AppText>
-          <View style={billingStyles.buttons}>
-            <Button label="Issue credit note" icon="check" busy={form.submitting} onPress={submit} testID="credit-submit" />
-            <Button label="Cancel" variant="ghost" onPress={() => setOpen(false)} testID="credit-cancel" />
-          </View>
+          <FormActions submitLabel="Issue credit note" busy={form.submitting} onSubmit={submit} submitTestID="credit-submit" onCancel={() => setOpen(false)} cancelTestID="credit-cancel" />
         </View>
       )}
     </Card>

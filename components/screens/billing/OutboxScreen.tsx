@@ -117,7 +117,6 @@ export function OutboxScreen() {
         testID="outbox"
         loadingLabel="Loading outgoing mail…"
         errorTitle="The outbox didn't load"
-        isEmpty={(rows) => rows.length === 0}
         empty={{ icon: "mail", title: show === "all" ? "No e-mail yet" : `No ${STATUS_LABELS[show as MailStatus].toLowerCase()} e-mail`, message: "Invoices, receipts and invitations show here as they are sent." }}
       >
         {body}

@@ -34,7 +34,6 @@ export function PayoutsScreen() {
         testID="payouts"
         loadingLabel="Loading payouts…"
         errorTitle={unreachable ? "The card processor can't be reached" : "Payouts didn't load"}
-        isEmpty={(data) => data.length === 0}
         empty={{ icon: "dollar-sign", title: "No payouts yet", message: "Card payments are paid out to the bank every few days; each payout shows here." }}
       >
         {(rows) =>

@@ -4,13 +4,14 @@ import { Card } from "../../ui/Card";
 import { TextField } from "../../ui/TextField";
 import { ChoiceGroup } from "../../ui/ChoiceGroup";
 import { Button } from "../../ui/Button";
+import { FormActions } from "../../ui/FormActions";
 import { FormError, Notice } from "../../ui/FormError";
 import { AppText } from "../../ui/Text";
 import { PAYMENT_METHODS, useRecordPaymentMutation, type InvoiceDetailDto, type ManualPaymentMethod } from "../../api/invoices";
 import { useBakeryQuery } from "../../api/bakery";
 import { useZodForm } from "../../forms/useZodForm";
 import { toDecimal } from "../../../shared/money";
-import { METHOD_LABELS, billingStyles, money } from "./parts";
+import { METHOD_LABELS, money } from "./parts";
 import { PAYMENT_FIELDS, paymentInput, paymentSchema, type PaymentValues } from "./paymentForm";
 import { space } from "../../theme";
 
@@ -77,10 +78,7 @@ export function RecordPaymentCard({ detail }: { detail: InvoiceDetailDto }) {
           />
           <TextField label="Reference" hint="The transfer reference or check number." {...form.text("reference")} testID="payment-reference" maxLength={120} autoCorrect={false} />
           <TextField label="Received on" placeholder="YYYY-MM-DD" {...form.text("receivedOn")} testID="payment-received-on" inputMode="numeric" maxLength={10} />
-          <View style={billingStyles.buttons}>
-            <Button label="Save payment" icon="check" busy={form.submitting} onPress={submit} testID="payment-submit" />
-            <Button label="Cancel" variant="ghost" onPress={() => setOpen(false)} testID="payment-cancel" />
-          </View>
+          <FormActions submitLabel="Save payment" busy={form.submitting} onSubmit={submit} submitTestID="payment-submit" onCancel={() => setOpen(false)} cancelTestID="payment-cancel" />
         </View>
       )}
     </Card>

@@ -64,7 +64,6 @@ export function PeopleScreen({ invited }: { invited?: string }) {
           loadingTestID="loading"
           loadingLabel="Loading people…"
           errorTitle="People didn't load"
-          isEmpty={(rows) => rows.length === 0}
           empty={{ icon: "users", title: search ? "No one matches" : "No one here yet", message: search ? "Try a name, an e-mail or an account." : undefined }}
         >
           {(rows) =>

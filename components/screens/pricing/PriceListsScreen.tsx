@@ -30,7 +30,6 @@ export function PriceListsScreen({ notice }: { notice?: string }) {
         loadingTestID="loading"
         loadingLabel="Loading price lists…"
         errorTitle="Price lists didn't load"
-        isEmpty={(data) => data.length === 0}
         empty={{ icon: "tag", title: "No price lists yet", message: "Every account pays list prices until you make one.", action: <LinkButton href="/office/price-lists/new" label="New price list" icon="plus" /> }}
       >
         {(data) => (
