@@ -7,6 +7,7 @@ import { FormError, Notice } from "../../ui/FormError";
 import { Badge, RoleBadge } from "../../ui/Badge";
 import { AppText } from "../../ui/Text";
 import { TableCell } from "../../ui/DataTable";
+import { ListCard } from "../../ui/ListCard";
 import { useUpdateUserMutation } from "../../api/users";
 import { useBakeryTimeZone } from "../../api/bakery";
 import { ApiError, messageOf } from "../../api/client";
@@ -132,8 +133,8 @@ export function UserRow({ user, isSelf, wide }: UserRowProps) {
     </View>
   );
 
-  return (
-    <View style={[styles.row, !wide && styles.card]} testID={`user-row-${user.id}`}>
+  const content = (
+    <>
       {wide ? (
         <View style={styles.wideLine} role="row">
           <TableCell column={PEOPLE_COLUMNS[0]}>{who}</TableCell>
@@ -169,13 +170,23 @@ export function UserRow({ user, isSelf, wide }: UserRowProps) {
           </View>
         </View>
       ) : null}
+    </>
+  );
+  // From 1024 px a row of the people table; on a phone a card of its own.
+  return wide ? (
+    <View style={styles.row} testID={`user-row-${user.id}`}>
+      {content}
     </View>
+  ) : (
+    <ListCard testID={`user-row-${user.id}`}>
+      <View style={styles.cardBody}>{content}</View>
+    </ListCard>
   );
 }
 
 const styles = StyleSheet.create({
   row: { gap: space.sm, paddingVertical: space.md, paddingHorizontal: space.md },
-  card: { backgroundColor: colors.surface, borderRadius: radii.lg, borderWidth: 1, borderColor: colors.border, padding: space.lg },
+  cardBody: { flex: 1, minWidth: 0, gap: space.sm },
   wideLine: { flexDirection: "row", alignItems: "center" },
   narrow: { gap: space.sm },
   narrowTop: { flexDirection: "row", justifyContent: "space-between", alignItems: "flex-start", gap: space.sm },
