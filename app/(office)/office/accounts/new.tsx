@@ -1,6 +1,6 @@
 import React from "react";
 import { RequireRole } from "@/components/auth/RoleGate";
-import { NewAccountScreen } from "@/components/screens/accounts/AccountFormScreen";
+import { NewAccountScreen } from "@/components/screens/accounts/NewAccountScreen";
 import { ScreenTitle } from "@/components/ui/ScreenTitle";
 
 export default function NewAccountRoute() {

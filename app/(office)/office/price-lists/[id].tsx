@@ -1,7 +1,7 @@
 import React from "react";
 import { useLocalSearchParams } from "expo-router";
 import { RequireRole } from "@/components/auth/RoleGate";
-import { PriceListFormScreen } from "@/components/screens/pricing/PriceListsScreen";
+import { PriceListFormScreen } from "@/components/screens/pricing/PriceListFormScreen";
 import { idParam } from "@/components/routing";
 import { ScreenTitle } from "@/components/ui/ScreenTitle";
 

@@ -1,6 +1,6 @@
 import React from "react";
 import { RequireRole } from "@/components/auth/RoleGate";
-import { PriceListFormScreen } from "@/components/screens/pricing/PriceListsScreen";
+import { PriceListFormScreen } from "@/components/screens/pricing/PriceListFormScreen";
 import { ScreenTitle } from "@/components/ui/ScreenTitle";
 
 export default function NewPriceListRoute() {

@@ -1,7 +1,7 @@
 import React from "react";
 import { useLocalSearchParams } from "expo-router";
 import { RequireRole } from "@/components/auth/RoleGate";
-import { EditAccountScreen } from "@/components/screens/accounts/AccountFormScreen";
+import { EditAccountScreen } from "@/components/screens/accounts/EditAccountScreen";
 import { idParam } from "@/components/routing";
 import { ScreenTitle } from "@/components/ui/ScreenTitle";
 

@@ -1,6 +1,6 @@
 import React from "react";
 import { useLocalSearchParams } from "expo-router";
-import { PayoutDetailScreen } from "@/components/screens/billing/PayoutsScreens";
+import { PayoutDetailScreen } from "@/components/screens/billing/PayoutDetailScreen";
 import { firstParam } from "@/components/routing";
 import { ScreenTitle } from "@/components/ui/ScreenTitle";
 

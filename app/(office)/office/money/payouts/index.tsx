@@ -1,5 +1,5 @@
 import React from "react";
-import { PayoutsScreen } from "@/components/screens/billing/PayoutsScreens";
+import { PayoutsScreen } from "@/components/screens/billing/PayoutsScreen";
 import { ScreenTitle } from "@/components/ui/ScreenTitle";
 
 export default function PayoutsRoute() {

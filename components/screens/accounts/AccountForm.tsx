@@ -1,22 +1,17 @@
 import React from "react";
 import { StyleSheet, View } from "react-native";
-import { useRouter, type Href } from "expo-router";
-import { Screen } from "../../ui/Screen";
-import { PageHeader } from "../../ui/PageHeader";
+import type { Href } from "expo-router";
 import { Card } from "../../ui/Card";
-import { TextField } from "../../ui/TextField";
+import { EMAIL_INPUT, TextField } from "../../ui/TextField";
 import { ChoiceGroup } from "../../ui/ChoiceGroup";
 import { Button } from "../../ui/Button";
 import { TextLink } from "../../ui/TextLink";
 import { FormError } from "../../ui/FormError";
-import { EmptyState, ErrorState, LoadingState } from "../../ui/States";
-import { useAccountQuery, useCreateAccountMutation, useUpdateAccountMutation } from "../../api/accounts";
-import { ApiError } from "../../api/client";
 import { useZodForm } from "../../forms/useZodForm";
 import { accountInputSchema, type AccountDto, type AccountStatus } from "../../../shared/schemas/accounts";
 import { space } from "../../theme";
 
-interface Values {
+export interface AccountValues {
   businessName: string;
   deliveryAddress: string;
   contactName: string;
@@ -28,9 +23,9 @@ interface Values {
 
 const FIELDS = ["businessName", "deliveryAddress", "contactName", "contactPhone", "billingEmail", "status", "notes"] as const;
 
-const EMPTY: Values = { businessName: "", deliveryAddress: "", contactName: "", contactPhone: "", billingEmail: "", status: "active", notes: "" };
+export const EMPTY_ACCOUNT: AccountValues = { businessName: "", deliveryAddress: "", contactName: "", contactPhone: "", billingEmail: "", status: "active", notes: "" };
 
-function valuesOf(a: AccountDto): Values {
+export function accountValues(a: AccountDto): AccountValues {
   return {
     businessName: a.businessName,
     deliveryAddress: a.deliveryAddress,
@@ -42,83 +37,20 @@ function valuesOf(a: AccountDto): Values {
   };
 }
 
-/** New account (owner). */
-export function NewAccountScreen() {
-  const mutation = useCreateAccountMutation();
-  const router = useRouter();
-  return (
-    <Screen narrow testID="account-new">
-      <TextLink href="/office/accounts" label="‹ All accounts" />
-      <PageHeader title="New account" subtitle="A café, restaurant or shop that orders from the bakery." />
-      <AccountForm
-        initial={EMPTY}
-        withStatus
-        submitLabel="Add account"
-        onSubmit={async (input) => {
-          const saved = await mutation.mutateAsync(input);
-          router.replace(`/office/accounts/${saved.id}`);
-        }}
-        cancelHref="/office/accounts"
-      />
-    </Screen>
-  );
-}
-
-/** Edit an account's details (owner). Status changes live on the account's page. */
-export function EditAccountScreen({ id }: { id: number }) {
-  const valid = Number.isInteger(id) && id > 0;
-  const account = useAccountQuery(valid ? id : null);
-  const mutation = useUpdateAccountMutation(id);
-  const router = useRouter();
-
-  if (!valid || (account.error instanceof ApiError && account.error.status === 404)) {
-    return (
-      <Screen narrow testID="account-edit">
-        <EmptyState icon="help-circle" title="There's no such account" testID="account-not-found" />
-        <TextLink href="/office/accounts" label="All accounts" />
-      </Screen>
-    );
-  }
-  return (
-    <Screen narrow testID="account-edit">
-      <TextLink href={`/office/accounts/${id}`} label="‹ Back to the account" />
-      {account.isPending ? (
-        <LoadingState label="Loading the account…" />
-      ) : account.isError ? (
-        <ErrorState error={account.error} onRetry={() => account.refetch()} retrying={account.isFetching} />
-      ) : (
-        <>
-          <PageHeader overline="Edit account" title={account.data.businessName} />
-          <AccountForm
-            key={account.data.id}
-            initial={valuesOf(account.data)}
-            submitLabel="Save changes"
-            onSubmit={async (input) => {
-              const { status: _status, ...patch } = input;
-              const saved = await mutation.mutateAsync(patch);
-              router.replace(`/office/accounts/${saved.id}`);
-            }}
-            cancelHref={`/office/accounts/${id}`}
-          />
-        </>
-      )}
-    </Screen>
-  );
-}
-
-interface AccountFormProps {
-  initial: Values;
+export interface AccountFormProps {
+  initial: AccountValues;
   withStatus?: boolean;
   submitLabel: string;
   /** Sends the checked input; a rejection shows its errors on the form. */
-  onSubmit: (input: Values) => Promise<unknown>;
+  onSubmit: (input: AccountValues) => Promise<unknown>;
   cancelHref: Href;
 }
 
-function AccountForm({ initial, withStatus, submitLabel, onSubmit, cancelHref }: AccountFormProps) {
+/** The account's details: the same form for a new account and an edit. */
+export function AccountForm({ initial, withStatus, submitLabel, onSubmit, cancelHref }: AccountFormProps) {
   const form = useZodForm({ schema: accountInputSchema, initial, fields: FIELDS });
   const { values, errors: fields } = form;
-  const submit = () => void form.submit((input) => onSubmit(input as Values));
+  const submit = () => void form.submit((input) => onSubmit(input as AccountValues));
 
   return (
     <Card testID="account-form">
@@ -150,10 +82,7 @@ function AccountForm({ initial, withStatus, submitLabel, onSubmit, cancelHref }:
         label="Billing e-mail"
         testID="account-billingEmail"
         {...form.text("billingEmail")}
-        keyboardType="email-address"
-        inputMode="email"
-        autoCapitalize="none"
-        autoCorrect={false}
+        {...EMAIL_INPUT}
         hint="Invoices and statements go here."
       />
       {withStatus ? (
