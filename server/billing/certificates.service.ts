@@ -5,7 +5,7 @@ import type { SessionUser } from "../../shared/schemas/auth";
 import { localToday } from "../../shared/calendar";
 import { getBakery } from "../bakery/bakery.service";
 import { CustomerAccount } from "../accounts/account.entity";
-import { TaxCertificate } from "./billing.entity";
+import { TaxCertificate } from "./tax-certificate.entity";
 import { certificateStore, STORED_TYPES, type StoredMime } from "../files/file-store";
 import type { CheckRules, CheckedUpload } from "../http/upload";
 

@@ -11,7 +11,18 @@ import { IdempotencyRecord, Order, OrderLine } from "../orders/order.entity";
 import { StandingOrder, StandingOrderLine } from "../orders/standing-order.entity";
 import { BakeDay, BakehouseMixer, BakehouseOven, Formula, FormulaVersion, Ingredient, ProductionSettings } from "../production/production.entity";
 import { OutboxMail } from "../mail/outbox.entity";
-import { CheckoutSessionRecord, CreditNote, DeliveryAdjustment, Invoice, InvoiceLine, NumberCounter, Payment, PayoutReconciliation, Refund, StripeEventRecord, StripeSyncState, TaxCertificate } from "../billing/billing.entity";
+import { CheckoutSessionRecord } from "../billing/checkout-session.entity";
+import { CreditNote } from "../billing/credit-note.entity";
+import { DeliveryAdjustment } from "../billing/delivery-adjustment.entity";
+import { Invoice } from "../billing/invoice.entity";
+import { InvoiceLine } from "../billing/invoice-line.entity";
+import { NumberCounter } from "../billing/number-counter.entity";
+import { Payment } from "../billing/payment.entity";
+import { PayoutReconciliation } from "../billing/payout-reconciliation.entity";
+import { Refund } from "../billing/refund.entity";
+import { StripeEventRecord } from "../billing/stripe-event.entity";
+import { StripeSyncState } from "../billing/stripe-sync-state.entity";
+import { TaxCertificate } from "../billing/tax-certificate.entity";
 
 /** Every entity, listed once: the DataSource, the CLI and the tests all take it from here. */
 export const entities = [

@@ -1,6 +1,7 @@
 import type Stripe from "stripe";
 import type { AppContext } from "../http/context";
-import { CheckoutSessionRecord, StripeSyncState } from "../billing/billing.entity";
+import { CheckoutSessionRecord } from "../billing/checkout-session.entity";
+import { StripeSyncState } from "../billing/stripe-sync-state.entity";
 import { expireStaleSessions, handleEvent } from "../billing/payments.service";
 
 /**

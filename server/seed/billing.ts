@@ -4,7 +4,7 @@ import type { AppContext } from "../http/context";
 import { FixedClock } from "../clock";
 import { CustomerAccount } from "../accounts/account.entity";
 import { Bakery } from "../bakery/bakery.entity";
-import { Invoice } from "../billing/billing.entity";
+import { Invoice } from "../billing/invoice.entity";
 import { Order } from "../orders/order.entity";
 import { applyCreditHolds, issueInvoice, issueStatements, recordPayment } from "../billing/invoices.service";
 import { getBakery } from "../bakery/bakery.service";

@@ -1,6 +1,6 @@
 import { startTestApp, makeAccount, makeBakery, makeProduct, makeUser, tokenFor, waitForMail, auth, type TestApp } from "./helpers/app";
 import { Order, OrderLine } from "../../server/orders/order.entity";
-import { Invoice } from "../../server/billing/billing.entity";
+import { Invoice } from "../../server/billing/invoice.entity";
 import { CustomerAccount } from "../../server/accounts/account.entity";
 import { allocateNumber, applyCreditHolds, autoDeliver, issueStatements } from "../../server/billing/invoices.service";
 import { createDataSource } from "../../server/db/data-source";

@@ -1,6 +1,6 @@
 import { startTestApp, makeAccount, makeBakery, makeProduct, makeUser, tokenFor, type TestApp } from "./app";
 import { Order, OrderLine } from "../../../server/orders/order.entity";
-import { Invoice } from "../../../server/billing/billing.entity";
+import { Invoice } from "../../../server/billing/invoice.entity";
 import { confirmDispatch } from "../../../server/billing/invoices.service";
 import { taxCents } from "../../../shared/billing";
 
