@@ -1,14 +1,9 @@
 import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
 import { api } from "./client";
 import { calendarKeys } from "./calendar";
-import type { Weekday } from "../../shared/calendar";
+import type { AccountDeliveryDto } from "../../shared/contracts/billing";
 
-export interface AccountDeliveryDto {
-  /** null: every day the bakery delivers. */
-  routeWeekdays: Weekday[] | null;
-  minimumOrderCents: number;
-  priceListId: number | null;
-}
+export type { AccountDeliveryDto } from "../../shared/contracts/billing";
 
 export const deliveryKeys = {
   all: ["delivery"] as const,
