@@ -1,6 +1,7 @@
 import { Column, Entity, Index, JoinColumn, ManyToOne, PrimaryGeneratedColumn } from "typeorm";
 import { Invoice } from "./invoice.entity";
-import { Order, OrderLine } from "../orders/order.entity";
+import { Order } from "../orders/order.entity";
+import { OrderLine } from "../orders/order-line.entity";
 
 @Entity({ name: "invoice_line" })
 @Index(["invoiceId"])
