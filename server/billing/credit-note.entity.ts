@@ -1,4 +1,5 @@
 import { Column, CreateDateColumn, Entity, Index, JoinColumn, ManyToOne, PrimaryGeneratedColumn } from "typeorm";
+import type { CreditNoteDisposition } from "../../shared/contracts/billing";
 import { Invoice } from "./invoice.entity";
 import { CustomerAccount } from "../accounts/account.entity";
 
@@ -43,7 +44,7 @@ export class CreditNote {
 
   /** "applied": reduced the invoice's amount due; "refund": refunded through Stripe; "carry": to the next invoice. */
   @Column({ type: "varchar", length: 10 })
-  disposition: "applied" | "refund" | "carry";
+  disposition: CreditNoteDisposition;
 
   @Column({ type: "int", nullable: true })
   carriedToInvoiceId: number | null;

@@ -1,7 +1,8 @@
 import { Column, CreateDateColumn, Entity, Index, JoinColumn, ManyToOne, PrimaryGeneratedColumn, UpdateDateColumn } from "typeorm";
 import { CustomerAccount } from "../accounts/account.entity";
+import type { InvoiceKindCode, InvoiceStatusCode } from "../../shared/billing";
 
-export type InvoiceStatus = "open" | "paid" | "void" | "partially_refunded" | "refunded";
+export type InvoiceStatus = InvoiceStatusCode;
 
 @Entity({ name: "invoice" })
 @Index(["accountId", "status"])
@@ -29,7 +30,7 @@ export class Invoice {
 
   /** "order": one delivered order; "statement": a week of deliveries for an account on terms. */
   @Column({ type: "varchar", length: 10 })
-  kind: "order" | "statement";
+  kind: InvoiceKindCode;
 
   @Column({ type: "varchar", length: 20, default: "open" })
   status: InvoiceStatus;

@@ -1,4 +1,5 @@
 import { Column, CreateDateColumn, Entity, Index, JoinColumn, ManyToOne, PrimaryGeneratedColumn } from "typeorm";
+import type { PaymentMethodCode } from "../../shared/billing";
 import { Invoice } from "./invoice.entity";
 import { User } from "../users/user.entity";
 
@@ -16,7 +17,7 @@ export class Payment {
   invoice?: Invoice;
 
   @Column({ type: "varchar", length: 20 })
-  method: "card" | "bank_transfer" | "cheque" | "cash" | "other";
+  method: PaymentMethodCode;
 
   @Column({ type: "int" })
   amountCents: number;

@@ -36,8 +36,7 @@ export function reportRoutes(ctx: AppContext): Router {
   });
   r.get("/exports/:file", async (req, res) => {
     const { file } = parse(exportFileSchema, req.params);
-    const csv = await exportCsv(ctx, file.replace(".csv", "") as "invoices" | "payments" | "payouts");
-    res.type("text/csv; charset=utf-8").attachment(file).send(csv);
+    res.type("text/csv; charset=utf-8").attachment(file).send(await exportCsv(ctx, file));
   });
   return r;
 }

@@ -9,6 +9,7 @@ import { listPayouts, payoutDetail } from "./payouts.service";
 import { AGING_BUCKETS, INVOICE_KIND_LABELS, INVOICE_STATUS_LABELS, PAYMENT_METHOD_LABELS, agingBucket, amountDue, payoutStatusLabel, type AgingBucket } from "../../shared/billing";
 import { localToday } from "../../shared/calendar";
 import { toDecimal } from "../../shared/money";
+import type { ExportFile } from "../../shared/schemas/billing";
 import type { AgingAmounts, AgingDto } from "../../shared/contracts/billing";
 
 // ---- aging and exports -----------------------------------------------------------------------
@@ -75,7 +76,8 @@ export const PAYOUT_CSV_COLUMNS = ["Bank Payout Ref", "Arrival Date", "Status", 
  * decimal in the currency's units with the ISO 4217 code in its own column; dates YYYY-MM-DD; kind, status
  * and method columns hold the words a person reads on the screens (shared/billing.ts), never the stored code.
  */
-export async function exportCsv(ctx: AppContext, kind: "invoices" | "payments" | "payouts"): Promise<string> {
+export async function exportCsv(ctx: AppContext, file: ExportFile): Promise<string> {
+  const kind = file.replace(".csv", "") as "invoices" | "payments" | "payouts";
   const accounts = new Map((await ctx.dataSource.getRepository(CustomerAccount).find()).map((a) => [a.id, a.businessName]));
   if (kind === "invoices") {
     const rows = await ctx.dataSource.getRepository(Invoice).find({ order: { id: "ASC" } });

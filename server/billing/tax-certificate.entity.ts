@@ -1,4 +1,5 @@
 import { Column, CreateDateColumn, Entity, Index, JoinColumn, ManyToOne, PrimaryGeneratedColumn } from "typeorm";
+import type { CertificateStatus } from "../../shared/contracts/billing";
 import { CustomerAccount } from "../accounts/account.entity";
 import { User } from "../users/user.entity";
 
@@ -27,7 +28,7 @@ export class TaxCertificate {
   sizeBytes: number;
 
   @Column({ type: "varchar", length: 10, default: "pending" })
-  status: "pending" | "approved" | "rejected";
+  status: CertificateStatus;
 
   @Column({ type: "date" })
   expiresOn: string;
