@@ -17,7 +17,11 @@ import { accountDeliveryRoutes, calendarRoutes, settingsRoutes } from "./calenda
 import { feedRoutes, ordersRoutes, publicFeedRoutes, standingOrderRoutes } from "./orders/orders.routes";
 import { formulaRoutes, ingredientRoutes, productionRoutes } from "./production/production.routes";
 import { outboxRoutes } from "./mail/outbox.routes";
-import { accountBillingRoutes, billingSettingsRoutes, certificateRoutes, deliveryRoutes, invoiceRoutes, payoutRoutes, reportRoutes, stripeWebhookRoute } from "./billing/billing.routes";
+import { deliveryRoutes, invoiceRoutes } from "./billing/invoices.routes";
+import { invoicePaymentRoutes, stripeWebhookRoute } from "./billing/payments.routes";
+import { payoutRoutes, reportRoutes } from "./billing/payouts.routes";
+import { accountCertificateRoutes, certificateRoutes } from "./billing/certificates.routes";
+import { accountTermsRoutes, billingSettingsRoutes } from "./billing/billing-settings.routes";
 
 export const PERMISSIONS_POLICY = "camera=(), microphone=(), geolocation=(), payment=(), usb=(), serial=(), hid=(), bluetooth=(), midi=(), display-capture=(), browsing-topics=()";
 
@@ -63,10 +67,12 @@ export function apiRouter(ctx: AppContext): Router {
   api.use("/outbox", outboxRoutes(ctx));
   api.use("/deliveries", deliveryRoutes(ctx));
   api.use("/invoices", invoiceRoutes(ctx));
+  api.use("/invoices", invoicePaymentRoutes(ctx));
   api.use("/payouts", payoutRoutes(ctx));
   api.use("/reports", reportRoutes(ctx));
   api.use("/settings/billing", billingSettingsRoutes(ctx));
-  api.use("/accounts", accountBillingRoutes(ctx));
+  api.use("/accounts", accountTermsRoutes(ctx));
+  api.use("/accounts", accountCertificateRoutes(ctx));
   api.use("/certificates", certificateRoutes(ctx));
   api.use(apiNotFound);
   return api;

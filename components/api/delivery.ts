@@ -2,13 +2,9 @@ import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
 import { api } from "./client";
 import { calendarKeys, deliveryKeys } from "./keys";
 import type { Weekday } from "../../shared/calendar";
+import type { AccountDeliveryDto } from "../../shared/contracts/billing";
 
-export interface AccountDeliveryDto {
-  /** null: every day the bakery delivers. */
-  routeWeekdays: Weekday[] | null;
-  minimumOrderCents: number;
-  priceListId: number | null;
-}
+export type { AccountDeliveryDto } from "../../shared/contracts/billing";
 
 export { deliveryKeys } from "./keys";
 

@@ -1,25 +1,15 @@
 import { useMutation, useQueryClient } from "@tanstack/react-query";
 import { api } from "./client";
 import { boardKeys, calendarKeys, invoiceKeys, orderKeys, reportKeys } from "./keys";
+import type { DispatchAdjustment } from "../../shared/schemas/billing";
+import type { DispatchResponse } from "../../shared/contracts/billing";
 
-/** A line that went out short: what was delivered of it, and why. */
-export interface DispatchAdjustment {
-  orderId: number;
-  productId: number;
-  deliveredQuantity: number;
-  reason?: string;
-}
-
-export interface DispatchResult {
-  /** Orders marked delivered. */
-  delivered: number;
-  /** Invoice numbers issued at once (accounts that pay by card). */
-  invoices: string[];
-}
+export type { DispatchAdjustment } from "../../shared/schemas/billing";
+export type { DispatchResult } from "../../shared/contracts/billing";
 
 export const dispatchApi = {
   confirm: (date: string, adjustments: DispatchAdjustment[]) =>
-    api<{ result: DispatchResult }>(`/api/deliveries/${date}/confirm`, { method: "POST", body: { adjustments } }).then((r) => r.result),
+    api<DispatchResponse>(`/api/deliveries/${date}/confirm`, { method: "POST", body: { adjustments } }).then((r) => r.result),
 };
 
 /** Confirm a delivery date's dispatch (owner, baker): its orders become delivered; card accounts are invoiced. */

@@ -1,8 +1,10 @@
 import { startTestApp, makeAccount, makeBakery, makeProduct, makeUser, tokenFor, waitForMail, auth, type TestApp } from "./helpers/app";
 import { Order, OrderLine } from "../../server/orders/order.entity";
-import { Invoice } from "../../server/billing/billing.entity";
+import { Invoice } from "../../server/billing/invoice.entity";
 import { CustomerAccount } from "../../server/accounts/account.entity";
-import { allocateNumber, applyCreditHolds, autoDeliver, issueStatements } from "../../server/billing/invoices.service";
+import { applyCreditHolds, issueStatements } from "../../server/billing/invoices.service";
+import { allocateNumber } from "../../server/billing/ledger.service";
+import { autoDeliver } from "../../server/billing/dispatch.service";
 import { createDataSource } from "../../server/db/data-source";
 import { loadConfig } from "../../server/config";
 import { taxCents, invoiceTotals, agingBucket } from "../../shared/billing";

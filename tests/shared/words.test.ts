@@ -9,7 +9,7 @@
  *  - e-mails: every template in server/mail/templates.ts called with sample data (subject, text, HTML stripped of tags);
  *  - PDFs: the literal strings of server/billing/invoice.pdf.ts and server/production/plan.pdf.ts (rendering them needs
  *    DTOs from the database; the words are all literals there);
- *  - CSV headers: the header constants of server/billing/payments.service.ts and the orders board's header;
+ *  - CSV headers: the header constants of server/billing/reports.service.ts and the orders board's header;
  *  - the local payment page (fakes/stripe): payPage rendered with every field error and every decline, and the
  *    message pages of fakes/stripe/hosted.ts.
  * Not in scope: developer-only text (logs, thrown Errors that are not HttpErrors, comments), the fake's API JSON.
@@ -17,7 +17,7 @@
 import fs from "node:fs";
 import path from "node:path";
 import ts from "typescript";
-import { CSV_HEADER_STYLE, INVOICE_CSV_COLUMNS, PAYMENT_CSV_COLUMNS, PAYOUT_CSV_COLUMNS } from "../../server/billing/payments.service";
+import { CSV_HEADER_STYLE, INVOICE_CSV_COLUMNS, PAYMENT_CSV_COLUMNS, PAYOUT_CSV_COLUMNS } from "../../server/billing/reports.service";
 import { boardCsv } from "../../server/orders/board.service";
 import { MAIL_KINDS, MAIL_KIND_LABELS } from "../../shared/mail";
 import { ORDER_STATUSES } from "../../shared/schemas/orders";
@@ -99,7 +99,7 @@ beforeAll(async () => {
   const pdfs = [...collectLiterals("server/billing/invoice.pdf.ts", "PDFs"), ...collectLiterals("server/production/plan.pdf.ts", "PDFs")];
   const board = boardCsv({ date: "2026-06-09", products: [{ id: 1, name: "Dinner rolls", saleUnit: "tray of 15 rolls", total: 1 }], rows: [], totalCents: 0 } as never, "USD").split(/\r?\n/)[0]!.split(",");
   const csv: Word[] = [
-    ...[["invoices", INVOICE_CSV_COLUMNS], ["payments", PAYMENT_CSV_COLUMNS], ["payouts", PAYOUT_CSV_COLUMNS]].flatMap(([k, cols]) => (cols as string[]).map((text) => ({ source: "CSV headers", file: `server/billing/payments.service.ts ${k}`, line: 0, text }))),
+    ...[["invoices", INVOICE_CSV_COLUMNS], ["payments", PAYMENT_CSV_COLUMNS], ["payouts", PAYOUT_CSV_COLUMNS]].flatMap(([k, cols]) => (cols as string[]).map((text) => ({ source: "CSV headers", file: `server/billing/reports.service.ts ${k}`, line: 0, text }))),
     ...board.filter((h) => !h.includes("(tray")).map((text) => ({ source: "CSV headers", file: "server/orders/board.service.ts boardCsv", line: 0, text })),
   ];
   const mails = await collectMails();
