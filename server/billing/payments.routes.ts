@@ -7,6 +7,7 @@ import { recordManualPaymentAndExpire, refundOverpayment } from "./payments.serv
 import { issueCreditNote } from "./credit-notes.service";
 import { handleWebhook } from "./stripe-events.service";
 import { OFFICE } from "./invoices.routes";
+import { rateLimits } from "../http/rate-limits";
 import { creditNoteSchema, idParamSchema, manualPaymentSchema } from "../../shared/schemas/billing";
 import type { CheckoutDto, CreditNoteResponse, OverpaymentRefundResponse, RecordPaymentResponse, WebhookAckDto } from "../../shared/contracts/billing";
 
@@ -24,7 +25,9 @@ export function stripeWebhookRoute(ctx: AppContext): Router {
 /** Money on one invoice (mounted at /invoices): the card page, payments by hand, overpayment refunds, credit notes. */
 export function invoicePaymentRoutes(ctx: AppContext): Router {
   const r = Router();
-  r.post("/:id/checkout", allow(...OFFICE, "buyer"), async (req, res) => {
+  const limits = rateLimits(ctx);
+  // Opening card-payment pages is limited per user (server/http/rate-limits.ts): 429 with Retry-After.
+  r.post("/:id/checkout", allow(...OFFICE, "buyer"), limits.checkout, async (req, res) => {
     const { id } = parse(idParamSchema, req.params);
     res.status(201).json((await createCheckout(ctx, currentUser(req), id)) satisfies CheckoutDto);
   });

@@ -17,7 +17,8 @@ export type ManualPaymentMethod = (typeof PAYMENT_METHODS)[number];
 export const EXPORT_FILES = ["invoices.csv", "payments.csv", "payouts.csv"] as const;
 export type ExportFile = (typeof EXPORT_FILES)[number];
 
-export const idParamSchema = z.object({ id: idSchema });
+/** The id in a billing URL: the one id parameter schema (shared/schemas/common.ts). */
+export { idParamSchema } from "./common";
 
 const money = z.number({ invalid_type_error: "Enter an amount in cents." }).int("Whole cents only.").positive("The amount must be more than 0.");
 
@@ -53,7 +54,8 @@ export const creditNoteSchema = z.object({
 export type CreditNoteInput = z.input<typeof creditNoteSchema>;
 
 /** POST /api/deliveries/:date/confirm */
-export const dispatchDateSchema = z.object({ date: dateSchema });
+/** The delivery date in the dispatch URL: the one date parameter schema (shared/schemas/calendar.ts). */
+export { dateQuerySchema as dispatchDateSchema } from "./calendar";
 /** A line that went out short: what was delivered of it, and why. */
 export const dispatchAdjustmentSchema = z.object({
   orderId: z.number().int().positive(),

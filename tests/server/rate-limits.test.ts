@@ -141,4 +141,14 @@ describe("card-payment page creation (per user)", () => {
     // Another user has a limit of their own.
     expect((await request(checkoutApp(902)).post("/api/invoices/1/checkout")).status).toBe(201);
   });
+
+  it("is mounted on the real checkout route, after the role check and before the invoice is looked up", async () => {
+    const bookkeeper = await tokenFor(t, await makeUser(t.ds, "bookkeeper"));
+    const statuses: number[] = [];
+    for (let i = 0; i < 3; i++) statuses.push((await t.http().post("/api/invoices/999999/checkout").set(auth(bookkeeper))).status);
+    // Two pages allowed (RATE_LIMIT_CHECKOUT = 2/600): the unknown invoice answers 404 twice, then the limit answers.
+    expect(statuses).toEqual([404, 404, 429]);
+    // Signed out never reaches the limiter: allow(...) answers first.
+    expect((await t.http().post("/api/invoices/999999/checkout")).status).toBe(401);
+  });
 });
