@@ -6,8 +6,8 @@ import { Nunito_400Regular } from "@expo-google-fonts/nunito/400Regular";
 import { Nunito_600SemiBold } from "@expo-google-fonts/nunito/600SemiBold";
 import { Nunito_700Bold } from "@expo-google-fonts/nunito/700Bold";
 import { Nunito_800ExtraBold } from "@expo-google-fonts/nunito/800ExtraBold";
-import { AppProviders } from "../components/AppProviders";
-import { colors } from "../components/theme";
+import { AppProviders } from "@/components/AppProviders";
+import { colors } from "@/components/theme";
 
 /** Give up waiting for the fonts after this long and show the app in the fallback font. */
 const FONT_WAIT_MS = 2500;

@@ -1,3 +1,3 @@
-import { HomeRedirect } from "../components/auth/HomeRedirect";
+import { HomeRedirect } from "@/components/auth/HomeRedirect";
 
 export default HomeRedirect;

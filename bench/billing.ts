@@ -94,6 +94,8 @@ async function main() {
   const env = {
     DB_NAME: dbName, SMTP_URL: `smtp://127.0.0.1:${await freePort()}`, LOG_LEVEL: "warn", PANWISE_NO_JOBS: "1",
     STRIPE_API_HOST: "127.0.0.1", STRIPE_API_PORT: String(fake.port), STRIPE_API_PROTOCOL: "http", STRIPE_SECRET_KEY: KEY, STRIPE_WEBHOOK_SECRET: SECRET,
+    // One buyer opens a payment page for each of the 200 invoices: above the per-user page limit of a real buyer.
+    RATE_LIMIT_CHECKOUT: "1000/600",
   };
   const servers = ports.map((p) => startServer({ ...env, PORT: String(p), PUBLIC_URL: `http://127.0.0.1:${p}` }));
   try {

@@ -2,7 +2,7 @@
  * Production plan at scale: a delivery date with N accounts × 10 products (N = 20, 200, 2,000 → 200,
  * 2,000 and 20,000 order lines). Reports GET /api/production/plan p50/p99 for each size and how it grows,
  * and, as the baseline, the bare `SELECT productId, SUM(quantity) … GROUP BY` over the same rows. The plan includes
- * the day's one schedule (shared/schedule.ts); the scheduler's own time for a day of 10,000 pans is measured
+ * the day's one schedule (shared/schedule/); the scheduler's own time for a day of 10,000 pans is measured
  * in-process beside it (no database, no HTTP).
  *   node --import tsx bench/plan.ts     (needs the private MariaDB: npm start / npm run db)
  */

@@ -1,3 +1,8 @@
+import type { Href } from "expo-router";
+
+/** A link as a string path: one of the app's routes (typed routes, .expo/types/router.d.ts), with its query if any. */
+export type RoutePath = Extract<Href, string>;
+
 /** Search params can arrive as arrays; screens want one string. */
 export function firstParam(value: string | string[] | undefined): string | undefined {
   if (Array.isArray(value)) return value[0];

@@ -40,7 +40,7 @@ async function main() {
   cleanups.push(killer(stripe));
   const webOrigin = `http://127.0.0.1:${WEB_PORT}`;
   const server = startChild("api", "node", ["--watch", "--import", "tsx", "server/index.ts"], {
-    env: { PORT: String(API_PORT), CORS_ORIGIN: `${webOrigin},http://localhost:${WEB_PORT}`, PUBLIC_URL: webOrigin },
+    env: { PORT: String(API_PORT), CORS_ORIGIN: `${webOrigin},http://localhost:${WEB_PORT}`, PUBLIC_URL: webOrigin, LOG_PRETTY: process.env.LOG_PRETTY || "1", ...(process.stdout.isTTY && !process.env.NO_COLOR ? { FORCE_COLOR: "1" } : {}) },
   });
   cleanups.push(killer(server));
   await waitFor("the API server", () => httpOk(`http://127.0.0.1:${API_PORT}/api/health`), { timeoutMs: 60000 });

@@ -55,6 +55,11 @@ function stopChild(child, name) {
   });
 }
 
+/** The server's output passes through a pipe here: ask for colour when this process writes to a terminal (colorette reads FORCE_COLOR). */
+function logColour() {
+  return process.stdout.isTTY && !process.env.NO_COLOR && !process.env.FORCE_COLOR ? { FORCE_COLOR: "1" } : {};
+}
+
 /** Start a Node child that stops when this process dies (IPC + parent-watch preload); returns a supervisable handle. */
 function nodeChild(name, label, script, env) {
   if (shuttingDown) fail("stopping");
@@ -203,7 +208,8 @@ async function main() {
     name: "server",
     label: "the server",
     script: "server/index.ts",
-    env: { ...env, PORT: String(PORT), STRIPE_API_PORT: String(STRIPE_FAKE_PORT), ...(STRIPE_WEBHOOK_SECRET ? { STRIPE_WEBHOOK_SECRET } : {}) },
+    // Log lines for a person (pino-pretty in the server, server/logger.ts), coloured on a terminal; JSON in production.
+    env: { ...env, PORT: String(PORT), STRIPE_API_PORT: String(STRIPE_FAKE_PORT), ...(STRIPE_WEBHOOK_SECRET ? { STRIPE_WEBHOOK_SECRET } : {}), LOG_PRETTY: process.env.LOG_PRETTY || "1", ...logColour() },
     ready: () => httpOk(`http://127.0.0.1:${PORT}/api/health`),
     readyWhat: "the server",
   });

@@ -6,6 +6,8 @@ import pinoHttp from "pino-http";
 import type { AppContext } from "./http/context";
 import { apiNotFound, errorHandler } from "./http/errors";
 import { authenticate } from "./http/auth";
+import { requestIdFor } from "./http/request-id";
+import { rateLimits } from "./http/rate-limits";
 import { authRoutes } from "./auth/auth.routes";
 import { invitationsRoutes, usersRoutes } from "./users/users.routes";
 import { accountsRoutes } from "./accounts/accounts.routes";
@@ -15,7 +17,11 @@ import { accountDeliveryRoutes, calendarRoutes, settingsRoutes } from "./calenda
 import { feedRoutes, ordersRoutes, publicFeedRoutes, standingOrderRoutes } from "./orders/orders.routes";
 import { formulaRoutes, ingredientRoutes, productionRoutes } from "./production/production.routes";
 import { outboxRoutes } from "./mail/outbox.routes";
-import { accountBillingRoutes, billingSettingsRoutes, certificateRoutes, deliveryRoutes, invoiceRoutes, payoutRoutes, reportRoutes, stripeWebhookRoute } from "./billing/billing.routes";
+import { deliveryRoutes, invoiceRoutes } from "./billing/invoices.routes";
+import { invoicePaymentRoutes, stripeWebhookRoute } from "./billing/payments.routes";
+import { payoutRoutes, reportRoutes } from "./billing/payouts.routes";
+import { accountCertificateRoutes, certificateRoutes } from "./billing/certificates.routes";
+import { accountTermsRoutes, billingSettingsRoutes } from "./billing/billing-settings.routes";
 
 export const PERMISSIONS_POLICY = "camera=(), microphone=(), geolocation=(), payment=(), usb=(), serial=(), hid=(), bluetooth=(), midi=(), display-capture=(), browsing-topics=()";
 
@@ -54,17 +60,19 @@ export function apiRouter(ctx: AppContext): Router {
   api.use("/orders", ordersRoutes(ctx));
   api.use("/standing-orders", standingOrderRoutes(ctx));
   api.use("/calendar-feed", feedRoutes(ctx));
-  api.use("/feeds", publicFeedRoutes(ctx));
+  api.use("/feeds", rateLimits(ctx).feed, publicFeedRoutes(ctx)); // per address and per feed token
   api.use("/ingredients", ingredientRoutes(ctx));
   api.use("/formulas", formulaRoutes(ctx));
   api.use("/production", productionRoutes(ctx));
   api.use("/outbox", outboxRoutes(ctx));
   api.use("/deliveries", deliveryRoutes(ctx));
   api.use("/invoices", invoiceRoutes(ctx));
+  api.use("/invoices", invoicePaymentRoutes(ctx));
   api.use("/payouts", payoutRoutes(ctx));
   api.use("/reports", reportRoutes(ctx));
   api.use("/settings/billing", billingSettingsRoutes(ctx));
-  api.use("/accounts", accountBillingRoutes(ctx));
+  api.use("/accounts", accountTermsRoutes(ctx));
+  api.use("/accounts", accountCertificateRoutes(ctx));
   api.use("/certificates", certificateRoutes(ctx));
   api.use(apiNotFound);
   return api;
@@ -96,6 +104,7 @@ export function createApp(ctx: AppContext) {
   app.use(
     pinoHttp({
       logger: ctx.logger,
+      genReqId: requestIdFor,
       customLogLevel: (_req, res, err) => (err || res.statusCode >= 500 ? "error" : res.statusCode >= 400 ? "warn" : "info"),
       serializers: {
         // Link tokens travel in some paths (invitation check, calendar feed): never log them.

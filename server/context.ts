@@ -15,7 +15,7 @@ export function createStripe(config: Config): Stripe {
 /** Build the app's context; tests pass their own data source, clock or mailer. */
 export function buildContext(over: Partial<{ config: Config; dataSource: DataSource; clock: Clock; mailer: Mailer; stripe: Stripe }> = {}): AppContext {
   const config = over.config ?? loadConfig();
-  const logger = createLogger(config.logLevel);
+  const logger = createLogger(config.logLevel, { pretty: config.logPretty });
   return {
     config,
     logger,

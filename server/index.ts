@@ -1,13 +1,15 @@
 import "reflect-metadata";
 import type { Server } from "node:http";
 import { buildContext } from "./context";
+import { loadServerConfig } from "./config";
 import { createApp } from "./app";
 import { startScheduler } from "./jobs/scheduler";
 import { jobs } from "./jobs";
 
 /** The server process: connect, listen, run the scheduled jobs, and stop cleanly on SIGINT/SIGTERM. */
 async function main() {
-  const ctx = buildContext();
+  // Every setting checked before anything starts: one message naming every variable to fix.
+  const ctx = buildContext({ config: loadServerConfig() });
   const { logger, config } = ctx;
   await ctx.dataSource.initialize();
   const pending = await ctx.dataSource.showMigrations();
@@ -44,6 +46,7 @@ async function main() {
 main().catch((err) => {
   // One line that says what is wrong (e.g. the Stripe settings), not a stack trace.
   const message = err instanceof Error ? err.message : String(err);
-  console.error(JSON.stringify({ level: 60, time: Date.now(), msg: `Panwise server did not start: ${message}` }));
+  const line = `Panwise server did not start: ${message}`;
+  console.error(process.env.LOG_PRETTY === "1" ? line : JSON.stringify({ level: 60, time: Date.now(), msg: line }));
   process.exit(1);
 });

@@ -1,4 +1,4 @@
-/** The one error shape every API answer uses: { "error": { code, message, fields? } }. */
+/** The one error shape every API answer uses: { "error": { code, message, fields?, requestId? } }. */
 export type FieldErrors = Record<string, string>;
 
 export interface ApiErrorBody {
@@ -6,6 +6,8 @@ export interface ApiErrorBody {
     code: string;
     message: string;
     fields?: FieldErrors;
+    /** The answer's X-Request-Id, for a person to quote when asking for help (every server error carries it). */
+    requestId?: string;
     [extra: string]: unknown;
   };
 }

@@ -1,3 +1,3 @@
-import { SignedOutLayout } from "../../components/auth/SignedOutLayout";
+import { SignedOutLayout } from "@/components/auth/SignedOutLayout";
 
 export default SignedOutLayout;

@@ -1,3 +1,12 @@
-import { ForgotPasswordScreen } from "../../components/screens/auth/ForgotPasswordScreen";
+import React from "react";
+import { ForgotPasswordScreen } from "@/components/screens/auth/ForgotPasswordScreen";
+import { ScreenTitle } from "@/components/ui/ScreenTitle";
 
-export default ForgotPasswordScreen;
+export default function ForgotPasswordRoute() {
+  return (
+    <>
+      <ScreenTitle title="Reset your password" />
+      <ForgotPasswordScreen />
+    </>
+  );
+}

@@ -1,3 +1,12 @@
-import { SignInScreen } from "../../components/screens/auth/SignInScreen";
+import React from "react";
+import { SignInScreen } from "@/components/screens/auth/SignInScreen";
+import { ScreenTitle } from "@/components/ui/ScreenTitle";
 
-export default SignInScreen;
+export default function SignInRoute() {
+  return (
+    <>
+      <ScreenTitle title="Sign in" />
+      <SignInScreen />
+    </>
+  );
+}

@@ -1,5 +1,5 @@
 import React from "react";
-import { AreaLayout } from "../../components/shell/AreaLayout";
+import { AreaLayout } from "@/components/shell/AreaLayout";
 
 export default function BakerLayout() {
   return <AreaLayout area="baker" roles={["baker"]} />;

@@ -1,5 +1,5 @@
 import React from "react";
-import { AreaLayout } from "../../components/shell/AreaLayout";
+import { AreaLayout } from "@/components/shell/AreaLayout";
 
 export default function BuyerLayout() {
   return <AreaLayout area="buyer" roles={["buyer"]} />;

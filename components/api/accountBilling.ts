@@ -2,28 +2,19 @@ import { useState } from "react";
 import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
 import { api, apiBlob, uploadFile, type UploadFile } from "./client";
 import { saveBlob } from "./files";
+import { accountBillingKeys } from "./keys";
 import type { PaymentTerms } from "../../shared/billing";
+import type { CertificateListDto, PaymentTermsResponse, ReviewCertificateResponse, ReviewedCertificateDto, TaxCertificateDto, UploadCertificateResponse } from "../../shared/contracts/billing";
 
-/** A resale / tax-exemption certificate on file for an account. */
-export interface TaxCertificateDto {
-  id: number;
-  status: "pending" | "approved" | "rejected";
-  expiresOn: string;
-  expired: boolean;
-  contentType: string;
-  createdAt: string;
-}
+export type { CertificateLimitsDto, CertificateListDto, TaxCertificateDto } from "../../shared/contracts/billing";
 
-export const accountBillingKeys = {
-  all: ["accountBilling"] as const,
-  certificates: (accountId: number) => [...accountBillingKeys.all, "certificates", accountId] as const,
-};
+export { accountBillingKeys } from "./keys";
 
 export const accountBillingApi = {
-  setTerms: (accountId: number, paymentTerms: PaymentTerms) => api<{ paymentTerms: PaymentTerms }>(`/api/accounts/${accountId}/terms`, { method: "PUT", body: { paymentTerms } }).then((r) => r.paymentTerms),
-  certificates: (accountId: number) => api<{ certificates: TaxCertificateDto[] }>(`/api/accounts/${accountId}/certificates`).then((r) => r.certificates),
+  setTerms: (accountId: number, paymentTerms: PaymentTerms) => api<PaymentTermsResponse>(`/api/accounts/${accountId}/terms`, { method: "PUT", body: { paymentTerms } }).then((r) => r.paymentTerms),
+  certificates: (accountId: number) => api<CertificateListDto>(`/api/accounts/${accountId}/certificates`).then((r) => r.certificates),
   upload: (accountId: number, file: UploadFile, expiresOn: string, onProgress?: (fraction: number) => void) =>
-    uploadFile<{ certificate: { id: number; status: TaxCertificateDto["status"]; expiresOn: string } }>(`/api/accounts/${accountId}/certificates`, {
+    uploadFile<UploadCertificateResponse>(`/api/accounts/${accountId}/certificates`, {
       method: "POST",
       field: "file",
       file,
@@ -31,7 +22,7 @@ export const accountBillingApi = {
       onProgress,
       tooLargeMessage: "The certificate file is larger than 10 MB.",
     }).then((r) => r.certificate),
-  review: (id: number, status: "approved" | "rejected") => api<{ certificate: { id: number; status: string } }>(`/api/certificates/${id}/review`, { method: "POST", body: { status } }).then((r) => r.certificate),
+  review: (id: number, status: ReviewedCertificateDto["status"]) => api<ReviewCertificateResponse>(`/api/certificates/${id}/review`, { method: "POST", body: { status } }).then((r) => r.certificate),
   file: (id: number) => apiBlob(`/api/certificates/${id}/file`),
 };
 
@@ -61,7 +52,7 @@ export function useUploadCertificateMutation(accountId: number) {
 export function useReviewCertificateMutation(accountId: number) {
   const qc = useQueryClient();
   return useMutation({
-    mutationFn: ({ id, status }: { id: number; status: "approved" | "rejected" }) => accountBillingApi.review(id, status),
+    mutationFn: ({ id, status }: { id: number; status: ReviewedCertificateDto["status"] }) => accountBillingApi.review(id, status),
     onSuccess: () => void qc.invalidateQueries({ queryKey: accountBillingKeys.certificates(accountId) }),
   });
 }

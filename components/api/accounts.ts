@@ -1,20 +1,9 @@
 import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
 import { api } from "./client";
-import { officeKeys } from "./office";
-import type { AccountDto, AccountInput, AccountStatus } from "../../shared/schemas/accounts";
+import { accountKeys, officeKeys, userKeys, type AccountListParams } from "./keys";
+import type { AccountDto, AccountInput } from "../../shared/schemas/accounts";
 
-export interface AccountListParams {
-  q?: string;
-  status?: AccountStatus;
-}
-
-export const accountKeys = {
-  all: ["accounts"] as const,
-  lists: () => [...accountKeys.all, "list"] as const,
-  list: (params: AccountListParams = {}) => [...accountKeys.lists(), { q: params.q ?? "", status: params.status ?? "" }] as const,
-  details: () => [...accountKeys.all, "detail"] as const,
-  detail: (id: number) => [...accountKeys.details(), id] as const,
-};
+export { accountKeys, type AccountListParams } from "./keys";
 
 export type AccountPatch = Partial<AccountInput>;
 
@@ -44,7 +33,7 @@ function useAccountSaved() {
     void qc.invalidateQueries({ queryKey: accountKeys.lists() });
     void qc.invalidateQueries({ queryKey: officeKeys.all });
     // People lists show account names.
-    void qc.invalidateQueries({ queryKey: ["users"] });
+    void qc.invalidateQueries({ queryKey: userKeys.all });
   };
 }
 

@@ -1,19 +1,12 @@
 import { useMutation, useQuery } from "@tanstack/react-query";
 import { api } from "./client";
+import { authKeys } from "./keys";
 import type { SessionUser, SignInResponse } from "../../shared/schemas/auth";
-import type { Role } from "../../shared/roles";
+import type { InvitationPreviewDto } from "../../shared/contracts/auth";
 
-export const authKeys = {
-  all: ["auth"] as const,
-  me: () => [...authKeys.all, "me"] as const,
-  invitation: (token: string) => [...authKeys.all, "invitation", token] as const,
-};
-
-export interface InvitationPreview {
-  email: string;
-  role: Role;
-  name: string | null;
-}
+export { authKeys } from "./keys";
+/** Who an invitation link is for (shared/contracts/auth.ts). */
+export type InvitationPreview = InvitationPreviewDto;
 
 export const authApi = {
   signIn: (body: { email: string; password: string }) => api<SignInResponse>("/api/auth/sign-in", { method: "POST", body, auth: false }),

@@ -1,13 +1,11 @@
 import { useQuery } from "@tanstack/react-query";
 import { api } from "./client";
+import { bakeryKeys } from "./keys";
 import type { BakeryDto } from "../../shared/schemas/bakery";
 import { formatterFor, type Formatter } from "../../shared/format";
 import { setDisplayLocale } from "../format";
 
-export const bakeryKeys = {
-  all: ["bakery"] as const,
-  detail: () => [...bakeryKeys.all, "detail"] as const,
-};
+export { bakeryKeys } from "./keys";
 
 export const bakeryApi = {
   get: () =>

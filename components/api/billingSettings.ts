@@ -1,22 +1,15 @@
 import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
 import { api } from "./client";
+import { billingSettingsKeys } from "./keys";
+import type { BillingSettingsDto, BillingSettingsResponse } from "../../shared/contracts/billing";
 
-/** The bakery's billing settings; the tax rate is in basis points (875 = 8.75 %). */
-export interface BillingSettingsDto {
-  salesTaxRateBp: number;
-  invoicePrefix: string;
-  creditHoldDays: number;
-  paymentInstructions: string;
-}
+export type { BillingSettingsDto } from "../../shared/contracts/billing";
 
-export const billingSettingsKeys = {
-  all: ["billingSettings"] as const,
-  detail: () => [...billingSettingsKeys.all, "detail"] as const,
-};
+export { billingSettingsKeys } from "./keys";
 
 export const billingSettingsApi = {
-  get: () => api<{ settings: BillingSettingsDto }>("/api/settings/billing").then((r) => r.settings),
-  save: (input: BillingSettingsDto) => api<{ settings: BillingSettingsDto }>("/api/settings/billing", { method: "PUT", body: input }).then((r) => r.settings),
+  get: () => api<BillingSettingsResponse>("/api/settings/billing").then((r) => r.settings),
+  save: (input: BillingSettingsDto) => api<BillingSettingsResponse>("/api/settings/billing", { method: "PUT", body: input }).then((r) => r.settings),
 };
 
 export function useBillingSettingsQuery() {

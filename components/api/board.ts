@@ -1,19 +1,12 @@
 import { Platform } from "react-native";
 import { useQuery } from "@tanstack/react-query";
 import { api, apiBlob } from "./client";
+import { boardKeys } from "./keys";
+import type { BoardDto } from "../../shared/contracts/board";
 
-/** Accounts × products for one delivery date (cancelled orders left out). */
-export interface BoardDto {
-  date: string;
-  products: { id: number; name: string; saleUnit: string; saleUnitPlural: string; total: number }[];
-  rows: { accountId: number; accountName: string; orderId: number; status: string; poNumber: string | null; quantities: Record<string, number>; totalCents: number }[];
-  totalCents: number;
-}
-
-export const boardKeys = {
-  all: ["board"] as const,
-  detail: (date: string) => [...boardKeys.all, date] as const,
-};
+/** Accounts × products for one delivery date (cancelled orders left out): shared/contracts/board.ts. */
+export type { BoardDto, BoardProductDto, BoardRowDto } from "../../shared/contracts/board";
+export { boardKeys } from "./keys";
 
 export const boardApi = {
   get: (date: string) => api<{ board: BoardDto }>("/api/orders/board", { query: { date } }).then((r) => r.board),

@@ -1,20 +1,9 @@
 import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
-import { bakeryKeys } from "./bakery";
 import { api } from "./client";
+import { bakeryKeys, calendarKeys, type CalendarParams } from "./keys";
 import type { CalendarDayDto, CalendarSettingsDto, CalendarSettingsInput } from "../../shared/schemas/calendar";
 
-export interface CalendarParams {
-  from: string;
-  to: string;
-  /** Office users name the account; a buyer always gets their own. */
-  accountId?: number;
-}
-
-export const calendarKeys = {
-  all: ["calendar"] as const,
-  days: (params: CalendarParams) => [...calendarKeys.all, "days", { from: params.from, to: params.to, accountId: params.accountId ?? 0 }] as const,
-  settings: () => [...calendarKeys.all, "settings"] as const,
-};
+export { calendarKeys, type CalendarParams } from "./keys";
 
 export const calendarApi = {
   days: (params: CalendarParams) => api<{ days: CalendarDayDto[] }>("/api/calendar", { query: { from: params.from, to: params.to, accountId: params.accountId } }).then((r) => r.days),

@@ -14,6 +14,8 @@ export class ApiError extends Error {
   readonly code: string;
   readonly fields?: FieldErrors;
   readonly details: Record<string, unknown>;
+  /** The server's request id for this answer (error.requestId), for a person to quote. */
+  readonly requestId?: string;
 
   constructor(status: number, code: string, message: string, fields?: FieldErrors, details: Record<string, unknown> = {}) {
     super(message);
@@ -22,6 +24,7 @@ export class ApiError extends Error {
     this.code = code;
     this.fields = fields;
     this.details = details;
+    if (typeof details.requestId === "string") this.requestId = details.requestId;
   }
 }
 

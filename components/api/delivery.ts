@@ -1,19 +1,12 @@
 import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
 import { api } from "./client";
-import { calendarKeys } from "./calendar";
+import { calendarKeys, deliveryKeys } from "./keys";
 import type { Weekday } from "../../shared/calendar";
+import type { AccountDeliveryDto } from "../../shared/contracts/billing";
 
-export interface AccountDeliveryDto {
-  /** null: every day the bakery delivers. */
-  routeWeekdays: Weekday[] | null;
-  minimumOrderCents: number;
-  priceListId: number | null;
-}
+export type { AccountDeliveryDto } from "../../shared/contracts/billing";
 
-export const deliveryKeys = {
-  all: ["delivery"] as const,
-  detail: (accountId: number) => [...deliveryKeys.all, accountId] as const,
-};
+export { deliveryKeys } from "./keys";
 
 export const deliveryApi = {
   get: (accountId: number) => api<{ delivery: AccountDeliveryDto }>(`/api/accounts/${accountId}/delivery`).then((r) => r.delivery),

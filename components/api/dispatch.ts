@@ -1,27 +1,15 @@
 import { useMutation, useQueryClient } from "@tanstack/react-query";
 import { api } from "./client";
-import { boardKeys } from "./board";
-import { calendarKeys } from "./calendar";
-import { invoiceKeys } from "./invoices";
+import { boardKeys, calendarKeys, invoiceKeys, orderKeys, reportKeys } from "./keys";
+import type { DispatchAdjustment } from "../../shared/schemas/billing";
+import type { DispatchResponse } from "../../shared/contracts/billing";
 
-/** A line that went out short: what was delivered of it, and why. */
-export interface DispatchAdjustment {
-  orderId: number;
-  productId: number;
-  deliveredQuantity: number;
-  reason?: string;
-}
-
-export interface DispatchResult {
-  /** Orders marked delivered. */
-  delivered: number;
-  /** Invoice numbers issued at once (accounts that pay by card). */
-  invoices: string[];
-}
+export type { DispatchAdjustment } from "../../shared/schemas/billing";
+export type { DispatchResult } from "../../shared/contracts/billing";
 
 export const dispatchApi = {
   confirm: (date: string, adjustments: DispatchAdjustment[]) =>
-    api<{ result: DispatchResult }>(`/api/deliveries/${date}/confirm`, { method: "POST", body: { adjustments } }).then((r) => r.result),
+    api<DispatchResponse>(`/api/deliveries/${date}/confirm`, { method: "POST", body: { adjustments } }).then((r) => r.result),
 };
 
 /** Confirm a delivery date's dispatch (owner, baker): its orders become delivered; card accounts are invoiced. */
@@ -31,10 +19,10 @@ export function useConfirmDispatchMutation(date: string) {
     mutationFn: (adjustments: DispatchAdjustment[]) => dispatchApi.confirm(date, adjustments),
     onSuccess: () => {
       void qc.invalidateQueries({ queryKey: boardKeys.all });
-      void qc.invalidateQueries({ queryKey: ["orders"] });
+      void qc.invalidateQueries({ queryKey: orderKeys.all });
       void qc.invalidateQueries({ queryKey: calendarKeys.all });
       void qc.invalidateQueries({ queryKey: invoiceKeys.all });
-      void qc.invalidateQueries({ queryKey: ["reports"] });
+      void qc.invalidateQueries({ queryKey: reportKeys.all });
     },
   });
 }

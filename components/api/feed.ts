@@ -1,14 +1,12 @@
 import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
 import { api } from "./client";
+import { feedKeys } from "./keys";
+import type { CalendarFeedDto } from "../../shared/contracts/feed";
 
-export const feedKeys = {
-  all: ["calendarFeed"] as const,
-  /** accountId 0: the signed-in buyer's own account. */
-  detail: (accountId?: number) => [...feedKeys.all, accountId ?? 0] as const,
-};
+export { feedKeys } from "./keys";
 
 export const feedApi = {
-  get: (accountId?: number) => api<{ url: string | null }>("/api/calendar-feed", { query: { accountId } }).then((r) => r.url),
+  get: (accountId?: number) => api<CalendarFeedDto>("/api/calendar-feed", { query: { accountId } }).then((r) => r.url),
   rotate: (accountId?: number) => api<{ url: string }>("/api/calendar-feed", { method: "POST", query: { accountId } }).then((r) => r.url),
   revoke: (accountId?: number) => api<void>("/api/calendar-feed", { method: "DELETE", query: { accountId } }),
 };

@@ -1,23 +1,12 @@
 import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
 import { api } from "./client";
-import { productKeys, productsApi } from "./products";
-import { productionKeys } from "./production";
+import { formulaKeys, productKeys, productionKeys } from "./keys";
+import { productsApi } from "./products";
 import type { FormulaDto, FormulaInput } from "../../shared/schemas/production";
+import type { FormulaVersionDto } from "../../shared/contracts/production";
 
-export interface FormulaVersionDto {
-  version: number;
-  note: string;
-  createdAt: string;
-}
-
-export const formulaKeys = {
-  all: ["formulas"] as const,
-  lists: () => [...formulaKeys.all, "list"] as const,
-  details: () => [...formulaKeys.all, "detail"] as const,
-  /** version 0 = the current one. */
-  detail: (id: number, version = 0) => [...formulaKeys.details(), id, version] as const,
-  history: (id: number) => [...formulaKeys.all, "history", id] as const,
-};
+export type { FormulaVersionDto } from "../../shared/contracts/production";
+export { formulaKeys } from "./keys";
 
 export const formulasApi = {
   list: () => api<{ formulas: FormulaDto[] }>("/api/formulas").then((r) => r.formulas),

@@ -1,14 +1,9 @@
 import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
 import { api } from "./client";
-import { formulaKeys } from "./formulas";
-import { productKeys } from "./products";
-import { productionKeys } from "./production";
+import { formulaKeys, ingredientKeys, productKeys, productionKeys } from "./keys";
 import type { IngredientDto, IngredientInput } from "../../shared/schemas/production";
 
-export const ingredientKeys = {
-  all: ["ingredients"] as const,
-  list: () => [...ingredientKeys.all, "list"] as const,
-};
+export { ingredientKeys } from "./keys";
 
 export const ingredientsApi = {
   list: () => api<{ ingredients: IngredientDto[] }>("/api/ingredients").then((r) => r.ingredients),

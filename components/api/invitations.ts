@@ -1,12 +1,9 @@
 import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
 import { api } from "./client";
-import { officeKeys } from "./office";
+import { invitationKeys, officeKeys } from "./keys";
 import type { InvitationCreateInput, InvitationDto } from "../../shared/schemas/users";
 
-export const invitationKeys = {
-  all: ["invitations"] as const,
-  list: () => [...invitationKeys.all, "list"] as const,
-};
+export { invitationKeys } from "./keys";
 
 export const invitationsApi = {
   list: () => api<{ invitations: InvitationDto[] }>("/api/invitations").then((r) => r.invitations),

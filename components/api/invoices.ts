@@ -2,147 +2,20 @@ import { Linking, Platform } from "react-native";
 import { keepPreviousData, useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
 import { api, apiBlob } from "./client";
 import { saveBlob } from "./files";
-import { accountKeys } from "./accounts";
-import { officeKeys } from "./office";
-import { reportKeys } from "./reports";
-import { payoutKeys } from "./payouts";
+import { accountKeys, invoiceKeys, officeKeys, payoutKeys, reportKeys } from "./keys";
+import type { CreditNoteInput, InvoiceSort, PaymentInput } from "../../shared/schemas/billing";
+import type {
+  CheckoutDto, CreditNoteResponse, InvoiceDetailDto, InvoiceDto, InvoiceListDto, InvoiceStatus, OverpaymentRefundResponse, RecordPaymentResponse, StatementsResponse,
+} from "../../shared/contracts/billing";
 
-export const INVOICE_STATUSES = ["open", "paid", "void", "partially_refunded", "refunded"] as const;
-export type InvoiceStatus = (typeof INVOICE_STATUSES)[number];
-export const INVOICE_SORTS = ["newest", "oldest", "due", "amount", "account"] as const;
-export type InvoiceSort = (typeof INVOICE_SORTS)[number];
-export const PAYMENT_METHODS = ["bank_transfer", "cheque", "cash", "other"] as const;
-export type ManualPaymentMethod = (typeof PAYMENT_METHODS)[number];
+export { INVOICE_SORTS, INVOICE_STATUSES, PAYMENT_METHODS } from "../../shared/schemas/billing";
+export type { CreditNoteInput, InvoiceSort, ManualPaymentMethod, PaymentInput } from "../../shared/schemas/billing";
+export type {
+  CheckoutDto, CreditNoteDto, CreditNoteLineDto, CreditNoteResult, InvoiceAlertDto, InvoiceDetailDto, InvoiceDto, InvoiceEmailDto, InvoiceLineDto,
+  InvoiceListDto, InvoiceStatus, InvoiceTotalsDto, OverpaymentRefundResult, PaymentDto, RefundDto,
+} from "../../shared/contracts/billing";
 
-/** One invoice as the API lists it; money in integer cents of `currency`. */
-export interface InvoiceDto {
-  id: number;
-  number: string;
-  accountId: number;
-  accountName: string;
-  kind: "order" | "statement";
-  status: InvoiceStatus;
-  issueDate: string;
-  dueDate: string;
-  periodStart: string | null;
-  periodEnd: string | null;
-  currency: string;
-  subtotalCents: number;
-  taxRateBp: number;
-  taxCents: number;
-  totalCents: number;
-  creditedCents: number;
-  paidCents: number;
-  refundedCents: number;
-  amountDueCents: number;
-  /** Paid beyond what the invoice is worth (a card page paid after it was settled another way): refund it. */
-  overpaidCents: number;
-  overdue: boolean;
-  taxExempt: boolean;
-  sentAt: string | null;
-}
-
-export interface InvoiceTotalsDto {
-  count: number;
-  totalCents: number;
-  dueCents: number;
-  paidCents: number;
-  /** How many of the listed invoices were paid more than they owe. */
-  overpaidCount?: number;
-}
-
-export interface InvoiceListDto {
-  invoices: InvoiceDto[];
-  totals: InvoiceTotalsDto;
-}
-
-export interface InvoiceLineDto {
-  id: number;
-  orderId: number;
-  deliveryDate: string;
-  description: string;
-  quantity: number;
-  unitPriceCents: number;
-  amountCents: number;
-}
-
-export interface PaymentDto {
-  id: number;
-  method: "card" | ManualPaymentMethod;
-  amountCents: number;
-  reference: string;
-  receivedOn: string;
-  stripePaymentIntentId: string | null;
-  stripeChargeId: string | null;
-}
-
-export interface CreditNoteLineDto {
-  description: string;
-  quantity: number;
-  unitPriceCents: number;
-  amountCents: number;
-}
-
-export interface CreditNoteDto {
-  id: number;
-  number: string;
-  reason: string;
-  totalCents: number;
-  subtotalCents: number;
-  taxCents: number;
-  disposition: "applied" | "refund" | "carry";
-  issueDate: string;
-  lines: CreditNoteLineDto[];
-  /** Set when this note was issued on an earlier invoice and carried onto this one. */
-  carriedFromInvoiceId: number | null;
-}
-
-export interface RefundDto {
-  id: number;
-  stripeRefundId: string;
-  amountCents: number;
-  /** Gave back an overpayment rather than part of the sale. */
-  overpayment?: boolean;
-  createdAt: string;
-}
-
-/** Something on the invoice the bookkeeper should look at. */
-export interface InvoiceAlertDto {
-  /** "overpayment": paid more than it owes; "rejected_event": a payment notice from Stripe that did not check out. */
-  kind: "overpayment" | "rejected_event";
-  message: string;
-  amountCents: number | null;
-  eventId: string | null;
-  at: string | null;
-}
-
-export interface OverpaymentRefundResult {
-  stripeRefundId: string;
-  amountCents: number;
-}
-
-export interface InvoiceEmailDto {
-  id: number;
-  kind: string;
-  to: string;
-  subject: string;
-  status: "pending" | "sending" | "sent" | "failed";
-  sentAt: string | null;
-  createdAt: string;
-}
-
-export interface InvoiceDetailDto {
-  invoice: InvoiceDto;
-  lines: InvoiceLineDto[];
-  payments: PaymentDto[];
-  creditNotes: CreditNoteDto[];
-  refunds: RefundDto[];
-  /** The invoice mail and payment receipts, with their delivery status. */
-  emails?: InvoiceEmailDto[];
-  /** Overpayments and rejected payment notices (office screens show them). */
-  alerts?: InvoiceAlertDto[];
-}
-
+/** The list's filters as the screens hold them (the query string is parsed by shared/schemas/billing.ts invoiceListQuerySchema). */
 export interface InvoiceListParams {
   status?: InvoiceStatus;
   accountId?: number;
@@ -153,45 +26,18 @@ export interface InvoiceListParams {
   sort?: InvoiceSort;
 }
 
-export interface PaymentInput {
-  amountCents: number;
-  method: ManualPaymentMethod;
-  reference: string;
-  receivedOn: string;
-}
-
-export interface CreditNoteInput {
-  reason: string;
-  lines: { description: string; quantity: number; unitPriceCents: number }[];
-  carry?: boolean;
-}
-
-export interface CreditNoteResult {
-  id: number;
-  number: string;
-  totalCents: number;
-  disposition: CreditNoteDto["disposition"];
-}
-
-export const invoiceKeys = {
-  all: ["invoices"] as const,
-  lists: () => [...invoiceKeys.all, "list"] as const,
-  list: (p: InvoiceListParams = {}) =>
-    [...invoiceKeys.lists(), { status: p.status ?? "", accountId: p.accountId ?? 0, from: p.from ?? "", to: p.to ?? "", overdue: !!p.overdue, q: p.q ?? "", sort: p.sort ?? "newest" }] as const,
-  details: () => [...invoiceKeys.all, "detail"] as const,
-  detail: (id: number) => [...invoiceKeys.details(), id] as const,
-};
+export { invoiceKeys } from "./keys";
 
 export const invoicesApi = {
   list: (p: InvoiceListParams = {}) =>
     api<InvoiceListDto>("/api/invoices", { query: { status: p.status, accountId: p.accountId, from: p.from, to: p.to, overdue: p.overdue ? 1 : undefined, q: p.q?.trim(), sort: p.sort } }),
   get: (id: number) => api<InvoiceDetailDto>(`/api/invoices/${id}`),
   pdf: (id: number) => apiBlob(`/api/invoices/${id}/pdf`),
-  checkout: (id: number) => api<{ url: string }>(`/api/invoices/${id}/checkout`, { method: "POST" }),
-  recordPayment: (id: number, input: PaymentInput) => api<{ payment: PaymentDto }>(`/api/invoices/${id}/payments`, { method: "POST", body: input }).then((r) => r.payment),
-  creditNote: (id: number, input: CreditNoteInput) => api<{ creditNote: CreditNoteResult }>(`/api/invoices/${id}/credit-notes`, { method: "POST", body: input }).then((r) => r.creditNote),
-  refundOverpayment: (id: number) => api<{ refund: OverpaymentRefundResult }>(`/api/invoices/${id}/overpayment-refund`, { method: "POST" }).then((r) => r.refund),
-  issueStatements: (through?: string) => api<{ issued: string[] }>("/api/invoices/statements", { method: "POST", body: through ? { through } : {} }).then((r) => r.issued),
+  checkout: (id: number) => api<CheckoutDto>(`/api/invoices/${id}/checkout`, { method: "POST" }),
+  recordPayment: (id: number, input: PaymentInput) => api<RecordPaymentResponse>(`/api/invoices/${id}/payments`, { method: "POST", body: input }).then((r) => r.payment),
+  creditNote: (id: number, input: CreditNoteInput) => api<CreditNoteResponse>(`/api/invoices/${id}/credit-notes`, { method: "POST", body: input }).then((r) => r.creditNote),
+  refundOverpayment: (id: number) => api<OverpaymentRefundResponse>(`/api/invoices/${id}/overpayment-refund`, { method: "POST" }).then((r) => r.refund),
+  issueStatements: (through?: string) => api<StatementsResponse>("/api/invoices/statements", { method: "POST", body: through ? { through } : {} }).then((r) => r.issued),
 };
 
 export function useInvoicesQuery(params: InvoiceListParams, options: { enabled?: boolean } = {}) {

@@ -1,11 +1,9 @@
 import { useQuery } from "@tanstack/react-query";
 import { api } from "./client";
+import { officeKeys } from "./keys";
 import type { OfficeSummaryDto } from "../../shared/schemas/bakery";
 
-export const officeKeys = {
-  all: ["office"] as const,
-  summary: () => [...officeKeys.all, "summary"] as const,
-};
+export { officeKeys } from "./keys";
 
 export const officeApi = {
   summary: () => api<{ summary: OfficeSummaryDto }>("/api/office/summary").then((r) => r.summary),

@@ -1,24 +1,9 @@
 import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
 import { api } from "./client";
-import { calendarKeys } from "./calendar";
-import { boardKeys } from "./board";
-import { standingKeys } from "./standing";
-import type { OrderCreateInput, OrderDto, OrderStatus, OrderUpdateInput } from "../../shared/schemas/orders";
+import { boardKeys, calendarKeys, orderKeys, standingKeys, type OrderListParams } from "./keys";
+import type { OrderCreateInput, OrderDto, OrderUpdateInput } from "../../shared/schemas/orders";
 
-export interface OrderListParams {
-  from?: string;
-  to?: string;
-  accountId?: number;
-  status?: OrderStatus;
-}
-
-export const orderKeys = {
-  all: ["orders"] as const,
-  lists: () => [...orderKeys.all, "list"] as const,
-  list: (params: OrderListParams = {}) => [...orderKeys.lists(), { from: params.from ?? "", to: params.to ?? "", accountId: params.accountId ?? 0, status: params.status ?? "" }] as const,
-  details: () => [...orderKeys.all, "detail"] as const,
-  detail: (id: number) => [...orderKeys.details(), id] as const,
-};
+export { orderKeys, type OrderListParams } from "./keys";
 
 export const ordersApi = {
   list: (params: OrderListParams = {}) => api<{ orders: OrderDto[] }>("/api/orders", { query: { ...params } }).then((r) => r.orders),

@@ -1,31 +1,16 @@
 import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
 import { api } from "./client";
+import { outboxKeys } from "./keys";
+import type { MailStatus } from "../../shared/schemas/outbox";
+import type { OutboxMailDto, ResendResultDto } from "../../shared/contracts/outbox";
 
-export const MAIL_STATUSES = ["pending", "sending", "sent", "failed"] as const;
-export type MailStatus = (typeof MAIL_STATUSES)[number];
-
-export interface OutboxMailDto {
-  id: number;
-  kind: string;
-  to: string;
-  subject: string;
-  status: MailStatus;
-  attempts: number;
-  lastError: string | null;
-  nextAttemptAt: string | null;
-  sentAt: string | null;
-  createdAt: string;
-  messageId: string;
-}
-
-export const outboxKeys = {
-  all: ["outbox"] as const,
-  list: (status?: MailStatus) => [...outboxKeys.all, "list", status ?? ""] as const,
-};
+export { MAIL_STATUSES, type MailStatus } from "../../shared/schemas/outbox";
+export type { OutboxMailDto, ResendResultDto } from "../../shared/contracts/outbox";
+export { outboxKeys } from "./keys";
 
 export const outboxApi = {
   list: (status?: MailStatus) => api<{ mails: OutboxMailDto[] }>("/api/outbox", { query: { status } }).then((r) => r.mails),
-  resend: (id: number) => api<{ queued: boolean }>(`/api/outbox/${id}/resend`, { method: "POST" }),
+  resend: (id: number) => api<ResendResultDto>(`/api/outbox/${id}/resend`, { method: "POST" }),
 };
 
 /** The owner's outgoing mail. */

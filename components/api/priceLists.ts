@@ -1,13 +1,9 @@
 import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
 import { api } from "./client";
-import { productKeys } from "./products";
-import { deliveryKeys } from "./delivery";
+import { deliveryKeys, priceListKeys, productKeys } from "./keys";
 import type { PriceListDto, PriceListInput } from "../../shared/schemas/catalog";
 
-export const priceListKeys = {
-  all: ["priceLists"] as const,
-  list: () => [...priceListKeys.all, "list"] as const,
-};
+export { priceListKeys } from "./keys";
 
 export const priceListsApi = {
   list: () => api<{ priceLists: PriceListDto[] }>("/api/price-lists").then((r) => r.priceLists),

@@ -1,61 +1,20 @@
 import { Platform } from "react-native";
 import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
 import { api, apiBlob } from "./client";
+import { productionKeys } from "./keys";
 import type { z } from "zod";
-import type { PlanDto, ProductionSettingsDto, productionSettingsSchema } from "../../shared/schemas/production";
+import type { ProductionSettingsDto, productionSettingsSchema } from "../../shared/schemas/production";
+import type { BakeDayInput, ForecastDto, PlanProgress, PlanView, ProgressInput } from "../../shared/contracts/production";
 import type { UnitSystem } from "../../shared/units";
 
-/** The plan as the API sends it: the stored or live plan, plus what a fresh calculation would change. */
-export type PlanView = PlanDto & { changes: string[] };
-export type PlanProgress = PlanDto["progress"];
-
-export interface BakeDayInput {
-  extraPans: Record<string, number>;
-  roomC: number;
-  flourC: number;
-  pasteC: number;
-  /** Tap water and milk as they come (for the ice and chilling); unchanged when left out. */
-  tapC?: number;
-  milkC?: number;
-}
-
-export type ProgressInput = TickInput | InternalReadingInput;
-
-/** The internal temperature reached by an oven load (°C; null clears it), recorded by the baker. */
-export interface InternalReadingInput {
-  kind: "internal";
-  /** The oven load's number. */
-  key: string;
-  valueC: number | null;
-}
-
-export interface TickInput {
-  kind: "mix" | "wave";
-  /** "<formulaId>:<mixIndex>" for a mix, "<loadNumber>" for an oven load (kind "wave", its stored name). */
-  key: string;
-  done: boolean;
-}
+/** The plan as the API sends it, the bake day's inputs and progress, the forecast: shared/contracts/production.ts. */
+export type { BakeDayInput, ForecastDto, InternalReadingInput, PlanProgress, PlanView, ProgressInput, TickInput } from "../../shared/contracts/production";
 
 /** Mixers, ovens, crew, packing, shift start, dispatch and overnight retard (shared/schemas/production.ts). */
 export type { ProductionSettingsDto };
 export type ProductionSettingsBody = z.input<typeof productionSettingsSchema>;
 
-export interface ForecastDto {
-  from: string;
-  to: string;
-  days: { date: string; doughGrams: number; orderedUnits: number }[];
-  items: { ingredientId: number; name: string; grams: number; packName: string; packGrams: number; packs: number; costCents: number; byDay: Record<string, number> }[];
-  totalCostCents: number;
-}
-
-export const productionKeys = {
-  all: ["production"] as const,
-  nextDay: () => [...productionKeys.all, "next-day"] as const,
-  plans: () => [...productionKeys.all, "plan"] as const,
-  plan: (date: string) => [...productionKeys.plans(), date] as const,
-  forecast: (from: string) => [...productionKeys.all, "forecast", from] as const,
-  settings: () => [...productionKeys.all, "settings"] as const,
-};
+export { productionKeys } from "./keys";
 
 /** The key a mix's progress is stored under. */
 export const mixKey = (formulaId: number, index: number) => `${formulaId}:${index}`;
@@ -90,7 +49,7 @@ function usePlanSaved(date: string) {
   const qc = useQueryClient();
   return (plan: PlanView) => {
     qc.setQueryData(productionKeys.plan(date), { ...plan, changes: [] });
-    void qc.invalidateQueries({ queryKey: [...productionKeys.all, "forecast"] });
+    void qc.invalidateQueries({ queryKey: productionKeys.forecasts() });
   };
 }
 

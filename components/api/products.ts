@@ -1,20 +1,10 @@
 import { useState } from "react";
 import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
 import { api, uploadFile, type UploadFile } from "./client";
+import { formulaKeys, productKeys, productionKeys, type ProductListParams } from "./keys";
 import type { ProductDto, ProductInput } from "../../shared/schemas/catalog";
 
-export interface ProductListParams {
-  /** Include archived products (office only). */
-  all?: boolean;
-}
-
-export const productKeys = {
-  all: ["products"] as const,
-  lists: () => [...productKeys.all, "list"] as const,
-  list: (params: ProductListParams = {}) => [...productKeys.lists(), { all: !!params.all }] as const,
-  details: () => [...productKeys.all, "detail"] as const,
-  detail: (id: number) => [...productKeys.details(), id] as const,
-};
+export { productKeys, type ProductListParams } from "./keys";
 
 export type ProductPatch = Partial<ProductInput>;
 
@@ -42,9 +32,8 @@ function useProductSaved() {
     qc.setQueryData(productKeys.detail(product.id), product);
     void qc.invalidateQueries({ queryKey: productKeys.lists() });
     // Its formula, components and bake feed the plans and the forecast; formulas list their products.
-    // (productionKeys.all and formulaKeys.all, written out: formulas.ts imports this module.)
-    void qc.invalidateQueries({ queryKey: ["production"] });
-    void qc.invalidateQueries({ queryKey: ["formulas"] });
+    void qc.invalidateQueries({ queryKey: productionKeys.all });
+    void qc.invalidateQueries({ queryKey: formulaKeys.all });
   };
 }
 

@@ -1,35 +1,19 @@
 import { useQuery } from "@tanstack/react-query";
 import { api, apiBlob } from "./client";
 import { saveBlob } from "./files";
+import { reportKeys } from "./keys";
 import type { AgingBucket } from "../../shared/billing";
+import type { ExportFile } from "../../shared/schemas/billing";
+import type { AgingResponse } from "../../shared/contracts/billing";
 
-export type AgingAmounts = Record<AgingBucket, number> & { total: number };
+export { EXPORT_FILES } from "../../shared/schemas/billing";
+export type { ExportFile } from "../../shared/schemas/billing";
+export type { AgingAmounts, AgingDto, AgingRowDto } from "../../shared/contracts/billing";
 
-export interface AgingRowDto extends AgingAmounts {
-  accountId: number;
-  accountName: string;
-  onHold: boolean;
-  /** The hold is the automatic credit hold (overdue invoices), not a pause by hand. */
-  creditHold: boolean;
-}
-
-export interface AgingDto {
-  today: string;
-  buckets: AgingBucket[];
-  accounts: AgingRowDto[];
-  totals: AgingAmounts;
-}
-
-export const EXPORT_FILES = ["invoices.csv", "payments.csv", "payouts.csv"] as const;
-export type ExportFile = (typeof EXPORT_FILES)[number];
-
-export const reportKeys = {
-  all: ["reports"] as const,
-  aging: () => [...reportKeys.all, "aging"] as const,
-};
+export { reportKeys } from "./keys";
 
 export const reportsApi = {
-  aging: () => api<{ aging: AgingDto }>("/api/reports/aging").then((r) => r.aging),
+  aging: () => api<AgingResponse>("/api/reports/aging").then((r) => r.aging),
   export: (file: ExportFile) => apiBlob(`/api/reports/exports/${file}`),
 };
 

@@ -1,20 +1,11 @@
 import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
 import { api } from "./client";
-import { calendarKeys } from "./calendar";
-import { boardKeys } from "./board";
+import { boardKeys, calendarKeys, orderKeys, standingKeys } from "./keys";
 import type { StandingOrderDto, StandingOrderInput } from "../../shared/schemas/orders";
+import type { MaterialiseResult } from "../../shared/contracts/standing";
 
-export const standingKeys = {
-  all: ["standingOrders"] as const,
-  /** accountId 0: the signed-in buyer's own. */
-  detail: (accountId?: number) => [...standingKeys.all, accountId ?? 0] as const,
-};
-
-export interface MaterialiseResult {
-  created: number;
-  updated: number;
-  cancelled: number;
-}
+export type { MaterialiseResult } from "../../shared/contracts/standing";
+export { standingKeys } from "./keys";
 
 export const standingApi = {
   get: (accountId?: number) => api<{ standingOrder: StandingOrderDto | null }>("/api/standing-orders", { query: { accountId } }).then((r) => r.standingOrder),
@@ -30,7 +21,7 @@ function useOrdersMade() {
   const qc = useQueryClient();
   return () => {
     // Saving makes, changes or cancels orders for the dates it covers.
-    void qc.invalidateQueries({ queryKey: ["orders"] });
+    void qc.invalidateQueries({ queryKey: orderKeys.all });
     void qc.invalidateQueries({ queryKey: calendarKeys.all });
     void qc.invalidateQueries({ queryKey: boardKeys.all });
   };

@@ -1,7 +1,7 @@
-import { useCallback, useMemo, useRef, useState } from "react";
+import { useCallback, useMemo, useRef, useState, type Dispatch, type SetStateAction } from "react";
 import type { ZodTypeAny, z } from "zod";
 import type { FieldErrors } from "../../shared/errors";
-import { splitError, validate } from "./errors";
+import { isFieldName, splitError, validate, type FieldNames } from "./errors";
 
 /** Shown at the top of a form when the check finds more than one field wrong. */
 export const MANY_FIELDS_MESSAGE = "Some fields need attention.";
@@ -13,16 +13,26 @@ export interface ZodFormOptions<V extends object, S extends ZodTypeAny> {
   initial: V | (() => V);
   /**
    * What the schema parses, made from the form's values. Leave it out when the values are the schema's
-   * input already (`V` = `z.input<S>`); give it where inputs hold text for numbers ("8.75" → 875).
+   * input already (`V` = `z.input<S>`); give it where inputs hold text for numbers ("8.75" → 875). Any field
+   * may still be missing (a choice not made yet): the schema's check says so beside it.
    */
-  toInput?: (values: V) => z.input<S>;
+  toInput?: (values: V) => Draft<z.input<S>>;
   /**
-   * The field names this form shows an error beside (the schema's paths, as the server names them too).
-   * Errors for any other name go to the top of the form. Defaults to the keys of the initial values.
+   * The field names this form shows an error beside (the schema's paths, as the server names them too),
+   * or a test for them (rows of a list: `lines.0.quantity`). A rejected request's errors for any other name
+   * go to the top of the form; so does the check's first message for a name not listed here (given
+   * explicitly). Defaults to the keys of the initial values.
    */
-  fields?: readonly string[];
+  fields?: FieldNames;
   /** The top message when several fields are wrong; null to show only the field messages. */
   manyMessage?: string | null;
+  /** The top message for a rejected request (default: its own message), e.g. words for a known error code. */
+  errorMessage?: (error: unknown) => string;
+}
+
+export interface ResetOptions {
+  /** Keep the "saved" state (the reload after a save brings the stored values back). */
+  keepSaved?: boolean;
 }
 
 export interface ZodForm<V extends object, Out> {
@@ -32,10 +42,12 @@ export interface ZodForm<V extends object, Out> {
   setValue: <K extends keyof V>(key: K, value: V[K]) => void;
   patch: (changes: Partial<V>) => void;
   /** Start again from these values (a reload from the server): errors cleared, not dirty. */
-  reset: (values: V) => void;
+  reset: (values: V, options?: ResetOptions) => void;
   /** Props for a TextField bound to a text value: value, onChangeText and its error. */
   text: <K extends StringKeys<V>>(key: K) => { value: string; onChangeText: (value: string) => void; error: string | undefined };
   errors: FieldErrors;
+  /** Set or clear field messages by hand (a check made outside the schema, such as a picked file's type). */
+  setErrors: Dispatch<SetStateAction<FieldErrors>>;
   formError: string | null;
   setFormError: (message: string | null) => void;
   /** Shows errors from outside the submit (a second action on the same form). */
@@ -52,6 +64,9 @@ export interface ZodForm<V extends object, Out> {
   submit: (onValid: (data: Out) => unknown) => Promise<boolean>;
 }
 
+/** A schema input whose fields may still be left out or null (the form's check names them). */
+export type Draft<T> = T extends object ? { [K in keyof T]?: T[K] | null } : T;
+
 type StringKeys<V> = { [K in keyof V]: V[K] extends string ? K : never }[keyof V];
 
 function same(a: unknown, b: unknown): boolean {
@@ -63,7 +78,7 @@ function same(a: unknown, b: unknown): boolean {
  * the server's field errors put beside the same fields, anything else at the top, and one submit at a time.
  */
 export function useZodForm<V extends object, S extends ZodTypeAny>(options: ZodFormOptions<V, S>): ZodForm<V, z.output<S>> {
-  const { schema, toInput, manyMessage = MANY_FIELDS_MESSAGE } = options;
+  const { schema, toInput, manyMessage = MANY_FIELDS_MESSAGE, errorMessage } = options;
   const [values, setValues] = useState<V>(options.initial);
   const [baseline, setBaseline] = useState<V>(values);
   const [errors, setErrors] = useState<FieldErrors>({});
@@ -73,7 +88,8 @@ export function useZodForm<V extends object, S extends ZodTypeAny>(options: ZodF
   const busy = useRef(false);
   const latest = useRef(values);
   latest.current = values;
-  const fieldNames = useMemo(() => options.fields ?? (Object.keys(values) as string[]), [options.fields, values]);
+  const fieldNames = useMemo<FieldNames>(() => options.fields ?? (Object.keys(values) as string[]), [options.fields, values]);
+  const explicitFields = options.fields !== undefined;
 
   const patch = useCallback((changes: Partial<V>) => {
     setSaved(false);
@@ -81,20 +97,20 @@ export function useZodForm<V extends object, S extends ZodTypeAny>(options: ZodF
   }, []);
   const setValue = useCallback(<K extends keyof V>(key: K, value: V[K]) => patch({ [key]: value } as unknown as Partial<V>), [patch]);
   const set = useCallback(<K extends keyof V>(key: K) => (value: V[K]) => setValue(key, value), [setValue]);
-  const reset = useCallback((next: V) => {
+  const reset = useCallback((next: V, resetOptions?: ResetOptions) => {
     setValues(next);
     setBaseline(next);
     setErrors({});
     setFormError(null);
-    setSaved(false);
+    if (!resetOptions?.keepSaved) setSaved(false);
   }, []);
   const fail = useCallback(
     (error: unknown) => {
       const split = splitError(error, fieldNames);
       setErrors(split.fields);
-      setFormError(split.formError);
+      setFormError(split.formError !== null && errorMessage ? errorMessage(error) : split.formError);
     },
-    [fieldNames],
+    [fieldNames, errorMessage],
   );
 
   const submit = async (onValid: (data: z.output<S>) => unknown): Promise<boolean> => {
@@ -105,7 +121,9 @@ export function useZodForm<V extends object, S extends ZodTypeAny>(options: ZodF
     const checked = validate(schema, toInput ? toInput(sent) : sent);
     if (!checked.ok) {
       setErrors(checked.fields);
-      setFormError(manyMessage && Object.keys(checked.fields).length > 1 ? manyMessage : null);
+      const elsewhere = explicitFields ? Object.keys(checked.fields).find((name) => !isFieldName(fieldNames, name)) : undefined;
+      const many = manyMessage && Object.keys(checked.fields).length > 1 ? manyMessage : null;
+      setFormError(elsewhere !== undefined ? checked.fields[elsewhere] : many);
       return false;
     }
     setErrors({});
@@ -139,6 +157,7 @@ export function useZodForm<V extends object, S extends ZodTypeAny>(options: ZodF
     reset,
     text,
     errors,
+    setErrors,
     formError,
     setFormError,
     fail,

@@ -51,3 +51,6 @@ export function shortfall(totalCents: number, minimumCents: number): number {
 export function productsLabel(n: number): string {
   return productsText(n);
 }
+
+/** "3 orders" / "1 order". */
+export const ordersLabel = (n: number) => (n === 1 ? "1 order" : `${n} orders`);

@@ -2,6 +2,7 @@ import { formulaFigures, formulaWarnings, validateFormula, type FormulaFigures, 
 import { formulaInputSchema, type FormulaDto, type FormulaInput, type IngredientDto } from "../../shared/schemas/production";
 import { fieldErrorsFrom } from "../../shared/schemas/common";
 import type { FieldErrors } from "../../shared/errors";
+import { rowFields, type CheckResult } from "../forms/checkedSchema";
 
 /** One ingredient line as typed: the percent stays text until it is read. */
 export interface LineValue {
@@ -145,7 +146,7 @@ export function liveWarnings(v: FormulaValues): FieldErrors {
 }
 
 /** The API body, checked with the shared formulaInputSchema; or the messages per field. */
-export function formulaBody(v: FormulaValues, ingredients: Map<number, IngredientInfo>): { ok: true; input: FormulaInput } | { ok: false; fields: FieldErrors } {
+export function formulaBody(v: FormulaValues, ingredients: Map<number, IngredientInfo>): CheckResult<FormulaInput> {
   const fields: FieldErrors = { ...liveProblems(v, ingredients, true) };
   const spec = specOf(v);
   const candidate = {
@@ -171,12 +172,10 @@ export function formulaBody(v: FormulaValues, ingredients: Map<number, Ingredien
   return { ok: true, input: parsed.data as FormulaInput };
 }
 
-/** The form's own field keys, for splitting a server answer between the fields and the top. */
-export function formulaFieldKeys(v: FormulaValues): string[] {
-  return [
-    "name", "lossPercent", "ddtC", "frictionC", "targetInternalC", "note", "lines",
-    ...v.lines.flatMap((_, i) => [`lines.${i}.ingredientId`, `lines.${i}.percent`]),
-    ...(v.pasteOn ? ["paste.flourIngredientId", "paste.liquidIngredientId", "paste.flourPercent", "paste.liquidRatio", "paste.cookToC"] : []),
-    ...v.steps.flatMap((_, i) => [`steps.${i}.minutes`, `steps.${i}.temperatureC`, `steps.${i}.kind`]),
-  ];
-}
+/** Every field key the API may name (up to the schema's 40 lines and 30 steps), for putting its messages beside the right inputs. */
+export const FORMULA_FIELDS: readonly string[] = [
+  "name", "lossPercent", "ddtC", "frictionC", "targetInternalC", "note", "lines",
+  ...rowFields("lines", 40, ["ingredientId", "percent"]),
+  "paste.flourIngredientId", "paste.liquidIngredientId", "paste.flourPercent", "paste.liquidRatio", "paste.cookToC",
+  ...rowFields("steps", 30, ["minutes", "temperatureC", "kind"]),
+];

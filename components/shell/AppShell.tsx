@@ -86,7 +86,7 @@ export function AppShell({ area, children }: { area: HomeArea; children: React.R
 
 function SideItem({ item, active }: { item: NavItem; active: boolean }) {
   return (
-    <Link href={item.href as never} asChild>
+    <Link href={item.href} asChild>
       <LinkPressable
         accessibilityRole="link"
         aria-current={active ? "page" : undefined}
@@ -137,7 +137,7 @@ function BottomTabs({ items, pathname }: { items: NavItem[]; pathname: string })
       {items.map((item) => {
         const active = isActive(item, pathname);
         return (
-          <Link key={item.key} href={item.href as never} asChild>
+          <Link key={item.key} href={item.href} asChild>
             <LinkPressable
               accessibilityRole="link"
               accessibilityState={{ selected: active }}

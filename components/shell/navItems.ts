@@ -1,11 +1,12 @@
 import type Feather from "@expo/vector-icons/Feather";
 import type React from "react";
 import type { HomeArea, Role } from "../../shared/roles";
+import type { RoutePath } from "../routing";
 
 export interface NavItem {
   key: string;
   label: string;
-  href: string;
+  href: RoutePath;
   icon: React.ComponentProps<typeof Feather>["name"];
   /** Active only on this exact path (homes); otherwise also on its sub-paths. */
   exact?: boolean;
@@ -57,7 +58,7 @@ export const AREA_LABEL: Record<HomeArea, string> = {
 export const MAX_TABS = 5;
 
 /** Where "More" lists the rest (the office and the baker have more than five items). */
-export const MORE_HREF: Partial<Record<HomeArea, string>> = { office: "/office/more", baker: "/bake/more" };
+export const MORE_HREF: Partial<Record<HomeArea, RoutePath>> = { office: "/office/more", baker: "/bake/more" };
 
 export function navFor(area: HomeArea, role: Role): NavItem[] {
   return NAV[area].filter((item) => !item.roles || item.roles.includes(role));

@@ -8,7 +8,12 @@ export interface Column<T> {
   label: string;
   /** Share of the row's width (default 1). */
   flex?: number;
+  /** Money and counts line up on the right. */
+  align?: "left" | "right";
+  /** A cell: a string or number is written as body text (aligned as the column), anything else as it is. */
   render: (row: T) => React.ReactNode;
+  /** What the totals row shows in this column (with `footer` on the table). */
+  footer?: React.ReactNode;
 }
 
 export interface DataTableProps<T> {
@@ -18,29 +23,76 @@ export interface DataTableProps<T> {
   onRowPress?: (row: T) => void;
   rowLabel?: (row: T) => string;
   rowTestID?: (row: T) => string;
+  /** A row that needs attention gets a red tint. */
+  rowAlert?: (row: T) => boolean;
+  /** Show a totals row from the columns' `footer`. */
+  footer?: boolean;
+  footerTestID?: string;
   testID?: string;
 }
 
-/** A table for wide screens: a header row and one line per item; rows can open the item. */
-export function DataTable<T>({ columns, rows, rowKey, onRowPress, rowLabel, rowTestID, testID }: DataTableProps<T>) {
+function Cell({ content, align, strong }: { content: React.ReactNode; align: Column<unknown>["align"]; strong?: boolean }) {
+  if (typeof content === "string" || typeof content === "number") {
+    return (
+      <AppText variant={strong ? "bodyStrong" : "body"} align={align === "right" ? "right" : undefined} numberOfLines={2}>
+        {String(content)}
+      </AppText>
+    );
+  }
+  return <>{content}</>;
+}
+
+/** The table's frame: a rounded card holding a header row and the rows (for rows a screen builds itself). */
+export function TableFrame({ testID, children }: { testID?: string; children: React.ReactNode }) {
   return (
     <View style={styles.table} testID={testID} role="table">
-      <View style={[styles.row, styles.header]} role="row">
-        {columns.map((c) => (
-          <View key={c.key} style={[styles.cell, { flex: c.flex ?? 1 }]} role="columnheader">
-            <AppText variant="overline" color="muted">
-              {c.label}
-            </AppText>
-          </View>
-        ))}
-      </View>
+      {children}
+    </View>
+  );
+}
+
+type ColumnFrame = Pick<Column<unknown>, "key" | "label" | "flex" | "align">;
+
+/** One cell of a column: its share of the width and its alignment. */
+export function TableCell({ column, header, children }: { column: Omit<ColumnFrame, "key" | "label">; header?: boolean; children: React.ReactNode }) {
+  return (
+    <View style={[styles.cell, { flex: column.flex ?? 1 }, column.align === "right" && styles.right]} role={header ? "columnheader" : "cell"}>
+      {children}
+    </View>
+  );
+}
+
+/** The header row: each column's label. */
+export function TableHeaderRow({ columns }: { columns: readonly ColumnFrame[] }) {
+  return (
+    <View style={[styles.row, styles.header]} role="row">
+      {columns.map((c) => (
+        <TableCell key={c.key} column={c} header>
+          <AppText variant="overline" color="muted" align={c.align === "right" ? "right" : undefined}>
+            {c.label}
+          </AppText>
+        </TableCell>
+      ))}
+    </View>
+  );
+}
+
+/**
+ * A table for wide screens: a header row, one line per item (rows can open the item, and a row that needs
+ * attention is tinted red), and an optional totals row.
+ */
+export function DataTable<T>({ columns, rows, rowKey, onRowPress, rowLabel, rowTestID, rowAlert, footer, footerTestID, testID }: DataTableProps<T>) {
+  return (
+    <TableFrame testID={testID}>
+      <TableHeaderRow columns={columns} />
       {rows.map((row, i) => {
         const cells = columns.map((c) => (
-          <View key={c.key} style={[styles.cell, { flex: c.flex ?? 1 }]} role="cell">
-            {c.render(row)}
-          </View>
+          <TableCell key={c.key} column={c}>
+            <Cell content={c.render(row)} align={c.align} />
+          </TableCell>
         ));
-        const last = i === rows.length - 1;
+        const divided = i < rows.length - 1;
+        const alert = rowAlert?.(row);
         if (onRowPress) {
           return (
             <Pressable
@@ -51,7 +103,8 @@ export function DataTable<T>({ columns, rows, rowKey, onRowPress, rowLabel, rowT
               testID={rowTestID?.(row)}
               style={({ pressed, hovered }: { pressed: boolean; hovered?: boolean }) => [
                 styles.row,
-                !last && styles.divider,
+                divided && styles.divider,
+                alert && styles.alert,
                 (pressed || hovered) && styles.hover,
               ]}
             >
@@ -60,12 +113,21 @@ export function DataTable<T>({ columns, rows, rowKey, onRowPress, rowLabel, rowT
           );
         }
         return (
-          <View key={rowKey(row)} style={[styles.row, !last && styles.divider]} testID={rowTestID?.(row)} role="row">
+          <View key={rowKey(row)} style={[styles.row, divided && styles.divider, alert && styles.alert]} testID={rowTestID?.(row)} role="row">
             {cells}
           </View>
         );
       })}
-    </View>
+      {footer ? (
+        <View style={[styles.row, styles.footer]} role="row" testID={footerTestID}>
+          {columns.map((c) => (
+            <TableCell key={c.key} column={c}>
+              <Cell content={c.footer ?? ""} align={c.align} strong />
+            </TableCell>
+          ))}
+        </View>
+      ) : null}
+    </TableFrame>
   );
 }
 
@@ -75,5 +137,8 @@ const styles = StyleSheet.create({
   header: { backgroundColor: colors.sunken, minHeight: layout.minTouch },
   divider: { borderBottomWidth: 1, borderBottomColor: colors.border },
   hover: { backgroundColor: colors.rowHover },
+  alert: { backgroundColor: colors.dangerSoft },
+  footer: { borderTopWidth: 2, borderTopColor: colors.inputBorder, backgroundColor: colors.sunken },
   cell: { paddingHorizontal: space.sm, paddingVertical: space.sm, justifyContent: "center", minWidth: 0 },
+  right: { alignItems: "flex-end" },
 });

@@ -1,6 +1,6 @@
 import React from "react";
 import { Pressable, StyleSheet, View, type ViewStyle } from "react-native";
-import { Link } from "expo-router";
+import { Link, type Href } from "expo-router";
 import Feather from "@expo/vector-icons/Feather";
 import { AppText } from "./Text";
 import { LinkPressable } from "./LinkPressable";
@@ -21,34 +21,69 @@ export function ListCards({ testID, children }: ListCardsProps) {
 }
 
 export interface ListCardProps {
-  onPress: () => void;
+  /** Opens the thing the row shows (a button row). */
+  onPress?: () => void;
+  /** Opens it as a link instead (web: a real link, so it opens in a new tab too). Leave both out for a card that does not open. */
+  href?: Href;
   /** What a screen reader says for the whole row. */
-  accessibilityLabel: string;
+  accessibilityLabel?: string;
   testID?: string;
   /** Tighter padding, for rows that lead with a photo. */
   compact?: boolean;
-  /** The row's content; a chevron is added after it. */
+  /** A row that needs attention: a red tint and border. */
+  alert?: boolean;
+  /** The row's content; a chevron is added after it when the row opens something. */
   children: React.ReactNode;
 }
 
-/** A pressable list row in a card, ending in a chevron: opens the thing it shows. */
-export function ListCard({ onPress, accessibilityLabel, testID, compact, children }: ListCardProps) {
+const chevron = <Feather name="chevron-right" size={20} color={colors.muted} />;
+
+/** A list row in a card: ends in a chevron and opens the thing it shows (by press or as a link), or just shows it. */
+export function ListCard({ onPress, href, accessibilityLabel, testID, compact, alert, children }: ListCardProps) {
+  const look = [styles.card, compact && styles.compact, alert && styles.alert];
+  if (href) {
+    return (
+      <Link href={href} asChild>
+        <LinkPressable accessibilityRole="link" accessibilityLabel={accessibilityLabel} testID={testID} style={StyleSheet.flatten(look)} highlightStyle={styles.pressed}>
+          {children}
+          {chevron}
+        </LinkPressable>
+      </Link>
+    );
+  }
+  if (!onPress) {
+    return (
+      <View style={look} testID={testID} accessibilityLabel={accessibilityLabel}>
+        {children}
+      </View>
+    );
+  }
   return (
     <Pressable
       onPress={onPress}
       accessibilityRole="button"
       accessibilityLabel={accessibilityLabel}
       testID={testID}
-      style={({ pressed }) => [styles.card, compact && styles.compact, pressed && styles.pressed]}
+      style={({ pressed }) => [...look, pressed && styles.pressed]}
     >
       {children}
-      <Feather name="chevron-right" size={20} color={colors.muted} />
+      {chevron}
     </Pressable>
   );
 }
 
+/** The text column of a ListCard: a top line (title and badges), then smaller lines. */
+export function ListCardText({ children }: { children: React.ReactNode }) {
+  return <View style={styles.text}>{children}</View>;
+}
+
+/** The first line of a ListCard: its title growing, badges after it. */
+export function ListCardTop({ children }: { children: React.ReactNode }) {
+  return <View style={styles.top}>{children}</View>;
+}
+
 export interface LinkCardProps {
-  href: string;
+  href: Href;
   icon: React.ComponentProps<typeof Feather>["name"];
   title: string;
   hint?: string;
@@ -63,7 +98,7 @@ export interface LinkCardProps {
 export function LinkCard({ href, icon, title, hint, testID, iconBadge, style }: LinkCardProps) {
   const glyph = <Feather name={icon} size={22} color={colors.crust} />;
   return (
-    <Link href={href as never} asChild>
+    <Link href={href} asChild>
       <LinkPressable accessibilityRole="link" testID={testID} style={StyleSheet.flatten([styles.card, styles.linkCard, style])} highlightStyle={styles.pressed}>
         {iconBadge ? <View style={styles.badge}>{glyph}</View> : glyph}
         <View style={styles.text}>
@@ -98,4 +133,6 @@ const styles = StyleSheet.create({
   badge: { width: 44, height: 44, borderRadius: 22, backgroundColor: colors.crustSoft, alignItems: "center", justifyContent: "center" },
   text: { flex: 1, gap: space.xxs },
   pressed: { backgroundColor: colors.rowHover },
+  alert: { borderColor: colors.danger, backgroundColor: colors.dangerSoft },
+  top: { flexDirection: "row", alignItems: "center", gap: space.sm, flexWrap: "wrap" },
 });

@@ -12,7 +12,7 @@ export interface QueryStatesProps<T> {
   testID?: string;
   loadingTestID?: string;
   errorTestID?: string;
-  /** When the data counts as empty (no rows), `empty` is shown instead of the children. */
+  /** When the data counts as empty, `empty` is shown instead of the children (default: a list with no rows). */
   isEmpty?: (data: T) => boolean;
   empty?: EmptyStateProps | React.ReactNode;
   children: (data: T) => React.ReactNode;
@@ -39,7 +39,7 @@ export function QueryStates<T>({ query, loadingLabel, errorTitle, testID, loadin
       />
     );
   const data = query.data as T;
-  if (isEmpty && empty && isEmpty(data)) {
+  if (empty && (isEmpty ? isEmpty(data) : Array.isArray(data) && data.length === 0)) {
     return isEmptyProps(empty) ? <EmptyState testID={testID ? `${testID}-empty` : undefined} {...empty} /> : <>{empty}</>;
   }
   return <>{children(data)}</>;

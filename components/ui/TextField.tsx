@@ -12,6 +12,12 @@ export interface TextFieldProps extends Omit<TextInputProps, "style"> {
   optional?: boolean;
 }
 
+/** The keyboard and corrections for an e-mail address (spread into a TextField). */
+export const EMAIL_INPUT = { keyboardType: "email-address", inputMode: "email", autoCapitalize: "none", autoCorrect: false } as const satisfies Partial<TextInputProps>;
+
+/** A search box: no capitals or corrections, and the keyboard's key says "search". */
+export const SEARCH_INPUT = { autoCapitalize: "none", autoCorrect: false, returnKeyType: "search" } as const satisfies Partial<TextInputProps>;
+
 /** A labelled text input in the one field frame (components/ui/Field.tsx): label, hint, input, error. */
 export const TextField = forwardRef<TextInput, TextFieldProps>(function TextField(
   { label, error, hint, testID, optional, multiline, onFocus, onBlur, accessibilityLabel, ...rest },

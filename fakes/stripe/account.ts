@@ -1,8 +1,10 @@
 import { newId, randomToken, type Store } from "./store";
 import { invalid, noSuch } from "./params";
-import { cardBrand, testCardOutcome, type Decline } from "./luhn";
+import { cardBrand, testCardOutcome } from "./luhn";
+import * as ledger from "./ledger";
+import { CURRENCY, DEFAULT_API_VERSION, NO_REQUEST, type AccountOptions, type CardInput, type NewCheckoutSession, type PaymentResult, type RequestCtx } from "./account-types";
 import type {
-  ApiObject, Balance, BalanceTransaction, BalanceTransactionType, Charge, CheckoutSession, Customer, LineItem, Metadata, PaymentIntent, Payout, Refund, StripeEvent,
+  ApiObject, Balance, Charge, CheckoutSession, Customer, LineItem, Metadata, PaymentIntent, Payout, Refund, StripeEvent,
 } from "./types";
 
 /**
@@ -10,62 +12,6 @@ import type {
  * and the event it records. Inputs arrive already validated and typed (see api.ts); the checks
  * here are the ones that depend on state. Callers persist the store afterwards.
  */
-
-/** The API version the installed SDK (stripe 23) pins; events carry the caller's Stripe-Version when sent. */
-export const DEFAULT_API_VERSION = "2026-10-28.endive";
-export const CURRENCY = "usd";
-const BANK_ACCOUNT = "ba_PanwiseFakeBankAccount0";
-
-export interface RequestCtx {
-  requestId: string | null;
-  idempotencyKey: string | null;
-  apiVersion: string | null;
-}
-
-export const NO_REQUEST: RequestCtx = { requestId: null, idempotencyKey: null, apiVersion: null };
-
-export interface AccountOptions {
-  feePercent: number;
-  feeFixed: number;
-  nowMs: () => number;
-  publicBase: () => string;
-  /** Whether an event of this type goes to the webhook endpoint (sets `pending_webhooks`). */
-  webhookWants: (type: string) => boolean;
-  onEvent: (event: StripeEvent) => void;
-}
-
-export interface NewLineItem {
-  name: string;
-  description: string | null;
-  productMetadata: Metadata;
-  currency: string;
-  unitAmount: number;
-  quantity: number;
-}
-
-export interface NewCheckoutSession {
-  lineItems: NewLineItem[];
-  successUrl: string | null;
-  cancelUrl: string | null;
-  customer: string | null;
-  customerEmail: string | null;
-  customerCreation: "always" | "if_required" | null;
-  metadata: Metadata;
-  clientReferenceId: string | null;
-  paymentIntentData: { metadata: Metadata; description: string | null };
-  expiresAt: number | null;
-}
-
-export interface CardInput {
-  /** Digits only; used for the outcome and last4/brand, never stored. */
-  number: string;
-  expMonth: number;
-  expYear: number;
-  name: string;
-  email: string;
-}
-
-export type PaymentResult = { ok: true; session: CheckoutSession; redirectTo: string | null } | { ok: false; decline: Decline; paymentIntent: PaymentIntent };
 
 const clone = <T>(v: T): T => structuredClone(v);
 
@@ -351,7 +297,7 @@ export class FakeAccount {
       return { ok: false, decline, paymentIntent: pi };
     }
 
-    const txn = this.addBalanceTransaction("charge", charge.amount, this.fee(charge.amount), charge.id, pi.description);
+    const txn = ledger.addBalanceTransaction(this, "charge", charge.amount, this.fee(charge.amount), charge.id, pi.description);
     charge.balance_transaction = txn.id;
     this.store.put("charges", charge);
     Object.assign(pi, {
@@ -377,164 +323,29 @@ export class FakeAccount {
     return { ok: true, session, redirectTo };
   }
 
-  // ---- balance --------------------------------------------------------------------------------
-
-  private addBalanceTransaction(type: BalanceTransactionType, amount: number, fee: number, source: string, description: string | null): BalanceTransaction {
-    const now = this.now();
-    const txn: BalanceTransaction = {
-      id: newId("txn"),
-      object: "balance_transaction",
-      amount,
-      available_on: now,
-      balance_type: "payments",
-      created: now,
-      currency: CURRENCY,
-      description,
-      exchange_rate: null,
-      fee,
-      fee_details: fee ? [{ amount: fee, application: null, currency: CURRENCY, description: "Stripe processing fees", type: "stripe_fee" }] : [],
-      net: amount - fee,
-      reporting_category: type,
-      source,
-      status: "available",
-      type,
-    };
-    this.store.put("balanceTransactions", txn);
-    return txn;
-  }
+  // ---- balance, refunds, payouts (ledger.ts) -------------------------------------------------
 
   availableBalance(): number {
-    return Object.values(this.state.balanceTransactions).reduce((sum, t) => sum + (t.status === "available" ? t.net : 0), 0);
+    return ledger.availableBalance(this);
   }
 
   balance(): Balance {
-    const amount = this.availableBalance();
-    return {
-      object: "balance",
-      available: [{ amount, currency: CURRENCY, source_types: { card: amount } }],
-      livemode: false,
-      pending: [{ amount: 0, currency: CURRENCY, source_types: { card: 0 } }],
-    };
+    return ledger.balance(this);
   }
 
-  // ---- refunds --------------------------------------------------------------------------------
-
-  createRefund(
-    input: { charge: string | null; paymentIntent: string | null; amount: number | null; reason: Refund["reason"]; metadata: Metadata },
-    ctx: RequestCtx,
-  ): Refund {
-    let charge: Charge | undefined;
-    if (input.paymentIntent) {
-      const pi = this.store.get("paymentIntents", input.paymentIntent);
-      if (!pi) throw noSuch(input.paymentIntent, "payment_intent", 400);
-      if (pi.status !== "succeeded" || !pi.latest_charge) {
-        throw invalid(`This PaymentIntent (${pi.id}) does not have a successful charge to refund.`, "payment_intent", "charge_not_refundable");
-      }
-      charge = this.store.get("charges", pi.latest_charge);
-      if (input.charge && input.charge !== pi.latest_charge) throw invalid(`Charge ${input.charge} does not belong to PaymentIntent ${pi.id}.`, "charge");
-    } else if (input.charge) {
-      charge = this.store.get("charges", input.charge);
-      if (!charge) throw noSuch(input.charge, "charge", 400);
-    } else {
-      throw invalid("One of the following params should be provided for this request: payment_intent or charge.", undefined, "parameter_missing");
-    }
-    if (!charge) throw new Error("payment intent without its charge");
-    if (charge.status !== "succeeded") throw invalid(`Charge ${charge.id} has not succeeded and cannot be refunded.`, "charge", "charge_not_refundable");
-    const remaining = charge.amount - charge.amount_refunded;
-    if (remaining <= 0) throw invalid(`Charge ${charge.id} has already been refunded.`, "charge", "charge_already_refunded");
-    const amount = input.amount ?? remaining;
-    if (amount > remaining) {
-      const usd = (n: number) => `$${(n / 100).toFixed(2)}`;
-      throw invalid(`Refund amount (${usd(amount)}) is greater than unrefunded amount on charge (${usd(remaining)})`, "amount", "amount_too_large");
-    }
-    const id = newId("re");
-    const txn = this.addBalanceTransaction("refund", -amount, 0, id, `REFUND FOR CHARGE${charge.description ? ` (${charge.description})` : ""}`);
-    const refund: Refund = {
-      id,
-      object: "refund",
-      amount,
-      balance_transaction: txn.id,
-      charge: charge.id,
-      created: this.now(),
-      currency: charge.currency,
-      metadata: input.metadata,
-      payment_intent: charge.payment_intent,
-      reason: input.reason,
-      receipt_number: null,
-      status: "succeeded",
-    };
-    this.store.put("refunds", refund);
-    const previous = { amount_refunded: charge.amount_refunded, refunded: charge.refunded };
-    charge.amount_refunded += amount;
-    charge.refunded = charge.amount_refunded >= charge.amount;
-    this.emit("refund.created", refund, ctx);
-    this.emit("charge.refunded", charge, ctx, previous);
-    return refund;
-  }
-
-  // ---- payouts --------------------------------------------------------------------------------
-
-  private makePayout(amount: number, automatic: boolean, fields: { description: string | null; metadata: Metadata; statementDescriptor: string | null }): Payout {
-    const id = newId("po");
-    const txn = this.addBalanceTransaction("payout", -amount, 0, id, fields.description);
-    const now = this.now();
-    const payout: Payout = {
-      id,
-      object: "payout",
-      amount,
-      arrival_date: now,
-      automatic,
-      balance_transaction: txn.id,
-      created: now,
-      currency: CURRENCY,
-      description: fields.description,
-      destination: BANK_ACCOUNT,
-      failure_balance_transaction: null,
-      failure_code: null,
-      failure_message: null,
-      livemode: false,
-      metadata: fields.metadata,
-      method: "standard",
-      original_payout: null,
-      reconciliation_status: automatic ? "completed" : "not_applicable",
-      reversed_by: null,
-      source_type: "card",
-      statement_descriptor: fields.statementDescriptor,
-      status: "paid",
-      type: "bank_account",
-    };
-    this.store.put("payouts", payout);
-    return payout;
+  createRefund(input: Parameters<typeof ledger.createRefund>[1], ctx: RequestCtx): Refund {
+    return ledger.createRefund(this, input, ctx);
   }
 
   /** POST /v1/payouts: a manual payout. Stripe cannot tell which transactions it contains. */
-  createManualPayout(input: { amount: number; description: string | null; metadata: Metadata; statementDescriptor: string | null }, ctx: RequestCtx): Payout {
-    if (input.amount > this.availableBalance()) {
-      throw invalid(
-        "You have insufficient funds in your Stripe account for this transfer. Your card balance is too low. You can use the /v1/balance endpoint to view your Stripe balance (for more details, see stripe.com/docs/api#balance).",
-        "amount",
-        "balance_insufficient",
-      );
-    }
-    const payout = this.makePayout(input.amount, false, input);
-    this.emit("payout.created", payout, ctx);
-    this.emit("payout.paid", payout, ctx);
-    return payout;
+  createManualPayout(input: Parameters<typeof ledger.createManualPayout>[1], ctx: RequestCtx): Payout {
+    return ledger.createManualPayout(this, input, ctx);
   }
 
-  /**
-   * The automatic (scheduled) payout: sweeps the whole available balance and links every balance
-   * transaction not yet paid out, and its own, so `?payout=po_...` lists them. Null when the balance is not positive.
-   */
+  /** The automatic (scheduled) payout of the whole available balance (ledger.ts). */
   runAutomaticPayout(ctx: RequestCtx = NO_REQUEST): Payout | null {
-    const amount = this.availableBalance();
-    if (amount <= 0) return null;
-    const unlinked = Object.keys(this.state.balanceTransactions).filter((id) => !this.state.txnPayout[id]);
-    const payout = this.makePayout(amount, true, { description: "STRIPE PAYOUT", metadata: {}, statementDescriptor: null });
-    for (const id of [...unlinked, payout.balance_transaction]) this.state.txnPayout[id] = payout.id;
-    this.emit("payout.created", payout, ctx);
-    this.emit("payout.paid", payout, ctx);
-    this.emit("payout.reconciliation_completed", payout, ctx);
-    return payout;
+    return ledger.runAutomaticPayout(this, ctx);
   }
 }
+
+export * from "./account-types";

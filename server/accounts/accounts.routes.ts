@@ -1,27 +1,20 @@
 import { Router } from "express";
-import { z } from "zod";
 import type { AppContext } from "../http/context";
 import { parse } from "../http/errors";
 import { allow, currentUser } from "../http/auth";
-import { idSchema } from "../../shared/schemas/common";
-import { ACCOUNT_STATUSES, accountInputSchema, accountUpdateSchema } from "../../shared/schemas/accounts";
+import { idParamSchema } from "../../shared/schemas/common";
+import { accountInputSchema, accountListQuerySchema, accountUpdateSchema } from "../../shared/schemas/accounts";
 import * as accounts from "./accounts.service";
-
-const idParam = z.object({ id: idSchema });
-const listQuery = z.object({
-  q: z.string().trim().max(100).optional(),
-  status: z.enum(ACCOUNT_STATUSES).optional(),
-});
 
 export function accountsRoutes(ctx: AppContext): Router {
   const r = Router();
 
   r.get("/", allow("owner", "bookkeeper"), async (req, res) => {
-    res.json({ accounts: await accounts.listAccounts(ctx, parse(listQuery, req.query)) });
+    res.json({ accounts: await accounts.listAccounts(ctx, parse(accountListQuerySchema, req.query)) });
   });
   /** Buyers may read their own account (anything else is 404 for them). */
   r.get("/:id", allow("owner", "bookkeeper", "buyer"), async (req, res) => {
-    const { id } = parse(idParam, req.params);
+    const { id } = parse(idParamSchema, req.params);
     res.json({ account: await accounts.getAccount(ctx, currentUser(req), id) });
   });
   r.post("/", allow("owner"), async (req, res) => {
@@ -29,7 +22,7 @@ export function accountsRoutes(ctx: AppContext): Router {
     res.status(201).json({ account: await accounts.createAccount(ctx, input) });
   });
   r.patch("/:id", allow("owner"), async (req, res) => {
-    const { id } = parse(idParam, req.params);
+    const { id } = parse(idParamSchema, req.params);
     const patch = parse(accountUpdateSchema, req.body);
     res.json({ account: await accounts.updateAccount(ctx, currentUser(req), id, patch) });
   });

@@ -4,6 +4,7 @@ import { CustomerAccount } from "./account.entity";
 import { User } from "../users/user.entity";
 import type { AccountDto, AccountStatus } from "../../shared/schemas/accounts";
 import type { SessionUser } from "../../shared/schemas/auth";
+import type { OfficeSummaryDto } from "../../shared/schemas/bakery";
 
 async function buyerCounts(ctx: AppContext, ids: number[]): Promise<Map<number, number>> {
   if (ids.length === 0) return new Map();
@@ -64,7 +65,7 @@ export async function updateAccount(ctx: AppContext, actor: SessionUser, id: num
   return getAccount(ctx, actor, id);
 }
 
-export async function accountCounts(ctx: AppContext) {
+export async function accountCounts(ctx: AppContext): Promise<OfficeSummaryDto["accounts"]> {
   const rows: { status: AccountStatus; n: string; credit: string }[] = await ctx.dataSource.getRepository(CustomerAccount).createQueryBuilder("a")
     .select("a.status", "status").addSelect("COUNT(*)", "n").addSelect("SUM(a.status = 'on_hold' AND a.creditHold = 1)", "credit").groupBy("a.status").getRawMany();
   const by = Object.fromEntries(rows.map((r) => [r.status, Number(r.n)])) as Record<string, number>;

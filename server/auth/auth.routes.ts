@@ -6,9 +6,11 @@ import { invitationAcceptSchema, passwordResetConfirmSchema, passwordResetReques
 import { ROLES } from "../../shared/roles";
 import * as auth from "./auth.service";
 import { findUsableToken } from "./auth.service";
+import { rateLimits } from "../http/rate-limits";
 
 export function authRoutes(ctx: AppContext): Router {
   const r = Router();
+  const limits = rateLimits(ctx);
 
   r.post("/sign-in", async (req, res) => {
     const body = parse(signInSchema, req.body);
@@ -32,18 +34,18 @@ export function authRoutes(ctx: AppContext): Router {
     res.status(202).json({ message: "If that e-mail has a sign-in, a reset link is on its way. It works for 1 hour." });
   });
 
-  r.post("/password-reset/confirm", async (req, res) => {
+  r.post("/password-reset/confirm", limits.tokenCheck, async (req, res) => {
     const body = parse(passwordResetConfirmSchema, req.body);
     res.json(await auth.confirmPasswordReset(ctx, body.token, body.password));
   });
 
   /** Lets the set-password screen say up front whether a link still works, and for whom. */
-  r.get("/invitations/:token", async (req, res) => {
+  r.get("/invitations/:token", limits.tokenCheck, async (req, res) => {
     const row = await findUsableToken(ctx, "invitation", String(req.params.token));
-    res.json({ email: row.email, role: row.role, name: row.name });
+    res.json(auth.invitationPreview(row));
   });
 
-  r.post("/invitations/accept", async (req, res) => {
+  r.post("/invitations/accept", limits.tokenCheck, async (req, res) => {
     const body = parse(invitationAcceptSchema, req.body);
     res.json(await auth.acceptInvitation(ctx, body.token, body.password, body.name));
   });

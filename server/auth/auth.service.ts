@@ -10,10 +10,12 @@ import { RESET_TTL_MS, hashToken, newLinkToken } from "./tokens";
 import { admitHashing, hashPassword, needsRehash, verifyPassword } from "./password-hash";
 import { assertNotCommonPassword } from "./password-policy";
 import { bump, countIn, giveBack, purgeCounters, takeSlots, type RateLimit, type Refusal } from "./rate-limit";
+import { purgeRateLimits } from "../http/rate-limits";
 import { getBakery } from "../bakery/bakery.service";
 import { passwordResetMail } from "../mail/templates";
 import { enqueueMail } from "../mail/outbox.service";
 import type { SignInResponse } from "../../shared/schemas/auth";
+import type { InvitationPreviewDto } from "../../shared/contracts/auth";
 
 export { hashPassword, verifyPassword } from "./password-hash";
 
@@ -182,6 +184,11 @@ export async function findUsableToken(ctx: AppContext, kind: AuthToken["kind"], 
   return row;
 }
 
+/** Who a usable invitation is for (GET /api/auth/invitations/:token). An invitation row always names its role. */
+export function invitationPreview(row: AuthToken): InvitationPreviewDto {
+  return { email: row.email, role: row.role!, name: row.name };
+}
+
 /** Mark a token used, atomically: a second concurrent use finds it already taken. */
 async function consume(ctx: AppContext, manager: import("typeorm").EntityManager, row: AuthToken) {
   const res = await manager.getRepository(AuthToken).update({ id: row.id, usedAt: IsNull() }, { usedAt: ctx.clock.now() });
@@ -234,10 +241,11 @@ export async function acceptInvitation(ctx: AppContext, token: string, password:
   return { token: signToken(ctx, user), user: toSessionUser(user) };
 }
 
-/** Drop expired tokens and finished rate-limit windows (a scheduled job). */
+/** Drop expired tokens and finished rate-limit windows, both kinds (a scheduled job). */
 export async function purgeExpired(ctx: AppContext): Promise<void> {
   const now = ctx.clock.now();
   await purgeCounters(ctx, Math.max(SIGN_IN_WINDOW_MS, RESET_WINDOW_MS));
+  await purgeRateLimits(ctx);
   await ctx.dataSource.createQueryBuilder().delete().from(AuthToken)
     .where("expiresAt < :t", { t: new Date(now.getTime() - 30 * 24 * 3600 * 1000) }).execute();
 }

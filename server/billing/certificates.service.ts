@@ -5,9 +5,11 @@ import type { SessionUser } from "../../shared/schemas/auth";
 import { localToday } from "../../shared/calendar";
 import { getBakery } from "../bakery/bakery.service";
 import { CustomerAccount } from "../accounts/account.entity";
-import { TaxCertificate } from "./billing.entity";
+import { TaxCertificate } from "./tax-certificate.entity";
 import { certificateStore, STORED_TYPES, type StoredMime } from "../files/file-store";
-import type { CheckRules, CheckedUpload } from "../http/upload";
+import { checkUpload, type CheckRules, type CheckedUpload } from "../http/upload";
+import { resolveAccount } from "../calendar/calendar.service";
+import type { CertificateListDto, ReviewedCertificateDto, UploadedCertificateDto } from "../../shared/contracts/billing";
 
 /**
  * Resale / tax-exemption certificates: a buyer (own account) or the owner uploads one with its expiry date,
@@ -33,26 +35,6 @@ export const CERTIFICATE_UPLOAD: CheckRules = {
   accept: ["application/pdf", "image/jpeg", "image/png"],
   acceptText: "the certificate as a PDF, JPEG or PNG",
 };
-
-export interface CertificateDto {
-  id: number;
-  status: TaxCertificate["status"];
-  expiresOn: string;
-  expired: boolean;
-  contentType: string;
-  sizeBytes: number;
-  createdAt: string;
-}
-
-export interface CertificateLimits {
-  maxCount: number;
-  maxBytesPerAccount: number;
-  maxFileBytes: number;
-  count: number;
-  usedBytes: number;
-  expiresFrom: string;
-  expiresTo: string;
-}
 
 /** The expiry dates accepted today: [today, today + 5 years], local dates in the bakery's zone (luxon). */
 export async function expiryRange(ctx: AppContext): Promise<{ from: string; to: string }> {
@@ -109,7 +91,7 @@ export async function assertRoomBeforeUpload(ctx: AppContext, accountId: number)
   assertRoom(await usage(ctx, accountId), 0);
 }
 
-export async function listCertificates(ctx: AppContext, accountId: number): Promise<{ certificates: CertificateDto[]; limits: CertificateLimits }> {
+export async function listCertificates(ctx: AppContext, accountId: number): Promise<CertificateListDto> {
   const rows = await ctx.dataSource.getRepository(TaxCertificate).find({ where: { accountId }, order: { id: "DESC" } });
   const range = await expiryRange(ctx);
   const used = await usage(ctx, accountId);
@@ -119,11 +101,32 @@ export async function listCertificates(ctx: AppContext, accountId: number): Prom
   };
 }
 
+/** An account's certificates, for a user who may see them (a buyer only their own account's: 404 otherwise). */
+export async function listCertificatesFor(ctx: AppContext, user: SessionUser, accountId: number): Promise<CertificateListDto> {
+  const account = await resolveAccount(ctx, user, accountId);
+  return listCertificates(ctx, account.id);
+}
+
+/** Before the upload's body is read: the account exists and is the buyer's own, and it has room left. */
+export async function checkBeforeUpload(ctx: AppContext, user: SessionUser, accountId: number): Promise<void> {
+  const account = await resolveAccount(ctx, user, accountId);
+  await assertRoomBeforeUpload(ctx, account.id);
+}
+
+/** The uploaded file (read into memory by server/http/upload.ts): expiry in range, bytes checked, then stored. */
+export async function uploadCertificate(ctx: AppContext, user: SessionUser, accountId: number, expiresOn: string, file: Buffer | undefined): Promise<UploadedCertificateDto> {
+  const account = await resolveAccount(ctx, user, accountId);
+  checkExpiry(expiresOn, await expiryRange(ctx));
+  if (!file) throw badRequest("Attach the certificate (PDF, JPEG or PNG).", { file: "Attach the certificate." });
+  const checked = await checkUpload(file, CERTIFICATE_UPLOAD);
+  return addCertificate(ctx, account.id, checked, expiresOn);
+}
+
 /**
  * Store a checked upload for an account. The account row is locked (SELECT … FOR UPDATE) while the quota is
  * counted and the row inserted, so concurrent uploads cannot pass the limit together.
  */
-export async function addCertificate(ctx: AppContext, accountId: number, upload: CheckedUpload, expiresOn: string): Promise<Pick<CertificateDto, "id" | "status" | "expiresOn" | "sizeBytes">> {
+export async function addCertificate(ctx: AppContext, accountId: number, upload: CheckedUpload, expiresOn: string): Promise<UploadedCertificateDto> {
   checkExpiry(expiresOn, await expiryRange(ctx));
   const store = certificateStore(ctx.config);
   return ctx.dataSource.transaction(async (m) => {
@@ -136,7 +139,7 @@ export async function addCertificate(ctx: AppContext, accountId: number, upload:
   });
 }
 
-export async function reviewCertificate(ctx: AppContext, reviewer: SessionUser, id: number, status: "approved" | "rejected"): Promise<{ id: number; status: string }> {
+export async function reviewCertificate(ctx: AppContext, reviewer: SessionUser, id: number, status: ReviewedCertificateDto["status"]): Promise<ReviewedCertificateDto> {
   const repo = ctx.dataSource.getRepository(TaxCertificate);
   if (!(await repo.existsBy({ id }))) throw notFound("That certificate");
   await repo.update({ id }, { status, reviewedById: reviewer.id });

@@ -1,74 +1,33 @@
 import { DateTime } from "luxon";
-import { In, IsNull, LessThan, type EntityManager } from "typeorm";
+import { In, IsNull, type EntityManager } from "typeorm";
 import type { AppContext } from "../http/context";
-import { badRequest, conflict, notFound } from "../http/errors";
-import { CreditNote, DeliveryAdjustment, Invoice, InvoiceLine, NumberCounter, Payment, Refund, StripeEventRecord, TaxCertificate, type InvoiceStatus } from "./billing.entity";
-import { Order, OrderLine } from "../orders/order.entity";
+import { conflict, notFound } from "../http/errors";
+import { CreditNote } from "./credit-note.entity";
+import { DeliveryAdjustment } from "./delivery-adjustment.entity";
+import { Invoice } from "./invoice.entity";
+import { InvoiceLine } from "./invoice-line.entity";
+import { Payment } from "./payment.entity";
+import { Refund } from "./refund.entity";
+import { StripeEventRecord } from "./stripe-event.entity";
+import { Order } from "../orders/order.entity";
+import { OrderLine } from "../orders/order-line.entity";
 import { CustomerAccount } from "../accounts/account.entity";
 import { getBakery } from "../bakery/bakery.service";
+import { refuseAfterToday } from "../calendar/calendar.service";
+import { withJobLock } from "../jobs/scheduler";
 import { enqueueMail } from "../mail/outbox.service";
 import { OutboxMail } from "../mail/outbox.entity";
 import { invoiceMail } from "../mail/templates";
 import { renderInvoicePdf } from "./invoice.pdf";
 import { retryOnDeadlock } from "../db/retry";
-import { amountDue, dueDate, formatDocNumber, invoiceTotals, taxCents, type PaymentTerms } from "../../shared/billing";
-import { localToday, addDays } from "../../shared/calendar";
+import { allocateNumber, createCreditNote, overpaidCents, refreshStatus, validExemption } from "./ledger.service";
+import { amountDue, dueDate, formatDocNumber, invoiceTotals, type PaymentTerms } from "../../shared/billing";
+import { addDays, localToday } from "../../shared/calendar";
 import { toDecimal } from "../../shared/money";
 import type { SessionUser } from "../../shared/schemas/auth";
+import type { InvoiceListQuery } from "../../shared/schemas/billing";
+import type { InvoiceDetailDto, InvoiceDto, InvoiceListDto, StatementsResponse } from "../../shared/contracts/billing";
 import { quantityText } from "../../shared/quantity";
-
-// ---- numbers ----------------------------------------------------------------------------------
-
-/**
- * The next number in a series for a year, allocated inside the caller's transaction under a row lock:
- * two processes issuing at once wait for each other, and a rolled-back transaction gives its number back.
- */
-export async function allocateNumber(m: EntityManager, series: string, year: number): Promise<number> {
-  let [row] = await m.query("SELECT next FROM number_counter WHERE series = ? AND year = ? FOR UPDATE", [series, year]);
-  if (!row) {
-    // The year's first number: racing creators may deadlock here; callers run in retryOnDeadlock.
-    await m.query("INSERT IGNORE INTO number_counter (series, year, next) VALUES (?, ?, 1)", [series, year]);
-    [row] = await m.query("SELECT next FROM number_counter WHERE series = ? AND year = ? FOR UPDATE", [series, year]);
-  }
-  const n = Number(row.next);
-  await m.getRepository(NumberCounter).update({ series, year }, { next: n + 1 });
-  return n;
-}
-
-// ---- tax exemption --------------------------------------------------------------------------------
-
-export async function validExemption(m: EntityManager, accountId: number, onDate: string): Promise<TaxCertificate | null> {
-  return m.getRepository(TaxCertificate).createQueryBuilder("c")
-    .where("c.accountId = :a AND c.status = 'approved' AND c.expiresOn >= :d", { a: accountId, d: onDate })
-    .orderBy("c.expiresOn", "DESC").getOne();
-}
-
-// ---- status -------------------------------------------------------------------------------------
-
-export function statusOf(inv: Pick<Invoice, "status" | "totalCents" | "creditedCents" | "paidCents" | "refundedCents"> & { overpaymentRefundedCents?: number }): InvoiceStatus {
-  if (inv.status === "void") return "void";
-  // Money given back because it was paid twice is not a refund of the sale.
-  const saleRefunded = inv.refundedCents - (inv.overpaymentRefundedCents ?? 0);
-  const paid = inv.paidCents - (inv.overpaymentRefundedCents ?? 0);
-  if (saleRefunded > 0 && saleRefunded >= paid && paid > 0) return "refunded";
-  if (saleRefunded > 0) return "partially_refunded";
-  return amountDue({ ...inv, refundedCents: 0 }) === 0 ? "paid" : "open";
-}
-
-/**
- * What was paid beyond what the invoice is worth (after credit notes and refunds): a card payment that arrived
- * after the invoice was settled another way. 0 when not overpaid.
- */
-export function overpaidCents(inv: Pick<Invoice, "totalCents" | "creditedCents" | "paidCents" | "refundedCents">): number {
-  return Math.max(0, inv.paidCents - inv.refundedCents - (inv.totalCents - inv.creditedCents));
-}
-
-async function refreshStatus(m: EntityManager, invoiceId: number): Promise<Invoice> {
-  const inv = await m.getRepository(Invoice).findOneByOrFail({ id: invoiceId });
-  const status = statusOf(inv);
-  if (status !== inv.status) await m.getRepository(Invoice).update({ id: inv.id }, { status });
-  return { ...inv, status };
-}
 
 // ---- issuing --------------------------------------------------------------------------------------
 
@@ -130,26 +89,6 @@ export async function issueInvoice(ctx: AppContext, m: EntityManager, account: C
   return issued;
 }
 
-export async function createCreditNote(ctx: AppContext, m: EntityManager, inv: Invoice, lines: { description: string; quantity: number; unitPriceCents: number; amountCents: number }[], reason: string, disposition: "applied" | "refund" | "carry", stripeRefundId: string | null = null): Promise<CreditNote> {
-  const bakery = await getBakery(ctx, m);
-  const subtotal = lines.reduce((s, l) => s + l.amountCents, 0);
-  const tax = taxCents(subtotal, inv.taxRateBp);
-  const today = localToday(ctx.clock.now(), bakery.timeZone);
-  const year = Number(today.slice(0, 4));
-  const seq = await allocateNumber(m, "credit", year);
-  const cn = await m.getRepository(CreditNote).save(m.getRepository(CreditNote).create({
-    number: formatDocNumber(`${bakery.invoicePrefix}-CN`, year, seq), invoiceId: inv.id, accountId: inv.accountId, reason,
-    lines: JSON.stringify(lines), subtotalCents: subtotal, taxCents: tax, totalCents: subtotal + tax, disposition, carriedToInvoiceId: null, stripeRefundId, issueDate: today,
-  }));
-  // Applied and refunded credit both come off what the invoice is worth; a refund also returns money
-  // already paid (refundedCents), so the buyer does not owe it again. Carried credit waits for the next invoice.
-  if (disposition === "applied" || disposition === "refund") {
-    await m.getRepository(Invoice).increment({ id: inv.id }, "creditedCents", cn.totalCents);
-    await refreshStatus(m, inv.id);
-  }
-  return cn;
-}
-
 async function queueInvoiceMail(ctx: AppContext, m: EntityManager, inv: Invoice, account: CustomerAccount) {
   const bakery = await getBakery(ctx, m);
   const detail = await invoiceDetail(ctx, inv.id, m);
@@ -157,76 +96,6 @@ async function queueInvoiceMail(ctx: AppContext, m: EntityManager, inv: Invoice,
   const mail = invoiceMail({ bakeryName: bakery.name, currency: bakery.currency, locale: bakery.locale, number: inv.number, totalCents: inv.totalCents, dueCents: amountDue(inv), dueDate: inv.dueDate, url: `${ctx.config.publicUrl}/buyer/invoices/${inv.id}`, card: account.paymentTerms === "card", instructions: bakery.paymentInstructions, statement: inv.kind === "statement" });
   await enqueueMail(m, ctx, "invoice", { to: account.billingEmail, fromName: bakery.name, ...mail, attachments: [{ filename: `${inv.number}.pdf`, contentType: "application/pdf", content: pdf }] });
   await m.getRepository(Invoice).update({ id: inv.id }, { sentAt: ctx.clock.now() });
-}
-
-// ---- deliveries ------------------------------------------------------------------------------------
-
-/**
- * Confirm a day's dispatch: every locked (or open) order for the date becomes delivered; adjustments
- * record what went out short. Accounts paying by card get their invoice at once.
- */
-export async function confirmDispatch(ctx: AppContext, date: string, adjustments: { orderId: number; productId: number; deliveredQuantity: number; reason?: string }[]) {
-  const result = await ctx.dataSource.transaction(async (m) => {
-    const orders = await m.getRepository(Order).createQueryBuilder("o").setLock("pessimistic_write")
-      .where("o.deliveryDate = :d AND o.status IN ('open', 'locked')", { d: date }).getMany();
-    const ids = new Set(orders.map((o) => o.id));
-    const lines = orders.length ? await m.getRepository(OrderLine).findBy({ orderId: In([...ids]) }) : [];
-    const fields: Record<string, string> = {};
-    adjustments.forEach((a, i) => {
-      const line = lines.find((l) => l.orderId === a.orderId && l.productId === a.productId);
-      if (!ids.has(a.orderId)) fields[`adjustments.${i}.orderId`] = "That order is not waiting for dispatch on this date.";
-      else if (!line) fields[`adjustments.${i}.productId`] = "That product is not on the order.";
-      else if (a.deliveredQuantity > line.quantity) fields[`adjustments.${i}.deliveredQuantity`] = `At most the ${line.quantity} ordered.`;
-    });
-    if (Object.keys(fields).length) throw badRequest("Some adjustments need attention.", fields);
-    for (const a of adjustments) {
-      await m.getRepository(DeliveryAdjustment).upsert({ orderId: a.orderId, productId: a.productId, deliveredQuantity: a.deliveredQuantity, reason: a.reason ?? "", creditNoteId: null }, ["orderId", "productId"]);
-    }
-    if (ids.size) await m.getRepository(Order).update({ id: In([...ids]) }, { status: "delivered" });
-    return orders;
-  });
-  const invoices = await invoiceCardOrders(ctx, result.map((o) => o.id));
-  return { delivered: result.length, invoices: invoices.map((i) => i.number) };
-}
-
-/** Card accounts: one invoice per delivered order. An order another process just invoiced is skipped. */
-async function invoiceCardOrders(ctx: AppContext, orderIds: number[]): Promise<Invoice[]> {
-  if (!orderIds.length) return [];
-  const orders = await ctx.dataSource.getRepository(Order).findBy({ id: In(orderIds), status: "delivered" });
-  const out: Invoice[] = [];
-  for (const o of orders) {
-    try {
-      const inv = await retryOnDeadlock(() => ctx.dataSource.transaction(async (m) => {
-        const account = await m.getRepository(CustomerAccount).findOneByOrFail({ id: o.accountId });
-        if (account.paymentTerms !== "card") return null;
-        return issueInvoice(ctx, m, account, [o.id], "order");
-      }));
-      if (inv) out.push(inv);
-    } catch (err) {
-      if ((err as { driverError?: { errno?: number } }).driverError?.errno !== 1062) throw err; // its lines are on another invoice
-    }
-  }
-  return out;
-}
-
-/** The job: delivered orders of card accounts that have no invoice yet (after a failure, or a change of terms). */
-export async function invoiceUninvoicedCardOrders(ctx: AppContext): Promise<number> {
-  const rows: { id: number }[] = await ctx.dataSource.query(
-    `SELECT DISTINCT o.id FROM customer_order o JOIN customer_account a ON a.id = o.accountId AND a.paymentTerms = 'card'
-       JOIN order_line l ON l.orderId = o.id LEFT JOIN invoice_line il ON il.orderLineId = l.id
-      WHERE o.status = 'delivered' AND il.id IS NULL LIMIT 500`);
-  return (await invoiceCardOrders(ctx, rows.map((r) => Number(r.id)))).length;
-}
-
-/** The job: orders not confirmed by the end of their delivery day are delivered as ordered (and invoiced). */
-export async function autoDeliver(ctx: AppContext): Promise<number> {
-  const bakery = await getBakery(ctx);
-  const today = localToday(ctx.clock.now(), bakery.timeZone);
-  const due = await ctx.dataSource.getRepository(Order).findBy({ deliveryDate: LessThan(today), status: In(["locked", "open"]) });
-  if (!due.length) return 0;
-  await ctx.dataSource.getRepository(Order).update({ id: In(due.map((o) => o.id)), status: In(["locked", "open"]) }, { status: "delivered" });
-  await invoiceCardOrders(ctx, due.map((o) => o.id));
-  return due.length;
 }
 
 /**
@@ -260,6 +129,17 @@ export async function issueStatements(ctx: AppContext, through?: string): Promis
   return out;
 }
 
+/**
+ * The office issues statements by hand through `through` (today at the latest): one run at a time, under the
+ * same MariaDB named lock as the weekly job (server/jobs/scheduler.ts); 409 while another run holds it.
+ */
+export async function issueStatementsByHand(ctx: AppContext, through?: string): Promise<StatementsResponse> {
+  await refuseAfterToday(ctx, through, "through", "Statements run through today at the latest.");
+  const run = await withJobLock(ctx, "weekly-statements", () => issueStatements(ctx, through));
+  if (!run.ran) throw conflict("already_running", "Statements are already being issued; try again in a minute.");
+  return { issued: run.value.map((i) => i.number) };
+}
+
 /** The job: invoices overdue by more than the bakery's hold days put the account on credit hold; paying lifts it. */
 export async function applyCreditHolds(ctx: AppContext): Promise<{ held: number; lifted: number }> {
   const bakery = await getBakery(ctx);
@@ -283,79 +163,9 @@ export async function applyCreditHolds(ctx: AppContext): Promise<{ held: number;
   return { held, lifted };
 }
 
-// ---- payments -----------------------------------------------------------------------------------------
-
-/** Record money received. A Stripe payment intent is recorded once, whichever event brings it. */
-export async function recordPayment(ctx: AppContext, m: EntityManager, p: { invoiceId: number; amountCents: number; method: Payment["method"]; reference?: string; receivedOn?: string; stripePaymentIntentId?: string | null; stripeChargeId?: string | null; recordedById?: number | null }): Promise<Payment | null> {
-  if (p.stripePaymentIntentId) {
-    const known = await m.getRepository(Payment).findOneBy({ stripePaymentIntentId: p.stripePaymentIntentId });
-    if (known) {
-      if (!known.stripeChargeId && p.stripeChargeId) await m.getRepository(Payment).update({ id: known.id }, { stripeChargeId: p.stripeChargeId });
-      return null;
-    }
-  }
-  const inv = await m.getRepository(Invoice).createQueryBuilder("i").setLock("pessimistic_write").where("i.id = :id", { id: p.invoiceId }).getOne();
-  if (!inv) throw notFound("That invoice");
-  const bakery = await getBakery(ctx, m);
-  let payment: Payment;
-  try {
-    payment = await m.getRepository(Payment).save(m.getRepository(Payment).create({
-      invoiceId: inv.id, method: p.method, amountCents: p.amountCents, reference: p.reference ?? "", stripePaymentIntentId: p.stripePaymentIntentId ?? null,
-      stripeChargeId: p.stripeChargeId ?? null, receivedOn: p.receivedOn ?? localToday(ctx.clock.now(), bakery.timeZone), recordedById: p.recordedById ?? null,
-    }));
-  } catch (err) {
-    if ((err as { errno?: number; driverError?: { errno?: number } }).driverError?.errno === 1062) return null; // the twin event won
-    throw err;
-  }
-  await m.getRepository(Invoice).increment({ id: inv.id }, "paidCents", p.amountCents);
-  if (p.amountCents > amountDue(inv)) {
-    // Kept (the money was taken) and shown to the bookkeeper as an overpayment, with a refund in one action.
-    ctx.logger.warn({ invoiceId: inv.id, amountCents: p.amountCents, dueCents: amountDue(inv), method: p.method }, "payment exceeds what the invoice owes: overpayment");
-  }
-  const updated = await refreshStatus(m, inv.id);
-  if (updated.status === "paid") await liftHoldIfClear(ctx, m, inv.accountId);
-  return payment;
-}
-
-async function liftHoldIfClear(ctx: AppContext, m: EntityManager, accountId: number) {
-  const account = await m.getRepository(CustomerAccount).findOneBy({ id: accountId });
-  if (!account?.creditHold) return;
-  const bakery = await getBakery(ctx, m);
-  const limit = addDays(localToday(ctx.clock.now(), bakery.timeZone), -bakery.creditHoldDays);
-  const stillOverdue = await m.getRepository(Invoice).countBy({ accountId, status: "open", dueDate: LessThan(limit) });
-  if (stillOverdue === 0) await m.getRepository(CustomerAccount).update({ id: accountId }, { status: account.status === "on_hold" ? "active" : account.status, creditHold: false });
-}
-
-export async function recordManualPayment(ctx: AppContext, actor: SessionUser, invoiceId: number, input: { amountCents: number; method: "bank_transfer" | "cheque" | "cash" | "other"; reference: string; receivedOn: string }) {
-  return ctx.dataSource.transaction(async (m) => {
-    // Locked before the check, so two payments recorded at once cannot both pass it.
-    const inv = await m.getRepository(Invoice).createQueryBuilder("i").setLock("pessimistic_write").where("i.id = :id", { id: invoiceId }).getOne();
-    if (!inv) throw notFound("That invoice");
-    if (inv.status === "void") throw conflict("invoice_void", "This invoice is void.");
-    const due = amountDue(inv);
-    if (input.amountCents > due) throw badRequest(`That is more than the ${due / 100} still owed.`, { amountCents: `At most ${(due / 100).toFixed(2)}.` });
-    return recordPayment(ctx, m, { invoiceId, amountCents: input.amountCents, method: input.method, reference: input.reference, receivedOn: input.receivedOn, recordedById: actor.id });
-  });
-}
-
-/** A Stripe refund seen (from our own call or a charge.refunded event): recorded once per refund id. */
-export async function recordRefund(ctx: AppContext, m: EntityManager, r: { invoiceId: number; stripeRefundId: string; stripeChargeId: string | null; amountCents: number; creditNoteId?: number | null; overpayment?: boolean }) {
-  if (await m.getRepository(Refund).existsBy({ stripeRefundId: r.stripeRefundId })) return false;
-  try {
-    await m.getRepository(Refund).insert({ invoiceId: r.invoiceId, stripeRefundId: r.stripeRefundId, stripeChargeId: r.stripeChargeId, amountCents: r.amountCents, creditNoteId: r.creditNoteId ?? null, overpayment: !!r.overpayment });
-  } catch (err) {
-    if ((err as { driverError?: { errno?: number } }).driverError?.errno === 1062) return false;
-    throw err;
-  }
-  await m.getRepository(Invoice).increment({ id: r.invoiceId }, "refundedCents", r.amountCents);
-  if (r.overpayment) await m.getRepository(Invoice).increment({ id: r.invoiceId }, "overpaymentRefundedCents", r.amountCents);
-  await refreshStatus(m, r.invoiceId);
-  return true;
-}
-
 // ---- reading --------------------------------------------------------------------------------------------
 
-export async function invoiceDetail(ctx: AppContext, id: number, m: EntityManager = ctx.dataSource.manager) {
+export async function invoiceDetail(ctx: AppContext, id: number, m: EntityManager = ctx.dataSource.manager): Promise<InvoiceDetailDto> {
   const inv = await m.getRepository(Invoice).findOneBy({ id });
   if (!inv) throw notFound("That invoice");
   // The invoice's own mails (the invoice itself and payment receipts) name its number in the subject.
@@ -386,7 +196,7 @@ export async function invoiceDetail(ctx: AppContext, id: number, m: EntityManage
   };
 }
 
-export function invoiceDto(inv: Invoice, accountName: string, today: string) {
+export function invoiceDto(inv: Invoice, accountName: string, today: string): InvoiceDto {
   const due = amountDue(inv);
   return {
     id: inv.id, number: inv.number, accountId: inv.accountId, accountName, kind: inv.kind, status: inv.status, issueDate: inv.issueDate, dueDate: inv.dueDate,
@@ -396,7 +206,7 @@ export function invoiceDto(inv: Invoice, accountName: string, today: string) {
   };
 }
 
-export async function listInvoices(ctx: AppContext, actor: SessionUser, q: { status?: InvoiceStatus; accountId?: number; from?: string; to?: string; overdue?: boolean; q?: string; sort?: string }) {
+export async function listInvoices(ctx: AppContext, actor: SessionUser, q: InvoiceListQuery): Promise<InvoiceListDto> {
   const bakery = await getBakery(ctx);
   const today = localToday(ctx.clock.now(), bakery.timeZone);
   const qb = ctx.dataSource.getRepository(Invoice).createQueryBuilder("i").innerJoin(CustomerAccount, "a", "a.id = i.accountId").addSelect("a.businessName", "accountName");
@@ -418,9 +228,16 @@ export async function listInvoices(ctx: AppContext, actor: SessionUser, q: { sta
   };
 }
 
-export async function getInvoiceFor(ctx: AppContext, actor: SessionUser, id: number) {
+export async function getInvoiceFor(ctx: AppContext, actor: SessionUser, id: number): Promise<InvoiceDetailDto> {
   const inv = await ctx.dataSource.getRepository(Invoice).findOneBy({ id });
   if (!inv || (actor.role === "buyer" && inv.accountId !== actor.accountId)) throw notFound("That invoice");
   return invoiceDetail(ctx, id);
 }
 
+/** The invoice as a PDF, for whoever may read it (a buyer only their own account's). */
+export async function invoicePdfFor(ctx: AppContext, actor: SessionUser, id: number): Promise<{ filename: string; pdf: Buffer }> {
+  const detail = await getInvoiceFor(ctx, actor, id);
+  const account = await ctx.dataSource.getRepository(CustomerAccount).findOneByOrFail({ id: detail.invoice.accountId });
+  const pdf = await renderInvoicePdf({ ...detail, bakery: await getBakery(ctx), account });
+  return { filename: `${detail.invoice.number}.pdf`, pdf };
+}

@@ -1,15 +1,15 @@
 import { Router } from "express";
-import { z } from "zod";
 import type { AppContext } from "../http/context";
 import { notFound, parse } from "../http/errors";
 import { allow, currentUser } from "../http/auth";
 import { ROLES } from "../../shared/roles";
-import { idSchema } from "../../shared/schemas/common";
+import { idParamSchema } from "../../shared/schemas/common";
 import { accountDeliverySchema, calendarQuerySchema, calendarSettingsSchema } from "../../shared/schemas/calendar";
 import { CustomerAccount } from "../accounts/account.entity";
 import { PriceList } from "../catalog/price-list.entity";
 import { badRequest } from "../http/errors";
 import * as calendar from "./calendar.service";
+import type { AccountDeliveryDto } from "../../shared/contracts/billing";
 
 export function calendarRoutes(ctx: AppContext): Router {
   const r = Router();
@@ -36,12 +36,12 @@ export function settingsRoutes(ctx: AppContext): Router {
 export function accountDeliveryRoutes(ctx: AppContext): Router {
   const r = Router();
   r.get("/:id/delivery", allow("owner", "bookkeeper", "buyer"), async (req, res) => {
-    const { id } = parse(z.object({ id: idSchema }), req.params);
+    const { id } = parse(idParamSchema, req.params);
     const account = await calendar.resolveAccount(ctx, currentUser(req), currentUser(req).role === "buyer" ? id : id);
-    res.json({ delivery: { routeWeekdays: calendar.parseWeekdays(account.routeWeekdays), minimumOrderCents: account.minimumOrderCents, priceListId: account.priceListId } });
+    res.json({ delivery: { routeWeekdays: calendar.parseWeekdays(account.routeWeekdays), minimumOrderCents: account.minimumOrderCents, priceListId: account.priceListId } satisfies AccountDeliveryDto });
   });
   r.put("/:id/delivery", allow("owner"), async (req, res) => {
-    const { id } = parse(z.object({ id: idSchema }), req.params);
+    const { id } = parse(idParamSchema, req.params);
     const input = parse(accountDeliverySchema, req.body);
     const repo = ctx.dataSource.getRepository(CustomerAccount);
     if (!(await repo.existsBy({ id }))) throw notFound("That account");
@@ -49,7 +49,7 @@ export function accountDeliveryRoutes(ctx: AppContext): Router {
       throw badRequest("Choose an existing price list.", { priceListId: "Choose an existing price list." });
     }
     await repo.update({ id }, { routeWeekdays: calendar.formatWeekdays(input.routeWeekdays), minimumOrderCents: input.minimumOrderCents, priceListId: input.priceListId });
-    res.json({ delivery: input });
+    res.json({ delivery: input satisfies AccountDeliveryDto });
   });
   return r;
 }

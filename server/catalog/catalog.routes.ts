@@ -1,16 +1,13 @@
 import { Router } from "express";
-import { z } from "zod";
 import type { AppContext } from "../http/context";
 import { badRequest, notFound, parse } from "../http/errors";
 import { allow, currentUser } from "../http/auth";
 import { singleFileUpload } from "../http/upload";
 import { isStoredId, photoStore } from "../files/file-store";
 import { sendStoredFile } from "../files/serve";
-import { idSchema } from "../../shared/schemas/common";
+import { idParamSchema } from "../../shared/schemas/common";
 import { ROLES } from "../../shared/roles";
 import * as catalog from "./catalog.service";
-
-const idParam = z.object({ id: idSchema });
 
 export function catalogRoutes(ctx: AppContext): Router {
   const r = Router();
@@ -18,23 +15,23 @@ export function catalogRoutes(ctx: AppContext): Router {
     res.json({ products: await catalog.listProducts(ctx, currentUser(req), req.query.all === "1") });
   });
   r.get("/:id", allow(...ROLES), async (req, res) => {
-    const { id } = parse(idParam, req.params);
+    const { id } = parse(idParamSchema, req.params);
     res.json({ product: await catalog.getProduct(ctx, currentUser(req), id) });
   });
   r.post("/", allow("owner"), async (req, res) => {
     res.status(201).json({ product: await catalog.createProduct(ctx, req.body) });
   });
   r.patch("/:id", allow("owner"), async (req, res) => {
-    const { id } = parse(idParam, req.params);
+    const { id } = parse(idParamSchema, req.params);
     res.json({ product: await catalog.updateProduct(ctx, id, req.body) });
   });
   /** Archive: the product stays on past orders but can no longer be ordered. */
   r.post("/:id/archive", allow("owner"), async (req, res) => {
-    const { id } = parse(idParam, req.params);
+    const { id } = parse(idParamSchema, req.params);
     res.json({ product: await catalog.updateProduct(ctx, id, { active: false }) });
   });
   r.put("/:id/photo", allow("owner"), singleFileUpload(catalog.PHOTO_UPLOAD), async (req, res) => {
-    const { id } = parse(idParam, req.params);
+    const { id } = parse(idParamSchema, req.params);
     if (!req.file) throw badRequest("Choose a photo to upload.", { photo: "Choose a photo to upload." });
     res.json({ product: await catalog.setProductPhoto(ctx, id, req.file.buffer) });
   });
@@ -51,11 +48,11 @@ export function priceListRoutes(ctx: AppContext): Router {
     res.status(201).json({ priceList: await catalog.savePriceList(ctx, null, req.body) });
   });
   r.put("/:id", async (req, res) => {
-    const { id } = parse(idParam, req.params);
+    const { id } = parse(idParamSchema, req.params);
     res.json({ priceList: await catalog.savePriceList(ctx, id, req.body) });
   });
   r.delete("/:id", async (req, res) => {
-    const { id } = parse(idParam, req.params);
+    const { id } = parse(idParamSchema, req.params);
     await catalog.deletePriceList(ctx, id);
     res.status(204).end();
   });

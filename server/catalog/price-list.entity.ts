@@ -17,18 +17,5 @@ export class PriceList {
   percentOff: string;
 }
 
-@Entity({ name: "price_list_item" })
-@Index(["priceListId", "productId"], { unique: true })
-export class PriceListItem {
-  @PrimaryGeneratedColumn({ type: "int" })
-  id: number;
-
-  @Column({ type: "int" })
-  priceListId: number;
-
-  @Column({ type: "int" })
-  productId: number;
-
-  @Column({ type: "int" })
-  priceCents: number;
-}
+/** Re-exported for the modules that import it from this path; it lives in its own file. */
+export { PriceListItem } from "./price-list-item.entity";

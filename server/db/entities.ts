@@ -4,18 +4,40 @@ import { CustomerAccount } from "../accounts/account.entity";
 import { User } from "../users/user.entity";
 import { AuthToken } from "../auth/auth-token.entity";
 import { AuthRateCounter } from "../auth/rate-counter.entity";
+import { RateLimitPoints } from "../http/rate-limit-points.entity";
 import { Product } from "../catalog/product.entity";
-import { PriceList, PriceListItem } from "../catalog/price-list.entity";
+import { PriceList } from "../catalog/price-list.entity";
+import { PriceListItem } from "../catalog/price-list-item.entity";
 import { ProductComponent } from "../catalog/product-component.entity";
-import { IdempotencyRecord, Order, OrderLine } from "../orders/order.entity";
-import { StandingOrder, StandingOrderLine } from "../orders/standing-order.entity";
-import { BakeDay, BakehouseMixer, BakehouseOven, Formula, FormulaVersion, Ingredient, ProductionSettings } from "../production/production.entity";
+import { Order } from "../orders/order.entity";
+import { OrderLine } from "../orders/order-line.entity";
+import { IdempotencyRecord } from "../orders/idempotency-record.entity";
+import { StandingOrder } from "../orders/standing-order.entity";
+import { StandingOrderLine } from "../orders/standing-order-line.entity";
+import { Ingredient } from "../production/ingredient.entity";
+import { Formula } from "../production/formula.entity";
+import { FormulaVersion } from "../production/formula-version.entity";
+import { BakeDay } from "../production/bake-day.entity";
+import { ProductionSettings } from "../production/production-settings.entity";
+import { BakehouseMixer } from "../production/bakehouse-mixer.entity";
+import { BakehouseOven } from "../production/bakehouse-oven.entity";
 import { OutboxMail } from "../mail/outbox.entity";
-import { CheckoutSessionRecord, CreditNote, DeliveryAdjustment, Invoice, InvoiceLine, NumberCounter, Payment, PayoutReconciliation, Refund, StripeEventRecord, StripeSyncState, TaxCertificate } from "../billing/billing.entity";
+import { CheckoutSessionRecord } from "../billing/checkout-session.entity";
+import { CreditNote } from "../billing/credit-note.entity";
+import { DeliveryAdjustment } from "../billing/delivery-adjustment.entity";
+import { Invoice } from "../billing/invoice.entity";
+import { InvoiceLine } from "../billing/invoice-line.entity";
+import { NumberCounter } from "../billing/number-counter.entity";
+import { Payment } from "../billing/payment.entity";
+import { PayoutReconciliation } from "../billing/payout-reconciliation.entity";
+import { Refund } from "../billing/refund.entity";
+import { StripeEventRecord } from "../billing/stripe-event.entity";
+import { StripeSyncState } from "../billing/stripe-sync-state.entity";
+import { TaxCertificate } from "../billing/tax-certificate.entity";
 
 /** Every entity, listed once: the DataSource, the CLI and the tests all take it from here. */
 export const entities = [
-  Bakery, BakeryClosure, CustomerAccount, User, AuthToken, AuthRateCounter,
+  Bakery, BakeryClosure, CustomerAccount, User, AuthToken, AuthRateCounter, RateLimitPoints,
   Product, ProductComponent, PriceList, PriceListItem, Order, OrderLine, IdempotencyRecord, StandingOrder, StandingOrderLine,
   Ingredient, Formula, FormulaVersion, BakeDay, ProductionSettings, BakehouseMixer, BakehouseOven, OutboxMail,
   NumberCounter, Invoice, InvoiceLine, Payment, CreditNote, Refund, CheckoutSessionRecord, StripeEventRecord, StripeSyncState, PayoutReconciliation, TaxCertificate, DeliveryAdjustment,

@@ -45,7 +45,16 @@ export const apiNotFound: RequestHandler = (req, _res, next) => {
   next(new HttpError(404, "route_not_found", `No API route ${req.method} ${req.baseUrl}${req.path}.`));
 };
 
-/** The one error handler: every failure leaves as { error: { code, message, fields? } }, never a stack trace. */
+/** The request's id (server/http/request-id.ts, set by pino-http), as the X-Request-Id header has it. */
+function requestIdOf(req: { id?: unknown }, res: { getHeader(name: string): unknown }): string | undefined {
+  const id = req.id ?? res.getHeader("X-Request-Id");
+  return id === undefined || id === null ? undefined : String(id);
+}
+
+/**
+ * The one error handler: every failure leaves as { error: { code, message, fields?, requestId } }, never a stack
+ * trace. requestId is the X-Request-Id of the answer, for a person to quote.
+ */
 export const errorHandler: ErrorRequestHandler = (err, req, res, _next) => {
   let httpError: HttpError;
   if (err instanceof HttpError) {
@@ -77,5 +86,7 @@ export const errorHandler: ErrorRequestHandler = (err, req, res, _next) => {
   const body: Record<string, unknown> = { code: httpError.code, message: httpError.message };
   if (httpError.fields) body.fields = httpError.fields;
   if (httpError.extra) Object.assign(body, httpError.extra);
+  const requestId = requestIdOf(req, res);
+  if (requestId) body.requestId = requestId;
   res.status(httpError.status).json({ error: body });
 };

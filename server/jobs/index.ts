@@ -4,7 +4,8 @@ import { lockPastCutoff } from "../orders/orders.service";
 import { materialiseAll } from "../orders/standing.service";
 import { freezeDue } from "../production/plan.service";
 import { processOutbox } from "../mail/outbox.service";
-import { applyCreditHolds, autoDeliver, invoiceUninvoicedCardOrders, issueStatements } from "../billing/invoices.service";
+import { applyCreditHolds, issueStatements } from "../billing/invoices.service";
+import { autoDeliver, invoiceUninvoicedCardOrders } from "../billing/dispatch.service";
 import { catchUpStripe } from "./stripe-catch-up";
 
 /** Every scheduled job the server runs (each under a MariaDB named lock). */

@@ -1,7 +1,9 @@
 import type Stripe from "stripe";
 import type { AppContext } from "../http/context";
-import { CheckoutSessionRecord, StripeSyncState } from "../billing/billing.entity";
-import { expireStaleSessions, handleEvent } from "../billing/payments.service";
+import { CheckoutSessionRecord } from "../billing/checkout-session.entity";
+import { StripeSyncState } from "../billing/stripe-sync-state.entity";
+import { expireStaleSessions } from "../billing/checkout.service";
+import { handleEvent } from "../billing/stripe-events.service";
 
 /**
  * The Stripe catch-up: webhooks can be lost (an endpoint down longer than Stripe retries, or a fake killed
@@ -11,7 +13,7 @@ import { expireStaleSessions, handleEvent } from "../billing/payments.service";
  * way, recorded once by event id.
  */
 
-/** The event types that change an invoice (see payments.service planEvent). */
+/** The event types that change an invoice (see stripe-events.service.ts planEvent). */
 export const CATCH_UP_TYPES = ["checkout.session.completed", "checkout.session.expired", "payment_intent.succeeded", "charge.refunded"];
 /**
  * Each listing starts this far before the cursor: `created` has one-second resolution and events of the same

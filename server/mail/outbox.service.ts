@@ -6,6 +6,8 @@ import { OutboxMail } from "./outbox.entity";
 import type { OutgoingMail } from "./mailer";
 import { isDatabaseUnavailable } from "../db/retry";
 import type { MailKind } from "../../shared/mail";
+import type { MailStatus } from "../../shared/schemas/outbox";
+import type { OutboxMailDto } from "../../shared/contracts/outbox";
 
 export const MAX_ATTEMPTS = 12;
 const SENDING_STALE_MS = 5 * 60 * 1000;
@@ -126,13 +128,8 @@ export async function processOutbox(ctx: AppContext, limit = 100): Promise<{ sen
   return { sent, failed };
 }
 
-export interface OutboxRowDto {
-  id: number; kind: string; to: string; subject: string; status: string; attempts: number; lastError: string | null;
-  nextAttemptAt: string; sentAt: string | null; createdAt: string; messageId: string;
-}
-
-export async function listOutbox(ctx: AppContext, status?: string): Promise<OutboxRowDto[]> {
-  const rows = await ctx.dataSource.getRepository(OutboxMail).find({ where: status ? { status: status as OutboxMail["status"] } : {}, order: { id: "DESC" }, take: 200 });
+export async function listOutbox(ctx: AppContext, status?: MailStatus): Promise<OutboxMailDto[]> {
+  const rows = await ctx.dataSource.getRepository(OutboxMail).find({ where: status ? { status } : {}, order: { id: "DESC" }, take: 200 });
   return rows.map((r) => ({ id: r.id, kind: r.kind, to: r.toAddress, subject: r.subject, status: r.status, attempts: r.attempts, lastError: r.lastError, nextAttemptAt: r.nextAttemptAt.toISOString(), sentAt: r.sentAt?.toISOString() ?? null, createdAt: r.createdAt.toISOString(), messageId: r.messageId }));
 }
 

@@ -5,13 +5,7 @@ import { saleUnitFor } from "../../shared/quantity";
 import type { AppContext } from "../http/context";
 import { Product } from "../catalog/product.entity";
 import { CustomerAccount } from "../accounts/account.entity";
-
-export interface BoardDto {
-  date: string;
-  products: { id: number; name: string; saleUnit: string; saleUnitPlural: string; total: number }[];
-  rows: { accountId: number; accountName: string; orderId: number; status: OrderStatus; poNumber: string | null; quantities: Record<number, number>; totalCents: number }[];
-  totalCents: number;
-}
+import type { BoardDto, BoardRowDto } from "../../shared/contracts/board";
 
 /** Accounts × products for one delivery date, summed in SQL. Cancelled orders are left out. */
 export async function board(ctx: AppContext, date: string): Promise<BoardDto> {
@@ -23,7 +17,7 @@ export async function board(ctx: AppContext, date: string): Promise<BoardDto> {
   const productIds = [...new Set(cells.map((c) => c.productId))];
   const products = productIds.length ? await ctx.dataSource.getRepository(Product).createQueryBuilder("p").whereInIds(productIds).orderBy("p.sortOrder").addOrderBy("p.name").getMany() : [];
   const accounts = new Map((await ctx.dataSource.getRepository(CustomerAccount).find()).map((a) => [a.id, a.businessName]));
-  const rows = new Map<number, BoardDto["rows"][number]>();
+  const rows = new Map<number, BoardRowDto>();
   const totals = new Map<number, number>();
   for (const c of cells) {
     const row = rows.get(c.orderId) ?? { accountId: c.accountId, accountName: accounts.get(c.accountId) ?? "", orderId: Number(c.orderId), status: c.status, poNumber: c.poNumber, quantities: {}, totalCents: Number(c.totalCents) };

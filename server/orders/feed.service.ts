@@ -11,12 +11,13 @@ import { addDays, localToday } from "../../shared/calendar";
 import { formatMoney } from "../../shared/money";
 import { productsText, quantityText } from "../../shared/quantity";
 import { ORDER_STATUS_LABELS } from "../../shared/schemas/orders";
+import type { CalendarFeedDto } from "../../shared/contracts/feed";
 
 /** Lines count different sale units (trays, loaves), so the summary counts products, never adds them up. */
 
 export const feedUrl = (ctx: AppContext, token: string) => `${ctx.config.publicUrl}/api/feeds/${token}.ics`;
 
-export async function getFeed(ctx: AppContext, accountId: number): Promise<{ url: string | null }> {
+export async function getFeed(ctx: AppContext, accountId: number): Promise<CalendarFeedDto> {
   const a = await ctx.dataSource.getRepository(CustomerAccount).findOneBy({ id: accountId });
   if (!a) throw notFound("That account");
   return { url: a.feedToken ? feedUrl(ctx, a.feedToken) : null };

@@ -1,5 +1,6 @@
-import { Column, CreateDateColumn, Entity, Index, OneToMany, PrimaryGeneratedColumn, UpdateDateColumn, ManyToOne, JoinColumn, VersionColumn } from "typeorm";
+import { Column, CreateDateColumn, Entity, Index, PrimaryGeneratedColumn, UpdateDateColumn, OneToMany, VersionColumn } from "typeorm";
 import type { OrderStatus } from "../../shared/schemas/orders";
+import { OrderLine } from "./order-line.entity";
 
 /** One order per account per delivery date. */
 @Entity({ name: "customer_order" })
@@ -51,66 +52,6 @@ export class Order {
   updatedAt: Date;
 }
 
-/** A line: prices are copied from the catalog when the order is placed or changed. */
-@Entity({ name: "order_line" })
-@Index(["orderId", "productId"], { unique: true })
-@Index(["productId"])
-export class OrderLine {
-  @PrimaryGeneratedColumn({ type: "int" })
-  id: number;
-
-  @Column({ type: "int" })
-  orderId: number;
-
-  @ManyToOne(() => Order, (o) => o.lines, { onDelete: "CASCADE" })
-  @JoinColumn({ name: "orderId" })
-  order?: Order;
-
-  @Column({ type: "int" })
-  productId: number;
-
-  @Column({ type: "varchar", length: 120 })
-  productName: string;
-
-  @Column({ type: "varchar", length: 60 })
-  saleUnit: string;
-
-  /** The sale unit's plural as ordered (a snapshot, like the singular); '' only on rows inserted raw. */
-  @Column({ type: "varchar", length: 60, default: "" })
-  saleUnitPlural: string;
-
-  @Column({ type: "int" })
-  quantity: number;
-
-  @Column({ type: "int" })
-  unitPriceCents: number;
-
-  @Column({ type: "int" })
-  lineTotalCents: number;
-}
-
-/** A remembered POST: the same Idempotency-Key from the same user gets the first answer again. */
-@Entity({ name: "idempotency_key" })
-@Index(["userId", "idemKey"], { unique: true })
-export class IdempotencyRecord {
-  @PrimaryGeneratedColumn({ type: "int" })
-  id: number;
-
-  @Column({ type: "int" })
-  userId: number;
-
-  @Column({ type: "varchar", length: 100 })
-  idemKey: string;
-
-  @Column({ type: "char", length: 64 })
-  requestHash: string;
-
-  @Column({ type: "int" })
-  status: number;
-
-  @Column({ type: "mediumtext" })
-  body: string;
-
-  @CreateDateColumn({ type: "datetime", precision: 3, default: () => "CURRENT_TIMESTAMP(3)" })
-  createdAt: Date;
-}
+/** Re-exported for the modules that import them from this path; each lives in its own file. */
+export { OrderLine } from "./order-line.entity";
+export { IdempotencyRecord } from "./idempotency-record.entity";

@@ -1,10 +1,9 @@
 import { Router } from "express";
-import { z } from "zod";
 import type { AppContext } from "../http/context";
 import { badRequest, parse } from "../http/errors";
 import { allow, currentUser } from "../http/auth";
-import { idSchema } from "../../shared/schemas/common";
-import { dateSchema } from "../../shared/schemas/calendar";
+import { accountIdQuerySchema, idParamSchema } from "../../shared/schemas/common";
+import { dateQuerySchema } from "../../shared/schemas/calendar";
 import { NOTHING_TO_CHANGE, orderCreateSchema, orderListQuerySchema, orderUpdateSchema, standingOrderSchema } from "../../shared/schemas/orders";
 import { resolveAccount } from "../calendar/calendar.service";
 import { getBakery } from "../bakery/bakery.service";
@@ -13,20 +12,17 @@ import * as standing from "./standing.service";
 import * as feed from "./feed.service";
 import { board, boardCsv } from "./board.service";
 
-const idParam = z.object({ id: idSchema });
-const dateQuery = z.object({ date: dateSchema });
-const accountQuery = z.object({ accountId: z.coerce.number().int().positive().optional() });
 const ORDERING = ["buyer", "owner", "bookkeeper"] as const;
 
 export function ordersRoutes(ctx: AppContext): Router {
   const r = Router();
 
   r.get("/board", allow("owner", "bookkeeper", "baker"), async (req, res) => {
-    const { date } = parse(dateQuery, req.query);
+    const { date } = parse(dateQuerySchema, req.query);
     res.json({ board: await board(ctx, date) });
   });
   r.get("/board.csv", allow("owner", "bookkeeper", "baker"), async (req, res) => {
-    const { date } = parse(dateQuery, req.query);
+    const { date } = parse(dateQuerySchema, req.query);
     const bakery = await getBakery(ctx);
     res.type("text/csv; charset=utf-8").attachment(`orders-${date}.csv`).send(boardCsv(await board(ctx, date), bakery.currency));
   });
@@ -35,7 +31,7 @@ export function ordersRoutes(ctx: AppContext): Router {
     res.json({ orders: await orders.listOrders(ctx, currentUser(req), parse(orderListQuerySchema, req.query)) });
   });
   r.get("/:id", allow(...ORDERING, "baker"), async (req, res) => {
-    const { id } = parse(idParam, req.params);
+    const { id } = parse(idParamSchema, req.params);
     res.json({ order: await orders.getOrder(ctx, currentUser(req), id) });
   });
   r.post("/", allow(...ORDERING), async (req, res) => {
@@ -50,14 +46,14 @@ export function ordersRoutes(ctx: AppContext): Router {
     res.status(result.status).json(result.body);
   });
   r.patch("/:id", allow(...ORDERING), async (req, res) => {
-    const { id } = parse(idParam, req.params);
+    const { id } = parse(idParamSchema, req.params);
     // express.json only parses application/json; anything else leaves no body, which would change nothing.
     if (!req.is("application/json") || typeof req.body !== "object" || req.body === null || Array.isArray(req.body)) throw badRequest(`${NOTHING_TO_CHANGE} Send them as a JSON object.`);
     const input = parse(orderUpdateSchema, req.body);
     res.json({ order: await orders.updateOrder(ctx, currentUser(req), id, input) });
   });
   r.delete("/:id", allow(...ORDERING), async (req, res) => {
-    const { id } = parse(idParam, req.params);
+    const { id } = parse(idParamSchema, req.params);
     res.json({ order: await orders.cancelOrder(ctx, currentUser(req), id) });
   });
   return r;
@@ -66,7 +62,7 @@ export function ordersRoutes(ctx: AppContext): Router {
 export function standingOrderRoutes(ctx: AppContext): Router {
   const r = Router();
   r.get("/", allow(...ORDERING), async (req, res) => {
-    const { accountId } = parse(accountQuery, req.query);
+    const { accountId } = parse(accountIdQuerySchema, req.query);
     res.json({ standingOrder: await standing.getStandingOrder(ctx, currentUser(req), accountId) });
   });
   r.put("/", allow("buyer", "owner"), async (req, res) => {
@@ -83,15 +79,15 @@ export function standingOrderRoutes(ctx: AppContext): Router {
 export function feedRoutes(ctx: AppContext): Router {
   const r = Router();
   r.get("/", allow("buyer", "owner"), async (req, res) => {
-    const account = await resolveAccount(ctx, currentUser(req), parse(accountQuery, req.query).accountId);
+    const account = await resolveAccount(ctx, currentUser(req), parse(accountIdQuerySchema, req.query).accountId);
     res.json(await feed.getFeed(ctx, account.id));
   });
   r.post("/", allow("buyer", "owner"), async (req, res) => {
-    const account = await resolveAccount(ctx, currentUser(req), parse(accountQuery, req.query).accountId);
+    const account = await resolveAccount(ctx, currentUser(req), parse(accountIdQuerySchema, req.query).accountId);
     res.status(201).json(await feed.rotateFeed(ctx, account.id));
   });
   r.delete("/", allow("buyer", "owner"), async (req, res) => {
-    const account = await resolveAccount(ctx, currentUser(req), parse(accountQuery, req.query).accountId);
+    const account = await resolveAccount(ctx, currentUser(req), parse(accountIdQuerySchema, req.query).accountId);
     await feed.revokeFeed(ctx, account.id);
     res.status(204).end();
   });

@@ -12,6 +12,7 @@ import { addDays, dateStatus, daysBetween, localToday, weekdayOf, type Weekday }
 import { expandRule, weeklyRule } from "../../shared/recurrence";
 import type { SessionUser } from "../../shared/schemas/auth";
 import { MAX_ORDER_CENTS, type StandingOrderDto, type StandingOrderInput } from "../../shared/schemas/orders";
+import type { MaterialiseResult } from "../../shared/contracts/standing";
 import { quantityText, saleUnitFor } from "../../shared/quantity";
 
 async function load(m: EntityManager, accountId: number) {
@@ -103,7 +104,7 @@ export async function putStandingOrder(ctx: AppContext, actor: SessionUser, inpu
  * that exists is only brought in line with the standing order when the job made it and nobody has
  * changed it by hand since.
  */
-export async function materialiseAll(ctx: AppContext): Promise<{ created: number; updated: number; cancelled: number }> {
+export async function materialiseAll(ctx: AppContext): Promise<MaterialiseResult> {
   const all = await ctx.dataSource.getRepository(StandingOrder).find();
   const total = { created: 0, updated: 0, cancelled: 0 };
   for (const so of all) {

@@ -6,6 +6,7 @@ import { Product } from "../catalog/product.entity";
 import { declaredAllergensOf } from "../catalog/components.service";
 import { formulaFigures, validateFormula, type FormulaSpec, type IngredientInfo } from "../../shared/production";
 import { formulaInputSchema, ingredientInputSchema, type FormulaDto, type IngredientDto } from "../../shared/schemas/production";
+import type { FormulaVersionDto } from "../../shared/contracts/production";
 import { sortAllergens, type AllergenCode } from "../../shared/allergens";
 
 type Body = Omit<FormulaSpec, "id" | "version"> & { targetInternalC: number | null };
@@ -85,7 +86,7 @@ export async function getFormula(ctx: AppContext, id: number, version?: number):
   return dto(ctx, m, await formulaSpec(m, id, version), await ingredientLibrary(m));
 }
 
-export async function formulaHistory(ctx: AppContext, id: number) {
+export async function formulaHistory(ctx: AppContext, id: number): Promise<FormulaVersionDto[]> {
   if (!(await ctx.dataSource.getRepository(Formula).existsBy({ id }))) throw notFound("That formula");
   const rows = await ctx.dataSource.getRepository(FormulaVersion).find({ where: { formulaId: id }, order: { version: "DESC" } });
   return rows.map((r) => ({ version: r.version, note: r.note, editedById: r.editedById, createdAt: r.createdAt.toISOString() }));

@@ -4,6 +4,7 @@ import type { PlanDto } from "../../shared/schemas/production";
 import { formatPercent, unitsFor, type UnitSystem } from "../../shared/units";
 import { CAUTION_FOOTNOTE, dayCautions, liquidWarnings, mixLiquidAdvice, pasteCautionText } from "../../shared/cautions";
 import { liquidNeedsAttention } from "../../shared/production";
+import { PDF_FONT, PDF_FONT_BOLD, pdfText, useAppFonts, type PdfFont } from "../pdf/fonts";
 
 const INK = "#2A211B";
 const MUTED = "#5E5247";
@@ -13,18 +14,9 @@ const RULE = "#D9CBB8";
 const MARGIN = 40;
 const BOTTOM = 48;
 
-type Font = "Helvetica" | "Helvetica-Bold";
-
-/**
- * The built-in Helvetica is WinAnsi-encoded (PDF 32000-1 Annex D): characters outside it are drawn as other glyphs
- * than pdfkit measured, so they are written with the nearest WinAnsi characters first.
- */
-const WINANSI_SUBSTITUTES: [RegExp, string][] = [[/\u2212/g, "-"], [/\u2192/g, "->"], [/\u2264/g, "<="], [/\u2265/g, ">="], [/\u2248/g, "~"], [/\u2009|\u202F/g, " "]];
-export const pdfText = (s: string) => WINANSI_SUBSTITUTES.reduce((t, [re, to]) => t.replace(re, to), s);
-
 /**
  * The production sheet (overview, doughs, timeline, cautions) followed by one weigh-out card per mix, in large
- * type for a bakery wall. Letter size, pdfkit's built-in Helvetica. Every piece of text is drawn inside a measured
+ * type for a bakery wall. Letter size, in the app's Nunito (server/pdf/fonts.ts). Every piece of text is drawn inside a measured
  * box (an x and a width within the margins; its height from heightOfString before it is placed), so nothing
  * runs past the right margin or splits across a page: long names wrap inside their column. Numbers go through
  * shared/units.ts in the chosen system, the same formatting the screens use.
@@ -34,6 +26,7 @@ export function renderPlanPdf(plan: PlanDto & { bakeryName: string; timeZone: st
   const chunks: Buffer[] = [];
   doc.on("data", (c: Buffer) => chunks.push(c));
   const done = new Promise<Buffer>((resolve) => doc.on("end", () => resolve(Buffer.concat(chunks))));
+  useAppFonts(doc);
   // Dates and times in the bakery's locale and zone (shared/format.ts), numbers in its locale too.
   const f = formatterFor(plan.locale, plan.timeZone);
   const u = unitsFor(units, f.locale);
@@ -46,11 +39,11 @@ export function renderPlanPdf(plan: PlanDto & { bakeryName: string; timeZone: st
     if (doc.y + space > bottom()) doc.addPage();
   };
   /** A paragraph in a measured box: wraps at `width`, never split across pages when it fits on one. */
-  const para = (raw: string, o: { font?: Font; size?: number; color?: string; x?: number; width?: number; gap?: number; spacing?: number } = {}) => {
+  const para = (raw: string, o: { font?: PdfFont; size?: number; color?: string; x?: number; width?: number; gap?: number; spacing?: number } = {}) => {
     const text = pdfText(raw);
     const x = o.x ?? MARGIN;
     const width = Math.min(o.width ?? W, MARGIN + W - x);
-    doc.font(o.font ?? "Helvetica").fontSize(o.size ?? 10);
+    doc.font(o.font ?? PDF_FONT).fontSize(o.size ?? 10);
     const opts = { width, characterSpacing: o.spacing ?? 0 };
     const h = doc.heightOfString(text, opts);
     if (h <= bottom() - doc.page.margins.top) ensure(h);
@@ -61,7 +54,7 @@ export function renderPlanPdf(plan: PlanDto & { bakeryName: string; timeZone: st
   };
   const heading = (text: string, size = 16) => {
     doc.y += size * 0.5;
-    para(text, { font: "Helvetica-Bold", size, color: CRUST });
+    para(text, { font: PDF_FONT_BOLD, size, color: CRUST });
   };
   const rule = () => {
     doc.moveTo(MARGIN, doc.y + 1).lineTo(MARGIN + W, doc.y + 1).strokeColor(RULE).lineWidth(1).stroke();
@@ -70,7 +63,7 @@ export function renderPlanPdf(plan: PlanDto & { bakeryName: string; timeZone: st
   /** A table row: every cell measured in its column (width − 6 gutter), the row as high as its tallest cell. */
   const row = (raw: string[], widths: number[], o: { bold?: boolean; size?: number; left?: number[]; color?: string } = {}) => {
     const cols = raw.map(pdfText);
-    doc.font(o.bold ? "Helvetica-Bold" : "Helvetica").fontSize(o.size ?? 10);
+    doc.font(o.bold ? PDF_FONT_BOLD : PDF_FONT).fontSize(o.size ?? 10);
     const h = Math.max(...cols.map((c, i) => doc.heightOfString(c || " ", { width: widths[i] - 6 })));
     ensure(h + 3);
     const y = doc.y;
@@ -91,32 +84,32 @@ export function renderPlanPdf(plan: PlanDto & { bakeryName: string; timeZone: st
   };
 
   // ---- sheet -------------------------------------------------------------------------------
-  para(plan.bakeryName.toUpperCase(), { font: "Helvetica-Bold", size: 11, color: CRUST, spacing: 1 });
-  para(`Bake day: ${day}`, { font: "Helvetica-Bold", size: 24 });
+  para(plan.bakeryName.toUpperCase(), { font: PDF_FONT_BOLD, size: 11, color: CRUST, spacing: 1 });
+  para(`Bake day: ${day}`, { font: PDF_FONT_BOLD, size: 24 });
   const frozen = plan.frozen ? `set at the cut-off ${plan.frozenAt ? f.at(plan.frozenAt, "dayTime") : ""}` : "not set yet: follows the orders until the cut-off";
   para(`Leaves at ${time(plan.inputs.dispatchAt)} · ${frozen} · ${plan.final ? "final" : "NOT FINAL: orders may still change until the cut-off"}`, { size: 11, color: MUTED });
   const supply = [plan.inputs.tapC !== undefined ? `tap water ${u.temp(plan.inputs.tapC)}` : "", plan.inputs.milkC !== undefined ? `milk ${u.temp(plan.inputs.milkC)}` : ""].filter(Boolean).join(" · ");
   para(
     `Room ${u.temp(plan.inputs.roomC)} · flour ${u.temp(plan.inputs.flourC)} · paste ${u.temp(plan.inputs.pasteC)}${supply ? ` · ${supply}` : ""} · largest mixer ${u.capacity(plan.inputs.mixerCapacityKg)}` +
-      (plan.inputs.packingMinutes !== undefined && plan.inputs.packFrom ? ` · packing ${plan.inputs.packingMinutes} min from ${time(plan.inputs.packFrom)}` : ""),
+      (plan.inputs.packingMinutes !== undefined && plan.inputs.packFrom ? ` · packing ${f.number(plan.inputs.packingMinutes)} min from ${time(plan.inputs.packFrom)}` : ""),
     { size: 11, color: MUTED },
   );
 
   heading("Pans", 18);
   for (const p of plan.products) {
     const nameX = MARGIN + 75;
-    const detail = pdfText(`${p.panName} · ${p.units} ordered${p.extraPans ? ` + ${u.count(p.extraPans, "extra pan", "extra pans")}` : ""} · ${u.count(p.pieces, "piece", "pieces")} of ${u.piece(p.pieceGrams)} scaled dough`);
+    const detail = pdfText(`${p.panName} · ${f.number(p.units)} ordered${p.extraPans ? ` + ${u.count(p.extraPans, "extra pan", "extra pans")}` : ""} · ${u.count(p.pieces, "piece", "pieces")} of ${u.piece(p.pieceGrams)} scaled dough`);
     const name = pdfText(p.name);
-    doc.font("Helvetica-Bold").fontSize(13);
+    doc.font(PDF_FONT_BOLD).fontSize(13);
     const nameH = doc.heightOfString(name, { width: W - 75 });
-    doc.font("Helvetica").fontSize(10);
+    doc.font(PDF_FONT).fontSize(10);
     const detailH = doc.heightOfString(detail, { width: W - 75 });
     ensure(Math.max(34, nameH + detailH + 6));
     const y = doc.y;
-    doc.font("Helvetica-Bold").fontSize(28).fillColor(INK).text(String(p.pans), MARGIN, y, { width: 70, lineBreak: false });
-    doc.font("Helvetica").fontSize(8).fillColor(MUTED).text(p.pans === 1 ? "pan" : "pans", MARGIN, y + 28, { width: 70, lineBreak: false });
-    doc.font("Helvetica-Bold").fontSize(13).fillColor(INK).text(name, nameX, y + 2, { width: W - 75 });
-    doc.font("Helvetica").fontSize(10).fillColor(MUTED).text(detail, nameX, doc.y, { width: W - 75 });
+    doc.font(PDF_FONT_BOLD).fontSize(28).fillColor(INK).text(f.number(p.pans), MARGIN, y, { width: 70, lineBreak: false });
+    doc.font(PDF_FONT).fontSize(8).fillColor(MUTED).text(p.pans === 1 ? "pan" : "pans", MARGIN, y + 28, { width: 70, lineBreak: false });
+    doc.font(PDF_FONT_BOLD).fontSize(13).fillColor(INK).text(name, nameX, y + 2, { width: W - 75 });
+    doc.font(PDF_FONT).fontSize(10).fillColor(MUTED).text(detail, nameX, doc.y, { width: W - 75 });
     doc.fillColor(INK);
     doc.x = MARGIN;
     doc.y = Math.max(doc.y, y + 40) + 4;
@@ -142,7 +135,7 @@ export function renderPlanPdf(plan: PlanDto & { bakeryName: string; timeZone: st
 
   ensure(120);
   heading("Timeline", 15);
-  if (plan.schedule?.earlierStart) para(plan.schedule.earlierStart.text, { font: "Helvetica-Bold", size: 11, color: ALERT });
+  if (plan.schedule?.earlierStart) para(plan.schedule.earlierStart.text, { font: PDF_FONT_BOLD, size: 11, color: ALERT });
   const tw = cols(14, 14, 19, 53); // "Tue 11:50 PM" fits one line at 10 pt
   row(["Starts", "Ends", "Where", "Step"], tw, { bold: true, left: [1, 2, 3] });
   rule();
@@ -155,7 +148,7 @@ export function renderPlanPdf(plan: PlanDto & { bakeryName: string; timeZone: st
 
   heading("Cautions", 13);
   for (const c of dayCautions(plan, u)) {
-    if (c.key === "deferral") para(c.text, { font: "Helvetica-Bold", size: 9.5, gap: 4 });
+    if (c.key === "deferral") para(c.text, { font: PDF_FONT_BOLD, size: 9.5, gap: 4 });
     else para(`• ${c.title}: ${c.text}`, { size: 9.5, gap: 4 });
   }
 
@@ -164,22 +157,22 @@ export function renderPlanPdf(plan: PlanDto & { bakeryName: string; timeZone: st
     const names = new Map(d.ingredients.map((i) => [i.ingredientId, i.name]));
     for (const m of d.mixes) {
       doc.addPage();
-      para(`${day} · ${plan.bakeryName}`.toUpperCase(), { font: "Helvetica-Bold", size: 12, color: CRUST, spacing: 1 });
-      para(d.name, { font: "Helvetica-Bold", size: 30 });
-      para(`Mix ${m.index} of ${d.mixes.length} · ${u.mass(m.doughGrams)}`, { font: "Helvetica-Bold", size: 20 });
+      para(`${day} · ${plan.bakeryName}`.toUpperCase(), { font: PDF_FONT_BOLD, size: 12, color: CRUST, spacing: 1 });
+      para(d.name, { font: PDF_FONT_BOLD, size: 30 });
+      para(`Mix ${m.index} of ${d.mixes.length} · ${u.mass(m.doughGrams)}`, { font: PDF_FONT_BOLD, size: 20 });
       if (m.scheduled) para(`${m.scheduled.dayBefore ? "The day before, " : ""}${time(m.scheduled.startsAt)}–${time(m.scheduled.endsAt)} on ${m.scheduled.mixerName}`, { size: 12, color: MUTED });
       const attention = m.liquid ? liquidNeedsAttention(m.liquid) : !!m.liquidTempAdvice;
-      para(`Liquid at ${m.liquidTempC === null ? "—" : u.temp(m.liquidTempC)}`, { font: "Helvetica-Bold", size: 18, color: attention ? ALERT : INK });
+      para(`Liquid at ${m.liquidTempC === null ? "—" : u.temp(m.liquidTempC)}`, { font: PDF_FONT_BOLD, size: 18, color: attention ? ALERT : INK });
       const advice = m.liquid ? mixLiquidAdvice(d, m, u) : m.liquidTempAdvice;
       if (advice) para(advice, { size: 12, color: attention ? ALERT : INK });
       doc.y += 6;
       const w = cols(52, 30, 18);
       if (d.paste) {
-        para(`Paste: cook to ${u.temp(d.paste.cookToC)}, stirring; cool before adding`, { font: "Helvetica-Bold", size: 16, color: CRUST });
+        para(`Paste: cook to ${u.temp(d.paste.cookToC)}, stirring; cool before adding`, { font: PDF_FONT_BOLD, size: 16, color: CRUST });
         for (const i of m.ingredients.filter((x) => x.pasteGrams > 0)) row([names.get(i.ingredientId) ?? "?", u.mass(i.pasteGrams), "[  ]"], w, { size: 18 });
         doc.y += 6;
       }
-      para("Final mix", { font: "Helvetica-Bold", size: 16, color: CRUST });
+      para("Final mix", { font: PDF_FONT_BOLD, size: 16, color: CRUST });
       const ice = m.liquid && m.liquid.iceGrams > 0 ? m.liquid : null;
       for (const i of m.ingredients.filter((x) => x.finalMixGrams > 0)) {
         const name = names.get(i.ingredientId) ?? "?";
@@ -190,7 +183,7 @@ export function renderPlanPdf(plan: PlanDto & { bakeryName: string; timeZone: st
       }
       if (d.paste) row(["+ the cooled paste", "", "[  ]"], w, { size: 18 });
       doc.y += 10;
-      if (d.targetInternalC) para(`Internal temperature (done at ${u.temp(d.targetInternalC)} or above), one piece per oven load: ________ at ______ by ______`, { font: "Helvetica-Bold", size: 11, gap: 6 });
+      if (d.targetInternalC) para(`Internal temperature (done at ${u.temp(d.targetInternalC)} or above), one piece per oven load: ________ at ______ by ______`, { font: PDF_FONT_BOLD, size: 11, gap: 6 });
       para(`${d.paste ? `${pasteCautionText(d.paste.cookToC, u)} ` : ""}Keep the mixer guard on and hands out of a running bowl. Keep allergen-free work apart. ${CAUTION_FOOTNOTE}`, { size: 10, color: MUTED });
     }
   }

@@ -15,6 +15,7 @@ import { liquidAdviceText } from "../../shared/cautions";
 import { scheduleDay } from "../../shared/schedule";
 import { loadProductionSettings, resourcesOf } from "./settings.service";
 import type { PlanDto, PlanProgressDto, ProgressBody } from "../../shared/schemas/production";
+import type { BakeDayInput, ForecastDto, PlanView } from "../../shared/contracts/production";
 import { componentCards, componentTotals, resolveBake } from "../../shared/components";
 import { componentLine, productMakeup } from "../catalog/components.service";
 
@@ -191,7 +192,7 @@ export async function computePlan(ctx: AppContext, date: string, opts: { version
 }
 
 /** What the baker sees: the frozen plan once the cut-off has passed (frozen then, if not yet), else the live one. */
-export async function getPlan(ctx: AppContext, date: string): Promise<PlanDto & { changes: string[] }> {
+export async function getPlan(ctx: AppContext, date: string): Promise<PlanView> {
   const m = ctx.dataSource.manager;
   const settings = await loadCalendarSettings(ctx, m);
   const day = await bakeDay(m, date);
@@ -206,7 +207,7 @@ export async function getPlan(ctx: AppContext, date: string): Promise<PlanDto & 
 }
 
 /** Freeze (or deliberately recalculate): store the plan with the formula versions it used. */
-export async function freeze(ctx: AppContext, date: string): Promise<PlanDto & { changes: string[] }> {
+export async function freeze(ctx: AppContext, date: string): Promise<PlanView> {
   const m = ctx.dataSource.manager;
   const day = await bakeDayForWrite(m, date);
   const before = day.frozenPlan ? (JSON.parse(day.frozenPlan) as PlanDto) : null;
@@ -238,7 +239,7 @@ export function diffPlans(a: PlanDto, b: PlanDto): string[] {
   return out;
 }
 
-export async function saveBakeDay(ctx: AppContext, date: string, input: { extraPans: Record<string, number>; roomC: number; flourC: number; pasteC: number; tapC?: number; milkC?: number }) {
+export async function saveBakeDay(ctx: AppContext, date: string, input: BakeDayInput): Promise<PlanView> {
   const m = ctx.dataSource.manager;
   const ids = Object.keys(input.extraPans).map(Number);
   if (ids.length && (await m.getRepository(Product).countBy({ id: In(ids) })) !== ids.length) throw badRequest("Extra pans for a product that does not exist.", { extraPans: "Unknown product." });
@@ -308,14 +309,6 @@ export async function freezeDue(ctx: AppContext): Promise<number> {
   return n;
 }
 
-
-export interface ForecastDto {
-  from: string;
-  to: string;
-  days: { date: string; doughGrams: number; orderedUnits: number }[];
-  items: { ingredientId: number; name: string; grams: number; packName: string; packGrams: number; packs: number; costCents: number; byDay: Record<string, number> }[];
-  totalCostCents: number;
-}
 
 /** Ingredients for the next 7 days (orders placed plus standing orders expected), in purchase packs rounded up. */
 export async function forecast(ctx: AppContext, from: string): Promise<ForecastDto> {

@@ -1,18 +1,16 @@
 import { Router } from "express";
-import { z } from "zod";
 import type { AppContext } from "../http/context";
 import { parse } from "../http/errors";
 import { allow, currentUser } from "../http/auth";
-import { idSchema } from "../../shared/schemas/common";
-import { bakeDayInputSchema, planQuerySchema, productionSettingsSchema, progressInputSchema } from "../../shared/schemas/production";
-import { dateSchema } from "../../shared/schemas/calendar";
+import { idParamSchema } from "../../shared/schemas/common";
+import { bakeDayInputSchema, forecastQuerySchema, formulaVersionQuerySchema, planPdfQuerySchema, planQuerySchema, productionSettingsSchema, progressInputSchema } from "../../shared/schemas/production";
+import { dateQuerySchema } from "../../shared/schemas/calendar";
 import { getBakery } from "../bakery/bakery.service";
 import * as formulas from "./formulas.service";
 import * as plans from "./plan.service";
 import * as productionSettings from "./settings.service";
 import { renderPlanPdf } from "./plan.pdf";
 
-const idParam = z.object({ id: idSchema });
 const KITCHEN = ["owner", "baker"] as const;
 
 export function ingredientRoutes(ctx: AppContext): Router {
@@ -25,7 +23,7 @@ export function ingredientRoutes(ctx: AppContext): Router {
     res.status(201).json({ ingredient: await formulas.saveIngredient(ctx, null, req.body) });
   });
   r.put("/:id", async (req, res) => {
-    const { id } = parse(idParam, req.params);
+    const { id } = parse(idParamSchema, req.params);
     res.json({ ingredient: await formulas.saveIngredient(ctx, id, req.body) });
   });
   return r;
@@ -38,19 +36,19 @@ export function formulaRoutes(ctx: AppContext): Router {
     res.json({ formulas: await formulas.listFormulas(ctx) });
   });
   r.get("/:id", async (req, res) => {
-    const { id } = parse(idParam, req.params);
-    const { version } = parse(z.object({ version: z.coerce.number().int().positive().optional() }), req.query);
+    const { id } = parse(idParamSchema, req.params);
+    const { version } = parse(formulaVersionQuerySchema, req.query);
     res.json({ formula: await formulas.getFormula(ctx, id, version) });
   });
   r.get("/:id/history", async (req, res) => {
-    const { id } = parse(idParam, req.params);
+    const { id } = parse(idParamSchema, req.params);
     res.json({ versions: await formulas.formulaHistory(ctx, id) });
   });
   r.post("/", async (req, res) => {
     res.status(201).json({ formula: await formulas.saveFormula(ctx, currentUser(req).id, null, req.body) });
   });
   r.put("/:id", async (req, res) => {
-    const { id } = parse(idParam, req.params);
+    const { id } = parse(idParamSchema, req.params);
     res.json({ formula: await formulas.saveFormula(ctx, currentUser(req).id, id, req.body) });
   });
   return r;
@@ -74,7 +72,7 @@ export function productionRoutes(ctx: AppContext): Router {
     res.json({ plan: await plans.getPlan(ctx, date) });
   });
   r.get("/plan.pdf", allow(...KITCHEN), async (req, res) => {
-    const { date, units } = parse(planQuerySchema.extend({ units: z.enum(["metric", "us"]).default("metric") }), req.query);
+    const { date, units } = parse(planPdfQuerySchema, req.query);
     const bakery = await getBakery(ctx);
     const plan = await plans.getPlan(ctx, date);
     const pdf = await renderPlanPdf({ ...plan, bakeryName: bakery.name, timeZone: bakery.timeZone, locale: bakery.locale }, units);
@@ -85,17 +83,17 @@ export function productionRoutes(ctx: AppContext): Router {
     res.json({ plan: await plans.freeze(ctx, date) });
   });
   r.put("/bake-days/:date", allow(...KITCHEN), async (req, res) => {
-    const { date } = parse(z.object({ date: dateSchema }), req.params);
+    const { date } = parse(dateQuerySchema, req.params);
     const input = parse(bakeDayInputSchema, req.body);
     res.json({ plan: await plans.saveBakeDay(ctx, date, { ...input, roomC: Number(input.roomC), flourC: Number(input.flourC), pasteC: Number(input.pasteC) }) });
   });
   r.post("/bake-days/:date/progress", allow(...KITCHEN), async (req, res) => {
-    const { date } = parse(z.object({ date: dateSchema }), req.params);
+    const { date } = parse(dateQuerySchema, req.params);
     const input = parse(progressInputSchema, req.body);
     res.json({ progress: await plans.setProgress(ctx, date, input) });
   });
   r.get("/forecast", allow(...KITCHEN), async (req, res) => {
-    const { from } = parse(z.object({ from: dateSchema }), req.query);
+    const { from } = parse(forecastQuerySchema, req.query);
     res.json({ forecast: await plans.forecast(ctx, from) });
   });
   return r;

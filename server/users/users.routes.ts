@@ -1,29 +1,25 @@
 import { Router } from "express";
-import { z } from "zod";
 import type { AppContext } from "../http/context";
 import { parse } from "../http/errors";
 import { allow, currentUser } from "../http/auth";
-import { idSchema } from "../../shared/schemas/common";
-import { invitationCreateSchema, userUpdateSchema } from "../../shared/schemas/users";
+import { idParamSchema } from "../../shared/schemas/common";
+import { invitationCreateSchema, userListQuerySchema, userUpdateSchema } from "../../shared/schemas/users";
 import * as users from "./users.service";
-
-const idParam = z.object({ id: idSchema });
-const listQuery = z.object({ q: z.string().trim().max(100).optional() });
 
 export function usersRoutes(ctx: AppContext): Router {
   const r = Router();
   r.use(allow("owner"));
 
   r.get("/", async (req, res) => {
-    const { q } = parse(listQuery, req.query);
+    const { q } = parse(userListQuerySchema, req.query);
     res.json({ users: await users.listUsers(ctx, q) });
   });
   r.get("/:id", async (req, res) => {
-    const { id } = parse(idParam, req.params);
+    const { id } = parse(idParamSchema, req.params);
     res.json({ user: await users.getUser(ctx, id) });
   });
   r.patch("/:id", async (req, res) => {
-    const { id } = parse(idParam, req.params);
+    const { id } = parse(idParamSchema, req.params);
     const patch = parse(userUpdateSchema, req.body);
     res.json({ user: await users.updateUser(ctx, currentUser(req), id, patch) });
   });
@@ -42,7 +38,7 @@ export function invitationsRoutes(ctx: AppContext): Router {
     res.status(201).json({ invitation: await users.invite(ctx, currentUser(req), input) });
   });
   r.delete("/:id", async (req, res) => {
-    const { id } = parse(idParam, req.params);
+    const { id } = parse(idParamSchema, req.params);
     await users.revokeInvitation(ctx, id);
     res.status(204).end();
   });

@@ -11,6 +11,7 @@ import { enqueueMail } from "../mail/outbox.service";
 import { ROLE_LABELS, type Role } from "../../shared/roles";
 import type { InvitationDto, UserDto } from "../../shared/schemas/users";
 import type { SessionUser } from "../../shared/schemas/auth";
+import type { OfficeSummaryDto } from "../../shared/schemas/bakery";
 
 function userDto(u: User): UserDto {
   return {
@@ -150,7 +151,7 @@ export async function revokeInvitation(ctx: AppContext, id: number): Promise<voi
   if (!res.affected) throw notFound("That invitation");
 }
 
-export async function userCounts(ctx: AppContext) {
+export async function userCounts(ctx: AppContext): Promise<OfficeSummaryDto["users"]> {
   const repo = ctx.dataSource.getRepository(User);
   const [total, disabled] = await Promise.all([repo.count(), repo.countBy({ disabled: true })]);
   const pendingInvitations = await ctx.dataSource.getRepository(AuthToken).countBy({ kind: "invitation", usedAt: IsNull(), revokedAt: IsNull(), expiresAt: MoreThan(ctx.clock.now()) });

@@ -51,6 +51,12 @@ export type AccountInput = z.input<typeof accountInputSchema>;
 
 export const accountUpdateSchema = accountInputSchema.partial();
 
+/** GET /api/accounts?q=&status= (owner, bookkeeper). */
+export const accountListQuerySchema = z.object({
+  q: z.string().trim().max(100).optional(),
+  status: z.enum(ACCOUNT_STATUSES).optional(),
+});
+
 export interface AccountDto {
   id: number;
   businessName: string;

@@ -89,6 +89,9 @@ export const calendarQuerySchema = z
 
 export const accountDeliverySchema = z.object({
   routeWeekdays: weekdaysSchema.nullable(),
-  minimumOrderCents: z.coerce.number().int("Whole cents only.").min(0, "Cannot be negative.").max(10_000_000),
+  minimumOrderCents: z.coerce.number<number>().int("Whole cents only.").min(0, "Cannot be negative.").max(10_000_000),
   priceListId: z.number().int().positive().nullable(),
 });
+
+/** `?date=` or `/:date`: one delivery date (the orders board, a bake day). */
+export const dateQuerySchema = z.object({ date: dateSchema });

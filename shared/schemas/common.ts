@@ -74,6 +74,12 @@ export const idSchema = z.coerce
   .int("Must be a whole number.")
   .positive("Must be a positive number.");
 
+/** `/:id` route parameters. */
+export const idParamSchema = z.object({ id: idSchema });
+
+/** `?accountId=`: office users name an account, a buyer's own is used when left out. */
+export const accountIdQuerySchema = z.object({ accountId: z.coerce.number().int().positive().optional() });
+
 export const optionalText = (max: number, label = "This") =>
   z
     .string()

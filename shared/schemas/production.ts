@@ -79,6 +79,12 @@ export const bakeDayInputSchema = z.object({
 });
 
 export const planQuerySchema = z.object({ date: dateSchema });
+/** GET /api/production/plan.pdf?date=&units= (metric unless "us"). */
+export const planPdfQuerySchema = planQuerySchema.extend({ units: z.enum(["metric", "us"]).default("metric") });
+/** GET /api/production/forecast?from=: the first of the 7 days. */
+export const forecastQuerySchema = z.object({ from: dateSchema });
+/** GET /api/formulas/:id?version=: an earlier version to read (the current one when left out). */
+export const formulaVersionQuerySchema = z.object({ version: z.coerce.number().int().positive().optional() });
 
 export interface PlanDto {
   date: string;
@@ -102,10 +108,10 @@ export interface PlanDto {
     ingredients: { ingredientId: number; name: string; kind: IngredientKind; percent: number; grams: number; pasteGrams: number; finalMixGrams: number }[];
     mixes: {
       index: number; doughGrams: number; liquidTempC: number | null; liquidTempAdvice: string | null;
-      /** Ice, chilling or warming for the liquid (shared/production.ts planLiquid); absent in plans frozen before it. */
+      /** Ice, chilling or warming for the liquid (shared/production/liquid.ts planLiquid); absent in plans frozen before it. */
       liquid?: LiquidPlan | null;
       ingredients: { ingredientId: number; grams: number; pasteGrams: number; finalMixGrams: number }[];
-      /** When and on which mixer this card is mixed (shared/schedule.ts); absent in plans frozen before the schedule. */
+      /** When and on which mixer this card is mixed (shared/schedule/); absent in plans frozen before the schedule. */
       scheduled?: { startsAt: string; endsAt: string; mixerName: string; pasteStartsAt: string | null; dayBefore: boolean } | null;
     }[];
   }[];
@@ -113,7 +119,7 @@ export interface PlanDto {
   ingredients: { ingredientId: number; name: string; grams: number; componentGrams?: number; /** The ingredient's kind (for the cautions: raw egg in a wash). */ kind?: IngredientKind }[];
   /** One weigh-out card per component per product (toppings, washes, fillings, garnishes). */
   components?: ComponentCard[];
-  /** Every step of the day on its mixer, oven or the crew (shared/schedule.ts), in time order. */
+  /** Every step of the day on its mixer, oven or the crew (shared/schedule/), in time order. */
   timeline: ScheduleEntry[];
   /** The schedule around the timeline: oven loads, conflicts with the day, the earlier start that would fit. */
   schedule?: Omit<DaySchedule, "entries" | "warnings">;

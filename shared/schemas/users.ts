@@ -52,3 +52,6 @@ export interface InvitationDto {
   expiresAt: string;
   createdAt: string;
 }
+
+/** GET /api/users?q= (owner). */
+export const userListQuerySchema = z.object({ q: z.string().trim().max(100).optional() });

@@ -39,6 +39,8 @@ export function invoiceDetail(overrides: Partial<InvoiceDto> = {}, extra: Partia
     payments: [],
     creditNotes: [],
     refunds: [],
+    emails: [],
+    alerts: [],
     ...extra,
   };
 }

@@ -2,6 +2,7 @@ import { Dimensions, Linking } from "react-native";
 import { act, fireEvent, screen, waitFor, within } from "expo-router/testing-library";
 import { BOOKKEEPER, BUYER, OWNER, account, apiError, mockApi, renderApp, sessionRoutes, signedInAs, waitForGone, type FakeRequest } from "./helpers";
 import { invoiceDetail, invoiceDto } from "./billing-fixtures";
+import type { InvoiceListDto, InvoiceTotalsDto } from "../../components/api/invoices";
 
 const original = Dimensions.get("window");
 function setWidth(width: number) {
@@ -15,7 +16,7 @@ const INVOICES = [
   invoiceDto({ id: 42, number: "HB-2025-00042", accountId: 12, accountName: "North Pier Coffee", kind: "statement", dueDate: "2025-11-20", overdue: true, totalCents: 12000, amountDueCents: 12000, periodStart: "2025-11-10", periodEnd: "2025-11-16" }),
   invoiceDto({ id: 43, number: "HB-2025-00043", status: "paid", paidCents: 5873, amountDueCents: 0 }),
 ];
-const TOTALS = { count: 3, totalCents: 23746, dueCents: 17873, paidCents: 5873 };
+const TOTALS = { count: 3, totalCents: 23746, dueCents: 17873, paidCents: 5873 } satisfies InvoiceTotalsDto;
 
 function listRoute(req: FakeRequest) {
   // The server filters; the fake only needs to answer something that follows the filter.
@@ -25,7 +26,7 @@ function listRoute(req: FakeRequest) {
   if (req.query.accountId) rows = rows.filter((i) => String(i.accountId) === req.query.accountId);
   if (req.query.q) rows = rows.filter((i) => i.number.includes(req.query.q) || i.accountName.includes(req.query.q));
   const totals = rows === INVOICES ? TOTALS : { count: rows.length, totalCents: rows.reduce((s, r) => s + r.totalCents, 0), dueCents: rows.reduce((s, r) => s + r.amountDueCents, 0), paidCents: rows.reduce((s, r) => s + r.paidCents, 0) };
-  return { body: { invoices: rows, totals } };
+  return { body: { invoices: rows, totals } satisfies InvoiceListDto };
 }
 
 const officeRoutes = (user: typeof OWNER) => ({

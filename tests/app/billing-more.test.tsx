@@ -1,18 +1,21 @@
 import { fireEvent, screen, waitFor } from "expo-router/testing-library";
 import { BOOKKEEPER, BUYER, OWNER, account, apiError, mockApi, renderApp, sessionRoutes, signedInAs } from "./helpers";
-import type { OutboxMailDto } from "../../components/api/outbox";
+import type { OutboxMailDto, ResendResultDto } from "../../components/api/outbox";
+import type { CalendarFeedDto } from "../../shared/contracts/feed";
+import type { TaxCertificateDto } from "../../components/api/accountBilling";
+import type { BillingSettingsDto } from "../../components/api/billingSettings";
 
 const MAILS: OutboxMailDto[] = [
-  { id: 7, kind: "invoice", to: "accounts@northpier.test", subject: "Invoice HB-2025-00042 from Hollowbrook Bakehouse", status: "failed", attempts: 12, lastError: "connect ECONNREFUSED 127.0.0.1:1", nextAttemptAt: null, sentAt: null, createdAt: "2025-12-01T10:00:00.000Z", messageId: "<invoice.1@panwise>" },
-  { id: 8, kind: "receipt", to: "accounts@tidewater.test", subject: "Receipt for HB-2025-00041", status: "sent", attempts: 1, lastError: null, nextAttemptAt: null, sentAt: "2025-12-02T10:00:00.000Z", createdAt: "2025-12-02T10:00:00.000Z", messageId: "<receipt.2@panwise>" },
+  { id: 7, kind: "invoice", to: "accounts@northpier.test", subject: "Invoice HB-2025-00042 from Hollowbrook Bakehouse", status: "failed", attempts: 12, lastError: "connect ECONNREFUSED 127.0.0.1:1", nextAttemptAt: "2025-12-01T10:00:00.000Z", sentAt: null, createdAt: "2025-12-01T10:00:00.000Z", messageId: "<invoice.1@panwise>" },
+  { id: 8, kind: "receipt", to: "accounts@tidewater.test", subject: "Receipt for HB-2025-00041", status: "sent", attempts: 1, lastError: null, nextAttemptAt: "2025-12-02T10:00:00.000Z", sentAt: "2025-12-02T10:00:00.000Z", createdAt: "2025-12-02T10:00:00.000Z", messageId: "<receipt.2@panwise>" },
 ];
 
-const CERT = (o: Partial<{ id: number; status: "pending" | "approved" | "rejected"; expiresOn: string; expired: boolean }> = {}) => ({ id: 3, status: "approved" as const, expiresOn: "2025-11-30", expired: true, contentType: "application/pdf", createdAt: "2024-12-01T10:00:00.000Z", ...o });
+const CERT = (o: Partial<TaxCertificateDto> = {}): TaxCertificateDto => ({ id: 3, status: "approved", expiresOn: "2025-11-30", expired: true, contentType: "application/pdf", sizeBytes: 48213, createdAt: "2024-12-01T10:00:00.000Z", ...o });
 
 describe("outgoing e-mail (owner)", () => {
   it("shows statuses and the last error, and sends a failed mail again", async () => {
     signedInAs(OWNER);
-    const api = mockApi({ ...sessionRoutes(OWNER), "GET /api/outbox": { body: { mails: MAILS } }, "POST /api/outbox/:id/resend": { status: 202, body: { queued: true } } });
+    const api = mockApi({ ...sessionRoutes(OWNER), "GET /api/outbox": { body: { mails: MAILS } }, "POST /api/outbox/:id/resend": { status: 202, body: { queued: true } satisfies ResendResultDto } });
     renderApp("/office/money/outbox");
     expect(await screen.findByTestId("outbox-status-7")).toHaveTextContent("Failed");
     expect(screen.getByTestId("outbox-error-7")).toHaveTextContent("Last error: connect ECONNREFUSED 127.0.0.1:1");
@@ -59,7 +62,7 @@ describe("billing settings", () => {
     signedInAs(OWNER);
     const api = mockApi({
       ...sessionRoutes(OWNER),
-      "GET /api/settings/billing": { body: { settings: { salesTaxRateBp: 875, invoicePrefix: "HB", creditHoldDays: 14, paymentInstructions: "Transfer to account 0001." } } },
+      "GET /api/settings/billing": { body: { settings: { salesTaxRateBp: 875, invoicePrefix: "HB", creditHoldDays: 14, paymentInstructions: "Transfer to account 0001." } satisfies BillingSettingsDto } },
       "PUT /api/settings/billing": (req) => ({ body: { settings: req.body } }),
     });
     renderApp("/office/money/settings");
@@ -78,7 +81,7 @@ describe("billing settings", () => {
 
   it("is read-only for the bookkeeper", async () => {
     signedInAs(BOOKKEEPER);
-    mockApi({ ...sessionRoutes(BOOKKEEPER), "GET /api/settings/billing": { body: { settings: { salesTaxRateBp: 875, invoicePrefix: "HB", creditHoldDays: 14, paymentInstructions: "" } } } });
+    mockApi({ ...sessionRoutes(BOOKKEEPER), "GET /api/settings/billing": { body: { settings: { salesTaxRateBp: 875, invoicePrefix: "HB", creditHoldDays: 14, paymentInstructions: "" } satisfies BillingSettingsDto } } });
     renderApp("/office/money/settings");
     expect(await screen.findByTestId("billing-settings-readonly")).toHaveTextContent(/8\.75 %.*HB.*14 days overdue/);
     expect(screen.queryByTestId("settings-save")).toBeNull();
@@ -106,7 +109,7 @@ describe("tax-exemption certificates", () => {
       "GET /api/accounts/:id": { body: { account: account() } },
       "GET /api/accounts/:id/delivery": { body: { delivery: { routeWeekdays: null, minimumOrderCents: 0, priceListId: null } } },
       "GET /api/accounts/:id/certificates": { body: { certificates: [CERT()] } },
-      "GET /api/calendar-feed": { body: { url: null } },
+      "GET /api/calendar-feed": { body: { url: null } satisfies CalendarFeedDto },
     });
     renderApp("/buyer/account");
     expect(await screen.findByTestId("cert-expired-warning")).toHaveTextContent(/expired on Nov 30, 2025: tax is charged again until a new one is approved/);

@@ -2,6 +2,7 @@ import { Dimensions } from "react-native";
 import { fireEvent, screen, within } from "expo-router/testing-library";
 import { BOOKKEEPER, OWNER, apiError, mockApi, renderApp, sessionRoutes, signedInAs, type FakeRequest } from "./helpers";
 import { payoutDetail } from "./billing-fixtures";
+import type { PayoutDto } from "../../components/api/payouts";
 
 const original = Dimensions.get("window");
 function setWidth(width: number) {
@@ -10,7 +11,7 @@ function setWidth(width: number) {
 }
 afterEach(() => Dimensions.set({ window: original, screen: original }));
 
-const PAYOUTS = [
+const PAYOUTS: PayoutDto[] = [
   { id: "po_fake_1", amountCents: 11058, currency: "usd", status: "paid", arrivalDate: "2025-12-04", created: "2025-12-02T10:00:00.000Z", reconciledAt: null, reconciledById: null },
   { id: "po_fake_0", amountCents: 5385, currency: "usd", status: "paid", arrivalDate: "2025-11-27", created: "2025-11-25T10:00:00.000Z", reconciledAt: "2025-11-28T15:00:00.000Z", reconciledById: 1 },
 ];

@@ -2,6 +2,7 @@ import { Dimensions } from "react-native";
 import { fireEvent, screen, waitFor } from "expo-router/testing-library";
 import { BAKER, BOOKKEEPER, OWNER, mockApi, renderApp, sessionRoutes, signedInAs } from "./helpers";
 import type { BoardDto } from "../../components/api/board";
+import type { MaterialiseResult } from "../../components/api/standing";
 
 const BOARD: BoardDto = {
   date: "2025-12-02",
@@ -64,7 +65,7 @@ describe("orders board", () => {
 
   it("makes standing orders now (owner) and reports what it did", async () => {
     signedInAs(OWNER);
-    const api = mockApi({ ...routes(OWNER), "POST /api/standing-orders/materialise": { body: { result: { created: 3, updated: 1, cancelled: 0 } } } });
+    const api = mockApi({ ...routes(OWNER), "POST /api/standing-orders/materialise": { body: { result: { created: 3, updated: 1, cancelled: 0 } satisfies MaterialiseResult } } });
     renderApp("/office/orders");
     fireEvent.press(await screen.findByTestId("materialise"));
     expect(await screen.findByTestId("materialise-result")).toHaveTextContent(/3 new, 1 updated, 0 canceled/);

@@ -21,6 +21,14 @@ describe("api client", () => {
     expect(splitError(err, ["businessName", "lines.0"]).formError).toBeNull();
   });
 
+  it("keeps the server's request id (error.requestId) for a person to quote", async () => {
+    mockApi({ "GET /api/orders": { status: 500, body: { error: { code: "internal_error", message: "Something went wrong on our side. Please try again.", requestId: "4f9c2d1e-7a3b-4c5d-9e8f-0a1b2c3d4e5f" } } } });
+    const err = await api("/api/orders").catch((e: unknown) => e);
+    expect(err).toMatchObject({ status: 500, code: "internal_error", requestId: "4f9c2d1e-7a3b-4c5d-9e8f-0a1b2c3d4e5f" });
+    mockApi({ "GET /api/orders": apiError(404, "not_found", "That was not found.") });
+    expect(((await api("/api/orders").catch((e: unknown) => e)) as ApiError).requestId).toBeUndefined();
+  });
+
   it("reports a failed connection as network_error", async () => {
     (globalThis as { fetch?: unknown }).fetch = jest.fn(async () => {
       throw new TypeError("Failed to fetch");

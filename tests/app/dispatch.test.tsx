@@ -1,6 +1,7 @@
 import { fireEvent, screen } from "expo-router/testing-library";
 import { BOOKKEEPER, OWNER, apiError, mockApi, renderApp, sessionRoutes, signedInAs, type FakeRequest } from "./helpers";
 import type { BoardDto } from "../../components/api/board";
+import type { DispatchResult } from "../../components/api/dispatch";
 
 const BOARD: BoardDto = {
   date: "2025-12-02",
@@ -25,7 +26,7 @@ describe("confirm dispatch", () => {
       "GET /api/orders/board": () => ({ body: { board: confirmed ? { ...BOARD, rows: BOARD.rows.map((r) => ({ ...r, status: "delivered" })) } : BOARD } }),
       "POST /api/deliveries/:date/confirm": () => {
         confirmed = true;
-        return { body: { result: { delivered: 2, invoices: ["HB-2025-00060"] } } };
+        return { body: { result: { delivered: 2, invoices: ["HB-2025-00060"] } satisfies DispatchResult } };
       },
     });
     renderApp("/office/orders?date=2025-12-02");

@@ -3,6 +3,7 @@ import { BAKER, OWNER, PRODUCTS, apiError, mockApi, product, renderApp, sessionR
 import { HISTORY, INGREDIENTS, formulaDto } from "./production-fixtures";
 import { emptyFormula, ingredientMap, liveFigures, liveProblems, valuesOf } from "../../components/production/formulaForm";
 import type { FormulaDto } from "../../shared/schemas/production";
+import type { FormulaVersionDto } from "../../components/api/formulas";
 
 const V1 = formulaDto({ version: 1, lines: formulaDto().lines.map((l) => (l.ingredientId === 2 ? { ...l, percent: 55 } : l)) });
 
@@ -212,7 +213,7 @@ describe("formulas", () => {
     const api = mockApi(routes(BAKER, {
       "POST /api/formulas": { status: 201, body: { formula: formulaDto({ id: 5, name: "Potato milk bread", version: 1 }) } },
       "GET /api/formulas/:id": { body: { formula: formulaDto({ id: 5, name: "Potato milk bread", version: 1 }) } },
-      "GET /api/formulas/:id/history": { body: { versions: [{ version: 1, note: "", createdAt: "2025-12-02T10:00:00.000Z" }] } },
+      "GET /api/formulas/:id/history": { body: { versions: [{ version: 1, note: "", editedById: 1, createdAt: "2025-12-02T10:00:00.000Z" }] satisfies FormulaVersionDto[] } },
     }));
     const app = renderApp("/bake/formulas/new");
     fireEvent.press(await screen.findByTestId("formula-save"));

@@ -1,7 +1,7 @@
 import { act, fireEvent, screen, waitFor } from "expo-router/testing-library";
 import { BUYER, apiError, buyerOrderingRoutes, calendarDay, mockApi, orderDto, renderApp, signedInAs } from "./helpers";
 import { ApiError, api, retryAfterMs } from "../../components/api/client";
-import { clearDraft, readDraft, writeDraft } from "../../components/ordering/draft";
+import { clearDraft, readDraft, writeDraft } from "../../components/ordering/deviceDraft";
 
 beforeEach(() => signedInAs(BUYER));
 

@@ -257,8 +257,8 @@ export function formulaDto(overrides: Partial<FormulaDto> = {}): FormulaDto {
 }
 
 export const HISTORY: FormulaVersionDto[] = [
-  { version: 2, note: "More milk", createdAt: "2025-12-01T15:00:00.000Z" },
-  { version: 1, note: "First written", createdAt: "2025-11-20T15:00:00.000Z" },
+  { version: 2, note: "More milk", editedById: 1, createdAt: "2025-12-01T15:00:00.000Z" },
+  { version: 1, note: "First written", editedById: null, createdAt: "2025-11-20T15:00:00.000Z" },
 ];
 
 export const FORECAST: ForecastDto = {

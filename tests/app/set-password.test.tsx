@@ -2,6 +2,7 @@ import { fireEvent, screen } from "expo-router/testing-library";
 import { BUYER, account, apiError, mockApi, renderApp, sessionRoutes, waitForLabelGone } from "./helpers";
 import { readSession } from "../../components/auth/storage";
 import { PASSWORD_COMMON, PASSWORD_PATTERN } from "../../shared/schemas/common";
+import type { InvitationPreview } from "../../components/api/auth";
 
 const TOKEN = "tok_abcdefghijklmnop";
 
@@ -81,7 +82,7 @@ describe("set-password: invitation", () => {
   it("shows who the invitation is for, then creates the sign-in", async () => {
     const api = mockApi({
       ...sessionRoutes(BUYER),
-      [`GET /api/auth/invitations/${TOKEN}`]: { body: { email: "buyer@tidewater.test", role: "buyer", name: "Marisol" } },
+      [`GET /api/auth/invitations/${TOKEN}`]: { body: { email: "buyer@tidewater.test", role: "buyer", name: "Marisol" } satisfies InvitationPreview },
       "POST /api/auth/invitations/accept": { body: { token: "tok-new", user: BUYER } },
       "GET /api/accounts/:id": { body: { account: account() } },
     });
@@ -109,7 +110,7 @@ describe("set-password: invitation", () => {
   });
 
   it("asks for a name", async () => {
-    mockApi({ [`GET /api/auth/invitations/${TOKEN}`]: { body: { email: "new@hollowbrook.test", role: "baker", name: null } } });
+    mockApi({ [`GET /api/auth/invitations/${TOKEN}`]: { body: { email: "new@hollowbrook.test", role: "baker", name: null } satisfies InvitationPreview } });
     renderApp(`/set-password?kind=invite&token=${TOKEN}`);
     fireEvent.changeText(await screen.findByLabelText("New password"), "croissant-dough-42");
     fireEvent.changeText(screen.getByLabelText("Confirm new password"), "croissant-dough-42");

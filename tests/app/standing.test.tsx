@@ -1,6 +1,6 @@
 import { fireEvent, screen, waitFor } from "expo-router/testing-library";
 import { BUYER, PRODUCTS, SETTINGS, account, apiError, mockApi, renderApp, sessionRoutes, signedInAs, standingDto } from "./helpers";
-import { standingPayload } from "../../components/screens/buyer/StandingOrderScreen";
+import { standingPayload } from "../../components/ordering/standing";
 import type { StandingOrderDto } from "../../shared/schemas/orders";
 
 function routes(standing: StandingOrderDto | null, extra = {}) {
@@ -73,6 +73,39 @@ describe("standing order grid", () => {
     fireEvent.press(await screen.findByTestId("standing-cell-102-2-inc"));
     fireEvent.press(screen.getByTestId("standing-save"));
     expect(await screen.findByTestId("standing-product-102-error")).toHaveTextContent("Tuesday: There is no delivery to you on this weekday.");
+  });
+
+  it("puts the server's date errors beside the start date and the skip field, and checks a typed skip date", async () => {
+    mockApi(
+      routes(standingDto(), {
+        "PUT /api/standing-orders": apiError(400, "validation_failed", "Check the dates.", { startDate: "Choose a date from tomorrow on.", "skipDates.0": "Use a date within the next two years." }),
+      }),
+    );
+    renderApp("/buyer/standing");
+    fireEvent.changeText(await screen.findByTestId("standing-skip-date"), "25/12/2025");
+    fireEvent.press(screen.getByTestId("standing-skip-add"));
+    expect(screen.getByTestId("standing-skip-date-error")).toHaveTextContent("Write the date as YYYY-MM-DD, e.g. 2025-12-25.");
+    fireEvent.changeText(screen.getByTestId("standing-skip-date"), "2025-12-02");
+    fireEvent.press(screen.getByTestId("standing-skip-add"));
+    expect(screen.getByTestId("standing-skip-date-error")).toHaveTextContent("Choose a date after today.");
+    fireEvent.changeText(screen.getByTestId("standing-skip-date"), "2027-12-01");
+    expect(screen.queryByTestId("standing-skip-date-error")).toBeNull();
+    fireEvent.press(screen.getByTestId("standing-skip-add"));
+    fireEvent.press(screen.getByTestId("standing-save"));
+    expect(await screen.findByTestId("standing-start-error")).toHaveTextContent("Choose a date from tomorrow on.");
+    expect(screen.getByTestId("standing-skip-date-error")).toHaveTextContent("Use a date within the next two years.");
+    // Both have a place beside their inputs: nothing on top.
+    expect(screen.queryByTestId("standing-error-message")).toBeNull();
+  });
+
+  it("hides the saved message again as soon as something changes", async () => {
+    mockApi(routes(standingDto(), { "PUT /api/standing-orders": (req: { body: unknown }) => ({ body: { standingOrder: { ...standingDto(), ...(req.body as object) } } }) }));
+    renderApp("/buyer/standing");
+    fireEvent.press(await screen.findByTestId("standing-active-off"));
+    fireEvent.press(screen.getByTestId("standing-save"));
+    expect(await screen.findByTestId("standing-saved")).toHaveTextContent(/Saved\. Your standing order is paused: no new orders are made from it\./);
+    fireEvent.press(screen.getByTestId("standing-cell-101-3-inc"));
+    expect(screen.queryByTestId("standing-saved")).toBeNull();
   });
 
   it("checks quantities against the product's limits before sending", async () => {

@@ -81,3 +81,48 @@ test("toInput turns text inputs into what the schema parses", async () => {
   expect(result.current.errors.creditHoldDays).toBe("At least 1 day.");
   expect(result.current.formError).toBeNull();
 });
+
+test("a check's message for a field the form does not show goes to the top", async () => {
+  const schema = z.object({ token: z.string().min(1, "This link is missing its code."), password: z.string().min(3, "Too short.") });
+  const { result } = renderHook(() => useZodForm({ schema, initial: { password: "" }, toInput: (v) => ({ ...v, token: "" }), fields: ["password"], manyMessage: null }));
+  await act(async () => {
+    await result.current.submit(jest.fn());
+  });
+  expect(result.current.errors.password).toBe("Too short.");
+  expect(result.current.formError).toBe("This link is missing its code.");
+});
+
+test("fields may be a test: rows of a list keep their server errors beside them", async () => {
+  const schema = z.object({ lines: z.array(z.object({ quantity: z.string() })) });
+  const { result } = renderHook(() => useZodForm({ schema, initial: { lines: [{ quantity: "1" }] }, fields: (name) => name === "lines" || name.startsWith("lines.") }));
+  const err = new ApiError(400, "validation_failed", "Check the highlighted fields.", { "lines.0.quantity": "At least 1." });
+  await act(async () => {
+    await result.current.submit(async () => {
+      throw err;
+    });
+  });
+  expect(result.current.errors).toEqual({ "lines.0.quantity": "At least 1." });
+  expect(result.current.formError).toBeNull();
+});
+
+test("errorMessage words a rejected request's top message; setErrors and a reset keeping saved", async () => {
+  const schema = z.object({ role: z.string() });
+  const { result } = renderHook(() => useZodForm({ schema, initial: { role: "owner" }, errorMessage: (e) => (e instanceof ApiError && e.code === "last_owner" ? "Make someone else an owner first." : "Other.") }));
+  await act(async () => {
+    await result.current.submit(async () => {
+      throw new ApiError(409, "last_owner", "");
+    });
+  });
+  expect(result.current.formError).toBe("Make someone else an owner first.");
+  act(() => result.current.setErrors({ role: "Choose a role." }));
+  expect(result.current.errors.role).toBe("Choose a role.");
+  await act(async () => {
+    await result.current.submit(async () => undefined);
+  });
+  expect(result.current.saved).toBe(true);
+  act(() => result.current.reset({ role: "baker" }, { keepSaved: true }));
+  expect(result.current.saved).toBe(true);
+  expect(result.current.dirty).toBe(false);
+  act(() => result.current.reset({ role: "owner" }));
+  expect(result.current.saved).toBe(false);
+});

@@ -101,7 +101,7 @@ describe("malformed percent-encoding in a path", () => {
     logLines.length = 0;
     const res = await request(app).get(url).set(auth(owner));
     expect(res.status).toBe(400);
-    expect(res.body).toEqual({ error: { code: "bad_request", message: "The address contains a malformed percent-encoding (such as a lone %)." } });
+    expect(res.body).toEqual({ error: { code: "bad_request", message: "The address contains a malformed percent-encoding (such as a lone %).", requestId: res.headers["x-request-id"] } });
     expect(JSON.stringify(res.body)).not.toMatch(/URIError|at .*\.(ts|js):\d+/);
     expect(logLines.length).toBeGreaterThan(0); // the request was logged …
     expect(logLines.filter((l) => l.level >= 50)).toEqual([]); // … but not at error (50) or fatal (60)

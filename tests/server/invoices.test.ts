@@ -1,8 +1,10 @@
 import { startTestApp, makeAccount, makeBakery, makeProduct, makeUser, tokenFor, waitForMail, auth, type TestApp } from "./helpers/app";
 import { Order, OrderLine } from "../../server/orders/order.entity";
-import { Invoice } from "../../server/billing/billing.entity";
+import { Invoice } from "../../server/billing/invoice.entity";
 import { CustomerAccount } from "../../server/accounts/account.entity";
-import { allocateNumber, applyCreditHolds, autoDeliver, issueStatements } from "../../server/billing/invoices.service";
+import { applyCreditHolds, issueStatements } from "../../server/billing/invoices.service";
+import { allocateNumber } from "../../server/billing/ledger.service";
+import { autoDeliver } from "../../server/billing/dispatch.service";
 import { createDataSource } from "../../server/db/data-source";
 import { loadConfig } from "../../server/config";
 import { taxCents, invoiceTotals, agingBucket } from "../../shared/billing";
@@ -157,7 +159,7 @@ describe("issuing statements by hand (issue 8 item 12)", () => {
     expect(statuses.filter((s) => s !== 200 && s !== 409)).toEqual([]);
     expect(statuses.filter((s) => s === 200).length).toBeGreaterThanOrEqual(1);
     for (const r of answers.filter((x) => x.status === 409)) {
-      expect(r.body.error).toEqual({ code: "already_running", message: "Statements are already being issued; try again in a minute." });
+      expect(r.body.error).toEqual({ code: "already_running", message: "Statements are already being issued; try again in a minute.", requestId: expect.any(String) });
     }
     // Every account got exactly one statement, whichever request issued it.
     for (const a of accounts) expect(await t.ds.getRepository(Invoice).countBy({ accountId: a.id })).toBe(1);

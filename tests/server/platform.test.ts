@@ -17,7 +17,7 @@ describe("API conventions", () => {
   it("unknown API routes get a 404 in the one error shape", async () => {
     const res = await t.http().get("/api/no-such-thing");
     expect(res.status).toBe(404);
-    expect(res.body).toEqual({ error: { code: "route_not_found", message: expect.stringContaining("/api/no-such-thing") } });
+    expect(res.body).toEqual({ error: { code: "route_not_found", message: expect.stringContaining("/api/no-such-thing"), requestId: expect.any(String) } });
   });
 
   it("malformed JSON is a 400, a huge body a 413, never a stack trace", async () => {

@@ -5,6 +5,7 @@ import { seedDemo } from "../../server/seed/demo";
 import { computePlan } from "../../server/production/plan.service";
 import { renderPlanPdf } from "../../server/production/plan.pdf";
 import { renderInvoicePdf } from "../../server/billing/invoice.pdf";
+import { pdfText } from "../../server/pdf/fonts";
 import { Product } from "../../server/catalog/product.entity";
 import { Formula } from "../../server/production/production.entity";
 import { User } from "../../server/users/user.entity";
@@ -46,7 +47,7 @@ beforeAll(async () => {
   t = await startTestApp({ now: NOW });
   await seedDemo(t.ds);
   for (const d of DATES) plans[d] = await computePlan(t.ctx, d, { includeStanding: true });
-});
+}, 60_000); // the whole demo seeded and three plans computed: seconds on a busy machine
 afterAll(() => t.close());
 
 const render = (plan: PlanDto, units: "metric" | "us", bakeryName = "Hollowbrook Bakehouse") => renderPlanPdf({ ...plan, bakeryName, timeZone: "America/Chicago" }, units);
@@ -119,7 +120,8 @@ describe("production PDFs fit the page (checked on the extracted text positions)
   });
 
   it("a day with long product, formula and bakery names still fits in both unit systems", async () => {
-    // With characters the built-in Helvetica (WinAnsi) does not have: "−" (U+2212) and "→" were drawn wider than measured.
+    // With characters outside WinAnsi, which the built-in Helvetica drew wider than measured: "−" (U+2212) and "→"
+    // (Nunito has no arrow: written "->").
     const long = "Extraordinarily-long-named sesame-and-black-onion-seed brioche burger buns − harbourside group → 8 per pack ≥ 90 g";
     const longFormula = "Milk bread (Hokkaido style, tangzhong), the bakery's house recipe for every soft roll, bun and sandwich loaf";
     await t.ds.getRepository(Product).update({ name: "Sesame brioche buns" }, { name: long.slice(0, 120) });
@@ -160,5 +162,41 @@ describe("production PDFs fit the page (checked on the extracted text positions)
     expect(res.status).toBe(200);
     expect(res.headers["content-type"]).toMatch(/application\/pdf/);
     expect(overflows(extract(res.body as Buffer))).toEqual([]);
+  });
+});
+
+describe("the PDFs are set in the app's Nunito (server/pdf/fonts.ts)", () => {
+  /** The fonts a PDF names (/BaseFont), subset prefixes ("ABCDEF+") dropped. */
+  const baseFonts = (pdf: Buffer) => [...new Set([...pdf.toString("latin1").matchAll(/\/BaseFont\s*\/(?:[A-Z]{6}\+)?([A-Za-z0-9-]+)/g)].map((m) => m[1]))].sort();
+
+  it("a plan prints \"Łódź\" and \"≤\" exactly, and embeds Nunito only", async () => {
+    const before = await computePlan(t.ctx, "2026-12-05", { includeStanding: true });
+    await t.ds.getRepository(Product).update({ id: before.products[0].productId }, { name: "Łódź rye rolls ≤ 90 g" });
+    const plan = await computePlan(t.ctx, "2026-12-05", { includeStanding: true });
+    const pdf = await render(plan, "metric", "Piekarnia Łódź");
+    const pages = extract(pdf);
+    const items = pages.flatMap((p) => p.items.map((i) => i.str));
+    expect(items).toContain("Łódź rye rolls ≤ 90 g");
+    expect(items).toContain("PIEKARNIA ŁÓDŹ");
+    expect(overflows(pages)).toEqual([]);
+    expect(baseFonts(pdf)).toEqual(["Nunito-Bold", "Nunito-Regular"]);
+  });
+
+  it("an invoice prints them too, with money and dates from shared/format.ts", async () => {
+    const detail = {
+      invoice: { number: "HB-2026-000124", kind: "invoice", issueDate: "2026-12-01", dueDate: "2026-12-31", periodStart: null, periodEnd: null, currency: "USD", subtotalCents: 180000, taxExempt: false, taxRateBp: 875, taxCents: 15750, totalCents: 195750, paidCents: 0, refundedCents: 0, amountDueCents: 195750 },
+      lines: [{ deliveryDate: "2026-11-30", description: "Łódź rye rolls ≤ 90 g, tray of 15", quantity: 1000, unitPriceCents: 180, amountCents: 180000 }],
+      creditNotes: [],
+    };
+    const bakery = { name: "Piekarnia Łódź", address: "ul. Piotrkowska 1, Łódź", phone: "", email: "hi@lodz.test", paymentInstructions: "", locale: "en-US", timeZone: "America/Chicago" };
+    const account = { businessName: "Café Źródło", deliveryAddress: "2 Żeromskiego St", billingEmail: "ap@zrodlo.test", paymentTerms: "net30" };
+    const pdf = await renderInvoicePdf({ ...detail, bakery, account } as unknown as Parameters<typeof renderInvoicePdf>[0]);
+    const items = extract(pdf).flatMap((p) => p.items.map((i) => i.str));
+    for (const s of ["Piekarnia Łódź", "ul. Piotrkowska 1, Łódź", "Café Źródło", "Łódź rye rolls ≤ 90 g, tray of 15", "1,000", "$1.80", "$1,957.50", "Issued: Dec 1, 2026", "Due: Dec 31, 2026"]) expect(items).toContain(s);
+    expect(baseFonts(pdf)).toEqual(["Nunito-Bold", "Nunito-Regular"]);
+  });
+
+  it("writes the two characters Nunito lacks with ones it has", () => {
+    expect(pdfText("6:00\u202FAM → oven ≤ 230 °C − 5")).toBe("6:00\u00A0AM -> oven ≤ 230 °C − 5");
   });
 });

@@ -1,7 +1,10 @@
 import Stripe from "stripe";
 import { startCardBilling, payOnHostedPage, type CardBilling } from "./helpers/card-billing";
 import { auth, type TestApp } from "./helpers/app";
-import { CheckoutSessionRecord, Invoice, Payment, Refund } from "../../server/billing/billing.entity";
+import { CheckoutSessionRecord } from "../../server/billing/checkout-session.entity";
+import { Invoice } from "../../server/billing/invoice.entity";
+import { Payment } from "../../server/billing/payment.entity";
+import { Refund } from "../../server/billing/refund.entity";
 
 /**
  * Issue 8 item 3: one invoice must never be payable twice. An open hosted payment page is expired at

@@ -1,7 +1,8 @@
 import Stripe from "stripe";
 import { startCardBilling, payOnHostedPage, waitPaid, type CardBilling } from "./helpers/card-billing";
 import { auth, type TestApp } from "./helpers/app";
-import { Invoice, Payment } from "../../server/billing/billing.entity";
+import { Invoice } from "../../server/billing/invoice.entity";
+import { Payment } from "../../server/billing/payment.entity";
 
 /**
  * Issue 8 items 2 and 12: a webhook signed with the right secret is still only a claim. Every payment

@@ -1,6 +1,12 @@
 import React from "react";
-import { MoreScreen } from "../../../components/screens/office/MoreScreen";
+import { MoreScreen } from "@/components/screens/office/MoreScreen";
+import { ScreenTitle } from "@/components/ui/ScreenTitle";
 
 export default function BakerMoreRoute() {
-  return <MoreScreen area="baker" />;
+  return (
+    <>
+      <ScreenTitle title="More" />
+      <MoreScreen area="baker" />
+    </>
+  );
 }

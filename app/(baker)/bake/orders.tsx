@@ -1,9 +1,15 @@
 import React from "react";
 import { useLocalSearchParams } from "expo-router";
-import { OrdersBoardScreen } from "../../../components/screens/board/OrdersBoardScreen";
-import { firstParam } from "../../../components/routing";
+import { OrdersBoardScreen } from "@/components/screens/board/OrdersBoardScreen";
+import { firstParam } from "@/components/routing";
+import { ScreenTitle } from "@/components/ui/ScreenTitle";
 
 export default function BakerOrdersRoute() {
   const { date } = useLocalSearchParams<{ date?: string }>();
-  return <OrdersBoardScreen mode="baker" date={firstParam(date)} />;
+  return (
+    <>
+      <ScreenTitle title="Orders" />
+      <OrdersBoardScreen mode="baker" date={firstParam(date)} />
+    </>
+  );
 }

@@ -1,3 +1,12 @@
-import { BuyerHome } from "../../../components/screens/buyer/BuyerHome";
+import React from "react";
+import { BuyerHome } from "@/components/screens/buyer/BuyerHome";
+import { ScreenTitle } from "@/components/ui/ScreenTitle";
 
-export default BuyerHome;
+export default function BuyerHomeRoute() {
+  return (
+    <>
+      <ScreenTitle title="Home" />
+      <BuyerHome />
+    </>
+  );
+}

@@ -1,3 +1,12 @@
-import { ProfileScreen } from "../../../components/screens/common/ProfileScreen";
+import React from "react";
+import { ProfileScreen } from "@/components/screens/common/ProfileScreen";
+import { ScreenTitle } from "@/components/ui/ScreenTitle";
 
-export default ProfileScreen;
+export default function BuyerProfileRoute() {
+  return (
+    <>
+      <ScreenTitle title="Profile" />
+      <ProfileScreen />
+    </>
+  );
+}

@@ -1,3 +1,12 @@
-import { OrderHistoryScreen } from "../../../components/screens/buyer/OrderHistoryScreen";
+import React from "react";
+import { OrderHistoryScreen } from "@/components/screens/buyer/OrderHistoryScreen";
+import { ScreenTitle } from "@/components/ui/ScreenTitle";
 
-export default OrderHistoryScreen;
+export default function OrderHistoryRoute() {
+  return (
+    <>
+      <ScreenTitle title="Orders" />
+      <OrderHistoryScreen />
+    </>
+  );
+}

@@ -1,3 +1,12 @@
-import { StandingOrderScreen } from "../../../components/screens/buyer/StandingOrderScreen";
+import React from "react";
+import { StandingOrderScreen } from "@/components/screens/buyer/StandingOrderScreen";
+import { ScreenTitle } from "@/components/ui/ScreenTitle";
 
-export default StandingOrderScreen;
+export default function StandingOrderRoute() {
+  return (
+    <>
+      <ScreenTitle title="Standing order" />
+      <StandingOrderScreen />
+    </>
+  );
+}

@@ -1,11 +1,15 @@
 import React from "react";
-import { RequireRole } from "../../../components/auth/RoleGate";
-import { CalendarSettingsScreen } from "../../../components/screens/settings/CalendarSettingsScreen";
+import { RequireRole } from "@/components/auth/RoleGate";
+import { CalendarSettingsScreen } from "@/components/screens/settings/CalendarSettingsScreen";
+import { ScreenTitle } from "@/components/ui/ScreenTitle";
 
 export default function CalendarSettingsRoute() {
   return (
-    <RequireRole roles={["owner"]}>
-      <CalendarSettingsScreen />
-    </RequireRole>
+    <>
+      <ScreenTitle title="Delivery days" />
+      <RequireRole roles={["owner"]}>
+        <CalendarSettingsScreen />
+      </RequireRole>
+    </>
   );
 }

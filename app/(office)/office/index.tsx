@@ -1,3 +1,12 @@
-import { OfficeHome } from "../../../components/screens/office/OfficeHome";
+import React from "react";
+import { OfficeHome } from "@/components/screens/office/OfficeHome";
+import { ScreenTitle } from "@/components/ui/ScreenTitle";
 
-export default OfficeHome;
+export default function OfficeHomeRoute() {
+  return (
+    <>
+      <ScreenTitle title="Office" />
+      <OfficeHome />
+    </>
+  );
+}

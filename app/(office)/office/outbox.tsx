@@ -1,11 +1,15 @@
 import React from "react";
-import { RequireRole } from "../../../components/auth/RoleGate";
-import { OutboxScreen } from "../../../components/screens/billing/OutboxScreen";
+import { RequireRole } from "@/components/auth/RoleGate";
+import { OutboxScreen } from "@/components/screens/billing/OutboxScreen";
+import { ScreenTitle } from "@/components/ui/ScreenTitle";
 
 export default function OutboxRoute() {
   return (
-    <RequireRole roles={["owner"]}>
-      <OutboxScreen />
-    </RequireRole>
+    <>
+      <ScreenTitle title="Outgoing e-mail" />
+      <RequireRole roles={["owner"]}>
+        <OutboxScreen />
+      </RequireRole>
+    </>
   );
 }

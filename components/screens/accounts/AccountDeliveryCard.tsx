@@ -1,4 +1,4 @@
-import React, { useState } from "react";
+import React from "react";
 import { StyleSheet, View } from "react-native";
 import { Card } from "../../ui/Card";
 import { ChoiceGroup } from "../../ui/ChoiceGroup";
@@ -11,15 +11,13 @@ import { ErrorState, LoadingState } from "../../ui/States";
 import { useAccountDeliveryQuery, useSaveAccountDeliveryMutation, type AccountDeliveryDto } from "../../api/delivery";
 import { useCalendarSettingsQuery } from "../../api/calendar";
 import { usePriceListsQuery } from "../../api/priceLists";
-import { splitError, validate } from "../../forms/errors";
+import { useZodForm } from "../../forms/useZodForm";
+import { DELIVERY_FIELDS, deliveryInput, deliverySchema, deliveryValues } from "./deliveryForm";
 import { useMoney } from "../ordering/parts";
-import { describePriceList } from "../pricing/PriceListsScreen";
+import { describePriceList } from "../pricing/priceListForm";
 import { listWeekdays } from "../buyer/StandingOrderScreen";
 import { WEEKDAY_SHORT, type Weekday } from "../../../shared/calendar";
-import { accountDeliverySchema } from "../../../shared/schemas/calendar";
-import { parseMoney, toDecimal } from "../../../shared/money";
 import type { PriceListDto } from "../../../shared/schemas/catalog";
-import type { FieldErrors } from "../../../shared/errors";
 import { space } from "../../theme";
 
 /** An account's route days, minimum order and price list: the owner edits, the bookkeeper reads. */
@@ -58,72 +56,40 @@ function DeliveryFacts({ delivery, bakeryDays }: { delivery: AccountDeliveryDto;
 
 function DeliveryForm({ accountId, initial, bakeryDays, lists }: { accountId: number; initial: AccountDeliveryDto; bakeryDays: Weekday[]; lists: PriceListDto[] }) {
   const save = useSaveAccountDeliveryMutation(accountId);
-  const [everyDay, setEveryDay] = useState(initial.routeWeekdays === null);
-  const [days, setDays] = useState<Weekday[]>(initial.routeWeekdays ?? bakeryDays);
-  const [minimum, setMinimum] = useState(initial.minimumOrderCents ? toDecimal(initial.minimumOrderCents) : "");
-  const [priceListId, setPriceListId] = useState<string>(initial.priceListId ? String(initial.priceListId) : "none");
-  const [fields, setFields] = useState<FieldErrors>({});
-  const [formError, setFormError] = useState<string | null>(null);
-  const [done, setDone] = useState(false);
+  const form = useZodForm({ schema: deliverySchema, initial: () => deliveryValues(initial, bakeryDays), toInput: deliveryInput, fields: DELIVERY_FIELDS, manyMessage: null });
+  const { values, errors } = form;
 
-  const submit = () => {
-    setDone(false);
-    setFormError(null);
-    const cents = minimum.trim() === "" ? 0 : parseMoney(minimum);
-    if (cents === null) {
-      setFields({ minimumOrderCents: "Write it in dollars and cents, like 50.00 (empty for no minimum)." });
-      return;
-    }
-    const body = { routeWeekdays: everyDay ? null : days, minimumOrderCents: cents, priceListId: priceListId === "none" ? null : Number(priceListId) };
-    const checked = validate(accountDeliverySchema, body);
-    if (!checked.ok) {
-      setFields(checked.fields);
-      return;
-    }
-    if (!everyDay && days.length === 0) {
-      setFields({ routeWeekdays: "Choose at least one day, or deliver on every delivery day." });
-      return;
-    }
-    setFields({});
-    save.mutate(checked.data as AccountDeliveryDto, {
-      onSuccess: () => setDone(true),
-      onError: (err) => {
-        const split = splitError(err, ["routeWeekdays", "minimumOrderCents", "priceListId"]);
-        setFields(split.fields);
-        setFormError(split.formError);
-      },
-    });
-  };
+  const submit = () => void form.submit((input) => save.mutateAsync(input as AccountDeliveryDto));
 
   return (
     <View style={styles.form}>
-      <FormError message={formError} testID="delivery-form-error" />
+      <FormError message={form.formError} testID="delivery-form-error" />
       <ChoiceGroup<"all" | "some">
         label="Delivery days"
-        value={everyDay ? "all" : "some"}
-        onChange={(v) => setEveryDay(v === "all")}
+        value={values.everyDay ? "all" : "some"}
+        onChange={(v) => form.setValue("everyDay", v === "all")}
         testID="delivery-route"
         choices={[
           { value: "all", label: "Every delivery day" },
           { value: "some", label: "Only some days" },
         ]}
       />
-      {!everyDay ? (
+      {!values.everyDay ? (
         <MultiChoice<Weekday>
           label="Days on this account's route"
           options={bakeryDays.map((d) => ({ value: d, label: WEEKDAY_SHORT[d] }))}
-          value={days.filter((d) => bakeryDays.includes(d))}
-          onChange={setDays}
-          error={fields.routeWeekdays}
+          value={values.days.filter((d) => bakeryDays.includes(d))}
+          onChange={form.set("days")}
+          error={errors.routeWeekdays}
           testID="delivery-days"
         />
       ) : null}
       <TextField
         label="Minimum order"
         optional
-        value={minimum}
-        onChangeText={setMinimum}
-        error={fields.minimumOrderCents}
+        value={values.minimum}
+        onChangeText={form.set("minimum")}
+        error={errors.minimumOrderCents}
         placeholder="0.00"
         hint="In dollars per delivery. Empty for no minimum."
         inputMode="decimal"
@@ -133,14 +99,14 @@ function DeliveryForm({ accountId, initial, bakeryDays, lists }: { accountId: nu
       <ChoiceGroup<string>
         label="Prices"
         layout="list"
-        value={priceListId}
-        onChange={setPriceListId}
-        error={fields.priceListId}
+        value={values.priceListId}
+        onChange={form.set("priceListId")}
+        error={errors.priceListId}
         testID="delivery-price-list"
         choices={[{ value: "none", label: "List prices", hint: "The prices on the product list." }, ...lists.map((l) => ({ value: String(l.id), label: l.name, hint: describePriceList(l) }))]}
       />
-      {done ? <Notice message="Delivery terms saved." testID="delivery-saved" /> : null}
-      <Button label="Save delivery terms" icon="check" busy={save.isPending} onPress={submit} testID="delivery-save" />
+      {form.saved ? <Notice message="Delivery terms saved." testID="delivery-saved" /> : null}
+      <Button label="Save delivery terms" icon="check" busy={form.submitting} onPress={submit} testID="delivery-save" />
     </View>
   );
 }

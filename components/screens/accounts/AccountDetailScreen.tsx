@@ -1,24 +1,24 @@
-import React, { useState } from "react";
+import React from "react";
 import { StyleSheet, View } from "react-native";
 import { Screen } from "../../ui/Screen";
 import { PageHeader } from "../../ui/PageHeader";
 import { Card } from "../../ui/Card";
 import { DetailList } from "../../ui/DetailList";
-import { Button } from "../../ui/Button";
 import { LinkButton } from "../../ui/LinkButton";
 import { TextLink } from "../../ui/TextLink";
-import { FormError, Notice } from "../../ui/FormError";
-import { EmptyState, ErrorState, LoadingState } from "../../ui/States";
+import { EmptyState } from "../../ui/States";
+import { QueryStates } from "../../ui/QueryStates";
 import { StatusBadge } from "../../ui/Badge";
 import { AppText } from "../../ui/Text";
 import { useSignedInUser } from "../../auth/useAuth";
-import { useAccountQuery, useUpdateAccountMutation } from "../../api/accounts";
-import { ApiError, messageOf } from "../../api/client";
+import { useAccountQuery } from "../../api/accounts";
+import { ApiError } from "../../api/client";
 import { useBakeryTimeZone } from "../../api/bakery";
 import { formatDateTime } from "../../format";
 import { useIsWide } from "../../shell/useIsWide";
-import { ACCOUNT_STATUS_LABELS, type AccountDto, type AccountStatus } from "../../../shared/schemas/accounts";
-import { colors, radii, space } from "../../theme";
+import { type AccountDto } from "../../../shared/schemas/accounts";
+import { space } from "../../theme";
+import { AccountStatusCard } from "./AccountStatusCard";
 import { AccountDeliveryCard } from "./AccountDeliveryCard";
 import { CalendarFeedCard } from "../common/CalendarFeedCard";
 import { AccountBillingCard } from "../billing/AccountBillingCard";
@@ -40,25 +40,19 @@ export function AccountDetailScreen({ id }: { id: number }) {
       </Screen>
     );
   }
-  if (account.isPending) {
-    return (
-      <Screen testID="account-detail">
-        <LoadingState label="Loading the account…" />
-      </Screen>
-    );
-  }
-  if (account.isError) {
-    return (
-      <Screen testID="account-detail">
-        <ErrorState error={account.error} title="This account didn't load" onRetry={() => account.refetch()} retrying={account.isFetching} />
-        <TextLink href="/office/accounts" label="All accounts" />
-      </Screen>
-    );
-  }
-
-  const a = account.data;
   return (
     <Screen testID="account-detail">
+      <QueryStates query={account} loadingTestID="loading" errorTestID="error" loadingLabel="Loading the account…" errorTitle="This account didn't load">
+        {(a) => <AccountBody account={a} isOwner={isOwner} wide={wide} timeZone={timeZone} />}
+      </QueryStates>
+      {account.isError ? <TextLink href="/office/accounts" label="All accounts" /> : null}
+    </Screen>
+  );
+}
+
+function AccountBody({ account: a, isOwner, wide, timeZone }: { account: AccountDto; isOwner: boolean; wide: boolean; timeZone: string | undefined }) {
+  return (
+    <>
       <TextLink href="/office/accounts" label="‹ All accounts" testID="back-to-accounts" />
       <PageHeader
         overline="Customer account"
@@ -91,71 +85,11 @@ export function AccountDetailScreen({ id }: { id: number }) {
         <View style={[styles.col, wide && styles.sideCol]}>
           <AccountBillingCard accountId={a.id} canChangeTerms={isOwner} currentTerms={a.paymentTerms} />
           <TaxCertificatesCard accountId={a.id} canUpload={isOwner} canReview={isOwner} audience="office" />
-          {isOwner ? <StatusCard account={a} /> : null}
+          {isOwner ? <AccountStatusCard account={a} /> : null}
           {isOwner ? <CalendarFeedCard accountId={a.id} /> : null}
         </View>
       </View>
-    </Screen>
-  );
-}
-
-const STATUS_HELP: Record<AccountStatus, string> = {
-  active: "This account is open for orders.",
-  on_hold: "Paused: the account stays on file, but the bakery has paused its orders by hand.",
-  closed: "Closed: kept for the records only. Buyers can't be invited to it while it's closed.",
-};
-
-function StatusCard({ account }: { account: AccountDto }) {
-  const mutation = useUpdateAccountMutation(account.id);
-  const [confirmingClose, setConfirmingClose] = useState(false);
-  const [done, setDone] = useState<string | null>(null);
-
-  const setStatus = (status: AccountStatus) => {
-    setDone(null);
-    mutation.mutate(
-      { status },
-      {
-        onSuccess: (saved) => {
-          setConfirmingClose(false);
-          setDone(`${saved.businessName} is now ${ACCOUNT_STATUS_LABELS[saved.status].toLowerCase()}.`);
-        },
-      },
-    );
-  };
-
-  return (
-    <Card title="Status" testID="account-status-card">
-      <AppText color="muted">{STATUS_HELP[account.status]}</AppText>
-      {done ? <Notice message={done} testID="account-status-done" /> : null}
-      <FormError message={mutation.isError ? messageOf(mutation.error) : null} testID="account-status-error" />
-      {confirmingClose ? (
-        <View style={styles.confirm} testID="close-confirm">
-          <AppText variant="bodyStrong" color="dangerInk">
-            {`Close ${account.businessName}?`}
-          </AppText>
-          <AppText color="ink">The account and its history stay on file. You can reopen it later.</AppText>
-          <View style={styles.buttons}>
-            <Button label="Yes, close account" variant="danger" busy={mutation.isPending} onPress={() => setStatus("closed")} testID="close-account-confirm" />
-            <Button label="Keep it open" variant="secondary" onPress={() => setConfirmingClose(false)} testID="close-account-cancel" />
-          </View>
-        </View>
-      ) : (
-        <View style={styles.buttons}>
-          {account.status === "closed" ? (
-            <Button label="Reopen account" icon="rotate-ccw" variant="accent" busy={mutation.isPending} onPress={() => setStatus("active")} testID="reopen-account" />
-          ) : (
-            <>
-              {account.status === "active" ? (
-                <Button label="Pause account" icon="pause" variant="secondary" busy={mutation.isPending} onPress={() => setStatus("on_hold")} testID="hold-account" />
-              ) : (
-                <Button label="Make active" icon="play" variant="accent" busy={mutation.isPending} onPress={() => setStatus("active")} testID="activate-account" />
-              )}
-              <Button label="Close account" icon="x-circle" variant="ghost" onPress={() => { setDone(null); setConfirmingClose(true); }} testID="close-account" />
-            </>
-          )}
-        </View>
-      )}
-    </Card>
+    </>
   );
 }
 
@@ -165,6 +99,4 @@ const styles = StyleSheet.create({
   col: { gap: space.lg },
   mainCol: { flex: 2 },
   sideCol: { flex: 1 },
-  buttons: { flexDirection: "row", flexWrap: "wrap", gap: space.sm },
-  confirm: { gap: space.sm, padding: space.md, borderRadius: radii.md, backgroundColor: colors.dangerSoft },
 });

@@ -3,9 +3,9 @@ import { StyleSheet, View } from "react-native";
 import { useRouter } from "expo-router";
 import { Screen } from "../../ui/Screen";
 import { PageHeader } from "../../ui/PageHeader";
-import { TextField } from "../../ui/TextField";
+import { SEARCH_INPUT, TextField } from "../../ui/TextField";
 import { ChoiceGroup } from "../../ui/ChoiceGroup";
-import { EmptyState, ErrorState, LoadingState } from "../../ui/States";
+import { QueryStates } from "../../ui/QueryStates";
 import { DataTable } from "../../ui/DataTable";
 import { StatusBadge } from "../../ui/Badge";
 import { LinkButton } from "../../ui/LinkButton";
@@ -55,34 +55,34 @@ export function AccountsListScreen() {
             value={q}
             onChangeText={setQ}
             testID="accounts-search"
-            autoCapitalize="none"
-            autoCorrect={false}
-            returnKeyType="search"
+            {...SEARCH_INPUT}
           />
         </View>
         <ChoiceGroup label="Status" choices={FILTERS} value={status} onChange={setStatus} testID="accounts-status" />
       </View>
 
-      {accounts.isPending ? (
-        <LoadingState label="Loading accounts…" />
-      ) : accounts.isError ? (
-        <ErrorState error={accounts.error} title="Accounts didn't load" onRetry={() => accounts.refetch()} retrying={accounts.isFetching} testID="accounts-error" />
-      ) : accounts.data.length === 0 ? (
-        filtered ? (
-          <EmptyState icon="search" title="No accounts match" message="Try other words, or show all statuses." testID="accounts-empty" />
-        ) : (
-          <EmptyState
-            icon="briefcase"
-            title="No customer accounts yet"
-            message={isOwner ? "Add the first café, restaurant or shop that orders from you." : "The owner hasn't added any accounts yet."}
-            action={isOwner ? <LinkButton href="/office/accounts/new" label="New account" icon="plus" /> : undefined}
-            testID="accounts-empty"
-          />
-        )
-      ) : wide ? (
+      <QueryStates
+        query={accounts}
+        testID="accounts"
+        loadingTestID="loading"
+        loadingLabel="Loading accounts…"
+        errorTitle="Accounts didn't load"
+        empty={
+          filtered
+            ? { icon: "search", title: "No accounts match", message: "Try other words, or show all statuses." }
+            : {
+                icon: "briefcase",
+                title: "No customer accounts yet",
+                message: isOwner ? "Add the first café, restaurant or shop that orders from you." : "The owner hasn't added any accounts yet.",
+                action: isOwner ? <LinkButton href="/office/accounts/new" label="New account" icon="plus" /> : undefined,
+              }
+        }
+      >
+        {(rows) =>
+          wide ? (
         <DataTable
           testID="accounts-table"
-          rows={accounts.data}
+          rows={rows}
           rowKey={(a) => a.id}
           onRowPress={open}
           rowLabel={(a) => `${a.businessName}, ${accountStatusLabel(a)}`}
@@ -109,9 +109,9 @@ export function AccountsListScreen() {
             { key: "status", label: "Status", flex: 0.9, render: (a) => <StatusBadge status={a.status} creditHold={a.creditHold} /> },
           ]}
         />
-      ) : (
+          ) : (
         <ListCards testID="accounts-list">
-          {accounts.data.map((a) => (
+          {rows.map((a) => (
             <ListCard
               key={a.id}
               onPress={() => open(a)}
@@ -135,7 +135,9 @@ export function AccountsListScreen() {
             </ListCard>
           ))}
         </ListCards>
-      )}
+          )
+        }
+      </QueryStates>
       {accounts.data && accounts.data.length > 0 ? (
         <AppText variant="small" color="muted" testID="accounts-count">
           {accounts.data.length === 1 ? "1 account" : `${accounts.data.length} accounts`}

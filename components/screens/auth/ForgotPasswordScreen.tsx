@@ -1,39 +1,21 @@
 import React, { useState } from "react";
 import { AuthFrame } from "./AuthFrame";
-import { TextField } from "../../ui/TextField";
+import { EMAIL_INPUT, TextField } from "../../ui/TextField";
 import { Button } from "../../ui/Button";
 import { FormError, Notice } from "../../ui/FormError";
 import { TextLink } from "../../ui/TextLink";
 import { usePasswordResetRequestMutation } from "../../api/auth";
-import { splitError, validate } from "../../forms/errors";
+import { useZodForm } from "../../forms/useZodForm";
 import { passwordResetRequestSchema } from "../../../shared/schemas/auth";
-import type { FieldErrors } from "../../../shared/errors";
+
+const FIELDS = ["email"] as const;
 
 export function ForgotPasswordScreen() {
   const mutation = usePasswordResetRequestMutation();
-  const [email, setEmail] = useState("");
-  const [fields, setFields] = useState<FieldErrors>({});
-  const [formError, setFormError] = useState<string | null>(null);
+  const form = useZodForm({ schema: passwordResetRequestSchema, initial: { email: "" }, fields: FIELDS, manyMessage: null });
   const [sent, setSent] = useState<string | null>(null);
 
-  const submit = () => {
-    if (mutation.isPending) return;
-    setFormError(null);
-    const checked = validate(passwordResetRequestSchema, { email });
-    if (!checked.ok) {
-      setFields(checked.fields);
-      return;
-    }
-    setFields({});
-    mutation.mutate(checked.data, {
-      onSuccess: (res) => setSent(res.message),
-      onError: (err) => {
-        const split = splitError(err, ["email"]);
-        setFields(split.fields);
-        setFormError(split.formError);
-      },
-    });
-  };
+  const submit = () => void form.submit(async (input) => setSent((await mutation.mutateAsync(input)).message));
 
   return (
     <AuthFrame
@@ -48,23 +30,18 @@ export function ForgotPasswordScreen() {
         </>
       ) : (
         <>
-          <FormError message={formError} />
+          <FormError message={form.formError} />
           <TextField
             label="E-mail"
             accessibilityLabel="E-mail"
             testID="forgot-password-email"
-            value={email}
-            onChangeText={setEmail}
-            error={fields.email}
-            keyboardType="email-address"
-            inputMode="email"
-            autoCapitalize="none"
-            autoCorrect={false}
+            {...form.text("email")}
+            {...EMAIL_INPUT}
             autoComplete="email"
             returnKeyType="send"
             onSubmitEditing={submit}
           />
-          <Button label="Send reset link" testID="forgot-password-submit" onPress={submit} busy={mutation.isPending} block />
+          <Button label="Send reset link" testID="forgot-password-submit" onPress={submit} busy={form.submitting} block />
         </>
       )}
       <TextLink href="/sign-in" label="Back to sign in" testID="back-to-sign-in" />

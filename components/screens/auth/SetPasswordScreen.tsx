@@ -1,4 +1,5 @@
 import React, { useState } from "react";
+import type { z } from "zod";
 import { StyleSheet, View } from "react-native";
 import { Redirect } from "expo-router";
 import { AuthFrame } from "./AuthFrame";
@@ -12,11 +13,11 @@ import { useAuth } from "../../auth/useAuth";
 import { homePathFor } from "../../auth/homePath";
 import { useInvitationAcceptMutation, useInvitationPreviewQuery, usePasswordResetConfirmMutation } from "../../api/auth";
 import { messageOf } from "../../api/client";
-import { splitError, validate } from "../../forms/errors";
+import { useZodForm } from "../../forms/useZodForm";
 import { invitationAcceptSchema, passwordResetConfirmSchema, type SignInResponse } from "../../../shared/schemas/auth";
 import { PASSWORD_MAX_LENGTH, PASSWORD_MIN_LENGTH } from "../../../shared/schemas/common";
 import { ROLE_LABELS } from "../../../shared/roles";
-import type { FieldErrors } from "../../../shared/errors";
+import { withConfirmation } from "./newPassword";
 import { colors, radii, space } from "../../theme";
 
 export type SetPasswordKind = "invite" | "reset";
@@ -26,8 +27,6 @@ export interface SetPasswordScreenProps {
   token: string | undefined;
   email?: string;
 }
-
-export const PASSWORD_MISMATCH = "The two passwords don't match.";
 
 /** One screen for both links the bakery e-mails: accepting an invitation, and resetting a password. */
 export function SetPasswordScreen({ kind, token, email }: SetPasswordScreenProps) {
@@ -70,75 +69,9 @@ function BrokenLink({ message, kind }: { message: string; kind?: SetPasswordKind
   );
 }
 
-function usePasswordPair() {
-  const [password, setPassword] = useState("");
-  const [confirm, setConfirm] = useState("");
-  return { password, setPassword, confirm, setConfirm };
-}
-
-/** Client-side checks for both forms: the shared schema, then the confirmation. */
-export function checkNewPassword<T>(
-  result: { ok: true; data: T } | { ok: false; fields: FieldErrors },
-  password: string,
-  confirm: string,
-): { ok: true; data: T } | { ok: false; fields: FieldErrors } {
-  const fields: FieldErrors = result.ok ? {} : { ...result.fields };
-  if (!fields.password && password !== confirm) fields.confirm = PASSWORD_MISMATCH;
-  if (!confirm && !fields.confirm) fields.confirm = "Type the password again.";
-  if (Object.keys(fields).length || !result.ok) return { ok: false, fields };
-  return result;
-}
-
-function PasswordFields({
-  pair,
-  fields,
-  onSubmit,
-}: {
-  pair: ReturnType<typeof usePasswordPair>;
-  fields: FieldErrors;
-  onSubmit: () => void;
-}) {
-  return (
-    <>
-      <TextField
-        label="New password"
-        accessibilityLabel="New password"
-        hint={`${PASSWORD_MIN_LENGTH} to ${PASSWORD_MAX_LENGTH} characters; spaces in a row count once. A few unrelated words work well; common passwords are refused.`}
-        testID="set-password-password"
-        value={pair.password}
-        onChangeText={pair.setPassword}
-        error={fields.password}
-        secureTextEntry
-        autoCapitalize="none"
-        autoComplete="new-password"
-        textContentType="newPassword"
-      />
-      <TextField
-        label="Confirm new password"
-        accessibilityLabel="Confirm new password"
-        testID="set-password-confirm"
-        value={pair.confirm}
-        onChangeText={pair.setConfirm}
-        error={fields.confirm}
-        secureTextEntry
-        autoCapitalize="none"
-        autoComplete="new-password"
-        textContentType="newPassword"
-        returnKeyType="go"
-        onSubmitEditing={onSubmit}
-      />
-    </>
-  );
-}
-
 function AcceptInvitation({ token, email, onDone }: { token: string; email?: string; onDone: () => void }) {
-  const { signIn } = useAuth();
   const preview = useInvitationPreviewQuery(token);
   const mutation = useInvitationAcceptMutation();
-  const pair = usePasswordPair();
-  const [name, setName] = useState<string | null>(null);
-  const [fields, setFields] = useState<FieldErrors>({});
-  const [formError, setFormError] = useState<string | null>(null);
 
   if (preview.isPending) {
     return (
@@ -158,31 +91,6 @@ function AcceptInvitation({ token, email, onDone }: { token: string; email?: str
   }
 
   const invite = preview.data;
-  const shownName = name ?? invite.name ?? "";
-
-  const submit = () => {
-    if (mutation.isPending) return;
-    setFormError(null);
-    const checked = checkNewPassword(validate(invitationAcceptSchema, { token, password: pair.password, name: shownName }), pair.password, pair.confirm);
-    if (!checked.ok) {
-      setFields(checked.fields);
-      if (checked.fields.token) setFormError(checked.fields.token);
-      return;
-    }
-    setFields({});
-    mutation.mutate(checked.data, {
-      onSuccess: (session: SignInResponse) => {
-        signIn(session);
-        onDone();
-      },
-      onError: (err) => {
-        const split = splitError(err, ["name", "password"]);
-        setFields(split.fields);
-        setFormError(split.formError);
-      },
-    });
-  };
-
   return (
     <AuthFrame title="Accept your invitation" intro="Choose how you'll sign in to Panwise." testID="set-password-screen">
       <View style={styles.who} testID="invitation-for">
@@ -192,62 +100,89 @@ function AcceptInvitation({ token, email, onDone }: { token: string; email?: str
         <AppText variant="bodyStrong">{invite.email || email}</AppText>
         <AppText color="muted">as {ROLE_LABELS[invite.role]}</AppText>
       </View>
-      <FormError message={formError} testID="set-password-error" />
-      <TextField
-        label="Your name"
-        accessibilityLabel="Your name"
-        testID="set-password-name"
-        value={shownName}
-        onChangeText={setName}
-        error={fields.name}
-        autoComplete="name"
-        textContentType="name"
-      />
-      <PasswordFields pair={pair} fields={fields} onSubmit={submit} />
-      <Button label="Create my sign-in" testID="set-password-submit" onPress={submit} busy={mutation.isPending} block />
+      <NewPasswordForm schema={INVITE_SCHEMA} token={token} name={invite.name ?? ""} send={(input) => mutation.mutateAsync(input)} onDone={onDone} submitLabel="Create my sign-in" />
     </AuthFrame>
   );
 }
 
 function ResetPassword({ token, onDone }: { token: string; onDone: () => void }) {
-  const { signIn } = useAuth();
   const mutation = usePasswordResetConfirmMutation();
-  const pair = usePasswordPair();
-  const [fields, setFields] = useState<FieldErrors>({});
-  const [formError, setFormError] = useState<string | null>(null);
-
-  const submit = () => {
-    if (mutation.isPending) return;
-    setFormError(null);
-    const checked = checkNewPassword(validate(passwordResetConfirmSchema, { token, password: pair.password }), pair.password, pair.confirm);
-    if (!checked.ok) {
-      setFields(checked.fields);
-      if (checked.fields.token) setFormError(checked.fields.token);
-      return;
-    }
-    setFields({});
-    mutation.mutate(checked.data, {
-      onSuccess: (session: SignInResponse) => {
-        signIn(session);
-        onDone();
-      },
-      onError: (err) => {
-        const split = splitError(err, ["password"]);
-        setFields(split.fields);
-        setFormError(split.formError);
-      },
-    });
-  };
-
   return (
     <AuthFrame title="Choose a new password" intro="You'll be signed in straight after." testID="set-password-screen">
-      <FormError message={formError} testID="set-password-error" />
-      <PasswordFields pair={pair} fields={fields} onSubmit={submit} />
-      <Button label="Save new password" testID="set-password-submit" onPress={submit} busy={mutation.isPending} block />
-      {formError ? <TextLink href="/forgot-password" label="Ask for a new reset link" /> : null}
+      <NewPasswordForm schema={RESET_SCHEMA} token={token} send={(input) => mutation.mutateAsync(input)} onDone={onDone} submitLabel="Save new password" resetLinkOnError />
     </AuthFrame>
   );
 }
+
+const INVITE_SCHEMA = withConfirmation(invitationAcceptSchema);
+const RESET_SCHEMA = withConfirmation(passwordResetConfirmSchema);
+
+interface NewPasswordFormProps<S extends typeof INVITE_SCHEMA | typeof RESET_SCHEMA> {
+  schema: S;
+  token: string;
+  /** Asked for (and started from the invitation's name) when accepting an invitation. */
+  name?: string;
+  send: (input: z.output<S>) => Promise<SignInResponse>;
+  onDone: () => void;
+  submitLabel: string;
+  /** A failed reset offers a new reset link. */
+  resetLinkOnError?: boolean;
+}
+
+/** Both links' form: (your name,) the new password twice; signs in with the session the server answers. */
+function NewPasswordForm<S extends typeof INVITE_SCHEMA | typeof RESET_SCHEMA>({ schema, token, name, send, onDone, submitLabel, resetLinkOnError }: NewPasswordFormProps<S>) {
+  const { signIn } = useAuth();
+  const withName = name !== undefined;
+  const form = useZodForm({
+    schema,
+    initial: { name: name ?? "", password: "", confirm: "" },
+    toInput: (v) => ({ token, password: v.password, confirm: v.confirm, ...(withName ? { name: v.name } : {}) }),
+    fields: withName ? INVITE_FIELDS : RESET_FIELDS,
+    manyMessage: null,
+  });
+  const { errors } = form;
+  const submit = () =>
+    void form.submit(async (input) => {
+      signIn(await send(input as z.output<S>));
+      onDone();
+    });
+
+  return (
+    <>
+      <FormError message={form.formError} testID="set-password-error" />
+      {withName ? <TextField label="Your name" accessibilityLabel="Your name" testID="set-password-name" {...form.text("name")} autoComplete="name" textContentType="name" /> : null}
+      <TextField
+        label="New password"
+        accessibilityLabel="New password"
+        hint={`${PASSWORD_MIN_LENGTH} to ${PASSWORD_MAX_LENGTH} characters; spaces in a row count once. A few unrelated words work well; common passwords are refused.`}
+        testID="set-password-password"
+        {...form.text("password")}
+        secureTextEntry
+        autoCapitalize="none"
+        autoComplete="new-password"
+        textContentType="newPassword"
+      />
+      <TextField
+        label="Confirm new password"
+        accessibilityLabel="Confirm new password"
+        testID="set-password-confirm"
+        {...form.text("confirm")}
+        error={errors.confirm}
+        secureTextEntry
+        autoCapitalize="none"
+        autoComplete="new-password"
+        textContentType="newPassword"
+        returnKeyType="go"
+        onSubmitEditing={submit}
+      />
+      <Button label={submitLabel} testID="set-password-submit" onPress={submit} busy={form.submitting} block />
+      {resetLinkOnError && form.formError ? <TextLink href="/forgot-password" label="Ask for a new reset link" /> : null}
+    </>
+  );
+}
+
+const INVITE_FIELDS = ["name", "password", "confirm"] as const;
+const RESET_FIELDS = ["password", "confirm"] as const;
 
 const styles = StyleSheet.create({
   who: { gap: space.xxs, padding: space.md, borderRadius: radii.md, backgroundColor: colors.sunken },

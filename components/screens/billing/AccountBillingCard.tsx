@@ -1,4 +1,5 @@
-import React, { useState } from "react";
+import React from "react";
+import { z } from "zod";
 import { View } from "react-native";
 import { Card } from "../../ui/Card";
 import { ChoiceGroup } from "../../ui/ChoiceGroup";
@@ -10,6 +11,7 @@ import { messageOf } from "../../api/client";
 import { useInvoicesQuery } from "../../api/invoices";
 import { useSetTermsMutation } from "../../api/accountBilling";
 import { PAYMENT_TERMS, PAYMENT_TERMS_LABELS, type PaymentTerms } from "../../../shared/billing";
+import { useZodForm } from "../../forms/useZodForm";
 import { billingStyles, money } from "./parts";
 import { invoicesLabel } from "./InvoicesScreen";
 
@@ -38,7 +40,7 @@ export function AccountBillingCard({ accountId, canChangeTerms, currentTerms }: 
             : `${money(open.reduce((s, i) => s + i.amountDueCents, 0), cur)} owed on ${invoicesLabel(open.length)}${overdue.length ? `, ${overdue.length} overdue` : ""}.`}
         </AppText>
       )}
-      <LinkButton href={`/office/invoices?accountId=${accountId}` as never} label="See its invoices" icon="file-text" variant="secondary" testID="account-invoices-link" />
+      <LinkButton href={`/office/invoices?accountId=${accountId}`} label="See its invoices" icon="file-text" variant="secondary" testID="account-invoices-link" />
       {currentTerms ? (
         <AppText testID="account-terms-current">
           Payment terms: {PAYMENT_TERMS_LABELS[currentTerms]}
@@ -49,18 +51,13 @@ export function AccountBillingCard({ accountId, canChangeTerms, currentTerms }: 
   );
 }
 
+const TERMS_SCHEMA = z.object({ terms: z.enum(PAYMENT_TERMS, { error: "Choose the terms first." }) });
+
 function TermsForm({ accountId, newestKind, currentTerms }: { accountId: number; newestKind?: "order" | "statement"; currentTerms?: PaymentTerms }) {
   const mutation = useSetTermsMutation(accountId);
-  const [terms, setTerms] = useState<PaymentTerms | null>(currentTerms ?? null);
-  const [error, setError] = useState<string | null>(null);
-  const save = () => {
-    setError(null);
-    if (!terms) {
-      setError("Choose the terms first.");
-      return;
-    }
-    mutation.mutate(terms);
-  };
+  // The one choice's message shows at the top of this small form, as a refusal from the server does.
+  const form = useZodForm({ schema: TERMS_SCHEMA, initial: { terms: currentTerms ?? null }, fields: [], manyMessage: null });
+  const save = () => void form.submit(({ terms }) => mutation.mutateAsync(terms));
   return (
     <View style={{ gap: 12 }} testID="account-terms">
       <AppText variant="label">Payment terms</AppText>
@@ -71,11 +68,11 @@ function TermsForm({ accountId, newestKind, currentTerms }: { accountId: number;
           ? `Its newest invoice was ${newestKind === "order" ? "a per-delivery invoice paid by card" : "a weekly statement on net terms"}. Changing terms applies to invoices issued from now on.`
           : "Changing terms applies to invoices issued from now on."}
       </AppText>
-      <ChoiceGroup<PaymentTerms> label="New terms" layout="list" value={terms} onChange={setTerms} testID="account-terms-choice" choices={PAYMENT_TERMS.map((t) => ({ value: t, label: PAYMENT_TERMS_LABELS[t] }))} />
+      <ChoiceGroup<PaymentTerms> label="New terms" layout="list" value={form.values.terms} onChange={form.set("terms")} testID="account-terms-choice" choices={PAYMENT_TERMS.map((t) => ({ value: t, label: PAYMENT_TERMS_LABELS[t] }))} />
       {mutation.isSuccess ? <Notice message={`Payment terms are now: ${PAYMENT_TERMS_LABELS[mutation.data]}.`} testID="account-terms-saved" /> : null}
-      <FormError message={error ?? (mutation.isError ? messageOf(mutation.error) : null)} testID="account-terms-error" />
+      <FormError message={form.formError} testID="account-terms-error" />
       <View style={billingStyles.buttons}>
-        <Button label="Change terms" icon="check" variant="secondary" busy={mutation.isPending} onPress={save} testID="account-terms-save" />
+        <Button label="Change terms" icon="check" variant="secondary" busy={form.submitting} onPress={save} testID="account-terms-save" />
       </View>
     </View>
   );

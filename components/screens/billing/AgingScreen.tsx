@@ -1,20 +1,20 @@
+import type { RoutePath } from "../../routing";
 import React from "react";
 import { View } from "react-native";
-import { Link, useRouter } from "expo-router";
-import Feather from "@expo/vector-icons/Feather";
+import { useRouter } from "expo-router";
 import { Screen } from "../../ui/Screen";
 import { PageHeader } from "../../ui/PageHeader";
 import { Badge } from "../../ui/Badge";
-import { EmptyState, ErrorState, LoadingState } from "../../ui/States";
-import { LinkPressable } from "../../ui/LinkPressable";
+import { DataTable } from "../../ui/DataTable";
+import { ListCard, ListCardText, ListCardTop, ListCards } from "../../ui/ListCard";
+import { QueryStates } from "../../ui/QueryStates";
 import { AppText } from "../../ui/Text";
-import { useAgingQuery, type AgingRowDto } from "../../api/reports";
+import { useAgingQuery, type AgingDto, type AgingRowDto } from "../../api/reports";
 import { useBakeryQuery } from "../../api/bakery";
 import { useIsWide } from "../../shell/useIsWide";
 import { AGING_BUCKETS, type AgingBucket } from "../../../shared/billing";
 import { accountStatusLabel } from "../../../shared/schemas/accounts";
-import { BackLink, BillingTable, Figure, SumLine, billingStyles, day, money } from "./parts";
-import { colors } from "../../theme";
+import { BackLink, Figure, SumLine, billingStyles, day, money } from "./parts";
 
 export const BUCKET_LABELS: Record<AgingBucket, string> = {
   current: "Current",
@@ -31,21 +31,18 @@ export function AgingScreen() {
   const aging = useAgingQuery();
   const currency = useBakeryQuery().data?.currency ?? "USD";
   const m = (c: number) => money(c, currency);
-  const invoicesOf = (a: AgingRowDto) => `/office/invoices?accountId=${a.accountId}`;
+  const invoicesOf = (a: AgingRowDto): RoutePath => `/office/invoices?accountId=${a.accountId}`;
 
-  let body: React.ReactNode;
-  if (aging.isPending) body = <LoadingState label="Loading the aging report…" testID="aging-loading" />;
-  else if (aging.isError) body = <ErrorState error={aging.error} title="The aging report didn't load" onRetry={() => aging.refetch()} retrying={aging.isFetching} testID="aging-error" />;
-  else if (aging.data.accounts.length === 0) body = <EmptyState icon="check-circle" title="Nothing is owed" message="Every invoice is paid. Open invoices show here by how long they are past due." testID="aging-empty" />;
-  else {
-    const a = aging.data;
-    body = wide ? (
-      <BillingTable<AgingRowDto>
+  const holdLabel = (r: AgingRowDto) => accountStatusLabel({ status: "on_hold", creditHold: r.creditHold });
+  const rowLabel = (r: AgingRowDto) => `${r.accountName}${r.onHold ? `, ${holdLabel(r).toLowerCase()}` : ""}: ${m(r.total)} owed`;
+  const body = (a: AgingDto) =>
+    wide ? (
+      <DataTable<AgingRowDto>
         testID="aging-table"
         rows={a.accounts}
         rowKey={(r) => r.accountId}
         onRowPress={(r) => router.push(invoicesOf(r))}
-        rowLabel={(r) => `${r.accountName}${r.onHold ? `, ${accountStatusLabel({ status: "on_hold", creditHold: r.creditHold }).toLowerCase()}` : ""}: ${m(r.total)} owed`}
+        rowLabel={rowLabel}
         rowTestID={(r) => `aging-row-${r.accountId}`}
         footer
         footerTestID="aging-totals"
@@ -57,7 +54,7 @@ export function AgingScreen() {
             render: (r) => (
               <View style={billingStyles.cardTop}>
                 <AppText variant="bodyStrong">{r.accountName}</AppText>
-                {r.onHold ? <Badge label={accountStatusLabel({ status: "on_hold", creditHold: r.creditHold })} tone="amber" testID={`aging-hold-${r.accountId}`} /> : null}
+                {r.onHold ? <Badge label={holdLabel(r)} tone="amber" testID={`aging-hold-${r.accountId}`} /> : null}
               </View>
             ),
             footer: "Total",
@@ -85,36 +82,41 @@ export function AgingScreen() {
           ))}
           <Figure label="Total owed" value={m(a.totals.total)} testID="aging-total-total" />
         </View>
-        <View style={billingStyles.cards} testID="aging-list">
+        <ListCards testID="aging-list">
           {a.accounts.map((r) => (
-            <Link key={r.accountId} href={invoicesOf(r) as never} asChild>
-              <LinkPressable accessibilityRole="link" accessibilityLabel={`${r.accountName}${r.onHold ? `, ${accountStatusLabel({ status: "on_hold", creditHold: r.creditHold }).toLowerCase()}` : ""}: ${m(r.total)} owed`} testID={`aging-row-${r.accountId}`} style={billingStyles.card} highlightStyle={billingStyles.cardHover}>
-                <View style={billingStyles.cardText}>
-                  <View style={billingStyles.cardTop}>
-                    <AppText variant="bodyStrong" style={billingStyles.grow}>
-                      {r.accountName}
-                    </AppText>
-                    {r.onHold ? <Badge label={accountStatusLabel({ status: "on_hold", creditHold: r.creditHold })} tone="amber" testID={`aging-hold-${r.accountId}`} /> : null}
-                  </View>
-                  {AGING_BUCKETS.filter((b) => r[b] > 0).map((b) => (
-                    <SumLine key={b} label={BUCKET_LABELS[b]} value={m(r[b])} tone={b !== "current" ? "danger" : undefined} testID={`aging-${r.accountId}-${b}`} />
-                  ))}
-                  <SumLine label="Total" value={m(r.total)} strong testID={`aging-${r.accountId}-total`} />
-                </View>
-                <Feather name="chevron-right" size={20} color={colors.muted} />
-              </LinkPressable>
-            </Link>
+            <ListCard key={r.accountId} href={invoicesOf(r)} accessibilityLabel={rowLabel(r)} testID={`aging-row-${r.accountId}`}>
+              <ListCardText>
+                <ListCardTop>
+                  <AppText variant="bodyStrong" style={billingStyles.grow}>
+                    {r.accountName}
+                  </AppText>
+                  {r.onHold ? <Badge label={holdLabel(r)} tone="amber" testID={`aging-hold-${r.accountId}`} /> : null}
+                </ListCardTop>
+                {AGING_BUCKETS.filter((b) => r[b] > 0).map((b) => (
+                  <SumLine key={b} label={BUCKET_LABELS[b]} value={m(r[b])} tone={b !== "current" ? "danger" : undefined} testID={`aging-${r.accountId}-${b}`} />
+                ))}
+                <SumLine label="Total" value={m(r.total)} strong testID={`aging-${r.accountId}-total`} />
+              </ListCardText>
+            </ListCard>
           ))}
-        </View>
+        </ListCards>
       </>
     );
-  }
 
   return (
     <Screen testID="aging-screen">
       <BackLink href="/office/money" label="Money" testID="back-to-money" />
       <PageHeader overline="Money" title="Aging" subtitle={aging.data ? `What is owed on ${day(aging.data.today)}, by days past the due date. Open an account for its invoices.` : "What is owed, by days past the due date."} testID="aging-title" />
-      {body}
+      <QueryStates
+        query={aging}
+        testID="aging"
+        loadingLabel="Loading the aging report…"
+        errorTitle="The aging report didn't load"
+        isEmpty={(data) => data.accounts.length === 0}
+        empty={{ icon: "check-circle", title: "Nothing is owed", message: "Every invoice is paid. Open invoices show here by how long they are past due." }}
+      >
+        {body}
+      </QueryStates>
     </Screen>
   );
 }

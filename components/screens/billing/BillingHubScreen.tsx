@@ -1,6 +1,7 @@
 import React from "react";
 import { StyleSheet, View } from "react-native";
 import Feather from "@expo/vector-icons/Feather";
+import type { Href } from "expo-router";
 import { Screen } from "../../ui/Screen";
 import { PageHeader } from "../../ui/PageHeader";
 import { LinkCard } from "../../ui/ListCard";
@@ -9,7 +10,7 @@ import { useIsWide } from "../../shell/useIsWide";
 import type { Role } from "../../../shared/roles";
 import { layout, space } from "../../theme";
 
-const LINKS: { key: string; href: string; icon: React.ComponentProps<typeof Feather>["name"]; title: string; about: string; roles?: Role[] }[] = [
+const LINKS: { key: string; href: Href; icon: React.ComponentProps<typeof Feather>["name"]; title: string; about: string; roles?: Role[] }[] = [
   { key: "invoices", href: "/office/invoices", icon: "file-text", title: "Invoices", about: "Every invoice and statement; record payments, issue credit notes." },
   { key: "payouts", href: "/office/money/payouts", icon: "dollar-sign", title: "Payouts", about: "Card money sent to the bank, matched to invoices, to reconcile." },
   { key: "aging", href: "/office/money/aging", icon: "clock", title: "Aging", about: "What each account owes, by how long it is past due." },

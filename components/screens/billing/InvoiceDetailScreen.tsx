@@ -8,7 +8,9 @@ import { Button } from "../../ui/Button";
 import { TextLink } from "../../ui/TextLink";
 import { FormError, Notice } from "../../ui/FormError";
 import { Badge } from "../../ui/Badge";
-import { EmptyState, ErrorState, LoadingState } from "../../ui/States";
+import { EmptyState } from "../../ui/States";
+import { QueryStates } from "../../ui/QueryStates";
+import { DataTable } from "../../ui/DataTable";
 import { AppText } from "../../ui/Text";
 import { ApiError, messageOf } from "../../api/client";
 import { downloadInvoicePdf, useInvoiceQuery, useRefundOverpaymentMutation, type InvoiceDetailDto, type InvoiceDto } from "../../api/invoices";
@@ -16,9 +18,10 @@ import { useBillingSettingsQuery } from "../../api/billingSettings";
 import { useBakeryTimeZone } from "../../api/bakery";
 import { formatDateTime } from "../../format";
 import { useIsWide } from "../../shell/useIsWide";
-import { BackLink, BillingTable, DISPOSITION_LABELS, InvoiceStatusBadge, KIND_LABELS, METHOD_LABELS, SumLine, billingStyles, day, money, percent } from "./parts";
+import { BackLink, DISPOSITION_LABELS, InvoiceStatusBadge, KIND_LABELS, METHOD_LABELS, SumLine, billingStyles, day, money, percent } from "./parts";
 import { PayByCard } from "./PayByCard";
-import { CreditNoteCard, RecordPaymentCard } from "./InvoiceForms";
+import { CreditNoteCard } from "./CreditNoteCard";
+import { RecordPaymentCard } from "./RecordPaymentCard";
 import { colors, radii, space } from "../../theme";
 
 export interface InvoiceDetailProps {
@@ -34,37 +37,40 @@ export function InvoiceDetailScreen({ id, mode }: InvoiceDetailProps) {
   const refund = useRefundOverpaymentMutation(valid ? id : 0);
   const wide = useIsWide();
   const office = mode === "office";
-  const listHref = office ? "/office/invoices" : "/buyer/invoices";
+  const listHref = office ? ("/office/invoices" as const) : ("/buyer/invoices" as const);
 
-  if (!valid || (detail.isError && detail.error instanceof ApiError && detail.error.status === 404)) {
-    return (
-      <Screen testID="invoice-detail">
-        <EmptyState icon="help-circle" title="There's no such invoice" message="It may have been typed wrong in the address." testID="invoice-not-found" />
-        <TextLink href={listHref} label="All invoices" />
-      </Screen>
-    );
-  }
-  if (detail.isPending) {
-    return (
-      <Screen testID="invoice-detail">
-        <LoadingState label="Loading the invoice…" testID="invoice-loading" />
-      </Screen>
-    );
-  }
-  if (detail.isError) {
-    return (
-      <Screen testID="invoice-detail">
-        <ErrorState error={detail.error} title="This invoice didn't load" onRetry={() => detail.refetch()} retrying={detail.isFetching} testID="invoice-error" />
-        <TextLink href={listHref} label="All invoices" />
-      </Screen>
-    );
-  }
+  const notFound = !valid || (detail.isError && detail.error instanceof ApiError && detail.error.status === 404);
 
-  const d = detail.data;
+  return (
+    <Screen testID="invoice-detail">
+      {notFound ? (
+        <>
+          <EmptyState icon="help-circle" title="There's no such invoice" message="It may have been typed wrong in the address." testID="invoice-not-found" />
+          <TextLink href={listHref} label="All invoices" />
+        </>
+      ) : (
+        <QueryStates query={detail} testID="invoice" loadingLabel="Loading the invoice…" errorTitle="This invoice didn't load">
+          {(d) => <InvoiceBody detail={d} office={office} listHref={listHref} refund={refund} wide={wide} />}
+        </QueryStates>
+      )}
+      {!notFound && detail.isError ? <TextLink href={listHref} label="All invoices" /> : null}
+    </Screen>
+  );
+}
+
+interface InvoiceBodyProps {
+  detail: InvoiceDetailDto;
+  office: boolean;
+  listHref: "/office/invoices" | "/buyer/invoices";
+  refund: ReturnType<typeof useRefundOverpaymentMutation>;
+  wide: boolean;
+}
+
+function InvoiceBody({ detail: d, office, listHref, refund, wide }: InvoiceBodyProps) {
   const inv = d.invoice;
   const payable = inv.amountDueCents > 0 && inv.status !== "void";
   return (
-    <Screen testID="invoice-detail">
+    <>
       <BackLink href={listHref} label="All invoices" testID="back-to-invoices" />
       <PageHeader
         overline={KIND_LABELS[inv.kind]}
@@ -95,7 +101,7 @@ export function InvoiceDetailScreen({ id, mode }: InvoiceDetailProps) {
           {d.emails?.length ? <EmailsCard detail={d} /> : null}
         </View>
       </View>
-    </Screen>
+    </>
   );
 }
 
@@ -193,7 +199,7 @@ function LinesCard({ detail }: { detail: InvoiceDetailDto }) {
       {detail.lines.length === 0 ? (
         <AppText color="muted">No lines on this invoice.</AppText>
       ) : wide ? (
-        <BillingTable
+        <DataTable
           rows={detail.lines}
           rowKey={(l) => l.id}
           rowTestID={(l) => `invoice-line-${l.id}`}

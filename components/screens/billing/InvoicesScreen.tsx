@@ -1,15 +1,17 @@
 import React, { useState } from "react";
+import type { Href } from "expo-router";
 import { StyleSheet, View } from "react-native";
-import { Link, useRouter } from "expo-router";
-import Feather from "@expo/vector-icons/Feather";
+import { useRouter } from "expo-router";
 import { Screen } from "../../ui/Screen";
 import { PageHeader } from "../../ui/PageHeader";
-import { TextField } from "../../ui/TextField";
+import { SEARCH_INPUT, TextField } from "../../ui/TextField";
 import { ChoiceGroup } from "../../ui/ChoiceGroup";
 import { Button } from "../../ui/Button";
 import { FormError, Notice } from "../../ui/FormError";
-import { EmptyState, ErrorState, LoadingState } from "../../ui/States";
-import { LinkPressable } from "../../ui/LinkPressable";
+import { LoadingState } from "../../ui/States";
+import { QueryStates } from "../../ui/QueryStates";
+import { DataTable } from "../../ui/DataTable";
+import { ListCard, ListCardText, ListCardTop, ListCards } from "../../ui/ListCard";
 import { AppText } from "../../ui/Text";
 import { useAccountsQuery } from "../../api/accounts";
 import { useInvoicesQuery, useIssueStatementsMutation, type InvoiceDto, type InvoiceListParams, type InvoiceSort, type InvoiceStatus, type InvoiceTotalsDto } from "../../api/invoices";
@@ -17,9 +19,9 @@ import { messageOf } from "../../api/client";
 import { useDebounced } from "../../forms/useDebounced";
 import { cleanDate } from "../../ordering/dates";
 import { useIsWide } from "../../shell/useIsWide";
-import { BillingTable, Figure, INVOICE_STATUS_LABELS, InvoiceStatusBadge, billingStyles, day, money } from "./parts";
+import { Figure, INVOICE_STATUS_LABELS, InvoiceStatusBadge, billingStyles, day, money } from "./parts";
 import { Badge } from "../../ui/Badge";
-import { colors, space } from "../../theme";
+import { space } from "../../theme";
 
 type Show = "all" | InvoiceStatus | "overdue";
 
@@ -85,7 +87,7 @@ export function InvoicesScreen({ mode, accountId: startAccount }: InvoicesScreen
   };
   const invoices = useInvoicesQuery(params);
   const filtered = !!(params.q || params.status || params.overdue || params.accountId || params.from || params.to);
-  const base = office ? "/office/invoices" : "/buyer/invoices";
+  const base = office ? ("/office/invoices" as const) : ("/buyer/invoices" as const);
   const open = (inv: InvoiceDto) => router.push(`${base}/${inv.id}`);
   const showFilters = wide || moreFilters;
 
@@ -106,9 +108,7 @@ export function InvoicesScreen({ mode, accountId: startAccount }: InvoicesScreen
             value={q}
             onChangeText={setQ}
             testID="invoices-search"
-            autoCapitalize="none"
-            autoCorrect={false}
-            returnKeyType="search"
+            {...SEARCH_INPUT}
           />
         </View>
         <ChoiceGroup<Show> label="Show" choices={office ? OFFICE_SHOW : BUYER_SHOW} value={show} onChange={setShow} testID="invoices-status" />
@@ -136,38 +136,40 @@ export function InvoicesScreen({ mode, accountId: startAccount }: InvoicesScreen
         </View>
       ) : null}
 
-      {invoices.isPending ? (
-        <LoadingState label="Loading invoices…" testID="invoices-loading" />
-      ) : invoices.isError ? (
-        <ErrorState error={invoices.error} title="Invoices didn't load" onRetry={() => invoices.refetch()} retrying={invoices.isFetching} testID="invoices-error" />
-      ) : invoices.data.invoices.length === 0 ? (
-        filtered ? (
-          <EmptyState icon="search" title="No invoices match" message="Try other words or dates, or show all invoices." testID="invoices-empty" />
-        ) : (
-          <EmptyState
-            icon="file-text"
-            title="No invoices yet"
-            message={office ? "Invoices appear when deliveries are confirmed (card accounts) or weekly statements are issued." : "Your invoices appear here after your deliveries."}
-            testID="invoices-empty"
-          />
-        )
-      ) : (
-        <>
-          {office && (invoices.data.totals.overpaidCount ?? 0) > 0 ? <OverpaidNotice count={invoices.data.totals.overpaidCount ?? 0} /> : null}
-          {wide ? (
-            <InvoiceTable invoices={invoices.data.invoices} totals={invoices.data.totals} office={office} onOpen={open} />
-          ) : (
-            <>
-              <TotalsTiles totals={invoices.data.totals} currency={invoices.data.invoices[0]?.currency} />
-              <View style={billingStyles.cards} testID="invoices-list">
-                {invoices.data.invoices.map((inv) => (
-                  <InvoiceCard key={inv.id} invoice={inv} href={`${base}/${inv.id}`} office={office} />
-                ))}
-              </View>
-            </>
-          )}
-        </>
-      )}
+      <QueryStates
+        query={invoices}
+        testID="invoices"
+        loadingLabel="Loading invoices…"
+        errorTitle="Invoices didn't load"
+        isEmpty={(data) => data.invoices.length === 0}
+        empty={
+          filtered
+            ? { icon: "search", title: "No invoices match", message: "Try other words or dates, or show all invoices." }
+            : {
+                icon: "file-text",
+                title: "No invoices yet",
+                message: office ? "Invoices appear when deliveries are confirmed (card accounts) or weekly statements are issued." : "Your invoices appear here after your deliveries.",
+              }
+        }
+      >
+        {(data) => (
+          <>
+            {office && (data.totals.overpaidCount ?? 0) > 0 ? <OverpaidNotice count={data.totals.overpaidCount ?? 0} /> : null}
+            {wide ? (
+              <InvoiceTable invoices={data.invoices} totals={data.totals} office={office} onOpen={open} />
+            ) : (
+              <>
+                <TotalsTiles totals={data.totals} currency={data.invoices[0]?.currency} />
+                <ListCards testID="invoices-list">
+                  {data.invoices.map((inv) => (
+                    <InvoiceCard key={inv.id} invoice={inv} href={`${base}/${inv.id}`} office={office} />
+                  ))}
+                </ListCards>
+              </>
+            )}
+          </>
+        )}
+      </QueryStates>
     </Screen>
   );
 }
@@ -223,7 +225,7 @@ function TotalsTiles({ totals, currency = "USD" }: { totals: InvoiceTotalsDto; c
 function InvoiceTable({ invoices, totals, office, onOpen }: { invoices: InvoiceDto[]; totals: InvoiceTotalsDto; office: boolean; onOpen: (inv: InvoiceDto) => void }) {
   const cur = invoices[0]?.currency ?? "USD";
   return (
-    <BillingTable<InvoiceDto>
+    <DataTable<InvoiceDto>
       testID="invoices-table"
       rows={invoices}
       rowKey={(i) => i.id}
@@ -293,34 +295,29 @@ function StatusCell({ invoice: i, office }: { invoice: InvoiceDto; office: boole
   );
 }
 
-function InvoiceCard({ invoice: i, href, office }: { invoice: InvoiceDto; href: string; office: boolean }) {
+function InvoiceCard({ invoice: i, href, office }: { invoice: InvoiceDto; href: Href; office: boolean }) {
   return (
-    <Link href={href as never} asChild>
-      <LinkPressable
-        accessibilityRole="link"
-        accessibilityLabel={`${i.number}${office ? `, ${i.accountName}` : ""}, ${money(i.totalCents, i.currency)}, ${i.overdue ? "overdue" : INVOICE_STATUS_LABELS[i.status].toLowerCase()}`}
-        testID={`invoice-row-${i.id}`}
-        style={billingStyles.card}
-        highlightStyle={billingStyles.cardHover}
-      >
-        <View style={billingStyles.cardText}>
-          <View style={billingStyles.cardTop}>
-            <AppText variant="bodyStrong" style={billingStyles.grow}>
-              {i.number}
-            </AppText>
-            <StatusCell invoice={i} office={office} />
-          </View>
-          {office ? <AppText variant="small">{i.accountName}</AppText> : null}
-          <AppText variant="small" color="muted">
-            {`Issued ${day(i.issueDate)} · due ${day(i.dueDate)}${i.kind === "statement" ? " · statement" : ""}`}
+    <ListCard
+      href={href}
+      accessibilityLabel={`${i.number}${office ? `, ${i.accountName}` : ""}, ${money(i.totalCents, i.currency)}, ${i.overdue ? "overdue" : INVOICE_STATUS_LABELS[i.status].toLowerCase()}`}
+      testID={`invoice-row-${i.id}`}
+    >
+      <ListCardText>
+        <ListCardTop>
+          <AppText variant="bodyStrong" style={billingStyles.grow}>
+            {i.number}
           </AppText>
-          <AppText variant="small" color={i.overdue ? "dangerInk" : "ink"}>
-            {i.amountDueCents > 0 ? `${money(i.amountDueCents, i.currency)} owed of ${money(i.totalCents, i.currency)}` : `${money(i.totalCents, i.currency)} · nothing owed`}
-          </AppText>
-        </View>
-        <Feather name="chevron-right" size={20} color={colors.muted} />
-      </LinkPressable>
-    </Link>
+          <StatusCell invoice={i} office={office} />
+        </ListCardTop>
+        {office ? <AppText variant="small">{i.accountName}</AppText> : null}
+        <AppText variant="small" color="muted">
+          {`Issued ${day(i.issueDate)} · due ${day(i.dueDate)}${i.kind === "statement" ? " · statement" : ""}`}
+        </AppText>
+        <AppText variant="small" color={i.overdue ? "dangerInk" : "ink"}>
+          {i.amountDueCents > 0 ? `${money(i.amountDueCents, i.currency)} owed of ${money(i.totalCents, i.currency)}` : `${money(i.totalCents, i.currency)} · nothing owed`}
+        </AppText>
+      </ListCardText>
+    </ListCard>
   );
 }
 

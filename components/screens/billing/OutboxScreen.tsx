@@ -6,7 +6,9 @@ import { ChoiceGroup } from "../../ui/ChoiceGroup";
 import { Button } from "../../ui/Button";
 import { Badge, type BadgeTone } from "../../ui/Badge";
 import { FormError, Notice } from "../../ui/FormError";
-import { EmptyState, ErrorState, LoadingState } from "../../ui/States";
+import { DataTable } from "../../ui/DataTable";
+import { ListCard, ListCardTop, ListCards } from "../../ui/ListCard";
+import { QueryStates } from "../../ui/QueryStates";
 import { AppText } from "../../ui/Text";
 import { messageOf } from "../../api/client";
 import { MAIL_STATUSES, useOutboxQuery, useResendMailMutation, type MailStatus, type OutboxMailDto } from "../../api/outbox";
@@ -14,8 +16,7 @@ import { useBakeryTimeZone } from "../../api/bakery";
 import { formatDateTime } from "../../format";
 import { mailKindLabel } from "../../../shared/mail";
 import { useIsWide } from "../../shell/useIsWide";
-import { BillingTable, billingStyles } from "./parts";
-import { colors, radii, space } from "../../theme";
+import { space } from "../../theme";
 
 const STATUS_LABELS: Record<MailStatus, string> = { pending: "Waiting", sending: "Sending", sent: "Sent", failed: "Failed" };
 const STATUS_TONE: Record<MailStatus, BadgeTone> = { pending: "amber", sending: "crust", sent: "sage", failed: "danger" };
@@ -42,15 +43,11 @@ export function OutboxScreen() {
   const when = (m: OutboxMailDto) =>
     m.status === "sent" ? `Sent ${formatDateTime(m.sentAt, timeZone)}` : m.status === "failed" ? `Gave up after ${attemptsLabel(m.attempts)}` : `${m.attempts ? `${attemptsLabel(m.attempts)} · ` : ""}next try ${formatDateTime(m.nextAttemptAt, timeZone)}`;
 
-  let body: React.ReactNode;
-  if (mails.isPending) body = <LoadingState label="Loading outgoing mail…" testID="outbox-loading" />;
-  else if (mails.isError) body = <ErrorState error={mails.error} title="The outbox didn't load" onRetry={() => mails.refetch()} retrying={mails.isFetching} testID="outbox-error" />;
-  else if (mails.data.length === 0) body = <EmptyState icon="mail" title={show === "all" ? "No e-mail yet" : `No ${STATUS_LABELS[show as MailStatus].toLowerCase()} e-mail`} message="Invoices, receipts and invitations show here as they are sent." testID="outbox-empty" />;
-  else if (wide)
-    body = (
-      <BillingTable<OutboxMailDto>
+  const body = (rows: OutboxMailDto[]) =>
+    wide ? (
+      <DataTable<OutboxMailDto>
         testID="outbox-table"
-        rows={mails.data}
+        rows={rows}
         rowKey={(m) => m.id}
         rowTestID={(m) => `outbox-row-${m.id}`}
         rowAlert={(m) => m.status === "failed"}
@@ -78,29 +75,29 @@ export function OutboxScreen() {
           { key: "action", label: "", flex: 0.9, align: "right", render: (m) => resendButton(m) ?? "" },
         ]}
       />
-    );
-  else
-    body = (
-      <View style={billingStyles.cards} testID="outbox-list">
-        {mails.data.map((m) => (
-          <View key={m.id} style={[styles.card, m.status === "failed" && styles.failed]} testID={`outbox-row-${m.id}`}>
-            <View style={billingStyles.cardTop}>
-              <Badge label={STATUS_LABELS[m.status]} tone={STATUS_TONE[m.status]} testID={`outbox-status-${m.id}`} />
-              <AppText variant="small" color={m.status === "failed" ? "ink" : "muted"}>
-                {mailKindLabel(m.kind)}
-              </AppText>
+    ) : (
+      <ListCards testID="outbox-list">
+        {rows.map((m) => (
+          <ListCard key={m.id} alert={m.status === "failed"} testID={`outbox-row-${m.id}`}>
+            <View style={styles.card}>
+              <ListCardTop>
+                <Badge label={STATUS_LABELS[m.status]} tone={STATUS_TONE[m.status]} testID={`outbox-status-${m.id}`} />
+                <AppText variant="small" color={m.status === "failed" ? "ink" : "muted"}>
+                  {mailKindLabel(m.kind)}
+                </AppText>
+              </ListCardTop>
+              <AppText variant="bodyStrong">{m.subject}</AppText>
+              <AppText variant="small" color={m.status === "failed" ? "ink" : "muted"}>{`To ${m.to} · ${when(m)}`}</AppText>
+              {m.lastError ? (
+                <AppText variant="small" color="dangerInk" testID={`outbox-error-${m.id}`}>
+                  {`Last error: ${m.lastError}`}
+                </AppText>
+              ) : null}
+              {resendButton(m)}
             </View>
-            <AppText variant="bodyStrong">{m.subject}</AppText>
-            <AppText variant="small" color={m.status === "failed" ? "ink" : "muted"}>{`To ${m.to} · ${when(m)}`}</AppText>
-            {m.lastError ? (
-              <AppText variant="small" color="dangerInk" testID={`outbox-error-${m.id}`}>
-                {`Last error: ${m.lastError}`}
-              </AppText>
-            ) : null}
-            {resendButton(m)}
-          </View>
+          </ListCard>
         ))}
-      </View>
+      </ListCards>
     );
 
   return (
@@ -115,12 +112,19 @@ export function OutboxScreen() {
       />
       {resent ? <Notice message={resent} testID="outbox-resent" /> : null}
       <FormError message={resend.isError ? messageOf(resend.error) : null} testID="outbox-resend-error" />
-      {body}
+      <QueryStates
+        query={mails}
+        testID="outbox"
+        loadingLabel="Loading outgoing mail…"
+        errorTitle="The outbox didn't load"
+        empty={{ icon: "mail", title: show === "all" ? "No e-mail yet" : `No ${STATUS_LABELS[show as MailStatus].toLowerCase()} e-mail`, message: "Invoices, receipts and invitations show here as they are sent." }}
+      >
+        {body}
+      </QueryStates>
     </Screen>
   );
 }
 
 const styles = StyleSheet.create({
-  card: { gap: space.xs, padding: space.lg, backgroundColor: colors.surface, borderRadius: radii.lg, borderWidth: 1, borderColor: colors.border },
-  failed: { backgroundColor: colors.dangerSoft, borderColor: colors.danger },
+  card: { flex: 1, gap: space.xs },
 });

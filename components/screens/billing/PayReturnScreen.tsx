@@ -8,7 +8,8 @@ import { DetailList } from "../../ui/DetailList";
 import { LinkButton } from "../../ui/LinkButton";
 import { Button } from "../../ui/Button";
 import { TextLink } from "../../ui/TextLink";
-import { EmptyState, ErrorState, LoadingState } from "../../ui/States";
+import { EmptyState, LoadingState } from "../../ui/States";
+import { QueryStates } from "../../ui/QueryStates";
 import { AppText, Heading } from "../../ui/Text";
 import { useAuth } from "../../auth/useAuth";
 import { homePathFor } from "../../auth/homePath";
@@ -86,8 +87,8 @@ function PayReturnBody({ invoiceId, cancelled, office }: PayReturnProps & { offi
   const base = office ? "/office/invoices" : "/buyer/invoices";
   const backLinks = (
     <View style={styles.links}>
-      {valid ? <LinkButton href={`${base}/${invoiceId}` as never} label="See the invoice" icon="file-text" variant="secondary" testID="pay-see-invoice" /> : null}
-      <LinkButton href={base as never} label="Back to invoices" icon="list" variant="ghost" testID="pay-back-invoices" />
+      {valid ? <LinkButton href={`${base}/${invoiceId}`} label="See the invoice" icon="file-text" variant="secondary" testID="pay-see-invoice" /> : null}
+      <LinkButton href={base} label="Back to invoices" icon="list" variant="ghost" testID="pay-back-invoices" />
     </View>
   );
 
@@ -99,99 +100,94 @@ function PayReturnBody({ invoiceId, cancelled, office }: PayReturnProps & { offi
       </Screen>
     );
   }
-  if (detail.isPending) {
-    return (
-      <Screen narrow testID="pay-return">
-        <LoadingState label="Loading the invoice…" testID="pay-loading" />
-      </Screen>
-    );
-  }
-  if (detail.isError) {
-    return (
-      <Screen narrow testID="pay-return">
-        <ErrorState error={detail.error} title="The invoice didn't load" onRetry={() => detail.refetch()} retrying={detail.isFetching} testID="pay-error" />
-        {backLinks}
-      </Screen>
-    );
-  }
 
-  const d = detail.data;
-  const inv = d.invoice;
-  const receipt = [...d.payments].reverse().find((p) => p.method === "card") ?? d.payments[d.payments.length - 1];
+  const result = (d: InvoiceDetailDto) => {
+    const inv = d.invoice;
+    const receipt = [...d.payments].reverse().find((p) => p.method === "card") ?? d.payments[d.payments.length - 1];
 
-  let body: React.ReactNode;
-  if (settled) {
-    body = (
-      <Card testID="pay-paid-card">
-        <View style={[styles.banner, styles.bannerPaid]}>
-          <Feather name="check-circle" size={28} color={colors.sageInk} />
-          <Heading level={2} color="sageInk" testID="pay-paid">
-            Paid
-          </Heading>
-        </View>
-        <AppText>{`Thank you. Invoice ${inv.number} is paid; a receipt is on its way to the billing e-mail.`}</AppText>
-        {receipt ? (
-          <View testID="pay-receipt">
-            <DetailList
-              items={[
-                { label: "Amount", value: money(receipt.amountCents, inv.currency), testID: "pay-receipt-amount" },
-                { label: "Date", value: day(receipt.receivedOn), testID: "pay-receipt-date" },
-                { label: "Method", value: METHOD_LABELS[receipt.method], testID: "pay-receipt-method" },
-                { label: "Invoice", value: inv.number },
-              ]}
-            />
+    let body: React.ReactNode;
+    if (settled) {
+      body = (
+        <Card testID="pay-paid-card">
+          <View style={[styles.banner, styles.bannerPaid]}>
+            <Feather name="check-circle" size={28} color={colors.sageInk} />
+            <Heading level={2} color="sageInk" testID="pay-paid">
+              Paid
+            </Heading>
           </View>
-        ) : null}
-      </Card>
-    );
-  } else if (cancelled) {
-    body = (
-      <Card testID="pay-cancelled-card">
-        <View style={[styles.banner, styles.bannerCalm]}>
-          <Feather name="x-circle" size={26} color={colors.crustInk} />
-          <Heading level={2} color="crustInk" testID="pay-cancelled">
-            The payment was canceled
-          </Heading>
-        </View>
-        <AppText>{`Nothing was charged. ${money(inv.amountDueCents, inv.currency)} is still owed on ${inv.number}.`}</AppText>
-        <PayByCard invoiceId={inv.id} label="Try again" testID="pay-retry" />
-      </Card>
-    );
-  } else if (gaveUp) {
-    body = (
-      <Card testID="pay-timeout-card">
-        <View style={[styles.banner, styles.bannerCalm]}>
-          <Feather name="clock" size={26} color={colors.crustInk} />
-          <Heading level={2} color="crustInk">
-            Still waiting for confirmation
-          </Heading>
-        </View>
-        <AppText testID="pay-timeout">{TIMEOUT_TEXT}</AppText>
-        <AppText variant="small" color="muted">
-          There is no need to pay again. If the invoice still shows money owed tomorrow, contact the bakery.
-        </AppText>
-        <Button label="Check again" icon="refresh-cw" variant="secondary" busy={detail.isFetching} onPress={() => detail.refetch()} testID="pay-check-again" />
-      </Card>
-    );
-  } else {
-    body = (
-      <Card testID="pay-processing-card">
-        <View style={[styles.banner, styles.bannerCalm]} accessibilityLiveRegion="polite">
-          <ActivityIndicator size="small" color={colors.crustInk} />
-          <AppText variant="bodyStrong" color="crustInk" style={styles.flex} testID="pay-processing">
-            {PROCESSING_TEXT}
+          <AppText>{`Thank you. Invoice ${inv.number} is paid; a receipt is on its way to the billing e-mail.`}</AppText>
+          {receipt ? (
+            <View testID="pay-receipt">
+              <DetailList
+                items={[
+                  { label: "Amount", value: money(receipt.amountCents, inv.currency), testID: "pay-receipt-amount" },
+                  { label: "Date", value: day(receipt.receivedOn), testID: "pay-receipt-date" },
+                  { label: "Method", value: METHOD_LABELS[receipt.method], testID: "pay-receipt-method" },
+                  { label: "Invoice", value: inv.number },
+                ]}
+              />
+            </View>
+          ) : null}
+        </Card>
+      );
+    } else if (cancelled) {
+      body = (
+        <Card testID="pay-cancelled-card">
+          <View style={[styles.banner, styles.bannerCalm]}>
+            <Feather name="x-circle" size={26} color={colors.crustInk} />
+            <Heading level={2} color="crustInk" testID="pay-cancelled">
+              The payment was canceled
+            </Heading>
+          </View>
+          <AppText>{`Nothing was charged. ${money(inv.amountDueCents, inv.currency)} is still owed on ${inv.number}.`}</AppText>
+          <PayByCard invoiceId={inv.id} label="Try again" testID="pay-retry" />
+        </Card>
+      );
+    } else if (gaveUp) {
+      body = (
+        <Card testID="pay-timeout-card">
+          <View style={[styles.banner, styles.bannerCalm]}>
+            <Feather name="clock" size={26} color={colors.crustInk} />
+            <Heading level={2} color="crustInk">
+              Still waiting for confirmation
+            </Heading>
+          </View>
+          <AppText testID="pay-timeout">{TIMEOUT_TEXT}</AppText>
+          <AppText variant="small" color="muted">
+            There is no need to pay again. If the invoice still shows money owed tomorrow, contact the bakery.
           </AppText>
-        </View>
-        <AppText color="muted">{`Confirming the card payment for ${inv.number}. This page updates by itself.`}</AppText>
-      </Card>
+          <Button label="Check again" icon="refresh-cw" variant="secondary" busy={detail.isFetching} onPress={() => detail.refetch()} testID="pay-check-again" />
+        </Card>
+      );
+    } else {
+      body = (
+        <Card testID="pay-processing-card">
+          <View style={[styles.banner, styles.bannerCalm]} accessibilityLiveRegion="polite">
+            <ActivityIndicator size="small" color={colors.crustInk} />
+            <AppText variant="bodyStrong" color="crustInk" style={styles.flex} testID="pay-processing">
+              {PROCESSING_TEXT}
+            </AppText>
+          </View>
+          <AppText color="muted">{`Confirming the card payment for ${inv.number}. This page updates by itself.`}</AppText>
+        </Card>
+      );
+    }
+
+
+    return (
+      <>
+        <PageHeader overline="Card payment" title={inv.number} subtitle={`${inv.accountName} · ${money(inv.totalCents, inv.currency)}`} testID="pay-title" />
+        {body}
+      </>
     );
-  }
+  };
 
   return (
     <Screen narrow testID="pay-return">
-      <PageHeader overline="Card payment" title={inv.number} subtitle={`${inv.accountName} · ${money(inv.totalCents, inv.currency)}`} testID="pay-title" />
-      {body}
-      {backLinks}
+      <QueryStates query={detail} testID="pay" loadingLabel="Loading the invoice…" errorTitle="The invoice didn't load">
+        {result}
+      </QueryStates>
+      {detail.isPending ? null : backLinks}
     </Screen>
   );
 }

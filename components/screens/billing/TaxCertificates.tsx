@@ -1,4 +1,5 @@
-import React, { useRef, useState } from "react";
+import React, { useMemo, useRef, useState } from "react";
+import { z } from "zod";
 import { Platform, StyleSheet, View } from "react-native";
 import { Card } from "../../ui/Card";
 import { Button } from "../../ui/Button";
@@ -6,13 +7,17 @@ import { TextField } from "../../ui/TextField";
 import { Badge, type BadgeTone } from "../../ui/Badge";
 import { FormError, Notice } from "../../ui/FormError";
 import { ProgressBar } from "../../ui/ProgressBar";
-import { ErrorState, LoadingState } from "../../ui/States";
+import { FieldFrame } from "../../ui/Field";
+import { HiddenFileInput } from "../../ui/HiddenFileInput";
+import { QueryStates } from "../../ui/QueryStates";
 import { AppText } from "../../ui/Text";
 import { messageOf } from "../../api/client";
 import { downloadCertificate, useCertificatesQuery, useReviewCertificateMutation, useUploadCertificateMutation, type TaxCertificateDto } from "../../api/accountBilling";
 import { useBakeryQuery, useBakeryTimeZone } from "../../api/bakery";
 import { formatDate } from "../../format";
 import { cleanDate } from "../../ordering/dates";
+import { useZodForm } from "../../forms/useZodForm";
+import { readText } from "../../forms/textSchemas";
 import { billingStyles, day } from "./parts";
 import { colors, radii, space } from "../../theme";
 
@@ -45,25 +50,22 @@ export function TaxCertificatesCard({ accountId, canUpload, canReview, audience 
   const timeZone = useBakeryTimeZone();
   const [fileError, setFileError] = useState<string | null>(null);
 
-  let body: React.ReactNode;
-  if (certs.isPending) body = <LoadingState label="Loading certificates…" testID="certs-loading" />;
-  else if (certs.isError) body = <ErrorState error={certs.error} title="Certificates didn't load" onRetry={() => certs.refetch()} retrying={certs.isFetching} testID="certs-error" />;
-  else {
-    const { valid, lapsed } = exemptionState(certs.data);
-    body = (
+  const body = (data: TaxCertificateDto[]) => {
+    const { valid, lapsed } = exemptionState(data);
+    return (
       <>
         {valid ? (
           <Notice message={`${audience === "buyer" ? "Your" : "This account's"} exemption is approved until ${day(valid.expiresOn)}: invoices are issued without sales tax.`} testID="cert-valid" />
         ) : lapsed ? (
           <FormError message={`${audience === "buyer" ? "Your" : "The"} tax-exemption certificate expired on ${day(lapsed.expiresOn)}: tax is charged again until a new one is approved.`} testID="cert-expired-warning" />
         ) : null}
-        {certs.data.length === 0 ? (
+        {data.length === 0 ? (
           <AppText color="muted" testID="certs-empty">
             {audience === "buyer" ? "No certificate on file. If your business buys for resale or is tax-exempt, upload its certificate and the bakery will review it." : "No certificate on file: sales tax is charged on this account's invoices."}
           </AppText>
         ) : (
           <View testID="certs-list">
-            {certs.data.map((c, i) => (
+            {data.map((c, i) => (
               <View key={c.id} style={[styles.row, i > 0 && styles.divider]} testID={`cert-${c.id}`}>
                 <View style={billingStyles.cardTop}>
                   <Badge label={c.expired ? "Expired" : STATUS_LABEL[c.status]} tone={c.expired ? "danger" : STATUS_TONE[c.status]} testID={`cert-${c.id}-status`} />
@@ -96,59 +98,68 @@ export function TaxCertificatesCard({ accountId, canUpload, canReview, audience 
         <FormError message={review.isError ? messageOf(review.error) : null} testID="cert-review-error" />
       </>
     );
-  }
+  };
 
   return (
     <Card title="Tax exemption" testID="tax-certificates">
-      {body}
+      <QueryStates query={certs} testID="certs" loadingLabel="Loading certificates…" errorTitle="Certificates didn't load">
+        {body}
+      </QueryStates>
       {canUpload ? <CertificateUpload accountId={accountId} /> : null}
     </Card>
   );
+}
+
+interface UploadValues {
+  file: File | null;
+  expiresOn: string;
+}
+
+const NO_UPLOAD: UploadValues = { file: null, expiresOn: "" };
+
+/** The upload checked before sending: a file, and an expiry date that has not passed in the bakery's today. */
+export function certificateUploadSchema(today: string | undefined) {
+  return z.object({
+    file: z.custom<File>((f) => f != null, "Choose the certificate file."),
+    expiresOn: readText<string>((text) => {
+      const date = cleanDate(text);
+      if (!date) return { message: "Write the expiry date as YYYY-MM-DD." };
+      if (today && date < today) return { message: "That date has passed: upload a certificate that is still current." };
+      return { value: date };
+    }),
+  });
+}
+
+/** Why a picked file is refused before upload, or null. */
+export function certificateFileProblem(f: Pick<File, "type" | "size">): string | null {
+  if (!CERT_TYPES.includes(f.type)) return "Upload the certificate as a PDF, JPEG or PNG.";
+  if (f.size > CERT_MAX_BYTES) return "The certificate file is larger than 10 MB.";
+  return null;
 }
 
 function CertificateUpload({ accountId }: { accountId: number }) {
   const upload = useUploadCertificateMutation(accountId);
   const today = useBakeryQuery().data?.today;
   const input = useRef<HTMLInputElement | null>(null);
-  const [file, setFile] = useState<File | null>(null);
-  const [expiresOn, setExpiresOn] = useState("");
-  const [fileError, setFileError] = useState<string | null>(null);
-  const [dateError, setDateError] = useState<string | null>(null);
+  const schema = useMemo(() => certificateUploadSchema(today), [today]);
+  const form = useZodForm({ schema, initial: NO_UPLOAD, manyMessage: null });
   const [done, setDone] = useState(false);
+  const file = form.values.file;
 
   const pick = (f: File | undefined) => {
     setDone(false);
-    setFileError(null);
-    if (!f) return;
-    if (!CERT_TYPES.includes(f.type)) {
-      setFileError("Upload the certificate as a PDF, JPEG or PNG.");
-      return;
-    }
-    if (f.size > CERT_MAX_BYTES) {
-      setFileError("The certificate file is larger than 10 MB.");
-      return;
-    }
-    setFile(f);
+    const problem = f ? certificateFileProblem(f) : null;
+    form.setErrors(({ file: _old, ...others }) => (problem ? { ...others, file: problem } : others));
+    if (f && !problem) form.setValue("file", f);
   };
 
   const submit = () => {
     setDone(false);
-    const date = cleanDate(expiresOn);
-    const dErr = !date ? "Write the expiry date as YYYY-MM-DD." : today && date < today ? "That date has passed: upload a certificate that is still current." : null;
-    const fErr = !file ? "Choose the certificate file." : null;
-    setDateError(dErr);
-    setFileError(fErr);
-    if (dErr || fErr || !file || !date) return;
-    upload.mutate(
-      { file, expiresOn: date },
-      {
-        onSuccess: () => {
-          setDone(true);
-          setFile(null);
-          setExpiresOn("");
-        },
-      },
-    );
+    void form.submit(async (checked) => {
+      await upload.mutateAsync(checked);
+      setDone(true);
+      form.reset(NO_UPLOAD);
+    });
   };
 
   if (Platform.OS !== "web") {
@@ -160,40 +171,27 @@ function CertificateUpload({ accountId }: { accountId: number }) {
   }
   return (
     <View style={styles.upload} testID="cert-upload">
-      <AppText variant="label">Upload a certificate</AppText>
-      <AppText variant="small" color="muted">
-        PDF, JPEG or PNG, up to 10 MB. The bakery reviews it; once approved, new invoices carry no sales tax until it expires.
-      </AppText>
-      {done ? <Notice message="Certificate uploaded. The bakery will review it." testID="cert-uploaded" /> : null}
-      <FormError message={upload.isError ? messageOf(upload.error) : null} testID="cert-upload-error" />
-      <input
-        ref={input}
-        type="file"
-        accept="application/pdf,image/jpeg,image/png"
-        style={{ display: "none" }}
-        data-testid="cert-input"
-        aria-label="Certificate file"
-        onChange={(e) => {
-          pick(e.currentTarget.files?.[0]);
-          e.currentTarget.value = "";
-        }}
-      />
-      <View style={billingStyles.buttons}>
-        <Button label={file ? "Choose another file" : "Choose file"} icon="paperclip" variant="secondary" onPress={() => input.current?.click()} testID="cert-choose" />
-        {file ? (
-          <AppText variant="small" testID="cert-file-name" style={styles.fileName} numberOfLines={1}>
-            {file.name}
-          </AppText>
-        ) : null}
-      </View>
-      {fileError ? (
-        <AppText variant="small" color="dangerInk" testID="cert-choose-error">
-          {fileError}
-        </AppText>
-      ) : null}
-      <TextField label="Expires on" placeholder="YYYY-MM-DD" value={expiresOn} onChangeText={setExpiresOn} error={dateError} testID="cert-expires" inputMode="numeric" maxLength={10} />
+      <FieldFrame
+        label="Upload a certificate"
+        hint="PDF, JPEG or PNG, up to 10 MB. The bakery reviews it; once approved, new invoices carry no sales tax until it expires."
+        error={form.errors.file}
+        testID="cert-choose"
+      >
+        {done ? <Notice message="Certificate uploaded. The bakery will review it." testID="cert-uploaded" /> : null}
+        <FormError message={form.formError} testID="cert-upload-error" />
+        <HiddenFileInput ref={input} accept={CERT_TYPES.join(",")} onPick={pick} label="Certificate file" testID="cert-input" />
+        <View style={billingStyles.buttons}>
+          <Button label={file ? "Choose another file" : "Choose file"} icon="paperclip" variant="secondary" onPress={() => input.current?.click()} testID="cert-choose" />
+          {file ? (
+            <AppText variant="small" testID="cert-file-name" style={styles.fileName} numberOfLines={1}>
+              {file.name}
+            </AppText>
+          ) : null}
+        </View>
+      </FieldFrame>
+      <TextField label="Expires on" placeholder="YYYY-MM-DD" {...form.text("expiresOn")} testID="cert-expires" inputMode="numeric" maxLength={10} />
       {upload.isPending ? <ProgressBar value={upload.progress} label="Uploading the certificate" testID="cert-progress" /> : null}
-      <Button label="Upload certificate" icon="upload" busy={upload.isPending} onPress={submit} testID="cert-submit" />
+      <Button label="Upload certificate" icon="upload" busy={form.submitting} onPress={submit} testID="cert-submit" />
     </View>
   );
 }

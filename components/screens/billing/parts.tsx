@@ -1,14 +1,14 @@
 import React from "react";
-import { Pressable, StyleSheet, View } from "react-native";
+import { StyleSheet, View } from "react-native";
 import { Badge, type BadgeTone } from "../../ui/Badge";
 import { AppText } from "../../ui/Text";
-import { TextLink } from "../../ui/TextLink";
+import { TextLink, type TextLinkProps } from "../../ui/TextLink";
 import { formatMoney } from "../../../shared/money";
 import { INVOICE_KIND_LABELS, INVOICE_STATUS_LABELS as SHARED_INVOICE_STATUS_LABELS, PAYMENT_METHOD_LABELS } from "../../../shared/billing";
 import { formatCalendarDate } from "../../../shared/format";
 import { currentLocale } from "../../format";
 import type { InvoiceDto, InvoiceStatus, PaymentDto, CreditNoteDto } from "../../api/invoices";
-import { colors, layout, radii, space } from "../../theme";
+import { colors, radii, space } from "../../theme";
 
 /** Money in an invoice's (or a payout's lower-case) currency, in the bakery's locale. */
 export function money(cents: number, currency = "USD"): string {
@@ -48,99 +48,9 @@ export const DISPOSITION_LABELS: Record<CreditNoteDto["disposition"], string> = 
 
 export const KIND_LABELS: Record<InvoiceDto["kind"], string> = INVOICE_KIND_LABELS;
 
-export interface TableColumn<T> {
-  key: string;
-  label: string;
-  /** Share of the row's width (default 1). */
-  flex?: number;
-  align?: "left" | "right";
-  render: (row: T) => React.ReactNode;
-  /** What the totals row shows in this column. */
-  footer?: React.ReactNode;
-}
-
-export interface BillingTableProps<T> {
-  columns: TableColumn<T>[];
-  rows: T[];
-  rowKey: (row: T) => string | number;
-  onRowPress?: (row: T) => void;
-  rowLabel?: (row: T) => string;
-  rowTestID?: (row: T) => string;
-  /** A row that needs attention gets a red tint. */
-  rowAlert?: (row: T) => boolean;
-  /** Show a totals row from the columns' `footer`. */
-  footer?: boolean;
-  footerTestID?: string;
-  testID?: string;
-}
-
-function cell(content: React.ReactNode, align: "left" | "right" | undefined, strong?: boolean) {
-  if (typeof content === "string" || typeof content === "number") {
-    return (
-      <AppText variant={strong ? "bodyStrong" : "body"} align={align === "right" ? "right" : undefined} numberOfLines={2}>
-        {String(content)}
-      </AppText>
-    );
-  }
-  return content;
-}
-
-/** A wide-screen table with right-aligned money, rows that open their item and an optional totals row. */
-export function BillingTable<T>({ columns, rows, rowKey, onRowPress, rowLabel, rowTestID, rowAlert, footer, footerTestID, testID }: BillingTableProps<T>) {
-  return (
-    <View style={styles.table} testID={testID} role="table">
-      <View style={[styles.row, styles.header]} role="row">
-        {columns.map((c) => (
-          <View key={c.key} style={[styles.cell, { flex: c.flex ?? 1 }, c.align === "right" && styles.right]} role="columnheader">
-            <AppText variant="overline" color="muted" align={c.align === "right" ? "right" : undefined}>
-              {c.label}
-            </AppText>
-          </View>
-        ))}
-      </View>
-      {rows.map((row) => {
-        const cells = columns.map((c) => (
-          <View key={c.key} style={[styles.cell, { flex: c.flex ?? 1 }, c.align === "right" && styles.right]} role="cell">
-            {cell(c.render(row), c.align)}
-          </View>
-        ));
-        const alert = rowAlert?.(row);
-        if (onRowPress) {
-          return (
-            <Pressable
-              key={rowKey(row)}
-              onPress={() => onRowPress(row)}
-              accessibilityRole="button"
-              accessibilityLabel={rowLabel?.(row)}
-              testID={rowTestID?.(row)}
-              style={({ pressed, hovered }: { pressed: boolean; hovered?: boolean }) => [styles.row, styles.divider, alert && styles.alert, (pressed || hovered) && styles.hover]}
-            >
-              {cells}
-            </Pressable>
-          );
-        }
-        return (
-          <View key={rowKey(row)} style={[styles.row, styles.divider, alert && styles.alert]} testID={rowTestID?.(row)} role="row">
-            {cells}
-          </View>
-        );
-      })}
-      {footer ? (
-        <View style={[styles.row, styles.footer]} role="row" testID={footerTestID}>
-          {columns.map((c) => (
-            <View key={c.key} style={[styles.cell, { flex: c.flex ?? 1 }, c.align === "right" && styles.right]} role="cell">
-              {cell(c.footer ?? "", c.align, true)}
-            </View>
-          ))}
-        </View>
-      ) : null}
-    </View>
-  );
-}
-
 /** "‹ All invoices" and the like, above a detail page's title. */
-export function BackLink({ href, label, testID }: { href: string; label: string; testID?: string }) {
-  return <TextLink href={href as never} label={`‹ ${label}`} testID={testID} />;
+export function BackLink({ href, label, testID }: TextLinkProps) {
+  return <TextLink href={href} label={`‹ ${label}`} testID={testID} />;
 }
 
 /** A label and an amount on one line (invoice totals). */
@@ -173,21 +83,6 @@ export function Figure({ label, value, testID, tone }: { label: string; value: s
 }
 
 export const billingStyles = StyleSheet.create({
-  cards: { gap: space.sm },
-  card: {
-    minHeight: layout.minTouch,
-    flexDirection: "row",
-    alignItems: "center",
-    gap: space.md,
-    padding: space.lg,
-    backgroundColor: colors.surface,
-    borderRadius: radii.lg,
-    borderWidth: 1,
-    borderColor: colors.border,
-  },
-  cardAlert: { borderColor: colors.danger, backgroundColor: colors.dangerSoft },
-  cardHover: { backgroundColor: colors.rowHover },
-  cardText: { flex: 1, gap: space.xxs },
   cardTop: { flexDirection: "row", alignItems: "center", gap: space.sm, flexWrap: "wrap" },
   grow: { flexGrow: 1, flexShrink: 1 },
   figures: { flexDirection: "row", flexWrap: "wrap", gap: space.sm },
@@ -202,15 +97,6 @@ export const billingStyles = StyleSheet.create({
 });
 
 const styles = StyleSheet.create({
-  table: { backgroundColor: colors.surface, borderRadius: radii.lg, borderWidth: 1, borderColor: colors.border, overflow: "hidden" },
-  row: { flexDirection: "row", alignItems: "center", minHeight: layout.minTouch + 8, paddingHorizontal: space.md },
-  header: { backgroundColor: colors.sunken, minHeight: layout.minTouch },
-  divider: { borderTopWidth: 1, borderTopColor: colors.border },
-  hover: { backgroundColor: colors.rowHover },
-  alert: { backgroundColor: colors.dangerSoft },
-  footer: { borderTopWidth: 2, borderTopColor: colors.inputBorder, backgroundColor: colors.sunken },
-  cell: { paddingHorizontal: space.sm, paddingVertical: space.sm, justifyContent: "center", minWidth: 0 },
-  right: { alignItems: "flex-end" },
   sum: { flexDirection: "row", alignItems: "baseline", justifyContent: "space-between", gap: space.md, paddingVertical: space.xxs },
   sumStrong: { borderTopWidth: 1, borderTopColor: colors.border, paddingTop: space.sm, marginTop: space.xs },
   sumLabel: { flexShrink: 1 },

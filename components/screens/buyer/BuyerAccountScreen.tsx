@@ -3,7 +3,8 @@ import { Screen } from "../../ui/Screen";
 import { PageHeader } from "../../ui/PageHeader";
 import { Card } from "../../ui/Card";
 import { DetailList } from "../../ui/DetailList";
-import { EmptyState, ErrorState, LoadingState } from "../../ui/States";
+import { EmptyState } from "../../ui/States";
+import { QueryStates } from "../../ui/QueryStates";
 import { Notice } from "../../ui/FormError";
 import { StatusBadge } from "../../ui/Badge";
 import { AppText } from "../../ui/Text";
@@ -33,42 +34,38 @@ export function BuyerAccountScreen() {
   }
   return (
     <Screen narrow testID="buyer-account">
-      {account.isPending ? (
-        <LoadingState label="Loading your account…" />
-      ) : account.isError ? (
-        <>
-          <PageHeader title="Account" />
-          <ErrorState error={account.error} onRetry={() => account.refetch()} retrying={account.isFetching} />
-        </>
-      ) : (
-        <>
-          <PageHeader overline="Account" title={account.data.businessName} />
-          {accountStatusNote(account.data) ? <Notice tone="info" message={accountStatusNote(account.data) ?? ""} /> : null}
-          <Card title="Delivery and billing" action={<StatusBadge status={account.data.status} creditHold={account.data.creditHold} />}>
-            <DetailList
-              items={[
-                { label: "Business", value: account.data.businessName },
-                { label: "Delivery address", value: account.data.deliveryAddress },
-                { label: "Contact name", value: account.data.contactName },
-                { label: "Contact phone", value: account.data.contactPhone },
-                { label: "Billing e-mail", value: account.data.billingEmail },
-                { label: "People ordering", value: String(account.data.buyerCount) },
-                { label: "Customer since", value: formatDate(account.data.createdAt, timeZone) },
-              ]}
-            />
-          </Card>
-          <DeliveryTermsCard accountId={account.data.id} />
-          <TaxCertificatesCard accountId={account.data.id} canUpload canReview={false} audience="buyer" />
-          <CalendarFeedCard />
-          <Card title="Profile" testID="buyer-account-you">
-            <AppText color="muted">{`Signed in as ${user.name} (${user.email}). Change your password there.`}</AppText>
-            <LinkButton href="/buyer/me" label="Your sign-in and password" icon="user" variant="secondary" testID="buyer-account-me" />
-          </Card>
-          <AppText variant="small" color="muted">
-            Something out of date? Tell the bakery and they&apos;ll update it.
-          </AppText>
-        </>
-      )}
+      {account.isError ? <PageHeader title="Account" /> : null}
+      <QueryStates query={account} loadingLabel="Loading your account…">
+        {(a) => (
+          <>
+            <PageHeader overline="Account" title={a.businessName} />
+            {accountStatusNote(a) ? <Notice tone="info" message={accountStatusNote(a) ?? ""} /> : null}
+            <Card title="Delivery and billing" action={<StatusBadge status={a.status} creditHold={a.creditHold} />}>
+              <DetailList
+                items={[
+                  { label: "Business", value: a.businessName },
+                  { label: "Delivery address", value: a.deliveryAddress },
+                  { label: "Contact name", value: a.contactName },
+                  { label: "Contact phone", value: a.contactPhone },
+                  { label: "Billing e-mail", value: a.billingEmail },
+                  { label: "People ordering", value: String(a.buyerCount) },
+                  { label: "Customer since", value: formatDate(a.createdAt, timeZone) },
+                ]}
+              />
+            </Card>
+            <DeliveryTermsCard accountId={a.id} />
+            <TaxCertificatesCard accountId={a.id} canUpload canReview={false} audience="buyer" />
+            <CalendarFeedCard />
+            <Card title="Profile" testID="buyer-account-you">
+              <AppText color="muted">{`Signed in as ${user.name} (${user.email}). Change your password there.`}</AppText>
+              <LinkButton href="/buyer/me" label="Your sign-in and password" icon="user" variant="secondary" testID="buyer-account-me" />
+            </Card>
+            <AppText variant="small" color="muted">
+              Something out of date? Tell the bakery and they&apos;ll update it.
+            </AppText>
+          </>
+        )}
+      </QueryStates>
     </Screen>
   );
 }

@@ -1,22 +1,24 @@
 import React from "react";
 import { StyleSheet, View } from "react-native";
-import { Link } from "expo-router";
-import Feather from "@expo/vector-icons/Feather";
 import { Screen } from "../../ui/Screen";
 import { PageHeader } from "../../ui/PageHeader";
 import { Card } from "../../ui/Card";
-import { EmptyState, ErrorState, LoadingState } from "../../ui/States";
+import { EmptyState } from "../../ui/States";
+import { QueryStates } from "../../ui/QueryStates";
 import { Notice } from "../../ui/FormError";
 import { Badge } from "../../ui/Badge";
 import { LinkButton } from "../../ui/LinkButton";
-import { LinkPressable } from "../../ui/LinkPressable";
 import { AppText, Heading } from "../../ui/Text";
 import { useSignedInUser } from "../../auth/useAuth";
 import { useAccountQuery } from "../../api/accounts";
 import { useBakeryQuery } from "../../api/bakery";
 import { useCalendarQuery } from "../../api/calendar";
 import { BakeryContactCard } from "../common/BakeryContactCard";
-import { CutoffCountdown, dayStatus, useMoney } from "../ordering/parts";
+import { CutoffCountdown } from "../ordering/CutoffCountdown";
+import { dayStatus } from "../../ordering/dayStatus";
+import { useMoney } from "../../ordering/useMoney";
+import { combinedQuery } from "../ordering/combinedQuery";
+import { LinkRow, LinkRowTop, linkRowStyles } from "../ordering/LinkRow";
 import { useServerNow } from "../../ordering/useServerNow";
 import { msUntil } from "../../ordering/countdown";
 import { addDays, dayHeading, formatDayLong, relativeDay } from "../../ordering/dates";
@@ -25,7 +27,7 @@ import { useIsWide } from "../../shell/useIsWide";
 import type { AccountDto } from "../../../shared/schemas/accounts";
 import type { CalendarDayDto } from "../../../shared/schemas/calendar";
 import { productsLabel } from "../../ordering/quantities";
-import { colors, layout, radii, space } from "../../theme";
+import { colors, radii, space } from "../../theme";
 
 /** How many days ahead the home screen looks. */
 export const HOME_DAYS = 14;
@@ -45,9 +47,7 @@ export function homeDays(days: CalendarDayDto[]): CalendarDayDto[] {
 /** A café buyer's home: the coming delivery dates, each with its order and a live countdown to its cut-off. */
 export function BuyerHome() {
   const user = useSignedInUser();
-  const wide = useIsWide();
   const account = useAccountQuery(user.accountId);
-  const bakery = useBakeryQuery();
 
   if (!user.accountId) {
     return (
@@ -64,28 +64,25 @@ export function BuyerHome() {
     );
   }
 
-  if (account.isPending) {
-    return (
-      <Screen testID="buyer-home">
-        <LoadingState label="Loading your account…" />
-      </Screen>
-    );
-  }
-  if (account.isError) {
-    return (
-      <Screen testID="buyer-home">
-        <PageHeader overline="Wholesale ordering" title={`Hello, ${firstName(user.name)}`} />
-        <ErrorState error={account.error} title="Your account didn't load" onRetry={() => account.refetch()} retrying={account.isFetching} />
-      </Screen>
-    );
-  }
+  return (
+    <Screen testID="buyer-home">
+      {account.isError ? <PageHeader overline="Wholesale ordering" title={`Hello, ${firstName(user.name)}`} /> : null}
+      <QueryStates query={account} loadingLabel="Loading your account…" errorTitle="Your account didn't load">
+        {(a) => <Home account={a} />}
+      </QueryStates>
+    </Screen>
+  );
+}
 
-  const a = account.data;
+function Home({ account: a }: { account: AccountDto }) {
+  const user = useSignedInUser();
+  const wide = useIsWide();
+  const bakery = useBakeryQuery();
   const note = accountStatusNote(a);
   const subtitle = bakery.data ? `Ordering from ${bakery.data.name} · ${formatBakeDay(bakery.data.today, bakery.data.now, bakery.data.timeZone)}` : `Welcome back, ${firstName(user.name)}`;
 
   return (
-    <Screen testID="buyer-home">
+    <>
       <PageHeader overline="Wholesale ordering" title={a.businessName} subtitle={subtitle} testID="buyer-home-title" />
       {note ? <Notice tone="info" message={note} testID="buyer-status-note" /> : null}
       <View style={[styles.grid, wide && styles.gridWide]}>
@@ -100,7 +97,7 @@ export function BuyerHome() {
           <BakeryContactCard />
         </View>
       </View>
-    </Screen>
+    </>
   );
 }
 
@@ -110,27 +107,23 @@ function Deliveries() {
   const calendar = useCalendarQuery(today ? { from: today, to: addDays(today, HOME_DAYS - 1) } : null);
   const now = useServerNow();
 
-  if (bakery.isError) {
-    return <ErrorState error={bakery.error} title="The delivery dates didn't load" onRetry={() => bakery.refetch()} retrying={bakery.isFetching} testID="deliveries-error" />;
-  }
-  if (!today || calendar.isPending) return <LoadingState label="Loading your delivery dates…" testID="deliveries-loading" />;
-  if (calendar.isError) {
-    return <ErrorState error={calendar.error} title="The delivery dates didn't load" onRetry={() => calendar.refetch()} retrying={calendar.isFetching} testID="deliveries-error" />;
-  }
-  const days = homeDays(calendar.data);
-  if (days.length === 0) {
-    return (
-      <EmptyState
-        icon="calendar"
-        title="No deliveries in the next two weeks"
-        message="The bakery has no delivery days for you in this time. Call them if that looks wrong."
-        testID="deliveries-empty"
-      />
-    );
-  }
-  const next = days.find((d) => msUntil(d.cutoffAt, now) > 0 && (d.orderable || d.order?.status === "open"));
-  const tz = bakery.data?.timeZone;
+  const loaded = combinedQuery([bakery, calendar], today && calendar.data ? { today, days: homeDays(calendar.data) } : undefined);
+  return (
+    <QueryStates
+      query={loaded}
+      loadingLabel="Loading your delivery dates…"
+      errorTitle="The delivery dates didn't load"
+      testID="deliveries"
+      isEmpty={(d) => d.days.length === 0}
+      empty={{ icon: "calendar", title: "No deliveries in the next two weeks", message: "The bakery has no delivery days for you in this time. Call them if that looks wrong." }}
+    >
+      {(d) => <DeliveryList days={d.days} today={d.today} now={now} timeZone={bakery.data?.timeZone} />}
+    </QueryStates>
+  );
+}
 
+function DeliveryList({ days, today, now, timeZone: tz }: { days: CalendarDayDto[]; today: string; now: number; timeZone?: string }) {
+  const next = days.find((d) => msUntil(d.cutoffAt, now) > 0 && (d.orderable || d.order?.status === "open"));
   return (
     <View style={styles.deliveries}>
       {next ? <NextCutoff day={next} now={now} today={today} timeZone={tz} /> : null}
@@ -178,31 +171,26 @@ function DayRow({ day, now, today, timeZone }: { day: CalendarDayDto; now: numbe
   const summary = day.order ? `${productsLabel(day.order.productCount)} · ${money(day.order.totalCents)}${day.order.source === "standing" ? " · standing order" : ""}` : null;
   const a11y = [dayHeading(day.date, today), status.label, summary].filter(Boolean).join(", ");
   return (
-    <Link href={`/buyer/order/${day.date}`} asChild>
-      <LinkPressable accessibilityRole="link" accessibilityLabel={a11y} testID={`day-${day.date}`} style={StyleSheet.flatten([styles.row, !open && !day.order && styles.rowQuiet])} highlightStyle={styles.rowHover}>
-        <View style={styles.rowText}>
-          <View style={styles.rowTop}>
-            <AppText variant="bodyStrong" style={styles.flex}>
-              {dayHeading(day.date, today)}
-            </AppText>
-            <Badge label={status.label} tone={status.tone} testID={`day-${day.date}-status`} />
-          </View>
-          {summary ? (
-            <AppText variant="small" color="ink" testID={`day-${day.date}-summary`}>
-              {summary}
-            </AppText>
-          ) : null}
-          {open ? (
-            <CutoffCountdown cutoffAt={day.cutoffAt} now={now} timeZone={timeZone} testID={`day-${day.date}-countdown`} />
-          ) : !day.order && day.reason === "past_cutoff" ? (
-            <AppText variant="small" color="muted">
-              No order was placed before the cut-off.
-            </AppText>
-          ) : null}
-        </View>
-        <Feather name="chevron-right" size={20} color={colors.muted} />
-      </LinkPressable>
-    </Link>
+    <LinkRow href={`/buyer/order/${day.date}`} accessibilityLabel={a11y} testID={`day-${day.date}`} quiet={!open && !day.order}>
+      <LinkRowTop>
+        <AppText variant="bodyStrong" style={linkRowStyles.title}>
+          {dayHeading(day.date, today)}
+        </AppText>
+        <Badge label={status.label} tone={status.tone} testID={`day-${day.date}-status`} />
+      </LinkRowTop>
+      {summary ? (
+        <AppText variant="small" color="ink" testID={`day-${day.date}-summary`}>
+          {summary}
+        </AppText>
+      ) : null}
+      {open ? (
+        <CutoffCountdown cutoffAt={day.cutoffAt} now={now} timeZone={timeZone} testID={`day-${day.date}-countdown`} />
+      ) : !day.order && day.reason === "past_cutoff" ? (
+        <AppText variant="small" color="muted">
+          No order was placed before the cut-off.
+        </AppText>
+      ) : null}
+    </LinkRow>
   );
 }
 
@@ -223,21 +211,4 @@ const styles = StyleSheet.create({
     borderColor: colors.crust,
   },
   list: { gap: space.sm },
-  row: {
-    minHeight: layout.minTouch + 20,
-    flexDirection: "row",
-    alignItems: "center",
-    gap: space.md,
-    paddingVertical: space.md,
-    paddingHorizontal: space.lg,
-    backgroundColor: colors.surface,
-    borderRadius: radii.lg,
-    borderWidth: 1,
-    borderColor: colors.border,
-  },
-  rowQuiet: { backgroundColor: colors.page },
-  rowHover: { backgroundColor: colors.rowHover },
-  rowText: { flex: 1, gap: space.xs },
-  rowTop: { flexDirection: "row", alignItems: "center", gap: space.sm, flexWrap: "wrap" },
-  flex: { flexGrow: 1, flexShrink: 1 },
 });

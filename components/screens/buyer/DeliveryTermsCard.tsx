@@ -1,11 +1,12 @@
 import React from "react";
 import { Card } from "../../ui/Card";
 import { DetailList } from "../../ui/DetailList";
-import { ErrorState, LoadingState } from "../../ui/States";
+import { QueryStates } from "../../ui/QueryStates";
 import { useCalendarSettingsQuery } from "../../api/calendar";
 import { useAccountDeliveryQuery } from "../../api/delivery";
-import { accountWeekdays, listWeekdays } from "./StandingOrderScreen";
-import { useMoney } from "../ordering/parts";
+import { accountWeekdays, listWeekdays } from "../../ordering/standing";
+import { useMoney } from "../../ordering/useMoney";
+import { combinedQuery } from "../ordering/combinedQuery";
 import { formatTimeOfDay } from "../../../shared/format";
 import { currentLocale } from "../../format";
 
@@ -22,23 +23,21 @@ export function DeliveryTermsCard({ accountId }: { accountId: number }) {
   const settings = useCalendarSettingsQuery();
   const delivery = useAccountDeliveryQuery(accountId);
   const money = useMoney();
-  const failed = settings.isError ? settings : delivery.isError ? delivery : null;
+  const loaded = combinedQuery([settings, delivery], settings.data && delivery.data ? { settings: settings.data, delivery: delivery.data } : undefined);
   return (
     <Card title="Deliveries and ordering" testID="delivery-terms">
-      {failed ? (
-        <ErrorState error={failed.error} onRetry={() => failed.refetch()} retrying={failed.isFetching} testID="delivery-terms-error" />
-      ) : !settings.data || !delivery.data ? (
-        <LoadingState label="Loading your delivery terms…" />
-      ) : (
-        <DetailList
-          items={[
-            { label: "Delivery days", value: listWeekdays(accountWeekdays(settings.data.deliveryWeekdays, delivery.data.routeWeekdays), true) || "None set", testID: "terms-days" },
-            { label: "Order by", value: `${cutoffRule(settings.data.cutoffTime, settings.data.leadDays)} (${settings.data.timeZone.replace(/_/g, " ")} time)`, testID: "terms-cutoff" },
-            { label: "Minimum order", value: delivery.data.minimumOrderCents > 0 ? money(delivery.data.minimumOrderCents) : "No minimum", testID: "terms-minimum" },
-            { label: "Order ahead", value: `Up to ${settings.data.horizonDays} days` },
-          ]}
-        />
-      )}
+      <QueryStates query={loaded} loadingLabel="Loading your delivery terms…" errorTestID="delivery-terms-error">
+        {(d) => (
+          <DetailList
+            items={[
+              { label: "Delivery days", value: listWeekdays(accountWeekdays(d.settings.deliveryWeekdays, d.delivery.routeWeekdays), true) || "None set", testID: "terms-days" },
+              { label: "Order by", value: `${cutoffRule(d.settings.cutoffTime, d.settings.leadDays)} (${d.settings.timeZone.replace(/_/g, " ")} time)`, testID: "terms-cutoff" },
+              { label: "Minimum order", value: d.delivery.minimumOrderCents > 0 ? money(d.delivery.minimumOrderCents) : "No minimum", testID: "terms-minimum" },
+              { label: "Order ahead", value: `Up to ${d.settings.horizonDays} days` },
+            ]}
+          />
+        )}
+      </QueryStates>
     </Card>
   );
 }

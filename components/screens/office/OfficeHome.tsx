@@ -4,7 +4,7 @@ import { Screen } from "../../ui/Screen";
 import { PageHeader } from "../../ui/PageHeader";
 import { Card } from "../../ui/Card";
 import { StatTile } from "../../ui/StatTile";
-import { ErrorState, LoadingState } from "../../ui/States";
+import { QueryStates } from "../../ui/QueryStates";
 import { LinkButton } from "../../ui/LinkButton";
 import { AppText } from "../../ui/Text";
 import { useSignedInUser } from "../../auth/useAuth";
@@ -30,51 +30,49 @@ export function OfficeHome() {
   return (
     <Screen testID="office-home">
       <PageHeader overline={`Welcome back, ${firstName(user.name)}`} title="Office" subtitle={subtitle} testID="office-home-title" />
-      {summary.isPending ? (
-        <LoadingState label="Counting accounts and people…" />
-      ) : summary.isError ? (
-        <ErrorState error={summary.error} onRetry={() => summary.refetch()} retrying={summary.isFetching} />
-      ) : (
-        <View style={[styles.grid, wide && styles.gridWide]}>
-          <Card title="Customer accounts" style={wide ? styles.cellWide : undefined} testID="office-accounts-card">
-            <View style={styles.tiles}>
-              <StatTile label="Active" value={summary.data.accounts.active} testID="count-accounts-active" />
-              <StatTile label={ACCOUNT_STATUS_LABELS.on_hold} value={summary.data.accounts.paused} testID="count-accounts-paused" />
-              <StatTile label={CREDIT_HOLD_LABEL} value={summary.data.accounts.creditHold} testID="count-accounts-credit-hold" />
-              <StatTile label="Closed" value={summary.data.accounts.closed} testID="count-accounts-closed" />
-            </View>
-            <AppText color="muted">{`${summary.data.accounts.total} accounts in all.`}</AppText>
-            <LinkButton href="/office/accounts" label="Open accounts" icon="arrow-right" testID="office-open-accounts" />
-          </Card>
-          <Card title="Orders and products" style={wide ? styles.cellWide : undefined} testID="office-orders-card">
-            <AppText color="muted">The orders board shows each delivery date by account and product, with totals and a CSV export.</AppText>
-            <View style={styles.buttons}>
-              <LinkButton href="/office/orders" label="Orders board" icon="clipboard" testID="office-open-orders" />
-              <LinkButton href="/office/products" label="Products" icon="shopping-bag" variant="secondary" testID="office-open-products" />
-            </View>
-          </Card>
-          {isOwner ? (
-            <Card title="Production" style={wide ? styles.cellWide : undefined} testID="office-production-card">
-              <AppText color="muted">The bake day, dough formulas, ingredients and what to buy for the week.</AppText>
-              <View style={styles.buttons}>
-                <LinkButton href="/office/production/day" label="Bake day" icon="sun" testID="office-open-bake-day" />
-                <LinkButton href="/office/production" label="Production" icon="layers" variant="secondary" testID="office-open-production" />
-              </View>
-            </Card>
-          ) : null}
-          {isOwner ? (
-            <Card title="People" style={wide ? styles.cellWide : undefined} testID="office-people-card">
+      <QueryStates query={summary} loadingLabel="Counting accounts and people…">
+        {(counts) => (
+          <View style={[styles.grid, wide && styles.gridWide]}>
+            <Card title="Customer accounts" style={wide ? styles.cellWide : undefined} testID="office-accounts-card">
               <View style={styles.tiles}>
-                <StatTile label="Active sign-ins" value={summary.data.users.active} testID="count-users-active" />
-                <StatTile label="Turned off" value={summary.data.users.disabled} testID="count-users-disabled" />
-                <StatTile label="Invitations waiting" value={summary.data.users.pendingInvitations} testID="count-invitations" />
+                <StatTile label="Active" value={counts.accounts.active} testID="count-accounts-active" />
+                <StatTile label={ACCOUNT_STATUS_LABELS.on_hold} value={counts.accounts.paused} testID="count-accounts-paused" />
+                <StatTile label={CREDIT_HOLD_LABEL} value={counts.accounts.creditHold} testID="count-accounts-credit-hold" />
+                <StatTile label="Closed" value={counts.accounts.closed} testID="count-accounts-closed" />
               </View>
-              <AppText color="muted">{`${summary.data.users.total} people in all.`}</AppText>
-              <LinkButton href="/office/people" label="Open people" icon="arrow-right" testID="office-open-people" />
+              <AppText color="muted">{`${counts.accounts.total} accounts in all.`}</AppText>
+              <LinkButton href="/office/accounts" label="Open accounts" icon="arrow-right" testID="office-open-accounts" />
             </Card>
-          ) : null}
-        </View>
-      )}
+            <Card title="Orders and products" style={wide ? styles.cellWide : undefined} testID="office-orders-card">
+              <AppText color="muted">The orders board shows each delivery date by account and product, with totals and a CSV export.</AppText>
+              <View style={styles.buttons}>
+                <LinkButton href="/office/orders" label="Orders board" icon="clipboard" testID="office-open-orders" />
+                <LinkButton href="/office/products" label="Products" icon="shopping-bag" variant="secondary" testID="office-open-products" />
+              </View>
+            </Card>
+            {isOwner ? (
+              <Card title="Production" style={wide ? styles.cellWide : undefined} testID="office-production-card">
+                <AppText color="muted">The bake day, dough formulas, ingredients and what to buy for the week.</AppText>
+                <View style={styles.buttons}>
+                  <LinkButton href="/office/production/day" label="Bake day" icon="sun" testID="office-open-bake-day" />
+                  <LinkButton href="/office/production" label="Production" icon="layers" variant="secondary" testID="office-open-production" />
+                </View>
+              </Card>
+            ) : null}
+            {isOwner ? (
+              <Card title="People" style={wide ? styles.cellWide : undefined} testID="office-people-card">
+                <View style={styles.tiles}>
+                  <StatTile label="Active sign-ins" value={counts.users.active} testID="count-users-active" />
+                  <StatTile label="Turned off" value={counts.users.disabled} testID="count-users-disabled" />
+                  <StatTile label="Invitations waiting" value={counts.users.pendingInvitations} testID="count-invitations" />
+                </View>
+                <AppText color="muted">{`${counts.users.total} people in all.`}</AppText>
+                <LinkButton href="/office/people" label="Open people" icon="arrow-right" testID="office-open-people" />
+              </Card>
+            ) : null}
+          </View>
+        )}
+      </QueryStates>
     </Screen>
   );
 }

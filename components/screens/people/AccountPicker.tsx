@@ -2,11 +2,12 @@ import React, { useState } from "react";
 import { StyleSheet, View } from "react-native";
 import { ChoiceGroup } from "../../ui/ChoiceGroup";
 import { TextField } from "../../ui/TextField";
-import { ErrorState, LoadingState } from "../../ui/States";
+import { FieldFrame } from "../../ui/Field";
+import { QueryStates } from "../../ui/QueryStates";
 import { AppText } from "../../ui/Text";
 import { useAccountsQuery } from "../../api/accounts";
 import { space } from "../../theme";
-import { accountStatusLabel } from "../../../shared/schemas/accounts";
+import { accountStatusLabel, type AccountDto } from "../../../shared/schemas/accounts";
 
 export interface AccountPickerProps {
   value: number | null;
@@ -20,29 +21,41 @@ export function AccountPicker({ value, onChange, error, testID = "account-picker
   const accounts = useAccountsQuery({});
   const [filter, setFilter] = useState("");
 
-  if (accounts.isPending) return <LoadingState label="Loading accounts…" />;
-  if (accounts.isError) return <ErrorState error={accounts.error} title="Accounts didn't load" onRetry={() => accounts.refetch()} retrying={accounts.isFetching} />;
+  return (
+    <QueryStates query={accounts} loadingTestID="loading" errorTestID="error" loadingLabel="Loading accounts…" errorTitle="Accounts didn't load">
+      {(all) => {
+        const open = all.filter((a) => a.status !== "closed");
+        if (open.length === 0) {
+          return (
+            <View testID={testID}>
+              <FieldFrame label="Customer account" error={error} testID={testID}>
+                <AppText color="muted">There are no open customer accounts yet. Add the account first, then invite its buyer.</AppText>
+              </FieldFrame>
+            </View>
+          );
+        }
+        return <AccountChoices open={open} value={value} onChange={onChange} error={error} testID={testID} filter={filter} onFilter={setFilter} />;
+      }}
+    </QueryStates>
+  );
+}
 
-  const open = accounts.data.filter((a) => a.status !== "closed");
-  if (open.length === 0) {
-    return (
-      <View style={styles.wrap} testID={testID}>
-        <AppText variant="label">Customer account</AppText>
-        <AppText color="muted">There are no open customer accounts yet. Add the account first, then invite its buyer.</AppText>
-        {error ? (
-          <AppText variant="small" color="dangerInk" testID={`${testID}-error`}>
-            {error}
-          </AppText>
-        ) : null}
-      </View>
-    );
-  }
+interface AccountChoicesProps extends AccountPickerProps {
+  testID: string;
+  /** The accounts that can take a buyer. */
+  open: AccountDto[];
+  filter: string;
+  onFilter: (text: string) => void;
+}
+
+/** The open accounts to choose from, with a filter when there are many. */
+function AccountChoices({ open, value, onChange, error, testID, filter, onFilter }: AccountChoicesProps) {
   const f = filter.trim().toLowerCase();
   const shown = f ? open.filter((a) => a.businessName.toLowerCase().includes(f) || a.id === value) : open;
 
   return (
     <View style={styles.wrap}>
-      {open.length > 6 ? <TextField label="Find an account" value={filter} onChangeText={setFilter} testID={`${testID}-filter`} autoCapitalize="none" /> : null}
+      {open.length > 6 ? <TextField label="Find an account" value={filter} onChangeText={onFilter} testID={`${testID}-filter`} autoCapitalize="none" /> : null}
       <ChoiceGroup<string>
         label="Customer account"
         layout="list"

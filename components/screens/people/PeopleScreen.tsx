@@ -3,12 +3,13 @@ import { StyleSheet, View } from "react-native";
 import { Screen } from "../../ui/Screen";
 import { PageHeader } from "../../ui/PageHeader";
 import { Card } from "../../ui/Card";
-import { TextField } from "../../ui/TextField";
+import { SEARCH_INPUT, TextField } from "../../ui/TextField";
 import { Button } from "../../ui/Button";
 import { LinkButton } from "../../ui/LinkButton";
 import { FormError, Notice } from "../../ui/FormError";
-import { EmptyState, ErrorState, LoadingState } from "../../ui/States";
+import { QueryStates } from "../../ui/QueryStates";
 import { RoleBadge } from "../../ui/Badge";
+import { TableFrame, TableHeaderRow } from "../../ui/DataTable";
 import { AppText } from "../../ui/Text";
 import { useSignedInUser } from "../../auth/useAuth";
 import { useUsersQuery } from "../../api/users";
@@ -19,8 +20,8 @@ import { useDebounced } from "../../forms/useDebounced";
 import { formatDateTime } from "../../format";
 import { useIsWide } from "../../shell/useIsWide";
 import type { InvitationDto } from "../../../shared/schemas/users";
-import { UserRow } from "./UserRow";
-import { colors, layout, radii, space } from "../../theme";
+import { PEOPLE_COLUMNS, UserRow } from "./UserRow";
+import { colors, space } from "../../theme";
 
 /** The owner's people desk: everyone with a sign-in, waiting invitations, and the way to invite. */
 export function PeopleScreen({ invited }: { invited?: string }) {
@@ -53,48 +54,37 @@ export function PeopleScreen({ invited }: { invited?: string }) {
               value={q}
               onChangeText={setQ}
               testID="people-search"
-              autoCapitalize="none"
-              autoCorrect={false}
-              returnKeyType="search"
+              {...SEARCH_INPUT}
             />
           </View>
         </View>
-        {users.isPending ? (
-          <LoadingState label="Loading people…" />
-        ) : users.isError ? (
-          <ErrorState error={users.error} title="People didn't load" onRetry={() => users.refetch()} retrying={users.isFetching} testID="people-error" />
-        ) : users.data.length === 0 ? (
-          <EmptyState icon="users" title={search ? "No one matches" : "No one here yet"} message={search ? "Try a name, an e-mail or an account." : undefined} testID="people-empty" />
-        ) : wide ? (
-          <View style={styles.table} testID="people-table">
-            <View style={styles.tableHead}>
-              {[
-                ["Person", 2.2],
-                ["Role", 1.4],
-                ["Sign-in", 0.9],
-                ["Last signed in", 1.2],
-                ["", 2],
-              ].map(([label, flex]) => (
-                <View key={String(label) || "actions"} style={{ flex: Number(flex) }}>
-                  <AppText variant="overline" color="muted">
-                    {String(label)}
-                  </AppText>
-                </View>
-              ))}
-            </View>
-            {users.data.map((u, i) => (
+        <QueryStates
+          query={users}
+          testID="people"
+          loadingTestID="loading"
+          loadingLabel="Loading people…"
+          errorTitle="People didn't load"
+          empty={{ icon: "users", title: search ? "No one matches" : "No one here yet", message: search ? "Try a name, an e-mail or an account." : undefined }}
+        >
+          {(rows) =>
+            wide ? (
+          <TableFrame testID="people-table">
+            <TableHeaderRow columns={PEOPLE_COLUMNS} />
+            {rows.map((u, i) => (
               <View key={u.id} style={i > 0 ? styles.divider : undefined}>
                 <UserRow user={u} isSelf={u.id === me.id} wide />
               </View>
             ))}
-          </View>
-        ) : (
+          </TableFrame>
+            ) : (
           <View style={styles.cards} testID="people-list">
-            {users.data.map((u) => (
+            {rows.map((u) => (
               <UserRow key={u.id} user={u} isSelf={u.id === me.id} wide={false} />
             ))}
           </View>
-        )}
+            )
+          }
+        </QueryStates>
       </View>
     </Screen>
   );
@@ -102,19 +92,20 @@ export function PeopleScreen({ invited }: { invited?: string }) {
 
 function Invitations({ wide }: { wide: boolean }) {
   const invitations = useInvitationsQuery();
-  if (invitations.isPending) return <LoadingState label="Loading invitations…" testID="invitations-loading" />;
-  if (invitations.isError) {
-    return <ErrorState error={invitations.error} title="Invitations didn't load" onRetry={() => invitations.refetch()} retrying={invitations.isFetching} testID="invitations-error" />;
-  }
-  if (invitations.data.length === 0) return null;
   return (
-    <Card title={`Waiting invitations (${invitations.data.length})`} testID="invitations-card">
-      <View>
-        {invitations.data.map((inv, i) => (
-          <InvitationLine key={inv.id} invitation={inv} first={i === 0} wide={wide} />
-        ))}
-      </View>
-    </Card>
+    <QueryStates query={invitations} testID="invitations" loadingLabel="Loading invitations…" errorTitle="Invitations didn't load">
+      {(waiting) =>
+        waiting.length === 0 ? null : (
+          <Card title={`Waiting invitations (${waiting.length})`} testID="invitations-card">
+            <View>
+              {waiting.map((inv, i) => (
+                <InvitationLine key={inv.id} invitation={inv} first={i === 0} wide={wide} />
+              ))}
+            </View>
+          </Card>
+        )
+      }
+    </QueryStates>
   );
 }
 
@@ -166,15 +157,6 @@ const styles = StyleSheet.create({
   searchRow: { gap: space.md },
   searchRowWide: { flexDirection: "row", alignItems: "flex-end", justifyContent: "space-between" },
   searchWide: { width: 380 },
-  table: { backgroundColor: colors.surface, borderRadius: radii.lg, borderWidth: 1, borderColor: colors.border, overflow: "hidden" },
-  tableHead: {
-    flexDirection: "row",
-    gap: space.md,
-    backgroundColor: colors.sunken,
-    paddingHorizontal: space.md,
-    minHeight: layout.minTouch,
-    alignItems: "center",
-  },
   divider: { borderTopWidth: 1, borderTopColor: colors.border },
   cards: { gap: space.sm },
   invite: { paddingVertical: space.md, gap: space.sm },

@@ -1,18 +1,20 @@
 import React, { useState } from "react";
+import { z } from "zod";
 import { StyleSheet, View } from "react-native";
 import { Button } from "../../ui/Button";
 import { ChoiceGroup } from "../../ui/ChoiceGroup";
 import { FormError, Notice } from "../../ui/FormError";
 import { Badge, RoleBadge } from "../../ui/Badge";
 import { AppText } from "../../ui/Text";
+import { TableCell } from "../../ui/DataTable";
+import { ListCard } from "../../ui/ListCard";
 import { useUpdateUserMutation } from "../../api/users";
 import { useBakeryTimeZone } from "../../api/bakery";
 import { ApiError, messageOf } from "../../api/client";
-import { splitError, validate } from "../../forms/errors";
+import { useZodForm } from "../../forms/useZodForm";
 import { formatDateTime } from "../../format";
 import { userUpdateSchema, type UserDto } from "../../../shared/schemas/users";
 import { ROLE_LABELS, type Role } from "../../../shared/roles";
-import type { FieldErrors } from "../../../shared/errors";
 import { AccountPicker } from "./AccountPicker";
 import { ROLE_CHOICES } from "./roleChoices";
 import { colors, radii, space } from "../../theme";
@@ -22,6 +24,22 @@ export interface UserRowProps {
   isSelf: boolean;
   wide: boolean;
 }
+
+const ROLE_FIELDS = ["role", "accountId"] as const;
+
+/** The people table's columns (PeopleScreen draws the header, each UserRow its cells). */
+export const PEOPLE_COLUMNS = [
+  { key: "person", label: "Person", flex: 2.2 },
+  { key: "role", label: "Role", flex: 1.4 },
+  { key: "status", label: "Sign-in", flex: 0.9 },
+  { key: "last", label: "Last signed in", flex: 1.2 },
+  { key: "actions", label: "", flex: 2 },
+] as const;
+
+/** A role change: the shared update schema, and a buyer needs the account they order for. */
+const ROLE_CHANGE = userUpdateSchema.superRefine((v, ctx) => {
+  if (v.role === "buyer" && !v.accountId) ctx.addIssue({ code: z.ZodIssueCode.custom, path: ["accountId"], message: "Choose the customer account this buyer orders for." });
+});
 
 /** Why a change was refused, in words the owner can act on. */
 export function userChangeMessage(error: unknown): string {
@@ -36,61 +54,40 @@ export function UserRow({ user, isSelf, wide }: UserRowProps) {
   const mutation = useUpdateUserMutation();
   const timeZone = useBakeryTimeZone();
   const [editing, setEditing] = useState(false);
-  const [role, setRole] = useState<Role>(user.role);
-  const [accountId, setAccountId] = useState<number | null>(user.accountId);
-  const [fields, setFields] = useState<FieldErrors>({});
-  const [error, setError] = useState<string | null>(null);
+  const form = useZodForm({
+    schema: ROLE_CHANGE,
+    initial: { role: user.role, accountId: user.accountId },
+    toInput: (v) => (v.role === "buyer" ? v : { role: v.role, accountId: null }),
+    fields: ROLE_FIELDS,
+    manyMessage: null,
+    errorMessage: userChangeMessage,
+  });
+  const { values, errors: fields } = form;
   const [done, setDone] = useState<string | null>(null);
 
   const startEdit = () => {
-    setRole(user.role);
-    setAccountId(user.accountId);
-    setFields({});
-    setError(null);
+    form.reset({ role: user.role, accountId: user.accountId });
     setDone(null);
     setEditing(true);
   };
 
-  const fail = (err: unknown) => {
-    const split = splitError(err, ["role", "accountId"]);
-    setFields(split.fields);
-    setError(split.formError ? userChangeMessage(err) : null);
-  };
-
   const saveRole = () => {
-    setError(null);
     setDone(null);
-    const patch = role === "buyer" ? { role, accountId } : { role, accountId: null };
-    const checked = validate(userUpdateSchema, patch);
-    if (!checked.ok) {
-      setFields(checked.fields);
-      return;
-    }
-    if (role === "buyer" && !accountId) {
-      setFields({ accountId: "Choose the customer account this buyer orders for." });
-      return;
-    }
-    setFields({});
-    mutation.mutate(
-      { id: user.id, patch: checked.data },
-      {
-        onSuccess: (saved) => {
-          setEditing(false);
-          setDone(`${saved.name} is now ${saved.role === "owner" ? "the" : "a"} ${ROLE_LABELS[saved.role].toLowerCase()}${saved.accountName ? ` for ${saved.accountName}` : ""}.`);
-        },
-        onError: fail,
-      },
-    );
+    void form.submit(async (patch) => {
+      const saved = await mutation.mutateAsync({ id: user.id, patch });
+      setEditing(false);
+      setDone(`${saved.name} is now ${saved.role === "owner" ? "the" : "a"} ${ROLE_LABELS[saved.role].toLowerCase()}${saved.accountName ? ` for ${saved.accountName}` : ""}.`);
+    });
   };
 
   const toggleDisabled = () => {
-    setError(null);
+    form.setFormError(null);
     setDone(null);
     mutation.mutate(
       { id: user.id, patch: { disabled: !user.disabled } },
       {
         onSuccess: (saved) => setDone(saved.disabled ? `${saved.name} can no longer sign in.` : `${saved.name} can sign in again.`),
-        onError: (err) => setError(userChangeMessage(err)),
+        onError: (err) => form.setFormError(userChangeMessage(err)),
       },
     );
   };
@@ -136,19 +133,19 @@ export function UserRow({ user, isSelf, wide }: UserRowProps) {
     </View>
   );
 
-  return (
-    <View style={[styles.row, !wide && styles.card]} testID={`user-row-${user.id}`}>
+  const content = (
+    <>
       {wide ? (
-        <View style={styles.wideLine}>
-          <View style={{ flex: 2.2 }}>{who}</View>
-          <View style={{ flex: 1.4 }}>{roleCell}</View>
-          <View style={{ flex: 0.9 }}>{status}</View>
-          <View style={{ flex: 1.2 }}>
+        <View style={styles.wideLine} role="row">
+          <TableCell column={PEOPLE_COLUMNS[0]}>{who}</TableCell>
+          <TableCell column={PEOPLE_COLUMNS[1]}>{roleCell}</TableCell>
+          <TableCell column={PEOPLE_COLUMNS[2]}>{status}</TableCell>
+          <TableCell column={PEOPLE_COLUMNS[3]}>
             <AppText variant="small" color="muted">
               {formatDateTime(user.lastSignInAt, timeZone)}
             </AppText>
-          </View>
-          <View style={{ flex: 2 }}>{actions}</View>
+          </TableCell>
+          <TableCell column={PEOPLE_COLUMNS[4]}>{actions}</TableCell>
         </View>
       ) : (
         <View style={styles.narrow}>
@@ -162,25 +159,35 @@ export function UserRow({ user, isSelf, wide }: UserRowProps) {
         </View>
       )}
       {done ? <Notice message={done} testID={`user-${user.id}-done`} /> : null}
-      <FormError message={error} testID={`user-${user.id}-error`} />
+      <FormError message={form.formError} testID={`user-${user.id}-error`} />
       {editing ? (
         <View style={styles.editor} testID={`user-${user.id}-editor`}>
-          <ChoiceGroup<Role> label={`New role for ${user.name}`} choices={ROLE_CHOICES} value={role} onChange={setRole} error={fields.role} testID={`user-${user.id}-role`} />
-          {role === "buyer" ? <AccountPicker value={accountId} onChange={setAccountId} error={fields.accountId} testID={`user-${user.id}-account`} /> : null}
+          <ChoiceGroup<Role> label={`New role for ${user.name}`} choices={ROLE_CHOICES} value={values.role} onChange={form.set("role")} error={fields.role} testID={`user-${user.id}-role`} />
+          {values.role === "buyer" ? <AccountPicker value={values.accountId} onChange={form.set("accountId")} error={fields.accountId} testID={`user-${user.id}-account`} /> : null}
           <View style={styles.actions}>
-            <Button label="Save role" small busy={mutation.isPending} onPress={saveRole} testID={`user-${user.id}-save-role`} />
+            <Button label="Save role" small busy={form.submitting} onPress={saveRole} testID={`user-${user.id}-save-role`} />
             <Button label="Cancel" small variant="ghost" onPress={() => setEditing(false)} />
           </View>
         </View>
       ) : null}
+    </>
+  );
+  // From 1024 px a row of the people table; on a phone a card of its own.
+  return wide ? (
+    <View style={styles.row} testID={`user-row-${user.id}`}>
+      {content}
     </View>
+  ) : (
+    <ListCard testID={`user-row-${user.id}`}>
+      <View style={styles.cardBody}>{content}</View>
+    </ListCard>
   );
 }
 
 const styles = StyleSheet.create({
   row: { gap: space.sm, paddingVertical: space.md, paddingHorizontal: space.md },
-  card: { backgroundColor: colors.surface, borderRadius: radii.lg, borderWidth: 1, borderColor: colors.border, padding: space.lg },
-  wideLine: { flexDirection: "row", alignItems: "center", gap: space.md },
+  cardBody: { flex: 1, minWidth: 0, gap: space.sm },
+  wideLine: { flexDirection: "row", alignItems: "center" },
   narrow: { gap: space.sm },
   narrowTop: { flexDirection: "row", justifyContent: "space-between", alignItems: "flex-start", gap: space.sm },
   who: { flexShrink: 1, minWidth: 0, gap: space.xxs },

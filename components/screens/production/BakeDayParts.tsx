@@ -286,7 +286,7 @@ export interface PansCardProps {
   wide: boolean;
   saving: boolean;
   error: string | null;
-  formulasHref: string;
+  formulasHref: KitchenPaths["formulas"];
   /** Piece weights in these units (grams when absent). */
   units?: Units;
 }
@@ -356,7 +356,7 @@ export function PansCard({ plan, extras, onExtra, wide, saving, error, formulasH
           );
         })}
       </View>
-      {plan.products.some((p) => p.formulaId === null) ? <TextLink href={formulasHref as never} label="Give products a formula" /> : null}
+      {plan.products.some((p) => p.formulaId === null) ? <TextLink href={formulasHref} label="Give products a formula" /> : null}
       {saving ? (
         <AppText variant="small" color="muted" testID="bake-day-saving">
           Saving…
@@ -509,7 +509,7 @@ export function SettingsFooter({ units, paths, isOwner }: { units: Units; paths:
         />
       )}
       {isOwner && paths.settings ? (
-        <TextLink href={paths.settings as never} label="Change production settings" testID="open-production-settings" />
+        <TextLink href={paths.settings} label="Change production settings" testID="open-production-settings" />
       ) : (
         <AppText variant="small" color="muted">
           The owner sets these in the office.

@@ -1,9 +1,10 @@
-import React, { useEffect, useRef, useState } from "react";
+import React, { useState } from "react";
 import { StyleSheet, View } from "react-native";
 import { useRouter } from "expo-router";
 import { Screen } from "../../ui/Screen";
 import { PageHeader } from "../../ui/PageHeader";
 import { EmptyState, ErrorState, LoadingState } from "../../ui/States";
+import { QueryStates } from "../../ui/QueryStates";
 import { LinkButton } from "../../ui/LinkButton";
 import { TextLink } from "../../ui/TextLink";
 import { FormError } from "../../ui/FormError";
@@ -17,25 +18,32 @@ import {
   usePlanQuery,
   useProgressMutation,
   useRecalculatePlanMutation,
-  useSaveBakeDayMutation,
-  type BakeDayInput,
   type PlanView,
 } from "../../api/production";
 import { messageOf } from "../../api/client";
 import { cleanDate, formatDay } from "../../ordering/dates";
-import { parseQuantity } from "../../ordering/quantities";
 import { useServerNow } from "../../ordering/useServerNow";
 import { progressCount, stepBakeDay, upcomingBakeDays } from "../../production/plan";
 import { kitchenPaths, type KitchenArea, type KitchenPaths } from "../../production/paths";
 import { useUnits, type Units } from "../../production/units";
 import { useIsWide } from "../../shell/useIsWide";
+import { BackToProduction } from "./BackToProduction";
 import { CautionsCard } from "./Cautions";
 import { InternalTempsCard } from "./InternalTemps";
 import { liquidWarnings } from "../../../shared/cautions";
 import { MixCard } from "./MixCard";
 import { ComponentCards } from "./ComponentCards";
 import { Timeline } from "./Timeline";
-import { DateBar, PansCard, PdfButtons, SettingsFooter, StatusCard, TemperaturesCard, TotalsCard, UnitsSwitch, WarningsCard } from "./BakeDayParts";
+import { DateBar } from "./bakeday/DateBar";
+import { PansCard } from "./bakeday/PansCard";
+import { PdfButtons } from "./bakeday/PdfButtons";
+import { SettingsFooter } from "./bakeday/SettingsFooter";
+import { StatusCard } from "./bakeday/StatusCard";
+import { TemperaturesCard } from "./bakeday/TemperaturesCard";
+import { TotalsCard } from "./bakeday/TotalsCard";
+import { UnitsSwitch } from "./bakeday/UnitsSwitch";
+import { WarningsCard } from "./bakeday/WarningsCard";
+import { useDayInputs } from "./bakeday/useDayInputs";
 import { WEEKDAY_LONG, weekdayOf } from "../../../shared/calendar";
 import { space } from "../../theme";
 
@@ -73,17 +81,17 @@ export function BakeDayScreen({ area, date: asked, home }: BakeDayScreenProps) {
     ) : (
       <LoadingState label="Finding the next bake day…" testID="bake-day-loading" />
     );
-  } else if (plan.isPending) {
-    body = <LoadingState label="Working out the plan…" testID="bake-day-loading" />;
-  } else if (plan.isError) {
-    body = <ErrorState error={plan.error} title="The plan didn't load" onRetry={() => plan.refetch()} retrying={plan.isFetching} testID="bake-day-error" />;
   } else {
-    body = <PlanBody key={date} date={date} plan={plan.data} units={units} paths={paths} />;
+    body = (
+      <QueryStates query={plan} loadingLabel="Working out the plan…" errorTitle="The plan didn't load" testID="bake-day">
+        {(data) => <PlanBody key={date} date={date} plan={data} units={units} paths={paths} />}
+      </QueryStates>
+    );
   }
 
   return (
     <Screen testID="bake-day">
-      {paths.hub ? <TextLink href={paths.hub as never} label="‹ Production" testID="back-to-production" /> : null}
+      <BackToProduction paths={paths} />
       <PageHeader
         overline={bakery.data?.name ?? "Production"}
         title="Bake day"
@@ -122,85 +130,17 @@ function PlanBody({ date, plan, units, paths }: PlanBodyProps) {
   const bakery = useBakeryQuery();
   const now = useServerNow(30_000);
   const recalc = useRecalculatePlanMutation(date);
-  const save = useSaveBakeDayMutation(date);
   const progressMutation = useProgressMutation(date);
   const [lastChanges, setLastChanges] = useState<{ what: string; changes: string[] } | null>(null);
-  const [extras, setExtras] = useState<Record<string, string>>(() => Object.fromEntries(plan.products.map((p) => [String(p.productId), String(p.extraPans)])));
-  // A failed save, and whether it carried new temperatures (shown on that card) or extra pans.
-  const [saveError, setSaveError] = useState<{ error: unknown; temps: boolean } | null>(null);
-  const [tempsSaved, setTempsSaved] = useState(false);
-  const [savingTemps, setSavingTemps] = useState(false);
+  const inputs = useDayInputs(date, plan, setLastChanges);
   const [progressError, setProgressError] = useState<string | null>(null);
-
-  // Saves go one at a time; changes made while one is on its way are sent (latest only) when it lands.
-  const inFlight = useRef(false);
-  const queued = useRef<{ input: BakeDayInput; temps: boolean } | null>(null);
-  const send = (input: BakeDayInput, temps: boolean) => {
-    if (inFlight.current) {
-      queued.current = { input, temps: temps || !!queued.current?.temps };
-      return;
-    }
-    inFlight.current = true;
-    setSaveError(null);
-    if (temps) setSavingTemps(true);
-    save.mutate(input, {
-      onSuccess: (p) => {
-        if (temps) setTempsSaved(true);
-        if (p.changes.length) setLastChanges({ what: "Plan recalculated with your inputs.", changes: p.changes });
-      },
-      onError: (error) => setSaveError({ error, temps }),
-      onSettled: () => {
-        inFlight.current = false;
-        if (temps) setSavingTemps(false);
-        const next = queued.current;
-        queued.current = null;
-        if (next) send(next.input, next.temps);
-      },
-    });
-  };
-
-  const extrasBody = (source: Record<string, string>): Record<string, number> | null => {
-    const out: Record<string, number> = {};
-    for (const [id, text] of Object.entries(source)) {
-      const n = parseQuantity(text);
-      if (Number.isNaN(n) || n < 0 || n > 100) return null;
-      out[id] = n;
-    }
-    return out;
-  };
-
-  // A plan that arrives from elsewhere (a refetch, another device) brings its extra pans, unless a save of ours is on its way.
-  const planExtras = plan.products.map((p) => `${p.productId}:${p.extraPans}`).join(",");
-  useEffect(() => {
-    if (inFlight.current || queued.current) return;
-    setExtras((current) => {
-      const fresh = Object.fromEntries(plan.products.map((p) => [String(p.productId), String(p.extraPans)]));
-      const same = Object.keys(fresh).every((k) => parseQuantity(current[k] ?? "") === Number(fresh[k]));
-      return same ? current : fresh;
-    });
-  }, [planExtras]);
-
-  const onExtra = (productId: number, text: string) => {
-    const nextExtras = { ...extras, [String(productId)]: text };
-    setExtras(nextExtras);
-    setTempsSaved(false);
-    const body = extrasBody(nextExtras);
-    if (!body) return;
-    send({ extraPans: body, roomC: plan.inputs.roomC, flourC: plan.inputs.flourC, pasteC: plan.inputs.pasteC }, false);
-  };
-
-  const onTemps = (t: { roomC: number; flourC: number; pasteC: number; tapC: number; milkC: number }) => {
-    setTempsSaved(false);
-    const body = extrasBody(extras) ?? Object.fromEntries(plan.products.map((p) => [String(p.productId), p.extraPans]));
-    send({ extraPans: body, ...t }, true);
-  };
 
   const onRecalculate = () => {
     setLastChanges(null);
     recalc.mutate(undefined, {
       onSuccess: (p) => {
         setLastChanges({ what: "Plan recalculated.", changes: p.changes });
-        setExtras(Object.fromEntries(p.products.map((x) => [String(x.productId), String(x.extraPans)])));
+        inputs.resetExtras(p);
       },
     });
   };
@@ -212,7 +152,6 @@ function PlanBody({ date, plan, units, paths }: PlanBodyProps) {
   };
 
   const progress = progressCount(plan);
-  const pansError = saveError && !saveError.temps ? messageOf(saveError.error) : null;
 
   if (plan.products.length === 0) {
     const closure = calendar?.closures.find((c) => c.date === date);
@@ -228,7 +167,7 @@ function PlanBody({ date, plan, units, paths }: PlanBodyProps) {
           icon="sun"
           title={`Nothing to bake for ${formatDay(date)}`}
           message={why}
-          action={<LinkButton href={paths.orders(date) as never} label="Orders for this day" icon="clipboard" variant="secondary" />}
+          action={<LinkButton href={paths.orders(date)} label="Orders for this day" icon="clipboard" variant="secondary" />}
           testID="bake-day-empty"
         />
         <SettingsFooter units={units} paths={paths} isOwner={user.role === "owner"} />
@@ -242,10 +181,9 @@ function PlanBody({ date, plan, units, paths }: PlanBodyProps) {
       key={`${units.system}-${plan.inputs.roomC}-${plan.inputs.flourC}-${plan.inputs.pasteC}-${plan.inputs.tapC}-${plan.inputs.milkC}`}
       plan={plan}
       units={units}
-      busy={savingTemps}
-      serverError={saveError?.temps ? saveError.error : null}
-      onSave={onTemps}
-      saved={tempsSaved}
+      busy={inputs.savingTemps}
+      onSave={inputs.onTemps}
+      saved={inputs.tempsSaved}
     />
   );
   const mixes = plan.doughs.flatMap((d) =>
@@ -279,7 +217,7 @@ function PlanBody({ date, plan, units, paths }: PlanBodyProps) {
         status
       )}
       <WarningsCard warnings={[...plan.warnings, ...liquidWarnings(plan, units)]} />
-      <PansCard plan={plan} extras={extras} onExtra={onExtra} wide={wide} saving={save.isPending && !savingTemps} error={pansError} formulasHref={paths.formulas} units={units} />
+      <PansCard plan={plan} extras={inputs.extras} onExtra={inputs.onExtra} wide={wide} saving={inputs.savingPans} error={inputs.pansError} formulasHref={paths.formulas} units={units} />
       {temps}
       {wide ? null : <PdfButtons date={date} />}
 
@@ -320,9 +258,9 @@ function PlanBody({ date, plan, units, paths }: PlanBodyProps) {
       </View>
       <SettingsFooter units={units} paths={paths} isOwner={user.role === "owner"} />
       <View style={styles.links}>
-        <TextLink href={paths.orders(date) as never} label="Orders for this day" testID="open-day-orders" />
-        <TextLink href={paths.forecast() as never} label="Purchasing" testID="open-forecast" />
-        <TextLink href={paths.formulas as never} label="Formulas" testID="open-formulas" />
+        <TextLink href={paths.orders(date)} label="Orders for this day" testID="open-day-orders" />
+        <TextLink href={paths.forecast()} label="Purchasing" testID="open-forecast" />
+        <TextLink href={paths.formulas} label="Formulas" testID="open-formulas" />
       </View>
     </>
   );

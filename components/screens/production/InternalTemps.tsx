@@ -1,18 +1,16 @@
-import React, { useState } from "react";
+import React from "react";
 import { StyleSheet, View } from "react-native";
 import { Card } from "../../ui/Card";
 import { Button } from "../../ui/Button";
 import { TextField } from "../../ui/TextField";
 import { AppText } from "../../ui/Text";
-import { messageOf } from "../../api/client";
 import { useProgressMutation, type PlanView } from "../../api/production";
+import { useZodForm } from "../../forms/useZodForm";
+import { checkedSchema } from "../../forms/checkedSchema";
 import { localTime } from "../../production/plan";
+import { checkReading } from "../../production/temperatures";
 import type { Units } from "../../production/units";
 import { colors, radii, space } from "../../theme";
-
-/** Bread is probed between about 20 and 120 °C (the API refuses anything else). */
-const MIN_C = 20;
-const MAX_C = 120;
 
 /**
  * The internal temperature reached in each oven load, probed in the center of one piece and recorded here (with
@@ -39,6 +37,8 @@ export function InternalTempsCard({ plan, units }: { plan: PlanView; units: Unit
   );
 }
 
+const BLANK = { valueC: "" };
+
 interface LoadReadingProps {
   date: string;
   load: number;
@@ -51,16 +51,15 @@ interface LoadReadingProps {
 
 function LoadReading({ date, load, title, doughs, targetC, recorded, units }: LoadReadingProps) {
   const save = useProgressMutation(date);
-  const [typed, setTyped] = useState("");
-  const [error, setError] = useState<string | null>(null);
+  const form = useZodForm({ schema: checkedSchema(({ valueC }: { valueC: string }) => checkReading(valueC, units)), initial: BLANK });
   const id = `internal-${load}`;
-  const submit = () => {
-    const c = units.toCelsius(typed);
-    if (Number.isNaN(c)) return setError(`Enter the temperature reached, e.g. ${units.tempInput(92)}.`);
-    if (c < MIN_C || c > MAX_C) return setError(`Enter ${units.temp(MIN_C)} to ${units.temp(MAX_C)}.`);
-    setError(null);
-    save.mutate({ kind: "internal", key: String(load), valueC: c }, { onSuccess: () => setTyped(""), onError: (err) => setError(messageOf(err)) });
-  };
+  // Typing starts again: the message goes until the next "Record".
+  const type = (valueC: string) => form.reset({ valueC });
+  const submit = () =>
+    void form.submit(async (valueC) => {
+      await save.mutateAsync({ kind: "internal", key: String(load), valueC });
+      form.reset(BLANK);
+    });
   const low = recorded && targetC !== null && recorded.c < targetC;
   return (
     <View style={styles.row} testID={id}>
@@ -78,19 +77,16 @@ function LoadReading({ date, load, title, doughs, targetC, recorded, units }: Lo
           <TextField
             label={`Reached (${units.tempUnit})`}
             accessibilityLabel={`Internal temperature reached, oven load ${load} (${units.tempUnit})`}
-            value={typed}
-            onChangeText={(t) => {
-              setTyped(t);
-              setError(null);
-            }}
-            error={error}
+            value={form.values.valueC}
+            onChangeText={type}
+            error={form.errors.valueC ?? form.formError}
             inputMode="decimal"
             keyboardType="numbers-and-punctuation"
             onSubmitEditing={submit}
             testID={`${id}-input`}
           />
         </View>
-        <Button label="Record" icon="thermometer" small busy={save.isPending} onPress={submit} testID={`${id}-save`} style={styles.save} />
+        <Button label="Record" icon="thermometer" small busy={form.submitting} onPress={submit} testID={`${id}-save`} style={styles.save} />
       </View>
     </View>
   );

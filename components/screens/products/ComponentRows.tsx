@@ -10,21 +10,8 @@ import { COMPONENT_KINDS, COMPONENT_KIND_LABEL, type ComponentKind, type Compone
 import { ALLERGEN_LABEL } from "../../../shared/allergens";
 import type { IngredientDto } from "../../../shared/schemas/production";
 import type { FieldErrors } from "../../../shared/errors";
+import { nextComponentRow, type ComponentRow } from "./productForm";
 import { colors, radii, space } from "../../theme";
-
-/** One component line as the form holds it (grams as typed). */
-export interface ComponentRow {
-  key: string;
-  kind: ComponentKind;
-  name: string;
-  ingredientId: number | null;
-  grams: string;
-  per: ComponentPer;
-  note: string;
-}
-
-let seq = 0;
-export const newComponentRow = (over: Partial<ComponentRow> = {}): ComponentRow => ({ key: `component-${++seq}`, kind: "topping", name: "", ingredientId: null, grams: "", per: "piece", note: "", ...over });
 
 const KIND_OPTIONS: PickerOption<ComponentKind>[] = COMPONENT_KINDS.map((k) => ({ value: k, label: COMPONENT_KIND_LABEL[k] }));
 
@@ -139,7 +126,7 @@ export function ComponentRows({ rows, onChange, ingredients, loading, fields, te
           {fields.components}
         </AppText>
       ) : null}
-      <Button label="Add a component line" icon="plus" variant="secondary" onPress={() => onChange([...rows, newComponentRow(rows.length ? { kind: rows[rows.length - 1].kind, name: rows[rows.length - 1].name, per: rows[rows.length - 1].per } : {})])} testID="add-component" />
+      <Button label="Add a component line" icon="plus" variant="secondary" onPress={() => onChange([...rows, nextComponentRow(rows)])} testID="add-component" />
     </View>
   );
 }

@@ -1,7 +1,7 @@
 import { startTestApp, makeAccount, makeBakery, makeProduct, makeUser, tokenFor, type TestApp } from "./app";
 import { Order, OrderLine } from "../../../server/orders/order.entity";
-import { Invoice } from "../../../server/billing/billing.entity";
-import { confirmDispatch } from "../../../server/billing/invoices.service";
+import { Invoice } from "../../../server/billing/invoice.entity";
+import { confirmDispatch } from "../../../server/billing/dispatch.service";
 import { taxCents } from "../../../shared/billing";
 
 /** The clock every card-billing test file runs at: Wed 10 Jun 2026, 10:00 in Chicago. */

@@ -1,6 +1,12 @@
 import React from "react";
-import { FormulasScreen } from "../../../../components/screens/production/FormulaScreens";
+import { FormulasScreen } from "@/components/screens/production/formulas/FormulasScreen";
+import { ScreenTitle } from "@/components/ui/ScreenTitle";
 
 export default function BakerFormulasRoute() {
-  return <FormulasScreen area="baker" />;
+  return (
+    <>
+      <ScreenTitle title="Formulas" />
+      <FormulasScreen area="baker" />
+    </>
+  );
 }

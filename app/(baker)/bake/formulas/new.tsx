@@ -1,6 +1,12 @@
 import React from "react";
-import { NewFormulaScreen } from "../../../../components/screens/production/FormulaScreens";
+import { NewFormulaScreen } from "@/components/screens/production/formulas/NewFormulaScreen";
+import { ScreenTitle } from "@/components/ui/ScreenTitle";
 
 export default function BakerNewFormulaRoute() {
-  return <NewFormulaScreen area="baker" />;
+  return (
+    <>
+      <ScreenTitle title="New formula" />
+      <NewFormulaScreen area="baker" />
+    </>
+  );
 }

@@ -1,6 +1,12 @@
 import React from "react";
-import { IngredientsScreen } from "../../../../components/screens/production/IngredientScreens";
+import { IngredientsScreen } from "@/components/screens/production/ingredients/IngredientsScreen";
+import { ScreenTitle } from "@/components/ui/ScreenTitle";
 
 export default function BakerIngredientsRoute() {
-  return <IngredientsScreen area="baker" />;
+  return (
+    <>
+      <ScreenTitle title="Ingredients" />
+      <IngredientsScreen area="baker" />
+    </>
+  );
 }

@@ -1,6 +1,12 @@
 import React from "react";
-import { NewIngredientScreen } from "../../../../components/screens/production/IngredientScreens";
+import { NewIngredientScreen } from "@/components/screens/production/ingredients/NewIngredientScreen";
+import { ScreenTitle } from "@/components/ui/ScreenTitle";
 
 export default function BakerNewIngredientRoute() {
-  return <NewIngredientScreen area="baker" />;
+  return (
+    <>
+      <ScreenTitle title="New ingredient" />
+      <NewIngredientScreen area="baker" />
+    </>
+  );
 }

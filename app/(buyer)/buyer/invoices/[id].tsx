@@ -1,9 +1,15 @@
 import React from "react";
 import { useLocalSearchParams } from "expo-router";
-import { InvoiceDetailScreen } from "../../../../components/screens/billing/InvoiceDetailScreen";
-import { idParam } from "../../../../components/routing";
+import { InvoiceDetailScreen } from "@/components/screens/billing/InvoiceDetailScreen";
+import { idParam } from "@/components/routing";
+import { ScreenTitle } from "@/components/ui/ScreenTitle";
 
 export default function BuyerInvoiceRoute() {
   const { id } = useLocalSearchParams<{ id: string }>();
-  return <InvoiceDetailScreen key={String(id)} id={idParam(id)} mode="buyer" />;
+  return (
+    <>
+      <ScreenTitle title="Invoice" />
+      <InvoiceDetailScreen key={String(id)} id={idParam(id)} mode="buyer" />
+    </>
+  );
 }

@@ -1,6 +1,12 @@
 import React from "react";
-import { InvoicesScreen } from "../../../../components/screens/billing/InvoicesScreen";
+import { InvoicesScreen } from "@/components/screens/billing/InvoicesScreen";
+import { ScreenTitle } from "@/components/ui/ScreenTitle";
 
 export default function BuyerInvoicesRoute() {
-  return <InvoicesScreen mode="buyer" />;
+  return (
+    <>
+      <ScreenTitle title="Invoices" />
+      <InvoicesScreen mode="buyer" />
+    </>
+  );
 }

@@ -1,10 +1,16 @@
 import React from "react";
 import { useLocalSearchParams } from "expo-router";
-import { OrderScreen } from "../../../../components/screens/buyer/OrderScreen";
-import { firstParam } from "../../../../components/routing";
+import { OrderScreen } from "@/components/screens/buyer/OrderScreen";
+import { firstParam } from "@/components/routing";
+import { ScreenTitle } from "@/components/ui/ScreenTitle";
 
 export default function OrderRoute() {
   const { date } = useLocalSearchParams<{ date: string }>();
   const d = firstParam(date) ?? "";
-  return <OrderScreen key={d} date={d} />;
+  return (
+    <>
+      <ScreenTitle title="Order" />
+      <OrderScreen key={d} date={d} />
+    </>
+  );
 }

@@ -1,3 +1,12 @@
-import { AccountsListScreen } from "../../../../components/screens/accounts/AccountsListScreen";
+import React from "react";
+import { AccountsListScreen } from "@/components/screens/accounts/AccountsListScreen";
+import { ScreenTitle } from "@/components/ui/ScreenTitle";
 
-export default AccountsListScreen;
+export default function AccountsRoute() {
+  return (
+    <>
+      <ScreenTitle title="Accounts" />
+      <AccountsListScreen />
+    </>
+  );
+}

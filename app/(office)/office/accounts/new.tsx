@@ -1,11 +1,15 @@
 import React from "react";
-import { RequireRole } from "../../../../components/auth/RoleGate";
-import { NewAccountScreen } from "../../../../components/screens/accounts/AccountFormScreen";
+import { RequireRole } from "@/components/auth/RoleGate";
+import { NewAccountScreen } from "@/components/screens/accounts/NewAccountScreen";
+import { ScreenTitle } from "@/components/ui/ScreenTitle";
 
 export default function NewAccountRoute() {
   return (
-    <RequireRole roles={["owner"]}>
-      <NewAccountScreen />
-    </RequireRole>
+    <>
+      <ScreenTitle title="New account" />
+      <RequireRole roles={["owner"]}>
+        <NewAccountScreen />
+      </RequireRole>
+    </>
   );
 }

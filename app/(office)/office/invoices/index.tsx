@@ -1,10 +1,16 @@
 import React from "react";
 import { useLocalSearchParams } from "expo-router";
-import { InvoicesScreen } from "../../../../components/screens/billing/InvoicesScreen";
-import { idParam } from "../../../../components/routing";
+import { InvoicesScreen } from "@/components/screens/billing/InvoicesScreen";
+import { idParam } from "@/components/routing";
+import { ScreenTitle } from "@/components/ui/ScreenTitle";
 
 export default function OfficeInvoicesRoute() {
   const { accountId } = useLocalSearchParams<{ accountId?: string }>();
   const id = idParam(accountId);
-  return <InvoicesScreen key={String(accountId ?? "")} mode="office" accountId={Number.isNaN(id) ? undefined : id} />;
+  return (
+    <>
+      <ScreenTitle title="Invoices" />
+      <InvoicesScreen key={String(accountId ?? "")} mode="office" accountId={Number.isNaN(id) ? undefined : id} />
+    </>
+  );
 }

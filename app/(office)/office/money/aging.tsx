@@ -1,3 +1,12 @@
-import { AgingScreen } from "../../../../components/screens/billing/AgingScreen";
+import React from "react";
+import { AgingScreen } from "@/components/screens/billing/AgingScreen";
+import { ScreenTitle } from "@/components/ui/ScreenTitle";
 
-export default AgingScreen;
+export default function AgingRoute() {
+  return (
+    <>
+      <ScreenTitle title="Aging" />
+      <AgingScreen />
+    </>
+  );
+}

@@ -1,3 +1,12 @@
-import { BillingHubScreen } from "../../../../components/screens/billing/BillingHubScreen";
+import React from "react";
+import { BillingHubScreen } from "@/components/screens/billing/BillingHubScreen";
+import { ScreenTitle } from "@/components/ui/ScreenTitle";
 
-export default BillingHubScreen;
+export default function MoneyRoute() {
+  return (
+    <>
+      <ScreenTitle title="Money" />
+      <BillingHubScreen />
+    </>
+  );
+}

@@ -1,3 +1,12 @@
-import { BillingSettingsScreen } from "../../../../components/screens/billing/BillingSettingsScreen";
+import React from "react";
+import { BillingSettingsScreen } from "@/components/screens/billing/BillingSettingsScreen";
+import { ScreenTitle } from "@/components/ui/ScreenTitle";
 
-export default BillingSettingsScreen;
+export default function BillingSettingsRoute() {
+  return (
+    <>
+      <ScreenTitle title="Billing settings" />
+      <BillingSettingsScreen />
+    </>
+  );
+}

@@ -1,11 +1,15 @@
 import React from "react";
-import { RequireRole } from "../../../../components/auth/RoleGate";
-import { InviteScreen } from "../../../../components/screens/people/InviteScreen";
+import { RequireRole } from "@/components/auth/RoleGate";
+import { InviteScreen } from "@/components/screens/people/InviteScreen";
+import { ScreenTitle } from "@/components/ui/ScreenTitle";
 
 export default function InviteRoute() {
   return (
-    <RequireRole roles={["owner"]}>
-      <InviteScreen />
-    </RequireRole>
+    <>
+      <ScreenTitle title="Invite someone" />
+      <RequireRole roles={["owner"]}>
+        <InviteScreen />
+      </RequireRole>
+    </>
   );
 }

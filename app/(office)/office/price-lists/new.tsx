@@ -1,11 +1,15 @@
 import React from "react";
-import { RequireRole } from "../../../../components/auth/RoleGate";
-import { PriceListFormScreen } from "../../../../components/screens/pricing/PriceListsScreen";
+import { RequireRole } from "@/components/auth/RoleGate";
+import { PriceListFormScreen } from "@/components/screens/pricing/PriceListFormScreen";
+import { ScreenTitle } from "@/components/ui/ScreenTitle";
 
 export default function NewPriceListRoute() {
   return (
-    <RequireRole roles={["owner"]}>
-      <PriceListFormScreen />
-    </RequireRole>
+    <>
+      <ScreenTitle title="New price list" />
+      <RequireRole roles={["owner"]}>
+        <PriceListFormScreen />
+      </RequireRole>
+    </>
   );
 }

@@ -1,11 +1,15 @@
 import React from "react";
-import { RequireRole } from "../../../../components/auth/RoleGate";
-import { ProductionHubScreen } from "../../../../components/screens/production/ProductionOfficeScreens";
+import { RequireRole } from "@/components/auth/RoleGate";
+import { ProductionHubScreen } from "@/components/screens/production/ProductionHubScreen";
+import { ScreenTitle } from "@/components/ui/ScreenTitle";
 
 export default function ProductionHubRoute() {
   return (
-    <RequireRole roles={["owner"]}>
-      <ProductionHubScreen />
-    </RequireRole>
+    <>
+      <ScreenTitle title="Production" />
+      <RequireRole roles={["owner"]}>
+        <ProductionHubScreen />
+      </RequireRole>
+    </>
   );
 }

@@ -1,9 +1,15 @@
 import React from "react";
 import { useLocalSearchParams } from "expo-router";
-import { ProductsScreen } from "../../../../components/screens/products/ProductsScreen";
-import { firstParam } from "../../../../components/routing";
+import { ProductsScreen } from "@/components/screens/products/ProductsScreen";
+import { firstParam } from "@/components/routing";
+import { ScreenTitle } from "@/components/ui/ScreenTitle";
 
 export default function ProductsRoute() {
   const { archived } = useLocalSearchParams<{ archived?: string }>();
-  return <ProductsScreen archived={firstParam(archived)} />;
+  return (
+    <>
+      <ScreenTitle title="Products" />
+      <ProductsScreen archived={firstParam(archived)} />
+    </>
+  );
 }

@@ -1,11 +1,15 @@
 import React from "react";
-import { RequireRole } from "../../../../components/auth/RoleGate";
-import { NewProductScreen } from "../../../../components/screens/products/ProductFormScreen";
+import { RequireRole } from "@/components/auth/RoleGate";
+import { NewProductScreen } from "@/components/screens/products/NewProductScreen";
+import { ScreenTitle } from "@/components/ui/ScreenTitle";
 
 export default function NewProductRoute() {
   return (
-    <RequireRole roles={["owner"]}>
-      <NewProductScreen />
-    </RequireRole>
+    <>
+      <ScreenTitle title="New product" />
+      <RequireRole roles={["owner"]}>
+        <NewProductScreen />
+      </RequireRole>
+    </>
   );
 }

@@ -1,10 +1,16 @@
 import React from "react";
 import { useLocalSearchParams } from "expo-router";
-import { PayoutDetailScreen } from "../../../../../components/screens/billing/PayoutsScreens";
-import { firstParam } from "../../../../../components/routing";
+import { PayoutDetailScreen } from "@/components/screens/billing/PayoutDetailScreen";
+import { firstParam } from "@/components/routing";
+import { ScreenTitle } from "@/components/ui/ScreenTitle";
 
 export default function PayoutRoute() {
   const { id } = useLocalSearchParams<{ id: string }>();
   const payoutId = firstParam(id) ?? "";
-  return <PayoutDetailScreen key={payoutId} id={payoutId} />;
+  return (
+    <>
+      <ScreenTitle title="Payout" />
+      <PayoutDetailScreen key={payoutId} id={payoutId} />
+    </>
+  );
 }

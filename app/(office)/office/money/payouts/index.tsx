@@ -1,3 +1,12 @@
-import { PayoutsScreen } from "../../../../../components/screens/billing/PayoutsScreens";
+import React from "react";
+import { PayoutsScreen } from "@/components/screens/billing/PayoutsScreen";
+import { ScreenTitle } from "@/components/ui/ScreenTitle";
 
-export default PayoutsScreen;
+export default function PayoutsRoute() {
+  return (
+    <>
+      <ScreenTitle title="Payouts" />
+      <PayoutsScreen />
+    </>
+  );
+}

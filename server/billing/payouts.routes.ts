@@ -1,0 +1,42 @@
+import { Router } from "express";
+import type { AppContext } from "../http/context";
+import { parse } from "../http/errors";
+import { allow, currentUser } from "../http/auth";
+import { listPayouts, payoutDetail, reconcilePayout } from "./payouts.service";
+import { aging, exportCsv } from "./reports.service";
+import { OFFICE } from "./invoices.routes";
+import { exportFileSchema, payoutIdSchema, reconcileSchema } from "../../shared/schemas/billing";
+import type { AgingResponse, PayoutDetailDto, PayoutListResponse } from "../../shared/contracts/billing";
+
+/** The card processor's payouts to the bank, matched to Panwise's payments and refunds (office). */
+export function payoutRoutes(ctx: AppContext): Router {
+  const r = Router();
+  r.use(allow(...OFFICE));
+  r.get("/", async (_req, res) => {
+    res.json({ payouts: await listPayouts(ctx) } satisfies PayoutListResponse);
+  });
+  r.get("/:id", async (req, res) => {
+    const { id } = parse(payoutIdSchema, req.params);
+    res.json((await payoutDetail(ctx, id)) satisfies PayoutDetailDto);
+  });
+  r.post("/:id/reconcile", async (req, res) => {
+    const { id } = parse(payoutIdSchema, req.params);
+    const { note, force } = parse(reconcileSchema, req.body);
+    res.json((await reconcilePayout(ctx, currentUser(req), id, note, force)) satisfies PayoutDetailDto);
+  });
+  return r;
+}
+
+/** Aging and the CSV exports (office). */
+export function reportRoutes(ctx: AppContext): Router {
+  const r = Router();
+  r.use(allow(...OFFICE));
+  r.get("/aging", async (_req, res) => {
+    res.json({ aging: await aging(ctx) } satisfies AgingResponse);
+  });
+  r.get("/exports/:file", async (req, res) => {
+    const { file } = parse(exportFileSchema, req.params);
+    res.type("text/csv; charset=utf-8").attachment(file).send(await exportCsv(ctx, file));
+  });
+  return r;
+}

@@ -1,0 +1,90 @@
+/** The one table (components/ui/DataTable.tsx) and list card (components/ui/ListCard.tsx) every list screen uses. */
+import { Text } from "react-native";
+import { act, fireEvent, render, screen } from "@testing-library/react-native";
+import { DataTable } from "../../components/ui/DataTable";
+import { ListCard } from "../../components/ui/ListCard";
+import { colors } from "../../components/theme";
+
+interface Row {
+  id: number;
+  name: string;
+  owed: number;
+  late: boolean;
+}
+
+const ROWS: Row[] = [
+  { id: 1, name: "Tidewater Café", owed: 1200, late: false },
+  { id: 2, name: "North Pier", owed: 4500, late: true },
+];
+
+function table(onRowPress?: (r: Row) => void) {
+  return (
+    <DataTable<Row>
+      testID="t"
+      rows={ROWS}
+      rowKey={(r) => r.id}
+      rowTestID={(r) => `row-${r.id}`}
+      rowLabel={(r) => `${r.name}, ${r.owed} owed`}
+      onRowPress={onRowPress}
+      rowAlert={(r) => r.late}
+      footer
+      footerTestID="totals"
+      columns={[
+        { key: "name", label: "Account", flex: 2, render: (r) => r.name, footer: "Total" },
+        { key: "owed", label: "Owed", align: "right", render: (r) => r.owed, footer: <Text testID="total-owed">5700</Text> },
+      ]}
+    />
+  );
+}
+
+describe("DataTable", () => {
+  it("writes plain strings and numbers as text, and a totals row from the columns' footers", () => {
+    render(table());
+    expect(screen.getByTestId("row-1")).toHaveTextContent("Tidewater Café1200");
+    expect(screen.getByTestId("totals")).toHaveTextContent("Total5700");
+    expect(screen.getByTestId("total-owed")).toBeOnTheScreen();
+    expect(screen.getByTestId("t")).toHaveTextContent(/^AccountOwed/);
+  });
+
+  it("tints a row that needs attention, and only that one", () => {
+    render(table());
+    expect(screen.getByTestId("row-2")).toHaveStyle({ backgroundColor: colors.dangerSoft });
+    expect(screen.getByTestId("row-1")).not.toHaveStyle({ backgroundColor: colors.dangerSoft });
+    expect(screen.getByTestId("totals")).toHaveStyle({ backgroundColor: colors.sunken });
+  });
+
+  it("rows open their item as buttons named for a screen reader", () => {
+    const open = jest.fn();
+    render(table(open));
+    fireEvent.press(screen.getByRole("button", { name: "North Pier, 4500 owed" }));
+    expect(open).toHaveBeenCalledWith(ROWS[1]);
+    expect(screen.getByTestId("row-2")).toHaveStyle({ backgroundColor: colors.dangerSoft });
+  });
+
+  it("without footer there is no totals row", () => {
+    render(<DataTable<Row> rows={ROWS} rowKey={(r) => r.id} columns={[{ key: "name", label: "Account", render: (r) => r.name }]} footerTestID="totals" />);
+    expect(screen.queryByTestId("totals")).toBeNull();
+  });
+});
+
+describe("ListCard", () => {
+  it("a pressable row, or a card that does not open (no button), tinted when it needs attention", async () => {
+    const open = jest.fn();
+    render(
+      <>
+        <ListCard onPress={open} accessibilityLabel="Open Tidewater" testID="a">
+          <Text>Tidewater</Text>
+        </ListCard>
+        <ListCard alert testID="b">
+          <Text>Failed mail</Text>
+        </ListCard>
+      </>,
+    );
+    // The chevron's icon font loads after the first render.
+    await act(async () => undefined);
+    fireEvent.press(screen.getByRole("button", { name: "Open Tidewater" }));
+    expect(open).toHaveBeenCalled();
+    expect(screen.getAllByRole("button")).toHaveLength(1);
+    expect(screen.getByTestId("b")).toHaveStyle({ backgroundColor: colors.dangerSoft, borderColor: colors.danger });
+  });
+});
