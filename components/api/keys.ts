@@ -16,11 +16,17 @@ import type { userListQuerySchema } from "../../shared/schemas/users";
 import type { InvoiceListParams } from "./invoices";
 
 /** The list filters are the query schemas' own inputs (shared/schemas), so the client sends what the route parses. */
-export type AccountListParams = z.input<typeof accountListQuerySchema>;
-export type OrderListParams = z.input<typeof orderListQuerySchema>;
-export type UserListParams = z.input<typeof userListQuerySchema>;
+/**
+ * What the client sends as a list's query: the route's schema input, where zod 4 types a coerced field's input
+ * as `unknown` (it coerces anything) — a query parameter the app sends is a number or a string.
+ */
+type QueryParams<S extends z.ZodType> = { [K in keyof z.input<S>]: unknown extends z.input<S>[K] ? number | string | undefined : z.input<S>[K] };
+
+export type AccountListParams = QueryParams<typeof accountListQuerySchema>;
+export type OrderListParams = QueryParams<typeof orderListQuerySchema>;
+export type UserListParams = QueryParams<typeof userListQuerySchema>;
 /** from..to (at most 120 days); office users name the account, a buyer always gets their own. */
-export type CalendarParams = z.input<typeof calendarQuerySchema>;
+export type CalendarParams = QueryParams<typeof calendarQuerySchema>;
 
 export interface ProductListParams {
   /** Include archived products (office only). */

@@ -23,7 +23,7 @@ export function accountStatusLabel(a: { status: AccountStatus; creditHold?: bool
 const CONTROL_BUT_LINES = /[\u0000-\u0008\u000B-\u001F\u007F-\u009F]/;
 
 const text = (label: string, max: number, opts: { required?: boolean; multiline?: boolean } = {}) => {
-  let base = z.string({ invalid_type_error: `${label} must be text.` }).trim().max(max, `${label} can be at most ${max} characters.`);
+  let base = z.string({ error: (issue) => (issue.input === undefined ? undefined : `${label} must be text.`) }).trim().max(max, `${label} can be at most ${max} characters.`);
   if (opts.required) base = base.min(1, `Enter the ${label.toLowerCase()}.`);
   const checked = opts.multiline
     ? base
@@ -44,7 +44,7 @@ export const accountInputSchema = z.object({
     .regex(/^[0-9+().\-\s]*$/, "Use digits, spaces and + ( ) - only.")
     .default(""),
   billingEmail: emailSchema,
-  status: z.enum(ACCOUNT_STATUSES, { errorMap: () => ({ message: "Choose active, on hold or closed." }) }).default("active"),
+  status: z.enum(ACCOUNT_STATUSES, { error: "Choose active, on hold or closed." }).default("active"),
   notes: text("Notes", 2000, { multiline: true }),
 });
 export type AccountInput = z.input<typeof accountInputSchema>;

@@ -20,7 +20,7 @@ export type ExportFile = (typeof EXPORT_FILES)[number];
 /** The id in a billing URL: the one id parameter schema (shared/schemas/common.ts). */
 export { idParamSchema } from "./common";
 
-const money = z.number({ invalid_type_error: "Enter an amount in cents." }).int("Whole cents only.").positive("The amount must be more than 0.");
+const money = z.number({ error: (issue) => (issue.input === undefined ? undefined : "Enter an amount in cents.") }).int("Whole cents only.").positive("The amount must be more than 0.");
 
 /** GET /api/invoices query */
 export const invoiceListQuerySchema = z.object({
@@ -39,7 +39,7 @@ export const statementsSchema = z.object({ through: dateSchema.optional() });
 /** POST /api/invoices/:id/payments */
 export const manualPaymentSchema = z.object({
   amountCents: money,
-  method: z.enum(PAYMENT_METHODS, { errorMap: () => ({ message: "Choose bank transfer, check, cash or other." }) }),
+  method: z.enum(PAYMENT_METHODS, { error: "Choose bank transfer, check, cash or other." }),
   reference: z.string().trim().min(1, "Enter the transfer reference or check number.").max(120),
   receivedOn: dateSchema,
 });
@@ -74,7 +74,7 @@ export type ReconcileInput = z.input<typeof reconcileSchema>;
 
 /** GET /api/reports/exports/:file */
 export const exportFileSchema = z.object({
-  file: z.enum(EXPORT_FILES, { errorMap: () => ({ message: "Exports: invoices.csv, payments.csv, payouts.csv." }) }),
+  file: z.enum(EXPORT_FILES, { error: "Exports: invoices.csv, payments.csv, payouts.csv." }),
 });
 
 /** PUT /api/settings/billing */
@@ -87,7 +87,7 @@ export const billingSettingsSchema = z.object({
 
 /** PUT /api/accounts/:id/terms */
 export const paymentTermsSchema = z.object({
-  paymentTerms: z.enum(PAYMENT_TERMS, { errorMap: () => ({ message: "Choose card, net7, net14 or net30." }) }),
+  paymentTerms: z.enum(PAYMENT_TERMS, { error: "Choose card, net7, net14 or net30." }),
 });
 
 /** POST /api/accounts/:id/certificates (the multipart text field next to the file) */
@@ -95,5 +95,5 @@ export const certificateUploadSchema = z.object({ expiresOn: dateSchema });
 
 /** POST /api/certificates/:id/review */
 export const certificateReviewSchema = z.object({
-  status: z.enum(["approved", "rejected"], { errorMap: () => ({ message: "Choose approved or rejected." }) }),
+  status: z.enum(["approved", "rejected"], { error: "Choose approved or rejected." }),
 });

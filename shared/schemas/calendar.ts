@@ -6,7 +6,7 @@ export const DATE_LIMIT_MESSAGE = `Dates run from ${DATE_MIN} to ${DATE_MAX}.`;
 
 /** A YYYY-MM-DD calendar date within DATE_MIN..DATE_MAX (shared/calendar.ts). */
 export const dateSchema = z
-  .string({ required_error: "Choose a date.", invalid_type_error: "Dates are written YYYY-MM-DD." })
+  .string({ error: (issue) => (issue.input === undefined ? "Choose a date." : "Dates are written YYYY-MM-DD.") })
   .superRefine((value, ctx) => {
     if (!isCalendarDate(value)) ctx.addIssue({ code: "custom", message: "That is not a calendar date (use YYYY-MM-DD)." });
     else if (!isSupportedDate(value)) ctx.addIssue({ code: "custom", message: DATE_LIMIT_MESSAGE });
@@ -51,7 +51,7 @@ export const calendarSettingsSchema = z.object({
   }, "Use an IANA time zone such as America/Chicago."),
   /** The bakery's locale for dates, times, numbers and amounts; left out, the stored one stays. */
   locale: z
-    .string({ invalid_type_error: `Choose one of ${SUPPORTED_LOCALES.join(", ")}.` })
+    .string({ error: (issue) => (issue.input === undefined ? undefined : `Choose one of ${SUPPORTED_LOCALES.join(", ")}.`) })
     .refine(isSupportedLocale, `Choose one of ${SUPPORTED_LOCALES.join(", ")}: dates, times and amounts are written in one of these.`)
     .optional(),
   deliveryWeekdays: weekdaysSchema.refine((d) => d.length > 0, "Choose at least one delivery day."),
@@ -89,7 +89,7 @@ export const calendarQuerySchema = z
 
 export const accountDeliverySchema = z.object({
   routeWeekdays: weekdaysSchema.nullable(),
-  minimumOrderCents: z.coerce.number().int("Whole cents only.").min(0, "Cannot be negative.").max(10_000_000),
+  minimumOrderCents: z.coerce.number<number>().int("Whole cents only.").min(0, "Cannot be negative.").max(10_000_000),
   priceListId: z.number().int().positive().nullable(),
 });
 

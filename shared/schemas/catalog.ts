@@ -5,7 +5,7 @@ import { COMPONENT_KINDS, COMPONENT_PER, componentName, type ComponentKind, type
 
 const intIn = (label: string, min: number, max: number) =>
   z.coerce
-    .number({ invalid_type_error: `${label} must be a number.` })
+    .number({ error: (issue) => (issue.input === undefined ? undefined : `${label} must be a number.`) })
     .int(`${label} must be a whole number.`)
     .min(min, `${label} must be at least ${min}.`)
     .max(max, `${label} can be at most ${max}.`);
@@ -18,26 +18,26 @@ export const MAX_PRICE_CENTS = 10_000_000;
 
 /** One ingredient of a component, weighed per piece or per pan (0.1 g resolution, as the column stores it). */
 export const componentInputSchema = z.object({
-  kind: z.enum(COMPONENT_KINDS, { errorMap: () => ({ message: "Choose topping, wash, filling or garnish." }) }),
+  kind: z.enum(COMPONENT_KINDS, { error: "Choose topping, wash, filling or garnish." }),
   name: z.string().trim().max(80, "Use at most 80 characters.").default(""),
-  ingredientId: z.number({ required_error: "Choose the ingredient.", invalid_type_error: "Choose the ingredient." }).int("Choose the ingredient.").positive("Choose the ingredient."),
+  ingredientId: z.number({ error: "Choose the ingredient." }).int("Choose the ingredient.").positive("Choose the ingredient."),
   grams: z.coerce
-    .number({ invalid_type_error: "Enter the grams, e.g. 2 or 1.5." })
+    .number({ error: (issue) => (issue.input === undefined ? undefined : "Enter the grams, e.g. 2 or 1.5.") })
     .min(0.1, "Weigh at least 0.1 g.")
     .max(10000, "At most 10,000 g.")
     .refine((g) => Math.abs(g * 10 - Math.round(g * 10)) < 1e-6, "Use at most one decimal, e.g. 1.5 g."),
-  per: z.enum(COMPONENT_PER, { errorMap: () => ({ message: "Choose per piece or per pan." }) }),
+  per: z.enum(COMPONENT_PER, { error: "Choose per piece or per pan." }),
   note: z.string().trim().max(200, "Use at most 200 characters.").default(""),
 });
 export type ComponentInput = z.input<typeof componentInputSchema>;
 
 export const productInputSchema = z
   .object({
-    name: z.string({ required_error: "Enter the product's name." }).trim().min(1, "Enter the product's name.").max(120, "Use at most 120 characters.").refine(isOneLine, "Keep the name on one line, without line breaks or control characters."),
+    name: z.string({ error: (issue) => (issue.input === undefined ? "Enter the product's name." : undefined) }).trim().min(1, "Enter the product's name.").max(120, "Use at most 120 characters.").refine(isOneLine, "Keep the name on one line, without line breaks or control characters."),
     description: z.string().trim().max(1000, "Use at most 1000 characters.").default(""),
-    saleUnit: z.string({ required_error: "Enter the sale unit, e.g. tray of 15 rolls." }).trim().min(1, "Enter the sale unit, e.g. tray of 15 rolls.").max(60, "Use at most 60 characters.").refine(isOneLine, "Keep the sale unit on one line, without line breaks or control characters."),
+    saleUnit: z.string({ error: (issue) => (issue.input === undefined ? "Enter the sale unit, e.g. tray of 15 rolls." : undefined) }).trim().min(1, "Enter the sale unit, e.g. tray of 15 rolls.").max(60, "Use at most 60 characters.").refine(isOneLine, "Keep the sale unit on one line, without line breaks or control characters."),
     /** "trays of 15 rolls": how a count of more than one reads (shared/quantity.ts). */
-    saleUnitPlural: z.string({ required_error: "Enter the plural of the sale unit, e.g. trays of 15 rolls." }).trim().min(1, "Enter the plural of the sale unit, e.g. trays of 15 rolls.").max(60, "Use at most 60 characters.").refine(isOneLine, "Keep the plural on one line, without line breaks or control characters."),
+    saleUnitPlural: z.string({ error: (issue) => (issue.input === undefined ? "Enter the plural of the sale unit, e.g. trays of 15 rolls." : undefined) }).trim().min(1, "Enter the plural of the sale unit, e.g. trays of 15 rolls.").max(60, "Use at most 60 characters.").refine(isOneLine, "Keep the plural on one line, without line breaks or control characters."),
     piecesPerUnit: intIn("Pieces per unit", 1, 500),
     pieceGrams: intIn("Piece weight", 1, 5000),
     panName: z.string().trim().min(1, "Name the pan, e.g. 9×13 in pan.").max(60, "Use at most 60 characters."),
@@ -49,7 +49,7 @@ export const productInputSchema = z
     minQuantity: intIn("Minimum per order", 1, 10000).default(1),
     maxQuantity: intIn("Maximum per order", 1, 10000).default(100),
     leadDays: intIn("Days of notice", 0, 14).nullable().default(null),
-    allergens: z.array(z.enum(ALLERGEN_CODES, { errorMap: () => ({ message: "Choose allergens from the list." }) })).max(20).default([]),
+    allergens: z.array(z.enum(ALLERGEN_CODES, { error: "Choose allergens from the list." })).max(20).default([]),
     mayContain: z.string().trim().max(300, "Use at most 300 characters.").default(""),
     active: z.boolean().default(true),
     formulaId: z.number().int().positive().nullable().optional(),
@@ -145,8 +145,8 @@ export const PRICE_LIST_KINDS = ["fixed", "percent"] as const;
 export const priceListInputSchema = z
   .object({
     name: z.string().trim().min(1, "Name the price list.").max(80, "Use at most 80 characters."),
-    kind: z.enum(PRICE_LIST_KINDS, { errorMap: () => ({ message: "Choose per-product prices or a percentage off." }) }),
-    percentOff: z.coerce.number({ invalid_type_error: "Enter a percentage." }).min(0, "At least 0 %.").max(90, "At most 90 %.").multipleOf(0.01, "Use at most two decimals.").default(0),
+    kind: z.enum(PRICE_LIST_KINDS, { error: "Choose per-product prices or a percentage off." }),
+    percentOff: z.coerce.number({ error: (issue) => (issue.input === undefined ? undefined : "Enter a percentage.") }).min(0, "At least 0 %.").max(90, "At most 90 %.").multipleOf(0.01, "Use at most two decimals.").default(0),
     items: z.array(z.object({ productId: z.number().int().positive(), priceCents: z.number().int("Prices are whole cents.").min(0, "Prices cannot be negative.").max(MAX_PRICE_CENTS, `Prices can be at most ${MAX_PRICE_CENTS} cents (100,000.00).`) })).default([]),
   })
   .superRefine((v, ctx) => {

@@ -2,6 +2,13 @@ import { z } from "zod";
 import type { FieldErrors } from "../errors";
 
 /**
+ * zod 4 writes "Invalid input: expected string, received undefined" for a missing field; Panwise says
+ * "Required." there, as zod 3 did. A schema's own message always wins over this one (zod's precedence:
+ * schema, then parse, then this global map). Loaded wherever Panwise parses: every schema imports this file.
+ */
+z.config({ customError: (issue) => (issue.code === "invalid_type" && issue.input === undefined ? "Required." : undefined) });
+
+/**
  * Password rules, OWASP ASVS 4.0.3 V2.1 (level 2): at least 12 characters once runs of spaces count as one (V2.1.1),
  * at most 128 (V2.1.2), nothing truncated (V2.1.3: the server hashes every character with scrypt), any printable
  * Unicode (V2.1.4), and no composition rules (V2.1.9). The check against common and breached passwords (V2.1.7)
@@ -41,7 +48,7 @@ export const PASSWORD_PATTERN = "Avoid repeated or consecutive characters like â
 export const PASSWORD_COMMON = "This password is on a list of common or leaked passwords. Choose another: a few unrelated words work well.";
 
 export const emailSchema = z
-  .string({ required_error: "Enter an e-mail address.", invalid_type_error: "Enter an e-mail address." })
+  .string({ error: "Enter an e-mail address." })
   .trim()
   .min(1, "Enter an e-mail address.")
   .max(254, "That e-mail address is too long.")
@@ -49,7 +56,7 @@ export const emailSchema = z
   .transform((v) => v.toLowerCase());
 
 export const newPasswordSchema = z
-  .string({ required_error: "Choose a password.", invalid_type_error: "Choose a password." })
+  .string({ error: "Choose a password." })
   .superRefine((password, ctx) => {
     const message =
       Array.from(password).length > PASSWORD_MAX_LENGTH
@@ -63,7 +70,7 @@ export const newPasswordSchema = z
   });
 
 export const idSchema = z.coerce
-  .number({ invalid_type_error: "Must be a number." })
+  .number({ error: (issue) => (issue.input === undefined ? undefined : "Must be a number.") })
   .int("Must be a whole number.")
   .positive("Must be a positive number.");
 
@@ -85,7 +92,11 @@ export const optionalText = (max: number, label = "This") =>
 /** Turn a zod error into per-field messages keyed by dotted path ("lines.0.quantity"). */
 export function fieldErrorsFrom(error: z.ZodError): FieldErrors {
   const fields: FieldErrors = {};
-  for (const issue of error.issues) {
+  // zod 4's .int() also refuses numbers past Number.MAX_SAFE_INTEGER (origin "int", too_big/too_small) before
+  // the field's own .max()/.min() runs; for 1e20 the field's limit ("At most 10,000 units") says more than
+  // "whole units", so those safe-range issues only speak when nothing else does.
+  const safeRange = (issue: z.core.$ZodIssue) => (issue.code === "too_big" || issue.code === "too_small") && issue.origin === "int";
+  for (const issue of [...error.issues.filter((i) => !safeRange(i)), ...error.issues.filter(safeRange)]) {
     const key = issue.path.length ? issue.path.join(".") : "_";
     if (!fields[key]) fields[key] = issue.message;
   }

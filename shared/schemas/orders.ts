@@ -22,18 +22,18 @@ export const MAX_LINE_QUANTITY = 10_000;
 export const MAX_ORDER_CENTS = 2_147_483_647;
 
 export const quantitySchema = z
-  .number({ required_error: "Enter a quantity.", invalid_type_error: "The quantity must be a number." })
+  .number({ error: (issue) => (issue.input === undefined ? "Enter a quantity." : "The quantity must be a number.") })
   .int("Quantities are whole units.")
   .positive("The quantity must be at least 1.")
   .max(MAX_LINE_QUANTITY, `At most ${formatNumber(MAX_LINE_QUANTITY, DEFAULT_LOCALE)} units on one line.`);
 
 const lineSchema = z.object({
-  productId: z.number({ required_error: "Choose a product.", invalid_type_error: "Choose a product." }).int().positive("Choose a product."),
+  productId: z.number({ error: "Choose a product." }).int().positive("Choose a product."),
   quantity: quantitySchema,
 });
 
 const linesSchema = z
-  .array(lineSchema, { required_error: "Add at least one product." })
+  .array(lineSchema, { error: (issue) => (issue.input === undefined ? "Add at least one product." : undefined) })
   .min(1, "Add at least one product.")
   .max(100, "At most 100 lines.")
   .superRefine((lines, ctx) => {
@@ -103,7 +103,7 @@ export const standingOrderSchema = z
     accountId: z.number().int().positive().optional(),
     startDate: dateSchema,
     endDate: dateSchema.nullable().default(null),
-    intervalWeeks: z.union([z.literal(1), z.literal(2)], { errorMap: () => ({ message: "Choose every week or every other week." }) }),
+    intervalWeeks: z.union([z.literal(1), z.literal(2)], { error: "Choose every week or every other week." }),
     skipDates: z.array(dateSchema).max(200).default([]),
     lines: z
       .array(z.object({ productId: z.number().int().positive(), weekday: z.number().int().min(1).max(7), quantity: z.number().int("Quantities are whole units.").min(0, "Quantities cannot be negative.").max(MAX_LINE_QUANTITY, `At most ${formatNumber(MAX_LINE_QUANTITY, DEFAULT_LOCALE)} units on one line.`) }))

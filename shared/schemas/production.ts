@@ -6,13 +6,13 @@ import { dateSchema } from "./calendar";
 import type { ComponentCard } from "../components";
 
 const num = (label: string, min: number, max: number) =>
-  z.coerce.number({ invalid_type_error: `${label} must be a number.` }).min(min, `${label} must be at least ${min}.`).max(max, `${label} can be at most ${max}.`);
+  z.coerce.number({ error: (issue) => (issue.input === undefined ? undefined : `${label} must be a number.`) }).min(min, `${label} must be at least ${min}.`).max(max, `${label} can be at most ${max}.`);
 
 export const ingredientInputSchema = z.object({
   name: z.string().trim().min(1, "Name the ingredient.").max(120, "Use at most 120 characters."),
-  kind: z.enum(INGREDIENT_KINDS, { errorMap: () => ({ message: "Choose a kind: flour, liquid, fat, sugar, salt, leavening, egg, inclusion or other." }) }),
+  kind: z.enum(INGREDIENT_KINDS, { error: "Choose a kind: flour, liquid, fat, sugar, salt, leavening, egg, inclusion or other." }),
   waterPercent: num("Water content", 0, 100),
-  allergens: z.array(z.enum(ALLERGEN_CODES, { errorMap: () => ({ message: "Choose allergens from the list." }) })).default([]),
+  allergens: z.array(z.enum(ALLERGEN_CODES, { error: "Choose allergens from the list." })).default([]),
   packName: z.string().trim().min(1, "Describe the purchase pack, e.g. 25 kg sack.").max(60),
   packGrams: z.coerce.number().int("Whole grams.").min(0, "Cannot be negative.").max(1_000_000),
   packCostCents: z.coerce.number().int("Whole cents.").min(0, "Cannot be negative.").max(100_000_000).default(0),
@@ -42,11 +42,11 @@ export const formulaInputSchema = z.object({
       liquidIngredientId: z.number().int().positive("Choose the liquid to cook."),
       flourPercent: num("Share of flour cooked", 0.1, 100),
       liquidRatio: num("Liquid-to-flour ratio", 0.1, 20).default(5),
-      cookToC: z.coerce.number({ invalid_type_error: "Cook-to temperature must be a number." }).min(PASTE_MIN_COOK_C, PASTE_COOK_MESSAGE).max(100, PASTE_COOK_MESSAGE).default(65),
+      cookToC: z.coerce.number({ error: (issue) => (issue.input === undefined ? undefined : "Cook-to temperature must be a number.") }).min(PASTE_MIN_COOK_C, PASTE_COOK_MESSAGE).max(100, PASTE_COOK_MESSAGE).default(65),
     })
     .nullable()
     .default(null),
-  lines: z.array(z.object({ ingredientId: z.number().int().positive(), percent: z.number({ invalid_type_error: "Enter a percentage." }) })).max(40),
+  lines: z.array(z.object({ ingredientId: z.number().int().positive(), percent: z.number({ error: (issue) => (issue.input === undefined ? undefined : "Enter a percentage.") }) })).max(40),
   steps: z.array(z.object({ kind: z.enum(STEP_KINDS), minutes: z.number().int("Whole minutes.").min(0).max(24 * 60), temperatureC: z.number().min(0).max(350).nullable().optional() })).max(30).default([]),
   note: z.string().trim().max(200).default(""),
 });
@@ -143,7 +143,7 @@ export const progressInputSchema = z.union([
   z.object({
     kind: z.literal("internal"),
     key: z.string().regex(/^\d{1,4}$/, "Name the oven load by its number."),
-    valueC: z.number({ invalid_type_error: "Enter the temperature reached, e.g. 92." }).min(20, "Enter the temperature reached inside the bread: 20 to 120 °C.").max(120, "Enter the temperature reached inside the bread: 20 to 120 °C.").nullable(),
+    valueC: z.number({ error: (issue) => (issue.input === undefined ? undefined : "Enter the temperature reached, e.g. 92.") }).min(20, "Enter the temperature reached inside the bread: 20 to 120 °C.").max(120, "Enter the temperature reached inside the bread: 20 to 120 °C.").nullable(),
   }),
 ]);
 export type ProgressBody = z.output<typeof progressInputSchema>;
@@ -152,7 +152,7 @@ export type ProgressBody = z.output<typeof progressInputSchema>;
 
 const hhmm = z.string().trim().regex(/^([01]\d|2[0-3]):[0-5]\d$/, "Use a 24-hour time such as 06:30.");
 const whole = (label: string, min: number, max: number) =>
-  z.coerce.number({ invalid_type_error: `${label}: enter a whole number.` }).int(`${label}: whole numbers only.`).min(min, `${label}: at least ${min}.`).max(max, `${label}: at most ${max}.`);
+  z.coerce.number({ error: (issue) => (issue.input === undefined ? undefined : `${label}: enter a whole number.`) }).int(`${label}: whole numbers only.`).min(min, `${label}: at least ${min}.`).max(max, `${label}: at most ${max}.`);
 
 const ovenCapacitySchema = z.discriminatedUnion("kind", [
   z.object({ kind: z.literal("area"), areaCm2: whole("Usable shelf area (cm²)", 100, 1_000_000) }),
@@ -162,7 +162,7 @@ const ovenCapacitySchema = z.discriminatedUnion("kind", [
     slotLengthMm: whole("Slot length (mm)", 50, 3000),
     slotWidthMm: whole("Slot width (mm)", 50, 3000),
   }),
-], { errorMap: () => ({ message: "Choose shelf area or pan slots." }) });
+], { error: "Choose shelf area or pan slots." });
 
 /**
  * PUT /api/production/settings (the owner's settings screen checks with the same schema). Retard hours are

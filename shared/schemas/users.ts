@@ -2,9 +2,7 @@ import { z } from "zod";
 import { emailSchema } from "./common";
 import { ROLES, type Role } from "../roles";
 
-export const roleSchema = z.enum(ROLES, {
-  errorMap: () => ({ message: "Choose one of: owner, baker, bookkeeper, buyer." }),
-});
+export const roleSchema = z.enum(ROLES, { error: "Choose one of: owner, baker, bookkeeper, buyer." });
 
 export const invitationCreateSchema = z
   .object({

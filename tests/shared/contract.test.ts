@@ -84,8 +84,8 @@ export const driftedBoard = (b: RenamedOnServer<ServerBoard, "totalCents", "sumC
 
 // ---- the request schemas the routes use, from shared/schemas ----------------------------------------
 
-const messages = (r: { success: boolean; error?: { issues: { path: (string | number)[]; message: string }[] } }) =>
-  r.success ? [] : r.error!.issues.map((i) => `${i.path.join(".")}: ${i.message}`);
+const messages = (r: { success: boolean; error?: { issues: { path: PropertyKey[]; message: string }[] } }) =>
+  r.success ? [] : r.error!.issues.map((i) => `${i.path.map(String).join(".")}: ${i.message}`);
 
 describe("request schemas moved out of the route files", () => {
   it("an :id is a positive whole number, with the same messages as before", () => {

@@ -1,3 +1,4 @@
+import { z } from "zod";
 import { accountInputSchema } from "../../shared/schemas/accounts";
 import { invitationAcceptSchema, signInSchema } from "../../shared/schemas/auth";
 import { invitationCreateSchema } from "../../shared/schemas/users";
@@ -46,5 +47,22 @@ describe("shared schemas (used by the server and the forms)", () => {
 
   it("sends each role to its own home area", () => {
     expect([homeAreaFor("buyer"), homeAreaFor("baker"), homeAreaFor("owner"), homeAreaFor("bookkeeper")]).toEqual(["buyer", "baker", "office", "office"]);
+  });
+});
+
+describe("zod 4 messages (the schemas' own words survive the upgrade from zod 3)", () => {
+  const errorsOf = (schema: { safeParse: (v: unknown) => { success: boolean; error?: unknown } }, value: unknown) => {
+    const r = schema.safeParse(value);
+    return r.success ? {} : fieldErrorsFrom(r.error as never);
+  };
+  it("a missing field with its own message says it; one without says \"Required.\"", () => {
+    expect(errorsOf(signInSchema, { password: "x" }).email).toBe("Enter an e-mail address.");
+    expect(errorsOf(signInSchema, { email: 5, password: "x" }).email).toBe("Enter an e-mail address.");
+    expect(errorsOf(invitationAcceptSchema, { password: "correct horse battery staple", name: "A" }).token).toBe("The link is missing its token.");
+    expect(errorsOf(z.object({ note: z.string() }), {}).note).toBe("Required.");
+  });
+  it("enum messages given as the schema's error (zod 3's errorMap) still read as written", () => {
+    expect(errorsOf(invitationCreateSchema, { email: "a@b.test", role: "chef" }).role).toBe("Choose one of: owner, baker, bookkeeper, buyer.");
+    expect(errorsOf(accountInputSchema, { businessName: "A", deliveryAddress: "B", billingEmail: "a@b.test", status: "sleeping" }).status).toBe("Choose active, on hold or closed.");
   });
 });

@@ -143,7 +143,7 @@ function NewPasswordForm<S extends typeof INVITE_SCHEMA | typeof RESET_SCHEMA>({
   const { errors } = form;
   const submit = () =>
     void form.submit(async (input) => {
-      signIn(await send(input));
+      signIn(await send(input as z.output<S>));
       onDone();
     });
 

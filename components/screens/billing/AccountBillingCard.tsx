@@ -51,7 +51,7 @@ export function AccountBillingCard({ accountId, canChangeTerms, currentTerms }: 
   );
 }
 
-const TERMS_SCHEMA = z.object({ terms: z.enum(PAYMENT_TERMS, { errorMap: () => ({ message: "Choose the terms first." }) }) });
+const TERMS_SCHEMA = z.object({ terms: z.enum(PAYMENT_TERMS, { error: "Choose the terms first." }) });
 
 function TermsForm({ accountId, newestKind, currentTerms }: { accountId: number; newestKind?: "order" | "statement"; currentTerms?: PaymentTerms }) {
   const mutation = useSetTermsMutation(accountId);

@@ -35,7 +35,7 @@ export function creditNoteInput(v: CreditNoteValues) {
 }
 
 /** The credit note checked before sending: a reason, at least one line, each with what, how many and a price. */
-export function creditNoteSchema(currency: string): z.ZodType<CreditNoteInput, z.ZodTypeDef, ReturnType<typeof creditNoteInput>> {
+export function creditNoteSchema(currency: string): z.ZodType<CreditNoteInput, ReturnType<typeof creditNoteInput>> {
   const line = z.object({
     description: z.string().trim().min(1, "Say what is credited."),
     quantity: readText<number>((text) => {

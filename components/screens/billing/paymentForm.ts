@@ -22,7 +22,7 @@ export function paymentInput(v: PaymentValues) {
 }
 
 /** The payment form checked before sending (the server checks the same again): at most what is still owed. */
-export function paymentSchema(dueCents: number, currency: string): z.ZodType<PaymentInput, z.ZodTypeDef, ReturnType<typeof paymentInput>> {
+export function paymentSchema(dueCents: number, currency: string): z.ZodType<PaymentInput, ReturnType<typeof paymentInput>> {
   return z.object({
     amountCents: readText<number>((text) => {
       const cents = parseMoney(text, currency);
@@ -32,7 +32,7 @@ export function paymentSchema(dueCents: number, currency: string): z.ZodType<Pay
       if (cents > dueCents) return { message: `At most ${money(dueCents, currency)}, what is still owed.` };
       return { value: cents };
     }),
-    method: z.enum(PAYMENT_METHODS, { errorMap: () => ({ message: "Choose how it was paid." }) }),
+    method: z.enum(PAYMENT_METHODS, { error: "Choose how it was paid." }),
     reference: z.string().trim().min(1, "Enter the transfer reference or check number.").max(120, "At most 120 characters."),
     receivedOn: readText<string>((text) => (cleanDate(text) ? { value: text.trim() } : { message: "Write the date as YYYY-MM-DD." })),
   });

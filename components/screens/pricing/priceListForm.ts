@@ -46,7 +46,7 @@ type FormInput = ReturnType<typeof priceListFormInput>;
  * The shared price-list schema over typed prices: each own price readable as dollars and cents (an empty one
  * keeps the list price), and a fixed list with at least one own price.
  */
-export const priceListFormSchema: z.ZodType<PriceListInput, z.ZodTypeDef, FormInput> = z
+export const priceListFormSchema: z.ZodType<PriceListInput, FormInput> = z
   .object({ name: z.string(), kind: z.custom<PriceListDto["kind"]>(), percentOff: z.union([z.string(), z.number()]), prices: z.array(z.object({ productId: z.number(), text: z.string() })) })
   .transform((v, ctx): PriceListInput => {
     const items: PriceListInput["items"] = [];
