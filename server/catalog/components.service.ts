@@ -1,7 +1,9 @@
 import { In, type EntityManager } from "typeorm";
 import { Product } from "./product.entity";
 import { ProductComponent } from "./product-component.entity";
-import { Formula, FormulaVersion, Ingredient } from "../production/production.entity";
+import { Formula } from "../production/formula.entity";
+import { FormulaVersion } from "../production/formula-version.entity";
+import { Ingredient } from "../production/ingredient.entity";
 import { sortAllergens, type AllergenCode } from "../../shared/allergens";
 import { declaredAllergens, formulaBake, groupComponents, type ComponentLine, type DeclaredAllergens, type ResolvedBake } from "../../shared/components";
 import type { StepSpec } from "../../shared/production";

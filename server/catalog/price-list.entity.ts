@@ -16,6 +16,3 @@ export class PriceList {
   @Column({ type: "decimal", precision: 5, scale: 2, default: 0 })
   percentOff: string;
 }
-
-/** Re-exported for the modules that import it from this path; it lives in its own file. */
-export { PriceListItem } from "./price-list-item.entity";

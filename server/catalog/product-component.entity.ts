@@ -1,6 +1,6 @@
 import { Column, Entity, Index, JoinColumn, ManyToOne, PrimaryGeneratedColumn } from "typeorm";
 import { Product } from "./product.entity";
-import { Ingredient } from "../production/production.entity";
+import { Ingredient } from "../production/ingredient.entity";
 import type { ComponentKind, ComponentPer } from "../../shared/components";
 
 /**

@@ -51,7 +51,3 @@ export class Order {
   @UpdateDateColumn({ type: "datetime", precision: 3, default: () => "CURRENT_TIMESTAMP(3)", onUpdate: "CURRENT_TIMESTAMP(3)" })
   updatedAt: Date;
 }
-
-/** Re-exported for the modules that import them from this path; each lives in its own file. */
-export { OrderLine } from "./order-line.entity";
-export { IdempotencyRecord } from "./idempotency-record.entity";

@@ -33,6 +33,3 @@ export class StandingOrder {
   @UpdateDateColumn({ type: "datetime", precision: 3, default: () => "CURRENT_TIMESTAMP(3)", onUpdate: "CURRENT_TIMESTAMP(3)" })
   updatedAt: Date;
 }
-
-/** Re-exported for the modules that import it from this path; it lives in its own file. */
-export { StandingOrderLine } from "./standing-order-line.entity";

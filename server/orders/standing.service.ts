@@ -1,8 +1,10 @@
 import { In, type EntityManager } from "typeorm";
 import type { AppContext } from "../http/context";
 import { HttpError, badRequest } from "../http/errors";
-import { StandingOrder, StandingOrderLine } from "./standing-order.entity";
-import { Order, OrderLine } from "./order.entity";
+import { StandingOrder } from "./standing-order.entity";
+import { StandingOrderLine } from "./standing-order-line.entity";
+import { Order } from "./order.entity";
+import { OrderLine } from "./order-line.entity";
 import { Product } from "../catalog/product.entity";
 import { CustomerAccount } from "../accounts/account.entity";
 import { loadCalendarSettings, parseWeekdays, resolveAccount } from "../calendar/calendar.service";

@@ -1,7 +1,9 @@
 import type { EntityManager } from "typeorm";
 import type { AppContext } from "../http/context";
 import { badRequest, conflict, notFound, parse } from "../http/errors";
-import { Formula, FormulaVersion, Ingredient } from "./production.entity";
+import { Formula } from "./formula.entity";
+import { FormulaVersion } from "./formula-version.entity";
+import { Ingredient } from "./ingredient.entity";
 import { Product } from "../catalog/product.entity";
 import { declaredAllergensOf } from "../catalog/components.service";
 import { formulaFigures, validateFormula, type FormulaSpec, type IngredientInfo } from "../../shared/production";

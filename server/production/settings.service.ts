@@ -3,7 +3,10 @@ import type { AppContext } from "../http/context";
 import { badRequest } from "../http/errors";
 import { Bakery } from "../bakery/bakery.entity";
 import { getBakery } from "../bakery/bakery.service";
-import { BakehouseMixer, BakehouseOven, Formula, ProductionSettings } from "./production.entity";
+import { BakehouseMixer } from "./bakehouse-mixer.entity";
+import { BakehouseOven } from "./bakehouse-oven.entity";
+import { Formula } from "./formula.entity";
+import { ProductionSettings } from "./production-settings.entity";
 import type { ProductionSettingsDto, ProductionSettingsInput } from "../../shared/schemas/production";
 import type { BakehouseResources, OvenSpec } from "../../shared/schedule";
 

@@ -1,7 +1,9 @@
 import { DateTime } from "luxon";
 import type { AppContext } from "../http/context";
-import { StandingOrder, StandingOrderLine } from "../orders/standing-order.entity";
-import { Order, OrderLine } from "../orders/order.entity";
+import { StandingOrder } from "../orders/standing-order.entity";
+import { StandingOrderLine } from "../orders/standing-order-line.entity";
+import { Order } from "../orders/order.entity";
+import { OrderLine } from "../orders/order-line.entity";
 import { Product } from "../catalog/product.entity";
 import { CustomerAccount } from "../accounts/account.entity";
 import { pricingFor } from "../catalog/catalog.service";

@@ -1,6 +1,6 @@
 import { startTestApp, makeAccount, makeBakery, makeProduct, makeUser, tokenFor, auth, type TestApp } from "./helpers/app";
 import { createOrder, withIdempotency } from "../../server/orders/orders.service";
-import { IdempotencyRecord } from "../../server/orders/order.entity";
+import { IdempotencyRecord } from "../../server/orders/idempotency-record.entity";
 import { Order } from "../../server/orders/order.entity";
 import { toSessionUser } from "../../server/http/auth";
 import { User } from "../../server/users/user.entity";

@@ -1,5 +1,6 @@
 import { startTestApp, makeAccount, makeBakery, makeProduct, makeUser, tokenFor, waitForMail, auth, type TestApp } from "./helpers/app";
-import { Order, OrderLine } from "../../server/orders/order.entity";
+import { Order } from "../../server/orders/order.entity";
+import { OrderLine } from "../../server/orders/order-line.entity";
 import { Invoice } from "../../server/billing/invoice.entity";
 import { CustomerAccount } from "../../server/accounts/account.entity";
 import { applyCreditHolds, issueStatements } from "../../server/billing/invoices.service";

@@ -7,7 +7,7 @@ import { renderPlanPdf } from "../../server/production/plan.pdf";
 import { renderInvoicePdf } from "../../server/billing/invoice.pdf";
 import { pdfText } from "../../server/pdf/fonts";
 import { Product } from "../../server/catalog/product.entity";
-import { Formula } from "../../server/production/production.entity";
+import { Formula } from "../../server/production/formula.entity";
 import { User } from "../../server/users/user.entity";
 import { hashPassword } from "../../server/auth/password-hash";
 import { TEST_PASSWORD, tokenFor } from "./helpers/app";

@@ -1,5 +1,6 @@
 import { startTestApp, makeAccount, makeBakery, makeProduct, makeUser, tokenFor, auth, type TestApp } from "./helpers/app";
-import { Order, OrderLine } from "../../server/orders/order.entity";
+import { Order } from "../../server/orders/order.entity";
+import { OrderLine } from "../../server/orders/order-line.entity";
 import { ALLERGENS } from "../../shared/allergens";
 import { Product } from "../../server/catalog/product.entity";
 import { seedDemo } from "../../server/seed/demo";

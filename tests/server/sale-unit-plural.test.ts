@@ -1,7 +1,7 @@
 import { createTestDatabase } from "./helpers/db";
 import { seedDemo } from "../../server/seed/demo";
 import { Product } from "../../server/catalog/product.entity";
-import { OrderLine } from "../../server/orders/order.entity";
+import { OrderLine } from "../../server/orders/order-line.entity";
 
 /**
  * Migration 1796190000008 (SaleUnitPlural): rows written before plurals were stored get the plural

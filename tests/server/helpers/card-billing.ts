@@ -1,5 +1,6 @@
 import { startTestApp, makeAccount, makeBakery, makeProduct, makeUser, tokenFor, type TestApp } from "./app";
-import { Order, OrderLine } from "../../../server/orders/order.entity";
+import { Order } from "../../../server/orders/order.entity";
+import { OrderLine } from "../../../server/orders/order-line.entity";
 import { Invoice } from "../../../server/billing/invoice.entity";
 import { confirmDispatch } from "../../../server/billing/dispatch.service";
 import { taxCents } from "../../../shared/billing";
