@@ -4,7 +4,7 @@ import Feather from "@expo/vector-icons/Feather";
 import { colors, radii, space } from "../theme";
 import { AppText, Heading } from "./Text";
 import { Button } from "./Button";
-import { messageOf } from "../api/client";
+import { ApiError, messageOf } from "../api/client";
 
 export function LoadingState({ label = "Loading…", testID = "loading" }: { label?: string; testID?: string }) {
   return (
@@ -50,7 +50,9 @@ export interface ErrorStateProps {
   testID?: string;
 }
 
+/** A failed query or request: what went wrong, the server's request id to quote (when it sent one), and a retry. */
 export function ErrorState({ error, title = "This didn't load", onRetry, retrying, testID = "error" }: ErrorStateProps) {
+  const requestId = error instanceof ApiError ? error.requestId : undefined;
   return (
     <View style={[styles.center, styles.panel, styles.errorPanel]} accessibilityRole="alert" testID={testID}>
       <Feather name="cloud-off" size={24} color={colors.dangerInk} />
@@ -60,6 +62,11 @@ export function ErrorState({ error, title = "This didn't load", onRetry, retryin
       <AppText color="ink" align="center">
         {messageOf(error)}
       </AppText>
+      {requestId ? (
+        <AppText variant="small" color="muted" align="center" selectable testID={`${testID}-reference`}>
+          {`Reference: ${requestId}`}
+        </AppText>
+      ) : null}
       {onRetry ? <Button label="Try again" icon="refresh-cw" variant="secondary" onPress={onRetry} busy={retrying} testID={`${testID}-retry`} /> : null}
     </View>
   );

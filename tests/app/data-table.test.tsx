@@ -1,7 +1,7 @@
 /** The one table (components/ui/DataTable.tsx) and list card (components/ui/ListCard.tsx) every list screen uses. */
-import { Text } from "react-native";
+import { ScrollView, StyleSheet, Text } from "react-native";
 import { act, fireEvent, render, screen } from "@testing-library/react-native";
-import { DataTable } from "../../components/ui/DataTable";
+import { DataTable, NoValue } from "../../components/ui/DataTable";
 import { ListCard } from "../../components/ui/ListCard";
 import { colors } from "../../components/theme";
 
@@ -65,10 +65,39 @@ describe("DataTable", () => {
     render(<DataTable<Row> rows={ROWS} rowKey={(r) => r.id} columns={[{ key: "name", label: "Account", render: (r) => r.name }]} footerTestID="totals" />);
     expect(screen.queryByTestId("totals")).toBeNull();
   });
+
+  it("a strong column writes its text in bold; an empty cell is a muted dash", () => {
+    render(
+      <DataTable<Row>
+        rows={ROWS}
+        rowKey={(r) => r.id}
+        rowTestID={(r) => `row-${r.id}`}
+        columns={[
+          { key: "name", label: "Account", strong: true, render: (r) => r.name },
+          { key: "owed", label: "Owed", align: "right", render: (r) => (r.late ? r.owed : <NoValue />) },
+        ]}
+      />,
+    );
+    const bold = StyleSheet.flatten(screen.getByText("Tidewater Café").props.style).fontFamily;
+    const plain = StyleSheet.flatten(screen.getByText("4500").props.style).fontFamily;
+    expect(bold).not.toEqual(plain);
+    expect(screen.getByTestId("row-1")).toHaveTextContent("Tidewater Café–");
+    expect(StyleSheet.flatten(screen.getByText("–").props.style).color).toBe(colors.muted);
+  });
+
+  it("with a minimum width (a column per product or day) it scrolls sideways and keeps that width", () => {
+    const { UNSAFE_queryAllByType } = render(table());
+    expect(UNSAFE_queryAllByType(ScrollView)).toHaveLength(0);
+    screen.unmount();
+    const wide = render(<DataTable<Row> testID="wide" rows={ROWS} rowKey={(r) => r.id} minWidth={900} columns={[{ key: "name", label: "Account", render: (r) => r.name }]} />);
+    const scroll = wide.UNSAFE_getByType(ScrollView);
+    expect(scroll.props.horizontal).toBe(true);
+    expect(screen.getByTestId("wide")).toHaveStyle({ minWidth: 900 });
+  });
 });
 
 describe("ListCard", () => {
-  it("a pressable row, or a card that does not open (no button), tinted when it needs attention", async () => {
+  it("a pressable row, or a card that does not open (no button), tinted when it needs attention, on the page colour when quiet", async () => {
     const open = jest.fn();
     render(
       <>
@@ -78,6 +107,9 @@ describe("ListCard", () => {
         <ListCard alert testID="b">
           <Text>Failed mail</Text>
         </ListCard>
+        <ListCard quiet testID="c">
+          <Text>Canceled order</Text>
+        </ListCard>
       </>,
     );
     // The chevron's icon font loads after the first render.
@@ -86,5 +118,6 @@ describe("ListCard", () => {
     expect(open).toHaveBeenCalled();
     expect(screen.getAllByRole("button")).toHaveLength(1);
     expect(screen.getByTestId("b")).toHaveStyle({ backgroundColor: colors.dangerSoft, borderColor: colors.danger });
+    expect(screen.getByTestId("c")).toHaveStyle({ backgroundColor: colors.page });
   });
 });
