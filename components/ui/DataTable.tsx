@@ -1,7 +1,7 @@
 import React from "react";
 import { Pressable, ScrollView, StyleSheet, View, type ViewStyle } from "react-native";
-import { colors, layout, radii, space } from "../theme";
 import { AppText } from "./Text";
+import { colors, layout, radii, space, type ColorName } from "../theme";
 
 export interface Column<T> {
   key: string;
@@ -44,6 +44,36 @@ function Cell({ content, align, strong }: { content: React.ReactNode; align: Col
     );
   }
   return <>{content}</>;
+}
+
+export interface TitleCellProps {
+  /** What the row is: bold. */
+  title: string;
+  /** A smaller line under it (kind, address, version). */
+  detail?: string | null;
+  detailColor?: ColorName;
+  /** Cut both lines to one (long names in a narrow column). */
+  oneLine?: boolean;
+  /** More lines under them (an error, a note). */
+  children?: React.ReactNode;
+}
+
+/** The cell that names a row: its title in bold, a smaller line under it. */
+export function TitleCell({ title, detail, detailColor = "muted", oneLine, children }: TitleCellProps) {
+  const lines = oneLine ? 1 : undefined;
+  return (
+    <View>
+      <AppText variant="bodyStrong" numberOfLines={lines}>
+        {title}
+      </AppText>
+      {detail ? (
+        <AppText variant="small" color={detailColor} numberOfLines={lines}>
+          {detail}
+        </AppText>
+      ) : null}
+      {children}
+    </View>
+  );
 }
 
 /** A cell with nothing in it (no quantity that day): a muted dash. */

@@ -1,7 +1,7 @@
 /** The one table (components/ui/DataTable.tsx) and list card (components/ui/ListCard.tsx) every list screen uses. */
 import { ScrollView, StyleSheet, Text } from "react-native";
 import { act, fireEvent, render, screen } from "@testing-library/react-native";
-import { DataTable, NoValue } from "../../components/ui/DataTable";
+import { DataTable, NoValue, TitleCell } from "../../components/ui/DataTable";
 import { ListCard } from "../../components/ui/ListCard";
 import { colors } from "../../components/theme";
 
@@ -93,6 +93,24 @@ describe("DataTable", () => {
     const scroll = wide.UNSAFE_getByType(ScrollView);
     expect(scroll.props.horizontal).toBe(true);
     expect(screen.getByTestId("wide")).toHaveStyle({ minWidth: 900 });
+  });
+});
+
+describe("TitleCell", () => {
+  it("a bold title, a smaller line under it when there is one, cut to one line when asked", () => {
+    render(
+      <>
+        <TitleCell title="Tidewater Café" detail="12 Harbor Rd" oneLine>
+          <Text>Last error: refused</Text>
+        </TitleCell>
+        <TitleCell title="INV-2025-0007" detail={null} />
+      </>,
+    );
+    expect(screen.getByText("Tidewater Café")).toHaveProp("numberOfLines", 1);
+    expect(screen.getByText("12 Harbor Rd")).toHaveStyle({ color: colors.muted });
+    expect(screen.getByText("Last error: refused")).toBeOnTheScreen();
+    expect(screen.getByText("INV-2025-0007")).not.toHaveProp("numberOfLines", 1);
+    expect(screen.getAllByText(/./)).toHaveLength(4);
   });
 });
 

@@ -6,7 +6,7 @@ import { PageHeader } from "../../ui/PageHeader";
 import { SEARCH_INPUT, TextField } from "../../ui/TextField";
 import { ChoiceGroup } from "../../ui/ChoiceGroup";
 import { QueryStates } from "../../ui/QueryStates";
-import { DataTable } from "../../ui/DataTable";
+import { DataTable, TitleCell } from "../../ui/DataTable";
 import { StatusBadge } from "../../ui/Badge";
 import { LinkButton } from "../../ui/LinkButton";
 import { ListCard, ListCards } from "../../ui/ListCard";
@@ -92,16 +92,7 @@ export function AccountsListScreen() {
               key: "business",
               label: "Business",
               flex: 2.2,
-              render: (a) => (
-                <View>
-                  <AppText variant="bodyStrong" numberOfLines={1}>
-                    {a.businessName}
-                  </AppText>
-                  <AppText variant="small" color="muted" numberOfLines={1}>
-                    {a.deliveryAddress}
-                  </AppText>
-                </View>
-              ),
+              render: (a) => <TitleCell title={a.businessName} detail={a.deliveryAddress} oneLine />,
             },
             { key: "contact", label: "Contact", flex: 1.4, render: (a) => <AppText numberOfLines={1}>{a.contactName || "—"}</AppText> },
             { key: "billing", label: "Billing e-mail", flex: 1.8, render: (a) => <AppText numberOfLines={1}>{a.billingEmail}</AppText> },

@@ -15,6 +15,7 @@ import { useProductsQuery } from "../../api/products";
 import { ProductPhoto, useMoney } from "../ordering/parts";
 import type { ProductDto } from "../../../shared/schemas/catalog";
 import { TableOrCards } from "../production/TableOrCards";
+import { TitleCell } from "../../ui/DataTable";
 import { space } from "../../theme";
 
 type Filter = "active" | "archived" | "all";
@@ -97,12 +98,7 @@ function ProductList({ all, filter, isOwner }: { all: ProductDto[]; filter: Filt
             <View style={styles.nameCell}>
               <ProductPhoto url={p.photoUrl} name={p.name} size={40} />
               <View style={styles.flex}>
-                <AppText variant="bodyStrong" numberOfLines={1}>
-                  {p.name}
-                </AppText>
-                <AppText variant="small" color="muted" numberOfLines={1}>
-                  {p.saleUnit}
-                </AppText>
+                <TitleCell title={p.name} detail={p.saleUnit} oneLine />
               </View>
             </View>
           ),
