@@ -11,7 +11,7 @@ import { FormError, Notice } from "../../ui/FormError";
 import { LoadingState } from "../../ui/States";
 import { QueryStates } from "../../ui/QueryStates";
 import { DataTable, TitleCell } from "../../ui/DataTable";
-import { ListCard, ListCardText, ListCardTop, ListCards } from "../../ui/ListCard";
+import { ListCard, ListCardText, ListCardTitle, ListCardTop, ListCards } from "../../ui/ListCard";
 import { AppText } from "../../ui/Text";
 import { useAccountsQuery } from "../../api/accounts";
 import { useInvoicesQuery, useIssueStatementsMutation, type InvoiceDto, type InvoiceListParams, type InvoiceSort, type InvoiceStatus, type InvoiceTotalsDto } from "../../api/invoices";
@@ -295,9 +295,7 @@ function InvoiceCard({ invoice: i, href, office }: { invoice: InvoiceDto; href: 
     >
       <ListCardText>
         <ListCardTop>
-          <AppText variant="bodyStrong" style={billingStyles.grow}>
-            {i.number}
-          </AppText>
+          <ListCardTitle>{i.number}</ListCardTitle>
           <StatusCell invoice={i} office={office} />
         </ListCardTop>
         {office ? <AppText variant="small">{i.accountName}</AppText> : null}

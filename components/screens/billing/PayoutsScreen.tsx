@@ -4,7 +4,7 @@ import { Screen } from "../../ui/Screen";
 import { PageHeader } from "../../ui/PageHeader";
 import { Badge } from "../../ui/Badge";
 import { DataTable } from "../../ui/DataTable";
-import { ListCard, ListCardText, ListCardTop, ListCards } from "../../ui/ListCard";
+import { ListCard, ListCardText, ListCardTitle, ListCardTop, ListCards } from "../../ui/ListCard";
 import { QueryStates } from "../../ui/QueryStates";
 import { AppText } from "../../ui/Text";
 import { ApiError } from "../../api/client";
@@ -13,7 +13,7 @@ import { useBakeryTimeZone } from "../../api/bakery";
 import { formatDateTime } from "../../format";
 import { payoutStatusLabel } from "../../../shared/billing";
 import { useIsWide } from "../../shell/useIsWide";
-import { BackLink, billingStyles, day, money } from "./parts";
+import { BackLink, day, money } from "./parts";
 import { arrival } from "./payoutText";
 
 /** The card processor's payouts to the bank, each to check against Panwise's payments and refunds. */
@@ -64,9 +64,7 @@ export function PayoutsScreen() {
                 <ListCard key={p.id} href={`/office/money/payouts/${p.id}`} accessibilityLabel={`Payout of ${money(p.amountCents, p.currency)}, arrives ${day(p.arrivalDate)}`} testID={`payout-row-${p.id}`}>
                   <ListCardText>
                     <ListCardTop>
-                      <AppText variant="bodyStrong" style={billingStyles.grow}>
-                        {money(p.amountCents, p.currency)}
-                      </AppText>
+                      <ListCardTitle>{money(p.amountCents, p.currency)}</ListCardTitle>
                       {p.reconciledAt ? <Badge label="Reconciled" tone="sage" testID={`payout-reconciled-${p.id}`} /> : <Badge label="To reconcile" tone="amber" testID={`payout-todo-${p.id}`} />}
                     </ListCardTop>
                     <AppText variant="small" color="muted">{arrival(p.status, p.arrivalDate)}</AppText>

@@ -9,7 +9,7 @@ import { formatNum } from "../../../format";
 import { kitchenPaths, type KitchenArea } from "../../../production/paths";
 import { formatPercent } from "../../../production/units";
 import { LibraryScreen } from "../LibraryScreen";
-import { CardBody, TableOrCards } from "../TableOrCards";
+import { CardBody, TableOrCards } from "../../../ui/TableOrCards";
 import { TitleCell } from "../../../ui/DataTable";
 import { productNames } from "./formulaText";
 import { space } from "../../../theme";

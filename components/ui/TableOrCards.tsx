@@ -1,8 +1,8 @@
 import React from "react";
 import { StyleSheet, View } from "react-native";
-import { DataTable, type Column } from "../../ui/DataTable";
-import { ListCard, ListCards } from "../../ui/ListCard";
-import { useIsWide } from "../../shell/useIsWide";
+import { DataTable, type Column } from "./DataTable";
+import { ListCard, ListCards } from "./ListCard";
+import { useIsWide } from "../shell/useIsWide";
 
 export interface TableOrCardsProps<T> {
   rows: T[];
