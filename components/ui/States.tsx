@@ -4,6 +4,8 @@ import Feather from "@expo/vector-icons/Feather";
 import { colors, radii, space } from "../theme";
 import { AppText, Heading } from "./Text";
 import { Button } from "./Button";
+import { TextLink } from "./TextLink";
+import type { Href } from "expo-router";
 import { ApiError, messageOf } from "../api/client";
 
 export function LoadingState({ label = "Loading…", testID = "loading" }: { label?: string; testID?: string }) {
@@ -39,6 +41,30 @@ export function EmptyState({ title, message, icon = "inbox", action, testID = "e
       ) : null}
       {action ? <View>{action}</View> : null}
     </View>
+  );
+}
+
+/** The API answered 404 for the thing a page shows. */
+export function isNotFound(error: unknown): boolean {
+  return error instanceof ApiError && error.status === 404;
+}
+
+export interface NotFoundStateProps {
+  /** "There's no such account". */
+  title: string;
+  message?: string;
+  /** The list to go back to. */
+  back: { href: Href; label: string };
+  testID: string;
+}
+
+/** A page whose thing does not exist (a wrong id in the address): says so and links back to the list. */
+export function NotFoundState({ title, message, back, testID }: NotFoundStateProps) {
+  return (
+    <>
+      <EmptyState icon="help-circle" title={title} message={message} testID={testID} />
+      <TextLink href={back.href} label={back.label} />
+    </>
   );
 }
 

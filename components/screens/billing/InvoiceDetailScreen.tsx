@@ -8,11 +8,11 @@ import { Button } from "../../ui/Button";
 import { TextLink } from "../../ui/TextLink";
 import { FormError, Notice } from "../../ui/FormError";
 import { Badge } from "../../ui/Badge";
-import { EmptyState } from "../../ui/States";
+import { NotFoundState, isNotFound } from "../../ui/States";
 import { QueryStates } from "../../ui/QueryStates";
 import { DataTable } from "../../ui/DataTable";
 import { AppText } from "../../ui/Text";
-import { ApiError, messageOf } from "../../api/client";
+import { messageOf } from "../../api/client";
 import { downloadInvoicePdf, useInvoiceQuery, useRefundOverpaymentMutation, type InvoiceDetailDto, type InvoiceDto } from "../../api/invoices";
 import { useBillingSettingsQuery } from "../../api/billingSettings";
 import { useBakeryTimeZone } from "../../api/bakery";
@@ -39,15 +39,12 @@ export function InvoiceDetailScreen({ id, mode }: InvoiceDetailProps) {
   const office = mode === "office";
   const listHref = office ? ("/office/invoices" as const) : ("/buyer/invoices" as const);
 
-  const notFound = !valid || (detail.isError && detail.error instanceof ApiError && detail.error.status === 404);
+  const notFound = !valid || (detail.isError && isNotFound(detail.error));
 
   return (
     <Screen testID="invoice-detail">
       {notFound ? (
-        <>
-          <EmptyState icon="help-circle" title="There's no such invoice" message="It may have been typed wrong in the address." testID="invoice-not-found" />
-          <TextLink href={listHref} label="All invoices" />
-        </>
+        <NotFoundState title="There's no such invoice" message="It may have been typed wrong in the address." back={{ href: listHref, label: "All invoices" }} testID="invoice-not-found" />
       ) : (
         <QueryStates query={detail} testID="invoice" loadingLabel="Loading the invoice…" errorTitle="This invoice didn't load">
           {(d) => <InvoiceBody detail={d} office={office} listHref={listHref} refund={refund} wide={wide} />}
