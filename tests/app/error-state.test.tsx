@@ -1,6 +1,6 @@
 /** ErrorState (components/ui/States.tsx): the server's request id, for a person to quote. */
 import { act, render, screen } from "@testing-library/react-native";
-import { ErrorState } from "../../components/ui/States";
+import { ErrorState, isNotFound } from "../../components/ui/States";
 import { QueryStates, type QueryStatesProps } from "../../components/ui/QueryStates";
 import { ApiError } from "../../components/api/client";
 
@@ -39,4 +39,11 @@ test("a query's error through QueryStates carries the reference with the screen'
   );
   await settle();
   expect(screen.getByTestId("things-error-reference")).toHaveTextContent("Reference: abc-123");
+});
+
+test("isNotFound: only the API's 404 (the screens' not-found pages; accounts and invoices tests open one)", () => {
+  expect(isNotFound(new ApiError(404, "not_found", "Not found."))).toBe(true);
+  expect(isNotFound(new ApiError(403, "forbidden", "No."))).toBe(false);
+  expect(isNotFound(new Error("404"))).toBe(false);
+  expect(isNotFound(null)).toBe(false);
 });
