@@ -1,4 +1,4 @@
-import React, { useState } from "react";
+import React from "react";
 import { StyleSheet, View } from "react-native";
 import { Screen } from "../../ui/Screen";
 import { PageHeader } from "../../ui/PageHeader";
@@ -13,6 +13,7 @@ import { QueryStates } from "../../ui/QueryStates";
 import { DataTable } from "../../ui/DataTable";
 import { AppText } from "../../ui/Text";
 import { messageOf } from "../../api/client";
+import { useDownload } from "../../forms/useDownload";
 import { downloadInvoicePdf, useInvoiceQuery, useRefundOverpaymentMutation, type InvoiceDetailDto, type InvoiceDto } from "../../api/invoices";
 import { useBillingSettingsQuery } from "../../api/billingSettings";
 import { useBakeryTimeZone } from "../../api/bakery";
@@ -140,23 +141,11 @@ function AlertsCard({ detail, refund }: { detail: InvoiceDetailDto; refund: Retu
 }
 
 function PdfButton({ invoice }: { invoice: InvoiceDto }) {
-  const [busy, setBusy] = useState(false);
-  const [error, setError] = useState<string | null>(null);
-  const run = async () => {
-    setError(null);
-    setBusy(true);
-    try {
-      await downloadInvoicePdf(invoice);
-    } catch (err) {
-      setError(messageOf(err));
-    } finally {
-      setBusy(false);
-    }
-  };
+  const download = useDownload();
   return (
     <View style={styles.pdf}>
-      <Button label="Download PDF" icon="download" variant="secondary" busy={busy} onPress={run} testID="invoice-pdf" />
-      <FormError message={error} testID="invoice-pdf-error" />
+      <Button label="Download PDF" icon="download" variant="secondary" busy={download.pending !== null} onPress={() => download.run(() => downloadInvoicePdf(invoice))} testID="invoice-pdf" />
+      <FormError message={download.error} testID="invoice-pdf-error" />
     </View>
   );
 }
