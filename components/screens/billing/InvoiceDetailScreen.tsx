@@ -113,13 +113,13 @@ function AlertsCard({ detail, refund }: { detail: InvoiceDetailDto; refund: Retu
   return (
     <Card title="Needs your attention" testID="invoice-alerts">
       {alerts.map((a, i) => (
-        <View key={`${a.kind}-${a.eventId ?? i}`} style={[styles.entry, i > 0 && styles.divider]} testID={`invoice-alert-${a.kind}`}>
-          <View style={billingStyles.cardTop}>
-            <AppText variant="bodyStrong" style={billingStyles.grow}>
-              {a.kind === "overpayment" ? `Paid twice: ${money(a.amountCents ?? 0, inv.currency)} too much` : "Payment notice rejected"}
-            </AppText>
-            <Badge label={a.kind === "overpayment" ? "Overpaid" : "Not applied"} tone={a.kind === "overpayment" ? "amber" : "danger"} />
-          </View>
+        <Entry
+          key={`${a.kind}-${a.eventId ?? i}`}
+          divided={i > 0}
+          testID={`invoice-alert-${a.kind}`}
+          title={a.kind === "overpayment" ? `Paid twice: ${money(a.amountCents ?? 0, inv.currency)} too much` : "Payment notice rejected"}
+          badge={<Badge label={a.kind === "overpayment" ? "Overpaid" : "Not applied"} tone={a.kind === "overpayment" ? "amber" : "danger"} />}
+        >
           <AppText variant="small">{a.message}</AppText>
           {a.kind === "overpayment" ? (
             <View style={styles.action}>
@@ -134,7 +134,7 @@ function AlertsCard({ detail, refund }: { detail: InvoiceDetailDto; refund: Retu
               <FormError message={refund.isError ? messageOf(refund.error) : null} testID="refund-overpayment-error" />
             </View>
           ) : null}
-        </View>
+        </Entry>
       ))}
     </Card>
   );
@@ -228,19 +228,13 @@ function CreditNotesCard({ detail }: { detail: InvoiceDetailDto }) {
   return (
     <Card title="Credit notes" testID="invoice-credit-notes">
       {detail.creditNotes.map((c, i) => (
-        <View key={c.id} style={[styles.entry, i > 0 && styles.divider]} testID={`credit-note-${c.id}`}>
-          <View style={billingStyles.cardTop}>
-            <AppText variant="bodyStrong" style={billingStyles.grow}>
-              {c.number}
-            </AppText>
-            <Badge label={c.carriedFromInvoiceId ? "Carried from an earlier invoice" : DISPOSITION_LABELS[c.disposition]} tone="crust" />
-          </View>
+        <Entry key={c.id} divided={i > 0} testID={`credit-note-${c.id}`} title={c.number} badge={<Badge label={c.carriedFromInvoiceId ? "Carried from an earlier invoice" : DISPOSITION_LABELS[c.disposition]} tone="crust" />}>
           <AppText variant="small" color="muted">{`${day(c.issueDate)} · ${c.reason}`}</AppText>
           {c.lines.map((l, j) => (
             <AppText key={j} variant="small">{`${l.quantity} × ${l.description} at ${money(l.unitPriceCents, cur)}`}</AppText>
           ))}
           <AppText variant="bodyStrong" align="right">{`− ${money(c.totalCents, cur)}${c.taxCents ? ` (incl. ${money(c.taxCents, cur)} tax)` : ""}`}</AppText>
-        </View>
+        </Entry>
       ))}
     </Card>
   );
@@ -256,15 +250,9 @@ function PaymentsCard({ detail }: { detail: InvoiceDetailDto }) {
         </AppText>
       ) : (
         detail.payments.map((p, i) => (
-          <View key={p.id} style={[styles.entry, i > 0 && styles.divider]} testID={`payment-${p.id}`}>
-            <View style={billingStyles.cardTop}>
-              <AppText variant="bodyStrong" style={billingStyles.grow}>
-                {money(p.amountCents, cur)}
-              </AppText>
-              <Badge label={METHOD_LABELS[p.method]} tone="sage" />
-            </View>
+          <Entry key={p.id} divided={i > 0} testID={`payment-${p.id}`} title={money(p.amountCents, cur)} badge={<Badge label={METHOD_LABELS[p.method]} tone="sage" />}>
             <AppText variant="small" color="muted">{`Received ${day(p.receivedOn)}${p.reference ? ` · ref. ${p.reference}` : ""}`}</AppText>
-          </View>
+          </Entry>
         ))
       )}
     </Card>
@@ -277,10 +265,9 @@ function RefundsCard({ detail }: { detail: InvoiceDetailDto }) {
   return (
     <Card title="Refunds to the card" testID="invoice-refunds">
       {detail.refunds.map((r, i) => (
-        <View key={r.id} style={[styles.entry, i > 0 && styles.divider]} testID={`refund-${r.id}`}>
-          <AppText variant="bodyStrong">{money(r.amountCents, cur)}</AppText>
+        <Entry key={r.id} divided={i > 0} testID={`refund-${r.id}`} title={money(r.amountCents, cur)}>
           <AppText variant="small" color="muted">{`${formatDateTime(r.createdAt, timeZone)} · ${r.overpayment ? "overpayment given back · " : ""}${r.stripeRefundId}`}</AppText>
-        </View>
+        </Entry>
       ))}
     </Card>
   );
@@ -294,12 +281,30 @@ function EmailsCard({ detail }: { detail: InvoiceDetailDto }) {
   return (
     <Card title="E-mails" testID="invoice-emails">
       {(detail.emails ?? []).map((e, i) => (
-        <View key={e.id} style={[styles.entry, i > 0 && styles.divider]} testID={`invoice-email-${e.id}`}>
-          <AppText variant="bodyStrong">{e.kind === "receipt" ? "Payment receipt" : "Invoice with PDF"}</AppText>
+        <Entry key={e.id} divided={i > 0} testID={`invoice-email-${e.id}`} title={e.kind === "receipt" ? "Payment receipt" : "Invoice with PDF"}>
           <AppText variant="small" color="muted">{`To ${e.to} · ${EMAIL_STATUS[e.status] ?? "Status unknown"}${e.sentAt ? `, ${formatDateTime(e.sentAt, timeZone)}` : ""}`}</AppText>
-        </View>
+        </Entry>
       ))}
     </Card>
+  );
+}
+
+/** One entry in a card's list (a payment, a credit note, an e-mail): a line above it after the first, its title and badge first. */
+function Entry({ divided, title, badge, testID, children }: { divided: boolean; title: string; badge?: React.ReactNode; testID: string; children: React.ReactNode }) {
+  return (
+    <View style={[styles.entry, divided && styles.divider]} testID={testID}>
+      {badge ? (
+        <View style={billingStyles.cardTop}>
+          <AppText variant="bodyStrong" style={billingStyles.grow}>
+            {title}
+          </AppText>
+          {badge}
+        </View>
+      ) : (
+        <AppText variant="bodyStrong">{title}</AppText>
+      )}
+      {children}
+    </View>
   );
 }
 
