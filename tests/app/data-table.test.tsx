@@ -1,8 +1,9 @@
 /** The one table (components/ui/DataTable.tsx) and list card (components/ui/ListCard.tsx) every list screen uses. */
-import { ScrollView, StyleSheet, Text } from "react-native";
+import { Dimensions, ScrollView, StyleSheet, Text } from "react-native";
 import { act, fireEvent, render, screen } from "@testing-library/react-native";
 import { DataTable, NoValue, TitleCell } from "../../components/ui/DataTable";
 import { ListCard } from "../../components/ui/ListCard";
+import { TableOrCards } from "../../components/ui/TableOrCards";
 import { colors } from "../../components/theme";
 
 interface Row {
@@ -137,5 +138,45 @@ describe("ListCard", () => {
     expect(screen.getAllByRole("button")).toHaveLength(1);
     expect(screen.getByTestId("b")).toHaveStyle({ backgroundColor: colors.dangerSoft, borderColor: colors.danger });
     expect(screen.getByTestId("c")).toHaveStyle({ backgroundColor: colors.page });
+  });
+});
+
+describe("TableOrCards", () => {
+  const original = Dimensions.get("window");
+  afterEach(() => Dimensions.set({ window: original, screen: original }));
+  const setWidth = (width: number) => Dimensions.set({ window: { ...original, width }, screen: { ...original, width } });
+  const list = (open: (r: Row) => void, cardLabel?: (r: Row) => string) => (
+    <TableOrCards<Row>
+      rows={ROWS}
+      rowKey={(r) => r.id}
+      onOpen={open}
+      rowLabel={(r) => `${r.name}, ${r.owed} owed`}
+      cardLabel={cardLabel}
+      rowTestID={(r) => `row-${r.id}`}
+      columns={[{ key: "name", label: "Account", render: (r) => r.name }]}
+      tableTestID="the-table"
+      card={(r) => <Text>{r.name}</Text>}
+      cardsTestID="the-cards"
+    />
+  );
+
+  it("a table from 1024 px, its rows opening the item", async () => {
+    setWidth(1280);
+    const open = jest.fn();
+    render(list(open));
+    expect(screen.getByTestId("the-table")).toBeOnTheScreen();
+    fireEvent.press(screen.getByRole("button", { name: "Tidewater Café, 1200 owed" }));
+    expect(open).toHaveBeenCalledWith(ROWS[0]);
+  });
+
+  it("cards on a phone, named as the row unless the cards say less", async () => {
+    setWidth(390);
+    const open = jest.fn();
+    render(list(open, (r) => r.name));
+    await act(async () => undefined);
+    expect(screen.queryByTestId("the-table")).toBeNull();
+    expect(screen.getByTestId("the-cards")).toBeOnTheScreen();
+    fireEvent.press(screen.getByRole("button", { name: "North Pier" }));
+    expect(open).toHaveBeenCalledWith(ROWS[1]);
   });
 });
