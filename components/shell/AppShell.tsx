@@ -53,17 +53,7 @@ export function AppShell({ area, children }: { area: HomeArea; children: React.R
                 {ROLE_LABELS[user.role]} · {user.email}
               </AppText>
             </View>
-            <Pressable
-              accessibilityRole="button"
-              onPress={signOut}
-              testID="sign-out"
-              style={({ pressed }) => [styles.sideSignOut, pressed && { backgroundColor: colors.navActive }]}
-            >
-              <Feather name="log-out" size={18} color={colors.navInk} />
-              <AppText variant="label" color="navInk">
-                Sign out
-              </AppText>
-            </Pressable>
+            <SignOutButton onPress={signOut} onDark />
           </View>
         </View>
         <View style={styles.wideMain} {...landmark("main")}>
@@ -114,19 +104,27 @@ function TopBar({ name, onSignOut }: { name: string; onSignOut: () => void }) {
         <AppText variant="small" color="muted" numberOfLines={1} style={styles.topName} testID="signed-in-name">
           {name}
         </AppText>
-        <Pressable
-          accessibilityRole="button"
-          onPress={onSignOut}
-          testID="sign-out"
-          style={({ pressed }) => [styles.topSignOut, pressed && { backgroundColor: colors.sunken }]}
-        >
-          <Feather name="log-out" size={16} color={colors.crust} />
-          <AppText variant="label" color="crust">
-            Sign out
-          </AppText>
-        </Pressable>
+        <SignOutButton onPress={onSignOut} />
       </View>
     </View>
+  );
+}
+
+/** "Sign out": light on the dark side navigation, crust-coloured in the top bar. */
+function SignOutButton({ onPress, onDark }: { onPress: () => void; onDark?: boolean }) {
+  const ink = onDark ? colors.navInk : colors.crust;
+  return (
+    <Pressable
+      accessibilityRole="button"
+      onPress={onPress}
+      testID="sign-out"
+      style={({ pressed }) => [onDark ? styles.sideSignOut : styles.topSignOut, pressed && { backgroundColor: onDark ? colors.navActive : colors.sunken }]}
+    >
+      <Feather name="log-out" size={onDark ? 18 : 16} color={ink} />
+      <AppText variant="label" color={onDark ? "navInk" : "crust"}>
+        Sign out
+      </AppText>
+    </Pressable>
   );
 }
 

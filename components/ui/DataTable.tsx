@@ -1,7 +1,7 @@
 import React from "react";
-import { Pressable, StyleSheet, View } from "react-native";
-import { colors, layout, radii, space } from "../theme";
+import { Pressable, ScrollView, StyleSheet, View, type ViewStyle } from "react-native";
 import { AppText } from "./Text";
+import { colors, layout, radii, space, type ColorName } from "../theme";
 
 export interface Column<T> {
   key: string;
@@ -10,6 +10,8 @@ export interface Column<T> {
   flex?: number;
   /** Money and counts line up on the right. */
   align?: "left" | "right";
+  /** The column's text cells in bold (a row's name, the figure that matters). */
+  strong?: boolean;
   /** A cell: a string or number is written as body text (aligned as the column), anything else as it is. */
   render: (row: T) => React.ReactNode;
   /** What the totals row shows in this column (with `footer` on the table). */
@@ -28,6 +30,8 @@ export interface DataTableProps<T> {
   /** Show a totals row from the columns' `footer`. */
   footer?: boolean;
   footerTestID?: string;
+  /** For tables with a column per product or day: the table is at least this wide and scrolls sideways on a narrower screen. */
+  minWidth?: number;
   testID?: string;
 }
 
@@ -42,10 +46,45 @@ function Cell({ content, align, strong }: { content: React.ReactNode; align: Col
   return <>{content}</>;
 }
 
-/** The table's frame: a rounded card holding a header row and the rows (for rows a screen builds itself). */
-export function TableFrame({ testID, children }: { testID?: string; children: React.ReactNode }) {
+export interface TitleCellProps {
+  /** What the row is: bold. */
+  title: string;
+  /** A smaller line under it (kind, address, version). */
+  detail?: string | null;
+  detailColor?: ColorName;
+  /** Cut both lines to one (long names in a narrow column). */
+  oneLine?: boolean;
+  /** More lines under them (an error, a note). */
+  children?: React.ReactNode;
+}
+
+/** The cell that names a row: its title in bold, a smaller line under it. */
+export function TitleCell({ title, detail, detailColor = "muted", oneLine, children }: TitleCellProps) {
+  const lines = oneLine ? 1 : undefined;
   return (
-    <View style={styles.table} testID={testID} role="table">
+    <View>
+      <AppText variant="bodyStrong" numberOfLines={lines}>
+        {title}
+      </AppText>
+      {detail ? (
+        <AppText variant="small" color={detailColor} numberOfLines={lines}>
+          {detail}
+        </AppText>
+      ) : null}
+      {children}
+    </View>
+  );
+}
+
+/** A cell with nothing in it (no quantity that day): a muted dash. */
+export function NoValue() {
+  return <AppText color="muted">–</AppText>;
+}
+
+/** The table's frame: a rounded card holding a header row and the rows (for rows a screen builds itself). */
+export function TableFrame({ testID, style, children }: { testID?: string; style?: ViewStyle; children: React.ReactNode }) {
+  return (
+    <View style={[styles.table, style]} testID={testID} role="table">
       {children}
     </View>
   );
@@ -81,14 +120,23 @@ export function TableHeaderRow({ columns }: { columns: readonly ColumnFrame[] })
  * A table for wide screens: a header row, one line per item (rows can open the item, and a row that needs
  * attention is tinted red), and an optional totals row.
  */
-export function DataTable<T>({ columns, rows, rowKey, onRowPress, rowLabel, rowTestID, rowAlert, footer, footerTestID, testID }: DataTableProps<T>) {
+export function DataTable<T>({ minWidth, ...props }: DataTableProps<T>) {
+  if (minWidth === undefined) return <Table {...props} />;
   return (
-    <TableFrame testID={testID}>
+    <ScrollView horizontal style={styles.scroll} contentContainerStyle={styles.scrollContent}>
+      <Table {...props} style={{ minWidth, flexGrow: 1 }} />
+    </ScrollView>
+  );
+}
+
+function Table<T>({ columns, rows, rowKey, onRowPress, rowLabel, rowTestID, rowAlert, footer, footerTestID, testID, style }: Omit<DataTableProps<T>, "minWidth"> & { style?: ViewStyle }) {
+  return (
+    <TableFrame testID={testID} style={style}>
       <TableHeaderRow columns={columns} />
       {rows.map((row, i) => {
         const cells = columns.map((c) => (
           <TableCell key={c.key} column={c}>
-            <Cell content={c.render(row)} align={c.align} />
+            <Cell content={c.render(row)} align={c.align} strong={c.strong} />
           </TableCell>
         ));
         const divided = i < rows.length - 1;
@@ -132,6 +180,8 @@ export function DataTable<T>({ columns, rows, rowKey, onRowPress, rowLabel, rowT
 }
 
 const styles = StyleSheet.create({
+  scroll: { flexGrow: 0 },
+  scrollContent: { flexGrow: 1 },
   table: { backgroundColor: colors.surface, borderRadius: radii.lg, borderWidth: 1, borderColor: colors.border, overflow: "hidden" },
   row: { flexDirection: "row", alignItems: "center", minHeight: layout.minTouch + 12, paddingHorizontal: space.md },
   header: { backgroundColor: colors.sunken, minHeight: layout.minTouch },

@@ -32,6 +32,8 @@ export interface ListCardProps {
   compact?: boolean;
   /** A row that needs attention: a red tint and border. */
   alert?: boolean;
+  /** A row with nothing to act on (a past date, a canceled order): on the page's colour. */
+  quiet?: boolean;
   /** The row's content; a chevron is added after it when the row opens something. */
   children: React.ReactNode;
 }
@@ -39,8 +41,8 @@ export interface ListCardProps {
 const chevron = <Feather name="chevron-right" size={20} color={colors.muted} />;
 
 /** A list row in a card: ends in a chevron and opens the thing it shows (by press or as a link), or just shows it. */
-export function ListCard({ onPress, href, accessibilityLabel, testID, compact, alert, children }: ListCardProps) {
-  const look = [styles.card, compact && styles.compact, alert && styles.alert];
+export function ListCard({ onPress, href, accessibilityLabel, testID, compact, alert, quiet, children }: ListCardProps) {
+  const look = [styles.card, compact && styles.compact, quiet && styles.quiet, alert && styles.alert];
   if (href) {
     return (
       <Link href={href} asChild>
@@ -80,6 +82,15 @@ export function ListCardText({ children }: { children: React.ReactNode }) {
 /** The first line of a ListCard: its title growing, badges after it. */
 export function ListCardTop({ children }: { children: React.ReactNode }) {
   return <View style={styles.top}>{children}</View>;
+}
+
+/** The title in a ListCardTop: bold, taking the room the badges leave. */
+export function ListCardTitle({ children }: { children: React.ReactNode }) {
+  return (
+    <AppText variant="bodyStrong" style={styles.title}>
+      {children}
+    </AppText>
+  );
 }
 
 export interface LinkCardProps {
@@ -133,6 +144,8 @@ const styles = StyleSheet.create({
   badge: { width: 44, height: 44, borderRadius: 22, backgroundColor: colors.crustSoft, alignItems: "center", justifyContent: "center" },
   text: { flex: 1, gap: space.xxs },
   pressed: { backgroundColor: colors.rowHover },
+  quiet: { backgroundColor: colors.page },
+  title: { flexGrow: 1, flexShrink: 1 },
   alert: { borderColor: colors.danger, backgroundColor: colors.dangerSoft },
   top: { flexDirection: "row", alignItems: "center", gap: space.sm, flexWrap: "wrap" },
 });

@@ -4,7 +4,9 @@ import Feather from "@expo/vector-icons/Feather";
 import { colors, radii, space } from "../theme";
 import { AppText, Heading } from "./Text";
 import { Button } from "./Button";
-import { messageOf } from "../api/client";
+import { TextLink } from "./TextLink";
+import type { Href } from "expo-router";
+import { ApiError, messageOf } from "../api/client";
 
 export function LoadingState({ label = "Loading…", testID = "loading" }: { label?: string; testID?: string }) {
   return (
@@ -42,6 +44,30 @@ export function EmptyState({ title, message, icon = "inbox", action, testID = "e
   );
 }
 
+/** The API answered 404 for the thing a page shows. */
+export function isNotFound(error: unknown): boolean {
+  return error instanceof ApiError && error.status === 404;
+}
+
+export interface NotFoundStateProps {
+  /** "There's no such account". */
+  title: string;
+  message?: string;
+  /** The list to go back to. */
+  back: { href: Href; label: string };
+  testID: string;
+}
+
+/** A page whose thing does not exist (a wrong id in the address): says so and links back to the list. */
+export function NotFoundState({ title, message, back, testID }: NotFoundStateProps) {
+  return (
+    <>
+      <EmptyState icon="help-circle" title={title} message={message} testID={testID} />
+      <TextLink href={back.href} label={back.label} />
+    </>
+  );
+}
+
 export interface ErrorStateProps {
   error: unknown;
   title?: string;
@@ -50,7 +76,9 @@ export interface ErrorStateProps {
   testID?: string;
 }
 
+/** A failed query or request: what went wrong, the server's request id to quote (when it sent one), and a retry. */
 export function ErrorState({ error, title = "This didn't load", onRetry, retrying, testID = "error" }: ErrorStateProps) {
+  const requestId = error instanceof ApiError ? error.requestId : undefined;
   return (
     <View style={[styles.center, styles.panel, styles.errorPanel]} accessibilityRole="alert" testID={testID}>
       <Feather name="cloud-off" size={24} color={colors.dangerInk} />
@@ -60,6 +88,11 @@ export function ErrorState({ error, title = "This didn't load", onRetry, retryin
       <AppText color="ink" align="center">
         {messageOf(error)}
       </AppText>
+      {requestId ? (
+        <AppText variant="small" color="muted" align="center" selectable testID={`${testID}-reference`}>
+          {`Reference: ${requestId}`}
+        </AppText>
+      ) : null}
       {onRetry ? <Button label="Try again" icon="refresh-cw" variant="secondary" onPress={onRetry} busy={retrying} testID={`${testID}-retry`} /> : null}
     </View>
   );

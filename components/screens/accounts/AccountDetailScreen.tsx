@@ -6,13 +6,12 @@ import { Card } from "../../ui/Card";
 import { DetailList } from "../../ui/DetailList";
 import { LinkButton } from "../../ui/LinkButton";
 import { TextLink } from "../../ui/TextLink";
-import { EmptyState } from "../../ui/States";
+import { NotFoundState, isNotFound } from "../../ui/States";
 import { QueryStates } from "../../ui/QueryStates";
 import { StatusBadge } from "../../ui/Badge";
 import { AppText } from "../../ui/Text";
 import { useSignedInUser } from "../../auth/useAuth";
 import { useAccountQuery } from "../../api/accounts";
-import { ApiError } from "../../api/client";
 import { useBakeryTimeZone } from "../../api/bakery";
 import { formatDateTime } from "../../format";
 import { useIsWide } from "../../shell/useIsWide";
@@ -32,11 +31,10 @@ export function AccountDetailScreen({ id }: { id: number }) {
   const account = useAccountQuery(Number.isInteger(id) && id > 0 ? id : null);
   const timeZone = useBakeryTimeZone();
 
-  if (!Number.isInteger(id) || id <= 0 || (account.isError && account.error instanceof ApiError && account.error.status === 404)) {
+  if (!Number.isInteger(id) || id <= 0 || (account.isError && isNotFound(account.error))) {
     return (
       <Screen testID="account-detail">
-        <EmptyState icon="help-circle" title="There's no such account" message="It may have been typed wrong in the address." testID="account-not-found" />
-        <TextLink href="/office/accounts" label="All accounts" />
+        <NotFoundState title="There's no such account" message="It may have been typed wrong in the address." back={{ href: "/office/accounts", label: "All accounts" }} testID="account-not-found" />
       </Screen>
     );
   }

@@ -6,10 +6,11 @@ import { PageHeader } from "../../ui/PageHeader";
 import { SEARCH_INPUT, TextField } from "../../ui/TextField";
 import { ChoiceGroup } from "../../ui/ChoiceGroup";
 import { QueryStates } from "../../ui/QueryStates";
-import { DataTable } from "../../ui/DataTable";
+import { TitleCell } from "../../ui/DataTable";
+import { TableOrCards } from "../../ui/TableOrCards";
 import { StatusBadge } from "../../ui/Badge";
 import { LinkButton } from "../../ui/LinkButton";
-import { ListCard, ListCards } from "../../ui/ListCard";
+import { ListCardText, ListCardTitle, ListCardTop } from "../../ui/ListCard";
 import { AppText } from "../../ui/Text";
 import { useSignedInUser } from "../../auth/useAuth";
 import { useAccountsQuery } from "../../api/accounts";
@@ -78,65 +79,38 @@ export function AccountsListScreen() {
               }
         }
       >
-        {(rows) =>
-          wide ? (
-        <DataTable
-          testID="accounts-table"
-          rows={rows}
-          rowKey={(a) => a.id}
-          onRowPress={open}
-          rowLabel={(a) => `${a.businessName}, ${accountStatusLabel(a)}`}
-          rowTestID={(a) => `account-row-${a.id}`}
-          columns={[
-            {
-              key: "business",
-              label: "Business",
-              flex: 2.2,
-              render: (a) => (
-                <View>
-                  <AppText variant="bodyStrong" numberOfLines={1}>
-                    {a.businessName}
-                  </AppText>
-                  <AppText variant="small" color="muted" numberOfLines={1}>
-                    {a.deliveryAddress}
-                  </AppText>
-                </View>
-              ),
-            },
-            { key: "contact", label: "Contact", flex: 1.4, render: (a) => <AppText numberOfLines={1}>{a.contactName || "—"}</AppText> },
-            { key: "billing", label: "Billing e-mail", flex: 1.8, render: (a) => <AppText numberOfLines={1}>{a.billingEmail}</AppText> },
-            { key: "buyers", label: "Buyers", flex: 0.8, render: (a) => <AppText>{String(a.buyerCount)}</AppText> },
-            { key: "status", label: "Status", flex: 0.9, render: (a) => <StatusBadge status={a.status} creditHold={a.creditHold} /> },
-          ]}
-        />
-          ) : (
-        <ListCards testID="accounts-list">
-          {rows.map((a) => (
-            <ListCard
-              key={a.id}
-              onPress={() => open(a)}
-              accessibilityLabel={`${a.businessName}, ${accountStatusLabel(a)}`}
-              testID={`account-row-${a.id}`}
-            >
-              <View style={styles.cardText}>
-                <View style={styles.cardTop}>
-                  <AppText variant="bodyStrong" style={styles.flex}>
-                    {a.businessName}
-                  </AppText>
+        {(rows) => (
+          <TableOrCards
+            rows={rows}
+            rowKey={(a) => a.id}
+            onOpen={open}
+            rowLabel={(a) => `${a.businessName}, ${accountStatusLabel(a)}`}
+            rowTestID={(a) => `account-row-${a.id}`}
+            tableTestID="accounts-table"
+            columns={[
+              { key: "business", label: "Business", flex: 2.2, render: (a) => <TitleCell title={a.businessName} detail={a.deliveryAddress} oneLine /> },
+              { key: "contact", label: "Contact", flex: 1.4, render: (a) => <AppText numberOfLines={1}>{a.contactName || "—"}</AppText> },
+              { key: "billing", label: "Billing e-mail", flex: 1.8, render: (a) => <AppText numberOfLines={1}>{a.billingEmail}</AppText> },
+              { key: "buyers", label: "Buyers", flex: 0.8, render: (a) => <AppText>{String(a.buyerCount)}</AppText> },
+              { key: "status", label: "Status", flex: 0.9, render: (a) => <StatusBadge status={a.status} creditHold={a.creditHold} /> },
+            ]}
+            cardsTestID="accounts-list"
+            card={(a) => (
+              <ListCardText>
+                <ListCardTop>
+                  <ListCardTitle>{a.businessName}</ListCardTitle>
                   <StatusBadge status={a.status} creditHold={a.creditHold} />
-                </View>
+                </ListCardTop>
                 <AppText variant="small" color="muted" numberOfLines={2}>
                   {a.deliveryAddress}
                 </AppText>
                 <AppText variant="small" color="muted">
                   {[a.contactName, buyersLabel(a.buyerCount)].filter(Boolean).join(" · ")}
                 </AppText>
-              </View>
-            </ListCard>
-          ))}
-        </ListCards>
-          )
-        }
+              </ListCardText>
+            )}
+          />
+        )}
       </QueryStates>
       {accounts.data && accounts.data.length > 0 ? (
         <AppText variant="small" color="muted" testID="accounts-count">
@@ -151,7 +125,4 @@ const styles = StyleSheet.create({
   filters: { gap: space.md },
   filtersWide: { flexDirection: "row", alignItems: "flex-end", gap: space.xl },
   searchWide: { flex: 1, maxWidth: 420 },
-  cardText: { flex: 1, gap: space.xxs },
-  cardTop: { flexDirection: "row", alignItems: "center", gap: space.sm },
-  flex: { flex: 1 },
 });

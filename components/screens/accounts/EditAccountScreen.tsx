@@ -3,10 +3,9 @@ import { useRouter } from "expo-router";
 import { Screen } from "../../ui/Screen";
 import { PageHeader } from "../../ui/PageHeader";
 import { TextLink } from "../../ui/TextLink";
-import { EmptyState } from "../../ui/States";
+import { NotFoundState, isNotFound } from "../../ui/States";
 import { QueryStates } from "../../ui/QueryStates";
 import { useAccountQuery, useUpdateAccountMutation } from "../../api/accounts";
-import { ApiError } from "../../api/client";
 import { AccountForm, accountValues } from "./AccountForm";
 
 /** Edit an account's details (owner). Status changes live on the account's page. */
@@ -16,11 +15,10 @@ export function EditAccountScreen({ id }: { id: number }) {
   const mutation = useUpdateAccountMutation(id);
   const router = useRouter();
 
-  if (!valid || (account.error instanceof ApiError && account.error.status === 404)) {
+  if (!valid || isNotFound(account.error)) {
     return (
       <Screen narrow testID="account-edit">
-        <EmptyState icon="help-circle" title="There's no such account" testID="account-not-found" />
-        <TextLink href="/office/accounts" label="All accounts" />
+        <NotFoundState title="There's no such account" back={{ href: "/office/accounts", label: "All accounts" }} testID="account-not-found" />
       </Screen>
     );
   }

@@ -6,7 +6,7 @@ import { Screen } from "../../ui/Screen";
 import { PageHeader } from "../../ui/PageHeader";
 import { Badge } from "../../ui/Badge";
 import { DataTable } from "../../ui/DataTable";
-import { ListCard, ListCardText, ListCardTop, ListCards } from "../../ui/ListCard";
+import { ListCard, ListCardText, ListCardTitle, ListCardTop, ListCards } from "../../ui/ListCard";
 import { QueryStates } from "../../ui/QueryStates";
 import { AppText } from "../../ui/Text";
 import { useAgingQuery, type AgingDto, type AgingRowDto } from "../../api/reports";
@@ -87,9 +87,7 @@ export function AgingScreen() {
             <ListCard key={r.accountId} href={invoicesOf(r)} accessibilityLabel={rowLabel(r)} testID={`aging-row-${r.accountId}`}>
               <ListCardText>
                 <ListCardTop>
-                  <AppText variant="bodyStrong" style={billingStyles.grow}>
-                    {r.accountName}
-                  </AppText>
+                  <ListCardTitle>{r.accountName}</ListCardTitle>
                   {r.onHold ? <Badge label={holdLabel(r)} tone="amber" testID={`aging-hold-${r.accountId}`} /> : null}
                 </ListCardTop>
                 {AGING_BUCKETS.filter((b) => r[b] > 0).map((b) => (

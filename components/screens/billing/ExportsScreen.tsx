@@ -1,4 +1,4 @@
-import React, { useState } from "react";
+import React from "react";
 import { StyleSheet, View } from "react-native";
 import { Screen } from "../../ui/Screen";
 import { PageHeader } from "../../ui/PageHeader";
@@ -6,7 +6,7 @@ import { Card } from "../../ui/Card";
 import { Button } from "../../ui/Button";
 import { FormError, Notice } from "../../ui/FormError";
 import { AppText } from "../../ui/Text";
-import { messageOf } from "../../api/client";
+import { useDownload } from "../../forms/useDownload";
 import { downloadExport, type ExportFile } from "../../api/reports";
 import { useBakeryQuery } from "../../api/bakery";
 import { useIsWide } from "../../shell/useIsWide";
@@ -37,30 +37,15 @@ export function ExportsScreen() {
 
 function ExportCard({ file, name, title, label, about }: (typeof EXPORTS)[number]) {
   const today = useBakeryQuery().data?.today;
-  const [busy, setBusy] = useState(false);
-  const [error, setError] = useState<string | null>(null);
-  const [done, setDone] = useState(false);
-  const run = async () => {
-    setError(null);
-    setDone(false);
-    setBusy(true);
-    try {
-      await downloadExport(file, today);
-      setDone(true);
-    } catch (err) {
-      setError(messageOf(err));
-    } finally {
-      setBusy(false);
-    }
-  };
+  const download = useDownload();
   return (
     <Card title={title} style={styles.card} testID={`export-${name}-card`}>
       <AppText color="muted" style={styles.about}>
         {about}
       </AppText>
-      {done ? <Notice message={`${file} downloaded.`} testID={`export-${name}-done`} /> : null}
-      <FormError message={error} testID={`export-${name}-error`} />
-      <Button label={label} icon="download" variant="secondary" busy={busy} onPress={run} testID={`export-${name}`} />
+      {download.done ? <Notice message={`${file} downloaded.`} testID={`export-${name}-done`} /> : null}
+      <FormError message={download.error} testID={`export-${name}-error`} />
+      <Button label={label} icon="download" variant="secondary" busy={download.pending !== null} onPress={() => download.run(() => downloadExport(file, today))} testID={`export-${name}`} />
     </Card>
   );
 }

@@ -1,4 +1,4 @@
-import React, { useState } from "react";
+import React from "react";
 import { StyleSheet, View } from "react-native";
 import { Screen } from "../../ui/Screen";
 import { PageHeader } from "../../ui/PageHeader";
@@ -8,11 +8,12 @@ import { Button } from "../../ui/Button";
 import { TextLink } from "../../ui/TextLink";
 import { FormError, Notice } from "../../ui/FormError";
 import { Badge } from "../../ui/Badge";
-import { EmptyState } from "../../ui/States";
+import { NotFoundState, isNotFound } from "../../ui/States";
 import { QueryStates } from "../../ui/QueryStates";
 import { DataTable } from "../../ui/DataTable";
 import { AppText } from "../../ui/Text";
-import { ApiError, messageOf } from "../../api/client";
+import { messageOf } from "../../api/client";
+import { useDownload } from "../../forms/useDownload";
 import { downloadInvoicePdf, useInvoiceQuery, useRefundOverpaymentMutation, type InvoiceDetailDto, type InvoiceDto } from "../../api/invoices";
 import { useBillingSettingsQuery } from "../../api/billingSettings";
 import { useBakeryTimeZone } from "../../api/bakery";
@@ -39,15 +40,12 @@ export function InvoiceDetailScreen({ id, mode }: InvoiceDetailProps) {
   const office = mode === "office";
   const listHref = office ? ("/office/invoices" as const) : ("/buyer/invoices" as const);
 
-  const notFound = !valid || (detail.isError && detail.error instanceof ApiError && detail.error.status === 404);
+  const notFound = !valid || (detail.isError && isNotFound(detail.error));
 
   return (
     <Screen testID="invoice-detail">
       {notFound ? (
-        <>
-          <EmptyState icon="help-circle" title="There's no such invoice" message="It may have been typed wrong in the address." testID="invoice-not-found" />
-          <TextLink href={listHref} label="All invoices" />
-        </>
+        <NotFoundState title="There's no such invoice" message="It may have been typed wrong in the address." back={{ href: listHref, label: "All invoices" }} testID="invoice-not-found" />
       ) : (
         <QueryStates query={detail} testID="invoice" loadingLabel="Loading the invoice…" errorTitle="This invoice didn't load">
           {(d) => <InvoiceBody detail={d} office={office} listHref={listHref} refund={refund} wide={wide} />}
@@ -115,13 +113,13 @@ function AlertsCard({ detail, refund }: { detail: InvoiceDetailDto; refund: Retu
   return (
     <Card title="Needs your attention" testID="invoice-alerts">
       {alerts.map((a, i) => (
-        <View key={`${a.kind}-${a.eventId ?? i}`} style={[styles.entry, i > 0 && styles.divider]} testID={`invoice-alert-${a.kind}`}>
-          <View style={billingStyles.cardTop}>
-            <AppText variant="bodyStrong" style={billingStyles.grow}>
-              {a.kind === "overpayment" ? `Paid twice: ${money(a.amountCents ?? 0, inv.currency)} too much` : "Payment notice rejected"}
-            </AppText>
-            <Badge label={a.kind === "overpayment" ? "Overpaid" : "Not applied"} tone={a.kind === "overpayment" ? "amber" : "danger"} />
-          </View>
+        <Entry
+          key={`${a.kind}-${a.eventId ?? i}`}
+          divided={i > 0}
+          testID={`invoice-alert-${a.kind}`}
+          title={a.kind === "overpayment" ? `Paid twice: ${money(a.amountCents ?? 0, inv.currency)} too much` : "Payment notice rejected"}
+          badge={<Badge label={a.kind === "overpayment" ? "Overpaid" : "Not applied"} tone={a.kind === "overpayment" ? "amber" : "danger"} />}
+        >
           <AppText variant="small">{a.message}</AppText>
           {a.kind === "overpayment" ? (
             <View style={styles.action}>
@@ -136,30 +134,18 @@ function AlertsCard({ detail, refund }: { detail: InvoiceDetailDto; refund: Retu
               <FormError message={refund.isError ? messageOf(refund.error) : null} testID="refund-overpayment-error" />
             </View>
           ) : null}
-        </View>
+        </Entry>
       ))}
     </Card>
   );
 }
 
 function PdfButton({ invoice }: { invoice: InvoiceDto }) {
-  const [busy, setBusy] = useState(false);
-  const [error, setError] = useState<string | null>(null);
-  const run = async () => {
-    setError(null);
-    setBusy(true);
-    try {
-      await downloadInvoicePdf(invoice);
-    } catch (err) {
-      setError(messageOf(err));
-    } finally {
-      setBusy(false);
-    }
-  };
+  const download = useDownload();
   return (
     <View style={styles.pdf}>
-      <Button label="Download PDF" icon="download" variant="secondary" busy={busy} onPress={run} testID="invoice-pdf" />
-      <FormError message={error} testID="invoice-pdf-error" />
+      <Button label="Download PDF" icon="download" variant="secondary" busy={download.pending !== null} onPress={() => download.run(() => downloadInvoicePdf(invoice))} testID="invoice-pdf" />
+      <FormError message={download.error} testID="invoice-pdf-error" />
     </View>
   );
 }
@@ -242,19 +228,13 @@ function CreditNotesCard({ detail }: { detail: InvoiceDetailDto }) {
   return (
     <Card title="Credit notes" testID="invoice-credit-notes">
       {detail.creditNotes.map((c, i) => (
-        <View key={c.id} style={[styles.entry, i > 0 && styles.divider]} testID={`credit-note-${c.id}`}>
-          <View style={billingStyles.cardTop}>
-            <AppText variant="bodyStrong" style={billingStyles.grow}>
-              {c.number}
-            </AppText>
-            <Badge label={c.carriedFromInvoiceId ? "Carried from an earlier invoice" : DISPOSITION_LABELS[c.disposition]} tone="crust" />
-          </View>
+        <Entry key={c.id} divided={i > 0} testID={`credit-note-${c.id}`} title={c.number} badge={<Badge label={c.carriedFromInvoiceId ? "Carried from an earlier invoice" : DISPOSITION_LABELS[c.disposition]} tone="crust" />}>
           <AppText variant="small" color="muted">{`${day(c.issueDate)} · ${c.reason}`}</AppText>
           {c.lines.map((l, j) => (
             <AppText key={j} variant="small">{`${l.quantity} × ${l.description} at ${money(l.unitPriceCents, cur)}`}</AppText>
           ))}
           <AppText variant="bodyStrong" align="right">{`− ${money(c.totalCents, cur)}${c.taxCents ? ` (incl. ${money(c.taxCents, cur)} tax)` : ""}`}</AppText>
-        </View>
+        </Entry>
       ))}
     </Card>
   );
@@ -270,15 +250,9 @@ function PaymentsCard({ detail }: { detail: InvoiceDetailDto }) {
         </AppText>
       ) : (
         detail.payments.map((p, i) => (
-          <View key={p.id} style={[styles.entry, i > 0 && styles.divider]} testID={`payment-${p.id}`}>
-            <View style={billingStyles.cardTop}>
-              <AppText variant="bodyStrong" style={billingStyles.grow}>
-                {money(p.amountCents, cur)}
-              </AppText>
-              <Badge label={METHOD_LABELS[p.method]} tone="sage" />
-            </View>
+          <Entry key={p.id} divided={i > 0} testID={`payment-${p.id}`} title={money(p.amountCents, cur)} badge={<Badge label={METHOD_LABELS[p.method]} tone="sage" />}>
             <AppText variant="small" color="muted">{`Received ${day(p.receivedOn)}${p.reference ? ` · ref. ${p.reference}` : ""}`}</AppText>
-          </View>
+          </Entry>
         ))
       )}
     </Card>
@@ -291,10 +265,9 @@ function RefundsCard({ detail }: { detail: InvoiceDetailDto }) {
   return (
     <Card title="Refunds to the card" testID="invoice-refunds">
       {detail.refunds.map((r, i) => (
-        <View key={r.id} style={[styles.entry, i > 0 && styles.divider]} testID={`refund-${r.id}`}>
-          <AppText variant="bodyStrong">{money(r.amountCents, cur)}</AppText>
+        <Entry key={r.id} divided={i > 0} testID={`refund-${r.id}`} title={money(r.amountCents, cur)}>
           <AppText variant="small" color="muted">{`${formatDateTime(r.createdAt, timeZone)} · ${r.overpayment ? "overpayment given back · " : ""}${r.stripeRefundId}`}</AppText>
-        </View>
+        </Entry>
       ))}
     </Card>
   );
@@ -308,12 +281,30 @@ function EmailsCard({ detail }: { detail: InvoiceDetailDto }) {
   return (
     <Card title="E-mails" testID="invoice-emails">
       {(detail.emails ?? []).map((e, i) => (
-        <View key={e.id} style={[styles.entry, i > 0 && styles.divider]} testID={`invoice-email-${e.id}`}>
-          <AppText variant="bodyStrong">{e.kind === "receipt" ? "Payment receipt" : "Invoice with PDF"}</AppText>
+        <Entry key={e.id} divided={i > 0} testID={`invoice-email-${e.id}`} title={e.kind === "receipt" ? "Payment receipt" : "Invoice with PDF"}>
           <AppText variant="small" color="muted">{`To ${e.to} · ${EMAIL_STATUS[e.status] ?? "Status unknown"}${e.sentAt ? `, ${formatDateTime(e.sentAt, timeZone)}` : ""}`}</AppText>
-        </View>
+        </Entry>
       ))}
     </Card>
+  );
+}
+
+/** One entry in a card's list (a payment, a credit note, an e-mail): a line above it after the first, its title and badge first. */
+function Entry({ divided, title, badge, testID, children }: { divided: boolean; title: string; badge?: React.ReactNode; testID: string; children: React.ReactNode }) {
+  return (
+    <View style={[styles.entry, divided && styles.divider]} testID={testID}>
+      {badge ? (
+        <View style={billingStyles.cardTop}>
+          <AppText variant="bodyStrong" style={billingStyles.grow}>
+            {title}
+          </AppText>
+          {badge}
+        </View>
+      ) : (
+        <AppText variant="bodyStrong">{title}</AppText>
+      )}
+      {children}
+    </View>
   );
 }
 

@@ -10,8 +10,8 @@ import { Button } from "../../ui/Button";
 import { FormError, Notice } from "../../ui/FormError";
 import { LoadingState } from "../../ui/States";
 import { QueryStates } from "../../ui/QueryStates";
-import { DataTable } from "../../ui/DataTable";
-import { ListCard, ListCardText, ListCardTop, ListCards } from "../../ui/ListCard";
+import { DataTable, TitleCell } from "../../ui/DataTable";
+import { ListCard, ListCardText, ListCardTitle, ListCardTop, ListCards } from "../../ui/ListCard";
 import { AppText } from "../../ui/Text";
 import { useAccountsQuery } from "../../api/accounts";
 import { useInvoicesQuery, useIssueStatementsMutation, type InvoiceDto, type InvoiceListParams, type InvoiceSort, type InvoiceStatus, type InvoiceTotalsDto } from "../../api/invoices";
@@ -239,16 +239,7 @@ function InvoiceTable({ invoices, totals, office, onOpen }: { invoices: InvoiceD
           key: "number",
           label: "Invoice",
           flex: 1.3,
-          render: (i) => (
-            <View>
-              <AppText variant="bodyStrong">{i.number}</AppText>
-              {i.kind === "statement" ? (
-                <AppText variant="small" color="muted">
-                  Statement
-                </AppText>
-              ) : null}
-            </View>
-          ),
+          render: (i) => <TitleCell title={i.number} detail={i.kind === "statement" ? "Statement" : null} />,
           footer: <AppText variant="bodyStrong" testID="invoices-total-count">{invoicesLabel(totals.count)}</AppText>,
         },
         ...(office ? [{ key: "account", label: "Account", flex: 1.5, render: (i: InvoiceDto) => i.accountName }] : []),
@@ -304,9 +295,7 @@ function InvoiceCard({ invoice: i, href, office }: { invoice: InvoiceDto; href: 
     >
       <ListCardText>
         <ListCardTop>
-          <AppText variant="bodyStrong" style={billingStyles.grow}>
-            {i.number}
-          </AppText>
+          <ListCardTitle>{i.number}</ListCardTitle>
           <StatusCell invoice={i} office={office} />
         </ListCardTop>
         {office ? <AppText variant="small">{i.accountName}</AppText> : null}

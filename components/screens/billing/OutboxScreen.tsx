@@ -6,7 +6,7 @@ import { ChoiceGroup } from "../../ui/ChoiceGroup";
 import { Button } from "../../ui/Button";
 import { Badge, type BadgeTone } from "../../ui/Badge";
 import { FormError, Notice } from "../../ui/FormError";
-import { DataTable } from "../../ui/DataTable";
+import { DataTable, TitleCell } from "../../ui/DataTable";
 import { ListCard, ListCardTop, ListCards } from "../../ui/ListCard";
 import { QueryStates } from "../../ui/QueryStates";
 import { AppText } from "../../ui/Text";
@@ -58,17 +58,13 @@ export function OutboxScreen() {
             label: "E-mail",
             flex: 2.4,
             render: (m) => (
-              <View>
-                <AppText variant="bodyStrong" numberOfLines={1}>
-                  {m.subject}
-                </AppText>
-                <AppText variant="small" color={m.status === "failed" ? "ink" : "muted"} numberOfLines={1}>{`${mailKindLabel(m.kind)} · to ${m.to}`}</AppText>
+              <TitleCell title={m.subject} detail={`${mailKindLabel(m.kind)} · to ${m.to}`} detailColor={m.status === "failed" ? "ink" : "muted"} oneLine>
                 {m.lastError ? (
                   <AppText variant="small" color="dangerInk" numberOfLines={2} testID={`outbox-error-${m.id}`}>
                     {`Last error: ${m.lastError}`}
                   </AppText>
                 ) : null}
-              </View>
+              </TitleCell>
             ),
           },
           { key: "when", label: "When", flex: 1.4, render: (m) => <AppText variant="small">{when(m)}</AppText> },

@@ -17,6 +17,7 @@ import { useBakeryQuery, useBakeryTimeZone } from "../../api/bakery";
 import { formatDate } from "../../format";
 import { cleanDate } from "../../ordering/dates";
 import { useZodForm } from "../../forms/useZodForm";
+import { useDownload } from "../../forms/useDownload";
 import { readText } from "../../forms/textSchemas";
 import { billingStyles, day } from "./parts";
 import { colors, radii, space } from "../../theme";
@@ -48,7 +49,7 @@ export function TaxCertificatesCard({ accountId, canUpload, canReview, audience 
   const certs = useCertificatesQuery(accountId);
   const review = useReviewCertificateMutation(accountId);
   const timeZone = useBakeryTimeZone();
-  const [fileError, setFileError] = useState<string | null>(null);
+  const file = useDownload();
 
   const body = (data: TaxCertificateDto[]) => {
     const { valid, lapsed } = exemptionState(data);
@@ -77,10 +78,7 @@ export function TaxCertificatesCard({ accountId, canUpload, canReview, audience 
                     icon="eye"
                     small
                     variant="ghost"
-                    onPress={() => {
-                      setFileError(null);
-                      downloadCertificate(c).catch((e: unknown) => setFileError(messageOf(e)));
-                    }}
+                    onPress={() => void file.run(() => downloadCertificate(c))}
                     testID={`cert-${c.id}-file`}
                   />
                   {canReview && c.status === "pending" ? (
@@ -94,7 +92,7 @@ export function TaxCertificatesCard({ accountId, canUpload, canReview, audience 
             ))}
           </View>
         )}
-        <FormError message={fileError} testID="cert-file-error" />
+        <FormError message={file.error} testID="cert-file-error" />
         <FormError message={review.isError ? messageOf(review.error) : null} testID="cert-review-error" />
       </>
     );

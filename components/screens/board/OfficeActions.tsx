@@ -1,4 +1,4 @@
-import React, { useState } from "react";
+import React from "react";
 import { StyleSheet, View } from "react-native";
 import { Button } from "../../ui/Button";
 import { LinkButton } from "../../ui/LinkButton";
@@ -6,35 +6,24 @@ import { FormError, Notice } from "../../ui/FormError";
 import { downloadBoardCsv } from "../../api/board";
 import { useMaterialiseMutation } from "../../api/standing";
 import { messageOf } from "../../api/client";
+import { useDownload } from "../../forms/useDownload";
 import { space } from "../../theme";
 
 /** The office's actions on the board: the CSV, and (owner) making standing orders now and recording deliveries. */
 export function OfficeActions({ date, isOwner }: { date: string; isOwner: boolean }) {
   const materialise = useMaterialiseMutation();
-  const [csvBusy, setCsvBusy] = useState(false);
-  const [csvError, setCsvError] = useState<string | null>(null);
-  const csv = async () => {
-    setCsvError(null);
-    setCsvBusy(true);
-    try {
-      await downloadBoardCsv(date);
-    } catch (err) {
-      setCsvError(messageOf(err));
-    } finally {
-      setCsvBusy(false);
-    }
-  };
+  const csv = useDownload();
   const r = materialise.data;
   return (
     <View style={styles.actionsWrap}>
       <View style={styles.actions}>
-        <Button label="Download CSV" icon="download" variant="secondary" busy={csvBusy} onPress={csv} testID="board-csv" />
+        <Button label="Download CSV" icon="download" variant="secondary" busy={csv.pending !== null} onPress={() => csv.run(() => downloadBoardCsv(date))} testID="board-csv" />
         {isOwner ? (
           <Button label="Make standing orders now" icon="repeat" variant="secondary" busy={materialise.isPending} onPress={() => materialise.mutate()} testID="materialise" />
         ) : null}
         {isOwner ? <LinkButton href={`/office/dispatch?date=${date}`} label="Record deliveries" icon="truck" variant="secondary" testID="board-confirm-dispatch" /> : null}
       </View>
-      <FormError message={csvError} testID="board-csv-error" />
+      <FormError message={csv.error} testID="board-csv-error" />
       <FormError message={materialise.isError ? messageOf(materialise.error) : null} testID="materialise-error" />
       {r ? (
         <Notice

@@ -18,7 +18,7 @@ import { CutoffCountdown } from "../ordering/CutoffCountdown";
 import { dayStatus } from "../../ordering/dayStatus";
 import { useMoney } from "../../ordering/useMoney";
 import { combinedQuery } from "../ordering/combinedQuery";
-import { LinkRow, LinkRowTop, linkRowStyles } from "../ordering/LinkRow";
+import { ListCard, ListCardText, ListCardTitle, ListCardTop } from "../../ui/ListCard";
 import { useServerNow } from "../../ordering/useServerNow";
 import { msUntil } from "../../ordering/countdown";
 import { addDays, dayHeading, formatDayLong, relativeDay } from "../../ordering/dates";
@@ -171,26 +171,26 @@ function DayRow({ day, now, today, timeZone }: { day: CalendarDayDto; now: numbe
   const summary = day.order ? `${productsLabel(day.order.productCount)} · ${money(day.order.totalCents)}${day.order.source === "standing" ? " · standing order" : ""}` : null;
   const a11y = [dayHeading(day.date, today), status.label, summary].filter(Boolean).join(", ");
   return (
-    <LinkRow href={`/buyer/order/${day.date}`} accessibilityLabel={a11y} testID={`day-${day.date}`} quiet={!open && !day.order}>
-      <LinkRowTop>
-        <AppText variant="bodyStrong" style={linkRowStyles.title}>
-          {dayHeading(day.date, today)}
-        </AppText>
-        <Badge label={status.label} tone={status.tone} testID={`day-${day.date}-status`} />
-      </LinkRowTop>
-      {summary ? (
-        <AppText variant="small" color="ink" testID={`day-${day.date}-summary`}>
-          {summary}
-        </AppText>
-      ) : null}
-      {open ? (
-        <CutoffCountdown cutoffAt={day.cutoffAt} now={now} timeZone={timeZone} testID={`day-${day.date}-countdown`} />
-      ) : !day.order && day.reason === "past_cutoff" ? (
-        <AppText variant="small" color="muted">
-          No order was placed before the cut-off.
-        </AppText>
-      ) : null}
-    </LinkRow>
+    <ListCard href={`/buyer/order/${day.date}`} accessibilityLabel={a11y} testID={`day-${day.date}`} quiet={!open && !day.order}>
+      <ListCardText>
+        <ListCardTop>
+          <ListCardTitle>{dayHeading(day.date, today)}</ListCardTitle>
+          <Badge label={status.label} tone={status.tone} testID={`day-${day.date}-status`} />
+        </ListCardTop>
+        {summary ? (
+          <AppText variant="small" color="ink" testID={`day-${day.date}-summary`}>
+            {summary}
+          </AppText>
+        ) : null}
+        {open ? (
+          <CutoffCountdown cutoffAt={day.cutoffAt} now={now} timeZone={timeZone} testID={`day-${day.date}-countdown`} />
+        ) : !day.order && day.reason === "past_cutoff" ? (
+          <AppText variant="small" color="muted">
+            No order was placed before the cut-off.
+          </AppText>
+        ) : null}
+      </ListCardText>
+    </ListCard>
   );
 }
 

@@ -12,7 +12,7 @@ import { addDays, dayHeading } from "../../ordering/dates";
 import { OrderStatusBadge, buyerStatusLabel } from "../ordering/OrderStatusBadge";
 import { useMoney } from "../../ordering/useMoney";
 import { combinedQuery } from "../ordering/combinedQuery";
-import { LinkRow, LinkRowTop, linkRowStyles } from "../ordering/LinkRow";
+import { ListCard, ListCardText, ListCardTitle, ListCardTop } from "../../ui/ListCard";
 import { productsLabel } from "../../ordering/quantities";
 import { quantityText } from "../../../shared/quantity";
 import type { OrderDto } from "../../../shared/schemas/orders";
@@ -75,29 +75,29 @@ function OrderRow({ order: o, today }: { order: OrderDto; today: string }) {
   const money = useMoney();
   const what = o.lines.map((l) => `${l.productName} (${quantityText(l.quantity, l)})`).join(", ");
   return (
-    <LinkRow
+    <ListCard
       href={`/buyer/order/${o.deliveryDate}`}
       accessibilityLabel={`${dayHeading(o.deliveryDate, today)}, ${buyerStatusLabel(o.status)}, ${money(o.totalCents)}`}
       testID={`history-order-${o.id}`}
       quiet={o.status === "cancelled"}
     >
-      <LinkRowTop>
-        <AppText variant="bodyStrong" style={linkRowStyles.title}>
-          {dayHeading(o.deliveryDate, today)}
+      <ListCardText>
+        <ListCardTop>
+          <ListCardTitle>{dayHeading(o.deliveryDate, today)}</ListCardTitle>
+          <OrderStatusBadge status={o.status} testID={`history-order-${o.id}-status`} />
+        </ListCardTop>
+        <AppText variant="small" color="ink">{`${productsLabel(o.lines.length)} · ${money(o.totalCents)}${o.poNumber ? ` · PO ${o.poNumber}` : ""}`}</AppText>
+        <AppText variant="small" color="muted" numberOfLines={2}>
+          {what}
         </AppText>
-        <OrderStatusBadge status={o.status} testID={`history-order-${o.id}-status`} />
-      </LinkRowTop>
-      <AppText variant="small" color="ink">{`${productsLabel(o.lines.length)} · ${money(o.totalCents)}${o.poNumber ? ` · PO ${o.poNumber}` : ""}`}</AppText>
-      <AppText variant="small" color="muted" numberOfLines={2}>
-        {what}
-      </AppText>
-      {o.source === "standing" ? (
-        <View style={styles.badges}>
-          <Badge label="Standing order" tone="crust" />
-          {o.editedByHand ? <Badge label="Changed by hand" tone="amber" /> : null}
-        </View>
-      ) : null}
-    </LinkRow>
+        {o.source === "standing" ? (
+          <View style={styles.badges}>
+            <Badge label="Standing order" tone="crust" />
+            {o.editedByHand ? <Badge label="Changed by hand" tone="amber" /> : null}
+          </View>
+        ) : null}
+      </ListCardText>
+    </ListCard>
   );
 }
 

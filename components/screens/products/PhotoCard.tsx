@@ -3,6 +3,7 @@ import { Platform, StyleSheet, View } from "react-native";
 import { Card } from "../../ui/Card";
 import { Button } from "../../ui/Button";
 import { ProgressBar } from "../../ui/ProgressBar";
+import { HiddenFileInput } from "../../ui/HiddenFileInput";
 import { FormError, Notice } from "../../ui/FormError";
 import { AppText } from "../../ui/Text";
 import { messageOf } from "../../api/client";
@@ -46,18 +47,7 @@ export function PhotoCard({ product }: { product: ProductDto }) {
       <FormError message={error} testID="photo-error" />
       {Platform.OS === "web" ? (
         <>
-          <input
-            ref={input}
-            type="file"
-            accept="image/jpeg,image/png,image/webp"
-            style={{ display: "none" }}
-            data-testid="photo-input"
-            aria-label="Photo file"
-            onChange={(e) => {
-              pick(e.currentTarget.files?.[0]);
-              e.currentTarget.value = "";
-            }}
-          />
+          <HiddenFileInput ref={input} accept="image/jpeg,image/png,image/webp" onPick={pick} label="Photo file" testID="photo-input" />
           <Button label={product.photoUrl ? "Replace photo" : "Choose a photo"} icon="upload" variant="secondary" busy={upload.isPending} onPress={() => input.current?.click()} testID="photo-choose" />
         </>
       ) : (

@@ -3,10 +3,9 @@ import { Screen } from "../../ui/Screen";
 import { PageHeader } from "../../ui/PageHeader";
 import { TextLink } from "../../ui/TextLink";
 import { Notice } from "../../ui/FormError";
-import { EmptyState } from "../../ui/States";
+import { NotFoundState, isNotFound } from "../../ui/States";
 import { QueryStates } from "../../ui/QueryStates";
 import { useSignedInUser } from "../../auth/useAuth";
-import { ApiError } from "../../api/client";
 import { useProductQuery, useUpdateProductMutation } from "../../api/products";
 import { valuesOf } from "./productForm";
 import { ProductForm } from "./ProductFormScreen";
@@ -22,11 +21,10 @@ export function ProductDetailScreen({ id, created }: { id: number; created?: boo
   const update = useUpdateProductMutation(id);
   const [saved, setSaved] = useState<string | null>(created ? "Product added. Now add a photo so buyers recognise it." : null);
 
-  if (!valid || (product.error instanceof ApiError && product.error.status === 404)) {
+  if (!valid || isNotFound(product.error)) {
     return (
       <Screen narrow testID="product-detail">
-        <EmptyState icon="help-circle" title="There's no such product" testID="product-not-found" />
-        <TextLink href="/office/products" label="All products" />
+        <NotFoundState title="There's no such product" back={{ href: "/office/products", label: "All products" }} testID="product-not-found" />
       </Screen>
     );
   }

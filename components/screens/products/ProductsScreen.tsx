@@ -14,7 +14,9 @@ import { useSignedInUser } from "../../auth/useAuth";
 import { useProductsQuery } from "../../api/products";
 import { ProductPhoto, useMoney } from "../ordering/parts";
 import type { ProductDto } from "../../../shared/schemas/catalog";
-import { TableOrCards } from "../production/TableOrCards";
+import { TableOrCards } from "../../ui/TableOrCards";
+import { TitleCell } from "../../ui/DataTable";
+import { ListCardText } from "../../ui/ListCard";
 import { space } from "../../theme";
 
 type Filter = "active" | "archived" | "all";
@@ -97,12 +99,7 @@ function ProductList({ all, filter, isOwner }: { all: ProductDto[]; filter: Filt
             <View style={styles.nameCell}>
               <ProductPhoto url={p.photoUrl} name={p.name} size={40} />
               <View style={styles.flex}>
-                <AppText variant="bodyStrong" numberOfLines={1}>
-                  {p.name}
-                </AppText>
-                <AppText variant="small" color="muted" numberOfLines={1}>
-                  {p.saleUnit}
-                </AppText>
+                <TitleCell title={p.name} detail={p.saleUnit} oneLine />
               </View>
             </View>
           ),
@@ -118,11 +115,11 @@ function ProductList({ all, filter, isOwner }: { all: ProductDto[]; filter: Filt
       card={(p) => (
         <>
           <ProductPhoto url={p.photoUrl} name={p.name} size={52} />
-          <View style={styles.cardText}>
+          <ListCardText>
             <AppText variant="bodyStrong">{p.name}</AppText>
             <AppText variant="small" color="muted">{`${p.saleUnit} · ${money(p.listPriceCents)}`}</AppText>
             {status(p)}
-          </View>
+          </ListCardText>
         </>
       )}
     />
@@ -140,5 +137,4 @@ const styles = StyleSheet.create({
   badges: { flexDirection: "row", flexWrap: "wrap", gap: space.xs },
   flex: { flex: 1, minWidth: 0 },
   nameCell: { flexDirection: "row", alignItems: "center", gap: space.md },
-  cardText: { flex: 1, gap: space.xxs },
 });

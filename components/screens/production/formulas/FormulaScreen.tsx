@@ -4,10 +4,9 @@ import { Screen } from "../../../ui/Screen";
 import { PageHeader } from "../../../ui/PageHeader";
 import { TextLink } from "../../../ui/TextLink";
 import { Notice } from "../../../ui/FormError";
-import { EmptyState } from "../../../ui/States";
+import { NotFoundState, isNotFound } from "../../../ui/States";
 import { QueryStates } from "../../../ui/QueryStates";
 import { AppText } from "../../../ui/Text";
-import { ApiError } from "../../../api/client";
 import { useFormulaQuery, useUpdateFormulaMutation } from "../../../api/formulas";
 import { useIngredientsQuery } from "../../../api/ingredients";
 import { useIsWide } from "../../../shell/useIsWide";
@@ -37,11 +36,10 @@ export function FormulaScreen({ area, id, version, created }: FormulaScreenProps
   const asked = version && version > 0 && current.data && version !== current.data.version ? version : undefined;
   const [saved, setSaved] = useState<string | null>(created ? "Formula added. Give products this formula below so their dough is planned." : null);
 
-  if (!valid || (current.error instanceof ApiError && current.error.status === 404)) {
+  if (!valid || isNotFound(current.error)) {
     return (
       <Screen testID="formula-detail">
-        <EmptyState icon="help-circle" title="There's no such formula" testID="formula-not-found" />
-        <TextLink href={paths.formulas} label="All formulas" />
+        <NotFoundState title="There's no such formula" back={{ href: paths.formulas, label: "All formulas" }} testID="formula-not-found" />
       </Screen>
     );
   }

@@ -9,7 +9,8 @@ import { formatNum } from "../../../format";
 import { kitchenPaths, type KitchenArea } from "../../../production/paths";
 import { formatPercent } from "../../../production/units";
 import { LibraryScreen } from "../LibraryScreen";
-import { CardBody, TableOrCards } from "../TableOrCards";
+import { CardBody, TableOrCards } from "../../../ui/TableOrCards";
+import { TitleCell } from "../../../ui/DataTable";
 import { productNames } from "./formulaText";
 import { space } from "../../../theme";
 
@@ -46,12 +47,7 @@ export function FormulasScreen({ area }: { area: KitchenArea }) {
               key: "name",
               label: "Formula",
               flex: 2,
-              render: (f) => (
-                <View>
-                  <AppText variant="bodyStrong">{f.name}</AppText>
-                  <AppText variant="small" color="muted">{`Version ${f.version}`}</AppText>
-                </View>
-              ),
+              render: (f) => <TitleCell title={f.name} detail={`Version ${f.version}`} />,
             },
             { key: "hydration", label: "Hydration", render: (f) => <AppText>{formatPercent(f.figures.hydrationPercent)}</AppText> },
             { key: "effective", label: "Effective", render: (f) => <AppText>{formatPercent(f.figures.effectiveHydrationPercent)}</AppText> },

@@ -10,7 +10,7 @@ import { ALLERGEN_LABEL } from "../../../../shared/allergens";
 import type { IngredientDto } from "../../../../shared/schemas/production";
 import { formatMass } from "../../../../shared/units";
 import { LibraryScreen } from "../LibraryScreen";
-import { CardBody, TableOrCards } from "../TableOrCards";
+import { CardBody, TableOrCards } from "../../../ui/TableOrCards";
 
 const packText = (i: IngredientDto, money: (c: number) => string) =>
   i.packGrams > 0 ? `${i.packName} (${formatMass(i.packGrams, "metric")}) · ${money(i.packCostCents)}` : `${i.packName} · not bought`;
