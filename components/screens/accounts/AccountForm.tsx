@@ -8,33 +8,19 @@ import { Button } from "../../ui/Button";
 import { TextLink } from "../../ui/TextLink";
 import { FormError } from "../../ui/FormError";
 import { useZodForm } from "../../forms/useZodForm";
+import type { z } from "zod";
 import { accountInputSchema, type AccountDto, type AccountStatus } from "../../../shared/schemas/accounts";
 import { space } from "../../theme";
 
-export interface AccountValues {
-  businessName: string;
-  deliveryAddress: string;
-  contactName: string;
-  contactPhone: string;
-  billingEmail: string;
-  status: AccountStatus;
-  notes: string;
-}
+/** The form's values: what the shared account schema gives (every field present, status defaulted). */
+export type AccountValues = z.output<typeof accountInputSchema>;
 
-const FIELDS = ["businessName", "deliveryAddress", "contactName", "contactPhone", "billingEmail", "status", "notes"] as const;
+const FIELDS = Object.keys(accountInputSchema.shape) as (keyof AccountValues)[];
 
 export const EMPTY_ACCOUNT: AccountValues = { businessName: "", deliveryAddress: "", contactName: "", contactPhone: "", billingEmail: "", status: "active", notes: "" };
 
 export function accountValues(a: AccountDto): AccountValues {
-  return {
-    businessName: a.businessName,
-    deliveryAddress: a.deliveryAddress,
-    contactName: a.contactName,
-    contactPhone: a.contactPhone,
-    billingEmail: a.billingEmail,
-    status: a.status,
-    notes: a.notes,
-  };
+  return Object.fromEntries(FIELDS.map((k) => [k, a[k]])) as AccountValues;
 }
 
 export interface AccountFormProps {
