@@ -238,7 +238,7 @@ function InvoiceTable({ invoices, totals, office, onOpen }: { invoices: InvoiceD
         {
           key: "number",
           label: "Invoice",
-          flex: 1.3,
+          flex: 1.6,
           render: (i) => <TitleCell title={i.number} detail={i.kind === "statement" ? "Statement" : null} />,
           footer: <AppText variant="bodyStrong" testID="invoices-total-count">{invoicesLabel(totals.count)}</AppText>,
         },
