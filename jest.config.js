@@ -33,6 +33,7 @@ module.exports = {
       testMatch: ["<rootDir>/tests/server/**/*.test.ts", "<rootDir>/tests/shared/**/*.test.ts"],
       transform: { "^.+\\.(t|j)sx?$": swc },
       setupFiles: ["reflect-metadata"],
+      setupFilesAfterEnv: ["<rootDir>/tests/server/jest-setup.ts"],
     },
     {
       displayName: "fuzz",

@@ -8,7 +8,7 @@ let db: Awaited<ReturnType<typeof createTestDatabase>>;
 beforeAll(async () => {
   db = await createTestDatabase();
 }, 60_000);
-afterAll(() => db.drop());
+afterAll(() => db?.drop());
 
 const EXPECTED = [
   "checkout_session.invoiceId -> invoice RESTRICT",

@@ -11,7 +11,7 @@ let db: Awaited<ReturnType<typeof createTestDatabase>>;
 beforeAll(async () => {
   db = await createTestDatabase();
 }, 60_000);
-afterAll(() => db.drop());
+afterAll(() => db?.drop());
 
 it("backfills existing products with a plural (order lines by the same statement), telling 'Loaf' and 'loaf' apart", async () => {
   const ds = db.dataSource;

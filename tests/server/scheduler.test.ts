@@ -10,7 +10,7 @@ import type { AppContext } from "../../server/http/context";
  */
 let db: Awaited<ReturnType<typeof createTestDatabase>>;
 beforeAll(async () => { db = await createTestDatabase(); });
-afterAll(() => db.drop());
+afterAll(() => db?.drop());
 
 it("runs ten due jobs on a small pool without taking every connection, and a query still answers meanwhile", async () => {
   const pool = (db.dataSource.driver as unknown as { pool: { config: { connectionLimit: number } } }).pool;

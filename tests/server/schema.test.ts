@@ -12,7 +12,7 @@ let db: Awaited<ReturnType<typeof createTestDatabase>>;
 beforeAll(async () => {
   db = await createTestDatabase();
 });
-afterAll(() => db.drop());
+afterAll(() => db?.drop());
 
 it("the migrations match the entities exactly (no drift)", async () => {
   // The same comparison `typeorm migration:generate` makes: after every migration has run,
