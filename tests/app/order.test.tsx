@@ -129,6 +129,36 @@ describe("order screen for a date", () => {
     expect(screen.getByTestId("qty-101-inc")).toBeDisabled();
   });
 
+  it("after Save changes the button rests, stepping back to the first quantity is a change, and the confirmation sits by the button (issue 12, item 2)", async () => {
+    let current = orderDto();
+    const api = mockApi(
+      buyerOrderingRoutes(calendarDay({ order: { id: 501, status: "open", totalCents: 5400, productCount: 1, source: "one_off" } }), {
+        "GET /api/orders/:id": () => ({ body: { order: current } }),
+        "PATCH /api/orders/:id": (req) => {
+          const qty = (req.body as { lines: { quantity: number }[] }).lines[0].quantity;
+          current = { ...current, totalCents: 1800 * qty, lines: [{ ...current.lines[0], quantity: qty, lineTotalCents: 1800 * qty }] };
+          return { body: { order: current } };
+        },
+      }),
+    );
+    renderApp("/buyer/order/2025-12-03");
+    expect(await screen.findByTestId("qty-101")).toHaveDisplayValue("3");
+    fireEvent.changeText(screen.getByTestId("qty-101"), "5");
+    fireEvent.press(screen.getByTestId("order-submit"));
+    await waitFor(() => expect(api.callsTo("PATCH", "/api/orders/501")).toHaveLength(1));
+    expect(await screen.findByTestId("order-saved-here")).toHaveTextContent(/Changes saved\. Your order for Wed, Dec 3 is now \$90\.00\./);
+    // Saved: nothing to save until something changes.
+    await waitFor(() => expect(screen.getByTestId("order-submit")).toBeDisabled());
+    // Back to the quantity the page opened with: that is a change from the saved order, and it can be saved.
+    fireEvent.changeText(screen.getByTestId("qty-101"), "3");
+    expect(screen.getByTestId("order-submit")).toBeEnabled();
+    expect(screen.queryByTestId("order-saved-here")).toBeNull();
+    fireEvent.press(screen.getByTestId("order-submit"));
+    await waitFor(() => expect(api.callsTo("PATCH", "/api/orders/501")).toHaveLength(2));
+    expect(api.callsTo("PATCH", "/api/orders/501")[1].body).toMatchObject({ lines: [{ productId: 101, quantity: 3 }] });
+    expect(await screen.findByTestId("order-saved-here")).toHaveTextContent(/\$54\.00/);
+  });
+
   it("edits an existing order with PATCH and can cancel it", async () => {
     const order = orderDto();
     const api = mockApi(

@@ -9,6 +9,7 @@ import type { DraftOwner } from "../../../ordering/deviceDraft";
 import { blockedReason, canSend, draftLines, goneLines, isDirty, orderValues, sentLines, summarizeDraft, type OrderValues } from "../../../ordering/draft";
 import { useDeviceDraft } from "../../../ordering/useDeviceDraft";
 import { useOrderSubmit, type OrderNotice } from "../../../ordering/useOrderSubmit";
+import { useLeaveWarning } from "../../../ordering/useLeaveWarning";
 import { orderCreateSchema, type OrderDto } from "../../../../shared/schemas/orders";
 import type { CalendarDayDto, CalendarSettingsDto } from "../../../../shared/schemas/calendar";
 import type { ProductDto } from "../../../../shared/schemas/catalog";
@@ -44,9 +45,15 @@ export function OrderForm({ date, day, products, existing, minimumCents, setting
   const money = useMoney();
   const baseDeadline = existing ? existing.cutoffAt : day.cutoffAt;
   const closedByClock = msUntil(baseDeadline, now) <= 0;
-  // What "changed" is measured against: the saved order as the form opened (not as saved since; measuring
-  // against the order as it is now is `orderValues(existing)` in its place).
-  const [saved] = useState(() => orderValues(existing));
+  // What "changed" is measured against: the order as last saved (the server's answer to a save replaces
+  // `existing`), so after "Save changes" the button rests, and stepping back to the earlier quantities is a change.
+  const saved = useMemo(() => orderValues(existing), [existing]);
+  // The save's confirmation is shown by the button that was pressed, too (the page's notice may be out of view).
+  const [confirmation, setConfirmation] = useState<string | null>(null);
+  const notify = (n: OrderNotice | null) => {
+    onNotice(n);
+    setConfirmation(n && n.tone === "success" ? n.text : null);
+  };
   // An order that could not be saved earlier on this device comes back as it was typed.
   const deviceDraft = useDeviceDraft(draftOwner, date, existing, closedByClock);
   const form = useZodForm<OrderValues, typeof detailsSchema>({
@@ -64,7 +71,8 @@ export function OrderForm({ date, day, products, existing, minimumCents, setting
   const gone = goneLines(existing, products);
   const sent = sentLines(summary.chosen);
   const dirty = isDirty({ lines: sent, poNumber: form.values.poNumber, note: form.values.note }, saved, gone.length);
-  const order = useOrderSubmit({ form, date, day, products, existing, deviceDraft, money, now, onNotice, onExists });
+  const order = useOrderSubmit({ form, date, day, products, existing, deviceDraft, money, now, onNotice: notify, onExists });
+  useLeaveWarning(dirty && !order.placed);
 
   const locked = closedByClock || !!order.serverClosed;
   const busy = order.saving || order.cancelling;
@@ -77,7 +85,7 @@ export function OrderForm({ date, day, products, existing, minimumCents, setting
   const setLine = (id: number, text: string) => {
     form.setValue("quantities", { ...quantities, [id]: text });
     order.clearLineError(id);
-    onNotice(null);
+    notify(null);
   };
   const detail = (key: "poNumber" | "note") => {
     const t = form.text(key);
@@ -85,7 +93,7 @@ export function OrderForm({ date, day, products, existing, minimumCents, setting
       ...t,
       onChangeText: (v: string) => {
         t.onChangeText(v);
-        onNotice(null);
+        notify(null);
       },
     };
   };
@@ -102,6 +110,7 @@ export function OrderForm({ date, day, products, existing, minimumCents, setting
     saving: order.saving,
     onSubmit: submit,
     money,
+    confirmation,
   };
   const banners = (
     <OrderBanners

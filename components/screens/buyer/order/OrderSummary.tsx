@@ -21,6 +21,8 @@ export interface OrderSummaryProps {
   saving: boolean;
   onSubmit: () => void;
   money: (cents: number) => string;
+  /** The last save's confirmation, shown beside the button that was pressed (null once anything changes). */
+  confirmation?: string | null;
 }
 
 /** What the order comes to, the minimum order, and the button that places or saves it. */
@@ -60,6 +62,12 @@ export function OrderSummary(p: OrderSummaryProps) {
     />
   );
 
+  const confirmed = p.confirmation ? (
+    <AppText variant="small" color="sageInk" testID="order-saved-here" accessibilityLiveRegion="polite" style={styles.strong}>
+      {p.confirmation}
+    </AppText>
+  ) : null;
+
   const blocked = p.blocked ? (
     <AppText variant="small" color="muted" testID="order-blocked">
       {p.blocked}
@@ -72,6 +80,7 @@ export function OrderSummary(p: OrderSummaryProps) {
         {total}
         {minimumHint}
         {button}
+        {confirmed}
         {blocked}
       </Card>
     );
@@ -82,7 +91,7 @@ export function OrderSummary(p: OrderSummaryProps) {
         {total}
         {button}
       </View>
-      {p.blocked && short === 0 ? blocked : minimumHint}
+      {confirmed ?? (p.blocked && short === 0 ? blocked : minimumHint)}
     </View>
   );
 }
