@@ -25,6 +25,32 @@ describe("a café buyer at 390 px", () => {
     await page.getByTestId("order-notice").filter({ hasText: "saved" }).waitFor();
     await shot(page, "phone-order-changed");
 
+    // Issue 12, item 2: the confirmation is also by the button pressed (the footer, in view at 390 × 844); the
+    // button rests once saved; stepping back to the quantity the page opened with is a change that can be saved;
+    // and while a change is unsaved, leaving the tab asks (the web's beforeunload).
+    const here = page.getByTestId("order-saved-here");
+    await here.waitFor();
+    const box = await here.boundingBox();
+    expect(box && box.y >= 0 && box.y + box.height <= PHONE.height).toBe(true);
+    const save = page.getByRole("button", { name: "Save changes" });
+    expect(await save.isDisabled()).toBe(true);
+    const asksOnLeave = () =>
+      page.evaluate(() => {
+        const e = new Event("beforeunload", { cancelable: true });
+        window.dispatchEvent(e);
+        return e.defaultPrevented;
+      });
+    expect(await asksOnLeave()).toBe(false);
+    await page.getByRole("button", { name: "Fewer Pullman milk loaf" }).click();
+    expect(Number(await qty.inputValue())).toBe(before);
+    expect(await save.isEnabled()).toBe(true);
+    expect(await here.count()).toBe(0);
+    expect(await asksOnLeave()).toBe(true);
+    await save.click();
+    await here.waitFor();
+    expect(await save.isDisabled()).toBe(true);
+    expect(await asksOnLeave()).toBe(false);
+
     // Cancel it.
     await page.getByRole("button", { name: "Cancel this order" }).click();
     await page.getByRole("button", { name: "Yes, cancel order" }).click();
