@@ -11,6 +11,7 @@ import { LinkPressable } from "../ui/LinkPressable";
 import { AREA_LABEL, isActive, navFor, tabsFor, type NavItem } from "./navItems";
 import { useIsWide } from "./useIsWide";
 import { ROLE_LABELS, type HomeArea } from "../../shared/roles";
+import { guardLinkPress } from "./leaveGuard";
 
 /** Web landmarks (<nav>, <main>); React Native's own role list has no such roles. */
 function landmark(role: "navigation" | "main"): object {
@@ -76,7 +77,7 @@ export function AppShell({ area, children }: { area: HomeArea; children: React.R
 
 function SideItem({ item, active }: { item: NavItem; active: boolean }) {
   return (
-    <Link href={item.href} asChild>
+    <Link href={item.href} onPress={guardLinkPress} asChild>
       <LinkPressable
         accessibilityRole="link"
         aria-current={active ? "page" : undefined}
@@ -135,7 +136,7 @@ function BottomTabs({ items, pathname }: { items: NavItem[]; pathname: string })
       {items.map((item) => {
         const active = isActive(item, pathname);
         return (
-          <Link key={item.key} href={item.href} asChild>
+          <Link key={item.key} href={item.href} onPress={guardLinkPress} asChild>
             <LinkPressable
               accessibilityRole="link"
               accessibilityState={{ selected: active }}

@@ -5,6 +5,7 @@ import Feather from "@expo/vector-icons/Feather";
 import { AppText } from "./Text";
 import { LinkPressable } from "./LinkPressable";
 import { colors, layout, radii, space } from "../theme";
+import { guardLinkPress } from "../shell/leaveGuard";
 
 export interface ListCardsProps {
   testID?: string;
@@ -45,7 +46,7 @@ export function ListCard({ onPress, href, accessibilityLabel, testID, compact, a
   const look = [styles.card, compact && styles.compact, quiet && styles.quiet, alert && styles.alert];
   if (href) {
     return (
-      <Link href={href} asChild>
+      <Link href={href} onPress={guardLinkPress} asChild>
         <LinkPressable accessibilityRole="link" accessibilityLabel={accessibilityLabel} testID={testID} style={StyleSheet.flatten(look)} highlightStyle={styles.pressed}>
           {children}
           {chevron}
@@ -109,7 +110,7 @@ export interface LinkCardProps {
 export function LinkCard({ href, icon, title, hint, testID, iconBadge, style }: LinkCardProps) {
   const glyph = <Feather name={icon} size={22} color={colors.crust} />;
   return (
-    <Link href={href} asChild>
+    <Link href={href} onPress={guardLinkPress} asChild>
       <LinkPressable accessibilityRole="link" testID={testID} style={StyleSheet.flatten([styles.card, styles.linkCard, style])} highlightStyle={styles.pressed}>
         {iconBadge ? <View style={styles.badge}>{glyph}</View> : glyph}
         <View style={styles.text}>

@@ -46,6 +46,17 @@ describe("a café buyer at 390 px", () => {
     expect(await save.isEnabled()).toBe(true);
     expect(await here.count()).toBe(0);
     expect(await asksOnLeave()).toBe(true);
+    // A link inside the app asks too: staying keeps the page and the change.
+    const asked: string[] = [];
+    page.once("dialog", (d) => {
+      asked.push(d.message());
+      void d.dismiss();
+    });
+    await page.getByTestId("tab-history").click();
+    await page.waitForTimeout(500);
+    expect(asked).toEqual(["Your changes to this order are not saved yet. Leave without saving them?"]);
+    expect(new URL(page.url()).pathname).toBe(`/buyer/order/${date}`);
+    expect(Number(await qty.inputValue())).toBe(before);
     await save.click();
     await here.waitFor();
     expect(await save.isDisabled()).toBe(true);

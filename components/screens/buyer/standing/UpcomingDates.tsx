@@ -9,6 +9,7 @@ import { OrderStatusBadge } from "../../ordering/OrderStatusBadge";
 import { formatDay } from "../../../ordering/dates";
 import type { StandingOrderDto } from "../../../../shared/schemas/orders";
 import { colors, layout, radii, space } from "../../../theme";
+import { guardLinkPress } from "../../../shell/leaveGuard";
 
 export interface UpcomingDatesProps {
   standing: StandingOrderDto;
