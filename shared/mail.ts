@@ -18,3 +18,15 @@ export const MAIL_KIND_LABELS: Record<MailKind, string> = {
 export function mailKindLabel(kind: string): string {
   return (MAIL_KIND_LABELS as Record<string, string>)[kind] ?? "E-mail";
 }
+
+/**
+ * Who sees which mail in the outbox. The owner sees all of it; the bookkeeper the mail that carries money — invoices
+ * (statements are invoices) and receipts — to see that it went out and send a failed one again. Invitations,
+ * password resets and order e-mails stay the owner's (they carry sign-in links and the buyers' ordering).
+ */
+export const BOOKKEEPER_MAIL_KINDS: readonly MailKind[] = ["invoice", "receipt"];
+
+/** The kinds a role may see in the outbox; null: every kind. */
+export function outboxKindsFor(role: "owner" | "bookkeeper"): readonly MailKind[] | null {
+  return role === "owner" ? null : BOOKKEEPER_MAIL_KINDS;
+}

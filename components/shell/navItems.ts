@@ -43,7 +43,7 @@ export const NAV: Record<HomeArea, NavItem[]> = {
     { key: "price-lists", label: "Price lists", href: "/office/price-lists", icon: "tag", roles: ["owner"] },
     { key: "calendar", label: "Delivery days", href: "/office/calendar", icon: "calendar", roles: ["owner"] },
     { key: "money", label: "Money", href: "/office/money", icon: "dollar-sign", roles: ["owner", "bookkeeper"] },
-    { key: "outbox", label: "Outgoing e-mail", href: "/office/outbox", icon: "mail", roles: ["owner"] },
+    { key: "outbox", label: "Outgoing e-mail", href: "/office/outbox", icon: "mail", roles: ["owner", "bookkeeper"] },
     { key: "me", label: "Profile", href: "/office/me", icon: "user" },
   ],
 };

@@ -128,16 +128,17 @@ export async function processOutbox(ctx: AppContext, limit = 100): Promise<{ sen
   return { sent, failed };
 }
 
-export async function listOutbox(ctx: AppContext, status?: MailStatus): Promise<OutboxMailDto[]> {
-  const rows = await ctx.dataSource.getRepository(OutboxMail).find({ where: status ? { status } : {}, order: { id: "DESC" }, take: 200 });
+export async function listOutbox(ctx: AppContext, status?: MailStatus, kinds: readonly MailKind[] | null = null): Promise<OutboxMailDto[]> {
+  const where = { ...(status ? { status } : {}), ...(kinds ? { kind: In([...kinds]) } : {}) };
+  const rows = await ctx.dataSource.getRepository(OutboxMail).find({ where, order: { id: "DESC" }, take: 200 });
   return rows.map((r) => ({ id: r.id, kind: r.kind, to: r.toAddress, subject: r.subject, status: r.status, attempts: r.attempts, lastError: r.lastError, nextAttemptAt: r.nextAttemptAt.toISOString(), sentAt: r.sentAt?.toISOString() ?? null, createdAt: r.createdAt.toISOString(), messageId: r.messageId }));
 }
 
-/** The owner's "send again" for a failed mail: back in the queue, attempts counted afresh. */
-export async function resend(ctx: AppContext, id: number): Promise<void> {
+/** "Send again" for a failed mail: back in the queue, attempts counted afresh. A kind the caller may not see is 404. */
+export async function resend(ctx: AppContext, id: number, kinds: readonly MailKind[] | null = null): Promise<void> {
   const repo = ctx.dataSource.getRepository(OutboxMail);
   const row = await repo.findOneBy({ id });
-  if (!row) throw notFound("That mail");
+  if (!row || (kinds && !kinds.includes(row.kind as MailKind))) throw notFound("That mail");
   if (row.status !== "failed") throw conflict("not_failed", `Only a mail that failed can be sent again; this one ${row.status === "sent" ? "has been sent" : "is still waiting to go"}.`);
   await repo.update({ id, status: "failed" }, { status: "pending", attempts: 0, nextAttemptAt: ctx.clock.now(), lastError: null });
   ctx.kickOutbox?.();

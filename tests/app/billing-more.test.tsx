@@ -47,13 +47,15 @@ describe("outgoing e-mail (owner)", () => {
     for (const id of [21, 22, 23, 24]) expect(screen.getByTestId(`outbox-row-${id}`)).not.toHaveTextContent(/[a-z]+_[a-z]+/);
   });
 
-  it("keeps the bookkeeper out", async () => {
+  it("lets the bookkeeper in, to the invoice and receipt mail, from a card on Money (issue 12, item 4)", async () => {
     signedInAs(BOOKKEEPER);
-    const api = mockApi({ ...sessionRoutes(BOOKKEEPER), "GET /api/office/summary": { body: { summary: { users: { total: 1, active: 1, disabled: 0, pendingInvitations: 0 }, accounts: { total: 1, active: 1, onHold: 0, paused: 0, creditHold: 0, closed: 0 } } } } });
-    const app = renderApp("/office/money/outbox");
-    await screen.findByTestId("office-home-title");
-    expect(app.getPathname()).toBe("/office");
-    expect(api.callsTo("GET", "/api/outbox")).toHaveLength(0);
+    const api = mockApi({ ...sessionRoutes(BOOKKEEPER), "GET /api/outbox": { body: { mails: MAILS.filter((m) => m.kind === "invoice" || m.kind === "receipt") } } });
+    const app = renderApp("/office/money");
+    fireEvent.press(await screen.findByTestId("money-outbox"));
+    expect(await screen.findByTestId("outbox-title")).toHaveTextContent("Outgoing e-mail");
+    expect(screen.getByText(/The invoice and receipt e-mails sent to the accounts.*the owner's to see\./)).toBeOnTheScreen();
+    expect(app.getPathname()).toBe("/office/outbox");
+    expect(api.callsTo("GET", "/api/outbox").length).toBeGreaterThan(0);
   });
 });
 

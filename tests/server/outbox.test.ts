@@ -88,6 +88,26 @@ describe("mail that is never lost", () => {
     const again = await t.http().post(`/api/outbox/${row.id}/resend`).set(auth(owner));
     expect(again.status).toBe(409);
   });
+
+  it("the bookkeeper sees invoice and receipt mail only, and may send a failed one again (issue 12, item 4)", async () => {
+    const bookkeeper = await tokenFor(t, await makeUser(t.ds, "bookkeeper"));
+    const repo = t.ds.getRepository(OutboxMail);
+    const base = { fromName: "Test", html: "<p>x</p>", text: "x", status: "failed" as const, attempts: MAX_ATTEMPTS, nextAttemptAt: t.clock.now() };
+    const invoice = await repo.save(repo.create({ ...base, messageId: "<inv.kinds@panwise.test>", kind: "invoice", toAddress: "ap@cafe.test", subject: "Invoice HB-1" }));
+    const receipt = await repo.save(repo.create({ ...base, messageId: "<rcpt.kinds@panwise.test>", kind: "receipt", toAddress: "ap@cafe.test", subject: "Receipt" }));
+    const reset = await repo.save(repo.create({ ...base, messageId: "<reset.kinds@panwise.test>", kind: "password_reset", toAddress: "someone@cafe.test", subject: "Reset" }));
+    const seen = (await t.http().get("/api/outbox").set(auth(bookkeeper))).body.mails.map((m: { id: number; kind: string }) => m.kind);
+    expect(new Set(seen)).toEqual(new Set(["invoice", "receipt"]));
+    const all = (await t.http().get("/api/outbox").set(auth(owner))).body.mails.map((m: { id: number }) => m.id);
+    expect(all).toEqual(expect.arrayContaining([invoice.id, receipt.id, reset.id]));
+    // A password reset is not the bookkeeper's: as if it did not exist.
+    expect((await t.http().post(`/api/outbox/${reset.id}/resend`).set(auth(bookkeeper))).status).toBe(404);
+    expect((await repo.findOneByOrFail({ id: reset.id })).status).toBe("failed");
+    expect((await t.http().post(`/api/outbox/${invoice.id}/resend`).set(auth(bookkeeper))).status).toBe(202);
+    await processOutbox(t.ctx);
+    expect((await repo.findOneByOrFail({ id: invoice.id })).status).toBe("sent");
+    expect(t.mail.messages.filter((m) => m.subject === "Invoice HB-1")).toHaveLength(1);
+  });
 });
 
 describe("a database crash right after the mail server accepted a mail", () => {

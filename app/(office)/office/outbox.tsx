@@ -7,7 +7,7 @@ export default function OutboxRoute() {
   return (
     <>
       <ScreenTitle title="Outgoing e-mail" />
-      <RequireRole roles={["owner"]}>
+      <RequireRole roles={["owner", "bookkeeper"]}>
         <OutboxScreen />
       </RequireRole>
     </>

@@ -15,6 +15,7 @@ const LINKS: { key: string; href: Href; icon: React.ComponentProps<typeof Feathe
   { key: "payouts", href: "/office/money/payouts", icon: "dollar-sign", title: "Payouts", about: "Card money sent to the bank, matched to invoices, to reconcile." },
   { key: "aging", href: "/office/money/aging", icon: "clock", title: "Aging", about: "What each account owes, by how long it is past due." },
   { key: "exports", href: "/office/money/exports", icon: "download", title: "Exports", about: "Invoices, payments and payouts as CSV for the accountant." },
+  { key: "outbox", href: "/office/outbox", icon: "mail", title: "Outgoing e-mail", about: "Invoice and receipt e-mails: sent, waiting or failed; send a failed one again." },
   { key: "settings", href: "/office/money/settings", icon: "sliders", title: "Billing settings", about: "Sales tax, invoice numbers, credit hold, payment instructions." },
 ];
 

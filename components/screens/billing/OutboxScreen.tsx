@@ -16,6 +16,7 @@ import { useBakeryTimeZone } from "../../api/bakery";
 import { formatDateTime } from "../../format";
 import { mailKindLabel } from "../../../shared/mail";
 import { useIsWide } from "../../shell/useIsWide";
+import { useSignedInUser } from "../../auth/useAuth";
 import { space } from "../../theme";
 
 const STATUS_LABELS: Record<MailStatus, string> = { pending: "Waiting", sending: "Sending", sent: "Sent", failed: "Failed" };
@@ -25,9 +26,10 @@ type Show = MailStatus | "all";
 
 const attemptsLabel = (n: number) => (n === 1 ? "1 attempt" : `${n} attempts`);
 
-/** The owner's view of outgoing e-mail: what went, what waits for a retry, what failed (and send it again). */
+/** Outgoing e-mail (all of it for the owner, invoices and receipts for the bookkeeper): what went, what waits, what failed. */
 export function OutboxScreen() {
   const wide = useIsWide();
+  const isOwner = useSignedInUser().role === "owner";
   const [show, setShow] = useState<Show>("all");
   const mails = useOutboxQuery(show === "all" ? undefined : show);
   const resend = useResendMailMutation();
@@ -98,7 +100,15 @@ export function OutboxScreen() {
 
   return (
     <Screen testID="outbox-screen">
-      <PageHeader title="Outgoing e-mail" subtitle="Every e-mail sent from the bakery's Panwise: order confirmations, invoices and receipts, invitations and password resets. Each is kept here and retried with a growing pause until the mail server takes it." testID="outbox-title" />
+      <PageHeader
+        title="Outgoing e-mail"
+        subtitle={
+          isOwner
+            ? "Every e-mail sent from the bakery's Panwise: order confirmations, invoices and receipts, invitations and password resets. Each is kept here and retried with a growing pause until the mail server takes it."
+            : "The invoice and receipt e-mails sent to the accounts (statements are invoices). Each is kept here and retried with a growing pause until the mail server takes it. Invitations, password resets and order e-mails are the owner's to see."
+        }
+        testID="outbox-title"
+      />
       <ChoiceGroup<Show>
         label="Show"
         value={show}
