@@ -115,6 +115,7 @@ export function OrderScreen({ date }: { date: string }) {
       now={now}
       header={header}
       draftOwner={user.accountId ? { userId: user.id, accountId: user.accountId } : null}
+      notice={notice}
       onNotice={setNotice}
       onExists={() => {
         setNotice({ text: "There's already an order for this date (placed on another device or by the bakery). It's shown below: make your changes there.", tone: "info" });

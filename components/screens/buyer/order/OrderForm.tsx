@@ -1,4 +1,4 @@
-import React, { useMemo, useState } from "react";
+import React, { useMemo } from "react";
 import { StyleSheet, View } from "react-native";
 import { Screen } from "../../../ui/Screen";
 import { useZodForm } from "../../../forms/useZodForm";
@@ -31,6 +31,8 @@ export interface OrderFormProps {
   header: React.ReactNode;
   /** Whose device-kept draft this date may have (buyers only). */
   draftOwner: DraftOwner | null;
+  /** The page's notice (shown at its top); a save's confirmation is also shown by the button pressed. */
+  notice: OrderNotice | null;
   onNotice: (n: OrderNotice | null) => void;
   onExists: () => void;
 }
@@ -40,7 +42,7 @@ const detailsSchema = orderCreateSchema.pick({ poNumber: true, note: true });
 const DETAIL_FIELDS = ["poNumber", "note"] as const;
 
 /** Placing or changing one date's order: the products with their steppers, the details, the total and the button. */
-export function OrderForm({ date, day, products, existing, minimumCents, settings, timeZone, now, header, draftOwner, onNotice, onExists }: OrderFormProps) {
+export function OrderForm({ date, day, products, existing, minimumCents, settings, timeZone, now, header, draftOwner, notice, onNotice, onExists }: OrderFormProps) {
   const wide = useIsWide();
   const money = useMoney();
   const baseDeadline = existing ? existing.cutoffAt : day.cutoffAt;
@@ -49,11 +51,7 @@ export function OrderForm({ date, day, products, existing, minimumCents, setting
   // `existing`), so after "Save changes" the button rests, and stepping back to the earlier quantities is a change.
   const saved = useMemo(() => orderValues(existing), [existing]);
   // The save's confirmation is shown by the button that was pressed, too (the page's notice may be out of view).
-  const [confirmation, setConfirmation] = useState<string | null>(null);
-  const notify = (n: OrderNotice | null) => {
-    onNotice(n);
-    setConfirmation(n && n.tone === "success" ? n.text : null);
-  };
+  const confirmation = notice?.tone === "success" ? notice.text : null;
   // An order that could not be saved earlier on this device comes back as it was typed.
   const deviceDraft = useDeviceDraft(draftOwner, date, existing, closedByClock);
   const form = useZodForm<OrderValues, typeof detailsSchema>({
@@ -71,7 +69,7 @@ export function OrderForm({ date, day, products, existing, minimumCents, setting
   const gone = goneLines(existing, products);
   const sent = sentLines(summary.chosen);
   const dirty = isDirty({ lines: sent, poNumber: form.values.poNumber, note: form.values.note }, saved, gone.length);
-  const order = useOrderSubmit({ form, date, day, products, existing, deviceDraft, money, now, onNotice: notify, onExists });
+  const order = useOrderSubmit({ form, date, day, products, existing, deviceDraft, money, now, onNotice, onExists });
   useLeaveWarning(dirty && !order.placed);
 
   const locked = closedByClock || !!order.serverClosed;
@@ -85,7 +83,7 @@ export function OrderForm({ date, day, products, existing, minimumCents, setting
   const setLine = (id: number, text: string) => {
     form.setValue("quantities", { ...quantities, [id]: text });
     order.clearLineError(id);
-    notify(null);
+    onNotice(null);
   };
   const detail = (key: "poNumber" | "note") => {
     const t = form.text(key);
@@ -93,7 +91,7 @@ export function OrderForm({ date, day, products, existing, minimumCents, setting
       ...t,
       onChangeText: (v: string) => {
         t.onChangeText(v);
-        notify(null);
+        onNotice(null);
       },
     };
   };
