@@ -11,7 +11,10 @@ import crypto from "node:crypto";
 import path from "node:path";
 
 const args = process.argv.slice(2);
-const only = (name) => args.length === 0 || args.includes(name);
+const stages = args.filter((a) => !a.includes("/"));
+// Paths after the stage names pick single test files (e.g. `node scripts/test.mjs browser tests/browser/billing.test.ts`).
+const files = args.filter((a) => a.includes("/"));
+const only = (name) => stages.length === 0 || stages.includes(name);
 const results = [];
 const cleanups = [];
 
@@ -95,7 +98,7 @@ async function main() {
       cleanups.push(stopChild(server));
       await waitFor("the test server", () => httpOk(`http://127.0.0.1:${port}/api/health`), { timeoutMs: 60000 });
       await waitFor("the test mail fake", () => httpOk(`http://127.0.0.1:${mailHttpPort}/api/messages`), { timeoutMs: 30000 });
-      stage("browser journeys (Chromium, phone and desktop)", "npx", ["jest", "--selectProjects", "browser", "--runInBand", "--ci"], {
+      stage("browser journeys (Chromium, phone and desktop)", "npx", ["jest", "--selectProjects", "browser", "--runInBand", "--ci", ...files], {
         ...testEnv,
         BASE_URL: `http://127.0.0.1:${port}`,
         MAIL_URL: `http://127.0.0.1:${mailHttpPort}`,
