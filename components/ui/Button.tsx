@@ -32,7 +32,8 @@ export function Button({ label, variant = "primary", icon, busy, block, small, d
     <Pressable
       accessibilityRole="button"
       accessibilityLabel={accessibilityLabel}
-      accessibilityState={{ disabled: !!inactive, busy: !!busy }}
+      aria-disabled={!!inactive}
+      aria-busy={!!busy}
       disabled={inactive}
       style={({ pressed }) => [
         styles.base,

@@ -34,7 +34,7 @@ export function ChoiceGroup<T extends string>({ label, choices, value, onChange,
             <Pressable
               key={c.value}
               accessibilityRole="radio"
-              accessibilityState={{ checked: selected }}
+              aria-checked={selected}
               accessibilityLabel={c.label}
               testID={testID ? `${testID}-${c.value}` : undefined}
               onPress={() => onChange(c.value)}

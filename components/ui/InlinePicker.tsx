@@ -44,7 +44,8 @@ export function InlinePicker<T extends string | number>({ label, hideLabel, valu
       <Pressable
         accessibilityRole="button"
         accessibilityLabel={`${label}: ${chosen ? chosen.label : "none chosen"}`}
-        accessibilityState={{ expanded: open, disabled: !!disabled }}
+        aria-expanded={open}
+        aria-disabled={!!disabled}
         aria-invalid={!!error}
         disabled={disabled}
         onPress={() => setOpen(!open)}
@@ -69,7 +70,7 @@ export function InlinePicker<T extends string | number>({ label, hideLabel, valu
                 <Pressable
                   key={String(o.value)}
                   accessibilityRole="radio"
-                  accessibilityState={{ checked: selected }}
+                  aria-checked={selected}
                   accessibilityLabel={o.hint ? `${o.label}, ${o.hint}` : o.label}
                   onPress={() => {
                     onChange(o.value);

@@ -20,10 +20,15 @@ export interface MultiChoiceProps<T extends string | number> {
   disabled?: boolean;
   /** Group testID; each option is "<testID>-<value>". */
   testID?: string;
+  /**
+   * What a screen reader calls each option, where the same option is offered by two groups on one screen
+   * ("Wheat" under Contains and under May contain): e.g. "Wheat (may contain)". The visible label stays short.
+   */
+  optionName?: (option: MultiChoiceOption<T>) => string;
 }
 
 /** A multiple-choice control (checkboxes) as wrapping chips; the order of `options` is kept. */
-export function MultiChoice<T extends string | number>({ label, hint, options, value, onChange, error, disabled, testID }: MultiChoiceProps<T>) {
+export function MultiChoice<T extends string | number>({ label, hint, options, value, onChange, error, disabled, testID, optionName }: MultiChoiceProps<T>) {
   const toggle = (v: T) => {
     const on = value.includes(v);
     const next = options.map((o) => o.value).filter((o) => (o === v ? !on : value.includes(o)));
@@ -32,15 +37,16 @@ export function MultiChoice<T extends string | number>({ label, hint, options, v
   return (
     <View testID={testID}>
       <FieldFrame label={label} hint={hint} error={error} testID={testID}>
-      <View style={styles.chips} accessibilityRole="none" aria-label={label}>
+      <View style={styles.chips} role="group" aria-label={label}>
         {options.map((o) => {
           const checked = value.includes(o.value);
           return (
             <Pressable
               key={String(o.value)}
               accessibilityRole="checkbox"
-              accessibilityState={{ checked, disabled: !!disabled }}
-              accessibilityLabel={o.label}
+              aria-checked={checked}
+              aria-disabled={!!disabled}
+              accessibilityLabel={optionName ? optionName(o) : o.label}
               disabled={disabled}
               testID={testID ? `${testID}-${o.value}` : undefined}
               onPress={() => toggle(o.value)}

@@ -25,9 +25,10 @@ export function TickBox({ label, checked, onChange, accessibilityLabel, busy, di
   return (
     <Pressable
       accessibilityRole="checkbox"
-      accessibilityState={{ checked, disabled: !!inactive, busy: !!busy }}
-      accessibilityLabel={accessibilityLabel ?? label}
       aria-checked={checked}
+      aria-disabled={!!inactive}
+      aria-busy={!!busy}
+      accessibilityLabel={accessibilityLabel ?? label}
       disabled={inactive}
       onPress={() => onChange(!checked)}
       testID={testID}

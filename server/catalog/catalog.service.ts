@@ -14,7 +14,8 @@ import { componentDto, componentLine, derivedFor, productMakeup, replaceComponen
 import { applyPercentOff } from "../../shared/money";
 import type { SessionUser } from "../../shared/schemas/auth";
 import { checkUpload, type CheckRules } from "../http/upload";
-import { photoStore } from "../files/file-store";
+import sharp from "sharp";
+import { originalPhotoStore, photoStore } from "../files/file-store";
 import { suggestPlural } from "../../shared/quantity";
 
 /** How an account's prices are worked out: the list price, or its price list's. */
@@ -39,6 +40,8 @@ export async function pricingFor(ctx: AppContext, accountId: number | null, m: E
 }
 
 export const photoUrl = (p: Product) => (p.photoFile ? `/api/uploads/${p.photoFile}` : null);
+/** The small size for list tiles; the one size there is for photos stored before sizes were made. */
+export const photoThumbUrl = (p: Product) => (p.photoThumbFile ? `/api/uploads/${p.photoThumbFile}` : photoUrl(p));
 
 /**
  * A product's declared allergens are the union of its formula's ingredients', its components' ingredients' and its own
@@ -52,6 +55,7 @@ export function productDto(p: Product, makeup: ProductMakeup, lib: Map<number, I
     name: p.name,
     description: p.description,
     photoUrl: photoUrl(p),
+    photoThumbUrl: photoThumbUrl(p),
     saleUnit: p.saleUnit,
     saleUnitPlural: p.saleUnitPlural || suggestPlural(p.saleUnit),
     piecesPerUnit: p.piecesPerUnit,
@@ -200,20 +204,44 @@ export const PHOTO_UPLOAD: CheckRules = {
 };
 
 /**
- * The photo is checked by its bytes and re-encoded (server/http/upload.ts), then stored under its content hash.
- * Two products may share one stored photo, so the old file goes only when no product uses it any more.
+ * The sizes a photo is shown at, in CSS pixels at 2× for sharp screens: list tiles are at most 80 px (160), product
+ * screens at most 320 px (640). WebP at quality 82 (sharp docs, webp options; Google's WebP study puts quality
+ * 75–85 at JPEG-like quality for about a quarter less size — from memory).
+ */
+export const PHOTO_SIZES = { thumb: 160, large: 640 } as const;
+
+async function photoSize(original: Buffer, side: number): Promise<Buffer> {
+  // sharp drops all metadata unless told to keep it (sharp docs, "withMetadata"): no EXIF, no GPS position.
+  return sharp(original, { failOn: "error" }).resize({ width: side, height: side, fit: "inside", withoutEnlargement: true }).webp({ quality: 82 }).timeout({ seconds: 20 }).toBuffer();
+}
+
+/**
+ * The photo is checked by its bytes and re-encoded (server/http/upload.ts); that checked original is kept in the
+ * private originals store, and the two sizes screens show are made from it as WebP and stored in the public store,
+ * each under its content hash. Two products may share stored files, so an old file goes only when no product uses
+ * it any more.
  */
 export async function setProductPhoto(ctx: AppContext, id: number, buffer: Buffer): Promise<ProductDto> {
   const repo = ctx.dataSource.getRepository(Product);
   const p = await repo.findOneBy({ id });
   if (!p) throw notFound("That product");
   const checked = await checkUpload(buffer, PHOTO_UPLOAD);
+  const [large, thumb] = await Promise.all([photoSize(checked.bytes, PHOTO_SIZES.large), photoSize(checked.bytes, PHOTO_SIZES.thumb)]);
   const store = photoStore(ctx.config);
-  const file = await store.save(checked.bytes, checked.ext);
-  const old = p.photoFile;
-  await repo.update({ id }, { photoFile: file });
-  if (old && old !== file && !(await repo.existsBy({ photoFile: old }))) await store.remove(old);
+  const originals = originalPhotoStore(ctx.config);
+  const next = { photoFile: await store.save(large, "webp"), photoThumbFile: await store.save(thumb, "webp"), photoOriginalFile: await originals.save(checked.bytes, checked.ext) };
+  await repo.update({ id }, next);
+  await removeUnusedPhotoFiles(ctx, p);
   return productOut(ctx, id);
+}
+
+/** Remove the files a product's earlier photo used, where no product uses them any more. */
+async function removeUnusedPhotoFiles(ctx: AppContext, was: Pick<Product, "photoFile" | "photoThumbFile" | "photoOriginalFile">): Promise<void> {
+  const repo = ctx.dataSource.getRepository(Product);
+  const used = async (file: string) =>
+    (await repo.existsBy({ photoFile: file })) || (await repo.existsBy({ photoThumbFile: file })) || (await repo.existsBy({ photoOriginalFile: file }));
+  for (const file of [was.photoFile, was.photoThumbFile]) if (file && !(await used(file))) await photoStore(ctx.config).remove(file);
+  if (was.photoOriginalFile && !(await used(was.photoOriginalFile))) await originalPhotoStore(ctx.config).remove(was.photoOriginalFile);
 }
 
 // ---- price lists -------------------------------------------------------------------------

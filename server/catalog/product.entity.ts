@@ -11,9 +11,17 @@ export class Product {
   @Column({ type: "text" })
   description: string;
 
-  /** File name under .data/uploads (generated), or null. */
+  /** The photo as product screens show it (640 px WebP), a stored id under the uploads directory, or null. */
   @Column({ type: "varchar", length: 80, nullable: true })
   photoFile: string | null;
+
+  /** The 160 px WebP for list tiles; null for photos stored before sizes were made (photoFile is shown then). */
+  @Column({ type: "varchar", length: 80, nullable: true })
+  photoThumbFile: string | null;
+
+  /** The checked original, kept in the private originals store (never served); null for older photos. */
+  @Column({ type: "varchar", length: 80, nullable: true })
+  photoOriginalFile: string | null;
 
   @Column({ type: "varchar", length: 60 })
   saleUnit: string;

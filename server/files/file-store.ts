@@ -134,8 +134,10 @@ export class FileStore {
 
 /**
  * The two stores under the configured data directory (`config.uploadsDir`, by default `.data/uploads`):
- * product photos at its top level and tax certificates in `certificates/` — the layout used before, so files
+ * product photos at its top level (the sizes screens show), their originals in `originals/` and tax certificates in `certificates/` — the layout used before, so files
  * stored earlier are still found. Resolved per call, so a changed config (tests) takes effect.
  */
 export const photoStore = (config: Pick<Config, "uploadsDir">) => new FileStore(config.uploadsDir);
+/** Checked originals of product photos, kept for making other sizes later; never served (the uploads route reads the top level only). */
+export const originalPhotoStore = (config: Pick<Config, "uploadsDir">) => new FileStore(path.join(config.uploadsDir, "originals"));
 export const certificateStore = (config: Pick<Config, "uploadsDir">) => new FileStore(path.join(config.uploadsDir, "certificates"));

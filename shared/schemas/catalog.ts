@@ -87,7 +87,10 @@ export interface ProductDto {
   id: number;
   name: string;
   description: string;
+  /** The photo for product screens (640 px WebP). */
   photoUrl: string | null;
+  /** The photo for list tiles (160 px WebP); the same as photoUrl for photos stored before sizes were made. */
+  photoThumbUrl: string | null;
   saleUnit: string;
   /** "trays of 15 rolls" (shared/quantity.ts quantityText). */
   saleUnitPlural: string;

@@ -202,6 +202,7 @@ export function product(overrides: Partial<ProductDto> = {}): ProductDto {
     name: "Milk-bread dinner rolls",
     description: "Soft pull-apart rolls.",
     photoUrl: null,
+    photoThumbUrl: null,
     saleUnit: "tray of 15 rolls",
     saleUnitPlural: suggestPlural(overrides.saleUnit ?? "tray of 15 rolls"),
     piecesPerUnit: 15,

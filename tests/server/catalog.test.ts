@@ -248,22 +248,28 @@ describe("catalog", () => {
     it("accepts a PNG, stores it under a generated name, serves it with long cache headers", async () => {
       const res = await t.http().put(`/api/products/${id}/photo`).set(auth(owner)).attach("photo", tinyPng(), { filename: "rolls.txt", contentType: "text/plain" });
       expect(res.status).toBe(200);
-      expect(res.body.product.photoUrl).toMatch(/^\/api\/uploads\/[a-f0-9]{64}\.png$/); // SHA-256 of the stored bytes
+      // SHA-256 of the stored bytes; the sizes screens show are WebP, whatever was uploaded.
+      expect(res.body.product.photoUrl).toMatch(/^\/api\/uploads\/[a-f0-9]{64}\.webp$/);
+      expect(res.body.product.photoThumbUrl).toMatch(/^\/api\/uploads\/[a-f0-9]{64}\.webp$/);
       const img = await t.http().get(res.body.product.photoUrl);
       expect(img.status).toBe(200);
-      expect(img.headers["content-type"]).toBe("image/png");
+      expect(img.headers["content-type"]).toBe("image/webp");
       expect(img.headers["cache-control"]).toBe("public, max-age=31536000, immutable");
       expect(img.headers["x-content-type-options"]).toBe("nosniff");
     });
 
-    it("replacing a photo removes the old file", async () => {
-      const before = fs.readdirSync(t.ctx.config.uploadsDir);
+    it("replacing a photo removes the old files", async () => {
+      const files = (sub = "") => fs.readdirSync(path.join(t.ctx.config.uploadsDir, sub)).filter((f) => fs.statSync(path.join(t.ctx.config.uploadsDir, sub, f)).isFile());
+      const before = [...files(), ...files("originals")];
       const res = await t.http().put(`/api/products/${id}/photo`).set(auth(owner)).attach("photo", await tinyJpeg(), { filename: "rolls.png", contentType: "image/png" });
       expect(res.status).toBe(200);
-      expect(res.body.product.photoUrl).toMatch(/\.jpg$/);
-      const after = fs.readdirSync(t.ctx.config.uploadsDir);
-      expect(after).toHaveLength(1);
-      expect(before).not.toContain(after[0]);
+      expect(res.body.product.photoUrl).toMatch(/\.webp$/);
+      // Two public sizes (a tiny photo's two sizes may be the same bytes, hence one or two files) and the original.
+      const after = files();
+      expect(after.length).toBeGreaterThanOrEqual(1);
+      expect(after.length).toBeLessThanOrEqual(2);
+      expect(files("originals")).toEqual([expect.stringMatching(/^[a-f0-9]{64}\.jpg$/)]);
+      for (const f of [...after, ...files("originals")]) expect(before).not.toContain(f);
     });
 
     it("415 for anything that is not JPEG, PNG or WebP, whatever its name", async () => {

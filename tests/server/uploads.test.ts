@@ -121,17 +121,17 @@ describe("stored files are served from the default data directory (a dot-directo
     const up = await t.http().put(`/api/products/${productId}/photo`).set(auth(owner)).attach("photo", png(3), { filename: "rolls.png" });
     expect(up.status).toBe(200);
     const url: string = up.body.product.photoUrl;
-    expect(url).toMatch(/^\/api\/uploads\/[a-f0-9]{64}\.png$/);
+    expect(url).toMatch(/^\/api\/uploads\/[a-f0-9]{64}\.webp$/);
     expect(fs.existsSync(path.join(t.ctx.config.uploadsDir, path.basename(url)))).toBe(true);
     const img = await t.http().get(url).buffer(true);
     expect(img.status).toBe(200);
-    expect(img.headers["content-type"]).toBe("image/png");
+    expect(img.headers["content-type"]).toBe("image/webp");
     expect(img.headers["x-content-type-options"]).toBe("nosniff");
     // RFC 9111 §5.2.2.1 max-age, RFC 8246 immutable: the name is the content hash, it never changes meaning.
     expect(img.headers["cache-control"]).toBe("public, max-age=31536000, immutable");
     expect(img.headers["content-disposition"]).toBeUndefined();
     const meta = await sharp(img.body as Buffer).metadata();
-    expect(meta).toMatchObject({ format: "png", width: 3, height: 1 });
+    expect(meta).toMatchObject({ format: "webp", width: 3, height: 1 }); // never enlarged
     const again = await t.http().get(url).set("If-None-Match", img.headers.etag);
     expect(again.status).toBe(304); // RFC 9110 §13.1.2
   });
@@ -189,6 +189,58 @@ describe("stored files are served from the default data directory (a dot-directo
 });
 
 // ---- item 11: quotas, expiry range, polyglots ------------------------------------------------------------------
+
+describe("photo sizes (issue 12, item 1)", () => {
+  it("a 1600×1200 phone photo with a GPS position becomes a 640 px and a 160 px WebP without metadata; the original stays private", async () => {
+    // A camera-like JPEG: EXIF with a GPS block (EXIF 2.32 §4.6.6, GPS Info IFD), 4:3 like a phone's sensor.
+    const photo = await sharp({ create: { width: 1600, height: 1200, channels: 3, background: "#d9a566" } })
+      .jpeg({ quality: 90 })
+      .withExif({ IFD0: { Make: "Phone", Model: "Camera" }, IFD3: { GPSLatitudeRef: "N", GPSLatitude: "41/1 52/1 0/1", GPSLongitudeRef: "W", GPSLongitude: "87/1 37/1 0/1" } })
+      .toBuffer();
+    expect((await sharp(photo).metadata()).exif).toBeDefined(); // the test photo really carries metadata
+    const up = await t.http().put(`/api/products/${productId}/photo`).set(auth(owner)).attach("photo", photo, { filename: "IMG_0001.jpg" });
+    expect(up.status).toBe(200);
+    const { photoUrl, photoThumbUrl } = up.body.product as { photoUrl: string; photoThumbUrl: string };
+    expect(photoUrl).not.toBe(photoThumbUrl);
+    for (const [url, width, height] of [[photoUrl, 640, 480], [photoThumbUrl, 160, 120]] as const) {
+      const res = await t.http().get(url).buffer(true);
+      expect(res.status).toBe(200);
+      expect(res.headers["content-type"]).toBe("image/webp");
+      expect(res.headers["cache-control"]).toBe("public, max-age=31536000, immutable");
+      const meta = await sharp(res.body as Buffer).metadata();
+      expect(meta).toMatchObject({ format: "webp", width, height }); // the aspect ratio is kept
+      expect(meta.exif).toBeUndefined();
+      expect(meta.xmp).toBeUndefined();
+      expect(meta.icc).toBeUndefined();
+    }
+    // The buyer's catalog carries both sizes.
+    const list = await t.http().get("/api/products").set(auth(buyer));
+    expect(list.body.products.find((p: { id: number }) => p.id === productId)).toMatchObject({ photoUrl, photoThumbUrl });
+    // The original is kept (for other sizes later), re-encoded without metadata, and no URL reaches it.
+    const [row] = await t.ds.query("SELECT photoOriginalFile FROM product WHERE id = ?", [productId]);
+    expect(row.photoOriginalFile).toMatch(/^[a-f0-9]{64}\.jpg$/);
+    const original = fs.readFileSync(path.join(t.ctx.config.uploadsDir, "originals", row.photoOriginalFile));
+    const originalMeta = await sharp(original).metadata();
+    expect(originalMeta).toMatchObject({ format: "jpeg", width: 1600, height: 1200 });
+    expect(originalMeta.exif).toBeUndefined();
+    for (const url of [`/api/uploads/${row.photoOriginalFile}`, `/api/uploads/originals/${row.photoOriginalFile}`, `/api/uploads/originals%2F${row.photoOriginalFile}`]) {
+      expect((await t.http().get(url)).status).toBe(404);
+    }
+  });
+
+  it("replacing the photo removes the earlier sizes and original when no other product uses them", async () => {
+    const first = await t.http().put(`/api/products/${productId}/photo`).set(auth(owner)).attach("photo", await sharp({ create: { width: 300, height: 300, channels: 3, background: "#aa7744" } }).png().toBuffer(), { filename: "a.png" });
+    const [was] = await t.ds.query("SELECT photoFile, photoThumbFile, photoOriginalFile FROM product WHERE id = ?", [productId]);
+    const second = await t.http().put(`/api/products/${productId}/photo`).set(auth(owner)).attach("photo", await sharp({ create: { width: 300, height: 300, channels: 3, background: "#335577" } }).png().toBuffer(), { filename: "b.png" });
+    expect(first.status).toBe(200);
+    expect(second.status).toBe(200);
+    expect(second.body.product.photoUrl).not.toBe(first.body.product.photoUrl);
+    for (const f of [was.photoFile, was.photoThumbFile]) expect(fs.existsSync(path.join(t.ctx.config.uploadsDir, f))).toBe(false);
+    expect(fs.existsSync(path.join(t.ctx.config.uploadsDir, "originals", was.photoOriginalFile))).toBe(false);
+    expect((await t.http().get(first.body.product.photoUrl)).status).toBe(404);
+    expect((await t.http().get(second.body.product.photoThumbUrl)).status).toBe(200);
+  });
+});
 
 describe("certificate limits", () => {
   it("expiry dates run from today to five years ahead in the bakery's time zone; outside, a 400 names the range", async () => {
@@ -259,8 +311,12 @@ describe("polyglots are refused or re-encoded", () => {
     const body = served.body as Buffer;
     expect(body.includes("<script")).toBe(false);
     expect(body.includes("<html")).toBe(false);
-    expect(body.subarray(body.length - 12).equals(IEND)).toBe(true);
-    expect(await sharp(body).metadata()).toMatchObject({ format: "png", width: 4, height: 1 });
+    expect(await sharp(body).metadata()).toMatchObject({ format: "webp", width: 4, height: 1 });
+    // The private original is the re-encoded PNG: it ends at IEND.
+    const [row] = await t.ds.query("SELECT photoOriginalFile FROM product WHERE id = ?", [productId]);
+    const original = fs.readFileSync(path.join(t.ctx.config.uploadsDir, "originals", row.photoOriginalFile));
+    expect(original.includes("<script")).toBe(false);
+    expect(original.subarray(original.length - 12).equals(IEND)).toBe(true);
   });
 
   it("a JPEG photo loses its metadata and anything after EOI", async () => {
@@ -270,9 +326,13 @@ describe("polyglots are refused or re-encoded", () => {
     expect(up.status).toBe(200);
     const served = (await t.http().get(up.body.product.photoUrl).buffer(true)).body as Buffer;
     expect(served.includes("<script")).toBe(false);
-    expect(served.subarray(served.length - 2).equals(Buffer.from([0xff, 0xd9]))).toBe(true); // ends at EOI
     const meta = await sharp(served).metadata();
     expect(meta.exif).toBeUndefined();
+    const [row] = await t.ds.query("SELECT photoOriginalFile FROM product WHERE id = ?", [productId]);
+    const original = fs.readFileSync(path.join(t.ctx.config.uploadsDir, "originals", row.photoOriginalFile));
+    expect(original.includes("<script")).toBe(false);
+    expect(original.subarray(original.length - 2).equals(Buffer.from([0xff, 0xd9]))).toBe(true); // ends at EOI
+    expect((await sharp(original).metadata()).exif).toBeUndefined();
   });
 
   it("a PNG certificate with an HTML tail is stored without it", async () => {

@@ -9,7 +9,7 @@ const PRODUCT = {
   formulaId: 3, formulaName: "Brioche", boughtIn: false, bakeTempC: null, bakeMinutes: 35, coolMinutes: null, active: true,
   allergens: ["egg", "gluten", "milk", "sesame", "wheat"], addedAllergens: ["sesame"], allergenSources: {}, mayContain: "tree_nuts, shared fryer",
   components: [{ kind: "wash", name: "Egg wash", ingredientId: 5, ingredientName: "Whole egg", grams: 1.2, per: "piece", note: "" }],
-  bake: { bakeTempC: 190, bakeMinutes: 35, coolMinutes: 30 }, photoUrl: null,
+  bake: { bakeTempC: 190, bakeMinutes: 35, coolMinutes: 30 }, photoUrl: null, photoThumbUrl: null,
 } as unknown as ProductDto;
 
 describe("product form values", () => {

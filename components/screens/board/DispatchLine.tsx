@@ -37,7 +37,7 @@ export function DispatchLine({ lineKey: key, accountName, ordered, product: p, s
           small
           variant={s ? "accent" : "secondary"}
           accessibilityLabel={s ? `${name} for ${accountName} is marked short; press to deliver it in full` : `Mark ${name} for ${accountName} as short`}
-          accessibilityState={{ selected: !!s }}
+          aria-pressed={!!s}
           onPress={onToggle}
           testID={`dispatch-short-${key}`}
         />

@@ -36,7 +36,7 @@ export function PhotoCard({ product }: { product: ProductDto }) {
   return (
     <Card title="Photo" testID="photo-card">
       <View style={styles.photoRow}>
-        <ProductPhoto url={product.photoUrl} name={product.name} size={96} />
+        <ProductPhoto url={product.photoUrl} thumbUrl={product.photoThumbUrl} name={product.name} size={96} />
         <View style={styles.flex}>
           <AppText color="muted">JPEG, PNG or WebP, up to 5 MB. A square photo on a plain background looks best.</AppText>
         </View>

@@ -38,6 +38,7 @@ export function ProductAllergensSection({ form, declared }: { form: ProductFormS
             : "Anything else it contains, from the fixed list (US major food allergens and the EU's 14)."
         }
         options={addable.map((a) => ({ value: a.code, label: a.label }))}
+        optionName={(o) => `${o.label} (contains)`}
         value={values.allergens.filter((a) => !declared.derived.includes(a))}
         onChange={form.set("allergens")}
         error={errors.allergens}
@@ -46,6 +47,7 @@ export function ProductAllergensSection({ form, declared }: { form: ProductFormS
       <MultiChoice<AllergenCode>
         label="May contain (traces)"
         options={ALLERGENS.map((a) => ({ value: a.code, label: a.label }))}
+        optionName={(o) => `${o.label} (may contain)`}
         value={values.mayContain}
         onChange={form.set("mayContain")}
         error={errors.mayContain}

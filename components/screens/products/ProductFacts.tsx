@@ -14,7 +14,7 @@ export function ProductFacts({ product: p }: { product: ProductDto }) {
   const money = useMoney();
   return (
     <Card title="Details" testID="product-facts">
-      <ProductPhoto url={p.photoUrl} name={p.name} size={120} />
+      <ProductPhoto url={p.photoUrl} thumbUrl={p.photoThumbUrl} name={p.name} size={120} />
       <DetailList
         items={[
           { label: "Description", value: p.description },

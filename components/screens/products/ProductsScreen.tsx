@@ -97,7 +97,7 @@ function ProductList({ all, filter, isOwner }: { all: ProductDto[]; filter: Filt
           flex: 2.6,
           render: (p) => (
             <View style={styles.nameCell}>
-              <ProductPhoto url={p.photoUrl} name={p.name} size={40} />
+              <ProductPhoto url={p.photoUrl} thumbUrl={p.photoThumbUrl} name={p.name} size={40} />
               <View style={styles.flex}>
                 <TitleCell title={p.name} detail={p.saleUnit} oneLine />
               </View>
@@ -114,7 +114,7 @@ function ProductList({ all, filter, isOwner }: { all: ProductDto[]; filter: Filt
       compact
       card={(p) => (
         <>
-          <ProductPhoto url={p.photoUrl} name={p.name} size={52} />
+          <ProductPhoto url={p.photoUrl} thumbUrl={p.photoThumbUrl} name={p.name} size={52} />
           <ListCardText>
             <AppText variant="bodyStrong">{p.name}</AppText>
             <AppText variant="small" color="muted">{`${p.saleUnit} · ${money(p.listPriceCents)}`}</AppText>

@@ -24,7 +24,7 @@ export function ProductLine({ product: p, text, onChange, disabled, problem, lat
   return (
     <View style={[styles.product, lineTotal && styles.productOn, problem && styles.productBad]} testID={`product-${p.id}`}>
       <View style={styles.productTop}>
-        <ProductPhoto url={p.photoUrl} name={p.name} size={64} />
+        <ProductPhoto url={p.photoUrl} thumbUrl={p.photoThumbUrl} name={p.name} size={64} />
         <View style={styles.productText}>
           <AppText variant="bodyStrong">{p.name}</AppText>
           <AppText variant="small" color="muted">

@@ -37,7 +37,7 @@ export function ProductRow({ product: p, weekdays, cells, problems, cellErrors, 
   return (
     <View style={[styles.productCard, wide && styles.productCardWide, messages.length > 0 && styles.productBad]} testID={`standing-product-${p.id}`}>
       <View style={styles.productTop}>
-        <ProductPhoto url={p.photoUrl} name={p.name} size={44} />
+        <ProductPhoto url={p.photoUrl} thumbUrl={p.photoThumbUrl} name={p.name} size={44} />
         <View style={styles.flex}>
           <AppText variant="bodyStrong">{p.name}</AppText>
           <AppText variant="small" color="muted">{`${p.saleUnit} · ${money(p.priceCents)}`}</AppText>

@@ -22,7 +22,7 @@ export function UnitsSwitch({ system, onChange }: { system: UnitSystem; onChange
             <Pressable
               key={o.value}
               accessibilityRole="radio"
-              accessibilityState={{ checked: on }}
+              aria-checked={on}
               accessibilityLabel={o.a11y}
               onPress={() => onChange(o.value)}
               testID={`units-${o.value}`}
