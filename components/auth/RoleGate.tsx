@@ -1,4 +1,4 @@
-import React from "react";
+import React, { useEffect } from "react";
 import { Redirect } from "expo-router";
 import { View } from "react-native";
 import { useAuth } from "./useAuth";
@@ -6,6 +6,7 @@ import { homePathFor } from "./homePath";
 import { LoadingState } from "../ui/States";
 import { colors } from "../theme";
 import type { Role } from "../../shared/roles";
+import { roleRedirectMessage, setRedirectNotice } from "../shell/redirectNotice";
 
 export interface RoleGateProps {
   /** Roles that may see what is inside. */
@@ -14,7 +15,7 @@ export interface RoleGateProps {
 }
 
 /**
- * Signed out: go to sign-in. Signed in with another role: go to that role's own home.
+ * Signed out: go to sign-in. Signed in with another role: go to that role's own home, which says why.
  * Otherwise render the children.
  */
 export function RoleGate({ roles, children }: RoleGateProps) {
@@ -27,14 +28,24 @@ export function RoleGate({ roles, children }: RoleGateProps) {
     );
   }
   if (!user) return <Redirect href="/sign-in" />;
-  if (!roles.includes(user.role)) return <Redirect href={homePathFor(user.role)} />;
+  if (!roles.includes(user.role)) return <RoleRedirect roles={roles} role={user.role} />;
   return <>{children}</>;
+}
+
+/** Back to the person's own home, with a sentence there saying why (components/shell/redirectNotice.ts). */
+function RoleRedirect({ roles, role }: { roles: readonly Role[]; role: Role }) {
+  const home = homePathFor(role);
+  const message = roles.length > 0 ? roleRedirectMessage(roles, role) : null;
+  useEffect(() => {
+    if (message) setRedirectNotice(message, home);
+  }, [message, home]);
+  return <Redirect href={home} />;
 }
 
 /** Inside a group: a screen only some of the group's roles may use sends the rest to their home. */
 export function RequireRole({ roles, children }: RoleGateProps) {
   const { user } = useAuth();
   if (!user) return <Redirect href="/sign-in" />;
-  if (!roles.includes(user.role)) return <Redirect href={homePathFor(user.role)} />;
+  if (!roles.includes(user.role)) return <RoleRedirect roles={roles} role={user.role} />;
   return <>{children}</>;
 }

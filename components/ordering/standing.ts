@@ -8,6 +8,7 @@ import type { FieldErrors } from "../../shared/errors";
 import type { ProductDto } from "../../shared/schemas/catalog";
 import type { StandingOrderDto, StandingOrderInput } from "../../shared/schemas/orders";
 import { addDays, cleanDate, formatDay } from "./dates";
+import { expandRule, weeklyRule } from "../../shared/recurrence";
 import { parseQuantity, quantityProblem, type QuantityRule } from "./quantities";
 
 /** The grid's cells, as typed, by `cellKey(productId, weekday)`. */
@@ -113,11 +114,39 @@ export function scheduleSummary(days: readonly Weekday[], values: Pick<StandingV
   return `${values.intervalWeeks === 2 ? "Every other week" : "Every week"} on ${listWeekdays(days)}, from ${from}${until}.`;
 }
 
-/** A date typed to skip: the date, or why it can't be skipped. */
-export function skipDateCheck(text: string, today: string): { date: string } | { error: string } {
+/** "About $77.20 a week" / "About $77.20 every other week": what one period of the standing order comes to. */
+export const periodText = (intervalWeeks: 1 | 2) => (intervalWeeks === 2 ? "every other week" : "a week");
+
+/** The standing order's pattern as the form holds it: which dates it delivers on. */
+export interface StandingPattern {
+  startDate: string;
+  endDate: string;
+  intervalWeeks: 1 | 2;
+  weekdays: readonly Weekday[];
+}
+
+/**
+ * Whether the pattern delivers on a date: the same RFC 5545 rule the server stores (shared/recurrence.ts, the
+ * `rrule` library), so "every other week" counts weeks from the start date's week as the server does.
+ */
+export function deliversOn(p: StandingPattern, date: string): boolean {
+  const start = cleanDate(p.startDate);
+  if (!start || !p.weekdays.length) return false;
+  const end = cleanDate(p.endDate);
+  return expandRule(weeklyRule({ startDate: start, endDate: end, intervalWeeks: p.intervalWeeks, weekdays: [...p.weekdays] }), date, date).length > 0;
+}
+
+/** A date typed (or picked) to skip: the date, or why it can't be skipped. The example date is a coming one. */
+export function skipDateCheck(text: string, today: string, pattern?: StandingPattern): { date: string } | { error: string } {
   const d = cleanDate(text);
-  if (!d) return { error: "Write the date as YYYY-MM-DD, e.g. 2025-12-25." };
+  if (!d) return { error: `Write the date as YYYY-MM-DD, e.g. ${addDays(today, 7)}.` };
   if (d <= today) return { error: "Choose a date after today." };
+  if (pattern && pattern.weekdays.length && !deliversOn(pattern, d)) {
+    const end = cleanDate(pattern.endDate);
+    if (end && d > end) return { error: `${formatDay(d)} is after your standing order ends: nothing is made then.` };
+    if (cleanDate(pattern.startDate) && d < pattern.startDate) return { error: `${formatDay(d)} is before your standing order starts: nothing is made then.` };
+    return { error: `${formatDay(d)} is not one of your delivery dates (${pattern.intervalWeeks === 2 ? "every other week" : "every week"} on ${listWeekdays(pattern.weekdays)}): nothing is made then.` };
+  }
   return { date: d };
 }
 

@@ -12,6 +12,7 @@ import { AREA_LABEL, isActive, navFor, tabsFor, type NavItem } from "./navItems"
 import { useIsWide } from "./useIsWide";
 import { ROLE_LABELS, type HomeArea } from "../../shared/roles";
 import { guardLinkPress } from "./leaveGuard";
+import { clearRedirectNotice, useRedirectNotice } from "./redirectNotice";
 
 /** Web landmarks (<nav>, <main>); React Native's own role list has no such roles. */
 function landmark(role: "navigation" | "main"): object {
@@ -60,6 +61,7 @@ export function AppShell({ area, children }: { area: HomeArea; children: React.R
           </View>
         </View>
         <View style={styles.wideMain} {...landmark("main")}>
+          <RedirectNoticeBar pathname={pathname} />
           {children}
         </View>
       </View>
@@ -70,6 +72,7 @@ export function AppShell({ area, children }: { area: HomeArea; children: React.R
     <View style={styles.narrowRoot} testID="app-shell-narrow">
       <TopBar name={user.name} onSignOut={signOut} />
       <View style={styles.narrowMain} {...landmark("main")}>
+        <RedirectNoticeBar pathname={pathname} />
         {children}
       </View>
       <BottomTabs items={tabsFor(area, user.role).tabs} pathname={pathname} />
@@ -87,7 +90,7 @@ function SideItem({ item, active, short }: { item: NavItem; active: boolean; sho
         accessibilityRole="link"
         aria-current={active ? "page" : undefined}
         testID={`nav-${item.key}`}
-        style={[styles.sideItem, short && styles.sideItemShort]}
+        style={short ? StyleSheet.flatten([styles.sideItem, styles.sideItemShort]) : styles.sideItem}
         highlighted={active}
         highlightStyle={{ backgroundColor: colors.navActive }}
       >
@@ -98,6 +101,23 @@ function SideItem({ item, active, short }: { item: NavItem; active: boolean; sho
         </AppText>
       </LinkPressable>
     </Link>
+  );
+}
+
+/** Why the person was sent to this page (a role gate turned them away), until they dismiss it or move on. */
+function RedirectNoticeBar({ pathname }: { pathname: string }) {
+  const message = useRedirectNotice(pathname);
+  if (!message) return null;
+  return (
+    <View style={styles.redirectBar} accessibilityRole="alert" testID="redirect-notice">
+      <Feather name="info" size={18} color={colors.crustInk} />
+      <AppText variant="bodyStrong" color="crustInk" style={styles.redirectText}>
+        {message}
+      </AppText>
+      <Pressable accessibilityRole="button" accessibilityLabel="Dismiss this message" onPress={clearRedirectNotice} style={styles.redirectDismiss} testID="redirect-notice-dismiss">
+        <Feather name="x" size={18} color={colors.crustInk} />
+      </Pressable>
+    </View>
   );
 }
 
@@ -201,6 +221,9 @@ const styles = StyleSheet.create({
     alignSelf: "flex-start",
   },
   wideMain: { flex: 1 },
+  redirectBar: { flexDirection: "row", alignItems: "center", gap: space.sm, backgroundColor: colors.crustSoft, paddingHorizontal: space.lg, paddingVertical: space.sm },
+  redirectText: { flex: 1 },
+  redirectDismiss: { minWidth: layout.minTouch, minHeight: layout.minTouch, alignItems: "center", justifyContent: "center", borderRadius: radii.pill },
   narrowRoot: { flex: 1, backgroundColor: colors.page },
   narrowMain: { flex: 1 },
   topBar: {

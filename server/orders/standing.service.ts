@@ -13,7 +13,8 @@ import { createOrder, orderCutoff } from "./orders.service";
 import { addDays, dateStatus, daysBetween, localToday, weekdayOf, type Weekday } from "../../shared/calendar";
 import { expandRule, weeklyRule } from "../../shared/recurrence";
 import type { SessionUser } from "../../shared/schemas/auth";
-import { MAX_ORDER_CENTS, type StandingOrderDto, type StandingOrderInput } from "../../shared/schemas/orders";
+import { MAX_ORDER_CENTS, type StandingDatePlan, type StandingOrderDto, type StandingOrderInput } from "../../shared/schemas/orders";
+import { formatCalendarDate, localeOr } from "../../shared/format";
 import type { MaterialiseResult } from "../../shared/contracts/standing";
 import { quantityText, saleUnitFor } from "../../shared/quantity";
 
@@ -32,10 +33,13 @@ export async function getStandingOrder(ctx: AppContext, actor: SessionUser, acco
 
 async function dto(ctx: AppContext, so: StandingOrder, lines: StandingOrderLine[]): Promise<StandingOrderDto> {
   const settings = await loadCalendarSettings(ctx);
-  const today = localToday(ctx.clock.now(), settings.timeZone);
+  const now = ctx.clock.now();
+  const today = localToday(now, settings.timeZone);
   const skip = new Set<string>(JSON.parse(so.skipDates));
   const dates = lines.some((l) => l.quantity > 0) ? expandRule(so.rrule, today, addDays(today, settings.horizonDays)).filter((d) => !skip.has(d)) : [];
   const orders = dates.length ? await ctx.dataSource.getRepository(Order).findBy({ accountId: so.accountId, deliveryDate: In(dates) }) : [];
+  const account = await ctx.dataSource.getRepository(CustomerAccount).findOneByOrFail({ id: so.accountId });
+  const routeDays = parseWeekdays(account.routeWeekdays);
   const byDate = new Map(orders.map((o) => [o.deliveryDate, o]));
   return {
     accountId: so.accountId,
@@ -47,10 +51,60 @@ async function dto(ctx: AppContext, so: StandingOrder, lines: StandingOrderLine[
     active: so.active,
     rrule: so.rrule,
     upcoming: dates.map((date) => {
-      const o = byDate.get(date);
-      return { date, orderId: o?.id ?? null, editedByHand: o?.editedByHand ?? false, status: o?.status ?? null };
+      const o = byDate.get(date) ?? null;
+      const { plan, planText } = planFor(date, o, { so, account, settings, now, routeDays });
+      const skippable = plan === "ordered" ? o!.status === "open" || o!.status === "cancelled" : plan === "waiting" || plan === "held";
+      return { date, orderId: o?.id ?? null, editedByHand: o?.editedByHand ?? false, status: o?.status ?? null, plan, planText, skippable };
     }),
   };
+}
+
+/** What becomes of one date (shared/schemas/orders.ts StandingDatePlan), in the buyer's words. */
+function planFor(
+  date: string,
+  o: Order | null,
+  c: { so: StandingOrder; account: CustomerAccount; settings: Awaited<ReturnType<typeof loadCalendarSettings>>; now: Date; routeDays: Weekday[] | null },
+): { plan: StandingDatePlan; planText: string } {
+  if (o) return { plan: "ordered", planText: "Order made" };
+  const st = dateStatus(date, c.settings, c.now, c.routeDays);
+  if (st.reason === "closed") {
+    const note = c.settings.closureNotes.get(date);
+    return { plan: "closed", planText: note ? `Bakery closed: ${note}` : "Bakery closed" };
+  }
+  if (st.reason === "not_delivery_day") return { plan: "no_delivery", planText: "No delivery to you that day" };
+  if (st.reason === "past_cutoff") return { plan: "missed", planText: "Past the cut-off: not made" };
+  if (!c.so.active) return { plan: "paused", planText: "Paused: not made" };
+  if (c.account.status === "on_hold") {
+    return {
+      plan: "held",
+      planText: c.account.creditHold
+        ? "On hold: made only if the overdue invoices are paid before the cut-off"
+        : "On hold: made only if the bakery lifts the hold before the cut-off",
+    };
+  }
+  if (c.account.status !== "active") return { plan: "paused", planText: "Account closed: not made" };
+  return { plan: "waiting", planText: "Made soon by the bakery" };
+}
+
+/**
+ * Skip dates newly added must be dates the standing order would deliver on: a past date or a date it does not
+ * cover (another weekday, the off week of an every-other-week order, before its start or after its end) is
+ * refused with a message that says which and why. Dates skipped before stay as they were.
+ */
+function checkNewSkipDates(input: { skipDates: string[]; startDate: string; endDate: string | null; intervalWeeks: number }, rule: string, before: Set<string>, today: string, locale: string): Record<string, string> {
+  const fields: Record<string, string> = {};
+  input.skipDates.forEach((d, i) => {
+    if (before.has(d)) return;
+    const day = formatCalendarDate(d, "dayShort", locale);
+    if (d < today) fields[`skipDates.${i}`] = `${day} is in the past; choose a coming date to skip.`;
+    else if (expandRule(rule, d, d).length === 0) {
+      fields[`skipDates.${i}`] =
+        input.endDate && d > input.endDate ? `${day} is after your standing order ends; nothing is made then to skip.`
+        : d < input.startDate ? `${day} is before your standing order starts; nothing is made then to skip.`
+        : `${day} is not one of your standing order's delivery dates${input.intervalWeeks === 2 ? " (it delivers every other week)" : ""}; nothing is made then to skip.`;
+    }
+  });
+  return fields;
 }
 
 /**
@@ -86,7 +140,13 @@ export async function putStandingOrder(ctx: AppContext, actor: SessionUser, inpu
   if (Object.keys(fields).length) throw badRequest(Object.keys(fields).length === 1 ? Object.values(fields)[0] : "Some quantities need attention.", fields);
 
   const weekdays = [...new Set(input.lines.filter((l) => l.quantity > 0).map((l) => l.weekday as Weekday))];
-  const rule = weeklyRule({ startDate: ruleStart(input.startDate, input.intervalWeeks, localToday(ctx.clock.now(), settings.timeZone)), endDate: input.endDate, intervalWeeks: input.intervalWeeks, weekdays: weekdays.length ? weekdays : [weekdayOf(input.startDate)] });
+  const today = localToday(ctx.clock.now(), settings.timeZone);
+  const rule = weeklyRule({ startDate: ruleStart(input.startDate, input.intervalWeeks, today), endDate: input.endDate, intervalWeeks: input.intervalWeeks, weekdays: weekdays.length ? weekdays : [weekdayOf(input.startDate)] });
+  if (weekdays.length) {
+    const stored = await ctx.dataSource.getRepository(StandingOrder).findOneBy({ accountId: account.id });
+    const skipFields = checkNewSkipDates(input, rule, new Set(stored ? (JSON.parse(stored.skipDates) as string[]) : []), today, localeOr(settings.locale));
+    if (Object.keys(skipFields).length) throw badRequest(Object.values(skipFields)[0], skipFields);
+  }
   await ctx.dataSource.transaction(async (m) => {
     const repo = m.getRepository(StandingOrder);
     let so = await repo.findOneBy({ accountId: account.id });

@@ -132,5 +132,25 @@ export interface StandingOrderDto {
   /** The RFC 5545 recurrence rule it is stored as. */
   rrule: string;
   /** Upcoming dates it produces (within the horizon), with whether the buyer changed that order by hand. */
-  upcoming: { date: string; orderId: number | null; editedByHand: boolean; status: string | null }[];
+  upcoming: StandingUpcomingDate[];
+}
+
+/**
+ * What becomes of one date of a standing order: "ordered" (its order exists: see status), "waiting" (made when
+ * the bakery's next run reaches it), "closed" (the bakery is closed that day), "held" (not made while the account
+ * is on hold; made if the hold ends before the cut-off), "paused" (the standing order is paused), "no_delivery"
+ * (no delivery to this account that weekday), "missed" (past the cut-off with no order).
+ */
+export type StandingDatePlan = "ordered" | "waiting" | "closed" | "held" | "paused" | "no_delivery" | "missed";
+
+export interface StandingUpcomingDate {
+  date: string;
+  orderId: number | null;
+  editedByHand: boolean;
+  status: string | null;
+  plan: StandingDatePlan;
+  /** The plan in the buyer's words ("Bakery closed: Thanksgiving"). */
+  planText: string;
+  /** Whether skipping this date changes anything (false for closed, missed, delivered dates). */
+  skippable: boolean;
 }

@@ -15,7 +15,7 @@ describe("calendar settings", () => {
     expect(await screen.findByTestId("closure-2025-12-25")).toHaveTextContent(/Christmas/);
     fireEvent.changeText(screen.getByTestId("closure-date"), "Dec 26");
     fireEvent.press(screen.getByTestId("closure-add"));
-    expect(screen.getByTestId("closure-date-error")).toHaveTextContent("Write the date as YYYY-MM-DD, e.g. 2025-12-25.");
+    expect(screen.getByTestId("closure-date-error")).toHaveTextContent("Write the date as YYYY-MM-DD (year, month, day).");
     fireEvent.changeText(screen.getByTestId("closure-date"), "2025-12-25");
     expect(screen.queryByTestId("closure-date-error")).toBeNull();
     fireEvent.press(screen.getByTestId("closure-add"));

@@ -100,7 +100,7 @@ describe("price list form", () => {
 describe("closed dates", () => {
   it("takes a date once, with its note trimmed, and keeps the list in date order", () => {
     const list = [{ date: "2025-12-25", note: "Christmas" }];
-    expect(validate(closureSchema(list), { date: "25/12", note: "" })).toEqual({ ok: false, fields: { date: "Write the date as YYYY-MM-DD, e.g. 2025-12-25." } });
+    expect(validate(closureSchema(list), { date: "25/12", note: "" })).toEqual({ ok: false, fields: { date: "Write the date as YYYY-MM-DD (year, month, day)." } });
     expect(validate(closureSchema(list), { date: " 2025-12-25", note: "" })).toEqual({ ok: false, fields: { date: "That date is already on the list." } });
     expect(validate(closureSchema(list), { date: "2025-12-24", note: " Eve " })).toEqual({ ok: true, data: { date: "2025-12-24", note: "Eve" } });
     expect(withClosure(list, { date: "2025-12-24", note: "" }).map((c) => c.date)).toEqual(["2025-12-24", "2025-12-25"]);

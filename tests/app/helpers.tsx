@@ -294,8 +294,8 @@ export function standingDto(overrides: Partial<StandingOrderDto> = {}): Standing
     active: true,
     rrule: "DTSTART:20251201T000000Z\nRRULE:FREQ=WEEKLY;INTERVAL=1;BYDAY=TU;WKST=MO",
     upcoming: [
-      { date: "2025-12-09", orderId: 601, editedByHand: false, status: "open" },
-      { date: "2025-12-16", orderId: 602, editedByHand: true, status: "open" },
+      { date: "2025-12-09", orderId: 601, editedByHand: false, status: "open", plan: "ordered", planText: "Order made", skippable: true },
+      { date: "2025-12-16", orderId: 602, editedByHand: true, status: "open", plan: "ordered", planText: "Order made", skippable: true },
     ],
     ...overrides,
   };

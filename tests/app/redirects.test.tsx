@@ -38,6 +38,8 @@ describe("who goes where", () => {
     const app = renderApp("/office/people");
     expect(await screen.findByTestId("buyer-home-title")).toHaveTextContent(/Tidewater Café/);
     expect(app.getPathname()).toBe("/buyer");
+    // Issue 12, item 4: a redirect for a role says why.
+    expect(await screen.findByTestId("redirect-notice")).toHaveTextContent(/That page is for the bakery's staff\. You're signed in as a wholesale buyer, so you're on your own home page instead\./);
   });
 
   it("sends a baker who opens the buyer area to the bake day", async () => {
@@ -54,6 +56,9 @@ describe("who goes where", () => {
     const app = renderApp("/office/people");
     expect(await screen.findByTestId("office-home-title")).toBeOnTheScreen();
     expect(app.getPathname()).toBe("/office");
+    expect(await screen.findByTestId("redirect-notice")).toHaveTextContent(/That page is for the owner\. You're signed in as a bookkeeper, so you're on your own home page instead\./);
+    fireEvent.press(screen.getByTestId("redirect-notice-dismiss"));
+    await waitFor(() => expect(screen.queryByTestId("redirect-notice")).toBeNull());
     expect(screen.getByTestId("tab-accounts")).toBeOnTheScreen();
     expect(screen.queryByTestId("tab-people")).toBeNull();
     expect(screen.queryByTestId("office-people-card")).toBeNull();

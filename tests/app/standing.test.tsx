@@ -32,10 +32,16 @@ describe("standing order grid", () => {
     fireEvent.press(screen.getByTestId("standing-cell-102-3-inc")); // 0 → the minimum of 2
     fireEvent.press(screen.getByTestId("standing-interval-2"));
     fireEvent.changeText(screen.getByTestId("standing-end"), "2026-03-31");
+    // Every other week from the week of Mon 1 Dec 2025 (RFC 5545 INTERVAL=2, WKST=MO): Thu 25 Dec is in the off week.
     fireEvent.changeText(screen.getByTestId("standing-skip-date"), "2025-12-25");
     fireEvent.press(screen.getByTestId("standing-skip-add"));
-    expect(screen.getByTestId("standing-skip-2025-12-25")).toBeOnTheScreen();
+    expect(screen.getByTestId("standing-skip-date-error")).toHaveTextContent("Thu, Dec 25 is not one of your delivery dates (every other week on Tue, Wed and Thu): nothing is made then.");
+    fireEvent.changeText(screen.getByTestId("standing-skip-date"), "2025-12-18");
+    fireEvent.press(screen.getByTestId("standing-skip-add"));
+    expect(screen.getByTestId("standing-skip-2025-12-18")).toBeOnTheScreen();
     expect(screen.getByTestId("standing-summary")).toHaveTextContent(/Every other week on Tue, Wed and Thu/);
+    // The estimate is per delivery period: every other week, not "a week" (issue 12, item 5).
+    expect(screen.getByTestId("standing-week-total")).toHaveTextContent(/^About \$[\d.,]+ every other week at today's prices\.$/);
 
     fireEvent.press(screen.getByTestId("standing-save"));
     await waitFor(() => expect(api.callsTo("PUT", "/api/standing-orders")).toHaveLength(1));
@@ -43,7 +49,7 @@ describe("standing order grid", () => {
       startDate: "2025-12-01",
       endDate: "2026-03-31",
       intervalWeeks: 2,
-      skipDates: ["2025-12-25"],
+      skipDates: ["2025-12-18"],
       lines: [
         { productId: 101, weekday: 2, quantity: 2 },
         { productId: 101, weekday: 4, quantity: 2 },
@@ -84,11 +90,16 @@ describe("standing order grid", () => {
     renderApp("/buyer/standing");
     fireEvent.changeText(await screen.findByTestId("standing-skip-date"), "25/12/2025");
     fireEvent.press(screen.getByTestId("standing-skip-add"));
-    expect(screen.getByTestId("standing-skip-date-error")).toHaveTextContent("Write the date as YYYY-MM-DD, e.g. 2025-12-25.");
+    // The example is a week after the bakery's today (2 Dec 2025), never a date gone by.
+    expect(screen.getByTestId("standing-skip-date-error")).toHaveTextContent("Write the date as YYYY-MM-DD, e.g. 2025-12-09.");
     fireEvent.changeText(screen.getByTestId("standing-skip-date"), "2025-12-02");
     fireEvent.press(screen.getByTestId("standing-skip-add"));
     expect(screen.getByTestId("standing-skip-date-error")).toHaveTextContent("Choose a date after today.");
+    // A Wednesday: the standing order delivers on Tuesdays only.
     fireEvent.changeText(screen.getByTestId("standing-skip-date"), "2027-12-01");
+    fireEvent.press(screen.getByTestId("standing-skip-add"));
+    expect(screen.getByTestId("standing-skip-date-error")).toHaveTextContent("Wed, Dec 1 is not one of your delivery dates (every week on Tue): nothing is made then.");
+    fireEvent.changeText(screen.getByTestId("standing-skip-date"), "2027-11-30");
     expect(screen.queryByTestId("standing-skip-date-error")).toBeNull();
     fireEvent.press(screen.getByTestId("standing-skip-add"));
     fireEvent.press(screen.getByTestId("standing-save"));

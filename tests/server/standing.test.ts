@@ -118,3 +118,52 @@ describe("calendar feed (RFC 5545), parsed with ical.js", () => {
     expect((await t.http().get(url.pathname)).status).toBe(404);
   });
 });
+
+describe("skip dates and what becomes of each coming date (issue 12, items 3 and 5)", () => {
+  let fortnight: number;
+  let fb: string;
+  const put = (skipDates: string[]) =>
+    t.http().put("/api/standing-orders").set(auth(fb)).send({ startDate: "2026-12-08", endDate: null, intervalWeeks: 2, skipDates, lines: [{ productId: rolls.id, weekday: 2, quantity: 2 }, { productId: rolls.id, weekday: 4, quantity: 1 }] });
+
+  beforeAll(async () => {
+    fortnight = (await makeAccount(t.ds, { businessName: "Fortnight Café", routeWeekdays: "2,4" })).id;
+    fb = await tokenFor(t, await makeUser(t.ds, "buyer", { accountId: fortnight }));
+    await t.ds.query("INSERT INTO bakery_closure (date, note) VALUES ('2026-12-24', 'Christmas Eve')");
+  });
+
+  it("refuses a skip date the standing order does not deliver on: the off week, another weekday, a past date", async () => {
+    // Every other week from the week of Tue 8 Dec (RFC 5545 §3.3.10, INTERVAL=2 with WKST=MO): 8, 10, 22, 24 Dec; 15 and 17 Dec are the off week.
+    const off = await put(["2026-12-15"]);
+    expect(off.status).toBe(400);
+    expect(off.body.error.fields["skipDates.0"]).toBe("Tue, Dec 15 is not one of your standing order's delivery dates (it delivers every other week); nothing is made then to skip.");
+    const wed = await put(["2026-12-22", "2026-12-23"]);
+    expect(wed.status).toBe(400);
+    expect(Object.keys(wed.body.error.fields)).toEqual(["skipDates.1"]);
+    const past = await put(["2026-12-01"]);
+    expect(past.body.error.fields["skipDates.0"]).toBe("Tue, Dec 1 is in the past; choose a coming date to skip.");
+    const ok = await put(["2026-12-22"]);
+    expect(ok.status).toBe(200);
+    expect(ok.body.standingOrder.skipDates).toEqual(["2026-12-22"]);
+  });
+
+  it("a closed date is shown as closed with the bakery's note, and cannot be skipped; made dates can", async () => {
+    const res = await t.http().get("/api/standing-orders").set(auth(fb));
+    const byDate = Object.fromEntries((res.body.standingOrder.upcoming as { date: string }[]).map((u) => [u.date, u]));
+    expect(byDate["2026-12-24"]).toMatchObject({ plan: "closed", planText: "Bakery closed: Christmas Eve", skippable: false, orderId: null });
+    expect(byDate["2026-12-08"]).toMatchObject({ plan: "ordered", status: "open", skippable: true });
+    expect(byDate["2026-12-22"]).toBeUndefined(); // skipped
+    // The horizon is 28 days (to 4 Jan): 8, 10, 22 (skipped) and 24 Dec.
+    expect(Object.keys(byDate).sort()).toEqual(["2026-12-08", "2026-12-10", "2026-12-24"]);
+  });
+
+  it("on credit hold, dates without an order say they are made only if the overdue invoices are paid before the cut-off", async () => {
+    // The job's order for 10 Dec is gone (say the owner removed it): while on hold, nothing makes it again.
+    await t.ds.query("DELETE FROM order_line WHERE orderId IN (SELECT id FROM customer_order WHERE accountId = ? AND deliveryDate = '2026-12-10')", [fortnight]);
+    await t.ds.query("DELETE FROM customer_order WHERE accountId = ? AND deliveryDate = '2026-12-10'", [fortnight]);
+    await t.ds.query("UPDATE customer_account SET status = 'on_hold', creditHold = 1 WHERE id = ?", [fortnight]);
+    const res = await t.http().get("/api/standing-orders").set(auth(fb));
+    const dec10 = (res.body.standingOrder.upcoming as { date: string }[]).find((u) => u.date === "2026-12-10");
+    expect(dec10).toMatchObject({ plan: "held", planText: "On hold: made only if the overdue invoices are paid before the cut-off", skippable: true });
+    await t.ds.query("UPDATE customer_account SET status = 'active', creditHold = 0 WHERE id = ?", [fortnight]);
+  });
+});

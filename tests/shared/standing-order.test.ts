@@ -14,6 +14,7 @@ import {
   savedMessage,
   scheduleSummary,
   skipDateCheck,
+  deliversOn,
   standingValues,
   toggledSkip,
   weekTotalCents,
@@ -21,6 +22,7 @@ import {
   withSkipDatesField,
 } from "../../components/ordering/standing";
 import type { StandingOrderDto } from "../../shared/schemas/orders";
+import type { Weekday } from "../../shared/calendar";
 
 const ROLLS = { id: 101, priceCents: 1800, minQuantity: 1, maxQuantity: 40, saleUnit: "tray", saleUnitPlural: "trays" };
 const BUNS = { id: 102, priceCents: 1600, minQuantity: 2, maxQuantity: 5, saleUnit: "pack of 8 buns", saleUnitPlural: "packs of 8 buns" };
@@ -115,8 +117,23 @@ describe("the schedule in words", () => {
 describe("skipped dates", () => {
   it("takes a typed date after today", () => {
     expect(skipDateCheck(" 2025-12-25 ", "2025-12-02")).toEqual({ date: "2025-12-25" });
-    expect(skipDateCheck("25/12/2025", "2025-12-02")).toEqual({ error: "Write the date as YYYY-MM-DD, e.g. 2025-12-25." });
+    // The example is a week after today, never a date already gone (issue 12, item 5).
+    expect(skipDateCheck("25/12/2025", "2025-12-02")).toEqual({ error: "Write the date as YYYY-MM-DD, e.g. 2025-12-09." });
+    expect(skipDateCheck("25/12/2025", "2026-12-04")).toEqual({ error: "Write the date as YYYY-MM-DD, e.g. 2026-12-11." });
     expect(skipDateCheck("2025-12-02", "2025-12-02")).toEqual({ error: "Choose a date after today." });
+  });
+
+  it("takes only dates the standing order delivers on (RFC 5545 §3.3.10: INTERVAL=2 counts weeks from DTSTART's week, WKST=MO)", () => {
+    // Worked by hand on a printed December 2025 calendar: starting Tue 2 Dec, every other week on Tue and Thu
+    // delivers on 2, 4, 16, 18, 30 Dec; 9 and 11 Dec are the off week, Wed 3 Dec is another weekday.
+    const everyOther = { startDate: "2025-12-02", endDate: "2025-12-31", intervalWeeks: 2 as const, weekdays: [2, 4] as Weekday[] };
+    expect(["2025-12-02", "2025-12-04", "2025-12-09", "2025-12-11", "2025-12-16", "2025-12-18", "2025-12-30"].filter((d) => deliversOn(everyOther, d))).toEqual(["2025-12-02", "2025-12-04", "2025-12-16", "2025-12-18", "2025-12-30"]);
+    expect(skipDateCheck("2025-12-16", "2025-12-02", everyOther)).toEqual({ date: "2025-12-16" });
+    expect(skipDateCheck("2025-12-09", "2025-12-02", everyOther)).toEqual({ error: "Tue, Dec 9 is not one of your delivery dates (every other week on Tue and Thu): nothing is made then." });
+    expect(skipDateCheck("2025-12-03", "2025-12-02", { ...everyOther, intervalWeeks: 1 })).toEqual({ error: "Wed, Dec 3 is not one of your delivery dates (every week on Tue and Thu): nothing is made then." });
+    expect(skipDateCheck("2026-01-13", "2025-12-02", everyOther)).toEqual({ error: "Tue, Jan 13 is after your standing order ends: nothing is made then." });
+    // No quantities yet: any coming date may be noted.
+    expect(skipDateCheck("2025-12-03", "2025-12-02", { ...everyOther, weekdays: [] })).toEqual({ date: "2025-12-03" });
   });
 
   it("adds without repeats, in date order, and toggles", () => {

@@ -5,6 +5,7 @@ import { useRouter } from "expo-router";
 import { Screen } from "../../ui/Screen";
 import { PageHeader } from "../../ui/PageHeader";
 import { SEARCH_INPUT, TextField } from "../../ui/TextField";
+import { DateField } from "../../ui/DateField";
 import { ChoiceGroup } from "../../ui/ChoiceGroup";
 import { Button } from "../../ui/Button";
 import { FormError, Notice } from "../../ui/FormError";
@@ -126,10 +127,10 @@ export function InvoicesScreen({ mode, accountId: startAccount }: InvoicesScreen
       {showFilters ? (
         <View style={[billingStyles.filters, wide && billingStyles.filtersWide]}>
           <View style={styles.date}>
-            <TextField label="Issued from" placeholder="YYYY-MM-DD" value={fromText} onChangeText={setFromText} error={fromError ?? rangeError} testID="invoices-from" inputMode="numeric" maxLength={10} autoCorrect={false} />
+            <DateField label="Issued from" value={fromText} onChangeText={setFromText} error={fromError ?? rangeError} max={toText || undefined} testID="invoices-from" />
           </View>
           <View style={styles.date}>
-            <TextField label="Issued to" placeholder="YYYY-MM-DD" value={toText} onChangeText={setToText} error={toError} testID="invoices-to" inputMode="numeric" maxLength={10} autoCorrect={false} />
+            <DateField label="Issued to" value={toText} onChangeText={setToText} error={toError} min={fromText || undefined} testID="invoices-to" />
           </View>
           <ChoiceGroup<InvoiceSort> label="Sort by" choices={SORTS.filter((s) => office || s.value !== "account")} value={sort} onChange={setSort} testID="invoices-sort" />
           {office ? <AccountFilter value={accountId} onChange={setAccountId} /> : null}

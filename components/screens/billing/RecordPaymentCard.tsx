@@ -2,6 +2,7 @@ import React, { useEffect, useMemo, useRef, useState } from "react";
 import { StyleSheet, View } from "react-native";
 import { Card } from "../../ui/Card";
 import { TextField } from "../../ui/TextField";
+import { DateField } from "../../ui/DateField";
 import { ChoiceGroup } from "../../ui/ChoiceGroup";
 import { Button } from "../../ui/Button";
 import { FormActions } from "../../ui/FormActions";
@@ -77,7 +78,7 @@ export function RecordPaymentCard({ detail }: { detail: InvoiceDetailDto }) {
             choices={PAYMENT_METHODS.map((m) => ({ value: m, label: METHOD_LABELS[m] }))}
           />
           <TextField label="Reference" hint="The transfer reference or check number." {...form.text("reference")} testID="payment-reference" maxLength={120} autoCorrect={false} />
-          <TextField label="Received on" placeholder="YYYY-MM-DD" {...form.text("receivedOn")} testID="payment-received-on" inputMode="numeric" maxLength={10} />
+          <DateField label="Received on" {...form.text("receivedOn")} testID="payment-received-on" />
           <FormActions submitLabel="Save payment" busy={form.submitting} onSubmit={submit} submitTestID="payment-submit" onCancel={() => setOpen(false)} cancelTestID="payment-cancel" />
         </View>
       )}

@@ -3,7 +3,7 @@ import { z } from "zod";
 import { Platform, StyleSheet, View } from "react-native";
 import { Card } from "../../ui/Card";
 import { Button } from "../../ui/Button";
-import { TextField } from "../../ui/TextField";
+import { DateField } from "../../ui/DateField";
 import { Badge, type BadgeTone } from "../../ui/Badge";
 import { FormError, Notice } from "../../ui/FormError";
 import { ProgressBar } from "../../ui/ProgressBar";
@@ -187,7 +187,7 @@ function CertificateUpload({ accountId }: { accountId: number }) {
           ) : null}
         </View>
       </FieldFrame>
-      <TextField label="Expires on" placeholder="YYYY-MM-DD" {...form.text("expiresOn")} testID="cert-expires" inputMode="numeric" maxLength={10} />
+      <DateField label="Expires on" {...form.text("expiresOn")} testID="cert-expires" />
       {upload.isPending ? <ProgressBar value={upload.progress} label="Uploading the certificate" testID="cert-progress" /> : null}
       <Button label="Upload certificate" icon="upload" busy={form.submitting} onPress={submit} testID="cert-submit" />
     </View>

@@ -2,6 +2,7 @@ import React, { useMemo } from "react";
 import { StyleSheet, View } from "react-native";
 import { Card } from "../../ui/Card";
 import { TextField } from "../../ui/TextField";
+import { DateField } from "../../ui/DateField";
 import { Button } from "../../ui/Button";
 import { AppText } from "../../ui/Text";
 import { useZodForm } from "../../forms/useZodForm";
@@ -61,17 +62,15 @@ export function ClosuresCard({ closures, onChange, today, error }: ClosuresCardP
       {past > 0 ? <AppText variant="small" color="muted">{past === 1 ? "1 past closure is kept on file." : `${past} past closures are kept on file.`}</AppText> : null}
       <View style={styles.addRow}>
         <View style={styles.cell}>
-          <TextField
+          <DateField
             label="Date"
             value={form.values.date}
             onChangeText={(t) => {
               form.setValue("date", t);
               form.setErrors({});
             }}
-            placeholder="YYYY-MM-DD"
             error={form.errors.date ?? error}
-            inputMode="numeric"
-            autoCorrect={false}
+            onSubmitEditing={add}
             testID="closure-date"
           />
         </View>

@@ -10,7 +10,7 @@ export function closureSchema(closures: Closure[]) {
   return z.object({
     date: readText<string>((text) => {
       const d = cleanDate(text);
-      if (!d) return { message: "Write the date as YYYY-MM-DD, e.g. 2025-12-25." };
+      if (!d) return { message: "Write the date as YYYY-MM-DD (year, month, day)." };
       if (closures.some((c) => c.date === d)) return { message: "That date is already on the list." };
       return { value: d };
     }),

@@ -5,7 +5,7 @@ import { Badge } from "../../../ui/Badge";
 import { Stepper } from "../../../ui/Stepper";
 import { ProductPhoto } from "../../ordering/ProductPhoto";
 import { useMoney } from "../../../ordering/useMoney";
-import { cellKey, perWeek, type Cells } from "../../../ordering/standing";
+import { cellKey, perWeek, periodText, type Cells } from "../../../ordering/standing";
 import { WEEKDAY_LONG, WEEKDAY_SHORT, type Weekday } from "../../../../shared/calendar";
 import type { ProductDto } from "../../../../shared/schemas/catalog";
 import { colors, radii, space } from "../../../theme";
@@ -13,6 +13,8 @@ import { colors, radii, space } from "../../../theme";
 export interface ProductRowProps {
   product: ProductDto;
   weekdays: Weekday[];
+  /** Every week (1) or every other week (2): what the count badge says it is per. */
+  intervalWeeks: 1 | 2;
   cells: Cells;
   /** The product's limits broken, by cell key. */
   problems: Record<string, string>;
@@ -24,7 +26,7 @@ export interface ProductRowProps {
 }
 
 /** One product: its name and a compact row of steppers, one per delivery weekday. */
-export function ProductRow({ product: p, weekdays, cells, problems, cellErrors, onChange, disabled, wide }: ProductRowProps) {
+export function ProductRow({ product: p, weekdays, intervalWeeks, cells, problems, cellErrors, onChange, disabled, wide }: ProductRowProps) {
   const money = useMoney();
   const messages = weekdays
     .map((d) => {
@@ -42,7 +44,7 @@ export function ProductRow({ product: p, weekdays, cells, problems, cellErrors, 
           <AppText variant="bodyStrong">{p.name}</AppText>
           <AppText variant="small" color="muted">{`${p.saleUnit} · ${money(p.priceCents)}`}</AppText>
         </View>
-        {count > 0 ? <Badge label={`${count} a week`} tone="crust" /> : null}
+        {count > 0 ? <Badge label={`${count} ${periodText(intervalWeeks)}`} tone="crust" /> : null}
       </View>
       <View style={styles.days}>
         {weekdays.map((d) => {

@@ -6,7 +6,7 @@ import type { ZodForm } from "../../../forms/useZodForm";
 import { cleanDate, formatDay } from "../../../ordering/dates";
 import type { StandingValues } from "../../../ordering/standing";
 import { space } from "../../../theme";
-import { DateField } from "./DateField";
+import { DateField } from "../../../ui/DateField";
 
 /** How often: every week or every other week, from and until when, and on or paused. */
 export function ScheduleCard({ form }: { form: ZodForm<StandingValues, unknown> }) {
@@ -29,7 +29,7 @@ export function ScheduleCard({ form }: { form: ZodForm<StandingValues, unknown> 
           <DateField
             label="Starts on"
             {...form.text("startDate")}
-            hint={cleanDate(values.startDate) ? formatDay(values.startDate) : "Write the date as YYYY-MM-DD."}
+            hint={cleanDate(values.startDate) ? formatDay(values.startDate) : "The first date the standing order delivers from."}
             testID="standing-start"
           />
         </View>

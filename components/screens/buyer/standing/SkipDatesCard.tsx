@@ -4,13 +4,15 @@ import { Button } from "../../../ui/Button";
 import { Card } from "../../../ui/Card";
 import { AppText } from "../../../ui/Text";
 import { formatDay } from "../../../ordering/dates";
-import { skipDateCheck } from "../../../ordering/standing";
+import { skipDateCheck, type StandingPattern } from "../../../ordering/standing";
 import { layout, space } from "../../../theme";
-import { DateField } from "./DateField";
+import { DateField } from "../../../ui/DateField";
 
 export interface SkipDatesCardProps {
   skipDates: string[];
   today: string;
+  /** Which dates the standing order delivers on, as the form holds it now: only those can be skipped. */
+  pattern?: StandingPattern;
   /** The server's (or the schema's) message for the skipped dates. */
   error?: string;
   onAdd: (date: string) => void;
@@ -18,11 +20,11 @@ export interface SkipDatesCardProps {
 }
 
 /** The dates no order is made on, and a field to add one (checked as it is added). */
-export function SkipDatesCard({ skipDates, today, error, onAdd, onRemove }: SkipDatesCardProps) {
+export function SkipDatesCard({ skipDates, today, pattern, error, onAdd, onRemove }: SkipDatesCardProps) {
   const [typed, setTyped] = useState("");
   const [problem, setProblem] = useState<string | null>(null);
   const add = () => {
-    const checked = skipDateCheck(typed, today);
+    const checked = skipDateCheck(typed, today, pattern);
     if ("error" in checked) return setProblem(checked.error);
     setProblem(null);
     onAdd(checked.date);

@@ -18,6 +18,7 @@ import {
   cellProblems,
   chosenWeekdays,
   droppedLines,
+  periodText,
   savedMessage,
   scheduleSummary,
   standingPayload,
@@ -116,7 +117,7 @@ export function StandingForm({ standing, products, weekdays, today, horizonDays 
                 {scheduleSummary(chosenDays, values)}
               </AppText>
               {chosenDays.length ? (
-                <AppText variant="small" color="muted" testID="standing-week-total">{`About ${money(weekTotalCents(products, weekdays, values.cells))} a week at today's prices.`}</AppText>
+                <AppText variant="small" color="muted" testID="standing-week-total">{`About ${money(weekTotalCents(products, weekdays, values.cells))} ${periodText(values.intervalWeeks)} at today's prices.`}</AppText>
               ) : null}
             </View>
           </View>
@@ -133,7 +134,7 @@ export function StandingForm({ standing, products, weekdays, today, horizonDays 
           <Heading level={2}>Quantities per delivery day</Heading>
           <View style={[styles.cards, wide && styles.cardsWide]}>
             {products.map((p) => (
-              <ProductRow key={p.id} wide={wide} product={p} weekdays={weekdays} cells={values.cells} problems={problems} cellErrors={cellErrors} onChange={setCell} disabled={save.isPending} />
+              <ProductRow key={p.id} wide={wide} intervalWeeks={values.intervalWeeks} product={p} weekdays={weekdays} cells={values.cells} problems={problems} cellErrors={cellErrors} onChange={setCell} disabled={save.isPending} />
             ))}
           </View>
 
@@ -141,6 +142,7 @@ export function StandingForm({ standing, products, weekdays, today, horizonDays 
           <SkipDatesCard
             skipDates={values.skipDates}
             today={today}
+            pattern={{ startDate: values.startDate, endDate: values.endDate, intervalWeeks: values.intervalWeeks, weekdays: chosenDays }}
             error={form.errors.skipDates}
             onAdd={(d) => form.setValue("skipDates", withSkip(values.skipDates, d))}
             onRemove={toggleSkip}

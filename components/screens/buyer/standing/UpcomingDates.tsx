@@ -7,7 +7,7 @@ import { LinkPressable } from "../../../ui/LinkPressable";
 import { AppText } from "../../../ui/Text";
 import { OrderStatusBadge } from "../../ordering/OrderStatusBadge";
 import { formatDay } from "../../../ordering/dates";
-import type { StandingOrderDto } from "../../../../shared/schemas/orders";
+import type { StandingDatePlan, StandingOrderDto } from "../../../../shared/schemas/orders";
 import { colors, layout, radii, space } from "../../../theme";
 import { guardLinkPress } from "../../../shell/leaveGuard";
 
@@ -17,7 +17,17 @@ export interface UpcomingDatesProps {
   onToggleSkip: (date: string) => void;
 }
 
-/** The dates the standing order makes orders for, marking the ones changed by hand. */
+const PLAN_TONE: Record<StandingDatePlan, "neutral" | "amber" | "danger" | "sage"> = {
+  ordered: "sage",
+  waiting: "neutral",
+  closed: "neutral",
+  held: "amber",
+  paused: "neutral",
+  no_delivery: "neutral",
+  missed: "danger",
+};
+
+/** The dates the standing order makes orders for, marking the ones changed by hand, closed or on hold. */
 export function UpcomingDates({ standing, skipDates, onToggleSkip }: UpcomingDatesProps) {
   const edited = standing.upcoming.filter((u) => u.editedByHand).length;
   return (
@@ -42,13 +52,13 @@ export function UpcomingDates({ standing, skipDates, onToggleSkip }: UpcomingDat
                     <LinkPressable accessibilityRole="link" style={styles.upcomingLink} highlightStyle={styles.hover} accessibilityLabel={`Open the order for ${formatDay(u.date)}`}>
                       <AppText variant="bodyStrong">{formatDay(u.date)}</AppText>
                       <View style={styles.badges}>
-                        {u.status ? <OrderStatusBadge status={u.status} /> : <Badge label="Not made yet" tone="neutral" />}
+                        {u.status ? <OrderStatusBadge status={u.status} /> : <Badge label={u.planText} tone={PLAN_TONE[u.plan]} testID={`upcoming-${u.date}-plan`} />}
                         {u.editedByHand ? <Badge label="Changed by hand" tone="amber" testID={`upcoming-${u.date}-edited`} /> : null}
                         {skipping ? <Badge label="Skipped when you save" tone="danger" /> : null}
                       </View>
                     </LinkPressable>
                   </Link>
-                  {u.status === "locked" || u.status === "delivered" ? null : (
+                  {!u.skippable && !skipping ? null : (
                     <Pressable
                       accessibilityRole="button"
                       accessibilityLabel={skipping ? `Don't skip ${formatDay(u.date)}` : `Skip ${formatDay(u.date)}`}

@@ -1,7 +1,7 @@
 import React, { useState } from "react";
 import { StyleSheet, View } from "react-native";
 import { Button } from "../../../ui/Button";
-import { TextField } from "../../../ui/TextField";
+import { DateField } from "../../../ui/DateField";
 import { AppText } from "../../../ui/Text";
 import { useZodForm } from "../../../forms/useZodForm";
 import { checkedSchema } from "../../../forms/checkedSchema";
@@ -12,7 +12,7 @@ import { colors, fonts, radii, space } from "../../../theme";
 /** "Any date": a calendar date as typed, cleaned to YYYY-MM-DD. */
 const anyDate = checkedSchema(({ date }: { date: string }) => {
   const d = cleanDate(date);
-  return d ? { ok: true as const, input: d } : { ok: false as const, fields: { date: "Write the date as YYYY-MM-DD, e.g. 2026-12-24." } };
+  return d ? { ok: true as const, input: d } : { ok: false as const, fields: { date: "Write the date as YYYY-MM-DD (year, month, day)." } };
 });
 const BLANK = { date: "" };
 
@@ -71,7 +71,7 @@ export function DateBar({ extra, date, today, prev, next, nextBakeDay, upcoming,
           </View>
           <View style={styles.pickRow}>
             <View style={styles.flex}>
-              <TextField label="Any date" value={form.values.date} onChangeText={type} placeholder="YYYY-MM-DD" error={form.errors.date} inputMode="numeric" autoCorrect={false} onSubmitEditing={go} testID="day-pick-input" />
+              <DateField label="Any date" value={form.values.date} onChangeText={type} error={form.errors.date} onSubmitEditing={go} testID="day-pick-input" />
             </View>
             <Button label="Open" onPress={go} testID="day-pick-go" style={styles.pickGo} />
           </View>
