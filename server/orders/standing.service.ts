@@ -10,7 +10,7 @@ import { CustomerAccount } from "../accounts/account.entity";
 import { loadCalendarSettings, parseWeekdays, resolveAccount } from "../calendar/calendar.service";
 import { pricingFor } from "../catalog/catalog.service";
 import { createOrder, orderCutoff } from "./orders.service";
-import { addDays, dateStatus, daysBetween, localToday, weekdayOf, type Weekday } from "../../shared/calendar";
+import { addDays, cutoffFor, dateStatus, daysBetween, localToday, weekdayOf, type Weekday } from "../../shared/calendar";
 import { expandRule, weeklyRule } from "../../shared/recurrence";
 import type { SessionUser } from "../../shared/schemas/auth";
 import { MAX_ORDER_CENTS, type StandingDatePlan, type StandingOrderDto, type StandingOrderInput } from "../../shared/schemas/orders";
@@ -199,14 +199,20 @@ export async function materialiseAccount(ctx: AppContext, accountId: number) {
   const existing = await ctx.dataSource.getRepository(Order).createQueryBuilder("o").where("o.accountId = :a AND o.deliveryDate BETWEEN :f AND :t", { a: accountId, f: today, t: horizonEnd }).getMany();
   const byDate = new Map(existing.map((o) => [o.deliveryDate, o]));
   const routeDays = parseWeekdays(account.routeWeekdays);
+  const leadDays = new Map((await ctx.dataSource.getRepository(Product).findBy({ id: In(lines.map((l) => l.productId).concat([0])) })).map((p) => [p.id, p.leadDays]));
 
   for (const [date, dayLines] of wanted) {
     const st = dateStatus(date, settings, now, routeDays);
     if (!st.orderable) continue;
     const o = byDate.get(date);
     if (!o) {
+      // A product that needs more notice than is left (its own cut-off has passed) stays off this date's order;
+      // the rest of the delivery is still made, rather than the whole date failing on one product's lead time.
+      const inTime = dayLines.filter((l) => cutoffFor(date, settings, leadDays.get(l.productId) ?? 0).toMillis() > now.getTime());
+      if (inTime.length < dayLines.length) ctx.logger.info({ accountId, date, left: dayLines.length - inTime.length }, "standing order: products past their own cut-off left off");
+      if (!inTime.length) continue;
       try {
-        await createOrder(ctx, null, { deliveryDate: date, lines: dayLines }, { source: "standing", accountId, skipMail: true });
+        await createOrder(ctx, null, { deliveryDate: date, lines: inTime }, { source: "standing", accountId, skipMail: true });
         result.created++;
       } catch (err) {
         if (!(err instanceof HttpError)) throw err;

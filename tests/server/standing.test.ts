@@ -167,3 +167,22 @@ describe("skip dates and what becomes of each coming date (issue 12, items 3 and
     await t.ds.query("UPDATE customer_account SET status = 'active', creditHold = 0 WHERE id = ?", [fortnight]);
   });
 });
+
+describe("a product that needs more notice than is left", () => {
+  it("stays off the first date's order while the rest of the delivery is made", async () => {
+    // Now Mon 7 Dec 09:00 CST. Tue 8 Dec closes Mon 14:00 (one day's notice, still ahead); a product with two
+    // days' lead closed for Tue 8 Dec on Sun 6 Dec, so that date is made without it and Tue 15 Dec with it.
+    const late = await makeAccount(t.ds, { businessName: "Late Café", routeWeekdays: "2" });
+    const lateBuyer = await tokenFor(t, await makeUser(t.ds, "buyer", { accountId: late.id }));
+    const swirl = await makeProduct(t.ds, { name: "Swirl", priceCents: 1150, saleUnit: "loaf", leadDays: 2 });
+    const res = await t.http().put("/api/standing-orders").set(auth(lateBuyer)).send({
+      startDate: "2026-12-01", endDate: null, intervalWeeks: 1, skipDates: [],
+      lines: [{ productId: rolls.id, weekday: 2, quantity: 2 }, { productId: swirl.id, weekday: 2, quantity: 1 }],
+    });
+    expect(res.status).toBe(200);
+    const made = await t.ds.getRepository(Order).find({ where: { accountId: late.id }, order: { deliveryDate: "ASC" } });
+    expect(made.slice(0, 2).map((o) => [o.deliveryDate, o.totalCents])).toEqual([["2026-12-08", 2 * 1800], ["2026-12-15", 2 * 1800 + 1150]]);
+    // The job's next runs leave the first date as it is: the product's cut-off for it has passed.
+    expect((await materialiseAll(t.ctx)).updated).toBe(0);
+  });
+});
