@@ -1,5 +1,5 @@
 import React from "react";
-import { Pressable, ScrollView, StyleSheet, View, type ViewStyle } from "react-native";
+import { Platform, Pressable, ScrollView, StyleSheet, View, type ViewStyle } from "react-native";
 import { AppText } from "./Text";
 import { colors, layout, radii, space, type ColorName } from "../theme";
 
@@ -32,6 +32,8 @@ export interface DataTableProps<T> {
   footerTestID?: string;
   /** For tables with a column per product or day: the table is at least this wide and scrolls sideways on a narrower screen. */
   minWidth?: number;
+  /** What the sideways-scrolling region is called (with `minWidth`). */
+  scrollLabel?: string;
   testID?: string;
 }
 
@@ -123,13 +125,14 @@ export function TableHeaderRow({ columns }: { columns: readonly ColumnFrame[] })
 export function DataTable<T>({ minWidth, ...props }: DataTableProps<T>) {
   if (minWidth === undefined) return <Table {...props} />;
   return (
-    <ScrollView horizontal style={styles.scroll} contentContainerStyle={styles.scrollContent}>
+    // Focusable, so a keyboard can scroll it sideways (a region needs a name: the table's own, or this).
+    <ScrollView horizontal style={styles.scroll} contentContainerStyle={styles.scrollContent} tabIndex={0} role="region" aria-label={props.scrollLabel ?? "Table, scrolls sideways"}>
       <Table {...props} style={{ minWidth, flexGrow: 1 }} />
     </ScrollView>
   );
 }
 
-function Table<T>({ columns, rows, rowKey, onRowPress, rowLabel, rowTestID, rowAlert, footer, footerTestID, testID, style }: Omit<DataTableProps<T>, "minWidth"> & { style?: ViewStyle }) {
+function Table<T>({ scrollLabel: _scrollLabel, columns, rows, rowKey, onRowPress, rowLabel, rowTestID, rowAlert, footer, footerTestID, testID, style }: Omit<DataTableProps<T>, "minWidth"> & { style?: ViewStyle }) {
   return (
     <TableFrame testID={testID} style={style}>
       <TableHeaderRow columns={columns} />
@@ -146,7 +149,9 @@ function Table<T>({ columns, rows, rowKey, onRowPress, rowLabel, rowTestID, rowA
             <Pressable
               key={rowKey(row)}
               onPress={() => onRowPress(row)}
-              accessibilityRole="button"
+              // On the web a row of cells stays a table row (a button may not hold cells, ARIA 1.2), focusable and opened
+              // by Enter or a click; on iOS and Android, which have no tables, it is a button.
+              {...(Platform.OS === "web" ? { role: "row" as const, focusable: true } : { accessibilityRole: "button" as const })}
               accessibilityLabel={rowLabel?.(row)}
               testID={rowTestID?.(row)}
               style={({ pressed, hovered }: { pressed: boolean; hovered?: boolean }) => [

@@ -43,7 +43,7 @@ export function InlinePicker<T extends string | number>({ label, hideLabel, valu
     <FieldFrame label={label} hideLabel={hideLabel} error={error} testID={testID} labelForInput>
       <Pressable
         accessibilityRole="button"
-        accessibilityLabel={`${label}: ${chosen ? chosen.label : "none chosen"}`}
+        accessibilityLabel={`${label}: ${chosen ? chosen.label : `${placeholder} (none chosen)`}`}
         aria-expanded={open}
         aria-disabled={!!disabled}
         aria-invalid={!!error}

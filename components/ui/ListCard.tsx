@@ -6,6 +6,7 @@ import { AppText } from "./Text";
 import { LinkPressable } from "./LinkPressable";
 import { colors, layout, radii, space } from "../theme";
 import { guardLinkPress } from "../shell/leaveGuard";
+import { nameFromContent } from "./a11y";
 
 export interface ListCardsProps {
   testID?: string;
@@ -26,7 +27,7 @@ export interface ListCardProps {
   onPress?: () => void;
   /** Opens it as a link instead (web: a real link, so it opens in a new tab too). Leave both out for a card that does not open. */
   href?: Href;
-  /** What a screen reader says for the whole row. */
+  /** What a screen reader says for the whole row on iOS and Android; on the web the row is named by its text (components/ui/a11y.ts). */
   accessibilityLabel?: string;
   testID?: string;
   /** Tighter padding, for rows that lead with a photo. */
@@ -47,7 +48,7 @@ export function ListCard({ onPress, href, accessibilityLabel, testID, compact, a
   if (href) {
     return (
       <Link href={href} onPress={guardLinkPress} asChild>
-        <LinkPressable accessibilityRole="link" accessibilityLabel={accessibilityLabel} testID={testID} style={StyleSheet.flatten(look)} highlightStyle={styles.pressed}>
+        <LinkPressable accessibilityRole="link" {...nameFromContent(accessibilityLabel)} testID={testID} style={StyleSheet.flatten(look)} highlightStyle={styles.pressed}>
           {children}
           {chevron}
         </LinkPressable>
@@ -65,7 +66,7 @@ export function ListCard({ onPress, href, accessibilityLabel, testID, compact, a
     <Pressable
       onPress={onPress}
       accessibilityRole="button"
-      accessibilityLabel={accessibilityLabel}
+      {...nameFromContent(accessibilityLabel)}
       testID={testID}
       style={({ pressed }) => [...look, pressed && styles.pressed]}
     >

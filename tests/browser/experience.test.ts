@@ -18,7 +18,7 @@ describe("item 1: product photos", () => {
     await signIn(page, "owner@hollowbrook.test");
     await page.waitForURL((u) => u.pathname.startsWith("/office"));
     await page.goto(`${BASE_URL}/office/products`);
-    await page.getByRole("button", { name: /^Pullman milk loaf, on offer/ }).first().click();
+    await page.getByRole("row", { name: /^Pullman milk loaf, on offer/ }).first().click();
     await page.getByTestId("photo-card").waitFor();
     // A 2000 × 1500 photo, as a phone takes it (the server makes the sizes screens show).
     const photo = await sharp({ create: { width: 2000, height: 1500, channels: 3, background: "#c98d4a" } }).jpeg({ quality: 92 }).toBuffer();

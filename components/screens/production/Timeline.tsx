@@ -251,6 +251,7 @@ function ResourceLanes(props: TimelineProps) {
                 <View
                   key={b.key}
                   accessible
+                  role="img"
                   accessibilityLabel={`${lane.name}: ${b.label} from ${localTime(b.startsAt)} to ${localTime(b.endsAt)}`}
                   style={[styles.bar, { left: pct(start), width: `${Math.max(0.4, ((end - start) / (span.end - span.start)) * 100)}%`, backgroundColor: barColor(b.step) }, now && styles.barNow]}
                 />

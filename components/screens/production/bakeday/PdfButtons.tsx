@@ -19,8 +19,8 @@ export function PdfButtons({ date }: { date: string }) {
         The production sheet, then one weigh-out card per mix.
       </AppText>
       <View style={styles.pdfButtons}>
-        <Button label="Production sheet (PDF)" icon="printer" block busy={download.pending === "metric"} onPress={() => get("metric")} testID="pdf-metric" accessibilityLabel="Production sheet (PDF), grams and °C" />
-        <Button label="Production sheet, US units (PDF)" icon="printer" variant="secondary" block busy={download.pending === "us"} onPress={() => get("us")} testID="pdf-us" accessibilityLabel="Production sheet (PDF), pounds, ounces and °F" />
+        <Button label="Production sheet (PDF)" icon="printer" block busy={download.pending === "metric"} onPress={() => get("metric")} testID="pdf-metric" accessibilityLabel="Production sheet (PDF): grams and °C" />
+        <Button label="Production sheet, US units (PDF)" icon="printer" variant="secondary" block busy={download.pending === "us"} onPress={() => get("us")} testID="pdf-us" accessibilityLabel="Production sheet, US units (PDF): pounds, ounces and °F" />
       </View>
       <FormError message={download.error} testID="pdf-error" />
     </Card>

@@ -27,7 +27,7 @@ export function DaysStrip({ forecast, units }: { forecast: ForecastDto; units: U
     );
   }
   return (
-    <ScrollView horizontal showsHorizontalScrollIndicator={false} contentContainerStyle={styles.days} testID="forecast-days">
+    <ScrollView horizontal showsHorizontalScrollIndicator={false} contentContainerStyle={styles.days} testID="forecast-days" tabIndex={0} role="region" aria-label="Days ahead, scrolls sideways">
       {tiles}
     </ScrollView>
   );
