@@ -1,4 +1,4 @@
-import React from "react";
+import React, { useState } from "react";
 import { Platform, Pressable, ScrollView, StyleSheet, View, type ViewStyle } from "react-native";
 import { AppText } from "./Text";
 import { colors, layout, radii, space, type ColorName } from "../theme";
@@ -122,17 +122,36 @@ export function TableHeaderRow({ columns }: { columns: readonly ColumnFrame[] })
  * A table for wide screens: a header row, one line per item (rows can open the item, and a row that needs
  * attention is tinted red), and an optional totals row.
  */
-export function DataTable<T>({ minWidth, ...props }: DataTableProps<T>) {
+export function DataTable<T>({ minWidth, scrollLabel, ...props }: DataTableProps<T>) {
+  // The region's own width, once laid out: the table is exactly that wide when its columns fit, and wider
+  // (scrolling sideways, with a line saying so) when they do not. An explicit width, because a table sized by
+  // its content inside a sideways scroller grows past the region by its longest header words.
+  const [regionWidth, setRegionWidth] = useState(0);
   if (minWidth === undefined) return <Table {...props} />;
+  const scrolls = regionWidth > 0 && minWidth > regionWidth;
   return (
-    // Focusable, so a keyboard can scroll it sideways (a region needs a name: the table's own, or this).
-    <ScrollView horizontal style={styles.scroll} contentContainerStyle={styles.scrollContent} tabIndex={0} role="region" aria-label={props.scrollLabel ?? "Table, scrolls sideways"}>
-      <Table {...props} style={{ minWidth, flexGrow: 1 }} />
-    </ScrollView>
+    <View style={styles.scrollWrap}>
+      {scrolls ? (
+        <AppText variant="small" color="muted" testID={props.testID ? `${props.testID}-scroll-hint` : undefined}>
+          The table is wider than the window: scroll it sideways to see every column.
+        </AppText>
+      ) : null}
+      {/* Focusable, so a keyboard can scroll it sideways (a region needs a name: the table's own, or this). */}
+      <ScrollView
+        horizontal
+        style={styles.scroll}
+        onLayout={(e) => setRegionWidth(Math.floor(e.nativeEvent.layout.width))}
+        tabIndex={0}
+        role="region"
+        aria-label={scrollLabel ?? "Table, scrolls sideways"}
+      >
+        <Table {...props} style={{ width: Math.max(minWidth, regionWidth) }} />
+      </ScrollView>
+    </View>
   );
 }
 
-function Table<T>({ scrollLabel: _scrollLabel, columns, rows, rowKey, onRowPress, rowLabel, rowTestID, rowAlert, footer, footerTestID, testID, style }: Omit<DataTableProps<T>, "minWidth"> & { style?: ViewStyle }) {
+function Table<T>({ columns, rows, rowKey, onRowPress, rowLabel, rowTestID, rowAlert, footer, footerTestID, testID, style }: Omit<DataTableProps<T>, "minWidth"> & { style?: ViewStyle }) {
   return (
     <TableFrame testID={testID} style={style}>
       <TableHeaderRow columns={columns} />
@@ -185,8 +204,8 @@ function Table<T>({ scrollLabel: _scrollLabel, columns, rows, rowKey, onRowPress
 }
 
 const styles = StyleSheet.create({
+  scrollWrap: { gap: space.xs },
   scroll: { flexGrow: 0 },
-  scrollContent: { flexGrow: 1 },
   table: { backgroundColor: colors.surface, borderRadius: radii.lg, borderWidth: 1, borderColor: colors.border, overflow: "hidden" },
   row: { flexDirection: "row", alignItems: "center", minHeight: layout.minTouch + 12, paddingHorizontal: space.md },
   header: { backgroundColor: colors.sunken, minHeight: layout.minTouch },

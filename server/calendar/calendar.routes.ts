@@ -9,6 +9,7 @@ import { CustomerAccount } from "../accounts/account.entity";
 import { PriceList } from "../catalog/price-list.entity";
 import { badRequest } from "../http/errors";
 import * as calendar from "./calendar.service";
+import { materialiseAll } from "../orders/standing.service";
 import type { AccountDeliveryDto } from "../../shared/contracts/billing";
 
 export function calendarRoutes(ctx: AppContext): Router {
@@ -27,7 +28,10 @@ export function settingsRoutes(ctx: AppContext): Router {
   });
   r.put("/calendar", allow("owner"), async (req, res) => {
     const input = parse(calendarSettingsSchema, req.body);
-    res.json({ settings: await calendar.putSettings(ctx, input) });
+    const settings = await calendar.putSettings(ctx, input);
+    // New closed dates (or delivery days) take effect on standing orders now, not at the job's next run.
+    await materialiseAll(ctx);
+    res.json({ settings });
   });
   return r;
 }

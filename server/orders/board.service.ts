@@ -1,3 +1,4 @@
+import { MoreThan } from "typeorm";
 import { stringify } from "csv-stringify/sync";
 import { toDecimal } from "../../shared/money";
 import { ORDER_STATUS_LABELS, type OrderStatus } from "../../shared/schemas/orders";
@@ -5,7 +6,11 @@ import { saleUnitFor } from "../../shared/quantity";
 import type { AppContext } from "../http/context";
 import { Product } from "../catalog/product.entity";
 import { CustomerAccount } from "../accounts/account.entity";
-import type { BoardDto, BoardRowDto } from "../../shared/contracts/board";
+import type { BoardDto, BoardHeldDto, BoardRowDto } from "../../shared/contracts/board";
+import { StandingOrder } from "./standing-order.entity";
+import { StandingOrderLine } from "./standing-order-line.entity";
+import { expandRule } from "../../shared/recurrence";
+import { weekdayOf } from "../../shared/calendar";
 
 /** Accounts × products for one delivery date, summed in SQL. Cancelled orders are left out. */
 export async function board(ctx: AppContext, date: string): Promise<BoardDto> {
@@ -16,7 +21,8 @@ export async function board(ctx: AppContext, date: string): Promise<BoardDto> {
       GROUP BY o.id, l.productId ORDER BY o.accountId`, [date]);
   const productIds = [...new Set(cells.map((c) => c.productId))];
   const products = productIds.length ? await ctx.dataSource.getRepository(Product).createQueryBuilder("p").whereInIds(productIds).orderBy("p.sortOrder").addOrderBy("p.name").getMany() : [];
-  const accounts = new Map((await ctx.dataSource.getRepository(CustomerAccount).find()).map((a) => [a.id, a.businessName]));
+  const all = await ctx.dataSource.getRepository(CustomerAccount).find();
+  const accounts = new Map(all.map((a) => [a.id, a.businessName]));
   const rows = new Map<number, BoardRowDto>();
   const totals = new Map<number, number>();
   for (const c of cells) {
@@ -31,7 +37,20 @@ export async function board(ctx: AppContext, date: string): Promise<BoardDto> {
     products: products.map((p) => ({ id: p.id, name: p.name, saleUnit: p.saleUnit, saleUnitPlural: saleUnitFor(2, p), total: totals.get(p.id) ?? 0 })),
     rows: list,
     totalCents: list.reduce((s, r) => s + r.totalCents, 0),
+    held: await heldOn(ctx, date, all.filter((a) => a.status === "on_hold" && !list.some((r) => r.accountId === a.id))),
   };
+}
+
+/** Of the held accounts given, those whose standing order delivers on `date` (not skipped, with lines that weekday). */
+async function heldOn(ctx: AppContext, date: string, onHold: CustomerAccount[]): Promise<BoardHeldDto[]> {
+  const held: BoardHeldDto[] = [];
+  for (const a of onHold) {
+    const so = await ctx.dataSource.getRepository(StandingOrder).findOneBy({ accountId: a.id, active: true });
+    if (!so || (JSON.parse(so.skipDates) as string[]).includes(date) || !expandRule(so.rrule, date, date).includes(date)) continue;
+    const lines = await ctx.dataSource.getRepository(StandingOrderLine).countBy({ standingOrderId: so.id, weekday: weekdayOf(date), quantity: MoreThan(0) });
+    if (lines) held.push({ accountId: a.id, accountName: a.businessName, hold: a.creditHold ? "credit" : "paused" });
+  }
+  return held.sort((x, y) => x.accountName.localeCompare(y.accountName));
 }
 
 /** A money cell: a decimal string, kept as written even when negative (see boardCsv). */

@@ -65,12 +65,13 @@ function planFor(
   o: Order | null,
   c: { so: StandingOrder; account: CustomerAccount; settings: Awaited<ReturnType<typeof loadCalendarSettings>>; now: Date; routeDays: Weekday[] | null },
 ): { plan: StandingDatePlan; planText: string } {
-  if (o) return { plan: "ordered", planText: "Order made" };
   const st = dateStatus(date, c.settings, c.now, c.routeDays);
+  // A closed date says so even when an order was made before the bakery closed it (the job withdraws its own).
   if (st.reason === "closed") {
     const note = c.settings.closureNotes.get(date);
     return { plan: "closed", planText: note ? `Bakery closed: ${note}` : "Bakery closed" };
   }
+  if (o) return { plan: "ordered", planText: "Order made" };
   if (st.reason === "not_delivery_day") return { plan: "no_delivery", planText: "No delivery to you that day" };
   if (st.reason === "past_cutoff") return { plan: "missed", planText: "Past the cut-off: not made" };
   if (!c.so.active) return { plan: "paused", planText: "Paused: not made" };
@@ -193,7 +194,8 @@ export async function materialiseAccount(ctx: AppContext, accountId: number) {
     for (const date of expandRule(so.rrule, today, horizonEnd)) {
       const wd = weekdayOf(date);
       const dayLines = lines.filter((l) => l.weekday === wd && l.quantity > 0).map((l) => ({ productId: l.productId, quantity: l.quantity }));
-      if (!skip.has(date) && dayLines.length) wanted.set(date, dayLines);
+      // A date the bakery has closed is not wanted: the job's own untouched order on it is withdrawn below.
+      if (!skip.has(date) && dayLines.length && !settings.closures.includes(date)) wanted.set(date, dayLines);
     }
   }
   const existing = await ctx.dataSource.getRepository(Order).createQueryBuilder("o").where("o.accountId = :a AND o.deliveryDate BETWEEN :f AND :t", { a: accountId, f: today, t: horizonEnd }).getMany();

@@ -24,9 +24,19 @@ export interface BoardRowDto {
   totalCents: number;
 }
 
+/** An account on hold whose standing order would deliver on the date: no order is made for it while the hold lasts. */
+export interface BoardHeldDto {
+  accountId: number;
+  accountName: string;
+  /** "credit": held automatically for overdue invoices (paying lifts it); "paused": held by the bakery by hand. */
+  hold: "credit" | "paused";
+}
+
 export interface BoardDto {
   date: string;
   products: BoardProductDto[];
   rows: BoardRowDto[];
   totalCents: number;
+  /** Accounts left off the date because they are on hold (not on the board, so the office knows why). */
+  held: BoardHeldDto[];
 }

@@ -15,6 +15,7 @@ const BOARD: BoardDto = {
     { accountId: 11, accountName: "Tidewater Café", orderId: 901, status: "open", poNumber: null, quantities: { 101: 3 }, totalCents: 4860 },
   ],
   totalCents: 18460,
+  held: [],
 };
 
 const original = Dimensions.get("window");
@@ -61,6 +62,33 @@ describe("orders board", () => {
     fireEvent.press(screen.getByTestId("board-next"));
     await waitFor(() => expect(api.calls.some((c) => c.path === "/api/orders/board" && c.query.date === "2025-12-03")).toBe(true));
     expect(await screen.findByTestId("board-date")).toHaveTextContent("Wed, Dec 3");
+  });
+
+  it("goes to any date typed or picked in the date field (issue 12, item 7)", async () => {
+    signedInAs(OWNER);
+    const api = mockApi(routes(OWNER));
+    renderApp("/office/orders");
+    await screen.findByTestId("board-total-101");
+    fireEvent.changeText(screen.getByTestId("board-date-pick"), "2025-12-1");
+    expect(api.calls.some((c) => c.path === "/api/orders/board" && c.query.date?.startsWith("2025-12-1"))).toBe(false); // not a whole date yet
+    fireEvent.changeText(screen.getByTestId("board-date-pick"), "2025-12-19");
+    await waitFor(() => expect(api.calls.some((c) => c.path === "/api/orders/board" && c.query.date === "2025-12-19")).toBe(true));
+    expect(await screen.findByTestId("board-title")).toHaveTextContent("Friday, December 19");
+  });
+
+  it("says which accounts on hold are left off the date, and why (issue 12, item 7)", async () => {
+    signedInAs(OWNER);
+    mockApi({
+      ...sessionRoutes(OWNER),
+      "GET /api/orders/board": (req: { query: Record<string, string> }) => ({
+        body: { board: { ...BOARD, date: req.query.date, held: [{ accountId: 13, accountName: "North Pier Coffee", hold: "credit" }, { accountId: 14, accountName: "Quay Deli", hold: "paused" }] } },
+      }),
+    });
+    renderApp("/office/orders");
+    expect(await screen.findByTestId("board-held")).toBeOnTheScreen();
+    expect(await screen.findByText(
+      "North Pier Coffee is on credit hold (overdue invoices): its standing order is not made for this date unless they are paid before the cut-off. Quay Deli is paused by the bakery: its standing order is not made for this date until the account is started again.",
+    )).toBeOnTheScreen();
   });
 
   it("makes standing orders now (owner) and reports what it did", async () => {

@@ -93,7 +93,15 @@ describe("DataTable", () => {
     const wide = render(<DataTable<Row> testID="wide" rows={ROWS} rowKey={(r) => r.id} minWidth={900} columns={[{ key: "name", label: "Account", render: (r) => r.name }]} />);
     const scroll = wide.UNSAFE_getByType(ScrollView);
     expect(scroll.props.horizontal).toBe(true);
-    expect(screen.getByTestId("wide")).toHaveStyle({ minWidth: 900 });
+    expect(screen.getByTestId("wide")).toHaveStyle({ width: 900 });
+    expect(screen.queryByTestId("wide-scroll-hint")).toBeNull();
+    // Laid out in a 1200 px region the table takes the whole width; in a 600 px one it keeps 900 and says it scrolls.
+    fireEvent(scroll, "layout", { nativeEvent: { layout: { x: 0, y: 0, width: 1200, height: 300 } } });
+    expect(screen.getByTestId("wide")).toHaveStyle({ width: 1200 });
+    expect(screen.queryByTestId("wide-scroll-hint")).toBeNull();
+    fireEvent(scroll, "layout", { nativeEvent: { layout: { x: 0, y: 0, width: 600, height: 300 } } });
+    expect(screen.getByTestId("wide")).toHaveStyle({ width: 900 });
+    expect(screen.getByTestId("wide-scroll-hint")).toHaveTextContent("The table is wider than the window: scroll it sideways to see every column.");
   });
 });
 

@@ -15,6 +15,7 @@ const BOARD: BoardDto = {
     { accountId: 13, accountName: "North Pier Coffee", orderId: 903, status: "delivered", poNumber: null, quantities: { 101: 2 }, totalCents: 3600 },
   ],
   totalCents: 22060,
+  held: [],
 };
 
 describe("confirm dispatch", () => {

@@ -50,3 +50,152 @@ describe("item 1: product photos", () => {
     await buyer.context.close();
   });
 });
+
+/** A date `n` days after today (UTC), as YYYY-MM-DD. */
+const daysAhead = (n: number) => new Date(Date.now() + n * 86_400_000).toISOString().slice(0, 10);
+/** The first date on or after `from` that falls on `weekday` (0 Sunday … 6 Saturday). */
+function nextWeekday(from: string, weekday: number): string {
+  const d = new Date(`${from}T12:00:00Z`);
+  while (d.getUTCDay() !== weekday) d.setUTCDate(d.getUTCDate() + 1);
+  return d.toISOString().slice(0, 10);
+}
+
+describe("items 5 and 6: standing orders and dates", () => {
+  it("a closed date says so with no Skip; a skip date off the delivery days is refused; dates are picked, not typed", async () => {
+    const errors: string[] = [];
+    // The owner closes the bakery on a Tuesday about three weeks out (Tidewater's demo route: Tue, Thu and Sat),
+    // through the calendar screen's date field (the browser's own date input, HTML input type=date).
+    let closed = nextWeekday(daysAhead(17), 2);
+    if (["2026-12-25", "2027-01-01"].includes(closed)) closed = nextWeekday(daysAhead(24), 2);
+    const office = await newPage(DESKTOP);
+    office.page.on("pageerror", (e) => errors.push(String(e)));
+    await signIn(office.page, "owner@hollowbrook.test");
+    await office.page.waitForURL((u) => u.pathname.startsWith("/office"));
+    await office.page.goto(`${BASE_URL}/office/calendar`);
+    const closureDate = office.page.locator('input[data-testid="closure-date"]');
+    expect(await closureDate.getAttribute("type")).toBe("date");
+    await closureDate.fill(closed);
+    await office.page.locator('input[data-testid="closure-note"]').fill("Oven service");
+    await office.page.getByTestId("closure-add").click();
+    await office.page.getByTestId(`closure-${closed}`).waitFor();
+    await office.page.getByTestId("calendar-save").click();
+    await office.page.getByTestId("calendar-saved").waitFor();
+
+    try {
+      const buyer = await newPage(PHONE);
+      buyer.page.on("pageerror", (e) => errors.push(String(e)));
+      await signIn(buyer.page, "buyer@tidewater.test");
+      await buyer.page.getByTestId("buyer-home-title").waitFor();
+      await buyer.page.goto(`${BASE_URL}/buyer/standing`);
+      const row = buyer.page.getByTestId(`upcoming-${closed}`);
+      await row.waitFor();
+      await row.scrollIntoViewIfNeeded();
+      expect(await buyer.page.getByTestId(`upcoming-${closed}-plan`).innerText()).toBe("Bakery closed: Oven service");
+      expect(await buyer.page.getByTestId(`upcoming-${closed}-skip`).count()).toBe(0);
+      // A date the standing order makes still offers Skip (the Thursday after the closed Tuesday).
+      const thursday = nextWeekday(closed, 4);
+      if (await buyer.page.getByTestId(`upcoming-${thursday}`).count()) expect(await buyer.page.getByTestId(`upcoming-${thursday}-skip`).isVisible()).toBe(true);
+      await shot(buyer.page, "phone-standing-closed-date");
+
+      // A Wednesday is not a Tidewater delivery day: refused beside the field, nothing added.
+      const skipInput = buyer.page.locator('input[data-testid="standing-skip-date"]');
+      expect(await skipInput.getAttribute("type")).toBe("date");
+      const wednesday = nextWeekday(daysAhead(9), 3);
+      await skipInput.fill(wednesday);
+      await buyer.page.getByTestId("standing-skip-add").click();
+      const problem = buyer.page.getByTestId("standing-skip-date-error");
+      await problem.waitFor();
+      expect(await problem.innerText()).toMatch(/is not one of your delivery dates \(every week on Tue, Thu and Sat\): nothing is made then\./);
+      expect(await buyer.page.getByTestId(`standing-skip-${wednesday}`).count()).toBe(0);
+      await problem.scrollIntoViewIfNeeded();
+      await shot(buyer.page, "phone-standing-skip-refused");
+      await buyer.context.close();
+
+      // North Pier's standing order runs every other week: the estimate says so.
+      const pier = await newPage(PHONE);
+      pier.page.on("pageerror", (e) => errors.push(String(e)));
+      await signIn(pier.page, "buyer@northpier.test");
+      await pier.page.getByTestId("buyer-home-title").waitFor();
+      await pier.page.goto(`${BASE_URL}/buyer/standing`);
+      const total = pier.page.getByTestId("standing-week-total");
+      await total.waitFor();
+      expect(await total.innerText()).toMatch(/^About \$[\d,]+\.\d\d every other week at today's prices\.$/);
+      await pier.context.close();
+    } finally {
+      // Put the calendar back for the other journeys.
+      await office.page.getByTestId(`closure-${closed}-remove`).click();
+      await office.page.getByTestId("calendar-save").click();
+      await office.page.getByTestId("calendar-saved").waitFor();
+      await office.context.close();
+    }
+    expect(errors).toEqual([]);
+  });
+});
+
+describe("item 4: a page for another role says why it is not shown", () => {
+  it("the bookkeeper opens People, lands on Overview with the reason, and has the outbox", async () => {
+    const { context, page } = await newPage(DESKTOP);
+    await signIn(page, "books@hollowbrook.test");
+    await page.waitForURL((u) => u.pathname.startsWith("/office"));
+    await page.goto(`${BASE_URL}/office/people`);
+    await page.waitForURL((u) => u.pathname === "/office");
+    const notice = page.getByTestId("redirect-notice");
+    await notice.waitFor();
+    expect(await notice.innerText()).toContain("That page is for the owner. You're signed in as a bookkeeper, so you're on your own home page instead.");
+    await shot(page, "desktop-bookkeeper-redirect-notice");
+    // Moving on forgets it; the outbox (invoice e-mail) is the bookkeeper's too.
+    await page.getByTestId("nav-outbox").click();
+    await page.waitForURL((u) => u.pathname === "/office/outbox");
+    expect(await page.getByTestId("redirect-notice").count()).toBe(0);
+    await context.close();
+  });
+});
+
+describe("item 7: the orders board and the invoices table at 1280 px", () => {
+  it("the board's Total column is in view (or the table says it scrolls), a date can be picked, and invoice numbers stay on one line", async () => {
+    const { context, page } = await newPage(DESKTOP);
+    const errors: string[] = [];
+    page.on("pageerror", (e) => errors.push(String(e)));
+    await signIn(page, "owner@hollowbrook.test");
+    await page.waitForURL((u) => u.pathname.startsWith("/office"));
+    await page.goto(`${BASE_URL}/office/orders`);
+    await page.getByTestId("board-tomorrow").click();
+    const table = page.getByTestId("board-table");
+    await table.waitFor();
+    const fit = await table.evaluate((el) => {
+      const header = Array.from(el.querySelectorAll('[role="columnheader"]')).pop() as HTMLElement;
+      let region: HTMLElement | null = el.parentElement;
+      while (region && region.getAttribute("role") !== "region") region = region.parentElement;
+      const box = (region ?? el).getBoundingClientRect();
+      return { label: header.innerText, right: header.getBoundingClientRect().right, regionRight: box.right, viewport: window.innerWidth, scrolls: region ? region.scrollWidth > region.clientWidth : false };
+    });
+    await shot(page, "desktop-board-total");
+    expect(fit.label.toLowerCase()).toBe("total");
+    // With the demo's four products the whole Total column is inside the region at 1280 px, nothing to scroll;
+    // a table wider than its region says so above it.
+    expect(fit.right).toBeLessThanOrEqual(fit.regionRight + 1);
+    expect(fit.scrolls).toBe(false);
+    expect(await page.getByTestId("board-table-scroll-hint").count()).toBe(0);
+
+    // Any date from the board's own date field (the browser's date input).
+    const pick = page.locator('input[data-testid="board-date-pick"]');
+    expect(await pick.getAttribute("type")).toBe("date");
+    const target = daysAhead(10);
+    await pick.fill(target);
+    await page.waitForURL((u) => u.searchParams.get("date") === target);
+
+    await page.goto(`${BASE_URL}/office/invoices`);
+    await page.getByTestId("invoices-table").waitFor();
+    const wrapped = await page.getByTestId("invoices-table").evaluate((el) =>
+      Array.from(el.querySelectorAll('[data-testid^="invoice-row-"]')).map((row) => {
+        const text = row.querySelector('[role="cell"] div[dir]') as HTMLElement;
+        const line = parseFloat(getComputedStyle(text).lineHeight);
+        return { number: text.innerText, lines: Math.round(text.getBoundingClientRect().height / line) };
+      }).filter((r) => r.lines > 1),
+    );
+    expect(wrapped).toEqual([]);
+    await shot(page, "desktop-invoices-table");
+    await context.close();
+    expect(errors).toEqual([]);
+  });
+});

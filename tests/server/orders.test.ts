@@ -355,6 +355,7 @@ describe("orders board CSV", () => {
       products: [{ id: 1, name: "-Rolls", saleUnit: "tray", saleUnitPlural: "trays", total: 2 }],
       rows: [{ accountId: 1, accountName: "-2+3+cmd", orderId: 1, status: "open", poNumber: "\tPO", quantities: { 1: 2 }, totalCents: -150 }],
       totalCents: -150,
+      held: [],
     }, "USD");
     const rows: string[][] = parseCsv(csv);
     expect(rows[0][4]).toBe("'-Rolls (tray)");

@@ -186,3 +186,46 @@ describe("a product that needs more notice than is left", () => {
     expect((await materialiseAll(t.ctx)).updated).toBe(0);
   });
 });
+
+describe("the orders board and held accounts (issue 12, item 7)", () => {
+  it("names an account on hold whose standing order delivers that date, credit hold and pause told apart", async () => {
+    const held = await makeAccount(t.ds, { businessName: "Held Café", routeWeekdays: "2" });
+    const heldBuyer = await tokenFor(t, await makeUser(t.ds, "buyer", { accountId: held.id }));
+    const put = await t.http().put("/api/standing-orders").set(auth(heldBuyer)).send({ startDate: "2026-12-01", endDate: null, intervalWeeks: 1, skipDates: ["2026-12-22"], lines: [{ productId: rolls.id, weekday: 2, quantity: 2 }] });
+    expect(put.status).toBe(200);
+    // Held after its orders were made: the ones still to come are withdrawn by hand here (what the hold leaves is no order).
+    await t.ds.query("DELETE l FROM order_line l JOIN customer_order o ON o.id = l.orderId WHERE o.accountId = ?", [held.id]);
+    await t.ds.query("DELETE FROM customer_order WHERE accountId = ?", [held.id]);
+    await t.ds.query("UPDATE customer_account SET status = 'on_hold', creditHold = 1 WHERE id = ?", [held.id]);
+    const heldOn = async (date: string) => (await t.http().get(`/api/orders/board?date=${date}`).set(auth(owner))).body.board.held as { accountName: string; hold: string }[];
+    expect((await heldOn("2026-12-15")).filter((h) => h.accountName === "Held Café")).toEqual([{ accountId: held.id, accountName: "Held Café", hold: "credit" }]);
+    expect((await heldOn("2026-12-16")).filter((h) => h.accountName === "Held Café")).toEqual([]); // a Wednesday: not its day
+    expect((await heldOn("2026-12-22")).filter((h) => h.accountName === "Held Café")).toEqual([]); // skipped
+    await t.ds.query("UPDATE customer_account SET creditHold = 0 WHERE id = ?", [held.id]);
+    expect((await heldOn("2026-12-15")).filter((h) => h.accountName === "Held Café")).toEqual([{ accountId: held.id, accountName: "Held Café", hold: "paused" }]);
+    await t.ds.query("UPDATE customer_account SET status = 'closed' WHERE id = ?", [held.id]);
+  });
+});
+
+describe("a date the bakery closes after its standing orders were made (issue 12, item 5)", () => {
+  it("withdraws the job's own untouched order at once, keeps one changed by hand, and both dates say the bakery is closed", async () => {
+    const cafe = await makeAccount(t.ds, { businessName: "Closure Café", routeWeekdays: "2,4" });
+    const cafeBuyer = await tokenFor(t, await makeUser(t.ds, "buyer", { accountId: cafe.id }));
+    await t.http().put("/api/standing-orders").set(auth(cafeBuyer)).send({ startDate: "2026-12-01", endDate: null, intervalWeeks: 1, skipDates: [], lines: [{ productId: rolls.id, weekday: 2, quantity: 2 }, { productId: rolls.id, weekday: 4, quantity: 1 }] });
+    const byDate = async () => new Map((await t.ds.getRepository(Order).find({ where: { accountId: cafe.id } })).map((o) => [o.deliveryDate, o]));
+    const thu17 = (await byDate()).get("2026-12-17")!;
+    expect((await t.http().patch(`/api/orders/${thu17.id}`).set(auth(cafeBuyer)).send({ lines: [{ productId: rolls.id, quantity: 5 }] })).status).toBe(200);
+    const before = (await t.http().get("/api/settings/calendar").set(auth(owner))).body.settings;
+    const closures = [...before.closures, { date: "2026-12-15", note: "Oven service" }, { date: "2026-12-17", note: "Oven service" }];
+    const put = await t.http().put("/api/settings/calendar").set(auth(owner)).send({ ...before, closures });
+    expect(put.status).toBe(200);
+    const after = await byDate();
+    expect(after.get("2026-12-15")!.status).toBe("cancelled"); // the job's own: withdrawn with the closure
+    expect(after.get("2026-12-17")!.status).toBe("open"); // changed by hand: left for the bakery to sort out with the café
+    const upcoming = (await t.http().get("/api/standing-orders").set(auth(cafeBuyer))).body.standingOrder.upcoming as { date: string; plan: string; planText: string; skippable: boolean }[];
+    for (const d of ["2026-12-15", "2026-12-17"]) expect(upcoming.find((u) => u.date === d)).toMatchObject({ plan: "closed", planText: "Bakery closed: Oven service", skippable: false });
+    await t.http().put("/api/settings/calendar").set(auth(owner)).send(before);
+    expect((await byDate()).get("2026-12-15")!.status).toBe("open"); // reopened: the job makes it again
+    await t.ds.query("UPDATE customer_account SET status = 'closed' WHERE id = ?", [cafe.id]);
+  });
+});

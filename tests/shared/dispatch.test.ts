@@ -25,6 +25,7 @@ const BOARD: BoardDto = {
     { accountId: 13, accountName: "North Pier Coffee", orderId: 903, status: "delivered", poNumber: null, quantities: { 101: 2 }, totalCents: 3600 },
   ],
   totalCents: 22060,
+  held: [],
 };
 
 describe("short lines", () => {

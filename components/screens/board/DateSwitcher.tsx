@@ -5,9 +5,19 @@ import { Button } from "../../ui/Button";
 import { AppText } from "../../ui/Text";
 import { addDays, formatDay } from "../../ordering/dates";
 import { colors, layout, radii, space } from "../../theme";
+import { DateField } from "../../ui/DateField";
+import { cleanDate } from "../../ordering/dates";
 
-/** The board's date: a day back, a day on, and today or tomorrow at one press. */
+/** The board's date: a day back, a day on, today or tomorrow at one press, or any date from the picker. */
 export function DateSwitcher({ date, today, onChange }: { date: string; today?: string; onChange: (d: string) => void }) {
+  const [typed, setTyped] = React.useState(date);
+  React.useEffect(() => setTyped(date), [date]);
+  const pick = (text: string) => {
+    setTyped(text);
+    // The web's date input hands over a whole date or ""; typed text (native) goes once it is a whole date.
+    const d = cleanDate(text);
+    if (d && d !== date) onChange(d);
+  };
   return (
     <View style={styles.switcher} testID="board-date-switcher">
       <View style={styles.stepper}>
@@ -25,6 +35,9 @@ export function DateSwitcher({ date, today, onChange }: { date: string; today?: 
           <Button label="Tomorrow" small variant={date === addDays(today, 1) ? "accent" : "secondary"} onPress={() => onChange(addDays(today, 1))} testID="board-tomorrow" />
         </View>
       ) : null}
+      <View style={styles.picker}>
+        <DateField label="Go to a date" value={typed} onChangeText={pick} testID="board-date-pick" />
+      </View>
     </View>
   );
 }
@@ -53,4 +66,5 @@ const styles = StyleSheet.create({
   },
   iconPressed: { backgroundColor: colors.sunken },
   quick: { flexDirection: "row", gap: space.xs },
+  picker: { minWidth: 180, flexGrow: 1, maxWidth: 240 },
 });

@@ -8,6 +8,7 @@ import { BoardStates, useBoardDate } from "./BoardStates";
 import { BoardView } from "./BoardView";
 import { DateSwitcher } from "./DateSwitcher";
 import { OfficeActions } from "./OfficeActions";
+import { HeldAccountsNote } from "./HeldAccountsNote";
 
 export interface OrdersBoardProps {
   /** Office: money, CSV export (owner, bookkeeper) and the owner's "make standing orders now". Baker: quantities only. */
@@ -37,6 +38,7 @@ export function OrdersBoardScreen({ mode, date: asked }: OrdersBoardProps) {
       />
       {date ? <DateSwitcher date={date} today={today} onChange={go} /> : null}
       {office && date ? <OfficeActions date={date} isOwner={isOwner} /> : null}
+      <HeldAccountsNote held={loaded.board.data?.held} />
       <BoardStates loaded={loaded} testID="board" empty={{ icon: "clipboard", message: "Orders placed for this date show here as they come in." }}>
         {(b) => <BoardView board={b} showMoney={office} />}
       </BoardStates>

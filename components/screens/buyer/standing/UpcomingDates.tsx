@@ -52,7 +52,7 @@ export function UpcomingDates({ standing, skipDates, onToggleSkip }: UpcomingDat
                     <LinkPressable accessibilityRole="link" style={styles.upcomingLink} highlightStyle={styles.hover} accessibilityLabel={`Open the order for ${formatDay(u.date)}`}>
                       <AppText variant="bodyStrong">{formatDay(u.date)}</AppText>
                       <View style={styles.badges}>
-                        {u.status ? <OrderStatusBadge status={u.status} /> : <Badge label={u.planText} tone={PLAN_TONE[u.plan]} testID={`upcoming-${u.date}-plan`} />}
+                        {u.status && u.plan !== "closed" ? <OrderStatusBadge status={u.status} /> : <Badge label={u.planText} tone={PLAN_TONE[u.plan]} testID={`upcoming-${u.date}-plan`} />}
                         {u.editedByHand ? <Badge label="Changed by hand" tone="amber" testID={`upcoming-${u.date}-edited`} /> : null}
                         {skipping ? <Badge label="Skipped when you save" tone="danger" /> : null}
                       </View>
