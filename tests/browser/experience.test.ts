@@ -199,3 +199,21 @@ describe("item 7: the orders board and the invoices table at 1280 px", () => {
     expect(errors).toEqual([]);
   });
 });
+
+describe("contact: the bakery's phone and e-mail are links", () => {
+  it("the buyer's home at 390 px calls or writes to the bakery with one tap", async () => {
+    const { context, page } = await newPage(PHONE);
+    await signIn(page, "buyer@tidewater.test");
+    await page.getByTestId("buyer-home-title").waitFor();
+    const card = page.getByTestId("bakery-card");
+    await card.scrollIntoViewIfNeeded();
+    const tel = card.locator('a[href^="tel:"]');
+    const mail = card.locator('a[href^="mailto:"]');
+    await tel.waitFor();
+    expect(await tel.getAttribute("href")).toMatch(/^tel:\+?\d{3,}$/);
+    expect(await mail.getAttribute("href")).toMatch(/^mailto:[^@\s]+@[^@\s]+$/);
+    expect(await tel.isVisible()).toBe(true);
+    await shot(page, "phone-bakery-contact");
+    await context.close();
+  });
+});

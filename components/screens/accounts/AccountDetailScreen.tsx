@@ -22,6 +22,7 @@ import { AccountDeliveryCard } from "./AccountDeliveryCard";
 import { CalendarFeedCard } from "../common/CalendarFeedCard";
 import { AccountBillingCard } from "../billing/AccountBillingCard";
 import { TaxCertificatesCard } from "../billing/TaxCertificates";
+import { ContactLink } from "../../ui/ContactLink";
 
 /** One customer account. The owner can edit it, pause it, close it (after a confirm step) and reopen it. */
 export function AccountDetailScreen({ id }: { id: number }) {
@@ -65,8 +66,8 @@ function AccountBody({ account: a, isOwner, wide, timeZone }: { account: Account
               items={[
                 { label: "Delivery address", value: a.deliveryAddress },
                 { label: "Contact name", value: a.contactName },
-                { label: "Contact phone", value: a.contactPhone },
-                { label: "Billing e-mail", value: a.billingEmail, testID: "account-billing-email" },
+                { label: "Contact phone", value: <ContactLink kind="phone" value={a.contactPhone} testID="account-contact-phone" /> },
+                { label: "Billing e-mail", value: <ContactLink kind="email" value={a.billingEmail} testID="account-billing-email" /> },
                 { label: "Buyers", value: a.buyerCount === 1 ? "1 active buyer" : `${a.buyerCount} active buyers` },
                 { label: "Added", value: formatDateTime(a.createdAt, timeZone) },
                 { label: "Last changed", value: formatDateTime(a.updatedAt, timeZone) },

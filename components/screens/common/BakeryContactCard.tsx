@@ -3,6 +3,7 @@ import { Card } from "../../ui/Card";
 import { DetailList } from "../../ui/DetailList";
 import { QueryStates } from "../../ui/QueryStates";
 import { useBakeryQuery } from "../../api/bakery";
+import { ContactLink } from "../../ui/ContactLink";
 
 /** The bakery's own contact details, for anyone signed in. */
 export function BakeryContactCard({ title = "Your bakery" }: { title?: string }) {
@@ -14,8 +15,8 @@ export function BakeryContactCard({ title = "Your bakery" }: { title?: string })
           <DetailList
             items={[
               { label: "Bakery", value: b.name, testID: "bakery-name" },
-              { label: "Phone", value: b.phone, testID: "bakery-phone" },
-              { label: "E-mail", value: b.email, testID: "bakery-email" },
+              { label: "Phone", value: <ContactLink kind="phone" value={b.phone} testID="bakery-phone" /> },
+              { label: "E-mail", value: <ContactLink kind="email" value={b.email} testID="bakery-email" /> },
               { label: "Address", value: b.address },
             ]}
           />
