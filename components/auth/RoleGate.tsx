@@ -20,16 +20,19 @@ export interface RoleGateProps {
  */
 export function RoleGate({ roles, children }: RoleGateProps) {
   const { status, user } = useAuth();
-  if (status === "loading") {
-    return (
-      <View style={{ flex: 1, backgroundColor: colors.page, justifyContent: "center" }}>
-        <LoadingState label="Checking your sign-in…" />
-      </View>
-    );
-  }
+  if (status === "loading") return <CheckingSignIn />;
   if (!user) return <Redirect href="/sign-in" />;
   if (!roles.includes(user.role)) return <RoleRedirect roles={roles} role={user.role} />;
   return <>{children}</>;
+}
+
+/** While the stored session is being checked. */
+export function CheckingSignIn() {
+  return (
+    <View style={{ flex: 1, backgroundColor: colors.page, justifyContent: "center" }}>
+      <LoadingState label="Checking your sign-in…" />
+    </View>
+  );
 }
 
 /** Back to the person's own home, with a sentence there saying why (components/shell/redirectNotice.ts). */
