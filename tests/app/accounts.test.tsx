@@ -123,6 +123,21 @@ describe("account detail and form", () => {
     expect(api.callsTo("PATCH", "/api/accounts/11")[1].body).toEqual({ status: "active" });
   });
 
+  it("tells a credit hold (automatic) from a pause (by hand) (issue 12, item 3)", async () => {
+    let current = account({ status: "on_hold", creditHold: true });
+    mockApi({ ...sessionRoutes(OWNER), "GET /api/accounts/:id": () => ({ body: { account: current } }) });
+    renderApp("/office/accounts/11");
+    expect(await screen.findByTestId("account-status-help")).toHaveTextContent(/^Credit hold \(automatic\): invoices overdue longer than the billing settings allow put the account on hold/);
+    expect(screen.getByTestId("account-status")).toHaveTextContent("Credit hold");
+    expect(screen.getByTestId("activate-account")).toHaveTextContent(/Lift credit hold/);
+    screen.unmount();
+    current = account({ status: "on_hold", creditHold: false });
+    renderApp("/office/accounts/11");
+    expect(await screen.findByTestId("account-status-help")).toHaveTextContent(/^Paused \(by hand\): the bakery has paused this account's orders\./);
+    expect(screen.getByTestId("account-status")).toHaveTextContent("Paused");
+    expect(screen.getByTestId("activate-account")).toHaveTextContent(/Make active/);
+  });
+
   it("says so when the account does not exist", async () => {
     mockApi({ ...sessionRoutes(OWNER), "GET /api/accounts/:id": apiError(404, "not_found", "That account was not found.") });
     renderApp("/office/accounts/999");

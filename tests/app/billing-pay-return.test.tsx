@@ -1,5 +1,5 @@
 import { act, fireEvent, screen } from "expo-router/testing-library";
-import { BUYER, OWNER, mockApi, renderApp, sessionRoutes, signedInAs } from "./helpers";
+import { BUYER, OWNER, account, mockApi, renderApp, sessionRoutes, signedInAs } from "./helpers";
 import { PAID_DETAIL, invoiceDetail } from "./billing-fixtures";
 
 const OPEN = invoiceDetail();
@@ -30,6 +30,23 @@ describe("payment return page", () => {
     // Paid: no more polling.
     await tick(6000);
     expect(api.callsTo("GET", "/api/invoices/41")).toHaveLength(3);
+  });
+
+  it("after a late invoice is paid, says whether ordering is open again (issue 12, item 3)", async () => {
+    signedInAs(BUYER);
+    let held = true;
+    mockApi({
+      ...sessionRoutes(BUYER),
+      "GET /api/invoices/:id": { body: PAID_DETAIL },
+      "GET /api/accounts/:id": () => ({ body: { account: account(held ? { status: "on_hold", creditHold: true } : {}) } }),
+    });
+    renderApp("/pay/return?invoice=41&session_id=cs_test_1");
+    expect(await screen.findByTestId("pay-paid")).toBeOnTheScreen();
+    expect(await screen.findByTestId("pay-still-held")).toHaveTextContent(/^Your account is still on credit hold: other invoices are overdue\./);
+    screen.unmount();
+    held = false;
+    renderApp("/pay/return?invoice=41&session_id=cs_test_1");
+    expect(await screen.findByTestId("pay-ordering-open")).toHaveTextContent(/Ordering is open again: nothing is overdue on your account\./);
   });
 
   it("stops waiting after a minute with a calm message, and can check again", async () => {

@@ -217,3 +217,54 @@ describe("contact: the bakery's phone and e-mail are links", () => {
     await context.close();
   });
 });
+
+describe("item 3: credit hold", () => {
+  it("the held buyer sees what is overdue, ordering visibly off, and Pay now leads to paying it", async () => {
+    const { context, page } = await newPage(PHONE);
+    const errors: string[] = [];
+    page.on("pageerror", (e) => errors.push(String(e)));
+    await signIn(page, "buyer@northpier.test");
+    await page.getByTestId("buyer-home-title").waitFor();
+    // The demo's North Pier Coffee is on credit hold (its first statement long overdue, server/seed/billing.ts).
+    const text = page.getByTestId("credit-hold-text");
+    await text.waitFor();
+    expect(await text.innerText()).toMatch(/^\$[\d,]+\.\d\d is overdue on \d+ invoices?\. New orders and changes wait until it is paid; ordering opens again as soon as it is\.$/);
+    await shot(page, "phone-credit-hold-home");
+
+    // An open delivery date: the form is there to read, but nothing on it can be pressed.
+    const open = await page.evaluate(async (from) => {
+      const session = JSON.parse(localStorage.getItem("panwise.session.v1") ?? "{}") as { token?: string };
+      const to = new Date(Date.parse(from) + 20 * 86_400_000).toISOString().slice(0, 10);
+      const res = await fetch(`/api/calendar?from=${from}&to=${to}`, { headers: { Authorization: `Bearer ${session.token}` } });
+      return ((await res.json()) as { days: { date: string; orderable: boolean; order: unknown }[] }).days.find((d) => d.orderable && !d.order)?.date ?? null;
+    }, daysAhead(0));
+    expect(open).not.toBeNull();
+    await page.goto(`${BASE_URL}/buyer/order/${open}`);
+    const submit = page.getByTestId("order-submit");
+    await submit.waitFor();
+    expect(await submit.innerText()).toMatch(/Ordering on hold$/);
+    expect(await submit.isDisabled()).toBe(true);
+    expect(await page.getByTestId("order-blocked").first().innerText()).toBe("On credit hold: ordering opens again as soon as the overdue invoices are paid.");
+    expect(await page.locator('[data-testid$="-inc"]').first().isDisabled()).toBe(true);
+    expect(await page.getByTestId("order-minimum").count()).toBe(0);
+    await shot(page, "phone-credit-hold-order");
+
+    // Pay now: one overdue invoice opens its card payment at once; several open the overdue list.
+    const pay = page.getByTestId("credit-hold-pay").first();
+    // The button's text (after its icon's glyph).
+    const label = (await pay.innerText()).split("\n").map((t) => t.trim()).filter(Boolean).pop() ?? "";
+    await pay.click();
+    if (label.startsWith("Pay $")) {
+      await page.waitForURL((u) => u.pathname.startsWith("/pay/"));
+      await page.getByRole("heading", { level: 1, name: /^Invoice HB-\d{4}-\d{5} — Hollowbrook Bakehouse$/ }).waitFor();
+      expect(await page.getByText(label.replace(/^Pay /, "").replace(/ now$/, "")).count()).toBeGreaterThan(0);
+    } else {
+      expect(label).toBe("Pay the overdue invoices");
+      await page.waitForURL((u) => u.pathname === "/buyer/invoices");
+      expect(await page.getByRole("radio", { name: "Overdue" }).getAttribute("aria-checked")).toBe("true");
+    }
+    await shot(page, "phone-credit-hold-pay");
+    await context.close();
+    expect(errors).toEqual([]);
+  });
+});

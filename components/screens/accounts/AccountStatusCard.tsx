@@ -11,9 +11,13 @@ import { colors, radii, space } from "../../theme";
 
 const STATUS_HELP: Record<AccountStatus, string> = {
   active: "This account is open for orders.",
-  on_hold: "Paused: the account stays on file, but the bakery has paused its orders by hand.",
+  on_hold: "Paused (by hand): the bakery has paused this account's orders. It stays paused until someone makes it active again.",
   closed: "Closed: kept for the records only. Buyers can't be invited to it while it's closed.",
 };
+
+/** A hold the overdue invoices set: automatic (billing settings' days overdue), lifted by paying — a different state from a pause. */
+const CREDIT_HOLD_HELP =
+  "Credit hold (automatic): invoices overdue longer than the billing settings allow put the account on hold, and paying them lifts it at once. You can lift it now instead.";
 
 /** The owner pauses, closes (after a confirm step) or reopens an account. */
 export function AccountStatusCard({ account }: { account: AccountDto }) {
@@ -36,7 +40,9 @@ export function AccountStatusCard({ account }: { account: AccountDto }) {
 
   return (
     <Card title="Status" testID="account-status-card">
-      <AppText color="muted">{STATUS_HELP[account.status]}</AppText>
+      <AppText color="muted" testID="account-status-help">
+        {account.status === "on_hold" && account.creditHold ? CREDIT_HOLD_HELP : STATUS_HELP[account.status]}
+      </AppText>
       {done ? <Notice message={done} testID="account-status-done" /> : null}
       <FormError message={mutation.isError ? messageOf(mutation.error) : null} testID="account-status-error" />
       {confirmingClose ? (
@@ -59,7 +65,7 @@ export function AccountStatusCard({ account }: { account: AccountDto }) {
               {account.status === "active" ? (
                 <Button label="Pause account" icon="pause" variant="secondary" busy={mutation.isPending} onPress={() => setStatus("on_hold")} testID="hold-account" />
               ) : (
-                <Button label="Make active" icon="play" variant="accent" busy={mutation.isPending} onPress={() => setStatus("active")} testID="activate-account" />
+                <Button label={account.creditHold ? "Lift credit hold" : "Make active"} icon="play" variant="accent" busy={mutation.isPending} onPress={() => setStatus("active")} testID="activate-account" />
               )}
               <Button label="Close account" icon="x-circle" variant="ghost" onPress={() => { setDone(null); setConfirmingClose(true); }} testID="close-account" />
             </>

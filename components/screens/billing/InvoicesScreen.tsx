@@ -56,15 +56,17 @@ export interface InvoicesScreenProps {
   mode: "office" | "buyer";
   /** Start filtered to one account (from the account's page). */
   accountId?: number;
+  /** Start on one "Show" filter (?show=overdue from the credit-hold banner). */
+  show?: string;
 }
 
 /** The invoices list: filters, search and sort; a table with a totals row from 1024 px, cards on a phone. */
-export function InvoicesScreen({ mode, accountId: startAccount }: InvoicesScreenProps) {
+export function InvoicesScreen({ mode, accountId: startAccount, show: startShow }: InvoicesScreenProps) {
   const wide = useIsWide();
   const router = useRouter();
   const office = mode === "office";
   const [q, setQ] = useState("");
-  const [show, setShow] = useState<Show>("all");
+  const [show, setShow] = useState<Show>(() => ((office ? OFFICE_SHOW : BUYER_SHOW).some((o) => o.value === startShow) ? (startShow as Show) : "all"));
   const [accountId, setAccountId] = useState<number | null>(startAccount && startAccount > 0 ? startAccount : null);
   const [fromText, setFromText] = useState("");
   const [toText, setToText] = useState("");

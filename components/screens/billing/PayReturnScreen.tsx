@@ -16,6 +16,9 @@ import { homePathFor } from "../../auth/homePath";
 import { AppShell } from "../../shell/AppShell";
 import { ApiError } from "../../api/client";
 import { useInvoiceQuery, type InvoiceDetailDto } from "../../api/invoices";
+import { useQueryClient } from "@tanstack/react-query";
+import { accountKeys, useAccountQuery } from "../../api/accounts";
+import { useBakeryQuery } from "../../api/bakery";
 import { SignInScreen } from "../auth/SignInScreen";
 import { METHOD_LABELS, day, money } from "./parts";
 import { PayByCard } from "./PayByCard";
@@ -71,6 +74,36 @@ export function PayReturnScreen(props: PayReturnProps) {
   );
 }
 
+/**
+ * After a late invoice is paid: whether the account can order again (the payment lifts a credit hold once
+ * nothing else is overdue). The account is asked again once the payment has landed.
+ */
+function OrderingAgain({ accountId }: { accountId: number }) {
+  const qc = useQueryClient();
+  useEffect(() => void qc.invalidateQueries({ queryKey: accountKeys.detail(accountId) }), [qc, accountId]);
+  const account = useAccountQuery(accountId);
+  if (!account.data || account.isFetching) return null;
+  const a = account.data;
+  if (a.status === "active") {
+    return (
+      <View style={[styles.banner, styles.bannerPaid]} testID="pay-ordering-open">
+        <Feather name="shopping-bag" size={20} color={colors.sageInk} />
+        <AppText variant="bodyStrong" color="sageInk" style={styles.flex}>
+          Ordering is open again: nothing is overdue on your account.
+        </AppText>
+      </View>
+    );
+  }
+  if (a.status === "on_hold" && a.creditHold) {
+    return (
+      <AppText color="dangerInk" testID="pay-still-held">
+        Your account is still on credit hold: other invoices are overdue. Pay them under Invoices and ordering opens again.
+      </AppText>
+    );
+  }
+  return null;
+}
+
 function PayReturnBody({ invoiceId, cancelled, office }: PayReturnProps & { office: boolean }) {
   const valid = Number.isInteger(invoiceId) && invoiceId > 0;
   const [gaveUp, setGaveUp] = useState(false);
@@ -78,6 +111,7 @@ function PayReturnBody({ invoiceId, cancelled, office }: PayReturnProps & { offi
     refetchInterval: (d) => (!cancelled && !gaveUp && !isSettled(d) ? POLL_MS : false),
   });
   const settled = isSettled(detail.data);
+  const bakery = useBakeryQuery();
   useEffect(() => {
     if (cancelled || settled || gaveUp) return;
     const t = setTimeout(() => setGaveUp(true), GIVE_UP_MS);
@@ -116,6 +150,7 @@ function PayReturnBody({ invoiceId, cancelled, office }: PayReturnProps & { offi
             </Heading>
           </View>
           <AppText>{`Thank you. Invoice ${inv.number} is paid; a receipt is on its way to the billing e-mail.`}</AppText>
+          {!office && inv.dueDate < (bakery.data?.today ?? "") ? <OrderingAgain accountId={inv.accountId} /> : null}
           {receipt ? (
             <View testID="pay-receipt">
               <DetailList

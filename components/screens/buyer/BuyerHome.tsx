@@ -28,6 +28,7 @@ import type { AccountDto } from "../../../shared/schemas/accounts";
 import type { CalendarDayDto } from "../../../shared/schemas/calendar";
 import { productsLabel } from "../../ordering/quantities";
 import { colors, radii, space } from "../../theme";
+import { CreditHoldBanner, onCreditHold } from "./CreditHoldBanner";
 
 /** How many days ahead the home screen looks. */
 export const HOME_DAYS = 14;
@@ -84,7 +85,7 @@ function Home({ account: a }: { account: AccountDto }) {
   return (
     <>
       <PageHeader overline="Wholesale ordering" title={a.businessName} subtitle={subtitle} testID="buyer-home-title" />
-      {note ? <Notice tone="info" message={note} testID="buyer-status-note" /> : null}
+      {onCreditHold(a) ? <CreditHoldBanner account={a} /> : note ? <Notice tone="info" message={note} testID="buyer-status-note" /> : null}
       <View style={[styles.grid, wide && styles.gridWide]}>
         <View style={[styles.main, wide && styles.mainWide]}>
           <Deliveries />

@@ -19,6 +19,7 @@ import { formatCutoff, formatDayLong, relativeDay } from "../../ordering/dates";
 import type { OrderNotice } from "../../ordering/useOrderSubmit";
 import { combinedQuery } from "../ordering/combinedQuery";
 import { accountStatusNote } from "./BuyerHome";
+import { CreditHoldBanner, holdReason, onCreditHold } from "./CreditHoldBanner";
 import { OrderForm } from "./order/OrderForm";
 import { ReadOnlyOrder } from "./order/ReadOnlyOrder";
 import { isCalendarDate } from "../../../shared/calendar";
@@ -70,7 +71,11 @@ export function OrderScreen({ date }: { date: string }) {
       <BackHome />
       <PageHeader overline={rel ? `Delivery · ${rel}` : "Delivery"} title={formatDayLong(date)} testID="order-title" />
       {notice ? <Notice message={notice.text} tone={notice.tone} testID="order-notice" /> : null}
-      {account.data && accountStatusNote(account.data) ? <Notice tone="info" message={accountStatusNote(account.data) ?? ""} testID="order-account-note" /> : null}
+      {onCreditHold(account.data) ? (
+        <CreditHoldBanner account={account.data!} />
+      ) : account.data && accountStatusNote(account.data) ? (
+        <Notice tone="info" message={accountStatusNote(account.data) ?? ""} testID="order-account-note" />
+      ) : null}
     </>
   );
 
@@ -117,6 +122,7 @@ export function OrderScreen({ date }: { date: string }) {
       draftOwner={user.accountId ? { userId: user.id, accountId: user.accountId } : null}
       notice={notice}
       onNotice={setNotice}
+      hold={holdReason(account.data)}
       onExists={() => {
         setNotice({ text: "There's already an order for this date (placed on another device or by the bakery). It's shown below: make your changes there.", tone: "info" });
         void qc.invalidateQueries({ queryKey: calendarKeys.all });

@@ -35,6 +35,8 @@ export interface OrderFormProps {
   notice: OrderNotice | null;
   onNotice: (n: OrderNotice | null) => void;
   onExists: () => void;
+  /** Why the account cannot order now (credit hold, paused by the bakery): the form is shown but its controls are off. */
+  hold?: string | null;
 }
 
 /** What the form checks itself: the PO number and the note (the lines are checked by the draft, line by line). */
@@ -42,7 +44,7 @@ const detailsSchema = orderCreateSchema.pick({ poNumber: true, note: true });
 const DETAIL_FIELDS = ["poNumber", "note"] as const;
 
 /** Placing or changing one date's order: the products with their steppers, the details, the total and the button. */
-export function OrderForm({ date, day, products, existing, minimumCents, settings, timeZone, now, header, draftOwner, notice, onNotice, onExists }: OrderFormProps) {
+export function OrderForm({ date, day, products, existing, minimumCents, settings, timeZone, now, header, draftOwner, notice, onNotice, onExists, hold = null }: OrderFormProps) {
   const wide = useIsWide();
   const money = useMoney();
   const baseDeadline = existing ? existing.cutoffAt : day.cutoffAt;
@@ -73,9 +75,11 @@ export function OrderForm({ date, day, products, existing, minimumCents, setting
   useLeaveWarning(dirty && !order.placed);
 
   const locked = closedByClock || !!order.serverClosed;
+  // On hold the steppers, details and buttons are off as if the date were closed (the server would refuse them).
+  const frozen = locked || !!hold;
   const busy = order.saving || order.cancelling;
-  const blocked = blockedReason({ locked, chosen: summary.chosen.length, problems: summary.problems, existing: !!existing });
-  const canSubmit = !order.placed && !busy && canSend(summary, { locked, existing: !!existing, dirty });
+  const blocked = hold ?? blockedReason({ locked, chosen: summary.chosen.length, problems: summary.problems, existing: !!existing });
+  const canSubmit = !order.placed && !busy && canSend(summary, { locked: frozen, existing: !!existing, dirty });
   const submit = () => {
     if (canSubmit) void order.submit(sent);
   };
@@ -102,7 +106,8 @@ export function OrderForm({ date, day, products, existing, minimumCents, setting
     totalCents: summary.totalCents,
     minimumCents,
     shortfallCents: summary.shortfallCents,
-    locked,
+    locked: frozen,
+    held: !!hold && !locked,
     blocked,
     canSubmit,
     saving: order.saving,
@@ -131,7 +136,7 @@ export function OrderForm({ date, day, products, existing, minimumCents, setting
       quantities={quantities}
       onChange={setLine}
       lineErrors={order.lineErrors}
-      locked={locked}
+      locked={frozen}
       busy={busy}
       dayCutoff={Date.parse(day.cutoffAt)}
       timeZone={timeZone}
@@ -144,7 +149,7 @@ export function OrderForm({ date, day, products, existing, minimumCents, setting
       date={date}
       poNumber={detail("poNumber")}
       note={detail("note")}
-      locked={locked}
+      locked={frozen}
       cancellable={!!existing}
       cancelling={order.cancelling}
       onCancel={order.cancel}

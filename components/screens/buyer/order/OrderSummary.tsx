@@ -15,6 +15,8 @@ export interface OrderSummaryProps {
   minimumCents: number;
   shortfallCents: number;
   locked: boolean;
+  /** Locked because the account is on hold (not by the clock): the button says so and the minimum is not talked about. */
+  held?: boolean;
   /** Why the button is off (null: it isn't, or the minimum says why). */
   blocked: string | null;
   canSubmit: boolean;
@@ -29,7 +31,7 @@ export interface OrderSummaryProps {
 export function OrderSummary(p: OrderSummaryProps) {
   const { money, shortfallCents: short } = p;
   const minimumHint =
-    p.minimumCents > 0 ? (
+    p.minimumCents > 0 && !p.held ? (
       <AppText variant="small" color={short > 0 ? "dangerInk" : "muted"} testID="order-minimum" style={short > 0 ? styles.strong : undefined}>
         {short > 0
           ? `Add ${money(short)} more to reach the ${money(p.minimumCents)} minimum.`
@@ -52,8 +54,8 @@ export function OrderSummary(p: OrderSummaryProps) {
 
   const button = (
     <Button
-      label={p.locked ? "Ordering closed" : p.existing ? "Save changes" : "Place order"}
-      icon={p.locked ? "lock" : p.existing ? "check" : "shopping-bag"}
+      label={p.held ? "Ordering on hold" : p.locked ? "Ordering closed" : p.existing ? "Save changes" : "Place order"}
+      icon={p.held ? "pause-circle" : p.locked ? "lock" : p.existing ? "check" : "shopping-bag"}
       onPress={p.onSubmit}
       disabled={!p.canSubmit}
       busy={p.saving}
