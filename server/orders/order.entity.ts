@@ -39,6 +39,16 @@ export class Order {
   @Column({ type: "int", nullable: true })
   createdById: number | null;
 
+  /** Set when the owner took or changed the order past its cut-off: who, when and why (a phone order). */
+  @Column({ type: "int", nullable: true })
+  cutoffOverrideById: number | null;
+
+  @Column({ type: "datetime", precision: 3, nullable: true })
+  cutoffOverrideAt: Date | null;
+
+  @Column({ type: "varchar", length: 200, nullable: true })
+  cutoffOverrideReason: string | null;
+
   @VersionColumn({ type: "int", default: 1 })
   version: number;
 

@@ -4,7 +4,7 @@ import { badRequest, parse } from "../http/errors";
 import { allow, currentUser } from "../http/auth";
 import { accountIdQuerySchema, idParamSchema } from "../../shared/schemas/common";
 import { dateQuerySchema } from "../../shared/schemas/calendar";
-import { NOTHING_TO_CHANGE, orderCreateSchema, orderListQuerySchema, orderUpdateSchema, standingOrderSchema } from "../../shared/schemas/orders";
+import { NOTHING_TO_CHANGE, orderCancelQuerySchema, orderCreateSchema, orderListQuerySchema, orderUpdateSchema, standingOrderSchema } from "../../shared/schemas/orders";
 import { resolveAccount } from "../calendar/calendar.service";
 import { getBakery } from "../bakery/bakery.service";
 import * as orders from "./orders.service";
@@ -54,7 +54,8 @@ export function ordersRoutes(ctx: AppContext): Router {
   });
   r.delete("/:id", allow(...ORDERING), async (req, res) => {
     const { id } = parse(idParamSchema, req.params);
-    res.json({ order: await orders.cancelOrder(ctx, currentUser(req), id) });
+    const { overrideReason } = parse(orderCancelQuerySchema, req.query);
+    res.json({ order: await orders.cancelOrder(ctx, currentUser(req), id, overrideReason) });
   });
   return r;
 }

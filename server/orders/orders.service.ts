@@ -59,6 +59,7 @@ export async function orderDtos(ctx: AppContext, orders: Order[], m: EntityManag
       cutoffAt: orderCutoff(o.deliveryDate, settings, own.map((l) => products.get(l.productId)).filter((p): p is Product => !!p)).toISO()!,
       source: o.source,
       editedByHand: o.editedByHand,
+      cutoffOverride: o.cutoffOverrideAt ? { at: o.cutoffOverrideAt.toISOString(), reason: o.cutoffOverrideReason ?? "", byId: o.cutoffOverrideById } : null,
       createdAt: o.createdAt.toISOString(),
       updatedAt: o.updatedAt.toISOString(),
     };
@@ -107,7 +108,7 @@ function cutoffPassed(at: DateTime, tz: string, date: string, locale?: string): 
 }
 
 /** Products, quantities and cut-offs for a set of lines; field errors keyed "lines.i.field". */
-async function checkLines(ctx: AppContext, m: EntityManager, lines: LineInput[], date: string, settings: Settings, existingProducts: Product[] = []) {
+async function checkLines(ctx: AppContext, m: EntityManager, lines: LineInput[], date: string, settings: Settings, existingProducts: Product[] = [], override: Override | null = null) {
   const products = new Map((await m.getRepository(Product).findBy({ id: In(lines.map((l) => l.productId).concat([0])) })).map((p) => [p.id, p]));
   const fields: FieldErrors = {};
   lines.forEach((l, i) => {
@@ -121,8 +122,28 @@ async function checkLines(ctx: AppContext, m: EntityManager, lines: LineInput[],
   const now = ctx.clock.now().getTime();
   const all = [...existingProducts, ...lines.map((l) => products.get(l.productId)!)];
   const cutoff = orderCutoff(date, settings, all);
-  if (now >= cutoff.toMillis()) throw cutoffPassed(cutoff, settings.timeZone, date, settings.locale);
+  if (now >= cutoff.toMillis() && !override) throw cutoffPassed(cutoff, settings.timeZone, date, settings.locale);
   return products;
+}
+
+// ---- the owner's cut-off override (phone orders) ----------------------------------------------
+
+/** An owner's confirmed "take it anyway" for a date past its cut-off. */
+export interface Override {
+  byId: number;
+  reason: string;
+}
+
+/** Only the owner may set the cut-off aside; anyone else asking is refused, even before the cut-off. */
+export function authoriseOverride(actor: SessionUser | null, input: { reason: string } | undefined): Override | null {
+  if (!input) return null;
+  if (!actor || actor.role !== "owner") throw new HttpError(403, "override_owner_only", "Only the owner can take or change an order past its cut-off.");
+  return { byId: actor.id, reason: input.reason };
+}
+
+/** What an order records when an override was used (the cut-off had passed); nothing when it was not needed. */
+function overrideColumns(override: Override | null, cutoffPassedNow: boolean, now: Date): Partial<Order> {
+  return override && cutoffPassedNow ? { cutoffOverrideById: override.byId, cutoffOverrideAt: now, cutoffOverrideReason: override.reason } : {};
 }
 
 async function priceLines(ctx: AppContext, m: EntityManager, accountId: number, lines: LineInput[], products: Map<number, Product>, currency: string, locale?: string) {
@@ -162,18 +183,22 @@ function refuseBelowMinimum(account: CustomerAccount, total: number, currency: s
 export interface CreateInput { deliveryDate: string; lines: LineInput[]; poNumber?: string; note?: string; accountId?: number }
 
 /** Place an order. Used by the API and by the standing-order job (source "standing"). */
-export async function createOrder(ctx: AppContext, actor: SessionUser | null, input: CreateInput, opts: { source?: "one_off" | "standing"; manager?: EntityManager; accountId?: number; skipMail?: boolean; inTransaction?: (m: EntityManager, order: OrderDto) => Promise<void> } = {}): Promise<OrderDto> {
+export async function createOrder(ctx: AppContext, actor: SessionUser | null, input: CreateInput & { cutoffOverride?: { reason: string } }, opts: { source?: "one_off" | "standing"; manager?: EntityManager; accountId?: number; skipMail?: boolean; inTransaction?: (m: EntityManager, order: OrderDto) => Promise<void> } = {}): Promise<OrderDto> {
   const bakery = await getBakery(ctx);
   const settings = await loadCalendarSettings(ctx);
+  const override = authoriseOverride(actor, input.cutoffOverride);
   const run = async (m: EntityManager) => {
     const account = actor ? await resolveAccount(ctx, actor, input.accountId, m) : await m.getRepository(CustomerAccount).findOneByOrFail({ id: opts.accountId! });
     // Serialise writers per account, so one date never gets two orders.
     await m.getRepository(CustomerAccount).createQueryBuilder("a").setLock("pessimistic_write").where("a.id = :id", { id: account.id }).getOne();
     refuseIfAccountBlocked(account, bakery);
     const st = dateStatus(input.deliveryDate, settings, ctx.clock.now(), parseWeekdays(account.routeWeekdays));
-    if (st.reason === "past_cutoff") throw cutoffPassed(DateTime.fromISO(st.cutoffAt, { setZone: true }), settings.timeZone, input.deliveryDate, settings.locale);
-    if (!st.orderable) throw new HttpError(409, "date_not_orderable", `You can't order for this date: ${REASON_TEXT[st.reason!].toLowerCase()}.`, undefined, { reason: st.reason });
-    const products = await checkLines(ctx, m, input.lines, input.deliveryDate, settings);
+    // The owner's override sets aside the cut-off only: a closed date or a day without delivery stays refused.
+    if (st.reason === "past_cutoff" && !override) throw cutoffPassed(DateTime.fromISO(st.cutoffAt, { setZone: true }), settings.timeZone, input.deliveryDate, settings.locale);
+    if (!st.orderable && st.reason !== "past_cutoff") throw new HttpError(409, "date_not_orderable", `You can't order for this date: ${REASON_TEXT[st.reason!].toLowerCase()}.`, undefined, { reason: st.reason });
+    const products = await checkLines(ctx, m, input.lines, input.deliveryDate, settings, [], override);
+    const late = ctx.clock.now().getTime() >= orderCutoff(input.deliveryDate, settings, [...products.values()]).toMillis();
+    const overridden = overrideColumns(override, late, ctx.clock.now());
     const { priced, total } = await priceLines(ctx, m, account.id, input.lines, products, bakery.currency, bakery.locale);
     refuseBelowMinimum(account, total, bakery.currency, bakery.locale);
     const orders = m.getRepository(Order);
@@ -184,10 +209,10 @@ export async function createOrder(ctx: AppContext, actor: SessionUser | null, in
     } else if (existing) {
       // A cancelled order for the date comes back to life with the new lines.
       await m.getRepository(OrderLine).delete({ orderId: existing.id });
-      await orders.update({ id: existing.id }, { status: "open", poNumber: input.poNumber || null, note: input.note || null, totalCents: total, source: opts.source ?? "one_off", editedByHand: false, createdById: actor?.id ?? null });
+      await orders.update({ id: existing.id }, { status: "open", poNumber: input.poNumber || null, note: input.note || null, totalCents: total, source: opts.source ?? "one_off", editedByHand: false, createdById: actor?.id ?? null, ...overridden });
       order = (await orders.findOneBy({ id: existing.id }))!;
     } else {
-      order = await orders.save(orders.create({ accountId: account.id, deliveryDate: input.deliveryDate, status: "open", poNumber: input.poNumber || null, note: input.note || null, totalCents: total, source: opts.source ?? "one_off", editedByHand: false, createdById: actor?.id ?? null }));
+      order = await orders.save(orders.create({ accountId: account.id, deliveryDate: input.deliveryDate, status: "open", poNumber: input.poNumber || null, note: input.note || null, totalCents: total, source: opts.source ?? "one_off", editedByHand: false, createdById: actor?.id ?? null, ...overridden }));
     }
     await m.getRepository(OrderLine).insert(priced.map((l) => ({ ...l, orderId: order.id })));
     const dto = (await orderDtos(ctx, [order], m))[0];
@@ -200,11 +225,12 @@ export async function createOrder(ctx: AppContext, actor: SessionUser | null, in
 }
 
 /** Replace lines, PO number or note of an open order before its cut-off. A request that changes nothing writes nothing and mails nothing. */
-export async function updateOrder(ctx: AppContext, actor: SessionUser, id: number, input: { lines?: LineInput[]; poNumber?: string; note?: string }): Promise<OrderDto> {
+export async function updateOrder(ctx: AppContext, actor: SessionUser, id: number, input: { lines?: LineInput[]; poNumber?: string; note?: string; cutoffOverride?: { reason: string } }): Promise<OrderDto> {
   const bakery = await getBakery(ctx);
   const settings = await loadCalendarSettings(ctx);
+  const override = authoriseOverride(actor, input.cutoffOverride);
   const dto = await lockAfterRefusal(ctx, retryOnDeadlock(() => ctx.dataSource.transaction(async (m) => {
-    const order = await lockOrderForWrite(ctx, m, actor, id, settings, bakery);
+    const order = await lockOrderForWrite(ctx, m, actor, id, settings, bakery, override);
     const existingLines = await m.getRepository(OrderLine).findBy({ orderId: order.id });
     const oldProducts = await m.getRepository(Product).findBy({ id: In(existingLines.map((l) => l.productId).concat([0])) });
     const account = await m.getRepository(CustomerAccount).findOneByOrFail({ id: order.accountId });
@@ -213,15 +239,18 @@ export async function updateOrder(ctx: AppContext, actor: SessionUser, id: numbe
     if (input.note !== undefined && (input.note || null) !== order.note) patch.note = input.note || null;
     const newLines = input.lines && !sameLines(input.lines, existingLines) ? input.lines : undefined;
     if (newLines) {
-      const products = await checkLines(ctx, m, newLines, order.deliveryDate, settings, oldProducts);
+      const products = await checkLines(ctx, m, newLines, order.deliveryDate, settings, oldProducts, override);
       const { priced, total } = await priceLines(ctx, m, account.id, newLines, products, bakery.currency, bakery.locale);
       refuseBelowMinimum(account, total, bakery.currency, bakery.locale);
+      Object.assign(patch, overrideColumns(override, ctx.clock.now().getTime() >= orderCutoff(order.deliveryDate, settings, [...oldProducts, ...products.values()]).toMillis(), ctx.clock.now()));
       await m.getRepository(OrderLine).delete({ orderId: order.id });
       await m.getRepository(OrderLine).insert(priced.map((l) => ({ ...l, orderId: order.id })));
       patch.totalCents = total;
     } else {
       const c = orderCutoff(order.deliveryDate, settings, oldProducts);
-      if (ctx.clock.now().getTime() >= c.toMillis()) throw cutoffPassed(c, settings.timeZone, order.deliveryDate, settings.locale);
+      const late = ctx.clock.now().getTime() >= c.toMillis();
+      if (late && !override) throw cutoffPassed(c, settings.timeZone, order.deliveryDate, settings.locale);
+      if (late && ("poNumber" in patch || "note" in patch)) Object.assign(patch, overrideColumns(override, true, ctx.clock.now()));
       // Same lines, same PO number, same note: nothing changed, so no write and no "Order changed" mail.
       if (!("poNumber" in patch) && !("note" in patch)) return (await orderDtos(ctx, [order], m))[0];
     }
@@ -233,16 +262,18 @@ export async function updateOrder(ctx: AppContext, actor: SessionUser, id: numbe
   return dto;
 }
 
-export async function cancelOrder(ctx: AppContext, actor: SessionUser, id: number): Promise<OrderDto> {
+export async function cancelOrder(ctx: AppContext, actor: SessionUser, id: number, overrideReason?: string): Promise<OrderDto> {
   const bakery = await getBakery(ctx);
   const settings = await loadCalendarSettings(ctx);
+  const override = authoriseOverride(actor, overrideReason === undefined ? undefined : { reason: overrideReason });
   const dto = await lockAfterRefusal(ctx, retryOnDeadlock(() => ctx.dataSource.transaction(async (m) => {
-    const order = await lockOrderForWrite(ctx, m, actor, id, settings, bakery);
+    const order = await lockOrderForWrite(ctx, m, actor, id, settings, bakery, override);
     const lines = await m.getRepository(OrderLine).findBy({ orderId: order.id });
     const products = await m.getRepository(Product).findBy({ id: In(lines.map((l) => l.productId).concat([0])) });
     const c = orderCutoff(order.deliveryDate, settings, products);
-    if (ctx.clock.now().getTime() >= c.toMillis()) throw cutoffPassed(c, settings.timeZone, order.deliveryDate, settings.locale);
-    await m.getRepository(Order).update({ id: order.id }, { status: "cancelled", editedByHand: order.source === "standing" ? true : order.editedByHand });
+    const late = ctx.clock.now().getTime() >= c.toMillis();
+    if (late && !override) throw cutoffPassed(c, settings.timeZone, order.deliveryDate, settings.locale);
+    await m.getRepository(Order).update({ id: order.id }, { status: "cancelled", editedByHand: order.source === "standing" ? true : order.editedByHand, ...overrideColumns(override, late, ctx.clock.now()) });
     const cancelled = (await orderDtos(ctx, [(await m.getRepository(Order).findOneBy({ id: order.id }))!], m))[0];
     await queueOrderMail(ctx, m, cancelled, "cancelled");
     return cancelled;
@@ -251,11 +282,16 @@ export async function cancelOrder(ctx: AppContext, actor: SessionUser, id: numbe
 }
 
 /** Load an order for a change, row-locked; lock it for baking if its date's cut-off has passed. */
-async function lockOrderForWrite(ctx: AppContext, m: EntityManager, actor: SessionUser, id: number, settings: Settings, bakery: { name: string; phone: string; email: string }): Promise<Order> {
+async function lockOrderForWrite(ctx: AppContext, m: EntityManager, actor: SessionUser, id: number, settings: Settings, bakery: { name: string; phone: string; email: string }, override: Override | null = null): Promise<Order> {
   const order = await m.getRepository(Order).createQueryBuilder("o").setLock("pessimistic_write").where("o.id = :id", { id }).getOne();
   if (!order || (actor.role === "buyer" && order.accountId !== actor.accountId)) throw notFound("That order");
   const account = await m.getRepository(CustomerAccount).findOneByOrFail({ id: order.accountId });
   const dateCutoff = cutoffFor(order.deliveryDate, settings);
+  // The owner's override reaches an order past its cut-off, open or already locked for baking.
+  if (override && (order.status === "open" || order.status === "locked")) {
+    refuseIfAccountBlocked(account, bakery);
+    return order;
+  }
   if (order.status === "open" && ctx.clock.now().getTime() >= dateCutoff.toMillis()) {
     // The refusal rolls this transaction back; the caller locks the order afterwards (lockAfterRefusal).
     throw Object.assign(cutoffPassed(dateCutoff, settings.timeZone, order.deliveryDate, settings.locale), { lockOrderId: order.id });

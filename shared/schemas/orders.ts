@@ -47,20 +47,34 @@ const linesSchema = z
 const poSchema = z.string().trim().max(40, "Use at most 40 characters.").optional();
 const noteSchema = z.string().trim().max(500, "Use at most 500 characters.").optional();
 
+/** The owner's confirmation that an order is taken or changed past its cut-off, with the reason kept on the order. */
+export const overrideReasonSchema = z
+  .string({ error: "Say why the cut-off is set aside, as text." })
+  .trim()
+  .min(3, "Say why the cut-off is set aside (at least 3 characters), e.g. “Phoned at 3 pm; oven has room”.")
+  .max(200, "The reason can be at most 200 characters.");
+export const cutoffOverrideSchema = z.object({ confirm: z.literal(true, { error: "Confirm that the cut-off is set aside." }), reason: overrideReasonSchema });
+export type CutoffOverrideInput = z.infer<typeof cutoffOverrideSchema>;
+
 export const orderCreateSchema = z.object({
   deliveryDate: dateSchema,
   lines: linesSchema,
   poNumber: poSchema,
   note: noteSchema,
   accountId: z.number().int().positive().optional(),
+  /** Owner only: take the order even though the date's cut-off has passed. */
+  cutoffOverride: cutoffOverrideSchema.optional(),
 });
 export type OrderCreateInput = z.input<typeof orderCreateSchema>;
 
 export const NOTHING_TO_CHANGE = "Nothing to change: send the lines, the PO number or the note.";
 export const orderUpdateSchema = z
-  .object({ lines: linesSchema.optional(), poNumber: poSchema, note: noteSchema })
+  .object({ lines: linesSchema.optional(), poNumber: poSchema, note: noteSchema, cutoffOverride: cutoffOverrideSchema.optional() })
   .refine((v) => v.lines !== undefined || v.poNumber !== undefined || v.note !== undefined, { message: NOTHING_TO_CHANGE });
 export type OrderUpdateInput = z.input<typeof orderUpdateSchema>;
+
+/** DELETE /api/orders/:id?overrideReason=…: the owner cancels past the cut-off. */
+export const orderCancelQuerySchema = z.object({ overrideReason: overrideReasonSchema.optional() });
 
 export const orderListQuerySchema = z
   .object({ from: dateSchema.optional(), to: dateSchema.optional(), accountId: z.coerce.number().int().positive().optional(), status: z.enum(ORDER_STATUSES).optional() })
@@ -93,6 +107,8 @@ export interface OrderDto {
   cutoffAt: string;
   source: "one_off" | "standing";
   editedByHand: boolean;
+  /** The owner took or changed it past its cut-off: when and why (null for every other order). */
+  cutoffOverride: { at: string; reason: string; byId: number | null } | null;
   createdAt: string;
   updatedAt: string;
 }

@@ -277,6 +277,7 @@ export function orderDto(overrides: Partial<OrderDto> = {}): OrderDto {
     cutoffAt: "2025-12-02T14:00:00.000-06:00",
     source: "one_off",
     editedByHand: false,
+    cutoffOverride: null,
     createdAt: "2025-12-01T10:00:00.000Z",
     updatedAt: "2025-12-01T10:00:00.000Z",
     ...overrides,
