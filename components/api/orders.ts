@@ -12,7 +12,8 @@ export const ordersApi = {
   create: (input: OrderCreateInput, idempotencyKey: string) =>
     api<{ order: OrderDto }>("/api/orders", { method: "POST", body: input, headers: { "Idempotency-Key": idempotencyKey } }).then((r) => r.order),
   update: (id: number, patch: OrderUpdateInput) => api<{ order: OrderDto }>(`/api/orders/${id}`, { method: "PATCH", body: patch }).then((r) => r.order),
-  cancel: (id: number) => api<{ order: OrderDto }>(`/api/orders/${id}`, { method: "DELETE" }).then((r) => r.order),
+  /** `overrideReason`: the owner cancels past the cut-off (kept on the order). */
+  cancel: (id: number, overrideReason?: string) => api<{ order: OrderDto }>(`/api/orders/${id}`, { method: "DELETE", query: { overrideReason } }).then((r) => r.order),
 };
 
 export function useOrdersQuery(params: OrderListParams, options: { enabled?: boolean } = {}) {
@@ -50,5 +51,5 @@ export function useUpdateOrderMutation(id: number) {
 
 export function useCancelOrderMutation(id: number) {
   const changed = useOrderChanged();
-  return useMutation({ mutationFn: () => ordersApi.cancel(id), onSuccess: changed });
+  return useMutation({ mutationFn: (overrideReason?: string) => ordersApi.cancel(id, overrideReason), onSuccess: changed });
 }

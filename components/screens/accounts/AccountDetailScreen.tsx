@@ -57,7 +57,12 @@ function AccountBody({ account: a, isOwner, wide, timeZone }: { account: Account
         overline="Customer account"
         title={a.businessName}
         testID="account-title"
-        actions={isOwner ? <LinkButton href={`/office/accounts/${a.id}/edit`} label="Edit details" icon="edit-2" variant="secondary" testID="edit-account" /> : null}
+        actions={
+          <>
+            {a.status === "active" ? <LinkButton href={`/office/accounts/${a.id}/order`} label="Order by phone" icon="phone" variant="accent" testID="phone-order-link" /> : null}
+            {isOwner ? <LinkButton href={`/office/accounts/${a.id}/edit`} label="Edit details" icon="edit-2" variant="secondary" testID="edit-account" /> : null}
+          </>
+        }
       />
       <View style={[styles.grid, wide && styles.gridWide]}>
         <View style={[styles.col, wide && styles.mainCol]}>
