@@ -83,3 +83,33 @@ export function agingBucket(due: string, today: string): AgingBucket {
 
 /** "HB-2026-00042" */
 export const formatDocNumber = (prefix: string, year: number, seq: number) => `${prefix}-${year}-${String(seq).padStart(5, "0")}`;
+
+// ---- payment reminders --------------------------------------------------------------------------------
+
+/** A reminder sent by hand, or one of the schedule's three: before the due date, on it, after it. */
+export type ReminderStage = "manual" | "before_due" | "on_due" | "after_due";
+export const REMINDER_STAGE_LABELS: Record<ReminderStage, string> = { manual: "Sent by hand", before_due: "3 days before due", on_due: "On the due date", after_due: "7 days overdue" };
+
+/** The schedule the bookkeeper can turn on: days from the due date for each stage (negative: before it). */
+export const REMINDER_SCHEDULE: readonly { stage: Exclude<ReminderStage, "manual">; days: number }[] = [
+  { stage: "before_due", days: -3 },
+  { stage: "on_due", days: 0 },
+  { stage: "after_due", days: 7 },
+];
+
+/** Whole days from `from` to `to` (YYYY-MM-DD, calendar dates). */
+const dayDiff = (from: string, to: string) => Math.round((Date.parse(`${to}T00:00:00Z`) - Date.parse(`${from}T00:00:00Z`)) / 86_400_000);
+
+/**
+ * The scheduled reminder an unpaid invoice is due for today, or null: the latest stage whose day has come that
+ * has not been sent, and only if no later stage was (turning the schedule on never sends a backlog of old stages,
+ * and each stage goes out at most once). `issueDate`: a stage that fell before the invoice existed is skipped.
+ */
+export function dueReminderStage(p: { issueDate: string; dueDate: string; today: string; sent: readonly ReminderStage[] }): Exclude<ReminderStage, "manual"> | null {
+  const reached = REMINDER_SCHEDULE.filter((s) => dayDiff(p.dueDate, p.today) >= s.days && dayDiff(p.issueDate, p.dueDate) + s.days >= 0);
+  const latest = reached[reached.length - 1];
+  if (!latest) return null;
+  const order = REMINDER_SCHEDULE.map((s) => s.stage);
+  const sentLatest = Math.max(-1, ...p.sent.filter((s) => s !== "manual").map((s) => order.indexOf(s as Exclude<ReminderStage, "manual">)));
+  return order.indexOf(latest.stage) > sentLatest ? latest.stage : null;
+}

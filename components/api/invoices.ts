@@ -5,14 +5,14 @@ import { saveBlob } from "./files";
 import { accountKeys, invoiceKeys, officeKeys, payoutKeys, reportKeys } from "./keys";
 import type { CreditNoteInput, InvoiceSort, PaymentInput } from "../../shared/schemas/billing";
 import type {
-  CheckoutDto, CreditNoteResponse, InvoiceDetailDto, InvoiceDto, InvoiceListDto, InvoiceStatus, OverpaymentRefundResponse, RecordPaymentResponse, StatementsResponse,
+  CheckoutDto, CreditNoteResponse, InvoiceDetailDto, InvoiceDto, InvoiceListDto, InvoiceReminderDto, InvoiceStatus, RemindAllResponse, OverpaymentRefundResponse, RecordPaymentResponse, StatementsResponse,
 } from "../../shared/contracts/billing";
 
 export { INVOICE_SORTS, INVOICE_STATUSES, PAYMENT_METHODS } from "../../shared/schemas/billing";
 export type { CreditNoteInput, InvoiceSort, ManualPaymentMethod, PaymentInput } from "../../shared/schemas/billing";
 export type {
   CheckoutDto, CreditNoteDto, CreditNoteLineDto, CreditNoteResult, InvoiceAlertDto, InvoiceDetailDto, InvoiceDto, InvoiceEmailDto, InvoiceLineDto,
-  InvoiceListDto, InvoiceStatus, InvoiceTotalsDto, OverpaymentRefundResult, PaymentDto, RefundDto,
+  InvoiceListDto, InvoiceReminderDto, InvoiceStatus, InvoiceTotalsDto, OverpaymentRefundResult, PaymentDto, RefundDto, RemindAllResponse,
 } from "../../shared/contracts/billing";
 
 /** The list's filters as the screens hold them (the query string is parsed by shared/schemas/billing.ts invoiceListQuerySchema). */
@@ -37,6 +37,8 @@ export const invoicesApi = {
   recordPayment: (id: number, input: PaymentInput) => api<RecordPaymentResponse>(`/api/invoices/${id}/payments`, { method: "POST", body: input }).then((r) => r.payment),
   creditNote: (id: number, input: CreditNoteInput) => api<CreditNoteResponse>(`/api/invoices/${id}/credit-notes`, { method: "POST", body: input }).then((r) => r.creditNote),
   refundOverpayment: (id: number) => api<OverpaymentRefundResponse>(`/api/invoices/${id}/overpayment-refund`, { method: "POST" }).then((r) => r.refund),
+  remind: (id: number) => api<{ reminder: InvoiceReminderDto }>(`/api/invoices/${id}/reminders`, { method: "POST" }).then((r) => r.reminder),
+  remindAllOverdue: () => api<RemindAllResponse>("/api/invoices/reminders", { method: "POST" }),
   issueStatements: (through?: string) => api<StatementsResponse>("/api/invoices/statements", { method: "POST", body: through ? { through } : {} }).then((r) => r.issued),
 };
 
@@ -87,6 +89,18 @@ export function useCreditNoteMutation(id: number) {
 export function useRefundOverpaymentMutation(id: number) {
   const changed = useBillingChanged();
   return useMutation({ mutationFn: () => invoicesApi.refundOverpayment(id), onSuccess: changed });
+}
+
+/** A payment reminder for one invoice, by hand (office); the invoice and the outbox show it. */
+export function useRemindMutation(id: number) {
+  const changed = useBillingChanged();
+  return useMutation({ mutationFn: () => invoicesApi.remind(id), onSuccess: () => changed() });
+}
+
+/** One reminder per overdue invoice (office), leaving out those reminded today. */
+export function useRemindAllOverdueMutation() {
+  const changed = useBillingChanged();
+  return useMutation({ mutationFn: invoicesApi.remindAllOverdue, onSuccess: () => changed() });
 }
 
 export function useIssueStatementsMutation() {

@@ -61,6 +61,10 @@ export class Bakery {
   @Column({ type: "varchar", length: 600, default: "" })
   paymentInstructions: string;
 
+  /** Payment reminders by schedule (server/billing/reminders.service.ts REMINDER_SCHEDULE), off until turned on. */
+  @Column({ type: "boolean", default: false })
+  remindersOn: boolean;
+
   @CreateDateColumn({ type: "datetime", precision: 3, default: () => "CURRENT_TIMESTAMP(3)" })
   createdAt: Date;
 

@@ -11,13 +11,13 @@ import type { BillingSettingsDto, PaymentTermsResponse } from "../../shared/cont
 /** The bakery's billing settings: sales tax, invoice prefix, credit-hold days and payment instructions. */
 export async function getBillingSettings(ctx: AppContext): Promise<BillingSettingsDto> {
   const b = await getBakery(ctx);
-  return { salesTaxRateBp: b.salesTaxRateBp, invoicePrefix: b.invoicePrefix, creditHoldDays: b.creditHoldDays, paymentInstructions: b.paymentInstructions };
+  return { salesTaxRateBp: b.salesTaxRateBp, invoicePrefix: b.invoicePrefix, creditHoldDays: b.creditHoldDays, paymentInstructions: b.paymentInstructions, remindersOn: b.remindersOn };
 }
 
 /** The owner saves them; the answer is what was saved. */
 export async function saveBillingSettings(ctx: AppContext, input: z.output<typeof billingSettingsSchema>): Promise<BillingSettingsDto> {
   await ctx.dataSource.getRepository(Bakery).update({ id: (await getBakery(ctx)).id }, input);
-  return input;
+  return getBillingSettings(ctx);
 }
 
 /** How an account pays: card on each invoice, or weekly statements on net terms (owner). */

@@ -3,9 +3,10 @@ import type { AppContext } from "../http/context";
 import { parse } from "../http/errors";
 import { allow, currentUser } from "../http/auth";
 import * as invoices from "./invoices.service";
+import { remindAllOverdue, remindInvoice } from "./reminders.service";
 import { confirmDispatch } from "./dispatch.service";
 import { dispatchConfirmSchema, dispatchDateSchema, idParamSchema, invoiceListQuerySchema, statementsSchema } from "../../shared/schemas/billing";
-import type { DispatchResponse, InvoiceDetailDto, InvoiceListDto, StatementsResponse } from "../../shared/contracts/billing";
+import type { DispatchResponse, InvoiceDetailDto, InvoiceListDto, RemindAllResponse, StatementsResponse } from "../../shared/contracts/billing";
 
 export const OFFICE = ["owner", "bookkeeper"] as const;
 
@@ -25,6 +26,13 @@ export function invoiceRoutes(ctx: AppContext): Router {
   const r = Router();
   r.get("/", allow(...OFFICE, "buyer"), async (req, res) => {
     res.json((await invoices.listInvoices(ctx, currentUser(req), parse(invoiceListQuerySchema, req.query))) satisfies InvoiceListDto);
+  });
+  r.post("/reminders", allow(...OFFICE), async (req, res) => {
+    res.json((await remindAllOverdue(ctx, currentUser(req))) satisfies RemindAllResponse);
+  });
+  r.post("/:id/reminders", allow(...OFFICE), async (req, res) => {
+    const { id } = parse(idParamSchema, req.params);
+    res.status(201).json({ reminder: await remindInvoice(ctx, currentUser(req), id) });
   });
   r.post("/statements", allow(...OFFICE), async (req, res) => {
     const { through } = parse(statementsSchema, req.body);

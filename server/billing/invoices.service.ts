@@ -18,6 +18,7 @@ import { withJobLock } from "../jobs/scheduler";
 import { enqueueMail } from "../mail/outbox.service";
 import { OutboxMail } from "../mail/outbox.entity";
 import { invoiceMail } from "../mail/templates";
+import { invoiceReminders } from "./reminders.service";
 import { renderInvoicePdf } from "./invoice.pdf";
 import { retryOnDeadlock } from "../db/retry";
 import { allocateNumber, createCreditNote, overpaidCents, refreshStatus, validExemption } from "./ledger.service";
@@ -170,7 +171,7 @@ export async function invoiceDetail(ctx: AppContext, id: number, m: EntityManage
   if (!inv) throw notFound("That invoice");
   // The invoice's own mails (the invoice itself and payment receipts) name its number in the subject.
   const emails = await m.getRepository(OutboxMail).createQueryBuilder("o")
-    .where("o.kind IN ('invoice', 'receipt') AND o.subject LIKE :n", { n: `%${inv.number}%` }).orderBy("o.id", "ASC").getMany();
+    .where("o.kind IN ('invoice', 'receipt', 'reminder') AND o.subject LIKE :n", { n: `%${inv.number}%` }).orderBy("o.id", "ASC").getMany();
   const [lines, payments, credits, refunds, account, rejected] = await Promise.all([
     m.getRepository(InvoiceLine).find({ where: { invoiceId: id }, order: { deliveryDate: "ASC", id: "ASC" } }),
     m.getRepository(Payment).find({ where: { invoiceId: id }, order: { id: "ASC" } }),
@@ -193,6 +194,7 @@ export async function invoiceDetail(ctx: AppContext, id: number, m: EntityManage
     refunds: refunds.map((r) => ({ id: r.id, stripeRefundId: r.stripeRefundId, amountCents: r.amountCents, overpayment: r.overpayment, createdAt: r.createdAt.toISOString() })),
     alerts,
     emails: emails.map((e) => ({ id: e.id, kind: e.kind, to: e.toAddress, subject: e.subject, status: e.status, sentAt: e.sentAt?.toISOString() ?? null, createdAt: e.createdAt.toISOString() })),
+    reminders: await invoiceReminders(m, id),
   };
 }
 

@@ -7,6 +7,7 @@ import { processOutbox } from "../mail/outbox.service";
 import { applyCreditHolds, issueStatements } from "../billing/invoices.service";
 import { autoDeliver, invoiceUninvoicedCardOrders } from "../billing/dispatch.service";
 import { catchUpStripe } from "./stripe-catch-up";
+import { runReminderSchedule } from "../billing/reminders.service";
 
 /** Every scheduled job the server runs (each under a MariaDB named lock). */
 export const jobs: Job[] = [
@@ -17,6 +18,7 @@ export const jobs: Job[] = [
   { name: "freeze-plans-at-cutoff", everyMs: 60 * 1000, run: async (ctx) => void (await freezeDue(ctx)) },
   { name: "deliver-unconfirmed-orders", everyMs: 5 * 60 * 1000, run: async (ctx) => void (await autoDeliver(ctx)) },
   { name: "weekly-statements", everyMs: 60 * 60 * 1000, run: async (ctx) => void (await issueStatements(ctx)) },
+  { name: "payment-reminders", everyMs: 60 * 60 * 1000, run: async (ctx) => void (await runReminderSchedule(ctx)) },
   { name: "credit-holds", everyMs: 15 * 60 * 1000, run: async (ctx) => void (await applyCreditHolds(ctx)) },
   { name: "invoice-card-orders", everyMs: 10 * 60 * 1000, run: async (ctx) => void (await invoiceUninvoicedCardOrders(ctx)) },
   // Missed Stripe webhooks: on start and every STRIPE_CATCH_UP_EVERY_MS (3 minutes by default).

@@ -109,3 +109,18 @@ export function receiptMail(p: { bakeryName: string; currency: string; locale?: 
   const money = (c: number) => formatterFor(p.locale).money(c, p.currency);
   return { subject: `Payment received for ${p.number} — ${p.bakeryName}`, ...layout(p.bakeryName, "Payment received", [`Thank you: we received ${money(p.amountCents)} (${p.method}) for invoice ${p.number}.`], { label: "View the invoice", url: p.url }) };
 }
+
+/** A payment reminder for one invoice: what is owed and by when (or since when), how to pay, and "ignore if paid". */
+export function reminderMail(p: { bakeryName: string; currency: string; locale?: string; number: string; totalCents: number; dueCents: number; dueDate: string; today: string; url: string; card: boolean; instructions: string; statement?: boolean }): Rendered {
+  const f = formatterFor(p.locale);
+  const what = p.statement ? "Weekly statement" : "Invoice";
+  const money = (c: number) => f.money(c, p.currency);
+  const due = f.day(p.dueDate, "dayWithYear");
+  const late = p.dueDate < p.today;
+  const paras = [
+    late ? `${what} ${p.number} was due on ${due}, and ${money(p.dueCents)} of it is still unpaid.` : `${what} ${p.number}: ${money(p.dueCents)} is due by ${due}.`,
+    p.card ? "You can pay it by card in Panwise." : p.instructions || "Please pay by bank transfer or check, quoting the invoice number.",
+    "If you have paid it already, thank you, and please ignore this reminder.",
+  ];
+  return { subject: `Payment reminder: ${what.toLowerCase()} ${p.number} from ${p.bakeryName}`, ...layout(p.bakeryName, `Payment reminder: ${what} ${p.number}`, paras, { label: p.card ? "View and pay" : "View the invoice", url: p.url }) };
+}

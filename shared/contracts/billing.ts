@@ -145,6 +145,24 @@ export interface InvoiceDetailDto {
   emails: InvoiceEmailDto[];
   /** Overpayments and rejected payment notices (office screens show them). */
   alerts: InvoiceAlertDto[];
+  /** Payment reminders queued for it, by hand or by the schedule, oldest first. */
+  reminders: InvoiceReminderDto[];
+}
+
+/** One payment reminder (POST /api/invoices/:id/reminders → `{ reminder }`). */
+export interface InvoiceReminderDto {
+  id: number;
+  invoiceId: number;
+  stage: import("../billing").ReminderStage;
+  /** Who sent it by hand; null for the schedule. */
+  sentById: number | null;
+  at: string;
+}
+
+/** POST /api/invoices/reminders: the invoice numbers reminded now, and those left out (already reminded today). */
+export interface RemindAllResponse {
+  sent: string[];
+  skipped: string[];
 }
 
 /** POST /api/invoices/:id/credit-notes → `{ creditNote }` */
@@ -292,6 +310,8 @@ export interface BillingSettingsDto {
   invoicePrefix: string;
   creditHoldDays: number;
   paymentInstructions: string;
+  /** The payment-reminder schedule is on (3 days before due, on the due date, 7 days after). */
+  remindersOn: boolean;
 }
 
 /** GET and PUT /api/settings/billing */

@@ -85,6 +85,9 @@ export const billingSettingsSchema = z.object({
   paymentInstructions: z.string().trim().max(600).default(""),
 });
 
+/** PUT /api/settings/billing/reminders (owner or bookkeeper): the payment-reminder schedule on or off. */
+export const remindersSwitchSchema = z.object({ on: z.boolean({ error: "Say on (true) or off (false)." }) });
+
 /** PUT /api/accounts/:id/terms */
 export const paymentTermsSchema = z.object({
   paymentTerms: z.enum(PAYMENT_TERMS, { error: "Choose card, net7, net14 or net30." }),

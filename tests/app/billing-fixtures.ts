@@ -41,6 +41,7 @@ export function invoiceDetail(overrides: Partial<InvoiceDto> = {}, extra: Partia
     refunds: [],
     emails: [],
     alerts: [],
+    reminders: [],
     ...extra,
   };
 }

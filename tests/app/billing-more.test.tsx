@@ -64,7 +64,7 @@ describe("billing settings", () => {
     signedInAs(OWNER);
     const api = mockApi({
       ...sessionRoutes(OWNER),
-      "GET /api/settings/billing": { body: { settings: { salesTaxRateBp: 875, invoicePrefix: "HB", creditHoldDays: 14, paymentInstructions: "Transfer to account 0001." } satisfies BillingSettingsDto } },
+      "GET /api/settings/billing": { body: { settings: { salesTaxRateBp: 875, invoicePrefix: "HB", creditHoldDays: 14, paymentInstructions: "Transfer to account 0001.", remindersOn: false } satisfies BillingSettingsDto } },
       "PUT /api/settings/billing": (req) => ({ body: { settings: req.body } }),
     });
     renderApp("/office/money/settings");
@@ -83,7 +83,7 @@ describe("billing settings", () => {
 
   it("is read-only for the bookkeeper", async () => {
     signedInAs(BOOKKEEPER);
-    mockApi({ ...sessionRoutes(BOOKKEEPER), "GET /api/settings/billing": { body: { settings: { salesTaxRateBp: 875, invoicePrefix: "HB", creditHoldDays: 14, paymentInstructions: "" } satisfies BillingSettingsDto } } });
+    mockApi({ ...sessionRoutes(BOOKKEEPER), "GET /api/settings/billing": { body: { settings: { salesTaxRateBp: 875, invoicePrefix: "HB", creditHoldDays: 14, paymentInstructions: "", remindersOn: false } satisfies BillingSettingsDto } } });
     renderApp("/office/money/settings");
     expect(await screen.findByTestId("billing-settings-readonly")).toHaveTextContent(/8\.75 %.*HB.*14 days overdue/);
     expect(screen.queryByTestId("settings-save")).toBeNull();

@@ -64,7 +64,7 @@ describe("billing settings form", () => {
   it("gives the same messages, and parses the settings", () => {
     const bad = validate(billingSettingsSchema, billingSettingsInput({ taxPercent: "31", invoicePrefix: "hb", creditHoldDays: "0", paymentInstructions: "x".repeat(601) }));
     expect(bad).toEqual({ ok: false, fields: { salesTaxRateBp: "At most 30 %.", invoicePrefix: "1 to 6 capital letters, e.g. HB.", creditHoldDays: "At least 1 day.", paymentInstructions: "At most 600 characters." } });
-    const values = billingSettingsValues({ salesTaxRateBp: 825, invoicePrefix: "HB", creditHoldDays: 30, paymentInstructions: "Bank: 123 " });
+    const values = billingSettingsValues({ salesTaxRateBp: 825, invoicePrefix: "HB", creditHoldDays: 30, paymentInstructions: "Bank: 123 ", remindersOn: false });
     expect(validate(billingSettingsSchema, billingSettingsInput(values))).toEqual({ ok: true, data: { salesTaxRateBp: 825, invoicePrefix: "HB", creditHoldDays: 30, paymentInstructions: "Bank: 123" } });
     const days = validate(billingSettingsSchema, billingSettingsInput({ ...values, creditHoldDays: "181" }));
     expect(days.ok ? null : days.fields.creditHoldDays).toBe("At most 180 days.");

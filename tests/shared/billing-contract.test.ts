@@ -11,6 +11,7 @@ import type { recordManualPaymentAndExpire, refundOverpayment } from "../../serv
 import type { issueCreditNote } from "../../server/billing/credit-notes.service";
 import type { listPayouts, payoutDetail, reconcilePayout } from "../../server/billing/payouts.service";
 import type { aging } from "../../server/billing/reports.service";
+import type { remindAllOverdue, remindInvoice } from "../../server/billing/reminders.service";
 import type { getBillingSettings, saveBillingSettings, setPaymentTerms } from "../../server/billing/billing-settings.service";
 import type { listCertificatesFor, reviewCertificate, uploadCertificate } from "../../server/billing/certificates.service";
 import type { InvoiceDto, invoicesApi } from "../../components/api/invoices";
@@ -51,6 +52,8 @@ export const coupling = [
   holds<Equal<Answer<typeof listCertificatesFor>["certificates"], Answer<typeof accountBillingApi.certificates>>>(),
   holds<Equal<Answer<typeof uploadCertificate>, Answer<typeof accountBillingApi.upload>>>(),
   holds<Equal<Answer<typeof reviewCertificate>, Answer<typeof accountBillingApi.review>>>(),
+  holds<Equal<Answer<typeof remindInvoice>, Answer<typeof invoicesApi.remind>>>(),
+  holds<Equal<Answer<typeof remindAllOverdue>, Answer<typeof invoicesApi.remindAllOverdue>>>(),
   // What the client sends is what the server's schema takes.
   holds<Equal<Parameters<typeof invoicesApi.recordPayment>[1], PaymentInput>>(),
   holds<Equal<Parameters<typeof invoicesApi.creditNote>[1], CreditNoteInput>>(),
@@ -72,7 +75,7 @@ export function renamesFail(inv: ServerInvoice): number {
 
 describe("the billing contract", () => {
   it("is checked by the type checker: every server answer is the client's type", () => {
-    expect(coupling).toHaveLength(21);
+    expect(coupling).toHaveLength(23);
     expect(coupling.every((c) => c === true)).toBe(true);
   });
 
@@ -91,7 +94,7 @@ describe("the billing contract", () => {
   });
 
   it("the fixtures of tests/app carry every field of the detail and payout answers", () => {
-    expect(Object.keys(detailFixture()).sort()).toEqual(["alerts", "creditNotes", "emails", "invoice", "lines", "payments", "refunds"]);
+    expect(Object.keys(detailFixture()).sort()).toEqual(["alerts", "creditNotes", "emails", "invoice", "lines", "payments", "refunds", "reminders"]);
     expect(Object.keys(payoutFixture()).sort()).toEqual(["feesCents", "grossCents", "netCents", "netMatchesPayout", "payout", "reconciled", "refundsCents", "transactions", "unmatched"]);
   });
 

@@ -10,7 +10,10 @@ import { FormError, Notice } from "../../ui/FormError";
 import { QueryStates } from "../../ui/QueryStates";
 import { AppText } from "../../ui/Text";
 import { useSignedInUser } from "../../auth/useAuth";
-import { useBillingSettingsQuery, useSaveBillingSettingsMutation, type BillingSettingsDto } from "../../api/billingSettings";
+import { useBillingSettingsQuery, useRemindersSwitchMutation, useSaveBillingSettingsMutation, type BillingSettingsDto } from "../../api/billingSettings";
+import { TickBox } from "../../ui/TickBox";
+import { messageOf } from "../../api/client";
+import { REMINDER_SCHEDULE, REMINDER_STAGE_LABELS } from "../../../shared/billing";
 import { useZodForm } from "../../forms/useZodForm";
 import { BILLING_SETTINGS_FIELDS, billingSettingsInput, billingSettingsSchema, billingSettingsValues } from "./billingSettingsForm";
 import { BackLink, billingStyles, percent } from "./parts";
@@ -28,8 +31,13 @@ export function BillingSettingsScreen() {
       <QueryStates query={settings} testID="billing-settings" loadingLabel="Loading billing settings…" errorTitle="Billing settings didn't load">
         {(data) =>
           isOwner ? (
-            <SettingsForm settings={data} />
+            <>
+              <RemindersCard settings={data} />
+              <SettingsForm settings={data} />
+            </>
           ) : (
+            <>
+            <RemindersCard settings={data} />
             <Card title="Current settings" testID="billing-settings-readonly">
               <DetailList
                 items={[
@@ -43,10 +51,24 @@ export function BillingSettingsScreen() {
                 Only the owner can change these.
               </AppText>
             </Card>
+            </>
           )
         }
       </QueryStates>
     </Screen>
+  );
+}
+
+/** The payment-reminder schedule: the owner or the bookkeeper turns it on; each stage goes out once per unpaid invoice. */
+function RemindersCard({ settings }: { settings: BillingSettingsDto }) {
+  const toggle = useRemindersSwitchMutation();
+  const stages = REMINDER_SCHEDULE.map((s) => REMINDER_STAGE_LABELS[s.stage].toLowerCase()).join(", ");
+  return (
+    <Card title="Payment reminders" testID="reminders-card">
+      <AppText color="muted">{`When this is on, each unpaid invoice gets a reminder e-mail to the account's billing address ${stages.replace(/, ([^,]*)$/, " and $1")} — each once, through the outgoing e-mail. Reminders by hand are on each invoice.`}</AppText>
+      <TickBox label="Send payment reminders on this schedule" checked={settings.remindersOn} busy={toggle.isPending} onChange={(on) => toggle.mutate(on)} testID="reminders-on" />
+      <FormError message={toggle.isError ? messageOf(toggle.error) : null} testID="reminders-error" />
+    </Card>
   );
 }
 

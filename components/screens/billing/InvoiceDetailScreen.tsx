@@ -14,7 +14,8 @@ import { DataTable } from "../../ui/DataTable";
 import { AppText } from "../../ui/Text";
 import { messageOf } from "../../api/client";
 import { useDownload } from "../../forms/useDownload";
-import { downloadInvoicePdf, useInvoiceQuery, useRefundOverpaymentMutation, type InvoiceDetailDto, type InvoiceDto } from "../../api/invoices";
+import { downloadInvoicePdf, useInvoiceQuery, useRefundOverpaymentMutation, useRemindMutation, type InvoiceDetailDto, type InvoiceDto } from "../../api/invoices";
+import { REMINDER_STAGE_LABELS } from "../../../shared/billing";
 import { useBillingSettingsQuery } from "../../api/billingSettings";
 import { useBakeryTimeZone } from "../../api/bakery";
 import { formatDateTime } from "../../format";
@@ -95,6 +96,7 @@ function InvoiceBody({ detail: d, office, listHref, refund, wide }: InvoiceBodyP
           <PaymentsCard detail={d} />
           {d.refunds.length ? <RefundsCard detail={d} /> : null}
           {office && payable ? <RecordPaymentCard detail={d} /> : null}
+          {office && (payable || (d.reminders ?? []).length > 0) ? <RemindersCard detail={d} payable={payable} /> : null}
           {!office && payable && inv.kind === "statement" ? <OtherWaysCard /> : null}
           {d.emails?.length ? <EmailsCard detail={d} /> : null}
         </View>
@@ -236,6 +238,31 @@ function CreditNotesCard({ detail }: { detail: InvoiceDetailDto }) {
           <AppText variant="bodyStrong" align="right">{`− ${money(c.totalCents, cur)}${c.taxCents ? ` (incl. ${money(c.taxCents, cur)} tax)` : ""}`}</AppText>
         </Entry>
       ))}
+    </Card>
+  );
+}
+
+/** Payment reminders: send one by hand (the e-mail goes through the outgoing e-mail), and when each went out. */
+function RemindersCard({ detail, payable }: { detail: InvoiceDetailDto; payable: boolean }) {
+  const remind = useRemindMutation(detail.invoice.id);
+  const tz = useBakeryTimeZone();
+  const reminders = detail.reminders ?? [];
+  return (
+    <Card title="Payment reminders" testID="invoice-reminders">
+      {reminders.length === 0 ? (
+        <AppText color="muted" testID="invoice-no-reminders">
+          No reminders sent yet.
+        </AppText>
+      ) : (
+        reminders.map((r, i) => (
+          <Entry key={r.id} divided={i > 0} testID={`reminder-${r.id}`} title={formatDateTime(r.at, tz)} badge={<Badge label={REMINDER_STAGE_LABELS[r.stage]} tone={r.stage === "manual" ? "neutral" : "crust"} />}>
+            {null}
+          </Entry>
+        ))
+      )}
+      {payable ? <Button label="Send a payment reminder" icon="bell" variant="secondary" busy={remind.isPending} onPress={() => remind.mutate()} testID="invoice-remind" /> : null}
+      {remind.isSuccess ? <Notice message={`Reminder queued for ${detail.invoice.accountName}'s billing e-mail.`} testID="invoice-remind-done" /> : null}
+      <FormError message={remind.isError ? messageOf(remind.error) : null} testID="invoice-remind-error" />
     </Card>
   );
 }

@@ -15,7 +15,7 @@ import { DataTable, TitleCell } from "../../ui/DataTable";
 import { ListCard, ListCardText, ListCardTitle, ListCardTop, ListCards } from "../../ui/ListCard";
 import { AppText } from "../../ui/Text";
 import { useAccountsQuery } from "../../api/accounts";
-import { useInvoicesQuery, useIssueStatementsMutation, type InvoiceDto, type InvoiceListParams, type InvoiceSort, type InvoiceStatus, type InvoiceTotalsDto } from "../../api/invoices";
+import { useInvoicesQuery, useIssueStatementsMutation, useRemindAllOverdueMutation, type InvoiceDto, type InvoiceListParams, type InvoiceSort, type InvoiceStatus, type InvoiceTotalsDto } from "../../api/invoices";
 import { messageOf } from "../../api/client";
 import { useDebounced } from "../../forms/useDebounced";
 import { cleanDate } from "../../ordering/dates";
@@ -179,9 +179,30 @@ export function InvoicesScreen({ mode, accountId: startAccount, show: startShow 
 
 function StatementsBar() {
   const issue = useIssueStatementsMutation();
+  const remind = useRemindAllOverdueMutation();
   const r = issue.data;
+  const sent = remind.data;
   return (
     <View style={styles.statements}>
+      <View style={billingStyles.buttons}>
+        <Button label="Remind all overdue" icon="bell" variant="secondary" busy={remind.isPending} onPress={() => remind.mutate()} testID="remind-all" />
+        <AppText variant="small" color="muted" style={styles.flex}>
+          A payment reminder to each account with an overdue invoice (not to any already reminded today).
+        </AppText>
+      </View>
+      <FormError message={remind.isError ? messageOf(remind.error) : null} testID="remind-all-error" />
+      {sent ? (
+        <Notice
+          testID="remind-all-result"
+          message={
+            sent.sent.length === 0
+              ? sent.skipped.length
+                ? `Nothing sent: ${sent.skipped.join(", ")} ${sent.skipped.length === 1 ? "was" : "were"} reminded today already.`
+                : "Nothing is overdue: no reminders to send."
+              : `Reminders queued for ${sent.sent.join(", ")}.${sent.skipped.length ? ` Left out (reminded today already): ${sent.skipped.join(", ")}.` : ""}`
+          }
+        />
+      ) : null}
       <View style={billingStyles.buttons}>
         <Button label="Issue statements now" icon="send" variant="secondary" busy={issue.isPending} onPress={() => issue.mutate(undefined)} testID="issue-statements" />
         <AppText variant="small" color="muted" style={styles.flex}>

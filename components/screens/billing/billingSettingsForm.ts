@@ -36,7 +36,7 @@ export function billingSettingsInput(v: BillingSettingsValues) {
 }
 
 /** The settings checked before saving (the server checks the same again). */
-export const billingSettingsSchema: z.ZodType<BillingSettingsDto, ReturnType<typeof billingSettingsInput>> = z.object({
+export const billingSettingsSchema: z.ZodType<Omit<BillingSettingsDto, "remindersOn">, ReturnType<typeof billingSettingsInput>> = z.object({
   salesTaxRateBp: readText<number>((text) => {
     const bp = percentToBp(text);
     if (bp === null) return { message: "Enter a percentage like 8.75 (two decimals at most)." };
