@@ -9,6 +9,7 @@ export const invitationsApi = {
   list: () => api<{ invitations: InvitationDto[] }>("/api/invitations").then((r) => r.invitations),
   create: (input: InvitationCreateInput) => api<{ invitation: InvitationDto }>("/api/invitations", { method: "POST", body: input }).then((r) => r.invitation),
   revoke: (id: number) => api<void>(`/api/invitations/${id}`, { method: "DELETE" }),
+  resend: (id: number) => api<{ invitation: InvitationDto }>(`/api/invitations/${id}/resend`, { method: "POST" }).then((r) => r.invitation),
 };
 
 export function useInvitationsQuery() {
@@ -26,6 +27,12 @@ function useInvalidateInvitations() {
 export function useCreateInvitationMutation() {
   const invalidate = useInvalidateInvitations();
   return useMutation({ mutationFn: invitationsApi.create, onSuccess: invalidate });
+}
+
+/** A new link for the same person, the old one no longer working. */
+export function useResendInvitationMutation() {
+  const invalidate = useInvalidateInvitations();
+  return useMutation({ mutationFn: invitationsApi.resend, onSuccess: invalidate });
 }
 
 export function useRevokeInvitationMutation() {

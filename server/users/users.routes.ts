@@ -37,6 +37,10 @@ export function invitationsRoutes(ctx: AppContext): Router {
     const input = parse(invitationCreateSchema, req.body);
     res.status(201).json({ invitation: await users.invite(ctx, currentUser(req), input) });
   });
+  r.post("/:id/resend", async (req, res) => {
+    const { id } = parse(idParamSchema, req.params);
+    res.status(201).json({ invitation: await users.resendInvitation(ctx, currentUser(req), id) });
+  });
   r.delete("/:id", async (req, res) => {
     const { id } = parse(idParamSchema, req.params);
     await users.revokeInvitation(ctx, id);

@@ -88,7 +88,7 @@ export async function updateUser(
   return getUser(ctx, id);
 }
 
-function invitationDto(t: AuthToken, accounts: Map<number, string>): InvitationDto {
+function invitationDto(t: AuthToken, accounts: Map<number, string>, now: Date = new Date()): InvitationDto {
   return {
     id: t.id,
     email: t.email,
@@ -96,18 +96,33 @@ function invitationDto(t: AuthToken, accounts: Map<number, string>): InvitationD
     accountId: t.accountId,
     accountName: t.accountId ? accounts.get(t.accountId) ?? null : null,
     expiresAt: t.expiresAt.toISOString(),
+    expired: t.expiresAt.getTime() <= now.getTime(),
     createdAt: t.createdAt.toISOString(),
   };
 }
 
-/** Invitations still waiting: not used, not revoked, not expired. */
+/** How long an invitation that ran out unused stays listed (to be sent again). */
+const EXPIRED_LISTED_MS = 30 * 24 * 60 * 60 * 1000;
+
+/** Invitations not used and not revoked: those still waiting, and those that ran out in the last 30 days (to send again). */
 export async function listInvitations(ctx: AppContext): Promise<InvitationDto[]> {
+  const now = ctx.clock.now();
   const rows = await ctx.dataSource.getRepository(AuthToken).find({
-    where: { kind: "invitation", usedAt: IsNull(), revokedAt: IsNull(), expiresAt: MoreThan(ctx.clock.now()) },
+    where: { kind: "invitation", usedAt: IsNull(), revokedAt: IsNull(), expiresAt: MoreThan(new Date(now.getTime() - EXPIRED_LISTED_MS)) },
     order: { createdAt: "DESC" },
   });
   const accounts = new Map((await ctx.dataSource.getRepository(CustomerAccount).find()).map((a) => [a.id, a.businessName]));
-  return rows.map((r) => invitationDto(r, accounts));
+  return rows.map((r) => invitationDto(r, accounts, now));
+}
+
+/**
+ * Send an invitation again (its mail lost, or its link run out): a new link with a new expiry replaces the old one,
+ * for the same address, role, account and name. A used or revoked invitation cannot be sent again.
+ */
+export async function resendInvitation(ctx: AppContext, actor: SessionUser, id: number): Promise<InvitationDto> {
+  const t = await ctx.dataSource.getRepository(AuthToken).findOneBy({ id, kind: "invitation", usedAt: IsNull(), revokedAt: IsNull() });
+  if (!t) throw notFound("That invitation");
+  return invite(ctx, actor, { email: t.email, role: t.role ?? "buyer", accountId: t.accountId, name: t.name ?? undefined });
 }
 
 export async function invite(
@@ -143,7 +158,7 @@ export async function invite(
   return saved;
   });
   ctx.logger.info({ event: "invitation_sent", actorId: actor.id, role: input.role }, "invitation sent");
-  return invitationDto(row, new Map(account ? [[account.id, account.businessName]] : []));
+  return invitationDto(row, new Map(account ? [[account.id, account.businessName]] : []), now);
 }
 
 export async function revokeInvitation(ctx: AppContext, id: number): Promise<void> {

@@ -50,6 +50,8 @@ export interface InvitationDto {
   accountId: number | null;
   accountName: string | null;
   expiresAt: string;
+  /** The link ran out unused (listed for 30 days, so it can be sent again). */
+  expired: boolean;
   createdAt: string;
 }
 

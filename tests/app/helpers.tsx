@@ -63,6 +63,7 @@ export function invitationDto(overrides: Partial<InvitationDto> = {}): Invitatio
     accountName: null,
     expiresAt: "2025-12-05T10:00:00.000Z",
     createdAt: "2025-12-02T10:00:00.000Z",
+    expired: false,
     ...overrides,
   };
 }

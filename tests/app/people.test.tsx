@@ -102,6 +102,25 @@ describe("people", () => {
     expect(api.callsTo("DELETE", "/api/invitations/71")).toHaveLength(1);
   });
 
+  it("sends a run-out invitation again (issue 12)", async () => {
+    let invitations = [invitationDto({ expired: true, expiresAt: "2025-11-28T16:00:00.000Z" })];
+    const api = mockApi({
+      ...sessionRoutes(OWNER),
+      "GET /api/users": { body: { users: USERS } },
+      "GET /api/invitations": () => ({ body: { invitations } }),
+      "POST /api/invitations/:id/resend": () => {
+        invitations = [invitationDto({ id: 72, expiresAt: "2025-12-05T16:00:00.000Z" })];
+        return { status: 201, body: { invitation: invitations[0] } };
+      },
+    });
+    renderApp("/office/people");
+    expect(await screen.findByTestId("invitation-71-expired")).toHaveTextContent(/^Link ran out/);
+    fireEvent.press(screen.getByTestId("invitation-71-resend"));
+    await waitFor(() => expect(api.callsTo("POST", "/api/invitations/71/resend")).toHaveLength(1));
+    expect(await screen.findByTestId("invitation-72")).toBeOnTheScreen();
+    expect(screen.queryByTestId("invitation-72-expired")).toBeNull();
+  });
+
   it("shows the error state when people fail to load", async () => {
     mockApi({ ...sessionRoutes(OWNER), "GET /api/users": apiError(500, "internal_error", "Something went wrong on our side. Please try again."), "GET /api/invitations": { body: { invitations: [] } } });
     renderApp("/office/people");

@@ -125,3 +125,41 @@ describe("invitations", () => {
     expect((await t.ds.getRepository(OutboxMail).findOneByOrFail({ id: row.id })).status).toBe("sent");
   });
 });
+
+describe("sending an invitation again (issue 12)", () => {
+  it("lists a run-out invitation as expired; the owner sends it again with a new link and the old link stops working", async () => {
+    await asOwner(t.http().post("/api/invitations")).send({ email: "again@staff.test", role: "baker", name: "Ada Again" });
+    const oldToken = linkToken((await waitForMail(t, "again@staff.test")).text);
+    t.clock.advance(72 * 3600 * 1000 + 1);
+    const later = await tokenFor(t, await makeUser(t.ds, "owner"));
+    const list = await t.http().get("/api/invitations").set("Authorization", `Bearer ${later}`);
+    const row = list.body.invitations.find((i: { email: string }) => i.email === "again@staff.test");
+    expect(row).toMatchObject({ role: "baker", expired: true });
+
+    // Not for anyone but the owner; not for an invitation that does not exist.
+    const baker = await tokenFor(t, await makeUser(t.ds, "baker"));
+    expect((await t.http().post(`/api/invitations/${row.id}/resend`).set("Authorization", `Bearer ${baker}`)).status).toBe(403);
+    expect((await t.http().post("/api/invitations/99999/resend").set("Authorization", `Bearer ${later}`)).status).toBe(404);
+    expect((await t.http().post("/api/invitations/abc/resend").set("Authorization", `Bearer ${later}`)).status).toBe(400);
+
+    const before = t.mail.messages.filter((m) => m.to.includes("again@staff.test")).length;
+    const res = await t.http().post(`/api/invitations/${row.id}/resend`).set("Authorization", `Bearer ${later}`);
+    expect(res.status).toBe(201);
+    expect(res.body.invitation).toMatchObject({ email: "again@staff.test", role: "baker", expired: false });
+    expect(res.body.invitation.id).not.toBe(row.id);
+    await processOutbox(t.ctx);
+    const mails = t.mail.messages.filter((m) => m.to.includes("again@staff.test"));
+    expect(mails.length).toBe(before + 1);
+    const newToken = linkToken(mails[mails.length - 1].text);
+    expect(newToken).not.toBe(oldToken);
+    // The old invitation is gone from the list (replaced); its link fails, the new one sets the password.
+    const after = (await t.http().get("/api/invitations").set("Authorization", `Bearer ${later}`)).body.invitations.filter((i: { email: string }) => i.email === "again@staff.test");
+    expect(after).toHaveLength(1);
+    expect((await t.http().post("/api/auth/invitations/accept").send({ token: oldToken, password: "a long new password", name: "Ada" })).status).toBe(400);
+    const ok = await t.http().post("/api/auth/invitations/accept").send({ token: newToken, password: "a long new password", name: "Ada" });
+    expect(ok.status).toBe(200);
+    // Taken up: it can no longer be sent again.
+    expect((await t.http().post(`/api/invitations/${res.body.invitation.id}/resend`).set("Authorization", `Bearer ${later}`)).status).toBe(404);
+    t.clock.advance(-(72 * 3600 * 1000 + 1));
+  });
+});

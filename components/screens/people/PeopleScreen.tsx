@@ -13,7 +13,8 @@ import { TableFrame, TableHeaderRow } from "../../ui/DataTable";
 import { AppText } from "../../ui/Text";
 import { useSignedInUser } from "../../auth/useAuth";
 import { useUsersQuery } from "../../api/users";
-import { useInvitationsQuery, useRevokeInvitationMutation } from "../../api/invitations";
+import { useInvitationsQuery, useResendInvitationMutation, useRevokeInvitationMutation } from "../../api/invitations";
+import { Badge } from "../../ui/Badge";
 import { messageOf } from "../../api/client";
 import { useBakeryTimeZone } from "../../api/bakery";
 import { useDebounced } from "../../forms/useDebounced";
@@ -96,7 +97,7 @@ function Invitations({ wide }: { wide: boolean }) {
     <QueryStates query={invitations} testID="invitations" loadingLabel="Loading invitations…" errorTitle="Invitations didn't load">
       {(waiting) =>
         waiting.length === 0 ? null : (
-          <Card title={`Waiting invitations (${waiting.length})`} testID="invitations-card">
+          <Card title={`Invitations not yet taken up (${waiting.length})`} testID="invitations-card">
             <View>
               {waiting.map((inv, i) => (
                 <InvitationLine key={inv.id} invitation={inv} first={i === 0} wide={wide} />
@@ -111,6 +112,7 @@ function Invitations({ wide }: { wide: boolean }) {
 
 function InvitationLine({ invitation, first, wide }: { invitation: InvitationDto; first: boolean; wide: boolean }) {
   const revoke = useRevokeInvitationMutation();
+  const resend = useResendInvitationMutation();
   const timeZone = useBakeryTimeZone();
   const [confirming, setConfirming] = useState(false);
   return (
@@ -127,7 +129,11 @@ function InvitationLine({ invitation, first, wide }: { invitation: InvitationDto
                 {invitation.accountName}
               </AppText>
             ) : null}
-            <AppText variant="small" color="muted">{`Link works until ${formatDateTime(invitation.expiresAt, timeZone)}`}</AppText>
+            {invitation.expired ? (
+              <Badge label={`Link ran out ${formatDateTime(invitation.expiresAt, timeZone)}`} tone="amber" testID={`invitation-${invitation.id}-expired`} />
+            ) : (
+              <AppText variant="small" color="muted">{`Link works until ${formatDateTime(invitation.expiresAt, timeZone)}`}</AppText>
+            )}
           </View>
         </View>
         {confirming ? (
@@ -136,6 +142,17 @@ function InvitationLine({ invitation, first, wide }: { invitation: InvitationDto
             <Button label="Keep" small variant="ghost" onPress={() => setConfirming(false)} />
           </View>
         ) : (
+          <View style={styles.inviteActions}>
+          <Button
+            label="Send again"
+            small
+            variant={invitation.expired ? "accent" : "secondary"}
+            icon="send"
+            busy={resend.isPending}
+            onPress={() => resend.mutate(invitation.id)}
+            testID={`invitation-${invitation.id}-resend`}
+            accessibilityLabel={`Send the invitation for ${invitation.email} again`}
+          />
           <Button
             label="Revoke"
             small
@@ -145,9 +162,11 @@ function InvitationLine({ invitation, first, wide }: { invitation: InvitationDto
             testID={`invitation-${invitation.id}-revoke`}
             accessibilityLabel={`Revoke the invitation for ${invitation.email}`}
           />
+          </View>
         )}
       </View>
-      <FormError message={revoke.isError ? messageOf(revoke.error) : null} />
+      <FormError message={revoke.isError ? messageOf(revoke.error) : resend.isError ? messageOf(resend.error) : null} />
+      {resend.data ? <Notice message={`Sent again to ${invitation.email}: the new link works until ${formatDateTime(resend.data.expiresAt, timeZone)}; the old one no longer does.`} testID="invitation-resent" /> : null}
     </View>
   );
 }
