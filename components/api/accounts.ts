@@ -1,7 +1,7 @@
 import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
 import { api } from "./client";
 import { accountKeys, officeKeys, userKeys, type AccountListParams } from "./keys";
-import type { AccountDto, AccountInput } from "../../shared/schemas/accounts";
+import type { AccountBuyerDto, AccountDto, AccountInput } from "../../shared/schemas/accounts";
 
 export { accountKeys, type AccountListParams } from "./keys";
 
@@ -12,7 +12,13 @@ export const accountsApi = {
   get: (id: number) => api<{ account: AccountDto }>(`/api/accounts/${id}`).then((r) => r.account),
   create: (input: AccountInput) => api<{ account: AccountDto }>("/api/accounts", { method: "POST", body: input }).then((r) => r.account),
   update: (id: number, patch: AccountPatch) => api<{ account: AccountDto }>(`/api/accounts/${id}`, { method: "PATCH", body: patch }).then((r) => r.account),
+  buyers: (id: number) => api<{ buyers: AccountBuyerDto[] }>(`/api/accounts/${id}/buyers`).then((r) => r.buyers),
 };
+
+/** The account's buyers by name (office). */
+export function useAccountBuyersQuery(id: number) {
+  return useQuery({ queryKey: accountKeys.buyers(id), queryFn: () => accountsApi.buyers(id), enabled: id > 0 });
+}
 
 export function useAccountsQuery(params: AccountListParams = {}, options: { enabled?: boolean } = {}) {
   return useQuery({ queryKey: accountKeys.list(params), queryFn: () => accountsApi.list(params), enabled: options.enabled ?? true });

@@ -59,6 +59,7 @@ export const accountKeys = {
   list: (params: AccountListParams = {}) => [...accountKeys.lists(), { q: params.q ?? "", status: params.status ?? "" }] as const,
   details: () => [...accountKeys.all, "detail"] as const,
   detail: (id: number) => [...accountKeys.details(), id] as const,
+  buyers: (id: number) => [...accountKeys.all, "buyers", id] as const,
 };
 
 export const officeKeys = {

@@ -12,6 +12,10 @@ export function accountsRoutes(ctx: AppContext): Router {
   r.get("/", allow("owner", "bookkeeper"), async (req, res) => {
     res.json({ accounts: await accounts.listAccounts(ctx, parse(accountListQuerySchema, req.query)) });
   });
+  r.get("/:id/buyers", allow("owner", "bookkeeper"), async (req, res) => {
+    const { id } = parse(idParamSchema, req.params);
+    res.json({ buyers: await accounts.accountBuyers(ctx, id) });
+  });
   /** Buyers may read their own account (anything else is 404 for them). */
   r.get("/:id", allow("owner", "bookkeeper", "buyer"), async (req, res) => {
     const { id } = parse(idParamSchema, req.params);

@@ -2,7 +2,7 @@ import type { AppContext } from "../http/context";
 import { notFound } from "../http/errors";
 import { CustomerAccount } from "./account.entity";
 import { User } from "../users/user.entity";
-import type { AccountDto, AccountStatus } from "../../shared/schemas/accounts";
+import type { AccountBuyerDto, AccountDto, AccountStatus } from "../../shared/schemas/accounts";
 import type { SessionUser } from "../../shared/schemas/auth";
 import type { OfficeSummaryDto } from "../../shared/schemas/bakery";
 
@@ -72,4 +72,11 @@ export async function accountCounts(ctx: AppContext): Promise<OfficeSummaryDto["
   const active = by.active ?? 0, onHold = by.on_hold ?? 0, closed = by.closed ?? 0;
   const creditHold = rows.reduce((s, r) => s + Number(r.credit ?? 0), 0);
   return { total: active + onHold + closed, active, onHold, paused: onHold - creditHold, creditHold, closed };
+}
+
+/** The account's buyers by name (active first, then turned off), for the office's account page. */
+export async function accountBuyers(ctx: AppContext, id: number): Promise<AccountBuyerDto[]> {
+  if (!(await ctx.dataSource.getRepository(CustomerAccount).existsBy({ id }))) throw notFound("That account");
+  const users = await ctx.dataSource.getRepository(User).find({ where: { accountId: id, role: "buyer" }, order: { disabled: "ASC", name: "ASC" } });
+  return users.map((u) => ({ id: u.id, name: u.name, email: u.email, disabled: u.disabled, lastSignInAt: u.lastSignInAt?.toISOString() ?? null }));
 }

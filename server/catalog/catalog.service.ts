@@ -248,8 +248,11 @@ async function removeUnusedPhotoFiles(ctx: AppContext, was: Pick<Product, "photo
 
 async function priceListDto(ctx: AppContext, list: PriceList): Promise<PriceListDto> {
   const items = await ctx.dataSource.getRepository(PriceListItem).find({ where: { priceListId: list.id }, order: { productId: "ASC" } });
-  const accountCount = await ctx.dataSource.getRepository(CustomerAccount).countBy({ priceListId: list.id });
-  return { id: list.id, name: list.name, kind: list.kind, percentOff: Number(list.percentOff), items: items.map((i) => ({ productId: i.productId, priceCents: i.priceCents })), accountCount };
+  const on = await ctx.dataSource.getRepository(CustomerAccount).find({ where: { priceListId: list.id }, order: { businessName: "ASC" } });
+  return {
+    id: list.id, name: list.name, kind: list.kind, percentOff: Number(list.percentOff), items: items.map((i) => ({ productId: i.productId, priceCents: i.priceCents })),
+    accountCount: on.length, accounts: on.map((a) => ({ id: a.id, businessName: a.businessName })),
+  };
 }
 
 export async function listPriceLists(ctx: AppContext): Promise<PriceListDto[]> {

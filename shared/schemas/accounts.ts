@@ -74,3 +74,13 @@ export interface AccountDto {
   createdAt: string;
   updatedAt: string;
 }
+
+/** GET /api/accounts/:id/buyers (owner, bookkeeper): the account's sign-ins, by name. */
+export interface AccountBuyerDto {
+  id: number;
+  name: string;
+  email: string;
+  /** Signed-in turned off by the owner. */
+  disabled: boolean;
+  lastSignInAt: string | null;
+}

@@ -168,4 +168,6 @@ export interface PriceListDto {
   percentOff: number;
   items: { productId: number; priceCents: number }[];
   accountCount: number;
+  /** The accounts on this list, by name. */
+  accounts: { id: number; businessName: string }[];
 }

@@ -138,6 +138,17 @@ describe("account detail and form", () => {
     expect(screen.getByTestId("activate-account")).toHaveTextContent(/Make active/);
   });
 
+  it("lists the account's buyers by name (issue 12)", async () => {
+    mockApi({
+      ...sessionRoutes(OWNER),
+      "GET /api/accounts/:id": { body: { account: account({ buyerCount: 1 }) } },
+      "GET /api/accounts/:id/buyers": { body: { buyers: [{ id: 5, name: "Marisol Okafor", email: "buyer@tidewater.test", disabled: false, lastSignInAt: null }, { id: 6, name: "Old Hand", email: "old@tidewater.test", disabled: true, lastSignInAt: null }] } },
+    });
+    renderApp("/office/accounts/11");
+    expect(await screen.findByTestId("account-buyer-5")).toHaveTextContent(/Marisol Okafor.*buyer@tidewater\.test/);
+    expect(screen.getByTestId("account-buyer-6")).toHaveTextContent(/Old Hand \(sign-in turned off\)/);
+  });
+
   it("says so when the account does not exist", async () => {
     mockApi({ ...sessionRoutes(OWNER), "GET /api/accounts/:id": apiError(404, "not_found", "That account was not found.") });
     renderApp("/office/accounts/999");

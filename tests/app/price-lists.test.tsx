@@ -3,7 +3,7 @@ import { fireEvent, screen } from "expo-router/testing-library";
 import { OWNER, PRODUCTS, apiError, mockApi, renderApp, sessionRoutes, signedInAs, type FakeRequest } from "./helpers";
 import type { PriceListDto } from "../../shared/schemas/catalog";
 
-const PARTNERS: PriceListDto = { id: 5, name: "Café partners", kind: "percent", percentOff: 10, items: [], accountCount: 2 } as PriceListDto;
+const PARTNERS: PriceListDto = { id: 5, name: "Café partners", kind: "percent", percentOff: 10, items: [], accountCount: 2, accounts: [{ id: 11, businessName: "Tidewater Café" }, { id: 12, businessName: "Juniper Table" }] } as PriceListDto;
 
 function routes(extra: Record<string, unknown> = {}) {
   return { ...sessionRoutes(OWNER), "GET /api/price-lists": { body: { priceLists: [PARTNERS] } }, "GET /api/products": { body: { products: PRODUCTS } }, ...extra } as Parameters<typeof mockApi>[0];
@@ -15,6 +15,15 @@ describe("price lists", () => {
     mockApi(routes());
     renderApp("/office/price-lists");
     expect(await screen.findByTestId("price-list-5")).toHaveTextContent(/Café partners.*10 % off list prices.*Used by 2 accounts/);
+    expect(screen.getByTestId("price-list-5-accounts")).toHaveTextContent("Tidewater Café, Juniper Table");
+  });
+
+  it("names the accounts on a price list, each a link to its page (issue 12)", async () => {
+    signedInAs(OWNER);
+    mockApi(routes());
+    renderApp("/office/price-lists/5");
+    expect(await screen.findByTestId("price-list-account-11")).toHaveTextContent("Tidewater Café");
+    expect(screen.getByTestId("price-list-account-12")).toHaveTextContent("Juniper Table");
   });
 
   it("checks own prices before sending: an unreadable price beside its product, none at all above the list", async () => {

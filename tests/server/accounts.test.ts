@@ -84,3 +84,23 @@ describe("customer accounts", () => {
     expect((await t.http().patch("/api/accounts/987654").set("Authorization", `Bearer ${owner}`).send({ notes: "x" })).status).toBe(404);
   });
 });
+
+describe("an account's buyers and price list by name (issue 12)", () => {
+  it("lists the account's buyers by name for the office, turned-off ones last; a price list names its accounts", async () => {
+    const a = await makeAccount(t.ds, { businessName: "Named Buyers Café" });
+    await makeUser(t.ds, "buyer", { accountId: a.id, name: "Zoe Active" });
+    await makeUser(t.ds, "buyer", { accountId: a.id, name: "Abe Gone", disabled: true });
+    const buyer = await tokenFor(t, await makeUser(t.ds, "buyer", { accountId: a.id, name: "Mia Middle" }));
+    const res = await t.http().get(`/api/accounts/${a.id}/buyers`).set("Authorization", `Bearer ${books}`);
+    expect(res.status).toBe(200);
+    expect(res.body.buyers.map((b: { name: string; disabled: boolean }) => [b.name, b.disabled])).toEqual([["Mia Middle", false], ["Zoe Active", false], ["Abe Gone", true]]);
+    expect((await t.http().get(`/api/accounts/${a.id}/buyers`).set("Authorization", `Bearer ${buyer}`)).status).toBe(403);
+    expect((await t.http().get("/api/accounts/999999/buyers").set("Authorization", `Bearer ${owner}`)).status).toBe(404);
+
+    const list = await t.http().post("/api/price-lists").set("Authorization", `Bearer ${owner}`).send({ name: "Named partners", kind: "percent", percentOff: 5, items: [] });
+    expect(list.status).toBe(201);
+    await t.ds.query("UPDATE customer_account SET priceListId = ? WHERE id = ?", [list.body.priceList.id, a.id]);
+    const lists = (await t.http().get("/api/price-lists").set("Authorization", `Bearer ${owner}`)).body.priceLists as { id: number; accountCount: number; accounts: { businessName: string }[] }[];
+    expect(lists.find((l) => l.id === list.body.priceList.id)).toMatchObject({ accountCount: 1, accounts: [{ id: a.id, businessName: "Named Buyers Café" }] });
+  });
+});

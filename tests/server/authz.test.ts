@@ -27,6 +27,7 @@ const TABLE: Record<string, Role[] | "public"> = {
   "DELETE /api/invitations/:id": ["owner"],
   "POST /api/invitations/:id/resend": ["owner"],
   "GET /api/accounts": ["owner", "bookkeeper"],
+  "GET /api/accounts/:id/buyers": ["owner", "bookkeeper"],
   "GET /api/accounts/:id": ["owner", "bookkeeper", "buyer"],
   "POST /api/accounts": ["owner"],
   "PATCH /api/accounts/:id": ["owner"],

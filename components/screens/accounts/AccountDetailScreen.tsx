@@ -23,6 +23,7 @@ import { CalendarFeedCard } from "../common/CalendarFeedCard";
 import { AccountBillingCard } from "../billing/AccountBillingCard";
 import { TaxCertificatesCard } from "../billing/TaxCertificates";
 import { ContactLink } from "../../ui/ContactLink";
+import { useAccountBuyersQuery } from "../../api/accounts";
 
 /** One customer account. The owner can edit it, pause it, close it (after a confirm step) and reopen it. */
 export function AccountDetailScreen({ id }: { id: number }) {
@@ -46,6 +47,23 @@ export function AccountDetailScreen({ id }: { id: number }) {
       </QueryStates>
       {account.isError ? <TextLink href="/office/accounts" label="All accounts" /> : null}
     </Screen>
+  );
+}
+
+/** Who orders for the account: each buyer by name (an e-mail link), a turned-off sign-in marked as such. */
+function BuyerNames({ accountId, count }: { accountId: number; count: number }) {
+  const buyers = useAccountBuyersQuery(accountId);
+  if (!buyers.data) return <AppText color="muted">{count === 1 ? "1 active buyer" : `${count} active buyers`}</AppText>;
+  if (buyers.data.length === 0) return <AppText color="muted" testID="account-buyers">No buyers yet: invite one from People.</AppText>;
+  return (
+    <View testID="account-buyers">
+      {buyers.data.map((b) => (
+        <View key={b.id} style={styles.buyer} testID={`account-buyer-${b.id}`}>
+          <AppText variant="bodyStrong">{b.disabled ? `${b.name} (sign-in turned off)` : b.name}</AppText>
+          <ContactLink kind="email" value={b.email} />
+        </View>
+      ))}
+    </View>
   );
 }
 
@@ -73,7 +91,7 @@ function AccountBody({ account: a, isOwner, wide, timeZone }: { account: Account
                 { label: "Contact name", value: a.contactName },
                 { label: "Contact phone", value: <ContactLink kind="phone" value={a.contactPhone} testID="account-contact-phone" /> },
                 { label: "Billing e-mail", value: <ContactLink kind="email" value={a.billingEmail} testID="account-billing-email" /> },
-                { label: "Buyers", value: a.buyerCount === 1 ? "1 active buyer" : `${a.buyerCount} active buyers` },
+                { label: "Buyers", value: <BuyerNames accountId={a.id} count={a.buyerCount} /> },
                 { label: "Added", value: formatDateTime(a.createdAt, timeZone) },
                 { label: "Last changed", value: formatDateTime(a.updatedAt, timeZone) },
               ]}
@@ -98,6 +116,7 @@ function AccountBody({ account: a, isOwner, wide, timeZone }: { account: Account
 }
 
 const styles = StyleSheet.create({
+  buyer: { flexDirection: "row", flexWrap: "wrap", alignItems: "center", columnGap: space.sm },
   grid: { gap: space.lg },
   gridWide: { flexDirection: "row", alignItems: "flex-start" },
   col: { gap: space.lg },

@@ -16,7 +16,7 @@ export function PriceListDeleteCard({ list, onDone }: { list: PriceListDto; onDo
   const [confirmDelete, setConfirmDelete] = useState(false);
   return (
     <Card title="Delete" testID="price-list-delete-card">
-      <AppText color="muted">{`${usedBy(list.accountCount)}. Deleting it puts those accounts back on list prices.`}</AppText>
+      <AppText color="muted">{`${usedBy(list.accountCount)}. Deleting it puts ${list.accountCount === 0 ? "no account" : list.accountCount === 1 ? "that account" : "those accounts"} back on list prices.`}</AppText>
       <FormError message={remove.isError ? messageOf(remove.error) : null} />
       {confirmDelete ? (
         <View style={styles.confirm}>

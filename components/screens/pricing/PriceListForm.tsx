@@ -14,6 +14,7 @@ import { applyPercentOff } from "../../../shared/money";
 import type { PriceListDto, ProductDto } from "../../../shared/schemas/catalog";
 import { isPriceListField, priceListFormInput, priceListFormSchema, priceListValues } from "./priceListForm";
 import { PriceListDeleteCard } from "./PriceListDeleteCard";
+import { TextLink } from "../../ui/TextLink";
 import { space } from "../../theme";
 
 export interface PriceListFormProps {
@@ -106,6 +107,15 @@ export function PriceListForm({ existing, products, onDone }: PriceListFormProps
         )}
         <Button label={existing ? "Save price list" : "Make price list"} icon="check" busy={form.submitting} onPress={submit} testID="price-list-save" />
       </Card>
+      {existing ? (
+        <Card title="Accounts on this price list" testID="price-list-accounts">
+          {existing.accounts?.length ? (
+            existing.accounts.map((a) => <TextLink key={a.id} href={`/office/accounts/${a.id}`} label={a.businessName} testID={`price-list-account-${a.id}`} />)
+          ) : (
+            <AppText color="muted">No account pays these prices yet. Choose the list on an account's page.</AppText>
+          )}
+        </Card>
+      ) : null}
       {existing ? <PriceListDeleteCard list={existing} onDone={onDone} /> : null}
     </>
   );

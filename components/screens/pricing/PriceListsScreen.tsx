@@ -47,6 +47,11 @@ export function PriceListsScreen({ notice }: { notice?: string }) {
                     {describePriceList(l)}
                   </AppText>
                   <Badge label={usedBy(l.accountCount)} tone={l.accountCount ? "crust" : "neutral"} />
+                  {l.accounts?.length ? (
+                    <AppText variant="small" color="muted" testID={`price-list-${l.id}-accounts`}>
+                      {l.accounts.map((a) => a.businessName).join(", ")}
+                    </AppText>
+                  ) : null}
                 </ListCardText>
               </ListCard>
             ))}
