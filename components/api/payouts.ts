@@ -12,6 +12,7 @@ export const payoutsApi = {
   list: () => api<PayoutListResponse>("/api/payouts").then((r) => r.payouts),
   get: (id: string) => api<PayoutDetailDto>(`/api/payouts/${encodeURIComponent(id)}`),
   reconcile: (id: string, input: ReconcileInput) => api<PayoutDetailDto>(`/api/payouts/${encodeURIComponent(id)}/reconcile`, { method: "POST", body: input }),
+  undoReconcile: (id: string, reason: string) => api<PayoutDetailDto>(`/api/payouts/${encodeURIComponent(id)}/undo-reconcile`, { method: "POST", body: { reason } }),
 };
 
 export function usePayoutsQuery() {
@@ -26,6 +27,19 @@ export function useReconcilePayoutMutation(id: string) {
   const qc = useQueryClient();
   return useMutation({
     mutationFn: (input: ReconcileInput) => payoutsApi.reconcile(id, input),
+    onSuccess: (detail) => {
+      qc.setQueryData(payoutKeys.detail(id), detail);
+      void qc.invalidateQueries({ queryKey: payoutKeys.list() });
+      void qc.invalidateQueries({ queryKey: reportKeys.all });
+    },
+  });
+}
+
+/** Take a reconciliation back, with the reason (kept in the payout's history). */
+export function useUndoReconcileMutation(id: string) {
+  const qc = useQueryClient();
+  return useMutation({
+    mutationFn: (reason: string) => payoutsApi.undoReconcile(id, reason),
     onSuccess: (detail) => {
       qc.setQueryData(payoutKeys.detail(id), detail);
       void qc.invalidateQueries({ queryKey: payoutKeys.list() });

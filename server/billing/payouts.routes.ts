@@ -2,10 +2,10 @@ import { Router } from "express";
 import type { AppContext } from "../http/context";
 import { parse } from "../http/errors";
 import { allow, currentUser } from "../http/auth";
-import { listPayouts, payoutDetail, reconcilePayout } from "./payouts.service";
+import { listPayouts, payoutDetail, reconcilePayout, undoReconcile } from "./payouts.service";
 import { aging, exportCsv } from "./reports.service";
 import { OFFICE } from "./invoices.routes";
-import { exportFileSchema, payoutIdSchema, reconcileSchema } from "../../shared/schemas/billing";
+import { exportFileSchema, payoutIdSchema, reconcileSchema, undoReconcileSchema } from "../../shared/schemas/billing";
 import type { AgingResponse, PayoutDetailDto, PayoutListResponse } from "../../shared/contracts/billing";
 
 /** The card processor's payouts to the bank, matched to Panwise's payments and refunds (office). */
@@ -23,6 +23,11 @@ export function payoutRoutes(ctx: AppContext): Router {
     const { id } = parse(payoutIdSchema, req.params);
     const { note, force } = parse(reconcileSchema, req.body);
     res.json((await reconcilePayout(ctx, currentUser(req), id, note, force)) satisfies PayoutDetailDto);
+  });
+  r.post("/:id/undo-reconcile", async (req, res) => {
+    const { id } = parse(payoutIdSchema, req.params);
+    const { reason } = parse(undoReconcileSchema, req.body);
+    res.json((await undoReconcile(ctx, currentUser(req), id, reason)) satisfies PayoutDetailDto);
   });
   return r;
 }

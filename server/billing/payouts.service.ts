@@ -4,9 +4,11 @@ import type { AppContext } from "../http/context";
 import { conflict, notFound } from "../http/errors";
 import { Invoice } from "./invoice.entity";
 import { Payment } from "./payment.entity";
+import { PayoutReconciliationEvent } from "./payout-reconciliation-event.entity";
 import { PayoutReconciliation } from "./payout-reconciliation.entity";
 import { Refund } from "./refund.entity";
 import { CustomerAccount } from "../accounts/account.entity";
+import { User } from "../users/user.entity";
 import { getBakery } from "../bakery/bakery.service";
 import { isConnectionError, unavailable } from "./stripe-errors";
 import { localToday } from "../../shared/calendar";
@@ -76,7 +78,26 @@ export async function payoutDetail(ctx: AppContext, payoutId: string): Promise<P
     transactions: rows,
     unmatched: rows.filter((r) => !r.matched).length,
     reconciled: rec ? { at: rec.reconciledAt.toISOString(), byId: rec.reconciledById, note: rec.note } : null,
+    history: await reconciliationHistory(ctx, payoutId),
   };
+}
+
+async function reconciliationHistory(ctx: AppContext, payoutId: string): Promise<PayoutDetailDto["history"]> {
+  const events = await ctx.dataSource.getRepository(PayoutReconciliationEvent).find({ where: { payoutId }, order: { id: "ASC" } });
+  const names = new Map((events.length ? await ctx.dataSource.getRepository(User).findBy({ id: In(events.map((e) => e.byId)) }) : []).map((u) => [u.id, u.name]));
+  return events.map((e) => ({ action: e.action, at: e.at.toISOString(), byId: e.byId, byName: names.get(e.byId) ?? null, note: e.note }));
+}
+
+/** Take a reconciliation back (a payout marked reconciled by mistake), with the reason kept in its history. */
+export async function undoReconcile(ctx: AppContext, actor: SessionUser, payoutId: string, reason: string): Promise<PayoutDetailDto> {
+  await ctx.dataSource.transaction(async (m) => {
+    const rec = await m.getRepository(PayoutReconciliation).findOneBy({ payoutId });
+    if (!rec) throw conflict("not_reconciled", "This payout is not reconciled, so there is nothing to undo.");
+    await m.getRepository(PayoutReconciliation).delete({ payoutId });
+    await m.getRepository(PayoutReconciliationEvent).insert({ payoutId, action: "undone", byId: actor.id, at: ctx.clock.now(), note: reason });
+  });
+  ctx.logger.info({ payoutId, by: actor.id }, "payout reconciliation undone");
+  return payoutDetail(ctx, payoutId);
 }
 
 export async function reconcilePayout(ctx: AppContext, actor: SessionUser, payoutId: string, note: string, force: boolean): Promise<PayoutDetailDto> {
@@ -84,6 +105,9 @@ export async function reconcilePayout(ctx: AppContext, actor: SessionUser, payou
   if ((detail.unmatched > 0 || !detail.netMatchesPayout) && !force) {
     throw conflict("payout_unmatched", `${detail.unmatched} transaction(s) do not match${detail.netMatchesPayout ? "" : " and the net differs from the payout"}. Check them, or mark it reconciled anyway with a note.`);
   }
-  await ctx.dataSource.getRepository(PayoutReconciliation).save({ payoutId, reconciledById: actor.id, reconciledAt: ctx.clock.now(), note });
+  await ctx.dataSource.transaction(async (m) => {
+    await m.getRepository(PayoutReconciliation).save({ payoutId, reconciledById: actor.id, reconciledAt: ctx.clock.now(), note });
+    await m.getRepository(PayoutReconciliationEvent).insert({ payoutId, action: "reconciled", byId: actor.id, at: ctx.clock.now(), note });
+  });
   return payoutDetail(ctx, payoutId);
 }

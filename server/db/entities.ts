@@ -35,11 +35,12 @@ import { StripeEventRecord } from "../billing/stripe-event.entity";
 import { StripeSyncState } from "../billing/stripe-sync-state.entity";
 import { TaxCertificate } from "../billing/tax-certificate.entity";
 import { InvoiceReminder } from "../billing/invoice-reminder.entity";
+import { PayoutReconciliationEvent } from "../billing/payout-reconciliation-event.entity";
 
 /** Every entity, listed once: the DataSource, the CLI and the tests all take it from here. */
 export const entities = [
   Bakery, BakeryClosure, CustomerAccount, User, AuthToken, AuthRateCounter, RateLimitPoints,
   Product, ProductComponent, PriceList, PriceListItem, Order, OrderLine, IdempotencyRecord, StandingOrder, StandingOrderLine,
   Ingredient, Formula, FormulaVersion, BakeDay, ProductionSettings, BakehouseMixer, BakehouseOven, OutboxMail,
-  NumberCounter, Invoice, InvoiceLine, Payment, CreditNote, Refund, CheckoutSessionRecord, StripeEventRecord, StripeSyncState, PayoutReconciliation, TaxCertificate, DeliveryAdjustment, InvoiceReminder,
+  NumberCounter, Invoice, InvoiceLine, Payment, CreditNote, Refund, CheckoutSessionRecord, StripeEventRecord, StripeSyncState, PayoutReconciliation, TaxCertificate, DeliveryAdjustment, InvoiceReminder, PayoutReconciliationEvent,
 ];

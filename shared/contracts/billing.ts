@@ -276,6 +276,8 @@ export interface PayoutDetailDto {
   transactions: PayoutTransactionDto[];
   unmatched: number;
   reconciled: { at: string; byId: number | null; note: string } | null;
+  /** Every reconcile and undo, oldest first (who, when, the note or the reason). */
+  history: { action: "reconciled" | "undone"; at: string; byId: number; byName: string | null; note: string }[];
 }
 
 // ---- reports ----------------------------------------------------------------------------------------

@@ -71,6 +71,10 @@ export const payoutIdSchema = z.object({ id: z.string().regex(/^po_[A-Za-z0-9_]+
 /** POST /api/payouts/:id/reconcile */
 export const reconcileSchema = z.object({ note: z.string().trim().max(300).default(""), force: z.boolean().default(false) });
 export type ReconcileInput = z.input<typeof reconcileSchema>;
+/** POST /api/payouts/:id/undo-reconcile: why the reconciliation is taken back (kept in the payout's history). */
+export const undoReconcileSchema = z.object({
+  reason: z.string({ error: "Say why the reconciliation is undone." }).trim().min(3, "Say why the reconciliation is undone (at least 3 characters).").max(300, "The reason can be at most 300 characters."),
+});
 
 /** GET /api/reports/exports/:file */
 export const exportFileSchema = z.object({

@@ -65,6 +65,7 @@ export function payoutDetail(overrides: Partial<PayoutDetailDto> = {}): PayoutDe
     ],
     unmatched: 1,
     reconciled: null,
+    history: [],
     ...overrides,
   };
 }

@@ -91,4 +91,22 @@ describe("payouts", () => {
     expect(api.callsTo("POST", "/api/payouts/po_fake_1/reconcile")[0].body).toEqual({ note: "" });
     expect(api.callsTo("GET", "/api/users")).toHaveLength(0);
   });
+
+  it("undoes a reconciliation with a reason, and shows the history (issue 12)", async () => {
+    signedInAs(BOOKKEEPER);
+    const done = payoutDetail({ reconciled: { at: "2025-12-02T16:00:00.000Z", byId: 1, note: "Bank line 14" }, history: [{ action: "reconciled", at: "2025-12-02T16:00:00.000Z", byId: 1, byName: "Rosalind Hart", note: "Bank line 14" }] });
+    const undone = { ...done, reconciled: null, history: [...done.history, { action: "undone" as const, at: "2025-12-03T09:00:00.000Z", byId: 3, byName: "Bo Books", note: "Wrong bank line" }] };
+    const api = mockApi({ ...sessionRoutes(BOOKKEEPER), "GET /api/payouts/:id": { body: done }, "POST /api/payouts/:id/undo-reconcile": { body: undone } });
+    renderApp("/office/money/payouts/po_fake_1");
+    expect(await screen.findByTestId("reconcile-history-0")).toHaveTextContent(/reconciled by Rosalind Hart — Bank line 14/);
+    fireEvent.press(screen.getByTestId("reconcile-undo"));
+    fireEvent.press(screen.getByTestId("reconcile-undo-confirm"));
+    expect(await screen.findByText("Say why the reconciliation is undone (at least 3 characters).")).toBeOnTheScreen();
+    expect(api.callsTo("POST", "/api/payouts/po_fake_1/undo-reconcile")).toHaveLength(0);
+    fireEvent.changeText(screen.getByTestId("reconcile-undo-reason"), "Wrong bank line");
+    fireEvent.press(screen.getByTestId("reconcile-undo-confirm"));
+    expect(await screen.findByTestId("payout-reconcile-card")).toBeOnTheScreen();
+    expect(api.callsTo("POST", "/api/payouts/po_fake_1/undo-reconcile")[0].body).toEqual({ reason: "Wrong bank line" });
+    expect(screen.getByTestId("reconcile-history-1")).toHaveTextContent(/undone by Bo Books — Wrong bank line/);
+  });
 });

@@ -95,6 +95,7 @@ const TABLE: Record<string, Role[] | "public"> = {
   "GET /api/payouts": ["owner", "bookkeeper"],
   "GET /api/payouts/:id": ["owner", "bookkeeper"],
   "POST /api/payouts/:id/reconcile": ["owner", "bookkeeper"],
+  "POST /api/payouts/:id/undo-reconcile": ["owner", "bookkeeper"],
   "GET /api/reports/aging": ["owner", "bookkeeper"],
   "GET /api/reports/exports/:file": ["owner", "bookkeeper"],
   "GET /api/settings/billing": ALL,

@@ -169,6 +169,19 @@ describe("card payments through Stripe's hosted checkout (the local fake, real S
     const rec = await t.http().post(`/api/payouts/${payout!.id}/reconcile`).set(auth(books)).send({ note: "Matches the bank statement" });
     expect(rec.body.reconciled).toMatchObject({ note: "Matches the bank statement" });
 
+    // Undo (issue 12): a reason is needed; the buyer may not; the history keeps both steps with who and why.
+    const noReason = await t.http().post(`/api/payouts/${payout!.id}/undo-reconcile`).set(auth(books)).send({ reason: " " });
+    expect(noReason.status).toBe(400);
+    expect(noReason.body.error.fields.reason).toBe("Say why the reconciliation is undone (at least 3 characters).");
+    const undone = await t.http().post(`/api/payouts/${payout!.id}/undo-reconcile`).set(auth(books)).send({ reason: "Wrong bank line" });
+    expect(undone.status).toBe(200);
+    expect(undone.body.reconciled).toBeNull();
+    expect(undone.body.history.map((h: { action: string; note: string }) => [h.action, h.note])).toEqual([["reconciled", "Matches the bank statement"], ["undone", "Wrong bank line"]]);
+    expect((await t.http().post(`/api/payouts/${payout!.id}/undo-reconcile`).set(auth(books)).send({ reason: "Again" })).body.error.code).toBe("not_reconciled");
+    const again = await t.http().post(`/api/payouts/${payout!.id}/reconcile`).set(auth(books)).send({ note: "Right bank line" });
+    expect(again.body.reconciled).toMatchObject({ note: "Right bank line" });
+    expect(again.body.history).toHaveLength(3);
+
     const inv = parseCsv((await t.http().get("/api/reports/exports/invoices.csv").set(auth(books))).text, { columns: true }) as Record<string, string>[];
     expect(inv[0]).toMatchObject({ Currency: "USD" });
     expect(inv.every((r) => /^\d+\.\d{2}$/.test(r.Total))).toBe(true); // ISO 4217: USD has 2 decimals

@@ -9,7 +9,7 @@ import type { confirmDispatch } from "../../server/billing/dispatch.service";
 import type { createCheckout } from "../../server/billing/checkout.service";
 import type { recordManualPaymentAndExpire, refundOverpayment } from "../../server/billing/payments.service";
 import type { issueCreditNote } from "../../server/billing/credit-notes.service";
-import type { listPayouts, payoutDetail, reconcilePayout } from "../../server/billing/payouts.service";
+import type { listPayouts, payoutDetail, reconcilePayout, undoReconcile } from "../../server/billing/payouts.service";
 import type { aging } from "../../server/billing/reports.service";
 import type { remindAllOverdue, remindInvoice } from "../../server/billing/reminders.service";
 import type { getBillingSettings, saveBillingSettings, setPaymentTerms } from "../../server/billing/billing-settings.service";
@@ -45,6 +45,7 @@ export const coupling = [
   holds<Equal<Answer<typeof listPayouts>, Answer<typeof payoutsApi.list>>>(),
   holds<Equal<Answer<typeof payoutDetail>, Answer<typeof payoutsApi.get>>>(),
   holds<Equal<Answer<typeof reconcilePayout>, Answer<typeof payoutsApi.reconcile>>>(),
+  holds<Equal<Answer<typeof undoReconcile>, Answer<typeof payoutsApi.undoReconcile>>>(),
   holds<Equal<Answer<typeof aging>, Answer<typeof reportsApi.aging>>>(),
   holds<Equal<Answer<typeof getBillingSettings>, Answer<typeof billingSettingsApi.get>>>(),
   holds<Equal<Answer<typeof saveBillingSettings>, Answer<typeof billingSettingsApi.save>>>(),
@@ -75,7 +76,7 @@ export function renamesFail(inv: ServerInvoice): number {
 
 describe("the billing contract", () => {
   it("is checked by the type checker: every server answer is the client's type", () => {
-    expect(coupling).toHaveLength(23);
+    expect(coupling).toHaveLength(24);
     expect(coupling.every((c) => c === true)).toBe(true);
   });
 
@@ -95,7 +96,7 @@ describe("the billing contract", () => {
 
   it("the fixtures of tests/app carry every field of the detail and payout answers", () => {
     expect(Object.keys(detailFixture()).sort()).toEqual(["alerts", "creditNotes", "emails", "invoice", "lines", "payments", "refunds", "reminders"]);
-    expect(Object.keys(payoutFixture()).sort()).toEqual(["feesCents", "grossCents", "netCents", "netMatchesPayout", "payout", "reconciled", "refundsCents", "transactions", "unmatched"]);
+    expect(Object.keys(payoutFixture()).sort()).toEqual(["feesCents", "grossCents", "history", "netCents", "netMatchesPayout", "payout", "reconciled", "refundsCents", "transactions", "unmatched"]);
   });
 
   it("the request schemas take what the screens send, with the messages the forms show", () => {

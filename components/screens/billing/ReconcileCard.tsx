@@ -10,12 +10,13 @@ import { FormError } from "../../ui/FormError";
 import { AppText } from "../../ui/Text";
 import { useSignedInUser } from "../../auth/useAuth";
 import { ApiError, messageOf } from "../../api/client";
-import { useReconcilePayoutMutation, type PayoutDetailDto } from "../../api/payouts";
+import { useReconcilePayoutMutation, useUndoReconcileMutation, type PayoutDetailDto } from "../../api/payouts";
 import { userKeys, usersApi } from "../../api/users";
 import { useBakeryTimeZone } from "../../api/bakery";
 import { formatDateTime } from "../../format";
 import { useZodForm } from "../../forms/useZodForm";
 import { billingStyles } from "./parts";
+import { space } from "../../theme";
 
 const NOTE = z.object({ note: z.string().trim() });
 const FORCED_NOTE = z.object({ note: z.string().trim().min(1, "Say why it is fine although it doesn't match.") });
@@ -49,6 +50,8 @@ export function ReconcileCard({ detail: d }: { detail: PayoutDetailDto }) {
             {`Note: ${d.reconciled.note}`}
           </AppText>
         ) : null}
+        <UndoReconcile payoutId={d.payout.id} />
+        <ReconcileHistory detail={d} />
       </Card>
     );
   }
@@ -80,6 +83,7 @@ export function ReconcileCard({ detail: d }: { detail: PayoutDetailDto }) {
         maxLength={300}
         testID="reconcile-note"
       />
+      <ReconcileHistory detail={d} />
       <View style={billingStyles.buttons}>
         {forcing ? (
           <>
@@ -100,5 +104,42 @@ export function ReconcileCard({ detail: d }: { detail: PayoutDetailDto }) {
         )}
       </View>
     </Card>
+  );
+}
+
+const REASON = z.object({ reason: z.string().trim().min(3, "Say why the reconciliation is undone (at least 3 characters).").max(300, "The reason can be at most 300 characters.") });
+
+/** Undo a reconciliation (marked by mistake, or the bank line turned out different): a reason is needed and kept. */
+function UndoReconcile({ payoutId }: { payoutId: string }) {
+  const undo = useUndoReconcileMutation(payoutId);
+  const [open, setOpen] = useState(false);
+  const form = useZodForm({ schema: REASON, initial: { reason: "" }, manyMessage: null });
+  if (!open) return <Button label="Undo reconciliation" icon="rotate-ccw" variant="ghost" onPress={() => setOpen(true)} testID="reconcile-undo" />;
+  return (
+    <View style={{ gap: space.sm }} testID="reconcile-undo-form">
+      <TextField label="Why undo it" {...form.text("reason")} maxLength={300} testID="reconcile-undo-reason" />
+      <View style={billingStyles.buttons}>
+        <Button label="Yes, undo" icon="rotate-ccw" variant="danger" busy={form.submitting} onPress={() => void form.submit(({ reason }) => undo.mutateAsync(reason))} testID="reconcile-undo-confirm" />
+        <Button label="Keep it reconciled" variant="ghost" onPress={() => setOpen(false)} />
+      </View>
+      <FormError message={form.formError} testID="reconcile-undo-error" />
+    </View>
+  );
+}
+
+/** Every reconcile and undo of this payout, oldest first. */
+function ReconcileHistory({ detail: d }: { detail: PayoutDetailDto }) {
+  const timeZone = useBakeryTimeZone();
+  const history = d.history ?? [];
+  if (history.length === 0) return null;
+  return (
+    <View testID="reconcile-history">
+      <AppText variant="label">History</AppText>
+      {history.map((h, i) => (
+        <AppText key={i} variant="small" color="muted" testID={`reconcile-history-${i}`}>
+          {`${formatDateTime(h.at, timeZone)}: ${h.action === "reconciled" ? "reconciled" : "undone"} by ${h.byName ?? "an office user"}${h.note ? ` — ${h.note}` : ""}`}
+        </AppText>
+      ))}
+    </View>
   );
 }
