@@ -27,6 +27,33 @@ describe("products list", () => {
     expect(screen.getByTestId("new-product")).toBeOnTheScreen();
   });
 
+  it("searches by name, sale unit or description (accents and case ignored) and sorts (issue 12)", async () => {
+    signedInAs(OWNER);
+    mockApi({ ...sessionRoutes(OWNER), "GET /api/products": { body: { products: [...ALL, product({ id: 104, name: "Crème brioche loaf", listPriceCents: 1700, priceCents: 1700 })] } } });
+    renderApp("/office/products");
+    await screen.findByTestId("product-row-101");
+    fireEvent.changeText(screen.getByTestId("products-search"), "creme");
+    expect(screen.getByTestId("product-row-104")).toBeOnTheScreen();
+    expect(screen.queryByTestId("product-row-101")).toBeNull();
+    fireEvent.changeText(screen.getByTestId("products-search"), "burger BUNS");
+    expect(screen.getByTestId("product-row-102")).toBeOnTheScreen();
+    expect(screen.queryByTestId("product-row-101")).toBeNull();
+    fireEvent.changeText(screen.getByTestId("products-search"), "tray rolls");
+    expect(screen.getByTestId("product-row-101")).toBeOnTheScreen();
+    expect(screen.queryByTestId("product-row-102")).toBeNull();
+    fireEvent.changeText(screen.getByTestId("products-search"), "focaccia");
+    expect(screen.getByTestId("products-no-match")).toHaveTextContent(/Nothing matches “focaccia”Try part of the name/);
+    fireEvent.changeText(screen.getByTestId("products-search"), "");
+    // Price, high to low: the rolls ($18.00 list), the crème loaf ($17.00), the brioche buns ($16.00); and back.
+    fireEvent.press(screen.getByTestId("products-sort-price_desc"));
+    const rows = screen.getAllByTestId(/^product-row-/).map((r) => r.props.testID);
+    expect(rows).toEqual(["product-row-101", "product-row-104", "product-row-102"]);
+    fireEvent.press(screen.getByTestId("products-sort-price"));
+    expect(screen.getAllByTestId(/^product-row-/).map((r) => r.props.testID)).toEqual(["product-row-102", "product-row-104", "product-row-101"]);
+    fireEvent.press(screen.getByTestId("products-sort-name"));
+    expect(screen.getAllByTestId(/^product-row-/).map((r) => r.props.testID)).toEqual(["product-row-102", "product-row-104", "product-row-101"]); // Brioche…, Crème…, Milk-bread…
+  });
+
   it("shows the bookkeeper a read-only list and product", async () => {
     signedInAs(BOOKKEEPER);
     mockApi({ ...sessionRoutes(BOOKKEEPER), "GET /api/products": { body: { products: ALL } }, "GET /api/products/:id": { body: { product: PRODUCTS[0] } } });

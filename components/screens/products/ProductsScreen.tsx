@@ -10,6 +10,7 @@ import { LinkButton } from "../../ui/LinkButton";
 import { Badge } from "../../ui/Badge";
 import { Notice } from "../../ui/FormError";
 import { AppText } from "../../ui/Text";
+import { TextField } from "../../ui/TextField";
 import { useSignedInUser } from "../../auth/useAuth";
 import { useProductsQuery } from "../../api/products";
 import { ProductPhoto, useMoney } from "../ordering/parts";
@@ -20,10 +21,20 @@ import { ListCardText } from "../../ui/ListCard";
 import { space } from "../../theme";
 
 type Filter = "active" | "archived" | "all";
+export type ProductSort = "menu" | "name" | "price" | "price_desc";
 
-export function filterProducts(products: ProductDto[], filter: Filter): ProductDto[] {
-  if (filter === "all") return products;
-  return products.filter((p) => (filter === "active" ? p.active : !p.active));
+/** The filter, a search over name, sale unit and description (accents and case ignored), then the chosen order. */
+export function filterProducts(products: ProductDto[], filter: Filter, search = "", sort: ProductSort = "menu"): ProductDto[] {
+  const fold = (t: string) => t.normalize("NFD").replace(/[\u0300-\u036f]/g, "").toLowerCase();
+  const words = fold(search.trim()).split(/\s+/).filter(Boolean);
+  const shown = products.filter((p) => {
+    if (filter !== "all" && (filter === "active" ? !p.active : p.active)) return false;
+    const hay = fold(`${p.name} ${p.saleUnit} ${p.description ?? ""}`);
+    return words.every((w) => hay.includes(w));
+  });
+  if (sort === "menu") return shown;
+  const byName = (a: ProductDto, b: ProductDto) => a.name.localeCompare(b.name);
+  return [...shown].sort(sort === "name" ? byName : (a, b) => (sort === "price" ? a.listPriceCents - b.listPriceCents : b.listPriceCents - a.listPriceCents) || byName(a, b));
 }
 
 /** The catalog for the office: every product including archived ones; the owner adds and edits. */
@@ -31,6 +42,8 @@ export function ProductsScreen({ archived }: { archived?: string }) {
   const user = useSignedInUser();
   const isOwner = user.role === "owner";
   const [filter, setFilter] = useState<Filter>("active");
+  const [search, setSearch] = useState("");
+  const [sort, setSort] = useState<ProductSort>("menu");
   const products = useProductsQuery({ all: true });
 
   return (
@@ -53,18 +66,38 @@ export function ProductsScreen({ archived }: { archived?: string }) {
           { value: "all", label: "All" },
         ]}
       />
+      <View style={styles.tools}>
+        <View style={styles.search}>
+          <TextField label="Search" value={search} onChangeText={setSearch} placeholder="Name, sale unit or description" autoCorrect={false} testID="products-search" />
+        </View>
+        <ChoiceGroup<ProductSort>
+          label="Sort by"
+          testID="products-sort"
+          value={sort}
+          onChange={setSort}
+          choices={[
+            { value: "menu", label: "Menu order" },
+            { value: "name", label: "Name" },
+            { value: "price", label: "Price, low to high" },
+            { value: "price_desc", label: "Price, high to low" },
+          ]}
+        />
+      </View>
       <QueryStates query={products} loadingLabel="Loading products…" errorTitle="Products didn't load" errorTestID="products-error">
-        {(all) => <ProductList all={all} filter={filter} isOwner={isOwner} />}
+        {(all) => <ProductList all={all} filter={filter} search={search} sort={sort} isOwner={isOwner} />}
       </QueryStates>
     </Screen>
   );
 }
 
 /** The products the filter shows: a table on wide screens, cards on a phone. */
-function ProductList({ all, filter, isOwner }: { all: ProductDto[]; filter: Filter; isOwner: boolean }) {
+function ProductList({ all, filter, search, sort, isOwner }: { all: ProductDto[]; filter: Filter; search: string; sort: ProductSort; isOwner: boolean }) {
   const router = useRouter();
   const money = useMoney();
-  const shown = filterProducts(all, filter);
+  const shown = filterProducts(all, filter, search, sort);
+  if (shown.length === 0 && search.trim() && filterProducts(all, filter).length > 0) {
+    return <EmptyState icon="search" title={`Nothing matches “${search.trim()}”`} message="Try part of the name, or clear the search." testID="products-no-match" />;
+  }
   if (shown.length === 0) {
     return (
       <EmptyState
@@ -134,6 +167,8 @@ function MakingBadge({ product: p }: { product: ProductDto }) {
 }
 
 const styles = StyleSheet.create({
+  tools: { flexDirection: "row", flexWrap: "wrap", gap: space.md, alignItems: "flex-end" },
+  search: { flexGrow: 1, flexBasis: 260, maxWidth: 420 },
   badges: { flexDirection: "row", flexWrap: "wrap", gap: space.xs },
   flex: { flex: 1, minWidth: 0 },
   nameCell: { flexDirection: "row", alignItems: "center", gap: space.md },
