@@ -5,7 +5,7 @@ import { allow, currentUser } from "../http/auth";
 import { listPayouts, payoutDetail, reconcilePayout, undoReconcile } from "./payouts.service";
 import { aging, exportCsv } from "./reports.service";
 import { OFFICE } from "./invoices.routes";
-import { exportFileSchema, payoutIdSchema, reconcileSchema, undoReconcileSchema } from "../../shared/schemas/billing";
+import { exportFileSchema, exportRangeSchema, payoutIdSchema, reconcileSchema, undoReconcileSchema } from "../../shared/schemas/billing";
 import type { AgingResponse, PayoutDetailDto, PayoutListResponse } from "../../shared/contracts/billing";
 
 /** The card processor's payouts to the bank, matched to Panwise's payments and refunds (office). */
@@ -41,7 +41,9 @@ export function reportRoutes(ctx: AppContext): Router {
   });
   r.get("/exports/:file", async (req, res) => {
     const { file } = parse(exportFileSchema, req.params);
-    res.type("text/csv; charset=utf-8").attachment(file).send(await exportCsv(ctx, file));
+    const range = parse(exportRangeSchema, req.query);
+    const name = range.from || range.to ? file.replace(".csv", `-${range.from ?? "start"}-to-${range.to ?? "now"}.csv`) : file;
+    res.type("text/csv; charset=utf-8").attachment(name).send(await exportCsv(ctx, file, range));
   });
   return r;
 }

@@ -76,21 +76,22 @@ export const PAYOUT_CSV_COLUMNS = ["Bank Payout Ref", "Arrival Date", "Status", 
  * decimal in the currency's units with the ISO 4217 code in its own column; dates YYYY-MM-DD; kind, status
  * and method columns hold the words a person reads on the screens (shared/billing.ts), never the stored code.
  */
-export async function exportCsv(ctx: AppContext, file: ExportFile): Promise<string> {
+export async function exportCsv(ctx: AppContext, file: ExportFile, range: { from?: string; to?: string } = {}): Promise<string> {
   const kind = file.replace(".csv", "") as "invoices" | "payments" | "payouts";
+  const within = (d: string) => (!range.from || d >= range.from) && (!range.to || d <= range.to);
   const accounts = new Map((await ctx.dataSource.getRepository(CustomerAccount).find()).map((a) => [a.id, a.businessName]));
   if (kind === "invoices") {
-    const rows = await ctx.dataSource.getRepository(Invoice).find({ order: { id: "ASC" } });
+    const rows = (await ctx.dataSource.getRepository(Invoice).find({ order: { id: "ASC" } })).filter((i) => within(i.issueDate));
     return csvTable(INVOICE_CSV_COLUMNS,
       rows.map((i) => ({ currency: i.currency, cells: [i.number, accounts.get(i.accountId) ?? "", INVOICE_KIND_LABELS[i.kind], INVOICE_STATUS_LABELS[i.status], i.issueDate, i.dueDate, i.currency, i.subtotalCents, i.taxCents, i.totalCents, i.creditedCents, i.paidCents, i.refundedCents, amountDue(i)] })));
   }
   if (kind === "payments") {
-    const rows = await ctx.dataSource.getRepository(Payment).find({ order: { id: "ASC" } });
+    const rows = (await ctx.dataSource.getRepository(Payment).find({ order: { id: "ASC" } })).filter((p) => within(p.receivedOn));
     const invoices = new Map((await ctx.dataSource.getRepository(Invoice).find()).map((i) => [i.id, i]));
     return csvTable(PAYMENT_CSV_COLUMNS,
       rows.map((p) => { const i = invoices.get(p.invoiceId)!; return { currency: i.currency, cells: [p.receivedOn, i.number, accounts.get(i.accountId) ?? "", PAYMENT_METHOD_LABELS[p.method], i.currency, p.amountCents, p.reference, p.stripePaymentIntentId ?? "", p.stripeChargeId ?? ""] }; }));
   }
-  const payouts = await listPayouts(ctx);
+  const payouts = (await listPayouts(ctx)).filter((p) => within(p.arrivalDate));
   const out: { currency: string; cells: (string | number | null)[] }[] = [];
   for (const p of payouts) {
     const d = await payoutDetail(ctx, p.id);

@@ -80,6 +80,11 @@ export const undoReconcileSchema = z.object({
 export const exportFileSchema = z.object({
   file: z.enum(EXPORT_FILES, { error: "Exports: invoices.csv, payments.csv, payouts.csv." }),
 });
+/** ?from=&to= on an export: invoices by issue date, payments by the day received, payouts by arrival (both ends kept). */
+export const exportRangeSchema = z
+  .object({ from: dateSchema.optional(), to: dateSchema.optional() })
+  .superRefine(dateRangeCheck({ from: "from", to: "to", reversed: "The end date is before the start date." }));
+export type ExportRange = z.infer<typeof exportRangeSchema>;
 
 /** PUT /api/settings/billing */
 export const billingSettingsSchema = z.object({

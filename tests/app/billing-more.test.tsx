@@ -103,6 +103,23 @@ describe("exports", () => {
   });
 });
 
+describe("export date ranges (issue 12)", () => {
+  it("sends the range with each download, and refuses an end before the start beside the field", async () => {
+    signedInAs(BOOKKEEPER);
+    const api = mockApi({ ...sessionRoutes(BOOKKEEPER), "GET /api/reports/exports/:file": { body: "Number\n" } });
+    renderApp("/office/money/exports");
+    fireEvent.changeText(await screen.findByTestId("export-from"), "2025-11-01");
+    fireEvent.changeText(screen.getByTestId("export-to"), "2025-10-31");
+    expect(screen.getByTestId("export-to-error")).toHaveTextContent("The end date is before the start date.");
+    expect(screen.getByTestId("export-invoices")).toBeDisabled();
+    fireEvent.changeText(screen.getByTestId("export-to"), "2025-11-30");
+    expect(screen.getByRole("button", { name: "Download invoices CSV (2025-11-01 to 2025-11-30)" })).toBeOnTheScreen();
+    fireEvent.press(screen.getByTestId("export-invoices"));
+    await waitFor(() => expect(api.callsTo("GET", "/api/reports/exports/invoices.csv")).toHaveLength(1));
+    expect(api.callsTo("GET", "/api/reports/exports/invoices.csv")[0].query).toEqual({ from: "2025-11-01", to: "2025-11-30" });
+  });
+});
+
 describe("tax-exemption certificates", () => {
   it("warns the buyer that an expired certificate means tax again", async () => {
     signedInAs(BUYER);

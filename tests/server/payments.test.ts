@@ -186,6 +186,17 @@ describe("card payments through Stripe's hosted checkout (the local fake, real S
     expect(inv[0]).toMatchObject({ Currency: "USD" });
     expect(inv.every((r) => /^\d+\.\d{2}$/.test(r.Total))).toBe(true); // ISO 4217: USD has 2 decimals
     const pays = parseCsv((await t.http().get("/api/reports/exports/payments.csv").set(auth(books))).text, { columns: true }) as Record<string, string>[];
+    // A date range (issue 12): both ends kept, by the day issued / received; a reversed range is refused.
+    const first = inv[0]["Issue Date"];
+    const ranged = await t.http().get(`/api/reports/exports/invoices.csv?from=${first}&to=${first}`).set(auth(books));
+    expect(ranged.headers["content-disposition"]).toContain(`invoices-${first}-to-${first}.csv`);
+    const rangedRows = parseCsv(ranged.text, { columns: true }) as Record<string, string>[];
+    expect(rangedRows.length).toBe(inv.filter((r) => r["Issue Date"] === first).length);
+    expect(rangedRows.every((r) => r["Issue Date"] === first)).toBe(true);
+    expect(parseCsv((await t.http().get("/api/reports/exports/payments.csv?from=2099-01-01").set(auth(books))).text, { columns: true })).toEqual([]);
+    const reversed = await t.http().get("/api/reports/exports/payouts.csv?from=2026-06-10&to=2026-06-01").set(auth(books));
+    expect(reversed.status).toBe(400);
+    expect(reversed.body.error.fields.to).toBe("The end date is before the start date.");
     expect(pays.some((p) => p["Card Charge Ref"].startsWith("ch_") && p["Card Payment Ref"].startsWith("pi_"))).toBe(true);
     const outs = parseCsv((await t.http().get("/api/reports/exports/payouts.csv").set(auth(books))).text, { columns: true }) as Record<string, string>[];
     expect(outs.find((p) => p["Bank Payout Ref"] === payout!.id)).toMatchObject({ Unmatched: "0", Net: (payout!.amount / 100).toFixed(2) });
