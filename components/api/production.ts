@@ -1,6 +1,7 @@
 import { Platform } from "react-native";
 import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
 import { api, apiBlob } from "./client";
+import { saveBlob } from "./files";
 import { productionKeys } from "./keys";
 import type { z } from "zod";
 import type { ProductionSettingsDto, productionSettingsSchema } from "../../shared/schemas/production";
@@ -27,6 +28,7 @@ export const productionApi = {
   progress: (date: string, input: ProgressInput) => api<{ progress: PlanProgress }>(`/api/production/bake-days/${date}/progress`, { method: "POST", body: input }).then((r) => r.progress),
   pdf: (date: string, units: UnitSystem) => apiBlob("/api/production/plan.pdf", { date, units }),
   forecast: (from: string) => api<{ forecast: ForecastDto }>("/api/production/forecast", { query: { from } }).then((r) => r.forecast),
+  forecastCsv: (from: string) => apiBlob("/api/production/forecast.csv", { from }),
   settings: () => api<{ settings: ProductionSettingsDto }>("/api/production/settings").then((r) => r.settings),
   saveSettings: (input: ProductionSettingsBody) => api<{ settings: ProductionSettingsDto }>("/api/production/settings", { method: "PUT", body: input }).then((r) => r.settings),
 };
@@ -115,4 +117,9 @@ export async function downloadPlanPdf(date: string, units: UnitSystem): Promise<
   a.click();
   a.remove();
   setTimeout(() => URL.revokeObjectURL(url), 60_000);
+}
+
+/** Download the purchasing forecast as CSV ("purchasing-2026-12-05-to-2026-12-11.csv"). */
+export async function downloadForecastCsv(forecast: Pick<ForecastDto, "from" | "to">): Promise<void> {
+  saveBlob(await productionApi.forecastCsv(forecast.from), `purchasing-${forecast.from}-to-${forecast.to}.csv`);
 }

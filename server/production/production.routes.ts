@@ -1,4 +1,5 @@
 import { Router } from "express";
+import { forecastCsv } from "./forecast-csv";
 import type { AppContext } from "../http/context";
 import { parse } from "../http/errors";
 import { allow, currentUser } from "../http/auth";
@@ -95,6 +96,12 @@ export function productionRoutes(ctx: AppContext): Router {
   r.get("/forecast", allow(...KITCHEN), async (req, res) => {
     const { from } = parse(forecastQuerySchema, req.query);
     res.json({ forecast: await plans.forecast(ctx, from) });
+  });
+  r.get("/forecast.csv", allow(...KITCHEN), async (req, res) => {
+    const { from } = parse(forecastQuerySchema, req.query);
+    const f = await plans.forecast(ctx, from);
+    const bakery = await getBakery(ctx);
+    res.type("text/csv; charset=utf-8").attachment(`purchasing-${f.from}-to-${f.to}.csv`).send(forecastCsv(f, bakery.currency));
   });
   return r;
 }

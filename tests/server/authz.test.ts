@@ -78,6 +78,7 @@ const TABLE: Record<string, Role[] | "public"> = {
   "PUT /api/production/bake-days/:date": ["owner", "baker"],
   "POST /api/production/bake-days/:date/progress": ["owner", "baker"],
   "GET /api/production/forecast": ["owner", "baker"],
+  "GET /api/production/forecast.csv": ["owner", "baker"],
   "GET /api/outbox": ["owner", "bookkeeper"],
   "POST /api/outbox/:id/resend": ["owner", "bookkeeper"],
   "POST /api/webhooks/stripe": "public",

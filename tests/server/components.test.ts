@@ -189,5 +189,20 @@ describe("components on the bake day", () => {
     expect(sesame).toMatchObject({ packName: "5 lb bag", packGrams: 2268 });
     expect(sesame.packs).toBe(Math.ceil(sesame.grams / 2268));
     expect(sesame.grams).toBeGreaterThanOrEqual(160);
+
+    // The same forecast as CSV (issue 12): RFC 4180 read back with csv-parse, a row per ingredient, its grams on
+    // each day, the cost a plain decimal, and a total row.
+    const { parse: parseCsv } = await import("csv-parse/sync");
+    const csv = await t.http().get(`/api/production/forecast.csv?from=${SAT}`).set(auth(baker));
+    expect(csv.status).toBe(200);
+    expect(csv.headers["content-type"]).toMatch(/^text\/csv/);
+    expect(csv.headers["content-disposition"]).toContain(`purchasing-${res.body.forecast.from}-to-${res.body.forecast.to}.csv`);
+    const rows = parseCsv(csv.text, { columns: true }) as Record<string, string>[];
+    const line = rows.find((r) => r.Ingredient === "Toasted sesame seeds")!;
+    expect(line).toMatchObject({ Grams: String(Math.round(sesame.grams)), Pack: "5 lb bag", "Pack Grams": "2268", "Packs To Buy": String(sesame.packs), Currency: "USD", [`Grams On ${SAT}`]: "160" });
+    expect(line.Cost).toBe((sesame.costCents / 100).toFixed(2));
+    const total = rows[rows.length - 1];
+    expect(total).toMatchObject({ Ingredient: "Total", Cost: (res.body.forecast.totalCostCents / 100).toFixed(2) });
+    expect(rows).toHaveLength(res.body.forecast.items.length + 1);
   });
 });
