@@ -1,5 +1,6 @@
+import fs from "node:fs";
 import sharp from "sharp";
-import { BASE_URL, DESKTOP, PHONE, close, launch, newPage, shot, signIn } from "./browser";
+import { BASE_URL, DESKTOP, PHONE, close, latestMailTo, launch, newPage, shot, signIn } from "./browser";
 
 /**
  * Issue 12: the buyer's and the office's day without a stumble, each numbered item as a person meets it at
@@ -340,5 +341,83 @@ describe("the owner takes an order by phone", () => {
     }
     await context.close();
     expect(errors).toEqual([]);
+  });
+});
+
+describe("the bookkeeper chases payment, the office finds things", () => {
+  it("a reminder by hand reaches the billing address; the schedule turns on and off; exports take a date range", async () => {
+    const { context, page } = await newPage(DESKTOP);
+    const errors: string[] = [];
+    page.on("pageerror", (e) => errors.push(String(e)));
+    await signIn(page, "books@hollowbrook.test");
+    await page.waitForURL((u) => u.pathname.startsWith("/office"));
+    const overdue = await page.evaluate(async () => {
+      const token = (JSON.parse(localStorage.getItem("panwise.session.v1") ?? "{}") as { token?: string }).token;
+      const res = await fetch("/api/invoices?overdue=1", { headers: { Authorization: `Bearer ${token}` } });
+      return ((await res.json()) as { invoices: { id: number; number: string; accountName: string }[] }).invoices.find((i) => i.accountName === "North Pier Coffee") ?? null;
+    });
+    expect(overdue).not.toBeNull();
+    await page.goto(`${BASE_URL}/office/invoices/${overdue!.id}`);
+    await page.getByTestId("invoice-remind").click();
+    await page.getByTestId("invoice-remind-done").waitFor();
+    // The demo's North Pier billing address (server/seed/demo.ts); the mail goes out through the outbox.
+    const until = Date.now() + 15_000;
+    let mail = await latestMailTo("ingrid@northpier.test");
+    while (!mail.subject.startsWith(`Payment reminder: weekly statement ${overdue!.number}`) && !mail.subject.startsWith(`Payment reminder: invoice ${overdue!.number}`) && Date.now() < until) {
+      await new Promise((r) => setTimeout(r, 300));
+      mail = await latestMailTo("ingrid@northpier.test");
+    }
+    expect(mail.subject).toMatch(new RegExp(`^Payment reminder: (invoice|weekly statement) ${overdue!.number} from Hollowbrook Bakehouse$`));
+    expect(mail.text).toMatch(/still unpaid/);
+    await page.getByText("Sent by hand").first().waitFor();
+    await shot(page, "desktop-invoice-reminder");
+
+    await page.goto(`${BASE_URL}/office/money/settings`);
+    const tick = page.getByTestId("reminders-on");
+    await tick.waitFor();
+    expect(await tick.getAttribute("aria-checked")).toBe("false");
+    await tick.click();
+    await page.waitForFunction(() => document.querySelector('[data-testid="reminders-on"]')?.getAttribute("aria-checked") === "true");
+    await tick.click();
+    await page.waitForFunction(() => document.querySelector('[data-testid="reminders-on"]')?.getAttribute("aria-checked") === "false");
+
+    await page.goto(`${BASE_URL}/office/money/exports`);
+    await page.locator('input[data-testid="export-from"]').fill(daysAhead(-60));
+    await page.locator('input[data-testid="export-to"]').fill(daysAhead(0));
+    const download = page.waitForEvent("download");
+    await page.getByTestId("export-invoices").click();
+    const file = await download;
+    expect(file.suggestedFilename()).toBe(`invoices-${daysAhead(-60)}-to-${daysAhead(0)}.csv`);
+    const text = fs.readFileSync((await file.path())!, "utf8");
+    expect(text.split("\n")[0]).toContain("Invoice Number");
+    for (const line of text.trim().split("\n").slice(1)) {
+      const issued = line.split(",")[4];
+      expect(issued >= daysAhead(-60) && issued <= daysAhead(0)).toBe(true);
+    }
+
+    await page.goto(`${BASE_URL}/office/products`);
+    await page.locator('input[data-testid="products-search"]').fill("brioche");
+    await page.waitForFunction(() => Array.from(document.querySelectorAll('[data-testid^="product-row-"]')).every((r) => /brioche/i.test((r as HTMLElement).innerText)));
+    expect(await page.locator('[data-testid^="product-row-"]').count()).toBeGreaterThan(0);
+    await context.close();
+    expect(errors).toEqual([]);
+  });
+
+  it("the baker downloads the purchasing list as CSV", async () => {
+    const { context, page } = await newPage(PHONE);
+    await signIn(page, "baker@hollowbrook.test");
+    await page.waitForURL((u) => u.pathname.startsWith("/bake"));
+    await page.goto(`${BASE_URL}/bake/forecast`);
+    const button = page.getByTestId("forecast-csv");
+    await button.waitFor();
+    const download = page.waitForEvent("download");
+    await button.click();
+    const file = await download;
+    expect(file.suggestedFilename()).toMatch(/^purchasing-\d{4}-\d{2}-\d{2}-to-\d{4}-\d{2}-\d{2}\.csv$/);
+    const lines = fs.readFileSync((await file.path())!, "utf8").trim().split("\n");
+    expect(lines[0]).toMatch(/^Ingredient,Grams,Pack,Pack Grams,Packs To Buy,Currency,Cost,Grams On \d{4}-\d{2}-\d{2}/);
+    expect(lines[lines.length - 1]).toMatch(/^Total,/);
+    await page.getByTestId("forecast-csv-done").waitFor();
+    await context.close();
   });
 });
