@@ -1,6 +1,7 @@
 import { Router } from "express";
 import type { AppContext } from "../http/context";
-import { allow } from "../http/auth";
+import { allow, currentUser } from "../http/auth";
+import { officeOverview } from "./overview.service";
 import { ROLES } from "../../shared/roles";
 import { bakeryDto, getBakery } from "./bakery.service";
 import { userCounts } from "../users/users.service";
@@ -17,8 +18,8 @@ export function bakeryRoutes(ctx: AppContext): Router {
 
 export function officeRoutes(ctx: AppContext): Router {
   const r = Router();
-  r.get("/summary", allow("owner", "bookkeeper"), async (_req, res) => {
-    const summary: OfficeSummaryDto = { users: await userCounts(ctx), accounts: await accountCounts(ctx) };
+  r.get("/summary", allow("owner", "bookkeeper"), async (req, res) => {
+    const summary: OfficeSummaryDto = { users: await userCounts(ctx), accounts: await accountCounts(ctx), overview: await officeOverview(ctx, currentUser(req).role) };
     res.json({ summary });
   });
   return r;

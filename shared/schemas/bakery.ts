@@ -18,4 +18,20 @@ export interface OfficeSummaryDto {
   users: { total: number; active: number; disabled: number; pendingInvitations: number };
   /** onHold = paused (by hand) + creditHold (overdue invoices). */
   accounts: { total: number; active: number; onHold: number; paused: number; creditHold: number; closed: number };
+  /** The day's figures (server/bakery/overview.service.ts). */
+  overview: OfficeOverviewDto;
+}
+
+/** Today's and tomorrow's orders, money owed and overdue, the next cut-off, failed mail. */
+export interface OfficeOverviewDto {
+  currency: string;
+  /** Today, then tomorrow: orders not canceled, the units on them (trays, loaves, packs), their value. */
+  days: { date: string; orders: number; units: number; totalCents: number }[];
+  owedCents: number;
+  overdueCents: number;
+  overdueInvoices: number;
+  /** The next delivery date still open for orders, and when it closes (ISO 8601 with the bakery's offset). */
+  nextCutoff: { date: string; at: string } | null;
+  /** Mail the outbox gave up on (of the kinds this role sees there). */
+  failedMail: number;
 }

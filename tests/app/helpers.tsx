@@ -84,6 +84,13 @@ export const BAKERY: BakeryDto = {
 export const SUMMARY: OfficeSummaryDto = {
   users: { total: 7, active: 6, disabled: 1, pendingInvitations: 2 },
   accounts: { total: 4, active: 2, onHold: 1, paused: 1, creditHold: 0, closed: 1 },
+  overview: {
+    currency: "USD",
+    days: [{ date: "2025-12-02", orders: 3, units: 14, totalCents: 25200 }, { date: "2025-12-03", orders: 2, units: 9, totalCents: 16200 }],
+    owedCents: 42175, overdueCents: 12000, overdueInvoices: 1,
+    nextCutoff: { date: "2025-12-03", at: "2025-12-02T14:00:00.000-06:00" },
+    failedMail: 1,
+  },
 };
 
 // ---- A fake API behind global.fetch ----

@@ -12,6 +12,7 @@ import type { listOutbox } from "../../server/mail/outbox.service";
 import type { materialiseAll } from "../../server/orders/standing.service";
 import type { getFeed } from "../../server/orders/feed.service";
 import type { accountCounts } from "../../server/accounts/accounts.service";
+import type { officeOverview } from "../../server/bakery/overview.service";
 import type { userCounts } from "../../server/users/users.service";
 import type { invitationPreview } from "../../server/auth/auth.service";
 import type { boardApi, BoardDto } from "../../components/api/board";
@@ -52,7 +53,7 @@ export type Contract = [
   Expect<Equal<Served<typeof materialiseAll>, MaterialiseResult>>,
   Expect<Equal<Served<typeof materialiseAll>, Served<typeof standingApi.materialise>>>,
   Expect<Equal<Served<typeof getFeed>["url"], Served<typeof feedApi.get>>>,
-  Expect<Equal<{ users: Served<typeof userCounts>; accounts: Served<typeof accountCounts> }, Served<typeof officeApi.summary>>>,
+  Expect<Equal<{ users: Served<typeof userCounts>; accounts: Served<typeof accountCounts>; overview: Served<typeof officeOverview> }, Served<typeof officeApi.summary>>>,
   Expect<Equal<ReturnType<typeof invitationPreview>, Served<typeof authApi.invitation>>>,
 ];
 

@@ -3,7 +3,11 @@ import { StyleSheet, View } from "react-native";
 import { Screen } from "../../ui/Screen";
 import { PageHeader } from "../../ui/PageHeader";
 import { Card } from "../../ui/Card";
-import { StatTile } from "../../ui/StatTile";
+import { LinkTile, StatTile } from "../../ui/StatTile";
+import { useBakeryTimeZone } from "../../api/bakery";
+import { useMoney } from "../../ordering/useMoney";
+import { formatCutoff, formatDay } from "../../ordering/dates";
+import type { OfficeOverviewDto } from "../../../shared/schemas/bakery";
 import { QueryStates } from "../../ui/QueryStates";
 import { LinkButton } from "../../ui/LinkButton";
 import { AppText } from "../../ui/Text";
@@ -33,6 +37,7 @@ export function OfficeHome() {
       <QueryStates query={summary} loadingLabel="Counting accounts and people…">
         {(counts) => (
           <View style={[styles.grid, wide && styles.gridWide]}>
+            {counts.overview ? <TodayCard overview={counts.overview} wide={wide} /> : null}
             <Card title="Customer accounts" style={wide ? styles.cellWide : undefined} testID="office-accounts-card">
               <View style={styles.tiles}>
                 <StatTile label="Active" value={counts.accounts.active} testID="count-accounts-active" />
@@ -77,7 +82,48 @@ export function OfficeHome() {
   );
 }
 
+/** The day at a glance, each figure a link to where it comes from. */
+function TodayCard({ overview: o, wide }: { overview: OfficeOverviewDto; wide: boolean }) {
+  const money = useMoney();
+  const tz = useBakeryTimeZone();
+  const [today, tomorrow] = o.days;
+  const dayTile = (d: OfficeOverviewDto["days"][number] | undefined, name: string) =>
+    d ? (
+      <LinkTile
+        href={`/office/orders?date=${d.date}`}
+        label={`${name}'s orders`}
+        value={d.orders}
+        detail={d.orders ? `${unitsLabel(d.units)} · ${money(d.totalCents)}` : "None yet"}
+        testID={`overview-${name.toLowerCase()}`}
+      />
+    ) : null;
+  return (
+    <Card title="Today" style={wide ? styles.full : undefined} testID="office-today-card">
+      <View style={styles.tiles}>
+        {dayTile(today, "Today")}
+        {dayTile(tomorrow, "Tomorrow")}
+        <LinkTile href="/office/invoices" label="Owed to the bakery" value={money(o.owedCents)} detail="Open invoices" testID="overview-owed" />
+        <LinkTile
+          href="/office/invoices?show=overdue"
+          label="Overdue"
+          value={money(o.overdueCents)}
+          detail={o.overdueInvoices === 1 ? "1 invoice" : `${o.overdueInvoices} invoices`}
+          alert={o.overdueInvoices > 0}
+          testID="overview-overdue"
+        />
+        {o.nextCutoff ? (
+          <LinkTile href={`/office/orders?date=${o.nextCutoff.date}`} label="Next cut-off" value={formatCutoff(o.nextCutoff.at, tz)} detail={`For ${formatDay(o.nextCutoff.date)}`} testID="overview-cutoff" />
+        ) : null}
+        <LinkTile href="/office/outbox" label="E-mail not sent" value={o.failedMail} detail={o.failedMail ? "Send it again from the outbox" : "All sent"} alert={o.failedMail > 0} testID="overview-mail" />
+      </View>
+    </Card>
+  );
+}
+
+const unitsLabel = (n: number) => (n === 1 ? "1 unit" : `${n} units`);
+
 const styles = StyleSheet.create({
+  full: { flexBasis: "100%" },
   grid: { gap: space.lg },
   gridWide: { flexDirection: "row", flexWrap: "wrap", alignItems: "flex-start" },
   cellWide: { flexGrow: 1, flexBasis: 300, minWidth: 0 },

@@ -5,12 +5,12 @@ import { idParam } from "@/components/routing";
 import { ScreenTitle } from "@/components/ui/ScreenTitle";
 
 export default function OfficeInvoicesRoute() {
-  const { accountId } = useLocalSearchParams<{ accountId?: string }>();
+  const { accountId, show } = useLocalSearchParams<{ accountId?: string; show?: string }>();
   const id = idParam(accountId);
   return (
     <>
       <ScreenTitle title="Invoices" />
-      <InvoicesScreen key={String(accountId ?? "")} mode="office" accountId={Number.isNaN(id) ? undefined : id} />
+      <InvoicesScreen key={`${accountId ?? ""}-${show ?? ""}`} mode="office" accountId={Number.isNaN(id) ? undefined : id} show={typeof show === "string" ? show : undefined} />
     </>
   );
 }

@@ -1,0 +1,48 @@
+import type { AppContext } from "../http/context";
+import { Invoice } from "../billing/invoice.entity";
+import { OutboxMail } from "../mail/outbox.entity";
+import { getBakery } from "./bakery.service";
+import { loadCalendarSettings } from "../calendar/calendar.service";
+import { amountDue } from "../../shared/billing";
+import { addDays, dateStatus, localToday } from "../../shared/calendar";
+import { outboxKindsFor } from "../../shared/mail";
+import type { OfficeOverviewDto } from "../../shared/schemas/bakery";
+import type { Role } from "../../shared/roles";
+
+/**
+ * The office's figures for the day: today's and tomorrow's orders (how many, how many units, what they are worth),
+ * what is owed and overdue, the next cut-off still ahead, and mail that could not be sent (the kinds the role sees).
+ */
+export async function officeOverview(ctx: AppContext, role: Role): Promise<OfficeOverviewDto> {
+  const bakery = await getBakery(ctx);
+  const settings = await loadCalendarSettings(ctx);
+  const now = ctx.clock.now();
+  const today = localToday(now, bakery.timeZone);
+  const days = [];
+  for (const date of [today, addDays(today, 1)]) {
+    const [row]: { orders: string; total: string | null }[] = await ctx.dataSource.query(
+      "SELECT COUNT(*) AS orders, SUM(o.totalCents) AS total FROM customer_order o WHERE o.deliveryDate = ? AND o.status <> 'cancelled'", [date]);
+    const [units]: { units: string | null }[] = await ctx.dataSource.query(
+      "SELECT SUM(l.quantity) AS units FROM order_line l JOIN customer_order o ON o.id = l.orderId WHERE o.deliveryDate = ? AND o.status <> 'cancelled'", [date]);
+    days.push({ date, orders: Number(row.orders), units: Number(units.units ?? 0), totalCents: Number(row.total ?? 0) });
+  }
+  const open = (await ctx.dataSource.getRepository(Invoice).find({ where: { status: "open" } })).filter((i) => amountDue(i) > 0);
+  const overdue = open.filter((i) => i.dueDate < today);
+  let nextCutoff: OfficeOverviewDto["nextCutoff"] = null;
+  for (let i = 0; i <= settings.horizonDays && !nextCutoff; i++) {
+    const st = dateStatus(addDays(today, i), settings, now, null);
+    if (st.orderable) nextCutoff = { date: st.date, at: st.cutoffAt };
+  }
+  const kinds = role === "owner" || role === "bookkeeper" ? outboxKindsFor(role) : [];
+  const failedQuery = ctx.dataSource.getRepository(OutboxMail).createQueryBuilder("m").where("m.status = 'failed'");
+  if (kinds) failedQuery.andWhere(kinds.length ? "m.kind IN (:...kinds)" : "1 = 0", { kinds });
+  return {
+    currency: bakery.currency,
+    days,
+    owedCents: open.reduce((s, i) => s + amountDue(i), 0),
+    overdueCents: overdue.reduce((s, i) => s + amountDue(i), 0),
+    overdueInvoices: overdue.length,
+    nextCutoff,
+    failedMail: await failedQuery.getCount(),
+  };
+}
