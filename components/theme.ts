@@ -115,6 +115,8 @@ export const radii = { sm: 6, md: 10, lg: 16, xl: 22, pill: 999 } as const;
 export const layout = {
   /** From this width the side navigation replaces the bottom tabs, and lists become tables. */
   wideBreakpoint: 1024,
+  /** From here (a tablet) content sits in two columns; the navigation stays at the bottom until wideBreakpoint. */
+  twoColumnBreakpoint: 768,
   contentMaxWidth: 1100,
   formMaxWidth: 560,
   sideNavWidth: 248,

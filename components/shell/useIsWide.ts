@@ -6,3 +6,9 @@ export function useIsWide(): boolean {
   const { width } = useWindowDimensions();
   return width >= layout.wideBreakpoint;
 }
+
+/** True from 768 px wide (a tablet and up): two columns of cards instead of one stretched column. */
+export function useTwoColumns(): boolean {
+  const { width } = useWindowDimensions();
+  return width >= layout.twoColumnBreakpoint;
+}

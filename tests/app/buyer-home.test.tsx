@@ -80,6 +80,26 @@ describe("order history", () => {
     expect(screen.getByTestId("history-order-401-status")).toHaveTextContent(/Canceled/);
     expect(screen.getByTestId("history-order-400-status")).toHaveTextContent(/Delivered/);
   });
+
+  it("back from a past order opened from Orders returns to Orders, not Home (issue 12)", async () => {
+    const past = orderDto({ id: 400, deliveryDate: "2025-11-27", status: "delivered" });
+    mockApi(
+      buyerOrderingRoutes(calendarDay({ date: "2025-11-27", orderable: false, reason: "past_cutoff", order: { id: 400, status: "delivered", totalCents: 5400 } as never }), {
+        "GET /api/orders": { body: { orders: [past] } },
+        "GET /api/orders/:id": { body: { order: past } },
+      }),
+    );
+    const app = renderApp("/buyer/orders");
+    await screen.findByTestId("history-title");
+    await waitFor(() => expect(screen.queryByTestId("history-loading")).toBeNull());
+    fireEvent.press(await screen.findByTestId("history-show-past"));
+    fireEvent.press(await screen.findByTestId("history-order-400"));
+    await waitFor(() => expect(app.getPathname()).toBe("/buyer/order/2025-11-27"));
+    const back = await screen.findByTestId("order-back");
+    expect(back).toHaveTextContent("‹ Orders");
+    fireEvent.press(back);
+    await waitFor(() => expect(app.getPathname()).toBe("/buyer/orders"));
+  });
 });
 
 describe("calendar feed on the account screen", () => {

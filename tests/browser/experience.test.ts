@@ -421,3 +421,48 @@ describe("the bookkeeper chases payment, the office finds things", () => {
     await context.close();
   });
 });
+
+describe("layouts: the bake day's jump links, two columns on a tablet, back to Orders", () => {
+  it("the baker jumps to the timeline on a phone; a tablet shows the buyer's home in two columns; back returns to Orders", async () => {
+    const baker = await newPage(PHONE);
+    await signIn(baker.page, "baker@hollowbrook.test");
+    await baker.page.waitForURL((u) => u.pathname.startsWith("/bake"));
+    const day = await baker.page.evaluate(async () => {
+      const token = (JSON.parse(localStorage.getItem("panwise.session.v1") ?? "{}") as { token?: string }).token;
+      return ((await (await fetch("/api/production/next-day", { headers: { Authorization: `Bearer ${token}` } })).json()) as { date: string }).date;
+    });
+    await baker.page.goto(`${BASE_URL}/bake/day?date=${day}`);
+    const jump = baker.page.getByTestId("jump-bake-timeline");
+    await jump.waitFor();
+    await jump.click();
+    await baker.page.waitForFunction(() => {
+      const el = document.getElementById("bake-timeline");
+      return !!el && Math.abs(el.getBoundingClientRect().top) < 200;
+    });
+    await shot(baker.page, "phone-bake-day-jumped");
+    await baker.context.close();
+
+    const tablet = await newPage({ width: 820, height: 1180 });
+    await signIn(tablet.page, "buyer@tidewater.test");
+    await tablet.page.getByTestId("buyer-home-title").waitFor();
+    const side = tablet.page.getByTestId("bakery-card");
+    const list = tablet.page.getByTestId("next-cutoff-open");
+    await side.waitFor();
+    const [s, l] = [await side.boundingBox(), await list.boundingBox()];
+    expect(s!.x).toBeGreaterThan(l!.x + l!.width - 1); // beside the deliveries, not under them
+    await shot(tablet.page, "tablet-buyer-home");
+
+    // Back from a past order opened from Orders goes back to Orders.
+    await tablet.page.goto(`${BASE_URL}/buyer/orders`);
+    await tablet.page.getByTestId("history-show-past").click();
+    const past = tablet.page.locator('[data-testid^="history-order-"]').first();
+    await past.waitFor();
+    await past.click();
+    await tablet.page.waitForURL((u) => u.pathname.startsWith("/buyer/order/"));
+    const back = tablet.page.getByTestId("order-back");
+    expect(await back.innerText()).toBe("‹ Orders");
+    await back.click();
+    await tablet.page.waitForURL((u) => u.pathname === "/buyer/orders");
+    await tablet.context.close();
+  });
+});

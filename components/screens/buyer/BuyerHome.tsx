@@ -23,7 +23,7 @@ import { useServerNow } from "../../ordering/useServerNow";
 import { msUntil } from "../../ordering/countdown";
 import { addDays, dayHeading, formatDayLong, relativeDay } from "../../ordering/dates";
 import { firstName, formatBakeDay } from "../../format";
-import { useIsWide } from "../../shell/useIsWide";
+import { useTwoColumns } from "../../shell/useIsWide";
 import type { AccountDto } from "../../../shared/schemas/accounts";
 import type { CalendarDayDto } from "../../../shared/schemas/calendar";
 import { productsLabel } from "../../ordering/quantities";
@@ -77,7 +77,8 @@ export function BuyerHome() {
 
 function Home({ account: a }: { account: AccountDto }) {
   const user = useSignedInUser();
-  const wide = useIsWide();
+  // Two columns from a tablet (768 px) up: the deliveries, and beside them the standing order and the bakery.
+  const wide = useTwoColumns();
   const bakery = useBakeryQuery();
   const note = accountStatusNote(a);
   const subtitle = bakery.data ? `Ordering from ${bakery.data.name} · ${formatBakeDay(bakery.data.today, bakery.data.now, bakery.data.timeZone)}` : `Welcome back, ${firstName(user.name)}`;

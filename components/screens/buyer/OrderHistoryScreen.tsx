@@ -76,7 +76,7 @@ function OrderRow({ order: o, today }: { order: OrderDto; today: string }) {
   const what = o.lines.map((l) => `${l.productName} (${quantityText(l.quantity, l)})`).join(", ");
   return (
     <ListCard
-      href={`/buyer/order/${o.deliveryDate}`}
+      href={`/buyer/order/${o.deliveryDate}?from=history`}
       accessibilityLabel={`${dayHeading(o.deliveryDate, today)}, ${buyerStatusLabel(o.status)}, ${money(o.totalCents)}`}
       testID={`history-order-${o.id}`}
       quiet={o.status === "cancelled"}

@@ -25,7 +25,7 @@ import { ReadOnlyOrder } from "./order/ReadOnlyOrder";
 import { isCalendarDate } from "../../../shared/calendar";
 
 /** One delivery date: place an order, change it, cancel it; read-only once it is locked for baking. */
-export function OrderScreen({ date }: { date: string }) {
+export function OrderScreen({ date, from = "home" }: { date: string; from?: BackTo }) {
   const user = useSignedInUser();
   const valid = isCalendarDate(date);
   const qc = useQueryClient();
@@ -43,7 +43,7 @@ export function OrderScreen({ date }: { date: string }) {
   if (!valid) {
     return (
       <Screen testID="order-screen">
-        <BackHome />
+        <BackHome to={from} />
         <EmptyState icon="help-circle" title="That isn't a date" message="Open a delivery date from your home screen." testID="order-bad-date" />
       </Screen>
     );
@@ -52,7 +52,7 @@ export function OrderScreen({ date }: { date: string }) {
   if (!loaded.data || !day || !products.data) {
     return (
       <Screen testID="order-screen">
-        <BackHome />
+        <BackHome to={from} />
         {loaded.isError ? <PageHeader overline="Delivery" title={formatDayLong(date)} testID="order-title" /> : null}
         <QueryStates query={loaded} loadingLabel="Loading the order…" loadingTestID="order-loading" errorTitle="This order didn't load" errorTestID="order-error">
           {() => null /* the loaded screen is drawn below, with its own header */}
@@ -68,7 +68,7 @@ export function OrderScreen({ date }: { date: string }) {
 
   const header = (
     <>
-      <BackHome />
+      <BackHome to={from} />
       <PageHeader overline={rel ? `Delivery · ${rel}` : "Delivery"} title={formatDayLong(date)} testID="order-title" />
       {notice ? <Notice message={notice.text} tone={notice.tone} testID="order-notice" /> : null}
       {onCreditHold(account.data) ? (
@@ -131,6 +131,14 @@ export function OrderScreen({ date }: { date: string }) {
   );
 }
 
-function BackHome() {
-  return <TextLink href="/buyer" label="‹ Delivery dates" testID="order-back" />;
+type BackTo = "home" | "history" | "standing";
+const BACK: Record<BackTo, { href: "/buyer" | "/buyer/orders" | "/buyer/standing"; label: string }> = {
+  home: { href: "/buyer", label: "‹ Delivery dates" },
+  history: { href: "/buyer/orders", label: "‹ Orders" },
+  standing: { href: "/buyer/standing", label: "‹ Standing order" },
+};
+
+/** Back where the buyer came from (?from=history or ?from=standing), home otherwise. */
+function BackHome({ to }: { to: BackTo }) {
+  return <TextLink href={BACK[to].href} label={BACK[to].label} testID="order-back" />;
 }

@@ -1,5 +1,6 @@
 import React, { useState } from "react";
-import { StyleSheet, View } from "react-native";
+import { Platform, StyleSheet, View } from "react-native";
+import { Button } from "../../ui/Button";
 import { useRouter } from "expo-router";
 import { Screen } from "../../ui/Screen";
 import { PageHeader } from "../../ui/PageHeader";
@@ -26,7 +27,7 @@ import { useServerNow } from "../../ordering/useServerNow";
 import { progressCount, stepBakeDay, upcomingBakeDays } from "../../production/plan";
 import { kitchenPaths, type KitchenArea, type KitchenPaths } from "../../production/paths";
 import { useUnits, type Units } from "../../production/units";
-import { useIsWide } from "../../shell/useIsWide";
+import { useIsWide, useTwoColumns } from "../../shell/useIsWide";
 import { BackToProduction } from "./BackToProduction";
 import { CautionsCard } from "./Cautions";
 import { InternalTempsCard } from "./InternalTemps";
@@ -125,6 +126,7 @@ interface PlanBodyProps {
 
 function PlanBody({ date, plan, units, paths }: PlanBodyProps) {
   const wide = useIsWide();
+  const columns = useTwoColumns();
   const calendar = useCalendarSettingsQuery().data;
   const user = useSignedInUser();
   const bakery = useBakeryQuery();
@@ -190,7 +192,7 @@ function PlanBody({ date, plan, units, paths }: PlanBodyProps) {
     d.mixes.map((m) => {
       const key = mixKey(d.formulaId, m.index);
       return (
-        <View key={key} style={wide ? styles.mixWide : undefined}>
+        <View key={key} style={columns ? styles.mixWide : undefined}>
           <MixCard
             dough={d}
             mix={m}
@@ -216,18 +218,20 @@ function PlanBody({ date, plan, units, paths }: PlanBodyProps) {
       ) : (
         status
       )}
+      {wide ? null : <JumpLinks />}
       <WarningsCard warnings={[...plan.warnings, ...liquidWarnings(plan, units)]} />
+      <View nativeID="bake-pans" />
       <PansCard plan={plan} extras={inputs.extras} onExtra={inputs.onExtra} wide={wide} saving={inputs.savingPans} error={inputs.pansError} formulasHref={paths.formulas} units={units} />
       {temps}
       {wide ? null : <PdfButtons date={date} />}
 
-      <View style={styles.section}>
+      <View style={styles.section} nativeID="bake-mixes">
         <Heading level={2} testID="mixes-title">
           Weigh-out cards
         </Heading>
         <FormError message={progressError} testID="progress-error" />
         {mixes.length ? (
-          <View style={[styles.mixes, wide && styles.mixesWide]} testID="mixes">
+          <View style={[styles.mixes, columns && styles.mixesWide]} testID="mixes">
             {mixes}
           </View>
         ) : (
@@ -236,6 +240,7 @@ function PlanBody({ date, plan, units, paths }: PlanBodyProps) {
       </View>
       <ComponentCards cards={plan.components} units={units} wide={wide} />
 
+      <View nativeID="bake-timeline" />
       <Timeline
         plan={plan}
         units={units}
@@ -248,11 +253,11 @@ function PlanBody({ date, plan, units, paths }: PlanBodyProps) {
 
       <InternalTempsCard plan={plan} units={units} />
 
-      <View style={[styles.row, wide && styles.rowWide]}>
-        <View style={wide ? styles.col1 : undefined}>
+      <View style={[styles.row, columns && styles.rowWide]} nativeID="bake-totals">
+        <View style={columns ? styles.col1 : undefined}>
           <TotalsCard plan={plan} units={units} />
         </View>
-        <View style={wide ? styles.col1 : undefined}>
+        <View style={columns ? styles.col1 : undefined}>
           <CautionsCard plan={plan} units={units} />
         </View>
       </View>
@@ -266,6 +271,32 @@ function PlanBody({ date, plan, units, paths }: PlanBodyProps) {
   );
 }
 
+/** The bake day's sections, for a phone where the page is long: a tap scrolls to one (the web: scrollIntoView). */
+const SECTIONS = [
+  { id: "bake-pans", label: "Pans" },
+  { id: "bake-mixes", label: "Weigh-out" },
+  { id: "bake-timeline", label: "Timeline" },
+  { id: "bake-totals", label: "Ingredients" },
+] as const;
+
+function JumpLinks() {
+  if (Platform.OS !== "web") return null;
+  return (
+    <View style={styles.jump} accessibilityRole="toolbar" aria-label="Jump to a section" testID="bake-jump">
+      {SECTIONS.map((s) => (
+        <Button
+          key={s.id}
+          label={s.label}
+          small
+          variant="secondary"
+          onPress={() => document.getElementById(s.id)?.scrollIntoView({ behavior: "smooth", block: "start" })}
+          testID={`jump-${s.id}`}
+        />
+      ))}
+    </View>
+  );
+}
+
 const styles = StyleSheet.create({
   controls: { maxWidth: 720 },
   row: { gap: space.lg },
@@ -275,6 +306,7 @@ const styles = StyleSheet.create({
   section: { gap: space.md },
   mixes: { gap: space.lg },
   mixesWide: { flexDirection: "row", flexWrap: "wrap", alignItems: "flex-start" },
-  mixWide: { flexGrow: 1, flexBasis: 440, maxWidth: "100%" },
+  mixWide: { flexGrow: 1, flexBasis: 340, maxWidth: "100%" },
+  jump: { flexDirection: "row", flexWrap: "wrap", gap: space.xs },
   links: { flexDirection: "row", flexWrap: "wrap", gap: space.lg },
 });

@@ -48,7 +48,7 @@ export function UpcomingDates({ standing, skipDates, onToggleSkip }: UpcomingDat
               const skipping = skipDates.includes(u.date);
               return (
                 <View key={u.date} style={[styles.upcomingRow, i > 0 && styles.divider]} testID={`upcoming-${u.date}`}>
-                  <Link href={`/buyer/order/${u.date}`} asChild>
+                  <Link href={`/buyer/order/${u.date}?from=standing`} asChild>
                     <LinkPressable accessibilityRole="link" style={styles.upcomingLink} highlightStyle={styles.hover} accessibilityLabel={`Open the order for ${formatDay(u.date)}`}>
                       <AppText variant="bodyStrong">{formatDay(u.date)}</AppText>
                       <View style={styles.badges}>
