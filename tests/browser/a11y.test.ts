@@ -75,7 +75,7 @@ async function screensFor(page: Page, role: "buyer" | "baker" | "owner" | "bookk
   const shared = ["/office", "/office/orders", "/office/invoices", ...(await withId("/api/invoices", (id) => [`/office/invoices/${id}`])),
     "/office/accounts", ...(await withId("/api/accounts", (id) => [`/office/accounts/${id}`])), ...money, "/office/outbox", "/office/more", "/office/me"];
   if (role === "bookkeeper") return shared;
-  return [...shared, "/office/dispatch", ...(await withId("/api/accounts", (id) => [`/office/accounts/${id}/edit`])), "/office/accounts/new",
+  return [...shared, "/office/dispatch", ...(await withId("/api/accounts", (id) => [`/office/accounts/${id}/edit`, `/office/accounts/${id}/order`])), "/office/accounts/new",
     "/office/products", ...(await withId("/api/products?all=1", (id) => [`/office/products/${id}`])), "/office/products/new",
     "/office/production", "/office/production/day", "/office/production/forecast", "/office/production/formulas",
     ...(await withId("/api/formulas", (id) => [`/office/production/formulas/${id}`])), "/office/production/formulas/new",
