@@ -214,6 +214,9 @@ describe("order screen for a date", () => {
     expect(await screen.findByTestId("order-readonly")).toHaveTextContent(/locked for baking/);
     expect(screen.getByText("3 trays of 15 rolls · $18.00 per tray of 15 rolls")).toBeOnTheScreen();
     expect(screen.queryByTestId("order-submit")).toBeNull();
+    // "Call the bakery" comes with the number, a tel: link (issue 12, contact).
+    expect(screen.getByTestId("call-bakery")).toHaveTextContent(/Call .*:\+1 555 0100/);
+    expect(screen.getByTestId("call-bakery-phone-link")).toBeOnTheScreen();
   });
 });
 

@@ -8,6 +8,7 @@ import { FormError } from "../../ui/FormError";
 import { messageOf } from "../../api/client";
 import { useCheckoutMutation, useInvoicesQuery } from "../../api/invoices";
 import { money } from "../billing/parts";
+import { CallBakery } from "../common/CallBakery";
 import { invoicesLabel } from "../billing/InvoicesScreen";
 import type { AccountDto } from "../../../shared/schemas/accounts";
 import { colors, radii, space } from "../../theme";
@@ -61,6 +62,7 @@ export function CreditHoldBanner({ account, testID = "credit-hold" }: { account:
         </AppText>
       ) : null}
       <FormError message={checkout.isError ? messageOf(checkout.error) : null} testID={`${testID}-error`} />
+      {!list.length && !overdue.isPending ? <CallBakery testID={`${testID}-call`} /> : null}
     </View>
   );
 }

@@ -20,6 +20,7 @@ import type { OrderNotice } from "../../ordering/useOrderSubmit";
 import { combinedQuery } from "../ordering/combinedQuery";
 import { accountStatusNote } from "./BuyerHome";
 import { CreditHoldBanner, holdReason, onCreditHold } from "./CreditHoldBanner";
+import { CallBakery } from "../common/CallBakery";
 import { OrderForm } from "./order/OrderForm";
 import { ReadOnlyOrder } from "./order/ReadOnlyOrder";
 import { isCalendarDate } from "../../../shared/calendar";
@@ -103,6 +104,7 @@ export function OrderScreen({ date, from = "home" }: { date: string; from?: Back
           action={<LinkButton href="/buyer" label="See your delivery dates" icon="calendar" variant="secondary" />}
           testID="order-not-orderable"
         />
+        {closed ? <CallBakery /> : null}
       </Screen>
     );
   }

@@ -4,6 +4,7 @@ import { Card } from "../../../ui/Card";
 import { Notice } from "../../../ui/FormError";
 import { AppText } from "../../../ui/Text";
 import { OrderStatusBadge } from "../../ordering/OrderStatusBadge";
+import { CallBakery } from "../../common/CallBakery";
 import { useMoney } from "../../../ordering/useMoney";
 import { formatCutoff } from "../../../ordering/dates";
 import { quantityText } from "../../../../shared/quantity";
@@ -27,6 +28,7 @@ export function ReadOnlyOrder({ order, timeZone }: { order: OrderDto; timeZone?:
             : `This order is locked for baking: the cut-off was ${formatCutoff(order.cutoffAt, timeZone)}. Call the bakery if something has to change.`
         }
       />
+      {order.status === "delivered" ? null : <CallBakery />}
       <Card title="What's coming" testID="order-lines">
         {order.lines.map((l, i) => (
           <View key={l.productId} style={[styles.receiptLine, i > 0 && styles.divider]}>
