@@ -23,10 +23,11 @@ export function usePayoutQuery(id: string | null) {
   return useQuery({ queryKey: payoutKeys.detail(id ?? ""), queryFn: () => payoutsApi.get(id ?? ""), enabled: !!id });
 }
 
-export function useReconcilePayoutMutation(id: string) {
+/** A write that answers the payout's detail: shown at once, the list and the reports asked again. */
+function usePayoutWrite<A>(id: string, write: (arg: A) => Promise<PayoutDetailDto>) {
   const qc = useQueryClient();
   return useMutation({
-    mutationFn: (input: ReconcileInput) => payoutsApi.reconcile(id, input),
+    mutationFn: write,
     onSuccess: (detail) => {
       qc.setQueryData(payoutKeys.detail(id), detail);
       void qc.invalidateQueries({ queryKey: payoutKeys.list() });
@@ -35,15 +36,11 @@ export function useReconcilePayoutMutation(id: string) {
   });
 }
 
+export function useReconcilePayoutMutation(id: string) {
+  return usePayoutWrite(id, (input: ReconcileInput) => payoutsApi.reconcile(id, input));
+}
+
 /** Take a reconciliation back, with the reason (kept in the payout's history). */
 export function useUndoReconcileMutation(id: string) {
-  const qc = useQueryClient();
-  return useMutation({
-    mutationFn: (reason: string) => payoutsApi.undoReconcile(id, reason),
-    onSuccess: (detail) => {
-      qc.setQueryData(payoutKeys.detail(id), detail);
-      void qc.invalidateQueries({ queryKey: payoutKeys.list() });
-      void qc.invalidateQueries({ queryKey: reportKeys.all });
-    },
-  });
+  return usePayoutWrite(id, (reason: string) => payoutsApi.undoReconcile(id, reason));
 }

@@ -33,7 +33,8 @@ export function LinkTile({ href, label, value, detail, alert, testID }: { href: 
         highlightStyle={styles.pressed}
       >
         <View style={styles.top}>
-          <AppText variant="display" color={alert ? "dangerInk" : "ink"}>
+          {/* A long figure (a date and time) in a smaller size, so the tiles stay one line of figures. */}
+          <AppText variant={String(value).length > 10 ? "heading" : "display"} color={alert ? "dangerInk" : "ink"} style={styles.value}>
             {String(value)}
           </AppText>
           <Feather name="chevron-right" size={18} color={colors.muted} />
@@ -57,4 +58,5 @@ const styles = StyleSheet.create({
   alert: { backgroundColor: colors.dangerSoft, borderColor: colors.danger },
   pressed: { borderColor: colors.crust },
   top: { flexDirection: "row", alignItems: "flex-start", justifyContent: "space-between", gap: space.xs },
+  value: { flexShrink: 1 },
 });
