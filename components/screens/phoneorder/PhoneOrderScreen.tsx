@@ -13,11 +13,11 @@ import { FormError, Notice } from "../../ui/FormError";
 import { QueryStates } from "../../ui/QueryStates";
 import { useSignedInUser } from "../../auth/useAuth";
 import { useAccountQuery } from "../../api/accounts";
-import { useBakeryQuery } from "../../api/bakery";
+import { useBakeryQuery, useBakeryTimeZone } from "../../api/bakery";
 import { useProductsQuery } from "../../api/products";
 import { ApiError, messageOf } from "../../api/client";
 import { ordersApi, useOrderChanged, useOrdersQuery } from "../../api/orders";
-import { addDays, cleanDate, formatDay } from "../../ordering/dates";
+import { addDays, cleanDate, formatCutoff, formatDay } from "../../ordering/dates";
 import { money } from "../billing/parts";
 import { combinedQuery } from "../ordering/combinedQuery";
 import { listTotalCents, phoneLines, quantitiesOf, type Quantities } from "./phoneOrder";
@@ -47,6 +47,7 @@ type Pending = { kind: "save" } | { kind: "cancel" };
 function PhoneOrderForm({ account, products, today, initialDate }: { account: AccountDto; products: ProductDto[]; today: string; initialDate: string }) {
   const user = useSignedInUser();
   const isOwner = user.role === "owner";
+  const timeZone = useBakeryTimeZone();
   const changed = useOrderChanged();
   const [date, setDate] = useState(initialDate);
   const [typedDate, setTypedDate] = useState(initialDate);
@@ -100,7 +101,11 @@ function PhoneOrderForm({ account, products, today, initialDate }: { account: Ac
           : `Order ${existing ? "saved" : "placed"} for ${account.businessName} on ${formatDay(date)}: ${money(saved.totalCents)}.${past}`,
       );
     } catch (err) {
-      if (err instanceof ApiError && err.code === "cutoff_passed") setLate({ pending, message: err.message });
+      if (err instanceof ApiError && err.code === "cutoff_passed") {
+        // The office's own words (the server's sentence is written for the buyer: "call the bakery").
+        const at = typeof err.details.cutoffAt === "string" ? formatCutoff(err.details.cutoffAt, timeZone) : null;
+        setLate({ pending, message: `Orders for ${formatDay(date)} closed at the cut-off${at ? `, ${at}` : ""}.` });
+      }
       else {
         setError(messageOf(err));
         if (err instanceof ApiError && err.fields) setFields(err.fields);
