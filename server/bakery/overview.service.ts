@@ -18,14 +18,19 @@ export async function officeOverview(ctx: AppContext, role: Role): Promise<Offic
   const settings = await loadCalendarSettings(ctx);
   const now = ctx.clock.now();
   const today = localToday(now, bakery.timeZone);
-  const days = [];
-  for (const date of [today, addDays(today, 1)]) {
-    const [row]: { orders: string; total: string | null }[] = await ctx.dataSource.query(
-      "SELECT COUNT(*) AS orders, SUM(o.totalCents) AS total FROM customer_order o WHERE o.deliveryDate = ? AND o.status <> 'cancelled'", [date]);
-    const [units]: { units: string | null }[] = await ctx.dataSource.query(
-      "SELECT SUM(l.quantity) AS units FROM order_line l JOIN customer_order o ON o.id = l.orderId WHERE o.deliveryDate = ? AND o.status <> 'cancelled'", [date]);
-    days.push({ date, orders: Number(row.orders), units: Number(units.units ?? 0), totalCents: Number(row.total ?? 0) });
-  }
+  const dates = [today, addDays(today, 1)];
+  // Both days at once: orders and their value per date, then the units on those orders per date.
+  const where = "o.deliveryDate IN (?, ?) AND o.status <> 'cancelled'";
+  const rows: { date: string; orders: string; total: string | null }[] = await ctx.dataSource.query(
+    `SELECT DATE_FORMAT(o.deliveryDate, '%Y-%m-%d') AS date, COUNT(*) AS orders, SUM(o.totalCents) AS total FROM customer_order o WHERE ${where} GROUP BY o.deliveryDate`, dates);
+  const unitRows: { date: string; units: string | null }[] = await ctx.dataSource.query(
+    `SELECT DATE_FORMAT(o.deliveryDate, '%Y-%m-%d') AS date, SUM(l.quantity) AS units FROM order_line l JOIN customer_order o ON o.id = l.orderId WHERE ${where} GROUP BY o.deliveryDate`, dates);
+  const units = new Map(unitRows.map((r) => [r.date, Number(r.units ?? 0)]));
+  const byDate = new Map(rows.map((r) => [r.date, r]));
+  const days = dates.map((date) => {
+    const r = byDate.get(date);
+    return { date, orders: Number(r?.orders ?? 0), units: units.get(date) ?? 0, totalCents: Number(r?.total ?? 0) };
+  });
   const open = (await ctx.dataSource.getRepository(Invoice).find({ where: { status: "open" } })).filter((i) => amountDue(i) > 0);
   const overdue = open.filter((i) => i.dueDate < today);
   let nextCutoff: OfficeOverviewDto["nextCutoff"] = null;

@@ -1,4 +1,4 @@
-import { MoreThan } from "typeorm";
+import { In, MoreThan } from "typeorm";
 import { stringify } from "csv-stringify/sync";
 import { toDecimal } from "../../shared/money";
 import { ORDER_STATUS_LABELS, type OrderStatus } from "../../shared/schemas/orders";
@@ -43,14 +43,18 @@ export async function board(ctx: AppContext, date: string): Promise<BoardDto> {
 
 /** Of the held accounts given, those whose standing order delivers on `date` (not skipped, with lines that weekday). */
 async function heldOn(ctx: AppContext, date: string, onHold: CustomerAccount[]): Promise<BoardHeldDto[]> {
-  const held: BoardHeldDto[] = [];
-  for (const a of onHold) {
-    const so = await ctx.dataSource.getRepository(StandingOrder).findOneBy({ accountId: a.id, active: true });
-    if (!so || (JSON.parse(so.skipDates) as string[]).includes(date) || !expandRule(so.rrule, date, date).includes(date)) continue;
-    const lines = await ctx.dataSource.getRepository(StandingOrderLine).countBy({ standingOrderId: so.id, weekday: weekdayOf(date), quantity: MoreThan(0) });
-    if (lines) held.push({ accountId: a.id, accountName: a.businessName, hold: a.creditHold ? "credit" : "paused" });
-  }
-  return held.sort((x, y) => x.accountName.localeCompare(y.accountName));
+  if (!onHold.length) return [];
+  // Two queries for all held accounts: their active standing orders, and which of those have lines that weekday.
+  const orders = await ctx.dataSource.getRepository(StandingOrder).findBy({ accountId: In(onHold.map((a) => a.id)), active: true });
+  const due = orders.filter((so) => !(JSON.parse(so.skipDates) as string[]).includes(date) && expandRule(so.rrule, date, date).includes(date));
+  const withLines = new Set(
+    (due.length ? await ctx.dataSource.getRepository(StandingOrderLine).findBy({ standingOrderId: In(due.map((so) => so.id)), weekday: weekdayOf(date), quantity: MoreThan(0) }) : []).map((l) => l.standingOrderId),
+  );
+  const making = new Set(due.filter((so) => withLines.has(so.id)).map((so) => so.accountId));
+  return onHold
+    .filter((a) => making.has(a.id))
+    .map((a): BoardHeldDto => ({ accountId: a.id, accountName: a.businessName, hold: a.creditHold ? "credit" : "paused" }))
+    .sort((x, y) => x.accountName.localeCompare(y.accountName));
 }
 
 /** A money cell: a decimal string, kept as written even when negative (see boardCsv). */

@@ -88,7 +88,7 @@ export async function updateUser(
   return getUser(ctx, id);
 }
 
-function invitationDto(t: AuthToken, accounts: Map<number, string>, now: Date = new Date()): InvitationDto {
+function invitationDto(t: AuthToken, accounts: Map<number, string>, now: Date): InvitationDto {
   return {
     id: t.id,
     email: t.email,
