@@ -20,10 +20,20 @@ export const reminderDto = (r: InvoiceReminder): InvoiceReminderDto => ({ id: r.
  * record it on the invoice. `actor` null: the schedule sent it.
  */
 export async function remindInvoice(ctx: AppContext, actor: SessionUser | null, invoiceId: number, stage: ReminderStage = "manual"): Promise<InvoiceReminderDto> {
+  return (await remindLocked(ctx, actor, invoiceId, stage, () => false))!;
+}
+
+/**
+ * The reminder, written under the invoice's row lock; `skip` looks at the invoice's earlier reminders under that
+ * same lock, so two presses (or a press and the schedule) at once cannot both send the one meant to go once.
+ */
+async function remindLocked(ctx: AppContext, actor: SessionUser | null, invoiceId: number, stage: ReminderStage, skip: (earlier: InvoiceReminder[], timeZone: string) => boolean): Promise<InvoiceReminderDto | null> {
   return ctx.dataSource.transaction(async (m) => {
     const inv = await m.getRepository(Invoice).createQueryBuilder("i").setLock("pessimistic_write").where("i.id = :id", { id: invoiceId }).getOne();
     if (!inv) throw notFound("That invoice");
     if (inv.status !== "open" || amountDue(inv) <= 0) throw conflict("nothing_due", `${inv.number} has nothing left to pay, so there is nothing to remind about.`);
+    const earlier = await m.getRepository(InvoiceReminder).find({ where: { invoiceId }, order: { id: "ASC" } });
+    if (skip(earlier, (await getBakery(ctx, m)).timeZone)) return null;
     return reminderFor(ctx, m, inv, actor, stage);
   });
 }
@@ -61,16 +71,10 @@ export async function remindAllOverdue(ctx: AppContext, actor: SessionUser): Pro
   const bakery = await getBakery(ctx);
   const today = localToday(ctx.clock.now(), bakery.timeZone);
   const overdue = await unpaid(ctx, today, true);
-  const sentBefore = await remindersOf(ctx, overdue.map((i) => i.id));
   const result: RemindAllResponse = { sent: [], skipped: [] };
   for (const inv of overdue) {
-    const todays = (sentBefore.get(inv.id) ?? []).some((r) => localToday(r.createdAt, bakery.timeZone) === today);
-    if (todays) {
-      result.skipped.push(inv.number);
-      continue;
-    }
-    await remindInvoice(ctx, actor, inv.id);
-    result.sent.push(inv.number);
+    const sent = await remindLocked(ctx, actor, inv.id, "manual", (earlier, tz) => earlier.some((r) => localToday(r.createdAt, tz) === today));
+    (sent ? result.sent : result.skipped).push(inv.number);
   }
   return result;
 }
@@ -87,8 +91,8 @@ export async function runReminderSchedule(ctx: AppContext): Promise<number> {
     const stage = dueReminderStage({ issueDate: inv.issueDate, dueDate: inv.dueDate, today, sent: (sentBefore.get(inv.id) ?? []).map((r) => r.stage) });
     if (!stage) continue;
     try {
-      await remindInvoice(ctx, null, inv.id, stage);
-      sent++;
+      // Checked again under the lock: the stage goes out once even if another run got there first.
+      if (await remindLocked(ctx, null, inv.id, stage, (earlier) => earlier.some((r) => r.stage === stage))) sent++;
     } catch (err) {
       ctx.logger.warn({ err, invoiceId: inv.id }, "scheduled payment reminder not queued");
     }

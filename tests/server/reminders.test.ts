@@ -87,6 +87,18 @@ describe("remind all overdue", () => {
   });
 });
 
+describe("a double press", () => {
+  it("two 'remind all overdue' at once send each invoice's reminder once (checked under the invoice's row lock)", async () => {
+    await t.ds.query("UPDATE invoice SET status = 'void' WHERE accountId = ?", [accountId]);
+    const late = await makeInvoice({ dueDate: "2026-12-02" });
+    const [a, b] = await Promise.all([t.http().post("/api/invoices/reminders").set(auth(bookkeeper)), t.http().post("/api/invoices/reminders").set(auth(owner))]);
+    expect([a.status, b.status]).toEqual([200, 200]);
+    expect([...a.body.sent, ...b.body.sent]).toEqual([late.number]);
+    expect([...a.body.skipped, ...b.body.skipped]).toEqual([late.number]);
+    expect(await t.ds.getRepository(InvoiceReminder).countBy({ invoiceId: late.id })).toBe(1);
+  });
+});
+
 describe("the reminder schedule", () => {
   it("is turned on by the owner or the bookkeeper, not the buyer or the baker; bad input is refused", async () => {
     for (const token of [buyer, baker]) expect((await t.http().put("/api/settings/billing/reminders").set(auth(token)).send({ on: true })).status).toBe(403);
